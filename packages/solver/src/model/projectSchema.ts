@@ -1,0 +1,119 @@
+import { z } from 'zod';
+
+/**
+ * The project file (shared design: project-format.md, v1). Stored quantities are SI base units;
+ * angles are degrees. Optional fields receive their documented defaults on parse.
+ */
+
+const id = z
+  .string()
+  .min(1, { error: 'must be a non-empty id' })
+  .max(64, { error: 'must be at most 64 characters' });
+const finite = () => z.number().finite();
+const positive = () => finite().gt(0, { error: 'must be greater than 0' });
+const nonNegative = () => finite().gte(0, { error: 'must be 0 or more' });
+const safetyFactor = () => finite().gte(1, { error: 'must be 1 or more' }).lte(10, { error: 'must be at most 10' });
+
+export const MATERIALS = ['ductile-iron', 'pvc', 'hdpe', 'steel', 'other'] as const;
+export const END_CONDITIONS = ['cap', 'tie-in'] as const;
+export const CASE_KINDS = ['working', 'surge', 'test', 'other'] as const;
+
+export const waterSchema = z.strictObject({
+  /** kg/m³; 998.2 is water at 20 °C (Tanaka et al. 2001, Metrologia 38:301) */
+  density: positive().default(998.2),
+});
+
+export const designSchema = z.strictObject({
+  thrustArea: z.enum(['outside', 'inside']).default('outside'),
+  bearingSafetyFactor: safetyFactor().default(1.5),
+  upliftSafetyFactor: safetyFactor().default(1.5),
+  restraintSafetyFactor: safetyFactor().default(1.5),
+  /** N/m³; 23,600 ≈ 150 lb/ft³ normal-weight concrete (common practice) */
+  concreteUnitWeight: positive().default(23600),
+  /** m, or null when groundwater lies below every block */
+  groundwaterElevation: finite().nullable().default(null),
+});
+
+export const loadCaseSchema = z.strictObject({
+  id,
+  label: z.string().max(80).optional(),
+  /** what the case stands for; guides the cases panel and the test-pressure helper */
+  kind: z.enum(CASE_KINDS).optional(),
+  /** Pa, gauge, at datumElevation (or at every node when no datum is given) */
+  pressure: nonNegative(),
+  /** m */
+  datumElevation: finite().optional(),
+  /** multiplies every pipe's flow; 0 = no flow (field test) */
+  flowFactor: finite().default(1),
+});
+
+export const soilSchema = z.strictObject({
+  id,
+  label: z.string().max(80).optional(),
+  /** Pa, allowable horizontal bearing of undisturbed soil; 0 for muck/peat */
+  bearing: nonNegative(),
+  /** N/m³ */
+  unitWeight: positive().default(18000),
+  /** degrees */
+  frictionAngle: finite().gte(0, { error: 'must be 0 or more' }).lt(60, { error: 'must be less than 60' }).default(30),
+  /** Pa */
+  cohesion: nonNegative().default(0),
+  /** where the values come from, shown beside the soil */
+  source: z.string().max(200).optional(),
+});
+
+export const nodeSchema = z.strictObject({
+  id,
+  /** m, plan east */
+  x: finite(),
+  /** m, plan north */
+  y: finite(),
+  /** m, pipe centreline elevation */
+  elevation: finite(),
+  /** m, ground surface to top of pipe */
+  cover: nonNegative().default(1.2),
+  soil: id.optional(),
+  end: z.enum(END_CONDITIONS).default('cap'),
+  valve: z.boolean().default(false),
+  label: z.string().max(80).optional(),
+});
+
+export const pipeSchema = z.strictObject({
+  id,
+  from: id,
+  to: id,
+  /** m */
+  outsideDiameter: positive(),
+  /** m */
+  insideDiameter: positive(),
+  /** m³/s, positive from `from` to `to` */
+  flow: finite().default(0),
+  material: z.enum(MATERIALS).default('ductile-iron'),
+  /** catalog series id and nominal size the diameters were taken from, if any */
+  series: z.string().max(40).optional(),
+  nominal: z.string().max(20).optional(),
+  label: z.string().max(80).optional(),
+});
+
+export const projectShape = z.strictObject({
+  format: z.literal('mainbrace-project', { error: 'must be exactly "mainbrace-project"' }),
+  version: z.literal(1, { error: 'must be 1 (the only version this program reads)' }),
+  name: z.string().max(200).default('Untitled main'),
+  units: z.enum(['us', 'si']).default('si'),
+  water: waterSchema.default({ density: 998.2 }),
+  design: designSchema.default(() => designSchema.parse({})),
+  loadCases: z.array(loadCaseSchema).min(1, { error: 'must have at least one load case' }),
+  soils: z.array(soilSchema).min(1, { error: 'must have at least one soil' }),
+  defaultSoil: id.optional(),
+  nodes: z.array(nodeSchema).default([]),
+  pipes: z.array(pipeSchema).default([]),
+});
+
+export type Project = z.output<typeof projectShape>;
+export type ProjectInput = z.input<typeof projectShape>;
+export type LoadCase = Project['loadCases'][number];
+export type Soil = Project['soils'][number];
+export type ProjectNode = Project['nodes'][number];
+export type Pipe = Project['pipes'][number];
+export type Design = Project['design'];
+export type Material = (typeof MATERIALS)[number];

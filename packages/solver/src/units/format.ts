@@ -1,0 +1,59 @@
+import { DISPLAY_UNITS, KIP, type Dimension, type UnitSystem } from './conversions.js';
+
+/**
+ * Rounds to the figures an engineer writes on a drawing: three significant figures, but never
+ * fewer digits than the integer part (12,345 lbf stays 12,345, not 12,300).
+ */
+export function roundForDrawing(value: number, significant = 3): number {
+  if (!Number.isFinite(value) || value === 0) return value === 0 ? 0 : value;
+  const magnitude = Math.floor(Math.log10(Math.abs(value)));
+  const decimals = Math.max(0, significant - 1 - magnitude);
+  const f = Math.pow(10, decimals);
+  return Math.round(value * f) / f;
+}
+
+/** Number of decimals `roundForDrawing` keeps for this value. */
+function decimalsFor(value: number, significant: number): number {
+  if (!Number.isFinite(value) || value === 0) return 0;
+  const magnitude = Math.floor(Math.log10(Math.abs(value)));
+  return Math.max(0, significant - 1 - magnitude);
+}
+
+/** Plain number with thousands separators and drawing precision, e.g. 29,030 or 0.765. */
+export function formatNumber(value: number, significant = 3): string {
+  if (!Number.isFinite(value)) return '—';
+  const rounded = roundForDrawing(value, significant);
+  const decimals = decimalsFor(rounded, significant);
+  const text = rounded.toLocaleString('en-US', {
+    minimumFractionDigits: decimals,
+    maximumFractionDigits: decimals,
+  });
+  return text === '-0' ? '0' : text;
+}
+
+export interface FormattedQuantity {
+  value: string;
+  unit: string;
+  text: string;
+}
+
+/**
+ * SI value → "number unit" in the chosen system. Forces above 10,000 lbf read as kip (screens.md).
+ */
+export function formatQuantity(
+  si: number,
+  dim: Dimension,
+  system: UnitSystem,
+  significant = 3,
+): FormattedQuantity {
+  let { symbol, factor } = DISPLAY_UNITS[system][dim];
+  if (system === 'us' && dim === 'force' && Math.abs(si / factor) >= 10_000) {
+    symbol = 'kip';
+    factor = KIP;
+  }
+  const value = formatNumber(si / factor, significant);
+  return { value, unit: symbol, text: dim === 'angle' ? `${value}${symbol}` : `${value} ${symbol}` };
+}
+
+export const formatSi = (si: number, dim: Dimension, system: UnitSystem, significant = 3) =>
+  formatQuantity(si, dim, system, significant).text;

@@ -1,0 +1,9 @@
+import { defineConfig } from 'vitest/config';
+
+export default defineConfig({
+  test: {
+    name: 'solver',
+    environment: 'node',
+    include: ['src/**/*.test.ts', 'test/**/*.test.ts'],
+  },
+});
