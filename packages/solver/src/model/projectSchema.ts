@@ -17,6 +17,8 @@ const safetyFactor = () => finite().gte(1, { error: 'must be 1 or more' }).lte(1
 export const MATERIALS = ['ductile-iron', 'pvc', 'hdpe', 'steel', 'other'] as const;
 export const END_CONDITIONS = ['cap', 'tie-in'] as const;
 export const CASE_KINDS = ['working', 'surge', 'test', 'other'] as const;
+export const RESTRAINT_METHODS = ['block', 'joints'] as const;
+export const ENCASEMENTS = ['none', 'polyethylene'] as const;
 
 export const waterSchema = z.strictObject({
   /** kg/m³; 998.2 is water at 20 °C (Tanaka et al. 2001, Metrologia 38:301) */
@@ -32,6 +34,10 @@ export const designSchema = z.strictObject({
   concreteUnitWeight: positive().default(23600),
   /** m, or null when groundwater lies below every block */
   groundwaterElevation: finite().nullable().default(null),
+  /** m, thickness of a bearing block from the fitting to its bearing face (concrete volume estimate) */
+  blockDepth: positive().default(0.6),
+  /** m, trench width for the face-width check, or null for OD + 2 × 0.3 m (common practice) */
+  trenchWidth: positive().nullable().default(null),
 });
 
 export const loadCaseSchema = z.strictObject({
@@ -58,6 +64,16 @@ export const soilSchema = z.strictObject({
   frictionAngle: finite().gte(0, { error: 'must be 0 or more' }).lt(60, { error: 'must be less than 60' }).default(30),
   /** Pa */
   cohesion: nonNegative().default(0),
+  /** Pa/m, allowable lateral bearing gained per metre of depth to the block centroid (IBC 1806.2 style) */
+  bearingPerDepth: nonNegative().optional(),
+  /** Pa, allowable bearing of the trench bottom for downward thrust; defaults to `bearing` */
+  verticalBearing: nonNegative().optional(),
+  /** m, least cover over the pipe for which the bearing value holds */
+  minCover: nonNegative().optional(),
+  /** pipe-to-soil friction angle as a fraction of the soil's, f_φ in δ = f_φ·φ (restrained joints) */
+  pipeFrictionRatio: finite().gt(0, { error: 'must be greater than 0' }).lte(1, { error: 'must be at most 1' }).optional(),
+  /** pipe-to-soil adhesion as a fraction of the soil's cohesion, f_c in C_p = f_c·C (restrained joints) */
+  pipeAdhesionRatio: finite().gte(0, { error: 'must be 0 or more' }).lte(1, { error: 'must be at most 1' }).optional(),
   /** where the values come from, shown beside the soil */
   source: z.string().max(200).optional(),
 });
@@ -75,6 +91,8 @@ export const nodeSchema = z.strictObject({
   soil: id.optional(),
   end: z.enum(END_CONDITIONS).default('cap'),
   valve: z.boolean().default(false),
+  /** how the fitting is held: concrete (bearing block and gravity anchor) or restrained joints */
+  restraint: z.enum(RESTRAINT_METHODS).default('block'),
   label: z.string().max(80).optional(),
 });
 
@@ -92,6 +110,12 @@ export const pipeSchema = z.strictObject({
   /** catalog series id and nominal size the diameters were taken from, if any */
   series: z.string().max(40).optional(),
   nominal: z.string().max(20).optional(),
+  /** laying condition 1–5 of AWWA C150/C151, for the restrained-joint bearing term */
+  trenchType: z.number().int({ error: 'must be a whole number 1 to 5' }).gte(1, { error: 'must be 1 to 5' }).lte(5, { error: 'must be 1 to 5' }).optional(),
+  /** polyethylene encasement (AWWA C105) lowers pipe–soil friction */
+  encasement: z.enum(ENCASEMENTS).optional(),
+  /** N/m, pipe self-weight; defaults to the material density times the wall area */
+  weightPerLength: positive().optional(),
   label: z.string().max(80).optional(),
 });
 
@@ -117,3 +141,4 @@ export type ProjectNode = Project['nodes'][number];
 export type Pipe = Project['pipes'][number];
 export type Design = Project['design'];
 export type Material = (typeof MATERIALS)[number];
+export type RestraintMethod = (typeof RESTRAINT_METHODS)[number];

@@ -28,7 +28,11 @@ export type Dimension =
   | 'unitWeight'
   | 'flow'
   | 'density'
-  | 'angle';
+  | 'angle'
+  | 'velocity'
+  | 'forcePerLength'
+  | 'stressGradient'
+  | 'ratio';
 
 export interface DisplayUnit {
   /** symbol shown after the number */
@@ -52,6 +56,10 @@ export const DISPLAY_UNITS: Record<UnitSystem, Record<Dimension, DisplayUnit>> =
     flow: { symbol: 'L/s', factor: 1e-3 },
     density: { symbol: 'kg/m³', factor: 1 },
     angle: { symbol: '°', factor: 1 },
+    velocity: { symbol: 'm/s', factor: 1 },
+    forcePerLength: { symbol: 'kN/m', factor: 1e3 },
+    stressGradient: { symbol: 'kPa/m', factor: 1e3 },
+    ratio: { symbol: '', factor: 1 },
   },
   us: {
     length: { symbol: 'ft', factor: FOOT },
@@ -66,6 +74,10 @@ export const DISPLAY_UNITS: Record<UnitSystem, Record<Dimension, DisplayUnit>> =
     flow: { symbol: 'gpm', factor: US_GALLON / 60 },
     density: { symbol: 'lb/ft³', factor: 0.45359237 / Math.pow(FOOT, 3) },
     angle: { symbol: '°', factor: 1 },
+    velocity: { symbol: 'ft/s', factor: FOOT },
+    forcePerLength: { symbol: 'lbf/ft', factor: POUND_FORCE / FOOT },
+    stressGradient: { symbol: 'psf/ft', factor: PSF / FOOT },
+    ratio: { symbol: '', factor: 1 },
   },
 };
 

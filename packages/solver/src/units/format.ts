@@ -52,7 +52,8 @@ export function formatQuantity(
     factor = KIP;
   }
   const value = formatNumber(si / factor, significant);
-  return { value, unit: symbol, text: dim === 'angle' ? `${value}${symbol}` : `${value} ${symbol}` };
+  const joined = dim === 'angle' || symbol === '' ? `${value}${symbol}` : `${value} ${symbol}`;
+  return { value, unit: symbol, text: joined };
 }
 
 export const formatSi = (si: number, dim: Dimension, system: UnitSystem, significant = 3) =>

@@ -1,0 +1,30 @@
+import type { Dimension } from '../units/conversions.js';
+
+/** One named value in a calculation, SI inside; the front ends format it in display units. */
+export interface RecordValue {
+  symbol: string;
+  label: string;
+  /** SI value */
+  value: number;
+  dimension: Dimension;
+  /** where the value comes from: the project, a table, a default, or "computed" */
+  source?: string;
+}
+
+/** One step of a fitting's calculation: the formula, what went in, what came out. */
+export interface CalcStep {
+  title: string;
+  formula: string;
+  inputs: RecordValue[];
+  result: RecordValue;
+  /** the published source of the formula */
+  reference: string;
+}
+
+export const value = (
+  symbol: string,
+  label: string,
+  v: number,
+  dimension: Dimension,
+  source?: string,
+): RecordValue => (source === undefined ? { symbol, label, value: v, dimension } : { symbol, label, value: v, dimension, source });

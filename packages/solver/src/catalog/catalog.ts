@@ -1,0 +1,24 @@
+import type { Material } from '../model/projectSchema.js';
+import { DI_AWWA_PC250, DI_AWWA_PC350 } from './ductileIronAwwa.js';
+import { DI_EN545 } from './ductileIronEn545.js';
+import { PLASTIC_SERIES } from './plasticPipe.js';
+import type { PipeSeries, PipeSize } from './pipeSeries.js';
+
+/** Every pipe series the editor offers, each naming its standard. */
+export const CATALOG: readonly PipeSeries[] = [DI_AWWA_PC350, DI_AWWA_PC250, DI_EN545, ...PLASTIC_SERIES];
+
+export const findSeries = (id: string): PipeSeries | undefined => CATALOG.find((s) => s.id === id);
+
+export const findSize = (seriesId: string, nominal: string): PipeSize | undefined =>
+  findSeries(seriesId)?.sizes.find((s) => s.nominal === nominal);
+
+export const seriesForMaterial = (m: Material): PipeSeries[] => CATALOG.filter((s) => s.material === m);
+
+/** The size of a series whose OD is closest to the given one (m), for an editor picking a default. */
+export function nearestSize(seriesId: string, outsideDiameter: number): PipeSize | undefined {
+  let best: PipeSize | undefined;
+  for (const s of findSeries(seriesId)?.sizes ?? []) {
+    if (!best || Math.abs(s.outsideDiameter - outsideDiameter) < Math.abs(best.outsideDiameter - outsideDiameter)) best = s;
+  }
+  return best;
+}

@@ -1,0 +1,13 @@
+export const USAGE = `mainbrace — thrust and restraint at every fitting of a buried water main
+
+Usage:
+  mainbrace schedule FILE [--format json|csv|table] [--units us|si]
+                                  the fitting schedule (default: table, the project's units)
+  mainbrace explain FILE NODE [--units us|si]
+                                  the calculation record of one fitting
+  mainbrace validate FILE         check a project file
+  mainbrace schema                the JSON Schema of the project file
+
+Exit status: 0 done; 2 a bad file or command line (one line per problem).
+Design aid only: results must be checked by a licensed engineer; local codes and the utility's standards govern.
+`;

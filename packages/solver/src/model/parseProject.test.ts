@@ -1,0 +1,82 @@
+import { describe, it, expect } from 'vitest';
+import { parseProject, parseProjectText } from './parseProject.js';
+import { problemText } from './problems.js';
+
+const good = () => ({
+  format: 'mainbrace-project',
+  version: 1,
+  loadCases: [{ id: 'w', pressure: 700000 }],
+  soils: [{ id: 's', bearing: 150000 }],
+  nodes: [
+    { id: 'a', x: 0, y: 0, elevation: 100 },
+    { id: 'b', x: 10, y: 0, elevation: 100 },
+  ],
+  pipes: [{ id: 'p', from: 'a', to: 'b', outsideDiameter: 0.222, insideDiameter: 0.2 }],
+});
+
+const problems = (data: unknown) => {
+  const r = parseProject(data);
+  return r.ok ? [] : r.problems.map(problemText);
+};
+
+describe('reading a project file', () => {
+  it('fills the documented defaults (project-format.md)', () => {
+    const r = parseProject(good());
+    expect(r.ok).toBe(true);
+    if (!r.ok) return;
+    expect(r.project.units).toBe('si');
+    expect(r.project.water.density).toBe(998.2);
+    expect(r.project.design).toMatchObject({ thrustArea: 'outside', bearingSafetyFactor: 1.5, concreteUnitWeight: 23600, groundwaterElevation: null });
+    expect(r.project.nodes[0]).toMatchObject({ cover: 1.2, end: 'cap', valve: false });
+    expect(r.project.loadCases[0]?.flowFactor).toBe(1);
+  });
+
+  it('names the path of a bad value and what was expected', () => {
+    const d = good();
+    d.pipes[0]!.outsideDiameter = -1;
+    expect(problems(d)).toContain('pipes[0].outsideDiameter: must be greater than 0');
+    const e = good() as Record<string, unknown>;
+    (e.nodes as Record<string, unknown>[])[1]!.x = 'east';
+    expect(problems(e)).toContain('nodes[1].x: expected a number, got the text "east"');
+  });
+
+  it('refuses unknown fields, naming each', () => {
+    const d = good() as Record<string, unknown>;
+    (d.nodes as Record<string, unknown>[])[0]!.colour = 'red';
+    expect(problems(d)).toEqual(['nodes[0].colour: unknown field (not part of the project format)']);
+  });
+
+  it('checks ids, references, pipe ends and diameters across fields', () => {
+    const d = good();
+    d.nodes[1]!.id = 'a';
+    d.pipes[0]!.insideDiameter = 0.3;
+    const all = problems(d);
+    expect(all).toContain('nodes[1].id: duplicate id "a" (already used by nodes[0])');
+    expect(all).toContain('pipes[0].insideDiameter: must be less than outsideDiameter (0.222 m)');
+    const e = good();
+    e.pipes[0]!.to = 'zz';
+    expect(problems(e)).toContain('pipes[0].to: must name a node in "nodes" (no node "zz")');
+    const f = { ...good(), defaultSoil: 'clay' };
+    expect(problems(f)).toContain('defaultSoil: must name a soil in "soils" (no soil "clay")');
+    const g = { ...good(), loadCases: [] };
+    expect(problems(g)).toContain('loadCases: must have at least one load case');
+  });
+
+  it('refuses a pipe whose two ends are at the same point', () => {
+    const d = good();
+    d.nodes[1]!.x = 0;
+    expect(problems(d)).toContain('pipes[0].to: must be at another point than "from" (nodes a and b coincide)');
+  });
+
+  it('names the line and column of broken JSON', () => {
+    const r = parseProjectText('{\n  "format": "mainbrace-project",\n  "version": 1,,\n}');
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    expect(r.problems[0]?.message).toMatch(/^not valid JSON at line 3, column \d+/);
+  });
+
+  it('refuses a file of another format or version', () => {
+    expect(problems({ ...good(), format: 'other' })).toContain('format: must be exactly "mainbrace-project"');
+    expect(problems({ ...good(), version: 2 })).toContain('version: must be 1 (the only version this program reads)');
+  });
+});

@@ -1,0 +1,76 @@
+import { describe, it, expect } from 'vitest';
+import { analyse } from '../analysis/analyse.js';
+import { route } from '../../test/projectBuilder.js';
+
+const kinds = (p: ReturnType<typeof route>) => Object.fromEntries(analyse(p).fittings.map((f) => [f.node.id, f.geometry.kind]));
+
+describe('which fitting stands at each node', () => {
+  it('names bends, dead ends and leaves straight joints out (project-format.md: under 0.5°)', () => {
+    const p = route({
+      nodes: [
+        { id: 'a', x: 0, y: 0 },
+        { id: 'b', x: 10, y: 0 },
+        { id: 'c', x: 20, y: 0.05 }, // 0.29° off line: straight
+        { id: 'd', x: 30, y: 10 },
+        { id: 'e', x: 30, y: 20, end: 'tie-in' },
+      ],
+      pipes: [
+        { from: 'a', to: 'b', od: 0.326 },
+        { from: 'b', to: 'c', od: 0.326 },
+        { from: 'c', to: 'd', od: 0.326 },
+        { from: 'd', to: 'e', od: 0.326 },
+      ],
+    });
+    expect(kinds(p)).toEqual({ a: 'dead-end', c: 'bend', d: 'bend' });
+  });
+
+  it('tells a reducer, a reducing bend and a closed valve apart', () => {
+    const p = route({
+      nodes: [
+        { id: 'a', x: 0, y: 0, end: 'tie-in' },
+        { id: 'v', x: 10, y: 0, valve: true },
+        { id: 'r', x: 20, y: 0 },
+        { id: 'rb', x: 30, y: 0 },
+        { id: 'e', x: 40, y: 10, end: 'tie-in' },
+      ],
+      pipes: [
+        { from: 'a', to: 'v', od: 0.326 },
+        { from: 'v', to: 'r', od: 0.326 },
+        { from: 'r', to: 'rb', od: 0.222 },
+        { from: 'rb', to: 'e', od: 0.17 },
+      ],
+    });
+    expect(kinds(p)).toEqual({ v: 'valve', r: 'reducer', rb: 'reducing-bend' });
+  });
+
+  it('calls a square branch a tee, a 45° branch a wye and four pipes a cross', () => {
+    const p = route({
+      nodes: [
+        { id: 'w0', x: -10, y: 0, end: 'tie-in' }, { id: 't', x: 0, y: 0 }, { id: 'y', x: 20, y: 0 }, { id: 'x', x: 40, y: 0 },
+        { id: 'x1', x: 50, y: 0, end: 'tie-in' }, { id: 'tb', x: 0, y: 10, end: 'tie-in' },
+        { id: 'yb', x: 30, y: 10, end: 'tie-in' }, { id: 'xn', x: 40, y: 10, end: 'tie-in' }, { id: 'xs', x: 40, y: -10, end: 'tie-in' },
+      ],
+      pipes: [
+        { from: 'w0', to: 't', od: 0.326 }, { from: 't', to: 'y', od: 0.326 }, { from: 'y', to: 'x', od: 0.326 },
+        { from: 'x', to: 'x1', od: 0.326 }, { from: 't', to: 'tb', od: 0.17 }, { from: 'y', to: 'yb', od: 0.17 },
+        { from: 'x', to: 'xn', od: 0.222 }, { from: 'x', to: 'xs', od: 0.17 },
+      ],
+    });
+    const a = analyse(p);
+    expect(kinds(p)).toEqual({ t: 'tee', y: 'wye', x: 'cross' });
+    expect(a.byNode.get('y')?.geometry.branchAngle).toBeCloseTo(45, 9);
+    expect(a.byNode.get('t')?.tag).toBe('T-t');
+  });
+
+  it('splits a vertical bend into its plan and slope changes', () => {
+    // level along +x, then rising 1 in 1 while turning 90° in plan: plan change 90°, slope change +45°
+    const p = route({
+      nodes: [{ id: 'n1', x: 0, y: 0, z: 100 }, { id: 'n2', x: 10, y: 0, z: 100 }, { id: 'n3', x: 10, y: 10, z: 110 }],
+      pipes: [{ from: 'n1', to: 'n2', od: 0.326 }, { from: 'n2', to: 'n3', od: 0.326 }],
+    });
+    const g = analyse(p).byNode.get('n2')!.geometry;
+    expect(g.horizontalDeflection).toBeCloseTo(90, 9);
+    expect(g.verticalDeflection).toBeCloseTo(45, 9);
+    expect(g.deflection).toBeCloseTo(90, 9); // cos Δ = (1,0,0)·(0,1,1)/√2 = 0
+  });
+});

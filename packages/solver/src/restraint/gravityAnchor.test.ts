@@ -1,0 +1,68 @@
+import { describe, it, expect } from 'vitest';
+import { analyse } from '../analysis/analyse.js';
+import { sizeGravityAnchor } from './gravityAnchor.js';
+import { CUBIC_YARD, FOOT, INCH, POUND_PER_CUBIC_FOOT_WEIGHT } from '../units/conversions.js';
+import { LBF, psi, route } from '../../test/projectBuilder.js';
+import { expectClose, expectPrinted } from '../../test/tolerance.js';
+
+const FT3 = FOOT ** 3;
+const PCF = POUND_PER_CUBIC_FOOT_WEIGHT;
+
+describe('gravity anchor at a crest bend (domain reference §5)', () => {
+  // CV-13: 12-in DI (OD 13.20 in), 150 psi, 45° vertical bend, one leg horizontal: the line runs level
+  // along +x, then turns down 45° — the thrust of the crest points up and back.
+  const crest = route({
+    pressure: psi(150),
+    design: { concreteUnitWeight: 150 * PCF, upliftSafetyFactor: 1.5 },
+    nodes: [
+      { id: 'a', x: -20, y: 0, z: 100 },
+      { id: 'c', x: 0, y: 0, z: 100 },
+      { id: 'b', x: 10, y: 0, z: 90 },
+    ],
+    pipes: [
+      { from: 'a', to: 'c', od: 13.2 * INCH },
+      { from: 'c', to: 'b', od: 13.2 * INCH },
+    ],
+  });
+  const f = analyse(crest).byNode.get('c')!;
+
+  it('has T_v = P·A·sin Δ = 14,515 lb and T_h = P·A·(1 − cos Δ) = 6,012 lb (CV-13)', () => {
+    expectPrinted(f.envelope.upward.force / LBF, 14_515);
+    expectPrinted(f.envelope.horizontal.force / LBF, 6_012);
+  });
+
+  it('needs 145.1 ft³ (5.38 yd³) of 150 pcf concrete at SF 1.5 (CV-13)', () => {
+    const v = f.restraint.anchor!.concreteVolume;
+    expectClose(v / FT3, 145.1, 5e-4);
+    expectClose(v / CUBIC_YARD, 5.38, 1e-3);
+  });
+
+  it('needs 248.5 ft³ submerged, with γ′ = 150 − 62.4 pcf (CV-13; here γw = 998.2 kg/m³ × g = 62.32 pcf, 0.1 % apart)', () => {
+    const r = sizeGravityAnchor({ upward: 14_515 * LBF, horizontal: 0, safetyFactor: 1.5, concreteUnitWeight: 150 * PCF, submerged: true, frictionAngle: 30, step: 0.05 });
+    expectClose(r.anchor.concreteVolume / FT3, 248.5, 1.5e-3);
+    expect(r.warnings[0]).toMatch(/below groundwater/);
+  });
+
+  it('takes the anchor as submerged when groundwater stands above the pipe invert', () => {
+    const wet = route({
+      pressure: psi(150),
+      design: { groundwaterElevation: 99.9 },
+      nodes: [{ id: 'a', x: -20, y: 0, z: 100 }, { id: 'c', x: 0, y: 0, z: 100 }, { id: 'b', x: 10, y: 0, z: 90 }],
+      pipes: [{ from: 'a', to: 'c', od: 13.2 * INCH }, { from: 'c', to: 'b', od: 13.2 * INCH }],
+    });
+    const anchor = analyse(wet).byNode.get('c')!.restraint.anchor!;
+    expect(anchor.submerged).toBe(true);
+    expectClose(anchor.unitWeight, 23600 - 998.2 * 9.80665, 1e-12);
+  });
+
+  it('puts no anchor at a sag, where the thrust bears down on the trench bottom', () => {
+    const sag = route({
+      pressure: psi(150),
+      nodes: [{ id: 'a', x: -10, y: 0, z: 110 }, { id: 's', x: 0, y: 0, z: 100 }, { id: 'b', x: 20, y: 0, z: 100 }],
+      pipes: [{ from: 'a', to: 's', od: 13.2 * INCH }, { from: 's', to: 'b', od: 13.2 * INCH }],
+    });
+    const r = analyse(sag).byNode.get('s')!.restraint;
+    expect(r.anchor).toBeNull();
+    expect(r.trenchBottom!.bearingArea).toBeGreaterThan(0);
+  });
+});

@@ -1,0 +1,76 @@
+import { value, type RecordValue } from '../analysis/calcRecord.js';
+import { pipeWeightPerLength } from '../catalog/materialDensity.js';
+import type { Pipe, Soil } from '../model/projectSchema.js';
+import { rankinePassiveCoefficient, WATER_UNIT_WEIGHT } from './passiveResistance.js';
+
+/**
+ * Trench-type coefficient K_n for laying conditions 1–5 of AWWA C150/C151 (DIPRA restrained-joint
+ * method; values from memory — verify against the manual).
+ */
+export const TRENCH_COEFFICIENT: Record<number, number> = { 1: 0.2, 2: 0.4, 3: 0.6, 4: 0.85, 5: 1.0 };
+/** Laying condition assumed when a pipe states none (common practice for a bedded trench). */
+export const DEFAULT_TRENCH_TYPE = 3;
+/** f_φ: pipe friction angle over soil friction angle, conservative end of the manual's range (from memory). */
+export const DEFAULT_FRICTION_RATIO = 0.5;
+/** f_c: pipe adhesion over soil cohesion (from memory). */
+export const DEFAULT_ADHESION_RATIO = 0.5;
+/** Friction on polyethylene-encased pipe relative to bare pipe, adhesion neglected (from memory). */
+export const ENCASED_FRICTION_FACTOR = 0.7;
+
+export interface PipeSoilResistance {
+  /** N/m, unit frictional resistance F_s along the pipe */
+  friction: number;
+  /** N/m, unit lateral bearing resistance R_s = K_n·P_p·D */
+  bearing: number;
+  /** N/m, weight holding the pipe down against uplift: pipe, water and the soil prism above */
+  uplift: number;
+  inputs: RecordValue[];
+}
+
+/**
+ * Pipe–soil resistance per metre of restrained pipe (domain reference §6.1; DIPRA method,
+ * equation bodies from memory): F_s = A_p·C_p + W·tan δ with A_p = π·D, W = 2·W_e + W_p + W_w,
+ * W_e = γ·H·D (the prism load, on top and bottom), C_p = f_c·c, δ = f_φ·φ; encased pipe 0.7·W·tan δ.
+ * R_s = K_n·P_p·D, P_p = Rankine passive pressure at the pipe centreline γ·H_c·Kp + 2c·√Kp.
+ *
+ * @param cover m, ground to top of pipe
+ */
+export function pipeSoilResistance(pipe: Pipe, soil: Soil, cover: number): PipeSoilResistance {
+  const d = pipe.outsideDiameter;
+  const pipeWeight = pipe.weightPerLength ?? pipeWeightPerLength(pipe.material, d, pipe.insideDiameter);
+  const waterWeight = (WATER_UNIT_WEIGHT * Math.PI * pipe.insideDiameter ** 2) / 4;
+  const earthLoad = soil.unitWeight * cover * d;
+  const normal = 2 * earthLoad + pipeWeight + waterWeight;
+  const frictionRatio = soil.pipeFrictionRatio ?? DEFAULT_FRICTION_RATIO;
+  const adhesionRatio = soil.pipeAdhesionRatio ?? DEFAULT_ADHESION_RATIO;
+  const tanDelta = Math.tan((frictionRatio * soil.frictionAngle * Math.PI) / 180);
+  const encased = pipe.encasement === 'polyethylene';
+  const friction = encased
+    ? ENCASED_FRICTION_FACTOR * normal * tanDelta
+    : Math.PI * d * adhesionRatio * soil.cohesion + normal * tanDelta;
+  const trenchType = pipe.trenchType ?? DEFAULT_TRENCH_TYPE;
+  const kn = TRENCH_COEFFICIENT[trenchType] ?? TRENCH_COEFFICIENT[DEFAULT_TRENCH_TYPE]!;
+  const kp = rankinePassiveCoefficient(soil.frictionAngle);
+  const centreDepth = cover + d / 2;
+  const passivePressure = soil.unitWeight * centreDepth * kp + 2 * soil.cohesion * Math.sqrt(kp);
+  const bearing = kn * passivePressure * d;
+  const uplift = pipeWeight + waterWeight + earthLoad;
+  const given = (v: unknown) => (v === undefined ? 'default (from memory)' : 'project');
+  return {
+    friction,
+    bearing,
+    uplift,
+    inputs: [
+      value('D', `outside diameter of ${pipe.id}`, d, 'diameter', 'pipe'),
+      value('H', 'cover to top of pipe', cover, 'length', 'node'),
+      value('W_p', 'pipe weight', pipeWeight, 'forcePerLength', pipe.weightPerLength === undefined ? 'material density × wall area' : 'project'),
+      value('W_w', 'water weight', waterWeight, 'forcePerLength', 'computed'),
+      value('W_e', 'earth prism load γ·H·D', earthLoad, 'forcePerLength', 'computed'),
+      value('f_φ', 'pipe/soil friction ratio', frictionRatio, 'ratio', given(soil.pipeFrictionRatio)),
+      value('f_c', 'pipe/soil adhesion ratio', adhesionRatio, 'ratio', given(soil.pipeAdhesionRatio)),
+      value('K_n', `trench type ${trenchType} coefficient`, kn, 'ratio', pipe.trenchType === undefined ? 'default type 3 (common practice), K_n from memory' : 'K_n from memory'),
+      value('F_s', encased ? 'unit friction, PE-encased (0.7·W·tan δ)' : 'unit friction A_p·C_p + W·tan δ', friction, 'forcePerLength', 'computed'),
+      value('R_s', 'unit bearing K_n·P_p·D', bearing, 'forcePerLength', 'computed'),
+    ],
+  };
+}

@@ -1,0 +1,81 @@
+import { describe, it, expect } from 'vitest';
+import { analyse } from '../analysis/analyse.js';
+import { route } from '../../test/projectBuilder.js';
+import { expectClose } from '../../test/tolerance.js';
+
+// Hand calculation of the restrained-joint method (domain reference §6.1, DIPRA form from memory):
+// 12-in DI, OD D = 0.33528 m, ID 0.3162 m, pipe weight W_p = 700 N/m (given), cover H = 1.2 m,
+// soil γ = 18 kN/m³, φ = 30°, c = 0, f_φ = 0.6, trench type 4 (K_n = 0.85), P = 1 MPa, S_f = 1.5.
+//   W_e = γ·H·D = 18000 × 1.2 × 0.33528 = 7,242.05 N/m
+//   W_w = 9789.0 × π/4 × 0.3162² = 768.69 N/m
+//   W = 2·W_e + W_p + W_w = 15,952.79 N/m;  δ = 0.6 × 30° = 18°
+//   F_s = W·tan δ = 5,183.37 N/m
+//   Kp = 3;  H_c = 1.2 + 0.16764 = 1.36764 m;  P_p = γ·H_c·Kp = 73,852.6 Pa;  R_s = K_n·P_p·D = 21,047.1 N/m
+//   A = π/4·D² = 0.0882887 m²
+//   90° bend:  L = S_f·P·A·tan 45° / (F_s + ½R_s) = 1.5 × 88,288.7 / 15,706.9 = 8.4315 m each side
+//   dead end:  L = S_f·P·A / F_s = 132,433 / 5,183.37 = 25.550 m
+const soils = [{ id: 's', bearing: 150e3, unitWeight: 18000, frictionAngle: 30, cohesion: 0, pipeFrictionRatio: 0.6 }];
+const pipe = { od: 0.33528, id_: 0.3162, weightPerLength: 700, trenchType: 4 };
+
+describe('restrained joint length (DIPRA method, domain reference §6.1)', () => {
+  it('a 90° bend needs 8.43 m each side, as worked by hand', () => {
+    const p = route({
+      pressure: 1e6,
+      soils,
+      nodes: [{ id: 'a', x: -30, y: 0, end: 'tie-in' }, { id: 'b', x: 0, y: 0, restraint: 'joints' }, { id: 'c', x: 0, y: 30, end: 'tie-in' }],
+      pipes: [{ from: 'a', to: 'b', ...pipe }, { from: 'b', to: 'c', ...pipe }],
+    });
+    const r = analyse(p).byNode.get('b')!.restraint;
+    expect(r.block).toBeNull();
+    expect(r.restrainedLegs).toHaveLength(2);
+    for (const leg of r.restrainedLegs) expectClose(leg.length, 8.4315, 1e-4);
+  });
+
+  it('a dead end needs 25.55 m along its pipe, and warns that it runs past the next node', () => {
+    const p = route({
+      pressure: 1e6,
+      soils,
+      nodes: [{ id: 'a', x: 0, y: 0, end: 'tie-in' }, { id: 'b', x: 20, y: 0, restraint: 'joints' }],
+      pipes: [{ from: 'a', to: 'b', ...pipe }],
+    });
+    const f = analyse(p).byNode.get('b')!;
+    expectClose(f.restraint.restrainedLength!, 25.5496, 1e-4);
+    expect(f.warnings.some((w) => w.includes('runs past the next node'))).toBe(true);
+  });
+
+  it('longer for polyethylene-encased pipe (0.7 × friction, from memory)', () => {
+    const make = (encasement: 'none' | 'polyethylene') =>
+      route({
+        pressure: 1e6,
+        soils,
+        nodes: [{ id: 'a', x: 0, y: 0, end: 'tie-in' }, { id: 'b', x: 40, y: 0, restraint: 'joints' }],
+        pipes: [{ from: 'a', to: 'b', ...pipe, encasement }],
+      });
+    const bare = analyse(make('none')).byNode.get('b')!.restraint.restrainedLength!;
+    const wrapped = analyse(make('polyethylene')).byNode.get('b')!.restraint.restrainedLength!;
+    expectClose(wrapped / bare, 1 / 0.7, 1e-9);
+  });
+
+  it('a muck node gets no block, a warning, and restrained joints instead', () => {
+    const p = route({
+      pressure: 1e6,
+      soils: [{ id: 'muck', bearing: 0, unitWeight: 14000, frictionAngle: 0, cohesion: 5000 }],
+      nodes: [{ id: 'a', x: -30, y: 0, end: 'tie-in' }, { id: 'b', x: 0, y: 0 }, { id: 'c', x: 0, y: 30, end: 'tie-in' }],
+      pipes: [{ from: 'a', to: 'b', od: 0.326 }, { from: 'b', to: 'c', od: 0.326 }],
+    });
+    const f = analyse(p).byNode.get('b')!;
+    expect(f.restraint.block).toBeNull();
+    expect(f.warnings[0]).toMatch(/^No bearing/);
+    expect(f.restraint.restrainedLength).toBeGreaterThan(0);
+  });
+
+  it('zero thrust gives no restraint at all', () => {
+    const p = route({
+      pressure: 0,
+      nodes: [{ id: 'a', x: -30, y: 0, end: 'tie-in' }, { id: 'b', x: 0, y: 0 }, { id: 'c', x: 0, y: 30, end: 'tie-in' }],
+      pipes: [{ from: 'a', to: 'b', od: 0.326 }, { from: 'b', to: 'c', od: 0.326 }],
+    });
+    const r = analyse(p).byNode.get('b')!.restraint;
+    expect([r.block, r.anchor, r.trenchBottom, r.restrainedLength]).toEqual([null, null, null, null]);
+  });
+});

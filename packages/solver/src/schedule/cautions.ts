@@ -1,0 +1,15 @@
+/** The usual cautions (domain reference §10), carried by every result screen and printed schedule. */
+export const SHORT_CAUTION =
+  'Design aid only — every result must be checked by a licensed engineer; local codes and the utility’s standards govern.';
+
+export const CAUTIONS: readonly string[] = [
+  'Mainbrace is a design aid. Thrust restraint must be designed, checked and sealed by a licensed professional engineer and approved by the water utility or authority having jurisdiction.',
+  'Local codes, the utility’s standards and its standard details govern over the generic values used here.',
+  'Soil values are only as good as the soil identification: prefer site geotechnical data. Muck, peat, organic soils and unprepared fill have no bearing.',
+  'Blocks must bear on undisturbed soil (or fill compacted to 90–95 % Standard Proctor), centred on the line of the thrust.',
+  'Keep joints, bolts and glands clear of concrete; wrap fittings in polyethylene before pouring.',
+  'Let block concrete cure before pressure testing (commonly 5 days; 2 days with high-early-strength cement).',
+  'Brace caps, plugs and test bulkheads for the full test thrust during the field test; the test pressure must not exceed the thrust-restraint design pressure.',
+  'Excavation behind a block later (other utilities) can remove its soil support: record blocks on the as-built drawings.',
+  'Gravity anchors are sized for the highest groundwater level given; restrained zones of neighbouring fittings that overlap must be designed together.',
+];

@@ -1,0 +1,110 @@
+import { planBearing, type Vec3 } from '../geometry/vector.js';
+import type { Analysis, FittingAnalysis } from '../analysis/analyse.js';
+import type { FittingKind } from '../network/fittingKind.js';
+import { nodeSoil } from '../restraint/sizeRestraint.js';
+import { CAUTIONS } from './cautions.js';
+
+/** One fitting of the schedule output (project-format.md, plus added fields). SI units. */
+export interface ScheduleFitting {
+  node: string;
+  tag: string;
+  label: string | null;
+  kind: Exclude<FittingKind, 'straight' | 'tie-in' | 'none'>;
+  deflection: number | null;
+  horizontalDeflection: number | null;
+  verticalDeflection: number | null;
+  branchAngle: number | null;
+  chainage: number;
+  position: Vec3;
+  pipes: { id: string; outsideDiameter: number; insideDiameter: number; material: string }[];
+  soil: string;
+  cases: { case: string; pressure: number; static: Vec3; dynamic: Vec3; total: Vec3 }[];
+  governingCase: string;
+  designPressure: number;
+  thrust: Vec3;
+  horizontalThrust: number;
+  upwardThrust: number;
+  downwardThrust: number;
+  /** degrees clockwise from north of the horizontal thrust, or null */
+  bearingDirection: number | null;
+  waterWeight: number;
+  restraint: {
+    block: {
+      bearingArea: number;
+      faceWidth: number;
+      faceHeight: number;
+      concreteVolume: number;
+      depth: number;
+      direction: Vec3;
+      passiveResistance: number;
+      passiveRatio: number;
+    } | null;
+    anchor: { concreteVolume: number; side: number; submerged: boolean } | null;
+    trenchBottom: { bearingArea: number; width: number; length: number } | null;
+    restrainedLength: number | null;
+    restrainedLegs: { pipe: string; length: number }[];
+  };
+  warnings: string[];
+}
+
+export interface Schedule {
+  project: string;
+  units: 'SI';
+  fittings: ScheduleFitting[];
+  cautions: readonly string[];
+}
+
+function row(a: Analysis, f: FittingAnalysis): ScheduleFitting {
+  const { restraint: r, envelope: e, geometry: g } = f;
+  const block = r.block && {
+    bearingArea: r.block.bearingArea,
+    faceWidth: r.block.faceWidth,
+    faceHeight: r.block.faceHeight,
+    concreteVolume: r.block.concreteVolume,
+    depth: r.block.depth,
+    direction: r.block.direction,
+    passiveResistance: r.block.passiveResistance,
+    passiveRatio: r.block.passiveRatio,
+  };
+  return {
+    node: f.node.id,
+    tag: f.tag,
+    label: f.node.label ?? null,
+    kind: g.kind as ScheduleFitting['kind'],
+    deflection: g.deflection,
+    horizontalDeflection: g.horizontalDeflection,
+    verticalDeflection: g.verticalDeflection,
+    branchAngle: g.branchAngle,
+    chainage: f.chainage,
+    position: [f.node.x, f.node.y, f.node.elevation],
+    pipes: f.legs.map((l) => ({
+      id: l.pipe.id,
+      outsideDiameter: l.pipe.outsideDiameter,
+      insideDiameter: l.pipe.insideDiameter,
+      material: l.pipe.material,
+    })),
+    soil: nodeSoil(a.project, f.node).id,
+    cases: f.cases.map((c) => ({ case: c.caseId, pressure: c.pressure, static: c.static, dynamic: c.dynamic, total: c.total })),
+    governingCase: e.governing.caseId,
+    designPressure: e.pressure,
+    thrust: e.governing.total,
+    horizontalThrust: e.horizontal.force,
+    upwardThrust: e.upward.force,
+    downwardThrust: e.downward.force,
+    bearingDirection: e.horizontal.force > 0 ? planBearing(e.horizontal.direction) : null,
+    waterWeight: f.waterWeight,
+    restraint: {
+      block,
+      anchor: r.anchor && { concreteVolume: r.anchor.concreteVolume, side: r.anchor.side, submerged: r.anchor.submerged },
+      trenchBottom: r.trenchBottom,
+      restrainedLength: r.restrainedLength,
+      restrainedLegs: r.restrainedLegs,
+    },
+    warnings: f.warnings,
+  };
+}
+
+/** The schedule of project-format.md from an analysis: one row per fitting that needs restraint. */
+export function scheduleOf(a: Analysis): Schedule {
+  return { project: a.project.name, units: 'SI', fittings: a.fittings.map((f) => row(a, f)), cautions: CAUTIONS };
+}

@@ -1,0 +1,42 @@
+import { formatSi } from '../units/format.js';
+import type { UnitSystem } from '../units/conversions.js';
+import { CAUTIONS } from './cautions.js';
+import type { Schedule, ScheduleFitting } from './scheduleRows.js';
+
+/** What holds the fitting, in one short phrase of display units. */
+export function restraintSummary(f: ScheduleFitting, units: UnitSystem): string {
+  const r = f.restraint;
+  const parts: string[] = [];
+  const len = (m: number) => formatSi(m, 'length', units);
+  if (r.block) parts.push(`block ${len(r.block.faceWidth)} × ${len(r.block.faceHeight)}, ${formatSi(r.block.concreteVolume, 'volume', units)}`);
+  if (r.anchor) parts.push(`anchor ${formatSi(r.anchor.concreteVolume, 'volume', units)}`);
+  if (r.trenchBottom) parts.push(`bottom pad ${formatSi(r.trenchBottom.bearingArea, 'area', units)}`);
+  if (r.restrainedLength !== null) parts.push(`restrain ${len(r.restrainedLength)} each side`);
+  return parts.length ? parts.join('; ') : '—';
+}
+
+/** The schedule as a readable fixed-width table for a terminal, with the cautions under it. */
+export function scheduleTable(s: Schedule, units: UnitSystem, caseLabel: (id: string) => string): string {
+  const head = ['Tag', 'Kind', 'Chainage', 'Defl.', 'Pressure', 'Case', 'Thrust', 'Restraint', 'Warn'];
+  const rows = s.fittings.map((f) => [
+    f.tag,
+    f.kind,
+    formatSi(f.chainage, 'length', units, 4),
+    f.deflection === null ? (f.branchAngle === null ? '' : formatSi(f.branchAngle, 'angle', units)) : formatSi(f.deflection, 'angle', units),
+    formatSi(f.designPressure, 'pressure', units),
+    caseLabel(f.governingCase),
+    formatSi(Math.hypot(...f.thrust), 'force', units),
+    restraintSummary(f, units),
+    f.warnings.length ? String(f.warnings.length) : '',
+  ]);
+  const widths = head.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i]!.length)));
+  const line = (cells: string[]) => cells.map((c, i) => c.padEnd(widths[i]!)).join('  ').trimEnd();
+  const out = [`Fitting schedule — ${s.project}`, '', line(head), line(widths.map((w) => '-'.repeat(w))), ...rows.map(line)];
+  const warned = s.fittings.filter((f) => f.warnings.length > 0);
+  if (warned.length) {
+    out.push('', 'Warnings');
+    for (const f of warned) for (const w of f.warnings) out.push(`  ${f.tag}: ${w}`);
+  }
+  out.push('', ...CAUTIONS.map((c) => `! ${c}`));
+  return out.join('\n') + '\n';
+}

@@ -1,0 +1,52 @@
+import type { Vec3 } from '../geometry/vector.js';
+import type { Leg } from '../network/legs.js';
+
+/** Force of the water on a fitting for one load case, N, split as the schedule reports it. */
+export interface ThrustParts {
+  /** Σ −p·A_i·n_i, N */
+  static: Vec3;
+  /** Σ −ρ·Q_i²/a_i·n_i, N */
+  dynamic: Vec3;
+  /** static + dynamic, N */
+  total: Vec3;
+}
+
+/**
+ * Steady momentum balance on a control volume around a fitting (brief.md; any fluid-mechanics text,
+ * e.g. White, "Fluid Mechanics", ch. 3, linear momentum with gauge pressures):
+ *
+ *   F = − Σ_i ( p·A_i + ρ·Q_i²/a_i ) · n_i
+ *
+ * n_i points from the node along pipe i, A_i is the area the pressure acts on, a_i the flow area and
+ * Q_i the outflow. The momentum flux ρ·Q²/a pushes outward along −n_i at inlets and outlets alike.
+ *
+ * @param legs the pipe ends at the node; only those with `pressurised[i] !== false` carry pressure
+ * @param pressure gauge pressure at the node, Pa
+ * @param density water density, kg/m³
+ * @param flowFactor multiplies every leg's outflow (0 = no flow)
+ */
+export function momentumBalance(
+  legs: readonly Leg[],
+  pressure: number,
+  density: number,
+  flowFactor: number,
+  pressurised?: readonly boolean[],
+): ThrustParts {
+  let sx = 0, sy = 0, sz = 0;
+  let dx = 0, dy = 0, dz = 0;
+  for (let i = 0; i < legs.length; i++) {
+    if (pressurised && !pressurised[i]) continue;
+    const leg = legs[i]!;
+    const n = leg.direction;
+    const pressureForce = pressure * leg.thrustArea;
+    const q = leg.outflow * flowFactor;
+    const momentumFlux = (density * q * q) / leg.flowArea;
+    sx -= pressureForce * n[0];
+    sy -= pressureForce * n[1];
+    sz -= pressureForce * n[2];
+    dx -= momentumFlux * n[0];
+    dy -= momentumFlux * n[1];
+    dz -= momentumFlux * n[2];
+  }
+  return { static: [sx, sy, sz], dynamic: [dx, dy, dz], total: [sx + dx, sy + dy, sz + dz] };
+}
