@@ -1,3 +1,3 @@
 #!/usr/bin/env node
-// The command line runs as compiled JavaScript (built by the package's `prepare` on install).
-import '../dist/cli/main.js';
+// The command line runs as one bundled module, built by the package's `prepare` on install.
+import '../dist/mainbrace.mjs';

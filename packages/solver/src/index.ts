@@ -14,7 +14,7 @@ export { fittingTag, TAG_CODES } from './network/fittingTag.js';
 export { pressureAt } from './pressure/nodePressure.js';
 export { momentumBalance, type ThrustParts } from './thrust/momentumBalance.js';
 export { fittingThrust, thrustEnvelope, type CaseThrust, type ThrustEnvelope } from './thrust/fittingThrust.js';
-export { analyse, analyseProject, type Analysis, type FittingAnalysis } from './analysis/analyse.js';
+export { analyse, analyseProject, calculationRecord, type Analysis, type FittingAnalysis } from './analysis/analyse.js';
 export type { CalcStep, RecordValue } from './analysis/calcRecord.js';
 export { nodeSoil, type Restraint } from './restraint/sizeRestraint.js';
 export { SOIL_LIBRARY, findLibrarySoil, type LibrarySoil } from './restraint/soilLibrary.js';

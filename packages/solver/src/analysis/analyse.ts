@@ -9,7 +9,7 @@ import { waterWeightInFitting } from '../thrust/waterWeight.js';
 import { sizeRestraint, type Restraint } from '../restraint/sizeRestraint.js';
 import { thrustSteps } from './thrustSteps.js';
 import { formatSi } from '../units/format.js';
-import type { CalcStep } from './calcRecord.js';
+import type { CalcStep, LazySteps } from './calcRecord.js';
 
 /** Everything computed for one fitting; the schedule, the plan and the record all read this. */
 export interface FittingAnalysis {
@@ -24,8 +24,8 @@ export interface FittingAnalysis {
   /** N, weight of the water in the fitting body (acts in −z; not part of the thrust) */
   waterWeight: number;
   restraint: Restraint;
-  /** the calculation record: thrust, then restraint */
-  record: CalcStep[];
+  /** the calculation record's parts, built on demand: read it with `calculationRecord` */
+  recordParts: LazySteps[];
   warnings: string[];
 }
 
@@ -68,7 +68,7 @@ function analyseFitting(project: Project, node: ProjectNode, legs: Leg[], geomet
     envelope,
     waterWeight: waterWeightInFitting(legs, project.water.density),
     restraint,
-    record: [...thrustSteps(project, node, legs, envelope.governing, geometry), ...restraint.steps],
+    recordParts: [() => thrustSteps(project, node, legs, envelope.governing, geometry), ...restraint.steps],
     warnings,
   };
 }
@@ -97,4 +97,16 @@ export function analyse(project: Project): Analysis {
     cache.set(project, result);
   }
   return result;
+}
+
+const records = new WeakMap<FittingAnalysis, CalcStep[]>();
+
+/** A fitting's calculation record — thrust, then restraint — built once, when first read. */
+export function calculationRecord(f: FittingAnalysis): CalcStep[] {
+  let r = records.get(f);
+  if (!r) {
+    r = f.recordParts.flatMap((part) => part());
+    records.set(f, r);
+  }
+  return r;
 }

@@ -1,4 +1,4 @@
-import { norm } from '../geometry/vector.js';
+import { horizontalNorm, norm } from '../geometry/vector.js';
 import type { Leg } from '../network/legs.js';
 import type { FittingGeometry } from '../network/fittingKind.js';
 import type { Project, ProjectNode } from '../model/projectSchema.js';
@@ -53,7 +53,7 @@ export function thrustSteps(
     title: 'Total thrust on the fitting',
     formula: 'F = F_s + F_d',
     inputs: [
-      value('F_h', 'horizontal part', Math.hypot(governing.total[0], governing.total[1]), 'force', 'computed'),
+      value('F_h', 'horizontal part', horizontalNorm(governing.total), 'force', 'computed'),
       value('F_z', 'vertical part (up +)', governing.total[2], 'force', 'computed'),
     ],
     result: value('|F|', 'total thrust', norm(governing.total), 'force', 'computed'),

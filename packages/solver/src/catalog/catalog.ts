@@ -1,11 +1,19 @@
 import type { Material } from '../model/projectSchema.js';
 import { DI_AWWA_PC250, DI_AWWA_PC350 } from './ductileIronAwwa.js';
 import { DI_EN545 } from './ductileIronEn545.js';
-import { PLASTIC_SERIES } from './plasticPipe.js';
+import { HDPE_C906_SERIES } from './hdpeC906.js';
 import type { PipeSeries, PipeSize } from './pipeSeries.js';
+import { PVC_C900_DR14, PVC_C900_DR18 } from './pvcC900.js';
 
-/** Every pipe series the editor offers, each naming its standard. */
-export const CATALOG: readonly PipeSeries[] = [DI_AWWA_PC350, DI_AWWA_PC250, DI_EN545, ...PLASTIC_SERIES];
+/** Every pipe series the editor offers, each naming its standard; ids are stored in project files. */
+export const CATALOG: readonly PipeSeries[] = [
+  DI_AWWA_PC350,
+  DI_AWWA_PC250,
+  DI_EN545,
+  PVC_C900_DR18,
+  PVC_C900_DR14,
+  ...HDPE_C906_SERIES,
+];
 
 export const findSeries = (id: string): PipeSeries | undefined => CATALOG.find((s) => s.id === id);
 
@@ -14,11 +22,16 @@ export const findSize = (seriesId: string, nominal: string): PipeSize | undefine
 
 export const seriesForMaterial = (m: Material): PipeSeries[] => CATALOG.filter((s) => s.material === m);
 
-/** The size of a series whose OD is closest to the given one (m), for an editor picking a default. */
+/**
+ * The size of a series whose OD is closest to the given OD (m), so the editor can match a typed
+ * diameter to a catalogue entry; the smaller size wins a tie. Undefined for an unknown series.
+ */
 export function nearestSize(seriesId: string, outsideDiameter: number): PipeSize | undefined {
   let best: PipeSize | undefined;
   for (const s of findSeries(seriesId)?.sizes ?? []) {
-    if (!best || Math.abs(s.outsideDiameter - outsideDiameter) < Math.abs(best.outsideDiameter - outsideDiameter)) best = s;
+    if (!best || Math.abs(s.outsideDiameter - outsideDiameter) < Math.abs(best.outsideDiameter - outsideDiameter)) {
+      best = s;
+    }
   }
   return best;
 }

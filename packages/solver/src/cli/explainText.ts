@@ -1,4 +1,4 @@
-import type { FittingAnalysis } from '../analysis/analyse.js';
+import { calculationRecord, type FittingAnalysis } from '../analysis/analyse.js';
 import type { RecordValue } from '../analysis/calcRecord.js';
 import { formatSi } from '../units/format.js';
 import type { UnitSystem } from '../units/conversions.js';
@@ -9,7 +9,7 @@ const shown = (v: RecordValue, units: UnitSystem) => formatSi(v.value, v.dimensi
 /** A fitting's calculation record as plain text: each step's formula, inputs with sources, result. */
 export function explainText(f: FittingAnalysis, units: UnitSystem): string {
   const out = [`${f.tag} (node ${f.node.id}) — ${f.geometry.kind}`, ''];
-  f.record.forEach((step, i) => {
+  calculationRecord(f).forEach((step, i) => {
     out.push(`${i + 1}. ${step.title}`, `   ${step.formula}`);
     for (const v of step.inputs) out.push(`     ${v.symbol} = ${shown(v, units)}  ${v.label}${v.source ? ` [${v.source}]` : ''}`);
     out.push(`   → ${step.result.symbol} = ${shown(step.result, units)}  ${step.result.label}${step.result.source && step.result.source !== 'computed' ? ` (${step.result.source})` : ''}`);

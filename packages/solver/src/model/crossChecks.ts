@@ -1,5 +1,6 @@
 import type { z } from 'zod';
 import type { Project } from './projectSchema.js';
+import { norm } from '../geometry/vector.js';
 
 type Ctx = z.core.$RefinementCtx<Project>;
 
@@ -44,7 +45,7 @@ export function crossCheck(p: Project, ctx: Ctx): void {
     if (!b) ctx.addIssue({ code: 'custom', path: ['pipes', i, 'to'], message: `must name a node in "nodes" (no node "${pipe.to}")` });
     if (pipe.from === pipe.to) {
       ctx.addIssue({ code: 'custom', path: ['pipes', i, 'to'], message: 'must differ from "from" (a pipe joins two nodes)' });
-    } else if (a && b && Math.hypot(a.x - b.x, a.y - b.y, a.elevation - b.elevation) < MIN_PIPE_LENGTH) {
+    } else if (a && b && norm([a.x - b.x, a.y - b.y, a.elevation - b.elevation]) < MIN_PIPE_LENGTH) {
       ctx.addIssue({ code: 'custom', path: ['pipes', i, 'to'], message: `must be at another point than "from" (nodes ${a.id} and ${b.id} coincide)` });
     }
     if (pipe.insideDiameter >= pipe.outsideDiameter) {

@@ -1,5 +1,5 @@
-import { sub, unit, norm, type Vec3 } from '../geometry/vector.js';
 import { circleArea, meters } from '../units/quantities.js';
+import type { Vec3 } from '../geometry/vector.js';
 import type { Pipe, Project, ProjectNode } from '../model/projectSchema.js';
 
 /** One pipe end at a node, seen from the node. */
@@ -19,32 +19,30 @@ export interface Leg {
   outflow: number;
 }
 
-const position = (n: ProjectNode): Vec3 => [n.x, n.y, n.elevation];
-
 /** Every node's legs, in pipe order. Assumes a validated project (references resolve). */
 export function legsByNode(project: Project): Map<string, Leg[]> {
-  const nodes = new Map(project.nodes.map((n) => [n.id, n]));
-  const legs = new Map<string, Leg[]>(project.nodes.map((n) => [n.id, []]));
+  const nodes = new Map<string, ProjectNode>();
+  const legs = new Map<string, Leg[]>();
+  for (const n of project.nodes) {
+    nodes.set(n.id, n);
+    legs.set(n.id, []);
+  }
   const useOutside = project.design.thrustArea === 'outside';
   for (const pipe of project.pipes) {
     const a = nodes.get(pipe.from);
     const b = nodes.get(pipe.to);
     if (!a || !b) continue;
-    const span = sub(position(b), position(a));
-    const length = norm(span);
-    const along = unit(span);
+    const dx = b.x - a.x;
+    const dy = b.y - a.y;
+    const dz = b.elevation - a.elevation;
+    const length = Math.sqrt(dx * dx + dy * dy + dz * dz);
     const thrustArea = circleArea(meters(useOutside ? pipe.outsideDiameter : pipe.insideDiameter));
     const flowArea = circleArea(meters(pipe.insideDiameter));
-    legs.get(a.id)?.push({ pipe, far: b, direction: along, length, thrustArea, flowArea, outflow: pipe.flow });
-    legs.get(b.id)?.push({
-      pipe,
-      far: a,
-      direction: [-along[0], -along[1], -along[2]],
-      length,
-      thrustArea,
-      flowArea,
-      outflow: -pipe.flow,
-    });
+    const ux = dx / length;
+    const uy = dy / length;
+    const uz = dz / length;
+    legs.get(a.id)!.push({ pipe, far: b, direction: [ux, uy, uz], length, thrustArea, flowArea, outflow: pipe.flow });
+    legs.get(b.id)!.push({ pipe, far: a, direction: [-ux, -uy, -uz], length, thrustArea, flowArea, outflow: -pipe.flow });
   }
   return legs;
 }

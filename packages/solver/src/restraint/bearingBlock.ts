@@ -1,5 +1,5 @@
 import type { Vec3 } from '../geometry/vector.js';
-import { value, type CalcStep } from '../analysis/calcRecord.js';
+import { value, type CalcStep, type LazySteps } from '../analysis/calcRecord.js';
 import { passiveResistance } from './passiveResistance.js';
 import { roundDownTo, roundUpTo } from './rounding.js';
 import { formatSi } from '../units/format.js';
@@ -51,7 +51,7 @@ export interface BearingBlock {
 
 export interface BlockResult {
   block: BearingBlock;
-  steps: CalcStep[];
+  steps: LazySteps;
   warnings: string[];
 }
 
@@ -87,7 +87,15 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
   }
   const top = centreDepth - height / 2;
   const bottom = centreDepth + height / 2;
-  const passive = passiveResistance({ width, top, bottom, ...i.soil, waterDepth: i.waterDepth });
+  const passive = passiveResistance({
+    width,
+    top,
+    bottom,
+    unitWeight: i.soil.unitWeight,
+    frictionAngle: i.soil.frictionAngle,
+    cohesion: i.soil.cohesion,
+    waterDepth: i.waterDepth,
+  });
   const passiveRatio = passive / i.thrust;
   if (passiveRatio < i.safetyFactor) {
     warnings.push(
@@ -95,7 +103,7 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
     );
   }
   const concreteVolume = width * height * i.blockDepth;
-  const steps: CalcStep[] = [
+  const steps = (): CalcStep[] => [
     {
       title: 'Required bearing area',
       formula: 'A = SF · T_h / σ_b',

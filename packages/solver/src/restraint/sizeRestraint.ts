@@ -1,5 +1,6 @@
-import { angleBetween, horizontal, type Vec3 } from '../geometry/vector.js';
-import type { CalcStep } from '../analysis/calcRecord.js';
+import { angleBetween, horizontal, horizontalNorm, norm, type Vec3 } from '../geometry/vector.js';
+import { value, type CalcStep, type LazySteps } from '../analysis/calcRecord.js';
+import { WATER_UNIT_WEIGHT } from './passiveResistance.js';
 import type { Leg } from '../network/legs.js';
 import type { FittingGeometry } from '../network/fittingKind.js';
 import type { Project, ProjectNode, Soil } from '../model/projectSchema.js';
@@ -18,7 +19,8 @@ export interface Restraint {
   /** m, the longest restrained length of any leg, or null */
   restrainedLength: number | null;
   restrainedLegs: RestrainedLeg[];
-  steps: CalcStep[];
+  /** the record of the restraint, in order, built on demand */
+  steps: LazySteps[];
   warnings: string[];
 }
 
@@ -53,8 +55,9 @@ export function sizeRestraint(
   const units = project.units;
   const step = dimensionStep(units);
   const soil = nodeSoil(project, node);
-  const od = Math.max(...legs.map((l) => l.pipe.outsideDiameter));
-  const total = Math.hypot(...envelope.governing.total);
+  let od = 0;
+  for (const l of legs) od = Math.max(od, l.pipe.outsideDiameter);
+  const total = norm(envelope.governing.total);
   const groundLevel = node.elevation + od / 2 + node.cover;
   const gw = design.groundwaterElevation;
   const waterDepth = gw === null ? null : Math.max(0, groundLevel - gw);
@@ -88,7 +91,7 @@ export function sizeRestraint(
           units,
         });
         out.block = r.block;
-        out.steps.push(...r.steps);
+        out.steps.push(r.steps);
         out.warnings.push(...r.warnings);
         if (acrossTrench(h.direction, legs) && r.block.faceWidth > trenchWidth + 1e-9) {
           out.warnings.push(
@@ -100,26 +103,36 @@ export function sizeRestraint(
         }
       }
     }
+    const submerged = gw !== null && gw > node.elevation - od / 2;
     if (present(envelope.upward.force, total)) {
-      const r = sizeGravityAnchor({
-        upward: envelope.upward.force,
-        horizontal: envelope.horizontal.force,
-        safetyFactor: design.upliftSafetyFactor,
-        concreteUnitWeight: design.concreteUnitWeight,
-        submerged: gw !== null && gw > node.elevation - od / 2,
-        frictionAngle: soil.frictionAngle,
-        step,
-      });
-      out.anchor = r.anchor;
-      out.steps.push(...r.steps);
-      out.warnings.push(...r.warnings);
+      const blockHolds = out.block && holdsUplift(out.block, design, submerged, envelope.upward.force);
+      if (blockHolds) out.steps.push(blockHolds);
+      else {
+        const r = sizeGravityAnchor({
+          upward: envelope.upward.force,
+          horizontal: envelope.horizontal.force,
+          safetyFactor: design.upliftSafetyFactor,
+          concreteUnitWeight: design.concreteUnitWeight,
+          submerged,
+          frictionAngle: soil.frictionAngle,
+          step,
+        });
+        out.anchor = r.anchor;
+        out.steps.push(r.steps);
+        out.warnings.push(...r.warnings);
+      }
     }
     if (present(envelope.downward.force, total)) {
       const vertical = soil.verticalBearing ?? soil.bearing;
       if (vertical > 0) {
         const r = sizeTrenchBottom(envelope.downward.force, design.bearingSafetyFactor, vertical, trenchWidth, od, step);
-        out.trenchBottom = r.bearing;
-        out.steps.push(...r.steps);
+        const base = out.block ? out.block.faceWidth * out.block.depth : 0;
+        if (base >= r.bearing.bearingArea) {
+          out.steps.push(() => [{ ...r.steps()[0]!, title: 'Bearing on the trench bottom: the block’s base is enough' }]);
+        } else {
+          out.trenchBottom = r.bearing;
+          out.steps.push(r.steps);
+        }
       } else {
         out.warnings.push(`No bearing under the fitting: ${soilName} cannot take the downward thrust; restrain the joints or replace the soil.`);
         needJoints = true;
@@ -139,17 +152,40 @@ export function sizeRestraint(
     });
     out.restrainedLegs = r.legs;
     out.restrainedLength = Math.max(...r.legs.map((l) => l.length));
-    out.steps.push(...r.steps);
+    out.steps.push(r.steps);
     out.warnings.push(...r.warnings);
   }
   return out;
+}
+
+/**
+ * A bearing block's own weight, submerged where groundwater reaches it, holds a small upward thrust
+ * when it is at least SF times that thrust (the same weight rule as a gravity anchor, §5.2); returns
+ * the record step then, or null when a gravity anchor is needed.
+ */
+function holdsUplift(block: BearingBlock, design: Project['design'], submerged: boolean, upward: number): LazySteps | null {
+  const unitWeight = submerged ? design.concreteUnitWeight - WATER_UNIT_WEIGHT : design.concreteUnitWeight;
+  const weight = unitWeight * block.concreteVolume;
+  if (weight < design.upliftSafetyFactor * upward) return null;
+  return (): CalcStep[] => [{
+    title: 'Upward thrust held by the bearing block’s weight',
+    formula: 'γ·V_block ≥ SF · T_up',
+    inputs: [
+      value('T_up', 'largest upward thrust', upward, 'force', 'momentum balance'),
+      value('SF', 'uplift safety factor', design.upliftSafetyFactor, 'ratio', 'project design'),
+      value('V_block', 'bearing block concrete', block.concreteVolume, 'volume', 'computed'),
+      value('γ', submerged ? 'submerged unit weight of concrete' : 'unit weight of concrete', unitWeight, 'unitWeight', 'project design'),
+    ],
+    result: value('W', 'weight of the block', weight, 'force', 'no separate anchor needed'),
+    reference: 'Weight ≥ SF × upward thrust (DIPRA gravity block rule, from memory)',
+  }];
 }
 
 /** True when the bearing direction runs within ACROSS_TRENCH of a pipe's plan axis. */
 function acrossTrench(direction: Vec3, legs: readonly Leg[]): boolean {
   return legs.some((l) => {
     const plan = horizontal(l.direction);
-    if (Math.hypot(plan[0], plan[1]) < 1e-9) return false;
+    if (horizontalNorm(plan) < 1e-9) return false;
     const a = angleBetween(direction, plan);
     return Math.min(a, 180 - a) < ACROSS_TRENCH;
   });

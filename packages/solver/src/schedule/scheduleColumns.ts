@@ -1,6 +1,7 @@
 import { DISPLAY_UNITS, toDisplay, type Dimension, type UnitSystem } from '../units/conversions.js';
 import { roundForDrawing } from '../units/format.js';
 import type { ScheduleFitting } from './scheduleRows.js';
+import { norm } from '../geometry/vector.js';
 
 /** A column of the tabular schedule: a heading, its display unit, and the cell's value. */
 export interface ScheduleColumn {
@@ -10,7 +11,6 @@ export interface ScheduleColumn {
   cell: (f: ScheduleFitting, caseLabel: (id: string) => string) => number | string | null;
 }
 
-const mag = (v: readonly number[]) => Math.hypot(v[0]!, v[1]!, v[2]!);
 
 /** The schedule's columns, shared by the CSV export, the text table and the app's table. */
 export const SCHEDULE_COLUMNS: readonly ScheduleColumn[] = [
@@ -26,7 +26,7 @@ export const SCHEDULE_COLUMNS: readonly ScheduleColumn[] = [
   { heading: 'Deflection', dimension: 'angle', cell: (f) => f.deflection ?? f.branchAngle },
   { heading: 'Design pressure', dimension: 'pressure', cell: (f) => f.designPressure },
   { heading: 'Governing case', cell: (f, label) => label(f.governingCase) },
-  { heading: 'Thrust', dimension: 'force', cell: (f) => mag(f.thrust) },
+  { heading: 'Thrust', dimension: 'force', cell: (f) => norm(f.thrust) },
   { heading: 'Horizontal thrust', dimension: 'force', cell: (f) => f.horizontalThrust },
   { heading: 'Upward thrust', dimension: 'force', cell: (f) => f.upwardThrust },
   { heading: 'Downward thrust', dimension: 'force', cell: (f) => f.downwardThrust },

@@ -1,4 +1,5 @@
 import { formatSi } from '../units/format.js';
+import { norm } from '../geometry/vector.js';
 import type { UnitSystem } from '../units/conversions.js';
 import { CAUTIONS } from './cautions.js';
 import type { Schedule, ScheduleFitting } from './scheduleRows.js';
@@ -25,7 +26,7 @@ export function scheduleTable(s: Schedule, units: UnitSystem, caseLabel: (id: st
     f.deflection === null ? (f.branchAngle === null ? '' : formatSi(f.branchAngle, 'angle', units)) : formatSi(f.deflection, 'angle', units),
     formatSi(f.designPressure, 'pressure', units),
     caseLabel(f.governingCase),
-    formatSi(Math.hypot(...f.thrust), 'force', units),
+    formatSi(norm(f.thrust), 'force', units),
     restraintSummary(f, units),
     f.warnings.length ? String(f.warnings.length) : '',
   ]);

@@ -46,7 +46,8 @@ export function fittingThrust(
   return loadCases.map((c) => {
     const pressure = pressureAt(c, node.elevation, density);
     const flowFactor = pressurised ? 0 : c.flowFactor;
-    return { caseId: c.id, pressure, ...momentumBalance(legs, pressure, density, flowFactor, pressurised) };
+    const t = momentumBalance(legs, pressure, density, flowFactor, pressurised);
+    return { caseId: c.id, pressure, static: t.static, dynamic: t.dynamic, total: t.total };
   });
 }
 
@@ -76,9 +77,14 @@ export function thrustEnvelope(cases: readonly CaseThrust[]): ThrustEnvelope {
   let upward: Extreme = { force: 0, caseId: null };
   let downward: Extreme = { force: 0, caseId: null };
   let pressure = -Infinity;
+  let largest = -1;
   for (const c of cases) {
     const t = c.total;
-    if (norm(t) > norm(governing.total)) governing = c;
+    const size = norm(t);
+    if (size > largest) {
+      largest = size;
+      governing = c;
+    }
     const h = horizontalNorm(t);
     if (h > horizontal.force) horizontal = { force: h, caseId: c.caseId, direction: [t[0] / h, t[1] / h, 0] };
     if (t[2] > upward.force) upward = { force: t[2], caseId: c.caseId };

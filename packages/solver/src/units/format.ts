@@ -19,16 +19,23 @@ function decimalsFor(value: number, significant: number): number {
   return Math.max(0, significant - 1 - magnitude);
 }
 
+/** Thousands separators on the integer part: "29030.5" → "29,030.5" (no Intl: it is slow to start). */
+function groupThousands(fixed: string): string {
+  const negative = fixed.startsWith('-');
+  const body = negative ? fixed.slice(1) : fixed;
+  const dot = body.indexOf('.');
+  const int = dot < 0 ? body : body.slice(0, dot);
+  const frac = dot < 0 ? '' : body.slice(dot);
+  const grouped = int.replace(/\B(?=(\d{3})+(?!\d))/g, ',');
+  return (negative ? '-' : '') + grouped + frac;
+}
+
 /** Plain number with thousands separators and drawing precision, e.g. 29,030 or 0.765. */
 export function formatNumber(value: number, significant = 3): string {
   if (!Number.isFinite(value)) return '—';
   const rounded = roundForDrawing(value, significant);
-  const decimals = decimalsFor(rounded, significant);
-  const text = rounded.toLocaleString('en-US', {
-    minimumFractionDigits: decimals,
-    maximumFractionDigits: decimals,
-  });
-  return text === '-0' ? '0' : text;
+  const text = groupThousands(rounded.toFixed(decimalsFor(rounded, significant)));
+  return /^-0(\.0*)?$/.test(text) ? text.slice(1) : text;
 }
 
 export interface FormattedQuantity {
@@ -51,7 +58,8 @@ export function formatQuantity(
     symbol = 'kip';
     factor = KIP;
   }
-  const value = formatNumber(si / factor, significant);
+  // Angles read as an engineer writes them: 22.5°, 11.25°, 0.19° — two decimals at most.
+  const value = dim === 'angle' ? String(Math.round((si / factor) * 100) / 100) : formatNumber(si / factor, significant);
   const joined = dim === 'angle' || symbol === '' ? `${value}${symbol}` : `${value} ${symbol}`;
   return { value, unit: symbol, text: joined };
 }
