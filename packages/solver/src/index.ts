@@ -26,3 +26,4 @@ export { SCHEDULE_COLUMNS, columnHeading, columnValue, type ScheduleColumn } fro
 export { CAUTIONS, SHORT_CAUTION } from './schedule/cautions.js';
 export * from './catalog/catalog.js';
 export type { PipeSeries, PipeSize } from './catalog/pipeSeries.js';
+export { proposeTestPressure, type TestProposal, type TestRule, type TestCriterion } from './pressure/testPressure.js';

@@ -1,0 +1,51 @@
+import { useState } from 'react';
+import { TopBar } from './chrome/TopBar.js';
+import { ToolStrip } from './chrome/ToolStrip.js';
+import { NoticeBar } from './chrome/NoticeBar.js';
+import { PlanView } from './plan/PlanView.js';
+import { DetailsPanel } from './panels/DetailsPanel.js';
+import { Drawer } from './panels/Drawer.js';
+import { PrintSheet } from './print/PrintSheet.js';
+import { useActions } from './state/StoreContext.js';
+import { readProjectFile } from './files/projectFile.js';
+
+/** One window: top bar, tool strip, plan, details panel, and the drawer of route-wide views. */
+export function App() {
+  const actions = useActions();
+  const [dropping, setDropping] = useState(false);
+  const [printing, setPrinting] = useState(false);
+  const onDrop = async (e: React.DragEvent) => {
+    e.preventDefault();
+    setDropping(false);
+    const file = e.dataTransfer.files[0];
+    if (!file) return;
+    const r = await readProjectFile(file);
+    if (r.ok) {
+      actions.replaceProject(r.project);
+      actions.notify({ tone: 'info', title: `Opened ${file.name}`, lines: [] });
+    } else actions.notify({ tone: 'error', title: `${file.name} was not opened — your project is unchanged`, lines: r.lines });
+  };
+  return (
+    <div
+      className={`app ${dropping ? 'app-dropping' : ''}`}
+      onDragOver={(e) => {
+        if (e.dataTransfer.types.includes('Files')) {
+          e.preventDefault();
+          setDropping(true);
+        }
+      }}
+      onDragLeave={() => setDropping(false)}
+      onDrop={onDrop}
+    >
+      <TopBar onPrint={() => setPrinting(true)} />
+      <NoticeBar />
+      <main className="workspace">
+        <ToolStrip />
+        <PlanView />
+        <DetailsPanel />
+      </main>
+      <Drawer />
+      {printing && <PrintSheet onClose={() => setPrinting(false)} />}
+    </div>
+  );
+}

@@ -1,0 +1,24 @@
+import { useActions, useApp } from '../state/StoreContext.js';
+
+/** Messages the user must see: a refused file with its problems, a storage failure. */
+export function NoticeBar() {
+  const notice = useApp((s) => s.notice);
+  const actions = useActions();
+  if (!notice) return null;
+  return (
+    <div className={`notice notice-${notice.tone}`} role={notice.tone === 'info' ? 'status' : 'alert'} data-testid="notice">
+      <div className="notice-body">
+        <strong>{notice.title}</strong>
+        {notice.lines.length > 0 && (
+          <ul>
+            {notice.lines.slice(0, 30).map((l, i) => (
+              <li key={i}>{l}</li>
+            ))}
+            {notice.lines.length > 30 && <li>… and {notice.lines.length - 30} more</li>}
+          </ul>
+        )}
+      </div>
+      <button onClick={() => actions.notify(null)} aria-label="Dismiss">×</button>
+    </div>
+  );
+}

@@ -1,0 +1,48 @@
+import { analyse, parseProjectText, problemText, scheduleCsv, scheduleOf, type Project } from '@mainbrace/solver';
+
+/** Largest project file the app opens, bytes: a route of 10,000 fittings is about 5 MB. */
+export const MAX_FILE_BYTES = 20 * 1024 * 1024;
+
+export type OpenResult = { ok: true; project: Project } | { ok: false; lines: string[] };
+
+/** Reads and validates a project file; never throws, and never touches the current project. */
+export async function readProjectFile(file: File): Promise<OpenResult> {
+  if (file.size > MAX_FILE_BYTES) {
+    return { ok: false, lines: [`${file.name}: the file is ${(file.size / 1048576).toFixed(1)} MB; project files over 20 MB are refused`] };
+  }
+  let text: string;
+  try {
+    text = await file.text();
+  } catch (e) {
+    return { ok: false, lines: [`${file.name}: the file could not be read (${(e as Error).message})`] };
+  }
+  const r = parseProjectText(text);
+  return r.ok ? { ok: true, project: r.project } : { ok: false, lines: r.problems.map(problemText) };
+}
+
+/** Offers text to the user as a download. */
+export function download(name: string, text: string, type: string) {
+  const url = URL.createObjectURL(new Blob([text], { type }));
+  const a = document.createElement('a');
+  a.href = url;
+  a.download = name;
+  document.body.appendChild(a);
+  a.click();
+  a.remove();
+  setTimeout(() => URL.revokeObjectURL(url), 1000);
+}
+
+/** A file name from the project name: letters, digits and dashes. */
+export const fileStem = (p: Project) => p.name.replace(/[^\p{L}\p{N}]+/gu, '-').replace(/^-|-$/g, '').toLowerCase() || 'mainbrace-project';
+
+/** The project file as saved: the document itself, two-space JSON. */
+export const projectText = (p: Project) => JSON.stringify(p, null, 2) + '\n';
+
+/** The schedule JSON, the same content as the command line's `schedule --format json`. */
+export const scheduleJsonText = (p: Project) => JSON.stringify(scheduleOf(analyse(p)), null, 2) + '\n';
+
+/** The schedule CSV in the project's display units. */
+export function scheduleCsvText(p: Project): string {
+  const label = (id: string) => p.loadCases.find((c) => c.id === id)?.label ?? id;
+  return scheduleCsv(scheduleOf(analyse(p)), p.units, label);
+}

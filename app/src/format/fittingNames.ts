@@ -1,0 +1,27 @@
+import { formatSi, type FittingAnalysis, type FittingKind, type UnitSystem } from '@mainbrace/solver';
+
+export const KIND_NAME: Record<FittingKind, string> = {
+  bend: 'Bend',
+  reducer: 'Reducer',
+  'reducing-bend': 'Reducing bend',
+  tee: 'Tee',
+  wye: 'Wye',
+  cross: 'Cross',
+  'dead-end': 'Dead end',
+  valve: 'Closed valve',
+  'tie-in': 'Tie-in',
+  straight: 'Straight joint',
+  none: 'Free node',
+};
+
+/** "Bend 45°", "Tee, branch 90°", "Dead end": the fitting as a crew would name it. */
+export function fittingTitle(f: FittingAnalysis, units: UnitSystem): string {
+  const g = f.geometry;
+  const name = KIND_NAME[g.kind];
+  if (g.deflection !== null && g.kind !== 'valve' && g.kind !== 'reducer') return `${name} ${formatSi(g.deflection, 'angle', units)}`;
+  if (g.branchAngle !== null) return `${name}, branch at ${formatSi(g.branchAngle, 'angle', units)}`;
+  return name;
+}
+
+/** Compass bearing, degrees clockwise from north, as a short text: "N 45° E" style is avoided for one number. */
+export const bearingText = (deg: number | null): string => (deg === null ? '—' : `${Math.round(deg)}° from N`);

@@ -1,0 +1,42 @@
+import { SHORT_CAUTION } from '@mainbrace/solver';
+import { useAnalysis, useApp } from '../state/StoreContext.js';
+import { NodeDetails } from './NodeDetails.js';
+import { PipeDetails } from './PipeDetails.js';
+import { FittingResults } from './FittingResults.js';
+import { RouteSummary } from './RouteSummary.js';
+
+/** What is selected — node, pipe or fitting — with its inputs and results; the route summary otherwise. */
+export function DetailsPanel() {
+  const project = useApp((s) => s.project);
+  const selection = useApp((s) => s.selection);
+  const analysis = useAnalysis();
+  const count = selection.nodes.size + selection.pipes.size;
+  let body;
+  if (count === 1 && selection.nodes.size === 1) {
+    const id = [...selection.nodes][0]!;
+    const node = project.nodes.find((n) => n.id === id);
+    const fitting = analysis.byNode.get(id);
+    body = node && (
+      <>
+        {fitting && <FittingResults fitting={fitting} project={project} />}
+        <NodeDetails node={node} project={project} pipeCount={analysis.legs.get(id)?.length ?? 0} />
+      </>
+    );
+  } else if (count === 1) {
+    const pipe = project.pipes.find((p) => p.id === [...selection.pipes][0]);
+    body = pipe && <PipeDetails pipe={pipe} project={project} />;
+  } else if (count > 1) {
+    body = (
+      <section className="inputs">
+        <h3>{count} items selected</h3>
+        <p className="muted">Drag a selected node to move them together, or press Delete to remove them.</p>
+      </section>
+    );
+  } else body = <RouteSummary />;
+  return (
+    <aside className="details" aria-label="Details" data-testid="details">
+      {body}
+      <p className="caution-foot" role="note">{SHORT_CAUTION}</p>
+    </aside>
+  );
+}

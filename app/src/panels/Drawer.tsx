@@ -1,0 +1,58 @@
+import { lazy, Suspense } from 'react';
+import { useActions, useApp } from '../state/StoreContext.js';
+import type { DrawerTab } from '../state/store.js';
+import { ScheduleTable } from './ScheduleTable.js';
+import { CasesPanel } from './CasesPanel.js';
+import { SoilsPanel } from './SoilsPanel.js';
+
+const ProfilePanel = lazy(() => import('./ProfilePanel.js').then((m) => ({ default: m.ProfilePanel })));
+
+const TABS: { tab: DrawerTab; label: string }[] = [
+  { tab: 'schedule', label: 'Schedule' },
+  { tab: 'profile', label: 'Profile' },
+  { tab: 'cases', label: 'Pressure cases' },
+  { tab: 'soils', label: 'Soils & design' },
+];
+
+/** The route-wide views under the plan; it can be raised to fill the window for the schedule. */
+export function Drawer() {
+  const drawer = useApp((s) => s.drawer);
+  const actions = useActions();
+  const heights = ['closed', 'low', 'high', 'full'] as const;
+  const i = heights.indexOf(drawer.height);
+  return (
+    <section className={`drawer drawer-${drawer.height}`} aria-label="Route views">
+      <div className="drawer-tabs" role="tablist">
+        {TABS.map((t) => (
+          <button
+            key={t.tab}
+            role="tab"
+            id={`tab-${t.tab}`}
+            aria-selected={drawer.tab === t.tab && drawer.height !== 'closed'}
+            aria-controls="drawer-body"
+            className={drawer.tab === t.tab && drawer.height !== 'closed' ? 'on' : ''}
+            onClick={() => actions.setDrawer(t.tab)}
+            data-testid={`tab-${t.tab}`}
+          >
+            {t.label}
+          </button>
+        ))}
+        <span className="spacer" />
+        <button title="Lower the drawer" aria-label="Lower the drawer" disabled={i === 0} onClick={() => actions.setDrawerHeight(heights[Math.max(0, i - 1)]!)}>▾</button>
+        <button title="Raise the drawer" aria-label="Raise the drawer" disabled={i === heights.length - 1} onClick={() => actions.setDrawerHeight(heights[Math.min(heights.length - 1, i + 1)]!)} data-testid="drawer-raise">▴</button>
+      </div>
+      {drawer.height !== 'closed' && (
+        <div className="drawer-body" id="drawer-body" role="tabpanel" aria-labelledby={`tab-${drawer.tab}`}>
+          {drawer.tab === 'schedule' && <ScheduleTable />}
+          {drawer.tab === 'profile' && (
+            <Suspense fallback={<p className="muted">Loading the profile…</p>}>
+              <ProfilePanel />
+            </Suspense>
+          )}
+          {drawer.tab === 'cases' && <CasesPanel />}
+          {drawer.tab === 'soils' && <SoilsPanel />}
+        </div>
+      )}
+    </section>
+  );
+}

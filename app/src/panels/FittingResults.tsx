@@ -1,0 +1,98 @@
+import { horizontalNorm, norm, planBearing, type FittingAnalysis, type Project } from '@mainbrace/solver';
+import { show } from '../format/quantity.js';
+import { bearingText, fittingTitle } from '../format/fittingNames.js';
+import { CalcRecordView } from './CalcRecordView.js';
+
+const caseName = (p: Project, id: string) => p.loadCases.find((c) => c.id === id)?.label ?? id;
+
+/** The results of one fitting: thrust per case, the governing case, its restraint and warnings. */
+export function FittingResults({ fitting: f, project }: { fitting: FittingAnalysis; project: Project }) {
+  const u = project.units;
+  const r = f.restraint;
+  const e = f.envelope;
+  return (
+    <section className="results" aria-label={`Results for ${f.tag}`} data-testid="fitting-results">
+      <h3>
+        <span className="tag">{f.tag}</span> {fittingTitle(f, u)}
+      </h3>
+      <dl className="facts">
+        <dt>Chainage</dt>
+        <dd>{show(f.chainage, 'length', u, 4)}</dd>
+        <dt>Design pressure</dt>
+        <dd>{show(e.pressure, 'pressure', u)}</dd>
+        <dt>Governing case</dt>
+        <dd>{caseName(project, e.governing.caseId)}</dd>
+        <dt>Thrust</dt>
+        <dd data-testid="governing-thrust">
+          <strong>{show(norm(e.governing.total), 'force', u)}</strong>, bears {bearingText(e.horizontal.force > 0 ? planBearing(e.horizontal.direction) : null)}
+        </dd>
+      </dl>
+      <table className="cases-table">
+        <thead>
+          <tr>
+            <th>Case</th>
+            <th>Pressure</th>
+            <th>Static</th>
+            <th>Dynamic</th>
+            <th>Total</th>
+            <th>Up (+)</th>
+          </tr>
+        </thead>
+        <tbody>
+          {f.cases.map((c) => (
+            <tr key={c.caseId} className={c.caseId === e.governing.caseId ? 'governing' : ''}>
+              <td>{caseName(project, c.caseId)}{c.caseId === e.governing.caseId ? ' ◆' : ''}</td>
+              <td>{show(c.pressure, 'pressure', u)}</td>
+              <td>{show(norm(c.static), 'force', u)}</td>
+              <td>{show(norm(c.dynamic), 'force', u)}</td>
+              <td>{show(norm(c.total), 'force', u)}</td>
+              <td>{show(c.total[2], 'force', u)}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      <p className="muted small">◆ governing case. Horizontal part {show(horizontalNorm(e.governing.total), 'force', u)}; water in the fitting weighs {show(f.waterWeight, 'force', u)} (not counted).</p>
+      <h4>Restraint</h4>
+      <ul className="restraint">
+        {r.block && (
+          <li data-testid="block">
+            Bearing block <strong>{show(r.block.faceWidth, 'length', u)} wide × {show(r.block.faceHeight, 'length', u)} high</strong>, {show(r.block.depth, 'length', u)} to the bearing face; bearing area {show(r.block.bearingArea, 'area', u)} needed, {show(r.block.faceWidth * r.block.faceHeight, 'area', u)} given; concrete {show(r.block.concreteVolume, 'volume', u)}. Passive resistance {r.block.passiveRatio.toFixed(2)} × the thrust.
+          </li>
+        )}
+        {r.anchor && (
+          <li data-testid="anchor">
+            Gravity anchor <strong>{show(r.anchor.concreteVolume, 'volume', u)}</strong> of concrete ({show(r.anchor.side, 'length', u)} cube){r.anchor.submerged ? ', submerged weight' : ''}.
+          </li>
+        )}
+        {r.trenchBottom && (
+          <li>
+            Trench-bottom bearing {show(r.trenchBottom.bearingArea, 'area', u)}: pad {show(r.trenchBottom.width, 'length', u)} × {show(r.trenchBottom.length, 'length', u)}.
+          </li>
+        )}
+        {r.restrainedLegs.map((l) => (
+          <li key={l.pipe} data-testid="restrained">
+            Restrain joints <strong>{show(l.length, 'length', u)}</strong> along {l.pipe}.
+          </li>
+        ))}
+        {!r.block && !r.anchor && !r.trenchBottom && r.restrainedLegs.length === 0 && <li>None needed.</li>}
+      </ul>
+      {f.warnings.length > 0 && (
+        <>
+          <h4>Warnings</h4>
+          <ul className="warnings" data-testid="warnings">
+            {f.warnings.map((w, i) => (
+              <li key={i}>
+                <span className="warn-mark" aria-hidden="true">!</span>
+                {w}
+              </li>
+            ))}
+          </ul>
+        </>
+      )}
+      <details className="record-box">
+        <summary>Calculation record</summary>
+        <CalcRecordView fitting={f} units={u} />
+      </details>
+    </section>
+  );
+}

@@ -1,0 +1,46 @@
+import { norm } from '@mainbrace/solver';
+import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
+import { show } from '../format/quantity.js';
+
+/** Which case governs how many fittings, and the fittings with the largest thrust and tightest margins. */
+export function GoverningList() {
+  const project = useApp((s) => s.project);
+  const analysis = useAnalysis();
+  const actions = useActions();
+  const u = project.units;
+  const counts = new Map<string, number>();
+  for (const f of analysis.fittings) counts.set(f.envelope.governing.caseId, (counts.get(f.envelope.governing.caseId) ?? 0) + 1);
+  const largest = [...analysis.fittings].sort((a, b) => norm(b.envelope.governing.total) - norm(a.envelope.governing.total)).slice(0, 5);
+  const tight = analysis.fittings
+    .filter((f) => f.restraint.block)
+    .sort((a, b) => a.restraint.block!.passiveRatio - b.restraint.block!.passiveRatio)
+    .slice(0, 5);
+  return (
+    <div className="governing" data-testid="governing">
+      <h4>Governing case</h4>
+      <ul>
+        {project.loadCases.map((c) => (
+          <li key={c.id}>
+            {c.label ?? c.id}: {counts.get(c.id) ?? 0} fittings
+          </li>
+        ))}
+      </ul>
+      <h4>Largest thrust</h4>
+      <ol>
+        {largest.map((f) => (
+          <li key={f.node.id}>
+            <button className="link" onClick={() => actions.selectNode(f.node.id)}>{f.tag}</button> {show(norm(f.envelope.governing.total), 'force', u)}
+          </li>
+        ))}
+      </ol>
+      <h4>Tightest passive margin</h4>
+      <ol>
+        {tight.map((f) => (
+          <li key={f.node.id}>
+            <button className="link" onClick={() => actions.selectNode(f.node.id)}>{f.tag}</button> {f.restraint.block!.passiveRatio.toFixed(2)} × thrust
+          </li>
+        ))}
+      </ol>
+    </div>
+  );
+}

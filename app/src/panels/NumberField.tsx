@@ -1,0 +1,78 @@
+import { useEffect, useId, useState } from 'react';
+import type { Dimension, UnitSystem } from '@mainbrace/solver';
+import { editable, parseTyped, show, unitOf } from '../format/quantity.js';
+
+export interface NumberFieldProps {
+  label: string;
+  /** SI value */
+  value: number;
+  dimension: Dimension;
+  units: UnitSystem;
+  /** receives the new SI value; only called with a value that passed the checks */
+  onCommit: (si: number) => void;
+  /** SI bounds; a value outside is refused with a message naming the bound */
+  min?: number;
+  max?: number;
+  /** the bound itself is not allowed */
+  exclusiveMin?: boolean;
+  hint?: string;
+  testId?: string;
+}
+
+/**
+ * A number typed in display units with its unit beside it. A bad entry is refused at the field with a
+ * message saying what was expected, and the document keeps its value. Enter or leaving the field
+ * commits; Escape restores the value.
+ */
+export function NumberField(p: NumberFieldProps) {
+  const id = useId();
+  const [text, setText] = useState(editable(p.value, p.dimension, p.units));
+  const [error, setError] = useState<string | null>(null);
+  useEffect(() => {
+    setText(editable(p.value, p.dimension, p.units));
+    setError(null);
+  }, [p.value, p.dimension, p.units]);
+
+  const commit = () => {
+    const r = parseTyped(text, p.dimension, p.units);
+    if (!r.ok) return setError(`${p.label}: ${r.message}`);
+    if (p.min !== undefined && (p.exclusiveMin ? r.si <= p.min : r.si < p.min)) {
+      return setError(`${p.label}: must be ${p.exclusiveMin ? 'more than' : 'at least'} ${show(p.min, p.dimension, p.units, 4)}`);
+    }
+    if (p.max !== undefined && r.si > p.max) return setError(`${p.label}: must be at most ${show(p.max, p.dimension, p.units, 4)}`);
+    setError(null);
+    if (Math.abs(r.si - p.value) > 1e-12 * Math.max(1, Math.abs(p.value))) p.onCommit(r.si);
+  };
+  const unit = unitOf(p.dimension, p.units);
+  return (
+    <div className={`field ${error ? 'field-bad' : ''}`}>
+      <label htmlFor={id}>{p.label}</label>
+      <div className="field-input">
+        <input
+          id={id}
+          inputMode="decimal"
+          value={text}
+          aria-invalid={error !== null}
+          aria-describedby={error ? `${id}-err` : undefined}
+          data-testid={p.testId}
+          onChange={(e) => setText(e.target.value)}
+          onBlur={commit}
+          onKeyDown={(e) => {
+            if (e.key === 'Enter') commit();
+            if (e.key === 'Escape') {
+              setText(editable(p.value, p.dimension, p.units));
+              setError(null);
+            }
+          }}
+        />
+        {unit && <span className="unit">{unit}</span>}
+      </div>
+      {error && (
+        <div className="field-error" id={`${id}-err`} role="alert">
+          {error}
+        </div>
+      )}
+      {p.hint && !error && <div className="field-hint">{p.hint}</div>}
+    </div>
+  );
+}

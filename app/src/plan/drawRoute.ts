@@ -1,0 +1,278 @@
+import { formatSi, type UnitSystem } from '@mainbrace/solver';
+import type { Scene, SceneFitting } from './planScene.js';
+import { toScreen, type Viewport } from '../state/viewport.js';
+import { MATERIAL_DASH, PALETTE, pipeWidth } from './palette.js';
+
+type Ctx = CanvasRenderingContext2D;
+
+/** Longest thrust arrow on the plan, px; every arrow is scaled to the largest force (one scale). */
+export const ARROW_PX = 72;
+
+function path(ctx: Ctx, v: Viewport, pts: readonly { x: number; y: number }[]) {
+  ctx.beginPath();
+  pts.forEach((p, i) => {
+    const s = toScreen(v, p);
+    if (i === 0) ctx.moveTo(s.sx, s.sy);
+    else ctx.lineTo(s.sx, s.sy);
+  });
+  ctx.closePath();
+}
+
+/** Concrete hatching: 45° lines clipped to the polygon, as drawings mark concrete. */
+function hatch(ctx: Ctx, v: Viewport, pts: readonly { x: number; y: number }[], color: string) {
+  const s = pts.map((p) => toScreen(v, p));
+  const xs = s.map((p) => p.sx), ys = s.map((p) => p.sy);
+  const x0 = Math.min(...xs), x1 = Math.max(...xs), y0 = Math.min(...ys), y1 = Math.max(...ys);
+  ctx.save();
+  path(ctx, v, pts);
+  ctx.clip();
+  ctx.strokeStyle = color;
+  ctx.lineWidth = 0.8;
+  ctx.beginPath();
+  for (let k = x0 - (y1 - y0); k < x1; k += 5) {
+    ctx.moveTo(k, y1);
+    ctx.lineTo(k + (y1 - y0), y0);
+  }
+  ctx.stroke();
+  ctx.restore();
+}
+
+/** Blocks (hatched), anchors (crossed), trench pads (dashed) and restrained bands, under the pipes. */
+export function drawRestraints(ctx: Ctx, v: Viewport, scene: Scene) {
+  for (const poly of scene.polygons) {
+    if (poly.kind === 'restrained') {
+      path(ctx, v, poly.points);
+      ctx.fillStyle = PALETTE.restrained;
+      ctx.fill();
+      continue;
+    }
+    path(ctx, v, poly.points);
+    ctx.fillStyle = PALETTE.blockFill;
+    ctx.fill();
+    if (poly.kind === 'block') hatch(ctx, v, poly.points, PALETTE.block);
+    path(ctx, v, poly.points);
+    ctx.setLineDash(poly.kind === 'pad' ? [4, 3] : []);
+    ctx.strokeStyle = poly.kind === 'anchor' ? PALETTE.anchor : PALETTE.block;
+    ctx.lineWidth = poly.kind === 'anchor' ? 1.6 : 1.1;
+    ctx.stroke();
+    ctx.setLineDash([]);
+    if (poly.kind === 'anchor') {
+      const [a, b, c, d] = poly.points.map((p) => toScreen(v, p));
+      ctx.beginPath();
+      ctx.moveTo(a!.sx, a!.sy);
+      ctx.lineTo(c!.sx, c!.sy);
+      ctx.moveTo(b!.sx, b!.sy);
+      ctx.lineTo(d!.sx, d!.sy);
+      ctx.stroke();
+    }
+  }
+}
+
+/** Pipes: blue, weighted by diameter, dashed by material; selected pipes darker with a halo. */
+export function drawPipes(ctx: Ctx, v: Viewport, scene: Scene) {
+  ctx.lineCap = 'round';
+  for (const p of scene.pipes) {
+    const a = toScreen(v, p.a), b = toScreen(v, p.b);
+    const w = pipeWidth(p.outsideDiameter);
+    if (p.selected) {
+      ctx.strokeStyle = PALETTE.selection;
+      ctx.lineWidth = w + 6;
+      ctx.globalAlpha = 0.35;
+      ctx.beginPath();
+      ctx.moveTo(a.sx, a.sy);
+      ctx.lineTo(b.sx, b.sy);
+      ctx.stroke();
+      ctx.globalAlpha = 1;
+    }
+    if (p.material === 'steel') {
+      ctx.strokeStyle = PALETTE.ink;
+      ctx.lineWidth = w + 2;
+      ctx.beginPath();
+      ctx.moveTo(a.sx, a.sy);
+      ctx.lineTo(b.sx, b.sy);
+      ctx.stroke();
+    }
+    ctx.strokeStyle = p.selected ? PALETTE.pipeSelected : PALETTE.pipe;
+    ctx.lineWidth = w;
+    ctx.setLineDash(MATERIAL_DASH[p.material].map((d) => d * w));
+    ctx.beginPath();
+    ctx.moveTo(a.sx, a.sy);
+    ctx.lineTo(b.sx, b.sy);
+    ctx.stroke();
+  }
+  ctx.setLineDash([]);
+}
+
+/** A fitting's symbol, oriented along its first pipe: our own small glyph per kind. */
+function symbol(ctx: Ctx, f: SceneFitting, x: number, y: number) {
+  const r = 6;
+  const ax = f.axis.x, ay = -f.axis.y; // screen y is down
+  const l = Math.hypot(ax, ay) || 1;
+  const ux = ax / l, uy = ay / l, nx = -uy, ny = ux;
+  ctx.lineWidth = 1.6;
+  ctx.strokeStyle = PALETTE.ink;
+  ctx.fillStyle = PALETTE.paper;
+  ctx.beginPath();
+  switch (f.kind) {
+    case 'bend':
+      ctx.arc(x, y, r * 0.8, 0, Math.PI * 2);
+      ctx.fill();
+      ctx.stroke();
+      break;
+    case 'reducer':
+    case 'reducing-bend':
+      ctx.moveTo(x + ux * r + nx * r * 0.45, y + uy * r + ny * r * 0.45);
+      ctx.lineTo(x - ux * r + nx * r, y - uy * r + ny * r);
+      ctx.lineTo(x - ux * r - nx * r, y - uy * r - ny * r);
+      ctx.lineTo(x + ux * r - nx * r * 0.45, y + uy * r - ny * r * 0.45);
+      ctx.closePath();
+      ctx.fill();
+      ctx.stroke();
+      if (f.kind === 'reducing-bend') {
+        ctx.beginPath();
+        ctx.arc(x, y, 2, 0, Math.PI * 2);
+        ctx.fillStyle = PALETTE.ink;
+        ctx.fill();
+      }
+      break;
+    case 'tee':
+    case 'wye':
+    case 'cross':
+      ctx.rect(x - r, y - r, 2 * r, 2 * r);
+      ctx.fill();
+      ctx.stroke();
+      ctx.beginPath();
+      ctx.fillStyle = PALETTE.ink;
+      ctx.font = 'bold 9px system-ui, sans-serif';
+      ctx.textAlign = 'center';
+      ctx.textBaseline = 'middle';
+      ctx.fillText(f.kind === 'tee' ? 'T' : f.kind === 'wye' ? 'Y' : '+', x, y + 0.5);
+      break;
+    case 'dead-end':
+      ctx.lineWidth = 3.2;
+      ctx.moveTo(x + nx * r * 1.2, y + ny * r * 1.2);
+      ctx.lineTo(x - nx * r * 1.2, y - ny * r * 1.2);
+      ctx.stroke();
+      break;
+    case 'valve':
+      ctx.moveTo(x - ux * r + nx * r * 0.8, y - uy * r + ny * r * 0.8);
+      ctx.lineTo(x + ux * r - nx * r * 0.8, y + uy * r - ny * r * 0.8);
+      ctx.lineTo(x + ux * r + nx * r * 0.8, y + uy * r + ny * r * 0.8);
+      ctx.lineTo(x - ux * r - nx * r * 0.8, y - uy * r - ny * r * 0.8);
+      ctx.closePath();
+      ctx.fillStyle = PALETTE.ink;
+      ctx.fill();
+      break;
+    default:
+      ctx.arc(x, y, 3, 0, Math.PI * 2);
+      ctx.fill();
+      ctx.stroke();
+  }
+}
+
+/** Haloed text: legible over pipes and hatching. */
+export function label(ctx: Ctx, text: string, x: number, y: number, color: string = PALETTE.ink, font = '600 11px system-ui, sans-serif') {
+  ctx.font = font;
+  ctx.textAlign = 'left';
+  ctx.textBaseline = 'middle';
+  ctx.lineWidth = 3;
+  ctx.strokeStyle = PALETTE.halo;
+  ctx.strokeText(text, x, y);
+  ctx.fillStyle = color;
+  ctx.fillText(text, x, y);
+}
+
+/** Keeps labels apart: a label whose spot is taken by an earlier one is skipped. */
+function declutter(cell = 26) {
+  const taken = new Set<string>();
+  return (x: number, y: number) => {
+    const key = `${Math.round(x / cell)},${Math.round(y / cell)}`;
+    if (taken.has(key)) return false;
+    taken.add(key);
+    return true;
+  };
+}
+
+/** Fitting symbols, tags and warning markers (a triangle with "!", so not by colour alone). */
+export function drawFittings(ctx: Ctx, v: Viewport, scene: Scene) {
+  const free = declutter();
+  for (const n of scene.plainNodes) {
+    const s = toScreen(v, n.at);
+    ctx.beginPath();
+    ctx.arc(s.sx, s.sy, n.tieIn ? 4.5 : 3, 0, Math.PI * 2);
+    ctx.fillStyle = n.selected ? PALETTE.selection : n.tieIn ? PALETTE.paper : PALETTE.pipe;
+    ctx.fill();
+    ctx.strokeStyle = PALETTE.ink;
+    ctx.lineWidth = 1.2;
+    ctx.stroke();
+    if (n.tieIn && free(s.sx + 8, s.sy - 10)) label(ctx, 'tie-in', s.sx + 8, s.sy - 10, PALETTE.gridLabel, '10px system-ui, sans-serif');
+  }
+  for (const f of scene.fittings) {
+    const s = toScreen(v, f.at);
+    if (f.selected) {
+      ctx.beginPath();
+      ctx.arc(s.sx, s.sy, 11, 0, Math.PI * 2);
+      ctx.strokeStyle = PALETTE.selection;
+      ctx.lineWidth = 3;
+      ctx.stroke();
+    }
+    symbol(ctx, f, s.sx, s.sy);
+    const tx = s.sx + 9, ty = s.sy - 12;
+    if (free(tx, ty) || f.selected) {
+      label(ctx, f.tag, tx, ty);
+      if (f.warned) {
+        const wx = tx + ctx.measureText(f.tag).width + 10;
+        ctx.beginPath();
+        ctx.moveTo(wx, ty - 6);
+        ctx.lineTo(wx + 6.5, ty + 5.5);
+        ctx.lineTo(wx - 6.5, ty + 5.5);
+        ctx.closePath();
+        ctx.fillStyle = PALETTE.warning;
+        ctx.fill();
+        ctx.strokeStyle = PALETTE.ink;
+        ctx.lineWidth = 1;
+        ctx.stroke();
+        ctx.fillStyle = PALETTE.ink;
+        ctx.font = 'bold 8px system-ui, sans-serif';
+        ctx.textAlign = 'center';
+        ctx.fillText('!', wx, ty + 1.5);
+      }
+    }
+  }
+}
+
+/** Thrust arrows from each fitting in the direction the water pushes it, one force scale for the plan. */
+export function drawArrows(ctx: Ctx, v: Viewport, scene: Scene, units: UnitSystem) {
+  if (scene.largestForce <= 0) return;
+  const free = declutter(30);
+  for (const a of scene.arrows) {
+    const s = toScreen(v, a.at);
+    const length = a.horizontal > 0 ? Math.max(10, (ARROW_PX * a.horizontal) / scene.largestForce) : 0;
+    const ux = a.direction.x, uy = -a.direction.y;
+    const ex = s.sx + ux * length, ey = s.sy + uy * length;
+    ctx.strokeStyle = PALETTE.thrust;
+    ctx.fillStyle = PALETTE.thrust;
+    ctx.lineWidth = 2.2;
+    if (length > 0) {
+      ctx.beginPath();
+      ctx.moveTo(s.sx, s.sy);
+      ctx.lineTo(ex - ux * 6, ey - uy * 6);
+      ctx.stroke();
+      ctx.beginPath();
+      ctx.moveTo(ex, ey);
+      ctx.lineTo(ex - ux * 9 - uy * 4.5, ey - uy * 9 + ux * 4.5);
+      ctx.lineTo(ex - ux * 9 + uy * 4.5, ey - uy * 9 - ux * 4.5);
+      ctx.closePath();
+      ctx.fill();
+    }
+    const total = Math.hypot(a.horizontal, a.vertical);
+    let text = formatSi(a.horizontal, 'force', units);
+    if (Math.abs(a.vertical) > 0.02 * total) text += `  ${a.vertical > 0 ? '↑' : '↓'} ${formatSi(Math.abs(a.vertical), 'force', units)}`;
+    const lx = ex + (ux >= 0 ? 4 : -4), ly = ey + (uy >= 0 ? 9 : -9);
+    if (free(lx, ly)) {
+      ctx.font = '600 10.5px system-ui, sans-serif';
+      const w = ctx.measureText(text).width;
+      label(ctx, text, ux >= 0 ? lx : lx - w, ly, PALETTE.thrust, '600 10.5px system-ui, sans-serif');
+    }
+  }
+}

@@ -1,0 +1,137 @@
+import { horizontalNorm, norm, type Analysis, type FittingKind, type Material, type Project, type Vec3 } from '@mainbrace/solver';
+import type { PlanPoint } from '../state/documentEdits.js';
+import type { CaseView, Selection } from '../state/store.js';
+
+export interface ScenePipe {
+  id: string;
+  a: PlanPoint;
+  b: PlanPoint;
+  outsideDiameter: number;
+  material: Material;
+  selected: boolean;
+}
+
+export interface SceneFitting {
+  node: string;
+  tag: string;
+  kind: FittingKind;
+  at: PlanPoint;
+  /** plan direction of the first pipe, for orienting the symbol */
+  axis: PlanPoint;
+  warned: boolean;
+  selected: boolean;
+}
+
+export interface SceneArrow {
+  node: string;
+  at: PlanPoint;
+  /** unit plan vector the water pushes the fitting */
+  direction: PlanPoint;
+  /** N, horizontal part shown by the arrow's length */
+  horizontal: number;
+  /** N, vertical part (up +), shown in the label */
+  vertical: number;
+}
+
+/** A plan polygon in metres: bearing blocks, anchors, trench pads and restrained bands. */
+export interface ScenePolygon {
+  node: string;
+  kind: 'block' | 'anchor' | 'pad' | 'restrained';
+  points: PlanPoint[];
+}
+
+export interface Scene {
+  pipes: ScenePipe[];
+  fittings: SceneFitting[];
+  arrows: SceneArrow[];
+  polygons: ScenePolygon[];
+  /** N, the largest arrow force, for the one arrow scale of the plan */
+  largestForce: number;
+  /** plan positions of free nodes and tie-ins (no fitting), so they can be picked */
+  plainNodes: { id: string; at: PlanPoint; tieIn: boolean; selected: boolean }[];
+}
+
+const plan = (v: Vec3): PlanPoint => ({ x: v[0], y: v[1] });
+
+/** A rectangle from a centre line (p → q) and a width, as four plan points. */
+function strip(p: PlanPoint, q: PlanPoint, width: number): PlanPoint[] {
+  const dx = q.x - p.x, dy = q.y - p.y;
+  const l = Math.hypot(dx, dy) || 1;
+  const nx = (-dy / l) * (width / 2), ny = (dx / l) * (width / 2);
+  return [
+    { x: p.x + nx, y: p.y + ny },
+    { x: q.x + nx, y: q.y + ny },
+    { x: q.x - nx, y: q.y - ny },
+    { x: p.x - nx, y: p.y - ny },
+  ];
+}
+
+/** The thrust the plan shows at a fitting for the chosen view: one case's total, or the governing one. */
+function shownThrust(f: Analysis['fittings'][number], view: CaseView): Vec3 {
+  if (view.kind === 'case') return f.cases.find((c) => c.caseId === view.id)?.total ?? f.envelope.governing.total;
+  return f.envelope.governing.total;
+}
+
+/**
+ * Everything the plan draws, in plan metres: a pure function of the document, its analysis, the
+ * case shown, the selection and any nodes being dragged (drawn where they are, without results).
+ */
+export function planScene(project: Project, analysis: Analysis | null, view: CaseView, selection: Selection, preview: ReadonlyMap<string, PlanPoint> | null): Scene {
+  const where = new Map<string, PlanPoint>(project.nodes.map((n) => [n.id, preview?.get(n.id) ?? { x: n.x, y: n.y }]));
+  const pipes: ScenePipe[] = project.pipes.map((p) => ({
+    id: p.id,
+    a: where.get(p.from)!,
+    b: where.get(p.to)!,
+    outsideDiameter: p.outsideDiameter,
+    material: p.material,
+    selected: selection.pipes.has(p.id),
+  }));
+  const fittings: SceneFitting[] = [];
+  const arrows: SceneArrow[] = [];
+  const polygons: ScenePolygon[] = [];
+  let largestForce = 0;
+  const withFitting = new Set<string>();
+  for (const f of analysis?.fittings ?? []) {
+    const id = f.node.id;
+    withFitting.add(id);
+    const at = where.get(id)!;
+    const axis = f.legs[0] ? plan(f.legs[0].direction) : { x: 1, y: 0 };
+    fittings.push({ node: id, tag: f.tag, kind: f.geometry.kind, at, axis, warned: f.warnings.length > 0, selected: selection.nodes.has(id) });
+    if (preview?.has(id)) continue; // results follow on drop
+    const t = shownThrust(f, view);
+    const h = horizontalNorm(t);
+    if (norm(t) > 0) {
+      arrows.push({ node: id, at, direction: h > 0 ? { x: t[0] / h, y: t[1] / h } : { x: 0, y: 0 }, horizontal: h, vertical: t[2] });
+      largestForce = Math.max(largestForce, h);
+    }
+    const r = f.restraint;
+    const od = Math.max(...f.legs.map((l) => l.pipe.outsideDiameter));
+    if (r.block) {
+      const d = plan(r.block.direction);
+      const p = { x: at.x + (d.x * od) / 2, y: at.y + (d.y * od) / 2 };
+      const q = { x: p.x + d.x * r.block.depth, y: p.y + d.y * r.block.depth };
+      polygons.push({ node: id, kind: 'block', points: strip(p, q, r.block.faceWidth) });
+    }
+    if (r.anchor) {
+      const s = r.anchor.side / 2;
+      polygons.push({ node: id, kind: 'anchor', points: [{ x: at.x - s, y: at.y - s }, { x: at.x + s, y: at.y - s }, { x: at.x + s, y: at.y + s }, { x: at.x - s, y: at.y + s }] });
+    }
+    if (r.trenchBottom && f.legs[0]) {
+      const d = plan(f.legs[0].direction);
+      const half = r.trenchBottom.length / 2;
+      polygons.push({ node: id, kind: 'pad', points: strip({ x: at.x - d.x * half, y: at.y - d.y * half }, { x: at.x + d.x * half, y: at.y + d.y * half }, r.trenchBottom.width) });
+    }
+    for (const leg of r.restrainedLegs) {
+      const l = f.legs.find((x) => x.pipe.id === leg.pipe);
+      if (!l) continue;
+      const d = plan(l.direction);
+      const planLength = Math.min(leg.length, l.length) * Math.hypot(d.x, d.y);
+      const dir = { x: d.x / (Math.hypot(d.x, d.y) || 1), y: d.y / (Math.hypot(d.x, d.y) || 1) };
+      polygons.push({ node: id, kind: 'restrained', points: strip(at, { x: at.x + dir.x * planLength, y: at.y + dir.y * planLength }, l.pipe.outsideDiameter * 3) });
+    }
+  }
+  const plainNodes = project.nodes
+    .filter((n) => !withFitting.has(n.id))
+    .map((n) => ({ id: n.id, at: where.get(n.id)!, tieIn: n.end === 'tie-in', selected: selection.nodes.has(n.id) }));
+  return { pipes, fittings, arrows, polygons, largestForce, plainNodes };
+}

@@ -1,0 +1,147 @@
+import { useMemo } from 'react';
+import { CAUTIONS, calculationRecord, norm, restraintSummary, scheduleOf } from '@mainbrace/solver';
+import { useAnalysis, useApp } from '../state/StoreContext.js';
+import { show } from '../format/quantity.js';
+import { bearingText, fittingTitle, KIND_NAME } from '../format/fittingNames.js';
+import { CalcRecordView } from '../panels/CalcRecordView.js';
+
+/**
+ * The printable fitting schedule: its own layout (landscape sheet), shown as a preview over the app
+ * and alone on paper. Project, date, units, design basis, the schedule, cautions, and an appendix
+ * with each fitting's calculation record.
+ */
+export function PrintSheet({ onClose }: { onClose: () => void }) {
+  const project = useApp((s) => s.project);
+  const analysis = useAnalysis();
+  const schedule = useMemo(() => scheduleOf(analysis), [analysis]);
+  const u = project.units;
+  const d = project.design;
+  const today = new Date().toISOString().slice(0, 10);
+  const caseLabel = (id: string) => project.loadCases.find((c) => c.id === id)?.label ?? id;
+  const concrete = schedule.fittings.reduce((v, f) => v + (f.restraint.block?.concreteVolume ?? 0) + (f.restraint.anchor?.concreteVolume ?? 0), 0);
+  return (
+    <div className="print-preview" data-testid="print-sheet">
+      <div className="print-toolbar no-print">
+        <button onClick={() => window.print()}>Print</button>
+        <button onClick={onClose}>Back to the plan</button>
+        <span className="muted">Landscape; the schedule, then the calculation of every fitting.</span>
+      </div>
+      <article className="sheet">
+        <header className="sheet-head">
+          <div>
+            <div className="sheet-kicker">Fitting schedule — thrust restraint</div>
+            <h1>{project.name}</h1>
+          </div>
+          <dl>
+            <dt>Date</dt>
+            <dd>{today}</dd>
+            <dt>Units</dt>
+            <dd>{u === 'si' ? 'SI (kN, kPa, m, m³)' : 'US customary (lbf/kip, psi, ft, yd³)'}</dd>
+            <dt>Fittings</dt>
+            <dd>{schedule.fittings.length}</dd>
+          </dl>
+        </header>
+        <section className="sheet-caution" role="note">
+          <strong>Design aid only.</strong> {CAUTIONS[0]} {CAUTIONS[1]}
+        </section>
+        <section className="sheet-basis">
+          <h2>Design basis</h2>
+          <div className="basis-grid">
+            <table>
+              <thead>
+                <tr><th>Case</th><th>Pressure</th><th>at datum</th><th>Flow factor</th></tr>
+              </thead>
+              <tbody>
+                {project.loadCases.map((c) => (
+                  <tr key={c.id}>
+                    <td>{c.label ?? c.id}</td>
+                    <td>{show(c.pressure, 'pressure', u)}</td>
+                    <td>{c.datumElevation === undefined ? 'every node' : show(c.datumElevation, 'elevation', u, 4)}</td>
+                    <td>{c.flowFactor}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+            <table>
+              <thead>
+                <tr><th>Soil</th><th>Bearing</th><th>γ</th><th>φ</th><th>c</th></tr>
+              </thead>
+              <tbody>
+                {project.soils.map((s) => (
+                  <tr key={s.id}>
+                    <td>{s.label ?? s.id}{s.source ? <div className="small muted">{s.source}</div> : null}</td>
+                    <td>{show(s.bearing, 'stress', u)}</td>
+                    <td>{show(s.unitWeight, 'unitWeight', u)}</td>
+                    <td>{show(s.frictionAngle, 'angle', u)}</td>
+                    <td>{show(s.cohesion, 'stress', u)}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+            <ul className="basis-list">
+              <li>Safety factors: bearing {d.bearingSafetyFactor}, uplift {d.upliftSafetyFactor}, restrained joints {d.restraintSafetyFactor}</li>
+              <li>Pressure acts on the {d.thrustArea} diameter; water {show(project.water.density, 'density', u)}</li>
+              <li>Concrete {show(d.concreteUnitWeight, 'unitWeight', u)}; blocks {show(d.blockDepth, 'length', u)} deep to the bearing face</li>
+              <li>Groundwater {d.groundwaterElevation === null ? 'below every block' : `at ${show(d.groundwaterElevation, 'elevation', u, 4)}`}</li>
+              <li>Thrust by the steady momentum balance at each fitting; bearing area A = SF·T/σ; anchors W ≥ SF·T_up</li>
+            </ul>
+          </div>
+        </section>
+        <section>
+          <h2>Schedule</h2>
+          <table className="sheet-schedule">
+            <thead>
+              <tr>
+                <th>Tag</th><th>Chainage</th><th>Fitting</th><th>Pipe OD</th><th>Design pressure</th><th>Governs</th><th>Thrust</th><th>Bears</th><th>Soil</th><th>Restraint</th><th>Warnings</th>
+              </tr>
+            </thead>
+            <tbody>
+              {schedule.fittings.map((f) => (
+                <tr key={f.node}>
+                  <td className="tag">{f.tag}</td>
+                  <td className="num">{show(f.chainage, 'length', u, 4)}</td>
+                  <td>{KIND_NAME[f.kind]}{f.deflection !== null && f.kind !== 'valve' && f.kind !== 'reducer' ? ` ${show(f.deflection, 'angle', u)}` : ''}</td>
+                  <td className="num">{[...new Set(f.pipes.map((p) => show(p.outsideDiameter, 'diameter', u)))].join(' / ')}</td>
+                  <td className="num">{show(f.designPressure, 'pressure', u)}</td>
+                  <td>{caseLabel(f.governingCase)}</td>
+                  <td className="num strong">{show(norm(f.thrust), 'force', u)}</td>
+                  <td>{bearingText(f.bearingDirection)}</td>
+                  <td>{project.soils.find((s) => s.id === f.soil)?.label ?? f.soil}</td>
+                  <td>{restraintSummary(f, u)}</td>
+                  <td className="small">{f.warnings.join(' ')}</td>
+                </tr>
+              ))}
+            </tbody>
+            <tfoot>
+              <tr>
+                <td colSpan={9}>Total concrete in blocks and anchors</td>
+                <td className="strong">{show(concrete, 'volume', u)}</td>
+                <td />
+              </tr>
+            </tfoot>
+          </table>
+        </section>
+        <section className="sheet-cautions">
+          <h2>Cautions</h2>
+          <ol>
+            {CAUTIONS.map((c) => (
+              <li key={c}>{c}</li>
+            ))}
+          </ol>
+        </section>
+        <section className="appendix">
+          <h2>Appendix — calculation of each fitting</h2>
+          {analysis.fittings.map((f) => (
+            <div className="appendix-fitting" key={f.node.id}>
+              <h3>
+                {f.tag} — {fittingTitle(f, u)} (node {f.node.id}
+                {f.node.label ? `, ${f.node.label}` : ''})
+              </h3>
+              {calculationRecord(f).length > 0 && <CalcRecordView fitting={f} units={u} />}
+            </div>
+          ))}
+        </section>
+      </article>
+    </div>
+  );
+}

@@ -1,0 +1,126 @@
+import { parseProject, type LoadCase, type Pipe, type Project, type ProjectNode, type Soil } from '@mainbrace/solver';
+import type { AppState, AppStore, CaseView, DrawerTab, Selection, ToolName } from './store.js';
+import { EMPTY_SELECTION } from './store.js';
+import { addRoute, deleteItems, moveNodes, updateNode, updatePipe, type PipeSpec, type PlanPoint, type RouteEnd } from './documentEdits.js';
+import type { Viewport } from './viewport.js';
+import type { DrawState } from '../tools/drawTool.js';
+
+/** Keeps a selection to ids that still exist (after undo, delete or open). */
+function prune(sel: Selection, p: Project): Selection {
+  const nodes = new Set(p.nodes.map((n) => n.id));
+  const pipes = new Set(p.pipes.map((x) => x.id));
+  return { nodes: new Set([...sel.nodes].filter((id) => nodes.has(id))), pipes: new Set([...sel.pipes].filter((id) => pipes.has(id))) };
+}
+
+/**
+ * Every user intent as a named action. Edits of the document go through `edit` and are undoable;
+ * the rest (view, tool, selection) change the app state only and leave no undo step.
+ */
+export function createActions(store: AppStore) {
+  const get = store.getState;
+  const set = (patch: Partial<AppState>) => store.setState(patch);
+  /** An undoable edit: a new document from the old one. */
+  const edit = (change: (p: Project) => Project) => {
+    const before = get().project;
+    const after = change(before);
+    if (after !== before) set({ project: after, selection: prune(get().selection, after) });
+  };
+  const history = () => store.temporal.getState();
+  let liveStart: Project | null = null;
+
+  return {
+    // ——— document edits (undoable)
+    addRun: (start: RouteEnd, vertices: PlanPoint[], end: RouteEnd | null) => edit((p) => addRoute(p, start, vertices, end, get().pipeSpec)),
+    moveNodes: (moves: ReadonlyMap<string, PlanPoint>) => {
+      set({ dragPreview: null });
+      edit((p) => moveNodes(p, moves));
+    },
+    deleteSelection: () => {
+      const { nodes, pipes } = get().selection;
+      if (nodes.size + pipes.size === 0) return;
+      edit((p) => deleteItems(p, nodes, pipes));
+      set({ selection: EMPTY_SELECTION });
+    },
+    updateNode: (id: string, patch: Partial<ProjectNode>) => edit((p) => updateNode(p, id, patch)),
+    updatePipe: (id: string, patch: Partial<Pipe>) => edit((p) => updatePipe(p, id, patch)),
+    renameProject: (name: string) => edit((p) => ({ ...p, name })),
+    setUnits: (units: Project['units']) => edit((p) => (p.units === units ? p : { ...p, units })),
+    updateDesign: (patch: Partial<Project['design']>) => edit((p) => ({ ...p, design: { ...p.design, ...patch } })),
+    setWaterDensity: (density: number) => edit((p) => ({ ...p, water: { density } })),
+    updateCase: (id: string, patch: Partial<LoadCase>) => edit((p) => ({ ...p, loadCases: p.loadCases.map((c) => (c.id === id ? { ...c, ...patch, id } : c)) })),
+    addCase: (c: LoadCase) => edit((p) => ({ ...p, loadCases: [...p.loadCases, c] })),
+    removeCase: (id: string) => edit((p) => (p.loadCases.length <= 1 ? p : { ...p, loadCases: p.loadCases.filter((c) => c.id !== id) })),
+    updateSoil: (id: string, patch: Partial<Soil>) => edit((p) => ({ ...p, soils: p.soils.map((s) => (s.id === id ? { ...s, ...patch, id } : s)) })),
+    addSoil: (soil: Soil) => edit((p) => ({ ...p, soils: [...p.soils, soil] })),
+    removeSoil: (id: string) =>
+      edit((p) => {
+        if (p.soils.length <= 1) return p;
+        const soils = p.soils.filter((s) => s.id !== id);
+        const fallback = p.defaultSoil === id ? soils[0]!.id : p.defaultSoil;
+        return {
+          ...p,
+          soils,
+          ...(fallback !== undefined ? { defaultSoil: fallback } : {}),
+          nodes: p.nodes.map((n) => (n.soil === id ? { ...n, soil: undefined } : n)),
+        };
+      }),
+    setDefaultSoil: (id: string) => edit((p) => ({ ...p, defaultSoil: id })),
+    /** Replaces the whole document (open, new); it is one undoable step like any edit. */
+    replaceProject: (project: Project) => {
+      edit(() => project);
+      set({ selection: EMPTY_SELECTION, draw: { phase: 'idle' }, dragPreview: null });
+    },
+
+    /**
+     * A live edit (a slider being dragged): changes show at once but leave no undo steps until it
+     * ends, and then the whole gesture is one step.
+     */
+    beginLiveEdit: () => {
+      liveStart = get().project;
+      history().pause();
+    },
+    endLiveEdit: () => {
+      if (!liveStart) return;
+      const final = get().project;
+      set({ project: liveStart });
+      history().resume();
+      liveStart = null;
+      if (final !== get().project) set({ project: final });
+    },
+    /** A document change during a live edit (no undo step of its own). */
+    liveEdit: (change: (p: Project) => Project) => set({ project: change(get().project) }),
+
+    // ——— history
+    undo: () => {
+      history().undo();
+      set({ selection: prune(get().selection, get().project), dragPreview: null });
+    },
+    redo: () => {
+      history().redo();
+      set({ selection: prune(get().selection, get().project) });
+    },
+
+    // ——— view, tools and selection (not undoable)
+    setViewport: (viewport: Viewport) => set({ viewport }),
+    setCaseView: (caseView: CaseView) => set({ caseView }),
+    setTool: (tool: ToolName) => set({ tool, draw: { phase: 'idle' } }),
+    toggleSnapping: () => set({ snapping: !get().snapping }),
+    setPipeSpec: (pipeSpec: PipeSpec) => set({ pipeSpec }),
+    setDraw: (draw: DrawState) => set({ draw }),
+    setDragPreview: (dragPreview: ReadonlyMap<string, PlanPoint> | null) => set({ dragPreview }),
+    select: (selection: Selection) => set({ selection }),
+    selectNode: (id: string) => set({ selection: { nodes: new Set([id]), pipes: new Set() } }),
+    clearSelection: () => set({ selection: EMPTY_SELECTION }),
+    setDrawer: (tab: DrawerTab, height?: AppState['drawer']['height']) => set({ drawer: { tab, height: height ?? (get().drawer.height === 'closed' ? 'low' : get().drawer.height) } }),
+    setDrawerHeight: (height: AppState['drawer']['height']) => set({ drawer: { ...get().drawer, height } }),
+    notify: (notice: AppState['notice']) => set({ notice }),
+  };
+}
+
+export type Actions = ReturnType<typeof createActions>;
+
+/** Checks a whole document before it replaces the current one (used by Open and restore). */
+export function validated(data: unknown): { ok: true; project: Project } | { ok: false; lines: string[] } {
+  const r = parseProject(data);
+  return r.ok ? { ok: true, project: r.project } : { ok: false, lines: r.problems.map((p) => (p.path ? `${p.path}: ${p.message}` : p.message)) };
+}

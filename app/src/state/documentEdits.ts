@@ -1,0 +1,148 @@
+import type { Material, Pipe, Project, ProjectNode } from '@mainbrace/solver';
+
+/** A point on the plan, m: x east, y north. */
+export interface PlanPoint {
+  x: number;
+  y: number;
+}
+
+/** The pipe a new run is drawn with. */
+export interface PipeSpec {
+  outsideDiameter: number;
+  insideDiameter: number;
+  material: Material;
+  series?: string;
+  nominal?: string;
+}
+
+/** Where a drawn run starts or ends: an existing node, a point on a pipe (split there), or open ground. */
+export type RouteEnd =
+  | { kind: 'node'; id: string }
+  | { kind: 'pipe'; id: string; at: PlanPoint }
+  | { kind: 'point'; at: PlanPoint };
+
+/** The next free id with a prefix: n1, n2, ... after the largest number in use. */
+export function nextId(prefix: string, used: Iterable<string>): string {
+  let max = 0;
+  const pattern = new RegExp(`^${prefix}(\\d+)$`);
+  for (const id of used) {
+    const m = pattern.exec(id);
+    if (m) max = Math.max(max, Number(m[1]));
+  }
+  return `${prefix}${max + 1}`;
+}
+
+const round = (v: number) => Math.round(v * 1000) / 1000;
+
+/**
+ * Splits a pipe at the point of it nearest to `at`: the pipe keeps its start, a new pipe with the
+ * same properties runs on from the new node. Elevation and cover are interpolated along the pipe.
+ */
+export function splitPipe(project: Project, pipeId: string, at: PlanPoint): { project: Project; nodeId: string } {
+  const pipe = project.pipes.find((p) => p.id === pipeId);
+  if (!pipe) throw new Error(`no pipe ${pipeId}`);
+  const a = project.nodes.find((n) => n.id === pipe.from)!;
+  const b = project.nodes.find((n) => n.id === pipe.to)!;
+  const dx = b.x - a.x;
+  const dy = b.y - a.y;
+  const t = Math.min(0.98, Math.max(0.02, ((at.x - a.x) * dx + (at.y - a.y) * dy) / (dx * dx + dy * dy || 1)));
+  const nodeId = nextId('n', project.nodes.map((n) => n.id));
+  const node: ProjectNode = {
+    id: nodeId,
+    x: round(a.x + t * dx),
+    y: round(a.y + t * dy),
+    elevation: round(a.elevation + t * (b.elevation - a.elevation)),
+    cover: round(a.cover + t * (b.cover - a.cover)),
+    end: 'cap',
+    valve: false,
+    restraint: 'block',
+    ...(a.soil !== undefined ? { soil: a.soil } : {}),
+  };
+  const { label: _label, ...rest } = pipe;
+  const second: Pipe = { ...rest, id: nextId('p', project.pipes.map((p) => p.id)), from: nodeId, to: pipe.to };
+  return {
+    nodeId,
+    project: {
+      ...project,
+      nodes: [...project.nodes, node],
+      pipes: [...project.pipes.map((p) => (p.id === pipeId ? { ...p, to: nodeId } : p)), second],
+    },
+  };
+}
+
+/** A new node at a point, inheriting elevation, cover and soil from a neighbour where there is one. */
+function freeNode(id: string, at: PlanPoint, like: ProjectNode | undefined): ProjectNode {
+  return {
+    id,
+    x: round(at.x),
+    y: round(at.y),
+    elevation: like?.elevation ?? 100,
+    cover: like?.cover ?? 1.2,
+    end: 'cap',
+    valve: false,
+    restraint: 'block',
+    ...(like?.soil !== undefined ? { soil: like.soil } : {}),
+  };
+}
+
+function resolveEnd(project: Project, end: RouteEnd, like: ProjectNode | undefined): { project: Project; nodeId: string } {
+  if (end.kind === 'node') return { project, nodeId: end.id };
+  if (end.kind === 'pipe') return splitPipe(project, end.id, end.at);
+  const id = nextId('n', project.nodes.map((n) => n.id));
+  return { project: { ...project, nodes: [...project.nodes, freeNode(id, end.at, like)] }, nodeId: id };
+}
+
+/**
+ * Adds a drawn run: from its start (a node, a split pipe or a new point) through the vertices to its
+ * end, one pipe per segment, all with the same pipe spec. A start on a node makes a branch there.
+ */
+export function addRoute(project: Project, start: RouteEnd, vertices: readonly PlanPoint[], end: RouteEnd | null, spec: PipeSpec): Project {
+  let doc = project;
+  const first = resolveEnd(doc, start, undefined);
+  doc = first.project;
+  let previous = doc.nodes.find((n) => n.id === first.nodeId)!;
+  const stops: RouteEnd[] = [...vertices.map((at) => ({ kind: 'point', at }) as RouteEnd), ...(end ? [end] : [])];
+  for (const stop of stops) {
+    const next = resolveEnd(doc, stop, previous);
+    doc = next.project;
+    const to = doc.nodes.find((n) => n.id === next.nodeId)!;
+    if (to.id === previous.id || Math.hypot(to.x - previous.x, to.y - previous.y) < 0.01) continue;
+    const pipe: Pipe = {
+      id: nextId('p', doc.pipes.map((p) => p.id)),
+      from: previous.id,
+      to: to.id,
+      outsideDiameter: spec.outsideDiameter,
+      insideDiameter: spec.insideDiameter,
+      flow: 0,
+      material: spec.material,
+      ...(spec.series !== undefined ? { series: spec.series } : {}),
+      ...(spec.nominal !== undefined ? { nominal: spec.nominal } : {}),
+    };
+    doc = { ...doc, pipes: [...doc.pipes, pipe] };
+    previous = to;
+  }
+  return doc;
+}
+
+/** Moves nodes to new plan positions (m); pipes follow because they refer to the nodes. */
+export function moveNodes(project: Project, moves: ReadonlyMap<string, PlanPoint>): Project {
+  return { ...project, nodes: project.nodes.map((n) => (moves.has(n.id) ? { ...n, x: round(moves.get(n.id)!.x), y: round(moves.get(n.id)!.y) } : n)) };
+}
+
+/** Deletes pipes, and nodes with every pipe that meets them; nodes left with no pipe go too. */
+export function deleteItems(project: Project, nodeIds: ReadonlySet<string>, pipeIds: ReadonlySet<string>): Project {
+  const pipes = project.pipes.filter((p) => !pipeIds.has(p.id) && !nodeIds.has(p.from) && !nodeIds.has(p.to));
+  const touched = new Set<string>();
+  for (const p of project.pipes) if (!pipes.includes(p)) [p.from, p.to].forEach((id) => touched.add(id));
+  const stillUsed = new Set(pipes.flatMap((p) => [p.from, p.to]));
+  const nodes = project.nodes.filter((n) => !nodeIds.has(n.id) && !(touched.has(n.id) && !stillUsed.has(n.id)));
+  return { ...project, nodes, pipes };
+}
+
+export function updateNode(project: Project, id: string, patch: Partial<ProjectNode>): Project {
+  return { ...project, nodes: project.nodes.map((n) => (n.id === id ? { ...n, ...patch, id } : n)) };
+}
+
+export function updatePipe(project: Project, id: string, patch: Partial<Pipe>): Project {
+  return { ...project, pipes: project.pipes.map((p) => (p.id === id ? { ...p, ...patch, id } : p)) };
+}

@@ -1,0 +1,27 @@
+import { defineConfig } from '@playwright/test';
+
+// Debian's chromium, never a downloaded browser; the flags keep it off the closed network.
+export default defineConfig({
+  testDir: './journeys',
+  outputDir: './test-results',
+  timeout: 60_000,
+  expect: { timeout: 10_000 },
+  fullyParallel: false,
+  workers: 1,
+  reporter: [['list']],
+  use: {
+    baseURL: 'http://127.0.0.1:4173',
+    viewport: { width: 1440, height: 900 },
+    screenshot: 'only-on-failure',
+    launchOptions: {
+      executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+      args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    },
+  },
+  webServer: {
+    command: 'pnpm --filter app build --mode test && pnpm --filter app preview',
+    url: 'http://127.0.0.1:4173',
+    reuseExistingServer: false,
+    timeout: 120_000,
+  },
+});
