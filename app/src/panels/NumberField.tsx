@@ -1,4 +1,4 @@
-import { useEffect, useId, useState } from 'react';
+import { useId, useState } from 'react';
 import type { Dimension, UnitSystem } from '@mainbrace/solver';
 import { editable, parseTyped, show, unitOf } from '../format/quantity.js';
 
@@ -28,10 +28,14 @@ export function NumberField(p: NumberFieldProps) {
   const id = useId();
   const [text, setText] = useState(editable(p.value, p.dimension, p.units));
   const [error, setError] = useState<string | null>(null);
-  useEffect(() => {
+  // A new value from the document (undo, another field, a unit switch) replaces what is shown.
+  const source = `${p.value}|${p.dimension}|${p.units}`;
+  const [shownSource, setShownSource] = useState(source);
+  if (shownSource !== source) {
+    setShownSource(source);
     setText(editable(p.value, p.dimension, p.units));
     setError(null);
-  }, [p.value, p.dimension, p.units]);
+  }
 
   const commit = () => {
     const r = parseTyped(text, p.dimension, p.units);
