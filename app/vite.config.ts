@@ -1,9 +1,14 @@
+import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'vitest/config';
 import react from '@vitejs/plugin-react';
+import { offline } from './build/offline.js';
+
+const publicDir = fileURLToPath(new URL('../public', import.meta.url));
 
 export default defineConfig({
-  plugins: [react()],
-  publicDir: '../public',
+  plugins: [react(), offline(publicDir)],
+  publicDir,
+  base: './',
   build: { target: 'es2022', sourcemap: false },
   test: {
     name: 'app',

@@ -66,3 +66,10 @@ async function start() {
 }
 
 void start();
+
+// Installed and offline: the service worker is built with the app (not in the dev server).
+if (import.meta.env.PROD && 'serviceWorker' in navigator) {
+  window.addEventListener('load', () => {
+    void navigator.serviceWorker.register('./sw.js').catch(() => undefined);
+  });
+}

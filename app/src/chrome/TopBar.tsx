@@ -76,7 +76,7 @@ export function TopBar({ onPrint }: { onPrint: () => void }) {
         </select>
       </label>
       <button className="caution" title="Results must be checked by a licensed engineer against local codes and the utility’s standards" onClick={() => setCautionOpen(true)} aria-haspopup="dialog" data-testid="caution">
-        <span aria-hidden="true">⚠</span> Design aid only — check by a licensed engineer; local codes govern. <u>More</u>
+        <span aria-hidden="true">⚠</span> Design aid — check by a licensed engineer. <u>Cautions</u>
       </button>
       {cautionOpen && <CautionDialog onClose={() => setCautionOpen(false)} />}
     </header>

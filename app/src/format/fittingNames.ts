@@ -23,5 +23,5 @@ export function fittingTitle(f: FittingAnalysis, units: UnitSystem): string {
   return name;
 }
 
-/** Compass bearing, degrees clockwise from north, as a short text: "N 45° E" style is avoided for one number. */
-export const bearingText = (deg: number | null): string => (deg === null ? '—' : `${Math.round(deg)}° from N`);
+/** Direction of a horizontal thrust as a whole-degree bearing, clockwise from north. */
+export const bearingText = (deg: number | null): string => (deg === null ? '—' : `${Math.round(deg) % 360}°`);

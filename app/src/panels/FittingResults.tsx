@@ -24,7 +24,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
         <dd>{caseName(project, e.governing.caseId)}</dd>
         <dt>Thrust</dt>
         <dd data-testid="governing-thrust">
-          <strong>{show(norm(e.governing.total), 'force', u)}</strong>, bears {bearingText(e.horizontal.force > 0 ? planBearing(e.horizontal.direction) : null)}
+          <strong>{show(norm(e.governing.total), 'force', u)}</strong>, bears toward {bearingText(e.horizontal.force > 0 ? planBearing(e.horizontal.direction) : null)} from north
         </dd>
       </dl>
       <table className="cases-table">

@@ -57,7 +57,7 @@ export function ScheduleTable() {
             <th>Governs</th>
             {head('thrust', 'Thrust')}
             <th>Static / dynamic</th>
-            <th>Bears</th>
+            <th title="Direction the thrust pushes, clockwise from north">Bears (from N)</th>
             <th>Soil</th>
             <th>Restraint</th>
             {head('concrete', 'Concrete')}

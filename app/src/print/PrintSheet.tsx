@@ -92,7 +92,7 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
           <table className="sheet-schedule">
             <thead>
               <tr>
-                <th>Tag</th><th>Chainage</th><th>Fitting</th><th>Pipe OD</th><th>Design pressure</th><th>Governs</th><th>Thrust</th><th>Bears</th><th>Soil</th><th>Restraint</th><th>Warnings</th>
+                <th>Tag</th><th>Chainage</th><th>Fitting</th><th>Pipe OD</th><th>Design pressure</th><th>Governs</th><th>Thrust</th><th>Bears (from N)</th><th>Soil</th><th>Restraint</th><th>Warnings</th>
               </tr>
             </thead>
             <tbody>

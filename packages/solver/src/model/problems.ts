@@ -13,7 +13,8 @@ export function pathText(path: readonly PropertyKey[]): string {
   let out = '';
   for (const key of path) {
     if (typeof key === 'number') out += `[${key}]`;
-    else out += out ? `.${String(key)}` : String(key);
+    else if (typeof key === 'string' && /^[A-Za-z_$][\w$]*$/.test(key)) out += out ? `.${key}` : key;
+    else out += `[${JSON.stringify(String(key))}]`;
   }
   return out;
 }
@@ -60,7 +61,7 @@ export function problemsFromIssues(issues: readonly z.core.$ZodIssue[]): Problem
         out.push({ path: pathText([...issue.path, key]), message: 'unknown field (not part of the project format)' });
       }
     } else {
-      out.push({ path: pathText(issue.path), message: issue.message });
+      out.push({ path: pathText(issue.path) || '(whole file)', message: issue.message });
     }
   }
   return out;

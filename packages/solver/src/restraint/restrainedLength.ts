@@ -60,6 +60,12 @@ export function restrainedLength(i: RestrainedLengthInput): { legs: RestrainedLe
       length = (i.safetyFactor * t) / r.friction;
       formula = 'L = S_f·T / F_s';
     }
+    if (!Number.isFinite(length) || length <= 0) {
+      warnings.push(
+        `No friction or bearing along ${leg.pipe.id}: the soil (φ = ${i.soil.frictionAngle}°, c = ${formatSi(i.soil.cohesion, 'stress', i.units)}) cannot hold restrained joints; use a block, piles or soil replacement.`,
+      );
+      continue;
+    }
     out.push({ pipe: leg.pipe.id, length });
     steps.push(() => ({
       title: `Restrained length along ${leg.pipe.id}`,

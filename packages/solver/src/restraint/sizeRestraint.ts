@@ -151,7 +151,7 @@ export function sizeRestraint(
       units,
     });
     out.restrainedLegs = r.legs;
-    out.restrainedLength = Math.max(...r.legs.map((l) => l.length));
+    out.restrainedLength = r.legs.length ? Math.max(...r.legs.map((l) => l.length)) : null;
     out.steps.push(r.steps);
     out.warnings.push(...r.warnings);
   }
