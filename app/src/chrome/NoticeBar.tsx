@@ -4,7 +4,8 @@ import { useActions, useApp } from '../state/StoreContext.js';
 export function NoticeBar() {
   const notice = useApp((s) => s.notice);
   const actions = useActions();
-  if (!notice) return null;
+  // An empty slot keeps the window's grid rows in place when there is nothing to say.
+  if (!notice) return <div className="notice-slot" />;
   return (
     <div className={`notice notice-${notice.tone}`} role={notice.tone === 'info' ? 'status' : 'alert'} data-testid="notice">
       <div className="notice-body">

@@ -76,9 +76,17 @@ function shownThrust(f: Analysis['fittings'][number], view: CaseView): Vec3 {
  * Everything the plan draws, in plan metres: a pure function of the document, its analysis, the
  * case shown, the selection and any nodes being dragged (drawn where they are, without results).
  */
-export function planScene(project: Project, analysis: Analysis | null, view: CaseView, selection: Selection, preview: ReadonlyMap<string, PlanPoint> | null): Scene {
+export function planScene(
+  project: Project,
+  analysis: Analysis | null,
+  view: CaseView,
+  selection: Selection,
+  preview: ReadonlyMap<string, PlanPoint> | null,
+  hidden?: ReadonlySet<string>,
+): Scene {
   const where = new Map<string, PlanPoint>(project.nodes.map((n) => [n.id, preview?.get(n.id) ?? { x: n.x, y: n.y }]));
-  const pipes: ScenePipe[] = project.pipes.map((p) => ({
+  const shownPipes = hidden?.size ? project.pipes.filter((p) => !hidden.has(p.from) && !hidden.has(p.to)) : project.pipes;
+  const pipes: ScenePipe[] = shownPipes.map((p) => ({
     id: p.id,
     a: where.get(p.from)!,
     b: where.get(p.to)!,
@@ -94,6 +102,7 @@ export function planScene(project: Project, analysis: Analysis | null, view: Cas
   for (const f of analysis?.fittings ?? []) {
     const id = f.node.id;
     withFitting.add(id);
+    if (hidden?.has(id) || !where.has(id)) continue;
     const at = where.get(id)!;
     const axis = f.legs[0] ? plan(f.legs[0].direction) : { x: 1, y: 0 };
     fittings.push({ node: id, tag: f.tag, kind: f.geometry.kind, at, axis, warned: f.warnings.length > 0, selected: selection.nodes.has(id) });
@@ -131,7 +140,27 @@ export function planScene(project: Project, analysis: Analysis | null, view: Cas
     }
   }
   const plainNodes = project.nodes
-    .filter((n) => !withFitting.has(n.id))
+    .filter((n) => !withFitting.has(n.id) && !hidden?.has(n.id))
     .map((n) => ({ id: n.id, at: where.get(n.id)!, tieIn: n.end === 'tie-in', selected: selection.nodes.has(n.id) }));
   return { pipes, fittings, arrows, polygons, largestForce, plainNodes };
+}
+
+/**
+ * What moves while nodes are dragged: the dragged nodes and the pipes that meet them, at their
+ * preview positions, without results (the document changes, and results follow, on drop).
+ */
+export function dragScene(project: Project, analysis: Analysis, selection: Selection, preview: ReadonlyMap<string, PlanPoint>): Scene {
+  const touching = project.pipes.filter((p) => preview.has(p.from) || preview.has(p.to));
+  const ids = new Set([...preview.keys(), ...touching.flatMap((p) => [p.from, p.to])]);
+  const sub: Project = { ...project, nodes: project.nodes.filter((n) => ids.has(n.id)), pipes: touching };
+  const scene = planScene(sub, analysis, { kind: 'envelope' }, selection, preview);
+  const moving = (id: string) => preview.has(id);
+  return {
+    ...scene,
+    arrows: [],
+    polygons: [],
+    largestForce: 0,
+    fittings: scene.fittings.filter((f) => moving(f.node)),
+    plainNodes: scene.plainNodes.filter((n) => moving(n.id)),
+  };
 }
