@@ -3,7 +3,7 @@
 # pnpm through corepack (pinned by hash in package.json), the dependencies, and — when asked with
 # `browser` — Debian's chromium for the browser tests. Safe to run again: it skips what is present.
 set -euo pipefail
-cd "$(dirname "$0")/.."
+cd "$(dirname "${BASH_SOURCE[0]}")/.."
 export COREPACK_ENABLE_DOWNLOAD_PROMPT=0
 
 if ! command -v pnpm >/dev/null 2>&1 || ! pnpm --version 2>/dev/null | grep -q '^10\.'; then

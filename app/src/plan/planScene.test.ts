@@ -16,7 +16,18 @@ const CASES = [
  * (−20, 0), out along +y to n3 at (0, 30). With `ends` the line stops in caps, else in tie-ins.
  */
 function bend(ends: 'cap' | 'tie-in') {
-  return project([{ id: 'n1', x: -20, y: 0, end: ends }, { id: 'n2', x: 0, y: 0 }, { id: 'n3', x: 0, y: 30, end: ends }], [{ from: 'n1', to: 'n2' }, { from: 'n2', to: 'n3' }], CASES);
+  return project(
+    [
+      { id: 'n1', x: -20, y: 0, end: ends },
+      { id: 'n2', x: 0, y: 0 },
+      { id: 'n3', x: 0, y: 30, end: ends },
+    ],
+    [
+      { from: 'n1', to: 'n2' },
+      { from: 'n2', to: 'n3' },
+    ],
+    CASES,
+  );
 }
 const dot = (a: PlanPoint, b: PlanPoint) => a.x * b.x + a.y * b.y;
 const dist = (a: PlanPoint, b: PlanPoint) => Math.hypot(a.x - b.x, a.y - b.y);
@@ -38,7 +49,11 @@ describe('planScene arrows', () => {
   it('sizes the arrow from the shown case: 118.04 kN at 1.0 MPa on the envelope, 0.6 of it for the 0.6 MPa case (CV-9)', () => {
     const doc = bend('tie-in');
     expectClose(planScene(doc, analyse(doc), ENVELOPE, EMPTY_SELECTION, null).arrows[0]!.horizontal, 118.04e3, 10);
-    expectClose(planScene(doc, analyse(doc), { kind: 'case', id: 'working' }, EMPTY_SELECTION, null).arrows[0]!.horizontal, 0.6 * 118.04e3, 10);
+    expectClose(
+      planScene(doc, analyse(doc), { kind: 'case', id: 'working' }, EMPTY_SELECTION, null).arrows[0]!.horizontal,
+      0.6 * 118.04e3,
+      10,
+    );
   });
 
   it('draws one arrow per fitting with thrust, at the fitting: the bend and both caps, the caps pushed outward (§1.3)', () => {
@@ -46,7 +61,11 @@ describe('planScene arrows', () => {
     const analysis = analyse(doc);
     const scene = planScene(doc, analysis, ENVELOPE, EMPTY_SELECTION, null);
     expect(analysis.fittings).toHaveLength(3);
-    expect(scene.arrows.map((a) => [a.node, a.at])).toEqual([['n1', { x: -20, y: 0 }], ['n2', { x: 0, y: 0 }], ['n3', { x: 0, y: 30 }]]);
+    expect(scene.arrows.map((a) => [a.node, a.at])).toEqual([
+      ['n1', { x: -20, y: 0 }],
+      ['n2', { x: 0, y: 0 }],
+      ['n3', { x: 0, y: 30 }],
+    ]);
     expectClose(scene.arrows[0]!.direction.x, -1, 1e-12);
     expectClose(scene.arrows[2]!.direction.y, 1, 1e-12);
     expect(scene.largestForce).toBe(Math.max(...scene.arrows.map((a) => a.horizontal)));
@@ -58,7 +77,9 @@ describe('planScene bearing blocks', () => {
     const doc = bend('tie-in');
     const f = analyse(doc).byNode.get('n2')!;
     const block = f.restraint.block!;
-    const polygon = planScene(doc, analyse(doc), ENVELOPE, EMPTY_SELECTION, null).polygons.find((p) => p.kind === 'block' && p.node === 'n2')!;
+    const polygon = planScene(doc, analyse(doc), ENVELOPE, EMPTY_SELECTION, null).polygons.find(
+      (p) => p.kind === 'block' && p.node === 'n2',
+    )!;
     const thrust = { x: Math.SQRT1_2, y: -Math.SQRT1_2 };
     for (const q of polygon.points) expect(dot(q, thrust)).toBeGreaterThanOrEqual(0.326 / 2 - 1e-9);
     const [a, b, , d] = polygon.points as [PlanPoint, PlanPoint, PlanPoint, PlanPoint];
@@ -75,7 +96,16 @@ describe('planScene while nodes are dragged', () => {
     expect(scene.arrows.map((a) => a.node)).toEqual(['n1', 'n3']);
     expect(scene.polygons.some((p) => p.node === 'n2')).toBe(false);
     expect(scene.fittings.find((f) => f.node === 'n2')!.at).toEqual({ x: 4, y: -3 });
-    expect(scene.pipes.map((p) => [p.a, p.b])).toEqual([[{ x: -20, y: 0 }, { x: 4, y: -3 }], [{ x: 4, y: -3 }, { x: 0, y: 30 }]]);
+    expect(scene.pipes.map((p) => [p.a, p.b])).toEqual([
+      [
+        { x: -20, y: 0 },
+        { x: 4, y: -3 },
+      ],
+      [
+        { x: 4, y: -3 },
+        { x: 0, y: 30 },
+      ],
+    ]);
   });
 
   it('marks selected pipes and fittings and lists tie-ins as plain nodes', () => {
@@ -83,6 +113,9 @@ describe('planScene while nodes are dragged', () => {
     const scene = planScene(doc, analyse(doc), ENVELOPE, { nodes: new Set(['n2']), pipes: new Set(['p1']) }, null);
     expect(scene.pipes.map((p) => p.selected)).toEqual([true, false]);
     expect(scene.fittings.map((f) => [f.node, f.selected])).toEqual([['n2', true]]);
-    expect(scene.plainNodes.map((n) => [n.id, n.tieIn])).toEqual([['n1', true], ['n3', true]]);
+    expect(scene.plainNodes.map((n) => [n.id, n.tieIn])).toEqual([
+      ['n1', true],
+      ['n3', true],
+    ]);
   });
 });

@@ -19,11 +19,20 @@ function prune(sel: Selection, p: Project): Selection {
 export function createActions(store: AppStore) {
   const get = store.getState;
   const set = (patch: Partial<AppState>) => store.setState(patch);
-  /** An undoable edit: a new document from the old one. */
+  /**
+   * An undoable edit: a new document from the old one. A change that would leave the document
+   * invalid (two nodes on one point, an ID above the OD) is refused with a message, never stored.
+   */
   const edit = (change: (p: Project) => Project) => {
     const before = get().project;
     const after = change(before);
-    if (after !== before) set({ project: after, selection: prune(get().selection, after) });
+    if (after === before) return;
+    const check = validated(after);
+    if (!check.ok) {
+      set({ notice: { tone: 'error', title: 'That change was not made: it would leave the project invalid', lines: check.lines } });
+      return;
+    }
+    set({ project: after, selection: prune(get().selection, after) });
   };
   const history = () => store.temporal.getState();
   let liveStart: Project | null = null;

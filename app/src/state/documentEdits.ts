@@ -93,6 +93,20 @@ function resolveEnd(project: Project, end: RouteEnd, like: ProjectNode | undefin
 }
 
 /**
+ * A run that starts and ends on the same pipe: the start split it, so an end beyond the split point
+ * lies on the new second piece (the one leaving the split node), not on the pipe's first piece.
+ */
+function pieceOfSplit(before: Project, after: Project, start: RouteEnd, end: RouteEnd, splitNode: string): RouteEnd {
+  if (start.kind !== 'pipe' || end.kind !== 'pipe' || end.id !== start.id) return end;
+  const pipe = before.pipes.find((p) => p.id === start.id)!;
+  const a = before.nodes.find((n) => n.id === pipe.from)!;
+  const b = before.nodes.find((n) => n.id === pipe.to)!;
+  const along = (q: PlanPoint) => (q.x - a.x) * (b.x - a.x) + (q.y - a.y) * (b.y - a.y);
+  if (along(end.at) <= along(start.at)) return end;
+  return { ...end, id: after.pipes.find((p) => p.from === splitNode)!.id };
+}
+
+/**
  * Adds a drawn run: from its start (a node, a split pipe or a new point) through the vertices to its
  * end, one pipe per segment, all with the same pipe spec. A start on a node makes a branch there.
  */
@@ -101,12 +115,14 @@ export function addRoute(project: Project, start: RouteEnd, vertices: readonly P
   const first = resolveEnd(doc, start, undefined);
   doc = first.project;
   let previous = doc.nodes.find((n) => n.id === first.nodeId)!;
-  const stops: RouteEnd[] = [...vertices.map((at) => ({ kind: 'point', at }) as RouteEnd), ...(end ? [end] : [])];
+  const last = end && pieceOfSplit(project, doc, start, end, first.nodeId);
+  const stops: RouteEnd[] = [...vertices.map((at) => ({ kind: 'point', at }) as RouteEnd), ...(last ? [last] : [])];
   for (const stop of stops) {
     const next = resolveEnd(doc, stop, previous);
-    doc = next.project;
-    const to = doc.nodes.find((n) => n.id === next.nodeId)!;
+    const to = next.project.nodes.find((n) => n.id === next.nodeId)!;
+    // A stop on the previous point adds no pipe, so it must add no node either (it would be left bare).
     if (to.id === previous.id || Math.hypot(to.x - previous.x, to.y - previous.y) < 0.01) continue;
+    doc = next.project;
     const pipe: Pipe = {
       id: nextId('p', doc.pipes.map((p) => p.id)),
       from: previous.id,
@@ -124,9 +140,22 @@ export function addRoute(project: Project, start: RouteEnd, vertices: readonly P
   return doc;
 }
 
-/** Moves nodes to new plan positions (m); pipes follow because they refer to the nodes. */
+/** Below this 3-D distance a pipe's two nodes coincide, m (the solver's crossChecks MIN_PIPE_LENGTH). */
+const MIN_PIPE_LENGTH = 0.001;
+
+/**
+ * Moves nodes to new plan positions (m); pipes follow because they refer to the nodes. A move that
+ * would put a pipe's two nodes on one point is refused (the document is returned unchanged).
+ */
 export function moveNodes(project: Project, moves: ReadonlyMap<string, PlanPoint>): Project {
-  return { ...project, nodes: project.nodes.map((n) => (moves.has(n.id) ? { ...n, x: round(moves.get(n.id)!.x), y: round(moves.get(n.id)!.y) } : n)) };
+  const nodes = project.nodes.map((n) => (moves.has(n.id) ? { ...n, x: round(moves.get(n.id)!.x), y: round(moves.get(n.id)!.y) } : n));
+  const byId = new Map(nodes.map((n) => [n.id, n]));
+  const collapses = project.pipes.some((p) => {
+    const a = byId.get(p.from), b = byId.get(p.to);
+    const moved = moves.has(p.from) || moves.has(p.to);
+    return moved && a && b && Math.hypot(a.x - b.x, a.y - b.y, a.elevation - b.elevation) < MIN_PIPE_LENGTH;
+  });
+  return collapses ? project : { ...project, nodes };
 }
 
 /** Deletes pipes, and nodes with every pipe that meets them; nodes left with no pipe go too. */

@@ -1,0 +1,83 @@
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import type { Dimension, UnitSystem } from '@mainbrace/solver';
+import { editable, parseTyped } from './quantity.js';
+import { expectClose } from '../testFixtures.js';
+
+/** Exact factors: 1 ft = 0.3048 m, 1 in = 0.0254 m (1959 yard and pound agreement); 1 psi = 6894.757 Pa (NIST SP 811). */
+const FT = 0.3048;
+const PSI = 6894.757293168361;
+
+const si = (text: string, dim: Dimension, units: UnitSystem) => {
+  const r = parseTyped(text, dim, units);
+  if (!r.ok) throw new Error(r.message);
+  return r.si;
+};
+
+describe('parseTyped', () => {
+  it('accepts thousands separators and spaces: "1,234.5" ft is 376.2756 m, " 1 234.5 " kPa is 1 234 500 Pa', () => {
+    expectClose(si('1,234.5', 'length', 'us'), 1234.5 * FT, 1e-9);
+    expectClose(si(' 1 234.5 ', 'pressure', 'si'), 1234.5e3, 1e-6);
+  });
+
+  it('accepts signs, a bare decimal point and exponents: "-3.5" m, ".25" in, "1.5e3" psi', () => {
+    expectClose(si('-3.5', 'elevation', 'si'), -3.5);
+    expectClose(si('.25', 'diameter', 'us'), 0.25 * 0.0254, 1e-12);
+    expectClose(si('1.5e3', 'pressure', 'us'), 1500 * PSI, 1e-6);
+  });
+
+  it.each([
+    ['abc', 'pressure', 'us', 'psi'],
+    ['abc', 'pressure', 'si', 'kPa'],
+    ['', 'flow', 'us', 'gpm'],
+    ['1.2.3', 'diameter', 'si', 'mm'],
+    ['12 m', 'length', 'us', 'ft'],
+  ] as const)('refuses %j as a %s in %s units with a message naming %s', (text, dim, units, unit) => {
+    const r = parseTyped(text, dim, units);
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.message).toContain(unit);
+  });
+
+  it('names plain units when the quantity has no unit (a ratio)', () => {
+    const r = parseTyped('x', 'ratio', 'si');
+    expect(r.ok ? '' : r.message).toContain('plain units');
+  });
+});
+
+describe('editable and parseTyped round trip', () => {
+  it('shows 0.3048 m as "1" ft and 1 000 000 Pa as "1000" kPa (exact factors)', () => {
+    expect(editable(0.3048, 'length', 'us')).toBe('1');
+    expect(editable(1e6, 'pressure', 'si')).toBe('1000');
+  });
+
+  it('reads back what it shows, to its four decimals in display units, in both unit systems (invariant)', () => {
+    const dims: Dimension[] = [
+      'length',
+      'elevation',
+      'diameter',
+      'area',
+      'volume',
+      'force',
+      'pressure',
+      'stress',
+      'unitWeight',
+      'flow',
+      'density',
+      'angle',
+      'ratio',
+    ];
+    fc.assert(
+      fc.property(
+        fc.constantFrom(...dims),
+        fc.constantFrom<UnitSystem>('si', 'us'),
+        fc.double({ min: -1e7, max: 1e7, noNaN: true }),
+        (dim, units, value) => {
+          const factor = si('1', dim, units); // SI value of one display unit
+          const back = si(editable(value, dim, units), dim, units);
+          expectClose(back, value, 0.5e-4 * factor * (1 + 1e-9) + 1e-12 * Math.abs(value));
+        },
+      ),
+      { seed: 1234, numRuns: 400 },
+    );
+  });
+});

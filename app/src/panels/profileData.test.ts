@@ -1,0 +1,79 @@
+import { describe, expect, it } from 'vitest';
+import { analyse } from '@mainbrace/solver';
+import { profileData } from './profileData.js';
+import { expectClose, project } from '../testFixtures.js';
+
+/**
+ * Main line Kestrel Hill: tie-in n1 → n2 → n3 → n4 (110 m along), with a 25 m branch n2 → n5 of a
+ * smaller pipe. Elevations and covers differ per node so a swapped field cannot pass.
+ */
+function withBranch() {
+  return project(
+    [
+      { id: 'n1', x: 0, y: 0, z: 101.2, cover: 1.1, end: 'tie-in' },
+      { id: 'n2', x: 30, y: 0, z: 98.5, cover: 1.35 },
+      { id: 'n3', x: 30, y: 40, z: 97.25, cover: 1.6 },
+      { id: 'n4', x: 70, y: 40, z: 99.0, cover: 1.45 },
+      { id: 'n5', x: 30, y: -25, z: 98.0, cover: 1.2 },
+    ],
+    [
+      { from: 'n1', to: 'n2' },
+      { from: 'n2', to: 'n3' },
+      { from: 'n3', to: 'n4' },
+      { from: 'n2', to: 'n5', od: 0.17 },
+    ],
+    [
+      { id: 'working', label: 'Working', pressure: 600e3, datumElevation: 95 },
+      { id: 'test', pressure: 1.0e6, datumElevation: 92.5 },
+      { id: 'flat', pressure: 400e3 },
+    ],
+  );
+}
+
+describe('profileData path', () => {
+  it('follows the main line from the tie-in to the farthest node and leaves the branch out', () => {
+    const doc = withBranch();
+    const { points } = profileData(doc, analyse(doc));
+    expect(points.map((p) => p.node)).toEqual(['n1', 'n2', 'n3', 'n4']);
+  });
+
+  it('measures chainage along the pipes in 3-D (hand calculation: √(30² + 2.7²) for the first pipe)', () => {
+    const doc = withBranch();
+    const { points } = profileData(doc, analyse(doc));
+    const first = Math.hypot(30, 101.2 - 98.5);
+    expectClose(points[0]!.chainage, 0);
+    expectClose(points[1]!.chainage, first, 1e-9);
+    expectClose(points[3]!.chainage, first + Math.hypot(40, 1.25) + Math.hypot(40, 1.75), 1e-9);
+  });
+});
+
+describe('profileData levels', () => {
+  it('puts the ground at centreline + OD/2 + cover, with the largest OD at the node (hand calculation)', () => {
+    const doc = withBranch();
+    const { points } = profileData(doc, analyse(doc));
+    expect(points.map((p) => p.pipe)).toEqual([101.2, 98.5, 97.25, 99.0]);
+    // n2 meets DN300 (OD 0.326 m) and the 0.17 m branch: the larger one sets the ground.
+    expectClose(points[1]!.ground, 98.5 + 0.326 / 2 + 1.35, 1e-12);
+    expectClose(points[3]!.ground, 99.0 + 0.163 + 1.45, 1e-12);
+  });
+
+  it('gives each case with a datum its static grade datum + p/(ρ·g), with ρ = 998.2 kg/m³ and g = 9.80665 m/s² (hand calculation)', () => {
+    const doc = withBranch();
+    const { grades } = profileData(doc, analyse(doc));
+    // 600 000 / (998.2 × 9.80665) = 61.2933 m; 1 000 000 / 9789.0 = 102.1555 m (CV-19 uses the same ρ·g).
+    expect(grades.map((g) => [g.caseId, g.label])).toEqual([
+      ['working', 'Working'],
+      ['test', 'test'],
+    ]);
+    expectClose(grades[0]!.elevation, 95 + 61.2933, 1e-4);
+    expectClose(grades[1]!.elevation, 92.5 + 102.1555, 1e-4);
+  });
+
+  it('tags the fittings on the path and leaves plain points untagged', () => {
+    const doc = withBranch();
+    const a = analyse(doc);
+    const { points } = profileData(doc, a);
+    expect(points[0]!.tag).toBeNull(); // a tie-in is not a fitting to restrain
+    expect(points[1]!.tag).toBe(a.byNode.get('n2')!.tag);
+  });
+});

@@ -1,0 +1,76 @@
+import { expect } from 'vitest';
+import { parseProject, type Project, type ProjectInput } from '@mainbrace/solver';
+import type { PipeSpec } from './state/documentEdits.js';
+
+/** Test fixtures: valid, defaulted projects from the few fields a test cares about. */
+export interface NodeSpec {
+  id: string;
+  /** m east */
+  x: number;
+  /** m north */
+  y: number;
+  /** m, centreline elevation (100 unless given) */
+  z?: number;
+  cover?: number;
+  end?: 'cap' | 'tie-in';
+}
+
+export interface PipeFixture {
+  from: string;
+  to: string;
+  /** m, outside diameter (DN300 EN 545, 0.326 m, unless given) */
+  od?: number;
+  /** m³/s */
+  flow?: number;
+  label?: string;
+}
+
+/** DN300 EN 545 ductile iron, OD 326 mm (domain reference CV-9); the bore is an assumed 0.9 × OD. */
+export const DN300: PipeSpec = { outsideDiameter: 0.326, insideDiameter: 0.2934, material: 'ductile-iron' };
+
+/** Builds a project through the solver's own parser, so it is valid and carries every default. */
+export function project(
+  nodes: NodeSpec[],
+  pipes: PipeFixture[],
+  cases: ProjectInput['loadCases'] = [{ id: 'working', pressure: 1e6 }],
+): Project {
+  const input: ProjectInput = {
+    format: 'mainbrace-project',
+    version: 1,
+    name: 'Test main, Lowmoor Lane',
+    loadCases: cases,
+    soils: [{ id: 'sand', bearing: 143640 }],
+    nodes: nodes.map(({ z, ...n }) => ({ ...n, elevation: z ?? 100 })),
+    pipes: pipes.map(({ od, ...p }, i) => {
+      const outside = od ?? DN300.outsideDiameter;
+      return { id: `p${i + 1}`, ...p, outsideDiameter: outside, insideDiameter: outside * 0.9 };
+    }),
+  };
+  const r = parseProject(input);
+  if (!r.ok) throw new Error(r.problems.map((p) => `${p.path}: ${p.message}`).join('\n'));
+  return r.project;
+}
+
+/** An empty project: no route yet. */
+export const emptyProject = (): Project => project([], []);
+
+/** Asserts the document passes the solver's parser (the invariant every edit must keep). */
+export function expectValid(p: Project): void {
+  const r = parseProject(p);
+  expect(r.ok ? [] : r.problems.map((x) => `${x.path}: ${x.message}`)).toEqual([]);
+}
+
+/** Asserts |actual − expected| ≤ tol: the one tolerance rule of these tests. */
+export function expectClose(actual: number, expected: number, tol = 1e-9): void {
+  if (!(Math.abs(actual - expected) <= tol)) expect.fail(`expected ${actual} to be within ${tol} of ${expected}`);
+}
+
+/** The plan position of a node. */
+export function at(p: Project, id: string): { x: number; y: number } {
+  const n = p.nodes.find((x) => x.id === id);
+  if (!n) throw new Error(`no node ${id}`);
+  return { x: n.x, y: n.y };
+}
+
+/** Each pipe as "from→to", in document order: the topology at a glance. */
+export const links = (p: Project): string[] => p.pipes.map((x) => `${x.from}→${x.to}`);
