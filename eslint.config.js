@@ -4,7 +4,7 @@ import reactHooks from 'eslint-plugin-react-hooks';
 import globals from 'globals';
 
 export default tseslint.config(
-  { ignores: ['.bench/**', '**/dist/**', '**/node_modules/**', 'e2e/test-results/**', 'e2e/playwright-report/**', 'e2e/artifacts/**', '**/*.d.ts'] },
+  { ignores: ['**/.bench/**', '**/dist/**', '**/node_modules/**', 'e2e/test-results/**', 'e2e/playwright-report/**', 'e2e/artifacts/**', '**/*.d.ts'] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {

@@ -1,11 +1,12 @@
-import { calculationRecord, type FittingAnalysis, type UnitSystem } from '@mainbrace/solver';
+import { calculationRecord, type FittingAnalysis, type Project } from '@mainbrace/solver';
 import { show } from '../format/quantity.js';
 
 /** A fitting's calculation record: each step's formula, its inputs with their sources, and the result. */
-export function CalcRecordView({ fitting, units }: { fitting: FittingAnalysis; units: UnitSystem }) {
+export function CalcRecordView({ fitting, project }: { fitting: FittingAnalysis; project: Project }) {
+  const units = project.units;
   return (
     <ol className="record">
-      {calculationRecord(fitting).map((step, i) => (
+      {calculationRecord(project, fitting).map((step, i) => (
         <li key={i}>
           <div className="record-title">{step.title}</div>
           <code className="record-formula">{step.formula}</code>

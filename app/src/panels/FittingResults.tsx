@@ -1,4 +1,4 @@
-import { horizontalNorm, norm, planBearing, type FittingAnalysis, type Project } from '@mainbrace/solver';
+import { formatDimension, horizontalNorm, norm, planBearing, type FittingAnalysis, type Project } from '@mainbrace/solver';
 import { show } from '../format/quantity.js';
 import { bearingText, fittingTitle } from '../format/fittingNames.js';
 import { CalcRecordView } from './CalcRecordView.js';
@@ -56,17 +56,17 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
       <ul className="restraint">
         {r.block && (
           <li data-testid="block">
-            Bearing block <strong>{show(r.block.faceWidth, 'length', u)} wide × {show(r.block.faceHeight, 'length', u)} high</strong>, {show(r.block.depth, 'length', u)} to the bearing face; bearing area {show(r.block.bearingArea, 'area', u)} needed, {show(r.block.faceWidth * r.block.faceHeight, 'area', u)} given; concrete {show(r.block.concreteVolume, 'volume', u)}. Passive resistance {r.block.passiveRatio.toFixed(2)} × the thrust.
+            Bearing block <strong>{formatDimension(r.block.faceWidth, u)} wide × {formatDimension(r.block.faceHeight, u)} high</strong>, {formatDimension(r.block.depth, u)} from the fitting to the bearing face; bearing area {show(r.block.bearingArea, 'area', u)} needed, {show(r.block.faceWidth * r.block.faceHeight, 'area', u)} given; concrete {show(r.block.concreteVolume, 'volume', u)}. Passive resistance {r.block.passiveRatio.toFixed(2)} × the thrust.
           </li>
         )}
         {r.anchor && (
           <li data-testid="anchor">
-            Gravity anchor <strong>{show(r.anchor.concreteVolume, 'volume', u)}</strong> of concrete ({show(r.anchor.side, 'length', u)} cube){r.anchor.submerged ? ', submerged weight' : ''}.
+            Gravity anchor <strong>{show(r.anchor.concreteVolume, 'volume', u)}</strong> of concrete (a {formatDimension(r.anchor.side, u)} cube){r.anchor.submerged ? ', submerged weight' : ''}.
           </li>
         )}
         {r.trenchBottom && (
           <li>
-            Trench-bottom bearing {show(r.trenchBottom.bearingArea, 'area', u)}: pad {show(r.trenchBottom.width, 'length', u)} × {show(r.trenchBottom.length, 'length', u)}.
+            Trench-bottom bearing {show(r.trenchBottom.bearingArea, 'area', u)}: pad {formatDimension(r.trenchBottom.width, u)} across × {formatDimension(r.trenchBottom.length, u)} along the pipe.
           </li>
         )}
         {r.restrainedLegs.map((l) => (
@@ -91,7 +91,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
       )}
       <details className="record-box">
         <summary>Calculation record</summary>
-        <CalcRecordView fitting={f} units={u} />
+        <CalcRecordView fitting={f} project={project} />
       </details>
     </section>
   );

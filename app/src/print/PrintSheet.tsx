@@ -90,6 +90,11 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
         <section>
           <h2>Schedule</h2>
           <table className="sheet-schedule">
+            <colgroup>
+              {[5, 6, 8, 8, 7, 7, 6, 5, 7, 19, 22].map((w, i) => (
+                <col key={i} style={{ width: `${w}%` }} />
+              ))}
+            </colgroup>
             <thead>
               <tr>
                 <th>Tag</th><th>Chainage</th><th>Fitting</th><th>Pipe OD</th><th>Design pressure</th><th>Governs</th><th>Thrust</th><th>Bears (from N)</th><th>Soil</th><th>Restraint</th><th>Warnings</th>
@@ -137,7 +142,7 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
                 {f.tag} — {fittingTitle(f, u)} (node {f.node.id}
                 {f.node.label ? `, ${f.node.label}` : ''})
               </h3>
-              {calculationRecord(f).length > 0 && <CalcRecordView fitting={f} units={u} />}
+              {calculationRecord(project, f).length > 0 && <CalcRecordView fitting={f} project={project} />}
             </div>
           ))}
         </section>

@@ -9,7 +9,7 @@ import { waterWeightInFitting } from '../thrust/waterWeight.js';
 import { sizeRestraint, type Restraint } from '../restraint/sizeRestraint.js';
 import { thrustSteps } from './thrustSteps.js';
 import { formatSi } from '../units/format.js';
-import type { CalcStep, LazySteps } from './calcRecord.js';
+import type { CalcStep } from './calcRecord.js';
 
 /** Everything computed for one fitting; the schedule, the plan and the record all read this. */
 export interface FittingAnalysis {
@@ -24,8 +24,6 @@ export interface FittingAnalysis {
   /** N, weight of the water in the fitting body (acts in −z; not part of the thrust) */
   waterWeight: number;
   restraint: Restraint;
-  /** the calculation record's parts, built on demand: read it with `calculationRecord` */
-  recordParts: LazySteps[];
   warnings: string[];
 }
 
@@ -39,19 +37,21 @@ export interface Analysis {
 }
 
 function negativePressureWarnings(project: Project, cases: readonly CaseThrust[]): string[] {
-  return cases
-    .filter((c) => c.pressure < 0)
-    .map((c) => {
-      const label = project.loadCases.find((l) => l.id === c.caseId)?.label ?? c.caseId;
-      return `Pressure at this node is below zero (${formatSi(c.pressure, 'pressure', project.units)}) in case "${label}": the node stands above that case's hydraulic grade; check for vacuum and air entry.`;
-    });
+  const out: string[] = [];
+  for (const c of cases) {
+    if (c.pressure >= 0) continue;
+    const label = project.loadCases.find((l) => l.id === c.caseId)?.label ?? c.caseId;
+    out.push(`Pressure at this node is below zero (${formatSi(c.pressure, 'pressure', project.units)}) in case "${label}": the node stands above that case's hydraulic grade; check for vacuum and air entry.`);
+  }
+  return out;
 }
 
 function analyseFitting(project: Project, node: ProjectNode, legs: Leg[], geometry: FittingGeometry, at: number): FittingAnalysis {
   const cases = fittingThrust(node, geometry.kind, legs, project.loadCases, project.water.density);
   const envelope = thrustEnvelope(cases);
   const restraint = sizeRestraint(project, node, legs, geometry, envelope);
-  const warnings = [...negativePressureWarnings(project, cases), ...restraint.warnings];
+  const warnings = negativePressureWarnings(project, cases);
+  for (const w of restraint.warnings) warnings.push(w);
   if (node.valve && geometry.kind === 'valve') {
     warnings.push('Closed valve: the thrust can act either way along the line, depending on which side holds pressure; restrain it for both.');
   } else if (node.valve) {
@@ -68,7 +68,6 @@ function analyseFitting(project: Project, node: ProjectNode, legs: Leg[], geomet
     envelope,
     waterWeight: waterWeightInFitting(legs, project.water.density),
     restraint,
-    recordParts: [() => thrustSteps(project, node, legs, envelope.governing, geometry), ...restraint.steps],
     warnings,
   };
 }
@@ -101,11 +100,15 @@ export function analyse(project: Project): Analysis {
 
 const records = new WeakMap<FittingAnalysis, CalcStep[]>();
 
-/** A fitting's calculation record — thrust, then restraint — built once, when first read. */
-export function calculationRecord(f: FittingAnalysis): CalcStep[] {
+/**
+ * A fitting's calculation record — thrust, then restraint — built when first read by sizing the
+ * fitting again with its record (the schedule never pays for it).
+ */
+export function calculationRecord(project: Project, f: FittingAnalysis): CalcStep[] {
   let r = records.get(f);
   if (!r) {
-    r = f.recordParts.flatMap((part) => part());
+    const restraint = sizeRestraint(project, f.node, f.legs, f.geometry, f.envelope, true);
+    r = [...thrustSteps(project, f.node, f.legs, f.envelope.governing, f.geometry), ...restraint.steps];
     records.set(f, r);
   }
   return r;

@@ -21,9 +21,6 @@ export interface CalcStep {
   reference: string;
 }
 
-/** Steps of a calculation record, built only when someone reads them (the inspector, print, explain). */
-export type LazySteps = () => CalcStep[];
-
 export const value = (
   symbol: string,
   label: string,

@@ -3,13 +3,14 @@ import type { RecordValue } from '../analysis/calcRecord.js';
 import { formatSi } from '../units/format.js';
 import type { UnitSystem } from '../units/conversions.js';
 import { SHORT_CAUTION } from '../schedule/cautions.js';
+import type { Project } from '../model/projectSchema.js';
 
 const shown = (v: RecordValue, units: UnitSystem) => formatSi(v.value, v.dimension, units, 4);
 
 /** A fitting's calculation record as plain text: each step's formula, inputs with sources, result. */
-export function explainText(f: FittingAnalysis, units: UnitSystem): string {
+export function explainText(project: Project, f: FittingAnalysis, units: UnitSystem): string {
   const out = [`${f.tag} (node ${f.node.id}) — ${f.geometry.kind}`, ''];
-  calculationRecord(f).forEach((step, i) => {
+  calculationRecord(project, f).forEach((step, i) => {
     out.push(`${i + 1}. ${step.title}`, `   ${step.formula}`);
     for (const v of step.inputs) out.push(`     ${v.symbol} = ${shown(v, units)}  ${v.label}${v.source ? ` [${v.source}]` : ''}`);
     out.push(`   → ${step.result.symbol} = ${shown(step.result, units)}  ${step.result.label}${step.result.source && step.result.source !== 'computed' ? ` (${step.result.source})` : ''}`);

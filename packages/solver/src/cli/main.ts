@@ -6,6 +6,7 @@ import { runCli } from './run.js';
 const base = process.env.INIT_CWD ?? process.cwd();
 
 process.exitCode = runCli(process.argv.slice(2), {
+  interactive: process.stdout.isTTY === true,
   readFile: (path) => readFileSync(resolve(base, path), 'utf8'),
   out: (text) => process.stdout.write(text),
   err: (text) => process.stderr.write(text),

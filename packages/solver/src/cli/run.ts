@@ -13,6 +13,8 @@ import type { UnitSystem } from '../units/conversions.js';
 
 /** What the command line needs from the outside world, so that it runs in tests without a process. */
 export interface CliIo {
+  /** true when the output goes to a terminal: JSON is then indented for reading */
+  interactive?: boolean;
   /** the file's text, or throws an error with a `code` such as ENOENT */
   readFile: (path: string) => string;
   out: (text: string) => void;
@@ -78,12 +80,14 @@ export function runCli(argv: readonly string[], io: CliIo): number {
         io.err(known ? `node "${id}" needs no restraint (a straight joint, a tie-in or a free node)\n` : `no node "${id}" in ${args.positional[0]}\n`);
         return 2;
       }
-      io.out(explainText(fitting, units));
+      io.out(explainText(project, fitting, units));
       return 0;
     }
     const format = args.options.get('format') ?? 'table';
     const schedule = scheduleOf(analysis);
-    if (format === 'json') io.out(JSON.stringify(schedule, null, 2) + '\n');
+    // Indented for a person at a terminal or with --pretty; compact into pipes and files.
+    const pretty = io.interactive === true || args.options.has('pretty');
+    if (format === 'json') io.out(JSON.stringify(schedule, null, pretty ? 2 : undefined) + '\n');
     else if (format === 'csv') io.out(scheduleCsv(schedule, units, caseLabel));
     else if (format === 'table') io.out(scheduleTable(schedule, units, caseLabel));
     else throw new UsageError(`--format: expected json, csv or table, got "${format}"`);

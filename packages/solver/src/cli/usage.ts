@@ -1,8 +1,9 @@
 export const USAGE = `mainbrace — thrust and restraint at every fitting of a buried water main
 
 Usage:
-  mainbrace schedule FILE [--format json|csv|table] [--units us|si]
-                                  the fitting schedule (default: table, the project's units)
+  mainbrace schedule FILE [--format json|csv|table] [--units us|si] [--pretty]
+                                  the fitting schedule (default: table, the project's units;
+                                  JSON is indented at a terminal or with --pretty)
   mainbrace explain FILE NODE [--units us|si]
                                   the calculation record of one fitting
   mainbrace validate FILE         check a project file

@@ -1,5 +1,5 @@
 import type { Vec3 } from '../geometry/vector.js';
-import { value, type CalcStep, type LazySteps } from '../analysis/calcRecord.js';
+import { value, type CalcStep } from '../analysis/calcRecord.js';
 import { passiveResistance } from './passiveResistance.js';
 import { roundDownTo, roundUpTo } from './rounding.js';
 import { formatSi } from '../units/format.js';
@@ -26,6 +26,8 @@ export interface BearingBlockInput {
   waterDepth: number | null;
   /** display units of the warnings */
   units: UnitSystem;
+  /** build the calculation record too (only when someone reads it) */
+  record?: boolean;
 }
 
 export interface BearingBlock {
@@ -51,7 +53,7 @@ export interface BearingBlock {
 
 export interface BlockResult {
   block: BearingBlock;
-  steps: LazySteps;
+  steps: CalcStep[];
   warnings: string[];
 }
 
@@ -103,7 +105,7 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
     );
   }
   const concreteVolume = width * height * i.blockDepth;
-  const steps = (): CalcStep[] => [
+  const steps: CalcStep[] = !i.record ? [] : [
     {
       title: 'Required bearing area',
       formula: 'A = SF · T_h / σ_b',

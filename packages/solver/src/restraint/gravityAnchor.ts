@@ -1,4 +1,4 @@
-import { value, type CalcStep, type LazySteps } from '../analysis/calcRecord.js';
+import { value, type CalcStep } from '../analysis/calcRecord.js';
 import { WATER_UNIT_WEIGHT } from './passiveResistance.js';
 import { roundUpTo } from './rounding.js';
 
@@ -16,6 +16,8 @@ export interface GravityAnchorInput {
   frictionAngle: number;
   /** m, practical dimension step */
   step: number;
+  /** build the calculation record too */
+  record?: boolean;
 }
 
 export interface GravityAnchor {
@@ -37,7 +39,7 @@ export interface GravityAnchor {
  * memory): the block's weight, submerged below groundwater (§5.3: γc − γw), balances SF × the
  * upward thrust. Base friction uses tan(⅔φ) for concrete cast on soil (common practice).
  */
-export function sizeGravityAnchor(i: GravityAnchorInput): { anchor: GravityAnchor; steps: LazySteps; warnings: string[] } {
+export function sizeGravityAnchor(i: GravityAnchorInput): { anchor: GravityAnchor; steps: CalcStep[]; warnings: string[] } {
   const unitWeight = i.submerged ? i.concreteUnitWeight - WATER_UNIT_WEIGHT : i.concreteUnitWeight;
   const concreteVolume = (i.safetyFactor * i.upward) / unitWeight;
   const side = roundUpTo(Math.cbrt(concreteVolume), i.step);
@@ -48,7 +50,7 @@ export function sizeGravityAnchor(i: GravityAnchorInput): { anchor: GravityAncho
       'Gravity anchor below groundwater: sized with the submerged unit weight of concrete (γc − γw); design for the highest groundwater level.',
     );
   }
-  const steps = (): CalcStep[] => [
+  const steps: CalcStep[] = !i.record ? [] : [
     {
       title: 'Gravity anchor volume',
       formula: i.submerged ? 'V = SF · T_up / (γc − γw)' : 'V = SF · T_up / γc',

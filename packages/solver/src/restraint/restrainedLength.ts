@@ -1,5 +1,5 @@
 import { dot, horizontalNorm, norm, type Vec3 } from '../geometry/vector.js';
-import { value, type CalcStep, type LazySteps } from '../analysis/calcRecord.js';
+import { value, type CalcStep } from '../analysis/calcRecord.js';
 import type { Leg } from '../network/legs.js';
 import type { FittingKind } from '../network/fittingKind.js';
 import type { Soil } from '../model/projectSchema.js';
@@ -24,6 +24,7 @@ export interface RestrainedLengthInput {
   cover: number;
   safetyFactor: number;
   units: UnitSystem;
+  record?: boolean;
 }
 
 const BEND_REFERENCE =
@@ -39,10 +40,10 @@ const UPLIFT_REFERENCE =
  * upward. Every other fitting: L = S_f·|T|/F_s along the pipe the thrust pulls on (the leg pointing
  * most nearly against the thrust: the branch of a tee, the large end of a reducer, the capped pipe).
  */
-export function restrainedLength(i: RestrainedLengthInput): { legs: RestrainedLeg[]; steps: LazySteps; warnings: string[] } {
+export function restrainedLength(i: RestrainedLengthInput): { legs: RestrainedLeg[]; steps: CalcStep[]; warnings: string[] } {
   const warnings: string[] = [];
   const t = norm(i.thrust);
-  const steps: (() => CalcStep)[] = [];
+  const steps: CalcStep[] = [];
   const out: RestrainedLeg[] = [];
   const isBend = (i.kind === 'bend' || i.kind === 'reducing-bend') && i.deflection !== null;
   const upward = i.thrust[2] > horizontalNorm(i.thrust);
@@ -67,7 +68,7 @@ export function restrainedLength(i: RestrainedLengthInput): { legs: RestrainedLe
       continue;
     }
     out.push({ pipe: leg.pipe.id, length });
-    steps.push(() => ({
+    if (i.record) steps.push({
       title: `Restrained length along ${leg.pipe.id}`,
       formula,
       inputs: [
@@ -79,7 +80,7 @@ export function restrainedLength(i: RestrainedLengthInput): { legs: RestrainedLe
       ],
       result: value('L', 'restrained length', length, 'length', 'computed'),
       reference: isBend ? (upward ? UPLIFT_REFERENCE : BEND_REFERENCE) : AXIAL_REFERENCE,
-    }));
+    });
     if (length > leg.length) {
       warnings.push(
         `Restrained length ${formatSi(length, 'length', i.units)} along ${leg.pipe.id} runs past the next node (${formatSi(leg.length, 'length', i.units)} away): the restrained zones of neighbouring fittings encroach and must be designed together.`,
@@ -97,7 +98,7 @@ export function restrainedLength(i: RestrainedLengthInput): { legs: RestrainedLe
   warnings.push(
     'Restrained lengths use coefficients recalled from the ductile-iron design manual (trench K_n, friction and adhesion ratios, encasement 0.7): verify them against the manual before construction.',
   );
-  return { legs: out, steps: () => steps.map((s) => s()), warnings };
+  return { legs: out, steps, warnings };
 }
 
 /** The leg whose direction from the node points most nearly against the thrust. */

@@ -1,5 +1,5 @@
 import { angleBetween, horizontal, horizontalNorm, norm, type Vec3 } from '../geometry/vector.js';
-import { value, type CalcStep, type LazySteps } from '../analysis/calcRecord.js';
+import { value, type CalcStep } from '../analysis/calcRecord.js';
 import { WATER_UNIT_WEIGHT } from './passiveResistance.js';
 import type { Leg } from '../network/legs.js';
 import type { FittingGeometry } from '../network/fittingKind.js';
@@ -19,8 +19,8 @@ export interface Restraint {
   /** m, the longest restrained length of any leg, or null */
   restrainedLength: number | null;
   restrainedLegs: RestrainedLeg[];
-  /** the record of the restraint, in order, built on demand */
-  steps: LazySteps[];
+  /** the record of the restraint, in order (empty unless asked for) */
+  steps: CalcStep[];
   warnings: string[];
 }
 
@@ -50,6 +50,7 @@ export function sizeRestraint(
   legs: readonly Leg[],
   geometry: FittingGeometry,
   envelope: ThrustEnvelope,
+  record = false,
 ): Restraint {
   const { design } = project;
   const units = project.units;
@@ -89,9 +90,10 @@ export function sizeRestraint(
           soil,
           waterDepth,
           units,
+          record,
         });
         out.block = r.block;
-        out.steps.push(r.steps);
+        out.steps.push(...r.steps);
         out.warnings.push(...r.warnings);
         if (acrossTrench(h.direction, legs) && r.block.faceWidth > trenchWidth + 1e-9) {
           out.warnings.push(
@@ -105,9 +107,9 @@ export function sizeRestraint(
     }
     const submerged = gw !== null && gw > node.elevation - od / 2;
     if (present(envelope.upward.force, total)) {
-      const blockHolds = out.block && holdsUplift(out.block, design, submerged, envelope.upward.force);
-      if (blockHolds) out.steps.push(blockHolds);
-      else {
+      const held = out.block !== null && blockHoldsUplift(out.block, design, submerged, envelope.upward.force);
+      if (held && record) out.steps.push(upliftStep(out.block!, design, submerged, envelope.upward.force));
+      if (!held) {
         const r = sizeGravityAnchor({
           upward: envelope.upward.force,
           horizontal: envelope.horizontal.force,
@@ -116,22 +118,23 @@ export function sizeRestraint(
           submerged,
           frictionAngle: soil.frictionAngle,
           step,
+          record,
         });
         out.anchor = r.anchor;
-        out.steps.push(r.steps);
+        out.steps.push(...r.steps);
         out.warnings.push(...r.warnings);
       }
     }
     if (present(envelope.downward.force, total)) {
       const vertical = soil.verticalBearing ?? soil.bearing;
       if (vertical > 0) {
-        const r = sizeTrenchBottom(envelope.downward.force, design.bearingSafetyFactor, vertical, trenchWidth, od, step);
+        const r = sizeTrenchBottom(envelope.downward.force, design.bearingSafetyFactor, vertical, trenchWidth, od, step, record);
         const base = out.block ? out.block.faceWidth * out.block.depth : 0;
         if (base >= r.bearing.bearingArea) {
-          out.steps.push(() => [{ ...r.steps()[0]!, title: 'Bearing on the trench bottom: the block’s base is enough' }]);
+          if (record) out.steps.push({ ...r.steps[0]!, title: 'Bearing on the trench bottom: the block’s base is enough' });
         } else {
           out.trenchBottom = r.bearing;
-          out.steps.push(r.steps);
+          out.steps.push(...r.steps);
         }
       } else {
         out.warnings.push(`No bearing under the fitting: ${soilName} cannot take the downward thrust; restrain the joints or replace the soil.`);
@@ -149,25 +152,31 @@ export function sizeRestraint(
       cover: node.cover,
       safetyFactor: design.restraintSafetyFactor,
       units,
+      record,
     });
     out.restrainedLegs = r.legs;
     out.restrainedLength = r.legs.length ? Math.max(...r.legs.map((l) => l.length)) : null;
-    out.steps.push(r.steps);
+    out.steps.push(...r.steps);
     out.warnings.push(...r.warnings);
   }
   return out;
 }
 
+/** Weight of a bearing block, N: its concrete, submerged where groundwater reaches it. */
+function blockWeight(block: BearingBlock, design: Project['design'], submerged: boolean): number {
+  return (submerged ? design.concreteUnitWeight - WATER_UNIT_WEIGHT : design.concreteUnitWeight) * block.concreteVolume;
+}
+
 /**
- * A bearing block's own weight, submerged where groundwater reaches it, holds a small upward thrust
- * when it is at least SF times that thrust (the same weight rule as a gravity anchor, §5.2); returns
- * the record step then, or null when a gravity anchor is needed.
+ * A bearing block's own weight holds a small upward thrust when it is at least SF times that thrust
+ * (the same weight rule as a gravity anchor, §5.2); no separate anchor is sized then.
  */
-function holdsUplift(block: BearingBlock, design: Project['design'], submerged: boolean, upward: number): LazySteps | null {
+const blockHoldsUplift = (block: BearingBlock, design: Project['design'], submerged: boolean, upward: number) =>
+  blockWeight(block, design, submerged) >= design.upliftSafetyFactor * upward;
+
+function upliftStep(block: BearingBlock, design: Project['design'], submerged: boolean, upward: number): CalcStep {
   const unitWeight = submerged ? design.concreteUnitWeight - WATER_UNIT_WEIGHT : design.concreteUnitWeight;
-  const weight = unitWeight * block.concreteVolume;
-  if (weight < design.upliftSafetyFactor * upward) return null;
-  return (): CalcStep[] => [{
+  return {
     title: 'Upward thrust held by the bearing block’s weight',
     formula: 'γ·V_block ≥ SF · T_up',
     inputs: [
@@ -176,9 +185,9 @@ function holdsUplift(block: BearingBlock, design: Project['design'], submerged: 
       value('V_block', 'bearing block concrete', block.concreteVolume, 'volume', 'computed'),
       value('γ', submerged ? 'submerged unit weight of concrete' : 'unit weight of concrete', unitWeight, 'unitWeight', 'project design'),
     ],
-    result: value('W', 'weight of the block', weight, 'force', 'no separate anchor needed'),
+    result: value('W', 'weight of the block', blockWeight(block, design, submerged), 'force', 'no separate anchor needed'),
     reference: 'Weight ≥ SF × upward thrust (DIPRA gravity block rule, from memory)',
-  }];
+  };
 }
 
 /** True when the bearing direction runs within ACROSS_TRENCH of a pipe's plan axis. */

@@ -1,4 +1,4 @@
-import { value, type LazySteps } from '../analysis/calcRecord.js';
+import { value, type CalcStep } from '../analysis/calcRecord.js';
 import { roundUpTo } from './rounding.js';
 
 export interface TrenchBottomBearing {
@@ -22,12 +22,13 @@ export function sizeTrenchBottom(
   trenchWidth: number,
   outsideDiameter: number,
   step: number,
-): { bearing: TrenchBottomBearing; steps: LazySteps } {
+  record = false,
+): { bearing: TrenchBottomBearing; steps: CalcStep[] } {
   const bearingArea = (safetyFactor * downward) / verticalBearing;
   const length = Math.max(roundUpTo(bearingArea / trenchWidth, step), roundUpTo(outsideDiameter, step));
   return {
     bearing: { bearingArea, width: trenchWidth, length },
-    steps: () => [
+    steps: !record ? [] : [
       {
         title: 'Bearing on the trench bottom',
         formula: 'A = SF · T_down / σ_v;  length = A / trench width',

@@ -1,4 +1,4 @@
-import { formatSi } from '../units/format.js';
+import { formatDimension, formatSi } from '../units/format.js';
 import { norm } from '../geometry/vector.js';
 import type { UnitSystem } from '../units/conversions.js';
 import { CAUTIONS } from './cautions.js';
@@ -9,10 +9,11 @@ export function restraintSummary(f: ScheduleFitting, units: UnitSystem): string 
   const r = f.restraint;
   const parts: string[] = [];
   const len = (m: number) => formatSi(m, 'length', units);
-  if (r.block) parts.push(`block ${len(r.block.faceWidth)} × ${len(r.block.faceHeight)}, ${formatSi(r.block.concreteVolume, 'volume', units)}`);
+  const dim = (m: number) => formatDimension(m, units);
+  if (r.block) parts.push(`block ${dim(r.block.faceWidth)} wide × ${dim(r.block.faceHeight)} high, ${formatSi(r.block.concreteVolume, 'volume', units)}`);
   if (r.anchor) parts.push(`anchor ${formatSi(r.anchor.concreteVolume, 'volume', units)}`);
-  if (r.trenchBottom) parts.push(`bottom pad ${formatSi(r.trenchBottom.bearingArea, 'area', units)}`);
-  if (r.restrainedLength !== null) parts.push(`restrain ${len(r.restrainedLength)} each side`);
+  if (r.trenchBottom) parts.push(`bottom pad ${dim(r.trenchBottom.width)} × ${dim(r.trenchBottom.length)}`);
+  if (r.restrainedLength !== null) parts.push(`restrain ${r.restrainedLegs.map((l) => `${len(l.length)} along ${l.pipe}`).join(', ')}`);
   return parts.length ? parts.join('; ') : '—';
 }
 

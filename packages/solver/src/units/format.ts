@@ -66,3 +66,17 @@ export function formatQuantity(
 
 export const formatSi = (si: number, dim: Dimension, system: UnitSystem, significant = 3) =>
   formatQuantity(si, dim, system, significant).text;
+
+/**
+ * A built dimension as a crew reads it: metres to the centimetre in SI (0.75 m), feet and inches to
+ * the inch in US customary (2 ft 2 in).
+ */
+export function formatDimension(meters: number, system: UnitSystem): string {
+  if (!Number.isFinite(meters)) return '—';
+  if (system === 'si') return `${meters.toFixed(2)} m`;
+  const inches = Math.round(meters / 0.0254);
+  const feet = Math.floor(inches / 12);
+  const rest = inches - feet * 12;
+  if (feet === 0) return `${rest} in`;
+  return rest === 0 ? `${feet} ft` : `${feet} ft ${rest} in`;
+}

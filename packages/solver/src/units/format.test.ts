@@ -1,0 +1,27 @@
+import { describe, it, expect } from 'vitest';
+import { formatDimension, formatNumber, formatQuantity } from './format.js';
+import { LBF } from '../../test/projectBuilder.js';
+
+describe('numbers as an engineer writes them', () => {
+  it('keeps three significant figures but never drops integer digits', () => {
+    expect(formatNumber(29_029.8)).toBe('29,030');
+    expect(formatNumber(0.765367)).toBe('0.765');
+    expect(formatNumber(-12.345)).toBe('-12.3');
+    expect(formatNumber(1_234_567.8)).toBe('1,234,568');
+    expect(formatNumber(-0.0004)).toBe('-0.000400');
+  });
+
+  it('writes forces above 10,000 lbf in kip (screens.md) and carries the unit', () => {
+    expect(formatQuantity(29_030 * LBF, 'force', 'us').text).toBe('29.0 kip');
+    expect(formatQuantity(7_385 * LBF, 'force', 'us').text).toBe('7,385 lbf');
+    expect(formatQuantity(118_040, 'force', 'si').text).toBe('118 kN');
+    expect(formatQuantity(22.5, 'angle', 'si').text).toBe('22.5°');
+  });
+
+  it('gives built dimensions in metres to the centimetre or in feet and inches (26 in = 2 ft 2 in)', () => {
+    expect(formatDimension(0.75, 'si')).toBe('0.75 m');
+    expect(formatDimension(26 * 0.0254, 'us')).toBe('2 ft 2 in');
+    expect(formatDimension(48 * 0.0254, 'us')).toBe('4 ft');
+    expect(formatDimension(10 * 0.0254, 'us')).toBe('10 in');
+  });
+});
