@@ -1,0 +1,90 @@
+import { describe, it, expect, vi, afterEach } from 'vitest';
+import { render, screen, cleanup, act } from '@testing-library/react';
+import { scheduleCsv, scheduleOf, analyse } from '@mainbrace/solver';
+import { createAppStore } from '../state/store.js';
+import { createActions } from '../state/actions.js';
+import { StoreProvider } from '../state/StoreContext.js';
+import { DetailsPanel } from '../panels/DetailsPanel.js';
+import { ErrorBoundary } from './ErrorBoundary.js';
+import { MAX_FILE_BYTES, readProjectFile } from '../files/projectFile.js';
+import { DN300, project } from '../testFixtures.js';
+
+vi.mock('idb-keyval', () => ({ get: vi.fn(async () => undefined), set: vi.fn(async () => Promise.reject(new Error('QuotaExceededError: the disk is full'))) }));
+
+afterEach(cleanup);
+
+const HOSTILE = '<img src=x onerror="window.__pwned=1">';
+const route = () =>
+  project(
+    [{ id: 'n1', x: 0, y: 0 }, { id: 'n2', x: 30, y: 0 }, { id: 'n3', x: 30, y: 30 }],
+    [{ from: 'n1', to: 'n2' }, { from: 'n2', to: 'n3' }],
+  );
+
+describe('robustness of the app at its edges', () => {
+  it('shows a label made of HTML as text, never as markup', () => {
+    const p = route();
+    const hostile = { ...p, nodes: p.nodes.map((n) => (n.id === 'n2' ? { ...n, label: HOSTILE } : n)) };
+    const store = createAppStore(hostile, DN300);
+    const actions = createActions(store);
+    actions.selectNode('n2');
+    const { container } = render(
+      <StoreProvider store={store} actions={actions}>
+        <DetailsPanel />
+      </StoreProvider>,
+    );
+    expect(container.querySelector('img')).toBeNull();
+    expect(screen.getByDisplayValue(HOSTILE)).toBeTruthy();
+    expect((window as unknown as { __pwned?: number }).__pwned).toBeUndefined();
+  });
+
+  it('keeps a label that a spreadsheet would run as a formula inert in the CSV export', () => {
+    const p = route();
+    const withFormula = { ...p, nodes: p.nodes.map((n) => (n.id === 'n2' ? { ...n, label: '=HYPERLINK("x")' } : n)) };
+    const csv = scheduleCsv(scheduleOf(analyse(withFormula)), 'si', (id) => id);
+    expect(csv).toContain(`"'=HYPERLINK(""x"")"`);
+  });
+
+  it('refuses a project file over 20 MB with a message, before reading it', async () => {
+    const big = { name: 'huge.json', size: MAX_FILE_BYTES + 1, text: vi.fn() } as unknown as File;
+    const r = await readProjectFile(big);
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.lines[0]).toMatch(/over 20 MB are refused/);
+    expect((big as unknown as { text: ReturnType<typeof vi.fn> }).text).not.toHaveBeenCalled();
+  });
+
+  it('names the problems of a bad file and leaves the open project as it was', async () => {
+    const file = new File([JSON.stringify({ format: 'mainbrace-project', version: 1, loadCases: [], soils: [] })], 'bad.json');
+    const r = await readProjectFile(file);
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.lines).toContain('loadCases: must have at least one load case');
+  });
+
+  it('shows that autosave failed when storage refuses the project', async () => {
+    const { startAutosave } = await import('../state/autosave.js');
+    const store = createAppStore(route(), DN300);
+    const actions = createActions(store);
+    startAutosave(store, (m) => actions.notify({ tone: 'warning', title: 'Autosave failed', lines: [m] }));
+    actions.renameProject('Kestrel Way main');
+    await act(async () => {
+      await new Promise((r) => setTimeout(r, 600));
+    });
+    expect(store.getState().notice?.title).toBe('Autosave failed');
+    expect(store.getState().notice?.lines[0]).toMatch(/disk is full/);
+  });
+
+  it('shows a recovery screen that keeps the project when a screen fails to render', () => {
+    const store = createAppStore(route(), DN300);
+    const Broken = () => {
+      throw new Error('drawing failed');
+    };
+    vi.spyOn(console, 'error').mockImplementation(() => undefined);
+    render(
+      <ErrorBoundary store={store}>
+        <Broken />
+      </ErrorBoundary>,
+    );
+    expect(screen.getByTestId('recovery').textContent).toMatch(/Your project is safe/);
+    expect(screen.getByText('Save the project')).toBeTruthy();
+    expect(store.getState().project.nodes).toHaveLength(3);
+  });
+});
