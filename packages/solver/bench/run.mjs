@@ -28,4 +28,7 @@ function median(cmd, args, repeats = 11) {
 const file = join(out, 'route-10000.json');
 const bare = median(process.execPath, ['-e', `JSON.parse(require('fs').readFileSync(${JSON.stringify(file)}, 'utf8'))`]);
 const cli = median(process.execPath, [join(root, 'packages/solver/bin/mainbrace.mjs'), 'schedule', file, '--format', 'json']);
+const table = median(process.execPath, [join(root, 'packages/solver/bin/mainbrace.mjs'), 'schedule', file]);
+const validate = median(process.execPath, [join(root, 'packages/solver/bin/mainbrace.mjs'), 'validate', file]);
+console.log(`cli     10,000-node file: validate ${validate.toFixed(0)} ms (${(validate / bare).toFixed(2)}×), schedule as a table ${table.toFixed(0)} ms (${(table / bare).toFixed(2)}×)`);
 console.log(`cli     10,000-node file: schedule --format json ${cli.toFixed(0)} ms; bare node read + JSON.parse ${bare.toFixed(0)} ms; ratio ${(cli / bare).toFixed(2)} (goal ≤ 3)`);

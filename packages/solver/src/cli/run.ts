@@ -6,6 +6,8 @@ import { problemText } from '../model/problems.js';
 import { projectJsonSchema } from '../model/jsonSchema.js';
 import type { Project } from '../model/projectSchema.js';
 import { analyse } from '../analysis/analyse.js';
+import { legsByNode } from '../network/legs.js';
+import { fittingGeometry, needsRestraint } from '../network/fittingKind.js';
 import { scheduleOf } from '../schedule/scheduleRows.js';
 import { scheduleCsv } from '../schedule/scheduleCsv.js';
 import { scheduleTable } from '../schedule/scheduleTable.js';
@@ -64,12 +66,15 @@ export function runCli(argv: readonly string[], io: CliIo): number {
       return 2;
     }
     const project = loaded;
-    const analysis = analyse(project);
     const caseLabel = (id: string) => project.loadCases.find((c) => c.id === id)?.label ?? id;
     if (args.command === 'validate') {
-      io.out(`${args.positional[0]}: valid — ${project.nodes.length} nodes, ${project.pipes.length} pipes, ${analysis.fittings.length} fittings to restrain\n`);
+      // Naming the fittings is enough here; sizing them is the schedule's work.
+      const legs = legsByNode(project);
+      const fittings = project.nodes.filter((n) => needsRestraint(fittingGeometry(n, legs.get(n.id) ?? []).kind)).length;
+      io.out(`${args.positional[0]}: valid — ${project.nodes.length} nodes, ${project.pipes.length} pipes, ${fittings} fittings to restrain\n`);
       return 0;
     }
+    const analysis = analyse(project);
     const units = unitsOption(args.options.get('units'), project);
     if (args.command === 'explain') {
       const id = args.positional[1];
