@@ -3,7 +3,7 @@ import { useActions, useApp, useAppStore } from '../state/StoreContext.js';
 import type { ToolName } from '../state/store.js';
 
 const TOOLS: { tool: ToolName; label: string; key: string; icon: string }[] = [
-  { tool: 'select', label: 'Select and move', key: 'V', icon: 'M5 3 L5 19 L9.5 14.5 L12.5 21 L15 20 L12 13.5 L18 13.5 Z' },
+  { tool: 'select', label: 'Select and move — drag empty ground to pan, Shift-drag to box-select', key: 'V', icon: 'M5 3 L5 19 L9.5 14.5 L12.5 21 L15 20 L12 13.5 L18 13.5 Z' },
   { tool: 'draw', label: 'Draw main', key: 'D', icon: 'M3 19 L9 19 L15 9 L21 9 M9 19 m-2 0 a2 2 0 1 0 4 0 a2 2 0 1 0 -4 0 M15 9 m-2 0 a2 2 0 1 0 4 0 a2 2 0 1 0 -4 0' },
   { tool: 'pan', label: 'Pan', key: 'H', icon: 'M12 2 L12 22 M2 12 L22 12 M12 2 l-3 3 M12 2 l3 3 M12 22 l-3 -3 M12 22 l3 -3 M2 12 l3 -3 M2 12 l3 3 M22 12 l-3 -3 M22 12 l-3 3' },
 ];

@@ -36,6 +36,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
             <th>Dynamic</th>
             <th>Total</th>
             <th>Up (+)</th>
+            <th>Bears</th>
           </tr>
         </thead>
         <tbody>
@@ -47,6 +48,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
               <td>{show(norm(c.dynamic), 'force', u)}</td>
               <td>{show(norm(c.total), 'force', u)}</td>
               <td>{show(c.total[2], 'force', u)}</td>
+              <td>{bearingText(horizontalNorm(c.total) > 0 ? planBearing([c.total[0], c.total[1], 0]) : null)}</td>
             </tr>
           ))}
         </tbody>

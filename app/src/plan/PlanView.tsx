@@ -3,7 +3,7 @@ import { Layer, Shape, Stage } from 'react-konva';
 import type { Context } from 'konva/lib/Context';
 import { FOOT } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp, useAppStore } from '../state/StoreContext.js';
-import { fitView, panBy, toPlan, zoomAt, type ScreenPoint } from '../state/viewport.js';
+import { fitView, panBy, toPlan, toScreen, zoomAt, type ScreenPoint } from '../state/viewport.js';
 import type { PlanPoint } from '../state/documentEdits.js';
 import { dragScene, planScene } from './planScene.js';
 import { hitTest, inBox } from './hitTest.js';
@@ -35,7 +35,7 @@ export function PlanView() {
   const [size, setSize] = useState({ width: 800, height: 500 });
   const [selectBox, setSelectBox] = useState<{ from: PlanPoint; to: PlanPoint } | null>(null);
   const selectState = useRef<SelectState>({ phase: 'idle' });
-  const panning = useRef<{ last: ScreenPoint } | null>(null);
+  const panning = useRef<{ last: ScreenPoint; start: ScreenPoint; clearOnClick: boolean } | null>(null);
   const spaceDown = useRef(false);
   const fitted = useRef(false);
 
@@ -89,6 +89,19 @@ export function PlanView() {
     [viewport, size, scene, project.units],
   );
 
+  // A fitting picked in the schedule or a list may be off screen: bring it to the middle.
+  useEffect(() => {
+    if (selection.nodes.size !== 1 || selection.pipes.size !== 0) return;
+    const id = [...selection.nodes][0]!;
+    const n = store.getState().project.nodes.find((x) => x.id === id);
+    const v = store.getState().viewport;
+    if (!n) return;
+    const s = toScreen(v, n);
+    if (s.sx < 20 || s.sy < 20 || s.sx > size.width - 20 || s.sy > size.height - 20) {
+      actions.setViewport({ ...v, left: n.x - size.width / 2 / v.scale, top: n.y + size.height / 2 / v.scale });
+    }
+  }, [selection, size, store, actions]);
+
   const markedDrawn = useRef(false);
   useEffect(() => {
     // A mark for the start-up benchmark: the first time the route is on screen.
@@ -113,7 +126,7 @@ export function PlanView() {
     box.current?.focus();
     const s = store.getState();
     if (e.button === 1 || s.tool === 'pan' || spaceDown.current) {
-      panning.current = { last: local(e) };
+      panning.current = { last: local(e), start: local(e), clearOnClick: false };
       e.currentTarget.setPointerCapture(e.pointerId);
       return;
     }
@@ -127,6 +140,11 @@ export function PlanView() {
       return;
     }
     e.currentTarget.setPointerCapture(e.pointerId);
+    if (hit.kind === 'none' && !e.shiftKey) {
+      // Dragging empty ground pans the plan; a click there clears the selection. Shift-drag draws a box.
+      panning.current = { last: local(e), start: local(e), clearOnClick: true };
+      return;
+    }
     selectState.current = selectStep(selectState.current, { type: 'down', at, hit, additive: e.shiftKey }, selectCtx()).state;
   };
 
@@ -168,7 +186,10 @@ export function PlanView() {
 
   const onPointerUp = (e: ReactPointerEvent<HTMLDivElement>) => {
     if (panning.current) {
+      const p = local(e);
+      const { start, clearOnClick } = panning.current;
       panning.current = null;
+      if (clearOnClick && Math.hypot(p.sx - start.sx, p.sy - start.sy) < 4) actions.clearSelection();
       return;
     }
     const s = store.getState();
