@@ -101,7 +101,7 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
   const passiveRatio = passive / i.thrust;
   if (passiveRatio < i.safetyFactor) {
     warnings.push(
-      `Passive soil resistance of the face is only ${passiveRatio.toFixed(2)} × the thrust, below the safety factor ${i.safetyFactor}: enlarge or deepen the block, or have the soil checked.`,
+      `Passive soil resistance of the face (Rankine, 2-D, conservative for a narrow block) is only ${passiveRatio.toFixed(2)} × the thrust, below the safety factor ${i.safetyFactor}: enlarge or deepen the block, or have the soil checked.`,
     );
   }
   const concreteVolume = width * height * i.blockDepth;
