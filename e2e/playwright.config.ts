@@ -1,6 +1,8 @@
 import { defineConfig } from '@playwright/test';
 
 // Debian's chromium, never a downloaded browser; the flags keep it off the closed network.
+const port = Number(process.env.E2E_PORT ?? 4173);
+
 export default defineConfig({
   testDir: './journeys',
   outputDir: './test-results',
@@ -10,7 +12,7 @@ export default defineConfig({
   workers: 1,
   reporter: [['list']],
   use: {
-    baseURL: 'http://127.0.0.1:4173',
+    baseURL: `http://127.0.0.1:${port}`,
     viewport: { width: 1440, height: 900 },
     screenshot: 'only-on-failure',
     launchOptions: {
@@ -19,8 +21,8 @@ export default defineConfig({
     },
   },
   webServer: {
-    command: 'pnpm --filter app build --mode test && pnpm --filter app preview',
-    url: 'http://127.0.0.1:4173',
+    command: `pnpm --filter app build --mode test && pnpm --filter app exec vite preview --host 127.0.0.1 --port ${port} --strictPort`,
+    url: `http://127.0.0.1:${port}`,
     reuseExistingServer: false,
     timeout: 120_000,
   },
