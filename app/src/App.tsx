@@ -7,7 +7,7 @@ import { DetailsPanel } from './panels/DetailsPanel.js';
 import { Drawer } from './panels/Drawer.js';
 import { PrintSheet } from './print/PrintSheet.js';
 import { useActions } from './state/StoreContext.js';
-import { readProjectFile } from './files/projectFile.js';
+import { openProjectFile } from './files/projectFile.js';
 
 /** One window: top bar, tool strip, plan, details panel, and the drawer of route-wide views. */
 export function App() {
@@ -18,12 +18,7 @@ export function App() {
     e.preventDefault();
     setDropping(false);
     const file = e.dataTransfer.files[0];
-    if (!file) return;
-    const r = await readProjectFile(file);
-    if (r.ok) {
-      actions.replaceProject(r.project);
-      actions.notify({ tone: 'info', title: `Opened ${file.name}`, lines: [] });
-    } else actions.notify({ tone: 'error', title: `${file.name} was not opened — your project is unchanged`, lines: r.lines });
+    if (file) await openProjectFile(file, actions);
   };
   return (
     <div

@@ -3,10 +3,7 @@ import { MainbracePage, magnitude, pressureAt } from '../pages/mainbrace.js';
 
 test('drawing a three-leg route by clicks gives two bends and two dead ends with the textbook thrust', async ({ page }) => {
   const app = new MainbracePage(page);
-  await app.gotoFresh();
-  await app.newProject();
-  await app.tool('fit');
-  await app.snapping(false);
+  await app.blankCanvas();
   await app.draw([
     [0, 0],
     [60, 0],
@@ -41,10 +38,7 @@ test('drawing a three-leg route by clicks gives two bends and two dead ends with
 
 test('starting a run on a pipe splits it into a tee that pushes p·A of the branch away from it', async ({ page }) => {
   const app = new MainbracePage(page);
-  await app.gotoFresh();
-  await app.newProject();
-  await app.tool('fit');
-  await app.snapping(false);
+  await app.blankCanvas();
   await app.draw([
     [0, 0],
     [100, 0],

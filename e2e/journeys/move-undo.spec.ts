@@ -3,10 +3,7 @@ import { MainbracePage, magnitude } from '../pages/mainbrace.js';
 
 test('moving a node changes its thrust, and undo and redo restore both exactly', async ({ page }) => {
   const app = new MainbracePage(page);
-  await app.gotoFresh();
-  await app.newProject();
-  await app.tool('fit');
-  await app.snapping(false);
+  await app.blankCanvas();
   await app.draw([
     [0, 0],
     [60, 0],

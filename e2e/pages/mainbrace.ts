@@ -81,6 +81,14 @@ export class MainbracePage {
     await expect.poll(async () => (await this.project()).nodes.length).toBe(0);
   }
 
+  /** A fresh app with a new, empty project in the default view and snapping off: ready to draw. */
+  async blankCanvas() {
+    await this.gotoFresh();
+    await this.newProject();
+    await this.tool('fit');
+    await this.snapping(false);
+  }
+
   async tool(name: 'select' | 'draw' | 'pan' | 'fit' | 'snap') {
     await this.page.getByTestId(`tool-${name}`).click();
   }

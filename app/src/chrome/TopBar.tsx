@@ -1,6 +1,6 @@
 import { useRef, useState } from 'react';
 import { useActions, useApp, useAppStore } from '../state/StoreContext.js';
-import { download, fileStem, projectText, readProjectFile, scheduleCsvText, scheduleJsonText } from '../files/projectFile.js';
+import { download, fileStem, openProjectFile, projectText, scheduleCsvText, scheduleJsonText } from '../files/projectFile.js';
 import { newProject } from '../files/newProject.js';
 import { CautionDialog } from './CautionDialog.js';
 
@@ -17,12 +17,7 @@ export function TopBar({ onPrint }: { onPrint: () => void }) {
   const fileInput = useRef<HTMLInputElement>(null);
 
   const open = async (file: File | undefined) => {
-    if (!file) return;
-    const r = await readProjectFile(file);
-    if (r.ok) {
-      actions.replaceProject(r.project);
-      actions.notify({ tone: 'info', title: `Opened ${file.name}`, lines: [] });
-    } else actions.notify({ tone: 'error', title: `${file.name} was not opened — your project is unchanged`, lines: r.lines });
+    if (file) await openProjectFile(file, actions);
   };
   const project = () => store.getState().project;
   const caseValue = caseView.kind === 'envelope' ? '__envelope' : caseView.id;

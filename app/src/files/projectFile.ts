@@ -46,3 +46,15 @@ export function scheduleCsvText(p: Project): string {
   const label = (id: string) => p.loadCases.find((c) => c.id === id)?.label ?? id;
   return scheduleCsv(scheduleOf(analyse(p)), p.units, label);
 }
+
+/** Opens a dropped or chosen file: the project is replaced only if the file is valid, and the user is told. */
+export async function openProjectFile(
+  file: File,
+  actions: { replaceProject: (p: Project) => void; notify: (n: { tone: 'info' | 'error'; title: string; lines: string[] }) => void },
+): Promise<void> {
+  const r = await readProjectFile(file);
+  if (r.ok) {
+    actions.replaceProject(r.project);
+    actions.notify({ tone: 'info', title: `Opened ${file.name}`, lines: [] });
+  } else actions.notify({ tone: 'error', title: `${file.name} was not opened — your project is unchanged`, lines: r.lines });
+}

@@ -56,16 +56,8 @@ export interface Schedule {
 
 function row(a: Analysis, f: FittingAnalysis): ScheduleFitting {
   const { restraint: r, envelope: e, geometry: g } = f;
-  const block = r.block && {
-    bearingArea: r.block.bearingArea,
-    faceWidth: r.block.faceWidth,
-    faceHeight: r.block.faceHeight,
-    concreteVolume: r.block.concreteVolume,
-    depth: r.block.depth,
-    direction: r.block.direction,
-    passiveResistance: r.block.passiveResistance,
-    passiveRatio: r.block.passiveRatio,
-  };
+  // The schedule keeps every block field but the depth of the face bottom, an intermediate value.
+  const block = r.block && (({ bottomDepth: _bottom, ...rest }) => rest)(r.block);
   return {
     node: f.node.id,
     tag: f.tag,
