@@ -1,4 +1,4 @@
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { createAppStore } from './store.js';
 import { createActions } from './actions.js';
 import { DN300, emptyProject, project } from '../testFixtures.js';
@@ -119,5 +119,25 @@ describe('replaceProject', () => {
     expect(undoSteps()).toBe(1);
     actions.undo();
     expect(store.getState().project).toBe(doc);
+  });
+});
+
+describe('typing into a text field', () => {
+  it('makes one undo step for a burst of keystrokes, and a new one after a pause', () => {
+    const store = createAppStore(project([{ id: 'n1', x: 0, y: 0 }, { id: 'n2', x: 10, y: 0 }], [{ from: 'n1', to: 'n2' }]), DN300);
+    const actions = createActions(store);
+    const original = store.getState().project.name;
+    vi.useFakeTimers();
+    try {
+      for (const name of ['F', 'Fe', 'Fen', 'Fenw']) actions.renameProject(name);
+      vi.advanceTimersByTime(2000);
+      actions.renameProject('Fenwick');
+    } finally {
+      vi.useRealTimers();
+    }
+    actions.undo();
+    expect(store.getState().project.name).toBe('Fenw');
+    actions.undo();
+    expect(store.getState().project.name).toBe(original);
   });
 });

@@ -5,6 +5,9 @@ import { addRoute, deleteItems, moveNodes, updateNode, updatePipe, type PipeSpec
 import type { Viewport } from './viewport.js';
 import type { DrawState } from '../tools/drawTool.js';
 
+/** Typing pauses shorter than this, ms, keep extending the same undo step. */
+const TYPING_WINDOW_MS = 1500;
+
 /** Keeps a selection to ids that still exist (after undo, delete or open). */
 function prune(sel: Selection, p: Project): Selection {
   const nodes = new Set(p.nodes.map((n) => n.id));
@@ -23,7 +26,7 @@ export function createActions(store: AppStore) {
    * An undoable edit: a new document from the old one. A change that would leave the document
    * invalid (two nodes on one point, an ID above the OD) is refused with a message, never stored.
    */
-  const edit = (change: (p: Project) => Project) => {
+  const edit = (change: (p: Project) => Project, typing?: string) => {
     const before = get().project;
     const after = change(before);
     if (after === before) return;
@@ -32,10 +35,17 @@ export function createActions(store: AppStore) {
       set({ notice: { tone: 'error', title: 'That change was not made: it would leave the project invalid', lines: check.lines } });
       return;
     }
+    // Keystrokes into one text field within a moment of each other are one undo step, not one per letter.
+    const now = Date.now();
+    const same = typing !== undefined && lastTyping?.key === typing && now - lastTyping.at < TYPING_WINDOW_MS;
+    lastTyping = typing === undefined ? null : { key: typing, at: now };
+    if (same) history().pause();
     set({ project: after, selection: prune(get().selection, after) });
+    if (same) history().resume();
   };
   const history = () => store.temporal.getState();
   let liveStart: Project | null = null;
+  let lastTyping: { key: string; at: number } | null = null;
 
   return {
     // ——— document edits (undoable)
@@ -50,16 +60,18 @@ export function createActions(store: AppStore) {
       edit((p) => deleteItems(p, nodes, pipes));
       set({ selection: EMPTY_SELECTION });
     },
-    updateNode: (id: string, patch: Partial<ProjectNode>) => edit((p) => updateNode(p, id, patch)),
-    updatePipe: (id: string, patch: Partial<Pipe>) => edit((p) => updatePipe(p, id, patch)),
-    renameProject: (name: string) => edit((p) => ({ ...p, name })),
+    updateNode: (id: string, patch: Partial<ProjectNode>) => edit((p) => updateNode(p, id, patch), 'label' in patch ? `node-label-${id}` : undefined),
+    updatePipe: (id: string, patch: Partial<Pipe>) => edit((p) => updatePipe(p, id, patch), 'label' in patch ? `pipe-label-${id}` : undefined),
+    renameProject: (name: string) => edit((p) => ({ ...p, name }), 'project-name'),
     setUnits: (units: Project['units']) => edit((p) => (p.units === units ? p : { ...p, units })),
     updateDesign: (patch: Partial<Project['design']>) => edit((p) => ({ ...p, design: { ...p.design, ...patch } })),
     setWaterDensity: (density: number) => edit((p) => ({ ...p, water: { density } })),
-    updateCase: (id: string, patch: Partial<LoadCase>) => edit((p) => ({ ...p, loadCases: p.loadCases.map((c) => (c.id === id ? { ...c, ...patch, id } : c)) })),
+    updateCase: (id: string, patch: Partial<LoadCase>) =>
+      edit((p) => ({ ...p, loadCases: p.loadCases.map((c) => (c.id === id ? { ...c, ...patch, id } : c)) }), 'label' in patch ? `case-label-${id}` : undefined),
     addCase: (c: LoadCase) => edit((p) => ({ ...p, loadCases: [...p.loadCases, c] })),
     removeCase: (id: string) => edit((p) => (p.loadCases.length <= 1 ? p : { ...p, loadCases: p.loadCases.filter((c) => c.id !== id) })),
-    updateSoil: (id: string, patch: Partial<Soil>) => edit((p) => ({ ...p, soils: p.soils.map((s) => (s.id === id ? { ...s, ...patch, id } : s)) })),
+    updateSoil: (id: string, patch: Partial<Soil>) =>
+      edit((p) => ({ ...p, soils: p.soils.map((s) => (s.id === id ? { ...s, ...patch, id } : s)) }), 'label' in patch ? `soil-label-${id}` : undefined),
     addSoil: (soil: Soil) => edit((p) => ({ ...p, soils: [...p.soils, soil] })),
     removeSoil: (id: string) =>
       edit((p) => {
