@@ -1,0 +1,51 @@
+import { test, expect, type Page } from '@playwright/test';
+import { MainbracePage } from '../pages/mainbrace.js';
+
+/** The project text the app keeps in IndexedDB (idb-keyval's default store), or null. */
+function kept(page: Page): Promise<{ name: string; loadCases: { id: string; pressure: number }[] } | null> {
+  return page.evaluate(
+    () =>
+      new Promise((resolve) => {
+        const open = indexedDB.open('keyval-store');
+        open.onerror = () => resolve(null);
+        open.onsuccess = () => {
+          const db = open.result;
+          if (!db.objectStoreNames.contains('keyval')) return resolve(null);
+          const get = db.transaction('keyval').objectStore('keyval').get('mainbrace.project.v1');
+          get.onsuccess = () => resolve(typeof get.result === 'string' ? JSON.parse(get.result) : null);
+          get.onerror = () => resolve(null);
+        };
+      }),
+  );
+}
+
+test('a renamed project with a new test pressure comes back as it was after a reload', async ({ page }) => {
+  const app = new MainbracePage(page);
+  await app.gotoFresh();
+  await page.getByLabel('Project name').fill('Brackenfold Lane main, phase 3');
+  await app.drawerTab('cases');
+  const field = page.getByTestId('test-pressure');
+  await field.fill('1250');
+  await field.press('Enter');
+  await expect.poll(async () => (await app.project()).loadCases.find((c) => c.id === 'test')!.pressure).toBe(1_250_000);
+
+  // Autosave writes shortly after the last edit: wait until storage holds both edits, not for a fixed time.
+  await expect
+    .poll(async () => {
+      const k = await kept(page);
+      return k && [k.name, k.loadCases.find((c) => c.id === 'test')?.pressure];
+    })
+    .toEqual(['Brackenfold Lane main, phase 3', 1_250_000]);
+  const before = await app.project();
+  const scheduleBefore = await app.schedule();
+
+  await page.reload();
+  await app.ready();
+  await expect.poll(async () => (await app.project()).name).toBe('Brackenfold Lane main, phase 3');
+  expect(await app.project()).toEqual(before);
+  expect(await app.schedule()).toEqual(scheduleBefore);
+  await expect(page.getByLabel('Project name')).toHaveValue('Brackenfold Lane main, phase 3');
+  await app.drawerTab('cases');
+  await expect(page.getByTestId('test-pressure')).toHaveValue('1250');
+  await app.shot('reload-restore');
+});
