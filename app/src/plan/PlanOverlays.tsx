@@ -76,6 +76,12 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
           <span className="legend-swatch legend-restrained" /> restrained joints
         </div>
         <div className="legend-row">
+          <svg width="30" height="10" aria-hidden="true">
+            <circle cx="15" cy="5" r="4" fill={PALETTE.paper} stroke={PALETTE.ink} strokeWidth="1.2" />
+          </svg>
+          tie-in to an existing main
+        </div>
+        <div className="legend-row">
           <span className="legend-warn" aria-hidden="true">!</span> warning
         </div>
       </div>

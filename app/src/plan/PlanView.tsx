@@ -7,7 +7,8 @@ import { fitView, panBy, toPlan, toScreen, zoomAt, type ScreenPoint } from '../s
 import type { PlanPoint } from '../state/documentEdits.js';
 import { dragScene, planScene } from './planScene.js';
 import { hitTest, inBox } from './hitTest.js';
-import { drawArrows, drawFittings, drawPipes, drawRestraints } from './drawRoute.js';
+import { drawArrows, drawFittings, drawPipes, drawRestraints, placeTags } from './drawRoute.js';
+import { LabelSpace } from './labelSpace.js';
 import { drawGrid } from './drawGrid.js';
 import { drawOverlay } from './drawOverlay.js';
 import { drawStep, type DrawContext } from '../tools/drawTool.js';
@@ -83,8 +84,10 @@ export function PlanView() {
       drawGrid(ctx, viewport, size.width, size.height, project.units);
       drawRestraints(ctx, viewport, scene);
       drawPipes(ctx, viewport, scene);
-      drawArrows(ctx, viewport, scene, project.units);
-      drawFittings(ctx, viewport, scene);
+      const space = new LabelSpace(size.width, size.height);
+      const tags = placeTags(ctx, viewport, scene, space);
+      drawArrows(ctx, viewport, scene, project.units, space);
+      drawFittings(ctx, viewport, scene, tags);
     },
     [viewport, size, scene, project.units],
   );
@@ -271,7 +274,7 @@ export function PlanView() {
               const ctx = native(c);
               if (moving) {
                 drawPipes(ctx, viewport, moving);
-                drawFittings(ctx, viewport, moving);
+                drawFittings(ctx, viewport, moving, placeTags(ctx, viewport, moving, new LabelSpace(size.width, size.height)));
               }
               drawOverlay(ctx, viewport, draw, selectBox, units, snappedNow);
             }}

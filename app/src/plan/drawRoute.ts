@@ -2,8 +2,11 @@ import { formatSi, type UnitSystem } from '@mainbrace/solver';
 import type { Scene, SceneFitting } from './planScene.js';
 import { toScreen, type Viewport } from '../state/viewport.js';
 import { MATERIAL_DASH, PALETTE, pipeWidth } from './palette.js';
+import type { LabelSpace } from './labelSpace.js';
 
 type Ctx = CanvasRenderingContext2D;
+
+const ARROW_FONT = '600 10.5px system-ui, sans-serif';
 
 /** Longest thrust arrow on the plan, px; every arrow is scaled to the largest force (one scale). */
 export const ARROW_PX = 72;
@@ -182,20 +185,49 @@ export function label(ctx: Ctx, text: string, x: number, y: number, color: strin
   ctx.fillText(text, x, y);
 }
 
-/** Keeps labels apart: a label whose spot is taken by an earlier one is skipped. */
-function declutter(cell = 26) {
-  const taken = new Set<string>();
-  return (x: number, y: number) => {
-    const key = `${Math.round(x / cell)},${Math.round(y / cell)}`;
-    if (taken.has(key)) return false;
-    taken.add(key);
-    return true;
-  };
+/** The warning marker beside a tag: a triangle with "!" (never colour alone). */
+function warningMark(ctx: Ctx, wx: number, ty: number) {
+  ctx.beginPath();
+  ctx.moveTo(wx, ty - 6);
+  ctx.lineTo(wx + 6.5, ty + 5.5);
+  ctx.lineTo(wx - 6.5, ty + 5.5);
+  ctx.closePath();
+  ctx.fillStyle = PALETTE.warning;
+  ctx.fill();
+  ctx.strokeStyle = PALETTE.ink;
+  ctx.lineWidth = 1;
+  ctx.stroke();
+  ctx.fillStyle = PALETTE.ink;
+  ctx.font = 'bold 8px system-ui, sans-serif';
+  ctx.textAlign = 'center';
+  ctx.fillText('!', wx, ty + 1.5);
 }
 
-/** Fitting symbols, tags and warning markers (a triangle with "!", so not by colour alone). */
-export function drawFittings(ctx: Ctx, v: Viewport, scene: Scene) {
-  const free = declutter();
+const TAG_FONT = '600 11px system-ui, sans-serif';
+
+/** Tags get their room first (above right of the symbol, else the other corners); selected ones always show. */
+export function placeTags(ctx: Ctx, v: Viewport, scene: Scene, space: LabelSpace): Map<string, { x: number; y: number }> {
+  ctx.font = TAG_FONT;
+  const out = new Map<string, { x: number; y: number }>();
+  const ordered = [...scene.fittings].sort((a, b) => Number(b.selected) - Number(a.selected));
+  for (const f of ordered) {
+    const s = toScreen(v, f.at);
+    const w = ctx.measureText(f.tag).width + (f.warned ? 18 : 0) + 4;
+    const h = 14;
+    const spot = space.place([
+      { x: s.sx + 8, y: s.sy - 19, w, h },
+      { x: s.sx - 8 - w, y: s.sy - 19, w, h },
+      { x: s.sx + 8, y: s.sy + 5, w, h },
+      { x: s.sx - 8 - w, y: s.sy + 5, w, h },
+    ]);
+    if (spot) out.set(f.node, { x: spot.x + 1, y: spot.y + h / 2 });
+    else if (f.selected) out.set(f.node, { x: s.sx + 9, y: s.sy - 12 });
+  }
+  return out;
+}
+
+/** Fitting symbols with their placed tags and warning markers; plain nodes and tie-ins. */
+export function drawFittings(ctx: Ctx, v: Viewport, scene: Scene, tags: ReadonlyMap<string, { x: number; y: number }>) {
   for (const n of scene.plainNodes) {
     const s = toScreen(v, n.at);
     ctx.beginPath();
@@ -205,7 +237,6 @@ export function drawFittings(ctx: Ctx, v: Viewport, scene: Scene) {
     ctx.strokeStyle = PALETTE.ink;
     ctx.lineWidth = 1.2;
     ctx.stroke();
-    if (n.tieIn && free(s.sx + 8, s.sy - 10)) label(ctx, 'tie-in', s.sx + 8, s.sy - 10, PALETTE.gridLabel, '10px system-ui, sans-serif');
   }
   for (const f of scene.fittings) {
     const s = toScreen(v, f.at);
@@ -217,34 +248,16 @@ export function drawFittings(ctx: Ctx, v: Viewport, scene: Scene) {
       ctx.stroke();
     }
     symbol(ctx, f, s.sx, s.sy);
-    const tx = s.sx + 9, ty = s.sy - 12;
-    if (free(tx, ty) || f.selected) {
-      label(ctx, f.tag, tx, ty);
-      if (f.warned) {
-        const wx = tx + ctx.measureText(f.tag).width + 10;
-        ctx.beginPath();
-        ctx.moveTo(wx, ty - 6);
-        ctx.lineTo(wx + 6.5, ty + 5.5);
-        ctx.lineTo(wx - 6.5, ty + 5.5);
-        ctx.closePath();
-        ctx.fillStyle = PALETTE.warning;
-        ctx.fill();
-        ctx.strokeStyle = PALETTE.ink;
-        ctx.lineWidth = 1;
-        ctx.stroke();
-        ctx.fillStyle = PALETTE.ink;
-        ctx.font = 'bold 8px system-ui, sans-serif';
-        ctx.textAlign = 'center';
-        ctx.fillText('!', wx, ty + 1.5);
-      }
-    }
+    const at = tags.get(f.node);
+    if (!at) continue;
+    label(ctx, f.tag, at.x, at.y, PALETTE.ink, TAG_FONT);
+    if (f.warned) warningMark(ctx, at.x + ctx.measureText(f.tag).width + 10, at.y);
   }
 }
 
 /** Thrust arrows from each fitting in the direction the water pushes it, one force scale for the plan. */
-export function drawArrows(ctx: Ctx, v: Viewport, scene: Scene, units: UnitSystem) {
+export function drawArrows(ctx: Ctx, v: Viewport, scene: Scene, units: UnitSystem, space: LabelSpace) {
   if (scene.largestForce <= 0) return;
-  const free = declutter(30);
   for (const a of scene.arrows) {
     const s = toScreen(v, a.at);
     const length = a.horizontal > 0 ? Math.max(10, (ARROW_PX * a.horizontal) / scene.largestForce) : 0;
@@ -268,11 +281,14 @@ export function drawArrows(ctx: Ctx, v: Viewport, scene: Scene, units: UnitSyste
     const total = Math.hypot(a.horizontal, a.vertical);
     let text = formatSi(a.horizontal, 'force', units);
     if (Math.abs(a.vertical) > 0.02 * total) text += `  ${a.vertical > 0 ? '↑' : '↓'} ${formatSi(Math.abs(a.vertical), 'force', units)}`;
-    const lx = ex + (ux >= 0 ? 4 : -4), ly = ey + (uy >= 0 ? 9 : -9);
-    if (free(lx, ly)) {
-      ctx.font = '600 10.5px system-ui, sans-serif';
-      const w = ctx.measureText(text).width;
-      label(ctx, text, ux >= 0 ? lx : lx - w, ly, PALETTE.thrust, '600 10.5px system-ui, sans-serif');
-    }
+    ctx.font = ARROW_FONT;
+    const w = ctx.measureText(text).width + 4;
+    const h = 13;
+    const spot = space.place([
+      { x: ux >= 0 ? ex + 3 : ex - 3 - w, y: uy >= 0 ? ey + 2 : ey - 2 - h, w, h },
+      { x: ux >= 0 ? ex - 3 - w : ex + 3, y: uy >= 0 ? ey + 2 : ey - 2 - h, w, h },
+      { x: ex - w / 2, y: uy >= 0 ? ey + 4 : ey - 4 - h, w, h },
+    ]);
+    if (spot) label(ctx, text, spot.x + 2, spot.y + h / 2, PALETTE.thrust, ARROW_FONT);
   }
 }

@@ -117,14 +117,10 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
                 </tr>
               ))}
             </tbody>
-            <tfoot>
-              <tr>
-                <td colSpan={9}>Total concrete in blocks and anchors</td>
-                <td className="strong">{show(concrete, 'volume', u)}</td>
-                <td />
-              </tr>
-            </tfoot>
           </table>
+          <p className="sheet-total">
+            Total concrete in blocks and anchors: <strong>{show(concrete, 'volume', u)}</strong> for {schedule.fittings.length} fittings
+          </p>
         </section>
         <section className="sheet-cautions">
           <h2>Cautions</h2>

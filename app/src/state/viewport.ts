@@ -32,7 +32,11 @@ export const panBy = (v: Viewport, dsx: number, dsy: number): Viewport => ({ ...
 
 /** The view that shows every point with a margin, for a canvas of width × height pixels. */
 export function fitView(points: readonly PlanPoint[], width: number, height: number, margin = 48): Viewport {
-  if (points.length === 0 || width <= 2 * margin || height <= 2 * margin) return { scale: 2, left: -50, top: 50 };
+  if (points.length === 0 || width <= 2 * margin || height <= 2 * margin) {
+    // Nothing to fit: 250 m across the shorter side, centred on the plan origin.
+    const scale = Math.max(0.05, Math.min(width, height) / 250);
+    return { scale, left: -width / 2 / scale, top: height / 2 / scale };
+  }
   let minX = Infinity, maxX = -Infinity, minY = Infinity, maxY = -Infinity;
   for (const p of points) {
     minX = Math.min(minX, p.x);
