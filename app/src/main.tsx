@@ -5,7 +5,7 @@ import { App } from './App.js';
 import { createAppStore } from './state/store.js';
 import { createActions, validated } from './state/actions.js';
 import { StoreProvider } from './state/StoreContext.js';
-import { restoreProject, startAutosave } from './state/autosave.js';
+import { restoreProject, startAutosave, type Restored } from './state/autosave.js';
 import { installShortcuts } from './chrome/shortcuts.js';
 import { ErrorBoundary } from './chrome/ErrorBoundary.js';
 import { blankProject } from './files/blankProject.js';
@@ -15,9 +15,8 @@ import './styles.css';
 const DEMO_URL = `${import.meta.env.BASE_URL}demo/larkspur-rise.json`;
 
 /** The project to open: the one kept from the last visit, else the demo, else a blank one. */
-async function firstProject(): Promise<Project> {
-  const kept = await restoreProject();
-  if (kept) return kept;
+async function firstProject(kept: Restored): Promise<Project> {
+  if (kept.kind === 'project') return kept.project;
   try {
     const r = validated(await (await fetch(DEMO_URL)).json());
     if (r.ok) return r.project;
@@ -35,13 +34,21 @@ function defaultPipe(project: Project): PipeSpec {
 }
 
 async function start() {
-  const project = await firstProject();
+  const kept = await restoreProject();
+  const project = await firstProject(kept);
   const store = createAppStore(project, defaultPipe(project));
   const actions = createActions(store);
   startAutosave(store, (message) =>
     actions.notify({ tone: 'warning', title: 'Autosave failed: your work is only in this tab — save it to a file', lines: [message] }),
   );
   installShortcuts(store, actions);
+  if (kept.kind === 'unreadable') {
+    actions.notify({
+      tone: 'warning',
+      title: 'The project kept from your last visit could not be read; a copy is kept in this browser under "mainbrace.project.v1.unreadable" and the demo opened instead',
+      lines: kept.lines,
+    });
+  }
   if (import.meta.env.DEV || import.meta.env.MODE === 'test') {
     // Read-only hook for the browser tests: the document and its results, never a way to change them.
     Object.defineProperty(window, '__mainbrace', {

@@ -61,6 +61,11 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
             Bearing block <strong>{formatDimension(r.block.faceWidth, u)} wide × {formatDimension(r.block.faceHeight, u)} high</strong>, {formatDimension(r.block.depth, u)} from the fitting to the bearing face; bearing area {show(r.block.bearingArea, 'area', u)} needed, {show(r.block.faceWidth * r.block.faceHeight, 'area', u)} given; concrete {show(r.block.concreteVolume, 'volume', u)}. Passive resistance {r.block.passiveRatio.toFixed(2)} × the thrust.
           </li>
         )}
+        {r.reverseBlock && (
+          <li data-testid="reverse-block">
+            Second block on the opposite side (the thrust reverses) <strong>{formatDimension(r.reverseBlock.faceWidth, u)} wide × {formatDimension(r.reverseBlock.faceHeight, u)} high</strong>; concrete {show(r.reverseBlock.concreteVolume, 'volume', u)}.
+          </li>
+        )}
         {r.anchor && (
           <li data-testid="anchor">
             Gravity anchor <strong>{show(r.anchor.concreteVolume, 'volume', u)}</strong> of concrete (a {formatDimension(r.anchor.side, u)} cube){r.anchor.submerged ? ', submerged weight' : ''}.

@@ -38,6 +38,8 @@ export function NumberField(p: NumberFieldProps) {
   }
 
   const commit = () => {
+    // Leaving a field that was not changed must not rewrite the value (display rounding) or add an undo step.
+    if (text === editable(p.value, p.dimension, p.units)) return setError(null);
     const r = parseTyped(text, p.dimension, p.units);
     if (!r.ok) return setError(`${p.label}: ${r.message}`);
     if (p.min !== undefined && (p.exclusiveMin ? r.si <= p.min : r.si < p.min)) {

@@ -1,4 +1,4 @@
-import { norm } from '@mainbrace/solver';
+import { norm, restraintConcrete } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
 import { show } from '../format/quantity.js';
 import { KIND_NAME } from '../format/fittingNames.js';
@@ -14,7 +14,7 @@ export function RouteSummary() {
     const b = project.nodes.find((n) => n.id === p.to)!;
     return sum + Math.hypot(b.x - a.x, b.y - a.y, b.elevation - a.elevation);
   }, 0);
-  const concrete = analysis.fittings.reduce((v, f) => v + (f.restraint.block?.concreteVolume ?? 0) + (f.restraint.anchor?.concreteVolume ?? 0), 0);
+  const concrete = analysis.fittings.reduce((v, f) => v + restraintConcrete(f.restraint), 0);
   const ranked = [...analysis.fittings].sort((a, b) => norm(b.envelope.governing.total) - norm(a.envelope.governing.total)).slice(0, 6);
   const warned = analysis.fittings.filter((f) => f.warnings.length > 0).length;
   return (

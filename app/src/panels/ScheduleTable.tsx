@@ -1,12 +1,12 @@
 import { useMemo, useState } from 'react';
-import { restraintSummary, scheduleOf, SHORT_CAUTION, norm, type ScheduleFitting } from '@mainbrace/solver';
+import { restraintConcrete, restraintSummary, scheduleOf, SHORT_CAUTION, norm, type ScheduleFitting } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
 import { show } from '../format/quantity.js';
 import { bearingText, KIND_NAME } from '../format/fittingNames.js';
 
 type SortKey = 'tag' | 'chainage' | 'kind' | 'pressure' | 'thrust' | 'concrete';
 
-const concreteOf = (f: ScheduleFitting) => (f.restraint.block?.concreteVolume ?? 0) + (f.restraint.anchor?.concreteVolume ?? 0);
+const concreteOf = (f: ScheduleFitting) => restraintConcrete(f.restraint);
 const SORTS: Record<SortKey, (a: ScheduleFitting, b: ScheduleFitting) => number> = {
   tag: (a, b) => a.tag.localeCompare(b.tag, undefined, { numeric: true }),
   chainage: (a, b) => a.chainage - b.chainage,
@@ -31,7 +31,7 @@ export function ScheduleTable() {
   const u = project.units;
   const caseLabel = (id: string) => project.loadCases.find((c) => c.id === id)?.label ?? id;
   const totals = schedule.fittings.reduce(
-    (t, f) => ({ block: t.block + (f.restraint.block?.concreteVolume ?? 0), anchor: t.anchor + (f.restraint.anchor?.concreteVolume ?? 0) }),
+    (t, f) => ({ block: t.block + restraintConcrete({ ...f.restraint, anchor: null }), anchor: t.anchor + (f.restraint.anchor?.concreteVolume ?? 0) }),
     { block: 0, anchor: 0 },
   );
   const head = (key: SortKey, text: string) => (

@@ -52,6 +52,7 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
         {materials.map((m) => (
           <div key={m} className="legend-row">
             <svg width="34" height="10" aria-hidden="true">
+              {m === 'steel' && <line x1="2" y1="5" x2="32" y2="5" stroke={PALETTE.ink} strokeWidth="5" />}
               <line x1="2" y1="5" x2="32" y2="5" stroke={PALETTE.pipe} strokeWidth="3" strokeDasharray={MATERIAL_DASH[m].map((d) => d * 3).join(' ')} />
             </svg>
             {MATERIAL_NAME[m]}

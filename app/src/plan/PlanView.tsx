@@ -3,7 +3,7 @@ import { Layer, Shape, Stage } from 'react-konva';
 import type { Context } from 'konva/lib/Context';
 import { FOOT } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp, useAppStore } from '../state/StoreContext.js';
-import { fitView, panBy, toPlan, toScreen, zoomAt, type ScreenPoint } from '../state/viewport.js';
+import { centreOn, fitView, panBy, toPlan, toScreen, zoomAt, type ScreenPoint } from '../state/viewport.js';
 import type { PlanPoint } from '../state/documentEdits.js';
 import { dragScene, planScene } from './planScene.js';
 import { hitTest, inBox } from './hitTest.js';
@@ -101,7 +101,7 @@ export function PlanView() {
     if (!n) return;
     const s = toScreen(v, n);
     if (s.sx < 20 || s.sy < 20 || s.sx > size.width - 20 || s.sy > size.height - 20) {
-      actions.setViewport({ ...v, left: n.x - size.width / 2 / v.scale, top: n.y + size.height / 2 / v.scale });
+      actions.setViewport(centreOn(v, n, size.width, size.height));
     }
   }, [selection, size, store, actions]);
 

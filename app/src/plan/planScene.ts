@@ -115,11 +115,12 @@ export function planScene(
     }
     const r = f.restraint;
     const od = Math.max(...f.legs.map((l) => l.pipe.outsideDiameter));
-    if (r.block) {
-      const d = plan(r.block.direction);
+    for (const block of [r.block, r.reverseBlock]) {
+      if (!block) continue;
+      const d = plan(block.direction);
       const p = { x: at.x + (d.x * od) / 2, y: at.y + (d.y * od) / 2 };
-      const q = { x: p.x + d.x * r.block.depth, y: p.y + d.y * r.block.depth };
-      polygons.push({ node: id, kind: 'block', points: strip(p, q, r.block.faceWidth) });
+      const q = { x: p.x + d.x * block.depth, y: p.y + d.y * block.depth };
+      polygons.push({ node: id, kind: 'block', points: strip(p, q, block.faceWidth) });
     }
     if (r.anchor) {
       const s = r.anchor.side / 2;

@@ -1,5 +1,5 @@
 import { useMemo } from 'react';
-import { CAUTIONS, calculationRecord, norm, restraintSummary, scheduleOf } from '@mainbrace/solver';
+import { CAUTIONS, calculationRecord, norm, restraintConcrete, restraintSummary, scheduleOf } from '@mainbrace/solver';
 import { useAnalysis, useApp } from '../state/StoreContext.js';
 import { show } from '../format/quantity.js';
 import { bearingText, fittingTitle, KIND_NAME } from '../format/fittingNames.js';
@@ -18,7 +18,7 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
   const d = project.design;
   const today = new Date().toISOString().slice(0, 10);
   const caseLabel = (id: string) => project.loadCases.find((c) => c.id === id)?.label ?? id;
-  const concrete = schedule.fittings.reduce((v, f) => v + (f.restraint.block?.concreteVolume ?? 0) + (f.restraint.anchor?.concreteVolume ?? 0), 0);
+  const concrete = schedule.fittings.reduce((v, f) => v + restraintConcrete(f.restraint), 0);
   return (
     <div className="print-preview" data-testid="print-sheet">
       <div className="print-toolbar no-print">

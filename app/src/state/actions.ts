@@ -57,8 +57,9 @@ export function createActions(store: AppStore) {
     deleteSelection: () => {
       const { nodes, pipes } = get().selection;
       if (nodes.size + pipes.size === 0) return;
+      const before = get().project;
       edit((p) => deleteItems(p, nodes, pipes));
-      set({ selection: EMPTY_SELECTION });
+      if (get().project !== before) set({ selection: EMPTY_SELECTION });
     },
     updateNode: (id: string, patch: Partial<ProjectNode>) => edit((p) => updateNode(p, id, patch), 'label' in patch ? `node-label-${id}` : undefined),
     updatePipe: (id: string, patch: Partial<Pipe>) => edit((p) => updatePipe(p, id, patch), 'label' in patch ? `pipe-label-${id}` : undefined),
@@ -97,6 +98,7 @@ export function createActions(store: AppStore) {
      * ends, and then the whole gesture is one step.
      */
     beginLiveEdit: () => {
+      if (liveStart) return; // a key held down repeats: the gesture began at the first press
       liveStart = get().project;
       history().pause();
     },

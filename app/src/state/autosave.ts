@@ -6,16 +6,33 @@ import { validated } from './actions.js';
 const KEY = 'mainbrace.project.v1';
 const DELAY_MS = 400;
 
-/** The project kept from the last visit, if any and if it is still a valid project. */
-export async function restoreProject(): Promise<Project | null> {
+const UNREADABLE_KEY = 'mainbrace.project.v1.unreadable';
+
+/** What was kept from the last visit: a valid project, nothing, or a copy that no longer reads. */
+export type Restored = { kind: 'project'; project: Project } | { kind: 'none' } | { kind: 'unreadable'; lines: string[] };
+
+/**
+ * The project kept from the last visit. A kept copy that no longer validates is not thrown away: it is
+ * moved to a backup key (so the next autosave cannot overwrite it) and the user is told.
+ */
+export async function restoreProject(): Promise<Restored> {
+  let text: string | undefined;
   try {
-    const text = await get<string>(KEY);
-    if (!text) return null;
-    const r = validated(JSON.parse(text));
-    return r.ok ? r.project : null;
+    text = await get<string>(KEY);
   } catch {
-    return null;
+    return { kind: 'none' };
   }
+  if (!text) return { kind: 'none' };
+  let lines: string[];
+  try {
+    const r = validated(JSON.parse(text));
+    if (r.ok) return { kind: 'project', project: r.project };
+    lines = r.lines;
+  } catch (e) {
+    lines = [`not valid JSON: ${(e as Error).message}`];
+  }
+  await set(UNREADABLE_KEY, text).catch(() => undefined);
+  return { kind: 'unreadable', lines };
 }
 
 /**

@@ -1,4 +1,4 @@
-import type { Material, Pipe, Project, ProjectNode } from '@mainbrace/solver';
+import { MIN_PIPE_LENGTH, type Material, type Pipe, type Project, type ProjectNode } from '@mainbrace/solver';
 
 /** A point on the plan, m: x east, y north. */
 export interface PlanPoint {
@@ -140,8 +140,6 @@ export function addRoute(project: Project, start: RouteEnd, vertices: readonly P
   return doc;
 }
 
-/** Below this 3-D distance a pipe's two nodes coincide, m (the solver's crossChecks MIN_PIPE_LENGTH). */
-const MIN_PIPE_LENGTH = 0.001;
 
 /**
  * Moves nodes to new plan positions (m); pipes follow because they refer to the nodes. A move that

@@ -27,6 +27,9 @@ export function zoomAt(v: Viewport, at: ScreenPoint, factor: number): Viewport {
   return { scale, left: anchor.x - at.sx / scale, top: anchor.y + at.sy / scale };
 }
 
+/** The same scale, moved so that a plan point sits in the middle of a width × height canvas. */
+export const centreOn = (v: Viewport, p: PlanPoint, width: number, height: number): Viewport => ({ scale: v.scale, left: p.x - width / 2 / v.scale, top: p.y + height / 2 / v.scale });
+
 /** Moves the view by a screen-pixel drag. */
 export const panBy = (v: Viewport, dsx: number, dsy: number): Viewport => ({ ...v, left: v.left - dsx / v.scale, top: v.top + dsy / v.scale });
 

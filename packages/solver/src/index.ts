@@ -1,6 +1,7 @@
 // The solver's public surface: the project model, the analysis, the schedule, and display units.
 export * from './model/projectSchema.js';
 export { projectSchema } from './model/project.js';
+export { MIN_PIPE_LENGTH } from './model/crossChecks.js';
 export { parseProject, parseProjectText, type ParseResult } from './model/parseProject.js';
 export { problemText, type Problem } from './model/problems.js';
 export { projectJsonSchema } from './model/jsonSchema.js';
@@ -11,9 +12,9 @@ export * from './units/quantities.js';
 export { legsByNode, type Leg } from './network/legs.js';
 export { fittingGeometry, needsRestraint, type FittingKind, type FittingGeometry } from './network/fittingKind.js';
 export { fittingTag, TAG_CODES } from './network/fittingTag.js';
-export { pressureAt } from './pressure/nodePressure.js';
+export { pressureAt, VACUUM_GAUGE_PRESSURE } from './pressure/nodePressure.js';
 export { momentumBalance, type ThrustParts } from './thrust/momentumBalance.js';
-export { fittingThrust, thrustEnvelope, type CaseThrust, type ThrustEnvelope } from './thrust/fittingThrust.js';
+export { fittingThrust, thrustEnvelope, worstPerCase, type CaseThrust, type ThrustEnvelope } from './thrust/fittingThrust.js';
 export { analyse, analyseProject, calculationRecord, type Analysis, type FittingAnalysis } from './analysis/analyse.js';
 export type { CalcStep, RecordValue } from './analysis/calcRecord.js';
 export { nodeSoil, type Restraint } from './restraint/sizeRestraint.js';
@@ -24,6 +25,7 @@ export { scheduleCsv } from './schedule/scheduleCsv.js';
 export { scheduleTable, restraintSummary } from './schedule/scheduleTable.js';
 export { SCHEDULE_COLUMNS, columnHeading, columnValue, type ScheduleColumn } from './schedule/scheduleColumns.js';
 export { CAUTIONS, SHORT_CAUTION } from './schedule/cautions.js';
+export { restraintConcrete } from './schedule/concrete.js';
 export * from './catalog/catalog.js';
 export type { PipeSeries, PipeSize } from './catalog/pipeSeries.js';
 export { proposeTestPressure, type TestProposal, type TestRule, type TestCriterion } from './pressure/testPressure.js';

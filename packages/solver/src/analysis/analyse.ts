@@ -4,7 +4,8 @@ import { legsByNode, type Leg } from '../network/legs.js';
 import { fittingGeometry, needsRestraint, type FittingGeometry } from '../network/fittingKind.js';
 import { fittingTag } from '../network/fittingTag.js';
 import { chainage } from '../network/chainage.js';
-import { fittingThrust, thrustEnvelope, type CaseThrust, type ThrustEnvelope } from '../thrust/fittingThrust.js';
+import { fittingThrust, thrustEnvelope, worstPerCase, type CaseThrust, type ThrustEnvelope } from '../thrust/fittingThrust.js';
+import { VACUUM_GAUGE_PRESSURE } from '../pressure/nodePressure.js';
 import { waterWeightInFitting } from '../thrust/waterWeight.js';
 import { sizeRestraint, type Restraint } from '../restraint/sizeRestraint.js';
 import { thrustSteps } from './thrustSteps.js';
@@ -19,7 +20,10 @@ export interface FittingAnalysis {
   geometry: FittingGeometry;
   /** m along the route from its start */
   chainage: number;
+  /** one state per case, the worst of a valve's open and closed states */
   cases: CaseThrust[];
+  /** every load state (a valve has three per case) */
+  states: CaseThrust[];
   envelope: ThrustEnvelope;
   /** N, weight of the water in the fitting body (acts in −z; not part of the thrust) */
   waterWeight: number;
@@ -41,19 +45,45 @@ function negativePressureWarnings(project: Project, cases: readonly CaseThrust[]
   for (const c of cases) {
     if (c.pressure >= 0) continue;
     const label = project.loadCases.find((l) => l.id === c.caseId)?.label ?? c.caseId;
-    out.push(`Pressure at this node is below zero (${formatSi(c.pressure, 'pressure', project.units)}) in case "${label}": the node stands above that case's hydraulic grade; check for vacuum and air entry.`);
+    out.push(
+      c.pressure <= VACUUM_GAUGE_PRESSURE + 1e-6
+        ? `The hydraulic grade of case "${label}" lies far below this node: the water column would separate (pressure held at the vapour pressure, ${formatSi(c.pressure, 'pressure', project.units)}); check the profile and the case.`
+        : `Pressure at this node is below zero (${formatSi(c.pressure, 'pressure', project.units)}) in case "${label}": the node stands above that case's hydraulic grade; check for vacuum and air entry.`,
+    );
   }
   return out;
 }
 
+/**
+ * Water in equals water out at a joint (continuity): a node whose pipes' flows do not balance, or a
+ * cap with flow into it, has a flow typed wrong somewhere. Tie-ins and free ends pass water on.
+ */
+function flowImbalance(legs: readonly Leg[], geometry: FittingGeometry): ((p: Project) => string) | null {
+  if (geometry.kind === 'tie-in' || legs.length === 0) return null;
+  let net = 0;
+  let largest = 0;
+  for (const l of legs) {
+    net += l.outflow;
+    largest = Math.max(largest, Math.abs(l.outflow));
+  }
+  if (Math.abs(net) <= 1e-6 + 0.01 * largest) return null;
+  return (p) =>
+    geometry.kind === 'dead-end'
+      ? `Flow of ${formatSi(Math.abs(net), 'flow', p.units)} runs into this cap: a closed end has no flow; check the pipe's flow or make the node a tie-in.`
+      : `The flows at this node do not balance (${formatSi(Math.abs(net), 'flow', p.units)} more ${net > 0 ? 'leaves than arrives' : 'arrives than leaves'}); check the pipes' flows.`;
+}
+
 function analyseFitting(project: Project, node: ProjectNode, legs: Leg[], geometry: FittingGeometry, at: number): FittingAnalysis {
-  const cases = fittingThrust(node, geometry.kind, legs, project.loadCases, project.water.density);
-  const envelope = thrustEnvelope(cases);
+  const states = fittingThrust(node, geometry.kind, legs, project.loadCases, project.water.density);
+  const cases = worstPerCase(states);
+  const envelope = thrustEnvelope(states);
   const restraint = sizeRestraint(project, node, legs, geometry, envelope);
   const warnings = negativePressureWarnings(project, cases);
   for (const w of restraint.warnings) warnings.push(w);
+  const unbalanced = flowImbalance(legs, geometry);
+  if (unbalanced) warnings.push(unbalanced(project));
   if (node.valve && geometry.kind === 'valve') {
-    warnings.push('Closed valve: the thrust can act either way along the line, depending on which side holds pressure; restrain it for both.');
+    warnings.push('Valve: sized open, and closed with the pressure on either side; its restraint holds the thrust both ways along the line.');
   } else if (node.valve) {
     warnings.push('The valve flag applies only where two pipes meet; this node was sized as its fitting without a closed valve.');
   }
@@ -65,6 +95,7 @@ function analyseFitting(project: Project, node: ProjectNode, legs: Leg[], geomet
     geometry,
     chainage: at,
     cases,
+    states,
     envelope,
     waterWeight: waterWeightInFitting(legs, project.water.density),
     restraint,
@@ -108,7 +139,7 @@ export function calculationRecord(project: Project, f: FittingAnalysis): CalcSte
   let r = records.get(f);
   if (!r) {
     const restraint = sizeRestraint(project, f.node, f.legs, f.geometry, f.envelope, true);
-    r = [...thrustSteps(project, f.node, f.legs, f.envelope.governing, f.geometry), ...restraint.steps];
+    r = [...thrustSteps(project, f.node, f.legs, f.envelope.governing), ...restraint.steps];
     records.set(f, r);
   }
   return r;

@@ -1,6 +1,5 @@
 import { horizontalNorm, norm } from '../geometry/vector.js';
 import type { Leg } from '../network/legs.js';
-import type { FittingGeometry } from '../network/fittingKind.js';
 import type { Project, ProjectNode } from '../model/projectSchema.js';
 import type { CaseThrust } from '../thrust/fittingThrust.js';
 import { value, type CalcStep, type RecordValue } from './calcRecord.js';
@@ -12,7 +11,6 @@ export function thrustSteps(
   project: Project,
   node: ProjectNode,
   legs: readonly Leg[],   governing: CaseThrust,
-  geometry: FittingGeometry,
 ): CalcStep[] {
   const loadCase = project.loadCases.find((c) => c.id === governing.caseId)!;
   const steps: CalcStep[] = [];
@@ -31,21 +29,25 @@ export function thrustSteps(
       reference: 'Hydrostatics, g = 9.80665 m/s² (project-format.md)',
     });
   }
-  const legInputs: RecordValue[] = legs.flatMap((l) => [
+  const flowing = governing.closedAgainst === null;
+  const areaInputs: RecordValue[] = legs.map((l) =>
     value(`A(${l.pipe.id})`, `thrust area of ${l.pipe.id} (${project.design.thrustArea} diameter)`, l.thrustArea, 'area', 'pipe'),
-    value(`Q(${l.pipe.id})`, `outflow along ${l.pipe.id} × flow factor`, l.outflow * loadCase.flowFactor, 'flow', 'pipe × case'),
+  );
+  const flowInputs: RecordValue[] = legs.flatMap((l) => [
+    value(`a(${l.pipe.id})`, `flow area of ${l.pipe.id}`, l.flowArea, 'area', 'pipe'),
+    value(`Q(${l.pipe.id})`, `outflow along ${l.pipe.id} × flow factor`, flowing ? l.outflow * loadCase.flowFactor : 0, 'flow', flowing ? 'pipe × case' : 'valve closed'),
   ]);
   steps.push({
     title: `Static thrust, case "${caseName}"`,
-    formula: geometry.kind === 'valve' ? 'F_s = −p·A·n on the pressurised side (valve closed)' : 'F_s = −Σ p·A_i·n_i',
-    inputs: [value('p', 'gauge pressure at the node', governing.pressure, 'pressure', 'computed'), ...legInputs],
+    formula: governing.closedAgainst ? `F_s = −p·A·n on the side of ${governing.closedAgainst} (valve closed)` : 'F_s = −Σ p·A_i·n_i',
+    inputs: [value('p', 'gauge pressure at the node', governing.pressure, 'pressure', 'computed'), ...areaInputs],
     result: value('|F_s|', 'static thrust', norm(governing.static), 'force', 'computed'),
     reference: MOMENTUM,
   });
   steps.push({
     title: 'Dynamic thrust',
     formula: 'F_d = −Σ ρ·Q_i²/a_i·n_i',
-    inputs: [value('ρ', 'water density', project.water.density, 'density', 'project')],
+    inputs: [value('ρ', 'water density', project.water.density, 'density', 'project'), ...flowInputs],
     result: value('|F_d|', 'dynamic (momentum) thrust', norm(governing.dynamic), 'force', 'computed'),
     reference: MOMENTUM,
   });

@@ -19,7 +19,7 @@ function uniqueIds(items: readonly { id: string }[], list: string, ctx: Ctx) {
 }
 
 /** Minimum distance between a pipe's two ends, m: below this the pipe has no direction. */
-const MIN_PIPE_LENGTH = 0.001;
+export const MIN_PIPE_LENGTH = 0.001;
 
 /** Checks that span several fields: unique ids, references that resolve, sane pipes. */
 export function crossCheck(p: Project, ctx: Ctx): void {

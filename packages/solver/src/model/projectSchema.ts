@@ -30,8 +30,8 @@ export const designSchema = z.strictObject({
   bearingSafetyFactor: safetyFactor().default(1.5),
   upliftSafetyFactor: safetyFactor().default(1.5),
   restraintSafetyFactor: safetyFactor().default(1.5),
-  /** N/m³; 23,600 ≈ 150 lb/ft³ normal-weight concrete (common practice) */
-  concreteUnitWeight: positive().default(23600),
+  /** N/m³; 23,600 ≈ 150 lb/ft³ normal-weight concrete (common practice); at least 15 kN/m³ so that it sinks */
+  concreteUnitWeight: finite().gte(15000, { error: 'must be at least 15,000 N/m³ (concrete heavier than water)' }).lte(40000, { error: 'must be at most 40,000 N/m³' }).default(23600),
   /** m, or null when groundwater lies below every block */
   groundwaterElevation: finite().nullable().default(null),
   /** m, thickness of a bearing block from the fitting to its bearing face (concrete volume estimate) */
@@ -58,8 +58,8 @@ export const soilSchema = z.strictObject({
   label: z.string().max(80).optional(),
   /** Pa, allowable horizontal bearing of undisturbed soil; 0 for muck/peat */
   bearing: nonNegative(),
-  /** N/m³ */
-  unitWeight: positive().default(18000),
+  /** N/m³; at least that of water, so that a submerged soil still weighs something */
+  unitWeight: finite().gte(10000, { error: 'must be at least 10,000 N/m³ (a soil heavier than water)' }).lte(30000, { error: 'must be at most 30,000 N/m³' }).default(18000),
   /** degrees */
   frictionAngle: finite().gte(0, { error: 'must be 0 or more' }).lt(60, { error: 'must be less than 60' }).default(30),
   /** Pa */
@@ -75,7 +75,7 @@ export const soilSchema = z.strictObject({
   /** pipe-to-soil adhesion as a fraction of the soil's cohesion, f_c in C_p = f_c·C (restrained joints) */
   pipeAdhesionRatio: finite().gte(0, { error: 'must be 0 or more' }).lte(1, { error: 'must be at most 1' }).optional(),
   /** where the values come from, shown beside the soil */
-  source: z.string().max(200).optional(),
+  source: z.string().max(400).optional(),
 });
 
 export const nodeSchema = z.strictObject({

@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { pressureAt } from './nodePressure.js';
+import { pressureAt, VACUUM_GAUGE_PRESSURE } from './nodePressure.js';
 import { PSI, FOOT } from '../units/conversions.js';
 import { expectClose } from '../../test/tolerance.js';
 
@@ -18,5 +18,11 @@ describe('pressure at a node from the case datum', () => {
   it('a node above the datum sees less pressure, and a case without a datum applies everywhere', () => {
     expect(pressureAt({ id: 'w', pressure: 500e3, datumElevation: 90, flowFactor: 1 }, 95, 1000)).toBeLessThan(500e3);
     expect(pressureAt({ id: 'w', pressure: 500e3, flowFactor: 1 }, 250, 1000)).toBe(500e3);
+  });
+
+  it('never goes below the vapour pressure: −98.99 kPa gauge (101.325 kPa atmosphere, 2.339 kPa vapour at 20 °C)', () => {
+    expect(VACUUM_GAUGE_PRESSURE).toBe(-98_986);
+    expect(pressureAt({ id: 'd', pressure: 0, datumElevation: 100, flowFactor: 0 }, 150, 998.2)).toBe(-98_986);
+    expect(pressureAt({ id: 'd', pressure: 0, datumElevation: 100, flowFactor: 0 }, 105, 998.2)).toBeCloseTo(-998.2 * 9.80665 * 5, 6);
   });
 });

@@ -24,7 +24,7 @@ describe('field-test pressure from the working pressure and the route elevations
     expect(r.governing).toBe(0);
   });
 
-  it('AWWA C600: a tall section makes the highest point govern', () => {
+  it('AWWA C600: with hydrostatic working pressure the point-of-testing criterion governs, however tall the section', () => {
     const p = route({
       density: DENSITY,
       cases: [{ id: 'w', pressure: 40 * PSI, datumElevation: 0 }],

@@ -16,6 +16,7 @@ const base = (over: Partial<BearingBlockInput> = {}): BearingBlockInput => ({
   blockDepth: 0.6,
   soil: { unitWeight: 18000, frictionAngle: 30, cohesion: 0 },
   waterDepth: null,
+  waterUnitWeight: 998.2 * 9.80665,
   units: 'us',
   ...over,
 });

@@ -24,6 +24,8 @@ export interface BearingBlockInput {
   soil: { unitWeight: number; frictionAngle: number; cohesion: number };
   /** m below ground of the water table, or null */
   waterDepth: number | null;
+  /** N/m³, ρ·g of the groundwater */
+  waterUnitWeight: number;
   /** display units of the warnings */
   units: UnitSystem;
   /** build the calculation record too (only when someone reads it) */
@@ -97,6 +99,7 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
     frictionAngle: i.soil.frictionAngle,
     cohesion: i.soil.cohesion,
     waterDepth: i.waterDepth,
+    waterUnitWeight: i.waterUnitWeight,
   });
   const passiveRatio = passive / i.thrust;
   if (passiveRatio < i.safetyFactor) {

@@ -37,16 +37,18 @@ describe('gravity anchor at a crest bend (domain reference §5)', () => {
     expectClose(v / CUBIC_YARD, 5.38, 1e-3);
   });
 
-  it('needs 248.5 ft³ submerged, with γ′ = 150 − 62.4 pcf (CV-13; here γw = 998.2 kg/m³ × g = 62.32 pcf, 0.1 % apart)', () => {
-    const r = sizeGravityAnchor({ upward: 14_515 * LBF, horizontal: 0, safetyFactor: 1.5, concreteUnitWeight: 150 * PCF, submerged: true, frictionAngle: 30, step: 0.05 });
-    expectClose(r.anchor.concreteVolume / FT3, 248.5, 1.5e-3);
+  it('needs 248.5 ft³ submerged, with γ′ = 150 − 62.4 pcf (CV-13: water of 62.4 pcf)', () => {
+    // Groundwater above the pipe: the whole anchor lies below it.
+    const site = { soil: { id: 's', bearing: 1e5, unitWeight: 18000, frictionAngle: 30, cohesion: 0 }, soilName: 's', od: 0.335, cover: 1.2, invert: 99.8, groundwater: 101, waterDepth: 0, trenchWidth: 1, waterUnitWeight: 62.4 * PCF, step: 0.05, units: 'si' as const };
+    const r = sizeGravityAnchor({ upward: 14_515 * LBF, horizontal: 0, safetyFactor: 1.5, concreteUnitWeight: 150 * PCF, site });
+    expectClose(r.anchor.concreteVolume / FT3, 248.5, 5e-4);
     expect(r.warnings[0]).toMatch(/below groundwater/);
   });
 
-  it('takes the anchor as submerged when groundwater stands above the pipe invert', () => {
+  it('takes the anchor as submerged when groundwater stands above its bottom, below the pipe', () => {
     const wet = route({
       pressure: psi(150),
-      design: { groundwaterElevation: 99.9 },
+      design: { groundwaterElevation: 99.0 },
       nodes: [{ id: 'a', x: -20, y: 0, z: 100 }, { id: 'c', x: 0, y: 0, z: 100 }, { id: 'b', x: 10, y: 0, z: 90 }],
       pipes: [{ from: 'a', to: 'c', od: 13.2 * INCH }, { from: 'c', to: 'b', od: 13.2 * INCH }],
     });
@@ -64,5 +66,30 @@ describe('gravity anchor at a crest bend (domain reference §5)', () => {
     const r = analyse(sag).byNode.get('s')!.restraint;
     expect(r.anchor).toBeNull();
     expect(r.trenchBottom!.bearingArea).toBeGreaterThan(0);
+  });
+
+  it('takes the anchor as dry when groundwater stays below its bottom', () => {
+    // dry volume 145.1 ft³ = 4.109 m³ → 1.65 m cube under an invert at 99.83 m: bottom at 98.18 m
+    const dry = route({
+      pressure: psi(150),
+      design: { groundwaterElevation: 98.0 },
+      nodes: [{ id: 'a', x: -20, y: 0, z: 100 }, { id: 'c', x: 0, y: 0, z: 100 }, { id: 'b', x: 10, y: 0, z: 90 }],
+      pipes: [{ from: 'a', to: 'c', od: 13.2 * INCH }, { from: 'c', to: 'b', od: 13.2 * INCH }],
+    });
+    expect(analyse(dry).byNode.get('c')!.restraint.anchor!.submerged).toBe(false);
+  });
+
+  it('needs no bearing block where the anchor’s base friction holds SF × the horizontal thrust', () => {
+    // CV-13 crest on sand φ = 36°: F_f = W·tan 24° = 21,772 lb × 0.4452 = 9,693 lb ≥ 1.5 × 6,012 = 9,018 lb
+    const p = route({
+      pressure: psi(150),
+      soils: [{ id: 'sand', bearing: 95761, unitWeight: 19000, frictionAngle: 36, cohesion: 0 }],
+      design: { concreteUnitWeight: 150 * PCF },
+      nodes: [{ id: 'a', x: -20, y: 0, z: 100 }, { id: 'c', x: 0, y: 0, z: 100 }, { id: 'b', x: 10, y: 0, z: 90 }],
+      pipes: [{ from: 'a', to: 'c', od: 13.2 * INCH }, { from: 'c', to: 'b', od: 13.2 * INCH }],
+    });
+    const r = analyse(p).byNode.get('c')!.restraint;
+    expectPrinted(r.anchor!.baseFriction / LBF, 9_693, 5);
+    expect(r.block).toBeNull();
   });
 });

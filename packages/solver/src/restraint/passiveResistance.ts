@@ -1,6 +1,3 @@
-/** Unit weight of water, N/m³, at 998.2 kg/m³ × 9.80665 m/s² (used for submerged weights). */
-export const WATER_UNIT_WEIGHT = 998.2 * 9.80665;
-
 /**
  * Rankine passive earth-pressure coefficient Kp = tan²(45° + φ/2) = (1 + sin φ)/(1 − sin φ)
  * (Rankine 1857; any soil-mechanics text, e.g. Craig, "Soil Mechanics", ch. on lateral pressure).
@@ -13,16 +10,23 @@ export function rankinePassiveCoefficient(frictionAngle: number): number {
 }
 
 /**
- * ∫ σ'v dz from z1 to z2 (depths below ground, m), N/m: effective vertical stress γ·z above the
- * water table at depth zw, γ·zw + (γ − γw)·(z − zw) below it (the soil's unit weight taken as
- * saturated below the water table).
+ * Effective vertical stress at depth z below ground, Pa: γ·z above the water table at depth zw,
+ * γ·zw + (γ − γw)·(z − zw) below it (the soil's unit weight taken as saturated below the water
+ * table; a soil lighter than water adds nothing).
  */
-function effectiveStressIntegral(z1: number, z2: number, unitWeight: number, waterDepth: number | null): number {
+export function effectiveStress(z: number, unitWeight: number, waterDepth: number | null, waterUnitWeight: number): number {
+  if (waterDepth === null || z <= waterDepth) return unitWeight * z;
+  const zw = Math.max(0, waterDepth);
+  return unitWeight * zw + Math.max(0, unitWeight - waterUnitWeight) * (z - zw);
+}
+
+/** ∫ σ'v dz from z1 to z2 (depths below ground, m), N/m, with σ'v as `effectiveStress`. */
+function effectiveStressIntegral(z1: number, z2: number, unitWeight: number, waterDepth: number | null, waterUnitWeight: number): number {
   const dry = (a: number, b: number) => (unitWeight * (b * b - a * a)) / 2;
   if (waterDepth === null || waterDepth >= z2) return dry(z1, z2);
   const zw = Math.max(waterDepth, 0);
   const top = Math.max(z1, zw);
-  const submerged = unitWeight - WATER_UNIT_WEIGHT;
+  const submerged = Math.max(0, unitWeight - waterUnitWeight);
   const wet = unitWeight * zw * (z2 - top) + (submerged * ((z2 - zw) ** 2 - (top - zw) ** 2)) / 2;
   return (z1 < zw ? dry(z1, zw) : 0) + wet;
 }
@@ -40,8 +44,10 @@ export interface PassiveInput {
   frictionAngle: number;
   /** Pa */
   cohesion: number;
-  /** m below ground, or null when the water table is below the face */
+  /** m below ground of the water table, or null when it is below the face */
   waterDepth: number | null;
+  /** N/m³, ρ·g of the groundwater */
+  waterUnitWeight: number;
 }
 
 /**
@@ -52,6 +58,6 @@ export interface PassiveInput {
 export function passiveResistance(p: PassiveInput): number {
   const kp = rankinePassiveCoefficient(p.frictionAngle);
   const top = Math.max(0, p.top);
-  const stress = effectiveStressIntegral(top, p.bottom, p.unitWeight, p.waterDepth);
+  const stress = effectiveStressIntegral(top, p.bottom, p.unitWeight, p.waterDepth, p.waterUnitWeight);
   return p.width * (kp * stress + 2 * p.cohesion * Math.sqrt(kp) * (p.bottom - top));
 }

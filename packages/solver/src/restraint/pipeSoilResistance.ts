@@ -1,7 +1,8 @@
 import { value, type RecordValue } from '../analysis/calcRecord.js';
 import { pipeWeightPerLength } from '../catalog/materialDensity.js';
 import type { Pipe, Soil } from '../model/projectSchema.js';
-import { rankinePassiveCoefficient, WATER_UNIT_WEIGHT } from './passiveResistance.js';
+import { effectiveStress, rankinePassiveCoefficient } from './passiveResistance.js';
+import type { FittingSite } from './site.js';
 
 /**
  * Trench-type coefficient K_n for laying conditions 1–5 of AWWA C150/C151 (DIPRA restrained-joint
@@ -22,7 +23,7 @@ export interface PipeSoilResistance {
   friction: number;
   /** N/m, unit lateral bearing resistance R_s = K_n·P_p·D */
   bearing: number;
-  /** N/m, weight holding the pipe down against uplift: pipe, water and the soil prism above */
+  /** N/m, weight holding the pipe down against uplift: pipe and water, less buoyancy, and the soil prism above */
   uplift: number;
   inputs: RecordValue[];
 }
@@ -31,16 +32,22 @@ export interface PipeSoilResistance {
  * Pipe–soil resistance per metre of restrained pipe (domain reference §6.1; DIPRA method,
  * equation bodies from memory): F_s = A_p·C_p + W·tan δ with A_p = π·D, W = 2·W_e + W_p + W_w,
  * W_e = γ·H·D (the prism load, on top and bottom), C_p = f_c·c, δ = f_φ·φ; encased pipe 0.7·W·tan δ.
- * R_s = K_n·P_p·D, P_p = Rankine passive pressure at the pipe centreline γ·H_c·Kp + 2c·√Kp.
+ * R_s = K_n·P_p·D, P_p = Rankine passive pressure at the pipe centreline σ'v(H_c)·Kp + 2c·√Kp.
+ * Below the water table the soil weighs γ − γw and the pipe is buoyed by γw·π/4·D² (domain reference
+ * §10.8: effective stresses under groundwater).
  *
  * @param cover m, ground to top of pipe
  */
-export function pipeSoilResistance(pipe: Pipe, soil: Soil, cover: number): PipeSoilResistance {
+export function pipeSoilResistance(pipe: Pipe, soil: Soil, cover: number, site: Pick<FittingSite, 'waterDepth' | 'waterUnitWeight'>): PipeSoilResistance {
   const d = pipe.outsideDiameter;
+  const gw = site.waterUnitWeight;
   const pipeWeight = pipe.weightPerLength ?? pipeWeightPerLength(pipe.material, d, pipe.insideDiameter);
-  const waterWeight = (WATER_UNIT_WEIGHT * Math.PI * pipe.insideDiameter ** 2) / 4;
-  const earthLoad = soil.unitWeight * cover * d;
-  const normal = 2 * earthLoad + pipeWeight + waterWeight;
+  const waterWeight = (gw * Math.PI * pipe.insideDiameter ** 2) / 4;
+  const centreDepth = cover + d / 2;
+  const buoyed = site.waterDepth !== null && site.waterDepth <= centreDepth;
+  const buoyancy = buoyed ? (gw * Math.PI * d * d) / 4 : 0;
+  const earthLoad = effectiveStress(cover, soil.unitWeight, site.waterDepth, gw) * d;
+  const normal = Math.max(0, 2 * earthLoad + pipeWeight + waterWeight - buoyancy);
   const frictionRatio = soil.pipeFrictionRatio ?? DEFAULT_FRICTION_RATIO;
   const adhesionRatio = soil.pipeAdhesionRatio ?? DEFAULT_ADHESION_RATIO;
   const tanDelta = Math.tan((frictionRatio * soil.frictionAngle * Math.PI) / 180);
@@ -51,10 +58,9 @@ export function pipeSoilResistance(pipe: Pipe, soil: Soil, cover: number): PipeS
   const trenchType = pipe.trenchType ?? DEFAULT_TRENCH_TYPE;
   const kn = TRENCH_COEFFICIENT[trenchType] ?? TRENCH_COEFFICIENT[DEFAULT_TRENCH_TYPE]!;
   const kp = rankinePassiveCoefficient(soil.frictionAngle);
-  const centreDepth = cover + d / 2;
-  const passivePressure = soil.unitWeight * centreDepth * kp + 2 * soil.cohesion * Math.sqrt(kp);
+  const passivePressure = effectiveStress(centreDepth, soil.unitWeight, site.waterDepth, gw) * kp + 2 * soil.cohesion * Math.sqrt(kp);
   const bearing = kn * passivePressure * d;
-  const uplift = pipeWeight + waterWeight + earthLoad;
+  const uplift = Math.max(0, pipeWeight + waterWeight - buoyancy + earthLoad);
   const given = (v: unknown) => (v === undefined ? 'default (from memory)' : 'project');
   return {
     friction,
@@ -65,7 +71,8 @@ export function pipeSoilResistance(pipe: Pipe, soil: Soil, cover: number): PipeS
       value('H', 'cover to top of pipe', cover, 'length', 'node'),
       value('W_p', 'pipe weight', pipeWeight, 'forcePerLength', pipe.weightPerLength === undefined ? 'material density × wall area' : 'project'),
       value('W_w', 'water weight', waterWeight, 'forcePerLength', 'computed'),
-      value('W_e', 'earth prism load γ·H·D', earthLoad, 'forcePerLength', 'computed'),
+      value('W_e', "earth prism load σ'v(H)·D", earthLoad, 'forcePerLength', 'computed'),
+      ...(buoyed ? [value('B', 'buoyancy γw·π/4·D²', buoyancy, 'forcePerLength', 'groundwater')] : []),
       value('f_φ', 'pipe/soil friction ratio', frictionRatio, 'ratio', given(soil.pipeFrictionRatio)),
       value('f_c', 'pipe/soil adhesion ratio', adhesionRatio, 'ratio', given(soil.pipeAdhesionRatio)),
       value('K_n', `trench type ${trenchType} coefficient`, kn, 'ratio', pipe.trenchType === undefined ? 'default type 3 (common practice), K_n from memory' : 'K_n from memory'),

@@ -78,4 +78,33 @@ describe('restrained joint length (DIPRA method, domain reference §6.1)', () =>
     const r = analyse(p).byNode.get('b')!.restraint;
     expect([r.block, r.anchor, r.trenchBottom, r.restrainedLength]).toEqual([null, null, null, null]);
   });
+
+  it('is longer below groundwater: buoyancy and submerged soil, worked by hand (domain reference §10.8)', () => {
+    // Water table at the ground: W_e = (γ − γw)·H·D = (18000 − 9789.0) × 1.2 × 0.33528 = 3,303.58 N/m;
+    // buoyancy B = γw·π/4·D² = 864.26 N/m; W = 2·W_e + W_p + W_w − B = 7,211.60 N/m; F_s = W·tan 18° = 2,343.19 N/m;
+    // dead end L = S_f·p·A/F_s = 1.5 × 1e6 × 0.0882887 / 2,343.19 = 56.518 m (dry: 25.550 m).
+    const p = route({
+      pressure: 1e6,
+      soils,
+      design: { groundwaterElevation: 105 },
+      nodes: [{ id: 'a', x: 0, y: 0, end: 'tie-in' }, { id: 'b', x: 80, y: 0, restraint: 'joints' }],
+      pipes: [{ from: 'a', to: 'b', ...pipe }],
+    });
+    expectClose(analyse(p).byNode.get('b')!.restraint.restrainedLength!, 56.5183, 1e-4);
+  });
+
+  it('holds an upward-thrust crest by friction and the hold-down weight, worked by hand (form by analogy, to verify)', () => {
+    // 45° crest, level leg in, leg out falling 45°: T = 2·p·A·sin 22.5° = 67,573.3 N, mostly upward.
+    // F_s = 5,183.37 N/m (as above, dry); W_u = W_p + W_w + W_e = 700 + 768.69 + 7,242.05 = 8,710.74 N/m;
+    // L = S_f·T/(2·cos 22.5°·(F_s + ½·W_u)) = 1.5 × 67,573.3 / (2 × 0.92388 × 9,538.74) = 5.7508 m each side.
+    const p = route({
+      pressure: 1e6,
+      soils,
+      nodes: [{ id: 'a', x: -40, y: 0, z: 100, end: 'tie-in' }, { id: 'c', x: 0, y: 0, z: 100, restraint: 'joints' }, { id: 'b', x: 30, y: 0, z: 70, end: 'tie-in' }],
+      pipes: [{ from: 'a', to: 'c', ...pipe }, { from: 'c', to: 'b', ...pipe }],
+    });
+    const r = analyse(p).byNode.get('c')!.restraint;
+    expect(r.restrainedLegs).toHaveLength(2);
+    for (const leg of r.restrainedLegs) expectClose(leg.length, 5.7508, 1e-4);
+  });
 });

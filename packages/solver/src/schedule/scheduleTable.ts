@@ -10,7 +10,9 @@ export function restraintSummary(f: ScheduleFitting, units: UnitSystem): string 
   const parts: string[] = [];
   const len = (m: number) => formatSi(m, 'length', units);
   const dim = (m: number) => formatDimension(m, units);
-  if (r.block) parts.push(`block ${dim(r.block.faceWidth)} wide × ${dim(r.block.faceHeight)} high, ${formatSi(r.block.concreteVolume, 'volume', units)}`);
+  const block = (b: NonNullable<typeof r.block>) => `${dim(b.faceWidth)} wide × ${dim(b.faceHeight)} high, ${formatSi(b.concreteVolume, 'volume', units)}`;
+  if (r.block && r.reverseBlock) parts.push(`blocks both sides: ${block(r.block)}; opposite ${block(r.reverseBlock)}`);
+  else if (r.block) parts.push(`block ${block(r.block)}`);
   if (r.anchor) parts.push(`anchor ${formatSi(r.anchor.concreteVolume, 'volume', units)}`);
   if (r.trenchBottom) parts.push(`bottom pad ${dim(r.trenchBottom.width)} × ${dim(r.trenchBottom.length)}`);
   if (r.restrainedLength !== null) parts.push(`restrain ${r.restrainedLegs.map((l) => `${len(l.length)} along ${l.pipe}`).join(', ')}`);

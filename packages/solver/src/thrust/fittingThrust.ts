@@ -5,33 +5,19 @@ import type { LoadCase, ProjectNode } from '../model/projectSchema.js';
 import { pressureAt } from '../pressure/nodePressure.js';
 import { momentumBalance, type ThrustParts } from './momentumBalance.js';
 
-/** The thrust of one load case at one fitting. */
+/** The thrust of one load state at one fitting: a load case, and for a valve whether and how it is closed. */
 export interface CaseThrust extends ThrustParts {
   caseId: string;
   /** gauge pressure at the node, Pa */
   pressure: number;
+  /** for a closed valve: the pipe whose side holds the pressure; null when the fitting is open */
+  closedAgainst: string | null;
 }
 
 /**
- * Which pipe ends carry pressure. A closed in-line valve is a dead end on its pressurised side
- * (project-format.md): the side with the larger thrust area, else the upstream side (the pipe the
- * flow arrives by), else the first pipe. Everything else is open on every leg.
- */
-export function pressurisedLegs(kind: FittingKind, legs: readonly Leg[]): boolean[] | undefined {
-  if (kind !== 'valve' || legs.length !== 2) return undefined;
-  const [a, b] = [legs[0]!, legs[1]!];
-  let first: boolean;
-  if (Math.abs(a.thrustArea - b.thrustArea) > 1e-9 * Math.max(a.thrustArea, b.thrustArea)) {
-    first = a.thrustArea > b.thrustArea;
-  } else if (a.outflow !== b.outflow) {
-    first = a.outflow < b.outflow;
-  } else first = true;
-  return [first, !first];
-}
-
-/**
- * Thrust at a fitting for every load case. A closed valve stops the flow, so its cases carry no
- * momentum term.
+ * Every load state of a fitting. Most fittings have one per case. A valve has three per case: open
+ * (a plain joint or bend, with flow), and closed with the pressure on either side — a dead end on that
+ * side, with no flow (project-format.md) — so that its restraint holds the thrust in both directions.
  *
  * @param density water density, kg/m³
  */
@@ -42,26 +28,47 @@ export function fittingThrust(
   loadCases: readonly LoadCase[],
   density: number,
 ): CaseThrust[] {
-  const pressurised = pressurisedLegs(kind, legs);
-  return loadCases.map((c) => {
+  const out: CaseThrust[] = [];
+  for (const c of loadCases) {
     const pressure = pressureAt(c, node.elevation, density);
-    const flowFactor = pressurised ? 0 : c.flowFactor;
-    const t = momentumBalance(legs, pressure, density, flowFactor, pressurised);
-    return { caseId: c.id, pressure, static: t.static, dynamic: t.dynamic, total: t.total };
-  });
+    const open = momentumBalance(legs, pressure, density, c.flowFactor);
+    out.push({ caseId: c.id, pressure, static: open.static, dynamic: open.dynamic, total: open.total, closedAgainst: null });
+    if (kind !== 'valve' || legs.length !== 2) continue;
+    for (let side = 0; side < 2; side++) {
+      const closed = momentumBalance(legs, pressure, density, 0, [side === 0, side === 1]);
+      out.push({ caseId: c.id, pressure, static: closed.static, dynamic: closed.dynamic, total: closed.total, closedAgainst: legs[side]!.pipe.id });
+    }
+  }
+  return out;
 }
 
-/** The largest force of one kind over the cases, N, and the case it comes from. */
+/** One state per case for the schedule: the one with the largest thrust. */
+export function worstPerCase(states: readonly CaseThrust[]): CaseThrust[] {
+  const best = new Map<string, CaseThrust>();
+  for (const s of states) {
+    const b = best.get(s.caseId);
+    if (!b || norm(s.total) > norm(b.total)) best.set(s.caseId, s);
+  }
+  return [...best.values()];
+}
+
+/** The largest force of one kind over the states, N, and the case it comes from. */
 export interface Extreme {
   force: number;
   caseId: string | null;
 }
 
 export interface ThrustEnvelope {
-  /** the case with the largest |total| (project-format.md) */
+  /** the state with the largest |total| (project-format.md) */
   governing: CaseThrust;
   /** largest horizontal component, with its plan direction (unit vector, z = 0) */
   horizontal: Extreme & { direction: Vec3 };
+  /**
+   * the largest horizontal thrust that points against the main one (more than 90° from it), when the
+   * thrust reverses between states — a closed valve, or a pressure that changes sign; a second block
+   * must bear on the other side
+   */
+  reverse: (Extreme & { direction: Vec3; state: CaseThrust }) | null;
   /** largest upward (+z) component */
   upward: Extreme;
   /** largest downward (−z) component, as a positive number */
@@ -70,15 +77,15 @@ export interface ThrustEnvelope {
   pressure: number;
 }
 
-/** Envelope of the cases at one fitting. `cases` must not be empty. */
-export function thrustEnvelope(cases: readonly CaseThrust[]): ThrustEnvelope {
-  let governing = cases[0]!;
+/** Envelope of the states at one fitting. `states` must not be empty. */
+export function thrustEnvelope(states: readonly CaseThrust[]): ThrustEnvelope {
+  let governing = states[0]!;
+  let largest = -1;
   let horizontal: Extreme & { direction: Vec3 } = { force: 0, caseId: null, direction: [0, 0, 0] };
   let upward: Extreme = { force: 0, caseId: null };
   let downward: Extreme = { force: 0, caseId: null };
   let pressure = -Infinity;
-  let largest = -1;
-  for (const c of cases) {
+  for (const c of states) {
     const t = c.total;
     const size = norm(t);
     if (size > largest) {
@@ -91,5 +98,15 @@ export function thrustEnvelope(cases: readonly CaseThrust[]): ThrustEnvelope {
     if (-t[2] > downward.force) downward = { force: -t[2], caseId: c.caseId };
     if (c.pressure > pressure) pressure = c.pressure;
   }
-  return { governing, horizontal, upward, downward, pressure };
+  let reverse: ThrustEnvelope['reverse'] = null;
+  const d = horizontal.direction;
+  for (const c of states) {
+    const t = c.total;
+    const h = horizontalNorm(t);
+    // Opposed by more than 90°, and more than floating-point noise of the main thrust.
+    if (h > 1e-7 * horizontal.force && t[0] * d[0] + t[1] * d[1] < 0 && h > (reverse?.force ?? 0)) {
+      reverse = { force: h, caseId: c.caseId, direction: [t[0] / h, t[1] / h, 0], state: c };
+    }
+  }
+  return { governing, horizontal, reverse, upward, downward, pressure };
 }

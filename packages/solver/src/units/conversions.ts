@@ -11,7 +11,6 @@ export const CUBIC_YARD = Math.pow(3 * FOOT, 3); // m³, 0.764554857984 exact
 export const US_GALLON = 231 * Math.pow(INCH, 3); // m³, exact (231 in³)
 export const POUND_PER_CUBIC_FOOT_WEIGHT = POUND_FORCE / Math.pow(FOOT, 3); // N/m³ for lbf/ft³
 export const KIP = 1000 * POUND_FORCE; // N
-export const BAR = 1e5; // Pa, exact
 
 export type UnitSystem = 'si' | 'us';
 

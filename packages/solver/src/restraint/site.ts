@@ -1,0 +1,62 @@
+import { STANDARD_GRAVITY } from '../units/quantities.js';
+import type { UnitSystem } from '../units/conversions.js';
+import type { Leg } from '../network/legs.js';
+import type { Project, ProjectNode, Soil } from '../model/projectSchema.js';
+import { dimensionStep } from './rounding.js';
+
+/** Clear width each side of the pipe assumed for the trench when the design gives none, m (common practice). */
+export const TRENCH_CLEARANCE = 0.3;
+
+/** The soil a node bears on: its own, else the project default, else the first soil. */
+export function nodeSoil(project: Project, node: ProjectNode): Soil {
+  const id = node.soil ?? project.defaultSoil;
+  return project.soils.find((s) => s.id === id) ?? project.soils[0]!;
+}
+
+/** Where a fitting sits, as its restraint needs it: soil, depths, groundwater, trench, units. */
+export interface FittingSite {
+  soil: Soil;
+  soilName: string;
+  /** m, largest outside diameter at the fitting */
+  od: number;
+  /** m, ground to top of pipe */
+  cover: number;
+  /** m, pipe invert elevation */
+  invert: number;
+  /** m, groundwater elevation, or null when below every block */
+  groundwater: number | null;
+  /** m below ground of the water table (0 when at or above ground), or null */
+  waterDepth: number | null;
+  /** m */
+  trenchWidth: number;
+  /** N/m³, ρ·g of the project's water */
+  waterUnitWeight: number;
+  /** m, dimension step of the display units */
+  step: number;
+  units: UnitSystem;
+}
+
+export function fittingSite(project: Project, node: ProjectNode, legs: readonly Leg[]): FittingSite {
+  let od = 0;
+  for (const l of legs) od = Math.max(od, l.pipe.outsideDiameter);
+  const soil = nodeSoil(project, node);
+  const gw = project.design.groundwaterElevation;
+  const ground = node.elevation + od / 2 + node.cover;
+  return {
+    soil,
+    soilName: soil.label ?? soil.id,
+    od,
+    cover: node.cover,
+    invert: node.elevation - od / 2,
+    groundwater: gw,
+    waterDepth: gw === null ? null : Math.max(0, ground - gw),
+    trenchWidth: project.design.trenchWidth ?? od + 2 * TRENCH_CLEARANCE,
+    waterUnitWeight: project.water.density * STANDARD_GRAVITY,
+    step: dimensionStep(project.units),
+    units: project.units,
+  };
+}
+
+/** Unit weight of concrete, N/m³, submerged (γc − γw, domain reference §5.3) where groundwater reaches it. */
+export const concreteWeight = (concreteUnitWeight: number, site: FittingSite, submerged: boolean) =>
+  submerged ? concreteUnitWeight - site.waterUnitWeight : concreteUnitWeight;
