@@ -1,4 +1,5 @@
 import { useRef, useState } from 'react';
+import { useStore } from 'zustand';
 import { useActions, useApp, useAppStore } from '../state/StoreContext.js';
 import { download, fileStem, openProjectFile, projectText, scheduleCsvText, scheduleJsonText } from '../files/projectFile.js';
 import { newProject } from '../files/newProject.js';
@@ -12,6 +13,8 @@ export function TopBar({ onPrint }: { onPrint: () => void }) {
   const units = useApp((s) => s.project.units);
   const cases = useApp((s) => s.project.loadCases);
   const caseView = useApp((s) => s.caseView);
+  const canUndo = useStore(store.temporal, (t) => t.pastStates.length > 0);
+  const canRedo = useStore(store.temporal, (t) => t.futureStates.length > 0);
   const [cautionOpen, setCautionOpen] = useState(false);
   const [exportOpen, setExportOpen] = useState(false);
   const fileInput = useRef<HTMLInputElement>(null);
@@ -54,6 +57,10 @@ export function TopBar({ onPrint }: { onPrint: () => void }) {
           )}
         </div>
       </nav>
+      <div className="history" role="group" aria-label="History">
+        <button onClick={actions.undo} disabled={!canUndo} title="Undo (Ctrl+Z)" aria-label="Undo" data-testid="undo">↶</button>
+        <button onClick={actions.redo} disabled={!canRedo} title="Redo (Ctrl+Shift+Z or Ctrl+Y)" aria-label="Redo" data-testid="redo">↷</button>
+      </div>
       <div className="units-switch" role="radiogroup" aria-label="Units">
         {(['si', 'us'] as const).map((u) => (
           <button key={u} role="radio" aria-checked={units === u} className={units === u ? 'on' : ''} onClick={() => actions.setUnits(u)}>

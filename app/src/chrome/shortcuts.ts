@@ -4,7 +4,9 @@ import { drawStep } from '../tools/drawTool.js';
 import { fitView } from '../state/viewport.js';
 import { download, fileStem, projectText } from '../files/projectFile.js';
 
-const typing = (t: EventTarget | null) => t instanceof HTMLInputElement || t instanceof HTMLTextAreaElement || t instanceof HTMLSelectElement;
+/** A field the user types into (a slider, box or button is not one: its undo is the app's). */
+const typing = (t: EventTarget | null) =>
+  (t instanceof HTMLInputElement && !['range', 'checkbox', 'radio', 'button', 'file'].includes(t.type)) || t instanceof HTMLTextAreaElement || t instanceof HTMLSelectElement;
 
 /** Keyboard shortcuts of the whole window; keys typed into a field are left to the field. */
 export function installShortcuts(store: AppStore, actions: Actions): () => void {

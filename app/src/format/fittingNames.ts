@@ -23,5 +23,10 @@ export function fittingTitle(f: FittingAnalysis, units: UnitSystem): string {
   return name;
 }
 
-/** Direction of a horizontal thrust as a whole-degree bearing, clockwise from north. */
-export const bearingText = (deg: number | null): string => (deg === null ? '—' : `${Math.round(deg) % 360}°`);
+const COMPASS = ['N', 'NE', 'E', 'SE', 'S', 'SW', 'W', 'NW'];
+
+/**
+ * Direction of a horizontal thrust as a whole-degree bearing clockwise from north with its compass
+ * point — the side of the fitting the block goes on: "169° S".
+ */
+export const bearingText = (deg: number | null): string => (deg === null ? '—' : `${Math.round(deg) % 360}° ${COMPASS[Math.round(deg / 45) % 8]}`);

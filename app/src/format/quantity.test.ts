@@ -81,3 +81,22 @@ describe('editable and parseTyped round trip', () => {
     );
   });
 });
+
+describe('decimal commas and feet-and-inches', () => {
+  it('reads 1,5 as one and a half, 1,500 as fifteen hundred, and refuses an ambiguous 1,50,0', () => {
+    const one = parseTyped('1,5', 'length', 'si');
+    expect(one.ok && one.si).toBe(1.5);
+    const thousand = parseTyped('1,500', 'pressure', 'si');
+    expect(thousand.ok && thousand.si).toBe(1_500_000);
+    const bad = parseTyped('1,50,0', 'length', 'si');
+    expect(bad.ok).toBe(false);
+    if (!bad.ok) expect(bad.message).toMatch(/decimals with a point/);
+  });
+
+  it("reads 4'6\" and 4 ft 6 in as 4.5 ft = 1.3716 m (1 ft = 0.3048 m exact)", () => {
+    for (const text of [`4'6"`, `4' 6`, '4 ft 6 in', '4.5 ft']) {
+      const r = parseTyped(text, 'length', 'us');
+      expect(r.ok && Math.abs(r.si - 1.3716) < 1e-12).toBe(true);
+    }
+  });
+});

@@ -1,5 +1,5 @@
 import { formatDimension, horizontalNorm, norm, planBearing, type FittingAnalysis, type Project } from '@mainbrace/solver';
-import { show } from '../format/quantity.js';
+import { show, showColumnForce } from '../format/quantity.js';
 import { bearingText, fittingTitle } from '../format/fittingNames.js';
 import { CalcRecordView } from './CalcRecordView.js';
 
@@ -24,7 +24,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
         <dd>{caseName(project, e.governing.caseId)}</dd>
         <dt>Thrust</dt>
         <dd data-testid="governing-thrust">
-          <strong>{show(norm(e.governing.total), 'force', u)}</strong>, bears toward {bearingText(e.horizontal.force > 0 ? planBearing(e.horizontal.direction) : null)} from north
+          <strong>{show(norm(e.governing.total), 'force', u)}</strong>, bears toward {bearingText(e.horizontal.force > 0 ? planBearing(e.horizontal.direction) : null)} (from north)
         </dd>
       </dl>
       <table className="cases-table">
@@ -44,10 +44,10 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
             <tr key={c.caseId} className={c.caseId === e.governing.caseId ? 'governing' : ''}>
               <td>{caseName(project, c.caseId)}{c.caseId === e.governing.caseId ? ' ◆' : ''}</td>
               <td>{show(c.pressure, 'pressure', u)}</td>
-              <td>{show(norm(c.static), 'force', u)}</td>
-              <td>{show(norm(c.dynamic), 'force', u)}</td>
-              <td>{show(norm(c.total), 'force', u)}</td>
-              <td>{show(c.total[2], 'force', u)}</td>
+              <td>{showColumnForce(norm(c.static), u)}</td>
+              <td>{showColumnForce(norm(c.dynamic), u)}</td>
+              <td>{showColumnForce(norm(c.total), u)}</td>
+              <td>{showColumnForce(Math.abs(c.total[2]) < 1e-6 * norm(c.total) ? 0 : c.total[2], u)}</td>
               <td>{bearingText(horizontalNorm(c.total) > 0 ? planBearing([c.total[0], c.total[1], 0]) : null)}</td>
             </tr>
           ))}

@@ -1,7 +1,7 @@
 import { useMemo, useState } from 'react';
 import { restraintConcrete, restraintSummary, scheduleOf, SHORT_CAUTION, norm, type ScheduleFitting } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
-import { show } from '../format/quantity.js';
+import { show, showColumnForce } from '../format/quantity.js';
 import { bearingText, KIND_NAME } from '../format/fittingNames.js';
 
 type SortKey = 'tag' | 'chainage' | 'kind' | 'pressure' | 'thrust' | 'concrete';
@@ -76,8 +76,8 @@ export function ScheduleTable() {
                 <td className="num">{f.deflection !== null ? show(f.deflection, 'angle', u) : f.branchAngle !== null ? show(f.branchAngle, 'angle', u) : ''}</td>
                 <td className="num">{show(f.designPressure, 'pressure', u)}</td>
                 <td>{caseLabel(f.governingCase)}</td>
-                <td className="num strong">{show(norm(f.thrust), 'force', u)}</td>
-                <td className="num">{show(norm(gov.static), 'force', u)} / {show(norm(gov.dynamic), 'force', u)}</td>
+                <td className="num strong">{showColumnForce(norm(f.thrust), u)}</td>
+                <td className="num">{showColumnForce(norm(gov.static), u)} / {showColumnForce(norm(gov.dynamic), u)}</td>
                 <td>{bearingText(f.bearingDirection)}</td>
                 <td>{project.soils.find((s) => s.id === f.soil)?.label ?? f.soil}</td>
                 <td>{restraintSummary(f, u)}</td>

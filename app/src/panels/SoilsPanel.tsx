@@ -3,6 +3,7 @@ import { SOIL_LIBRARY, type Soil } from '@mainbrace/solver';
 import { useActions, useApp } from '../state/StoreContext.js';
 import { nextId } from '../state/documentEdits.js';
 import { NumberField } from './NumberField.js';
+import { show } from '../format/quantity.js';
 
 /** The project's soils with their sources, the built-in library to copy from, and the design settings. */
 export function SoilsPanel() {
@@ -41,7 +42,7 @@ export function SoilsPanel() {
                   {s.source && <div className="field-hint">{s.source}</div>}
                 </td>
                 <td>
-                  <NumberField label={`Bearing of ${s.label ?? s.id}`} value={s.bearing} dimension="stress" units={u} min={0} max={5e6} onCommit={(bearing) => setSoil(s.id, { bearing })} hint={s.bearingPerDepth ? `+ per depth ${(s.bearingPerDepth / 1000).toFixed(2)} kPa/m` : undefined} />
+                  <NumberField label={`Bearing of ${s.label ?? s.id}`} value={s.bearing} dimension="stress" units={u} min={0} max={5e6} onCommit={(bearing) => setSoil(s.id, { bearing })} hint={s.bearingPerDepth ? `+ ${show(s.bearingPerDepth, 'stressGradient', u)} of depth` : undefined} />
                 </td>
                 <td>
                   <NumberField label={`Unit weight of ${s.label ?? s.id}`} value={s.unitWeight} dimension="unitWeight" units={u} min={1000} max={30000} onCommit={(unitWeight) => setSoil(s.id, { unitWeight })} />

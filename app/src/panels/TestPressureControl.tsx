@@ -12,9 +12,14 @@ export function TestPressureControl() {
   const u = project.units;
   const test = project.loadCases.find((c) => c.kind === 'test') ?? project.loadCases.find((c) => c.id === 'test');
   const working = project.loadCases.find((c) => c.kind === 'working') ?? project.loadCases.find((c) => c.id === 'working') ?? project.loadCases[0]!;
+  // A fixed range, so the slider does not rescale under the pointer: to 3.5 MPa (about 500 psi, above
+  // ductile-iron pressure class 350 plus its margin), or further if a case already asks for more.
+  const highest = Math.max(3.5e6, ...project.loadCases.map((c) => c.pressure * 1.2));
+  const [range, setRange] = useState(highest);
+  if (highest > range) setRange(highest);
   if (!test) return <p className="muted">Mark a case as “Field test” to get the live test-pressure control.</p>;
   const proposal = proposeTestPressure(project, working, rule, test.datumElevation);
-  const maxShown = Math.max(toDisplay(test.pressure, 'pressure', u) * 2, u === 'us' ? 300 : 2000);
+  const maxShown = Math.round(toDisplay(range, 'pressure', u));
   const step = u === 'us' ? 1 : 5;
   const setLive = (display: number) => {
     const pressure = fromDisplay(display, 'pressure', u);

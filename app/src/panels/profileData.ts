@@ -1,4 +1,4 @@
-import { STANDARD_GRAVITY, type Analysis, type Project } from '@mainbrace/solver';
+import { pressureAt, STANDARD_GRAVITY, type Analysis, type Project } from '@mainbrace/solver';
 
 export interface ProfilePoint {
   node: string;
@@ -15,6 +15,8 @@ export interface ProfileData {
   points: ProfilePoint[];
   /** static hydraulic grade of each case with a datum, m: datum + p/(ρ·g) */
   grades: { caseId: string; label: string; elevation: number }[];
+  /** gauge pressure of each case at each point, Pa (same order as `points`) */
+  pressures: { caseId: string; label: string; values: number[] }[];
 }
 
 /**
@@ -50,5 +52,10 @@ export function profileData(project: Project, analysis: Analysis): ProfileData {
   const grades = project.loadCases
     .filter((c) => c.datumElevation !== undefined)
     .map((c) => ({ caseId: c.id, label: c.label ?? c.id, elevation: c.datumElevation! + c.pressure / (project.water.density * STANDARD_GRAVITY) }));
-  return { points, grades };
+  const pressures = project.loadCases.map((c) => ({
+    caseId: c.id,
+    label: c.label ?? c.id,
+    values: points.map((pt) => pressureAt(c, pt.pipe, project.water.density)),
+  }));
+  return { points, grades, pressures };
 }

@@ -21,6 +21,9 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
   const viewport = useApp((s) => s.viewport);
   const units = useApp((s) => s.project.units);
   const tool = useApp((s) => s.tool);
+  const caseView = useApp((s) => s.caseView);
+  const cases = useApp((s) => s.project.loadCases);
+  const shown = caseView.kind === 'envelope' ? 'worst of all cases' : (cases.find((c) => c.id === caseView.id)?.label ?? caseView.id);
   const drawing = useApp((s) => s.draw.phase === 'drawing');
   const us = units === 'us';
   const barLength = us ? gridSpacing(viewport.scale * FOOT, 110) * FOOT : gridSpacing(viewport.scale, 110);
@@ -49,6 +52,7 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
         </div>
       </div>
       <div className="plan-legend" aria-label="Legend">
+        <div className="legend-title">Thrust shown: {shown}</div>
         {materials.map((m) => (
           <div key={m} className="legend-row">
             <svg width="34" height="10" aria-hidden="true">
@@ -64,7 +68,7 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
               <line x1="2" y1="5" x2={refPx - 4} y2="5" stroke={PALETTE.thrust} strokeWidth="2.2" />
               <path d={`M${refPx + 2} 5 l-8 -4 v8 z`} fill={PALETTE.thrust} />
             </svg>
-            thrust {formatSi(ref, 'force', units)}
+            horizontal thrust {formatSi(ref, 'force', units)}
           </div>
         )}
         <div className="legend-row">
@@ -77,8 +81,8 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
           <span className="legend-swatch legend-restrained" /> restrained joints
         </div>
         <div className="legend-row">
-          <svg width="30" height="10" aria-hidden="true">
-            <circle cx="15" cy="5" r="4" fill={PALETTE.paper} stroke={PALETTE.ink} strokeWidth="1.2" />
+          <svg width="30" height="12" aria-hidden="true">
+            <path d="M15 1 L20 6 L15 11 L10 6 Z" fill={PALETTE.paper} stroke={PALETTE.ink} strokeWidth="1.3" />
           </svg>
           tie-in to an existing main
         </div>

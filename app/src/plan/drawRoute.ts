@@ -231,7 +231,14 @@ export function drawFittings(ctx: Ctx, v: Viewport, scene: Scene, tags: Readonly
   for (const n of scene.plainNodes) {
     const s = toScreen(v, n.at);
     ctx.beginPath();
-    ctx.arc(s.sx, s.sy, n.tieIn ? 4.5 : 3, 0, Math.PI * 2);
+    // A tie-in is a diamond (it hands its thrust to the existing main); a plain joint a dot.
+    if (n.tieIn) {
+      ctx.moveTo(s.sx, s.sy - 5.5);
+      ctx.lineTo(s.sx + 5.5, s.sy);
+      ctx.lineTo(s.sx, s.sy + 5.5);
+      ctx.lineTo(s.sx - 5.5, s.sy);
+      ctx.closePath();
+    } else ctx.arc(s.sx, s.sy, 3, 0, Math.PI * 2);
     ctx.fillStyle = n.selected ? PALETTE.selection : n.tieIn ? PALETTE.paper : PALETTE.pipe;
     ctx.fill();
     ctx.strokeStyle = PALETTE.ink;

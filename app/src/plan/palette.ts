@@ -17,7 +17,7 @@ export const PALETTE = {
   blockFill: 'rgba(120, 118, 110, 0.18)',
   anchor: '#2f4858',
   pad: '#6d6a5f',
-  restrained: 'rgba(196, 132, 20, 0.45)',
+  restrained: 'rgba(122, 78, 16, 0.42)',
   warning: '#f2c230',
   ink: '#26251f',
   halo: 'rgba(251, 250, 246, 0.9)',

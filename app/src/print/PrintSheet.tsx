@@ -1,9 +1,10 @@
 import { useMemo } from 'react';
 import { CAUTIONS, calculationRecord, norm, restraintConcrete, restraintSummary, scheduleOf } from '@mainbrace/solver';
 import { useAnalysis, useApp } from '../state/StoreContext.js';
-import { show } from '../format/quantity.js';
+import { show, showColumnForce } from '../format/quantity.js';
 import { bearingText, fittingTitle, KIND_NAME } from '../format/fittingNames.js';
 import { CalcRecordView } from '../panels/CalcRecordView.js';
+import { KeyPlan } from './KeyPlan.js';
 
 /**
  * The printable fitting schedule: its own layout (landscape sheet), shown as a preview over the app
@@ -70,7 +71,10 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
                 {project.soils.map((s) => (
                   <tr key={s.id}>
                     <td>{s.label ?? s.id}{s.source ? <div className="small muted">{s.source}</div> : null}</td>
-                    <td>{show(s.bearing, 'stress', u)}</td>
+                    <td>
+                      {show(s.bearing, 'stress', u)}
+                      {s.bearingPerDepth ? ` + ${show(s.bearingPerDepth, 'stressGradient', u)} of depth` : ''}
+                    </td>
                     <td>{show(s.unitWeight, 'unitWeight', u)}</td>
                     <td>{show(s.frictionAngle, 'angle', u)}</td>
                     <td>{show(s.cohesion, 'stress', u)}</td>
@@ -78,6 +82,7 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
                 ))}
               </tbody>
             </table>
+            <KeyPlan project={project} analysis={analysis} />
             <ul className="basis-list">
               <li>Safety factors: bearing {d.bearingSafetyFactor}, uplift {d.upliftSafetyFactor}, restrained joints {d.restraintSafetyFactor}</li>
               <li>Pressure acts on the {d.thrustArea} diameter; water {show(project.water.density, 'density', u)}</li>
@@ -109,7 +114,7 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
                   <td className="num">{[...new Set(f.pipes.map((p) => show(p.outsideDiameter, 'diameter', u)))].join(' / ')}</td>
                   <td className="num">{show(f.designPressure, 'pressure', u)}</td>
                   <td>{caseLabel(f.governingCase)}</td>
-                  <td className="num strong">{show(norm(f.thrust), 'force', u)}</td>
+                  <td className="num strong">{showColumnForce(norm(f.thrust), u)}</td>
                   <td>{bearingText(f.bearingDirection)}</td>
                   <td>{project.soils.find((s) => s.id === f.soil)?.label ?? f.soil}</td>
                   <td>{restraintSummary(f, u)}</td>

@@ -59,7 +59,13 @@ export function createActions(store: AppStore) {
       if (nodes.size + pipes.size === 0) return;
       const before = get().project;
       edit((p) => deleteItems(p, nodes, pipes));
-      if (get().project !== before) set({ selection: EMPTY_SELECTION });
+      const after = get().project;
+      if (after === before) return;
+      const gone = { nodes: before.nodes.length - after.nodes.length, pipes: before.pipes.length - after.pipes.length };
+      set({
+        selection: EMPTY_SELECTION,
+        notice: { tone: 'info', title: `Deleted ${gone.nodes} node${gone.nodes === 1 ? '' : 's'} and ${gone.pipes} pipe${gone.pipes === 1 ? '' : 's'} — Ctrl+Z brings them back`, lines: [] },
+      });
     },
     updateNode: (id: string, patch: Partial<ProjectNode>) => edit((p) => updateNode(p, id, patch), 'label' in patch ? `node-label-${id}` : undefined),
     updatePipe: (id: string, patch: Partial<Pipe>) => edit((p) => updatePipe(p, id, patch), 'label' in patch ? `pipe-label-${id}` : undefined),

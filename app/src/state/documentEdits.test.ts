@@ -98,6 +98,18 @@ describe('deleteItems', () => {
     expectValid(doc);
   });
 
+  it('takes a bend out of the line: its two pipes become one between the neighbours, flow kept', () => {
+    const chain = project(
+      [{ id: 'n1', x: 0, y: 0 }, { id: 'n2', x: 30, y: 10 }, { id: 'n3', x: 60, y: 0 }],
+      [{ from: 'n1', to: 'n2', flow: 0.02 }, { from: 'n2', to: 'n3', flow: 0.02 }],
+    );
+    const doc = deleteItems(chain, new Set(['n2']), none);
+    expect(doc.nodes.map((n) => n.id)).toEqual(['n1', 'n3']);
+    expect(links(doc)).toEqual(['n1→n3']);
+    expect(doc.pipes[0]!.flow).toBe(0.02);
+    expectValid(doc);
+  });
+
   it('keeps a node that had no pipe before the delete (it was not left dangling by it)', () => {
     const base = { ...branched(), nodes: [...branched().nodes, { ...branched().nodes[0]!, id: 'n9', x: -50 }] };
     expect(deleteItems(base, none, new Set(['p1'])).nodes.map((n) => n.id)).toEqual(['n2', 'n3', 'n4', 'n9']);

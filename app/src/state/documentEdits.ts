@@ -156,14 +156,49 @@ export function moveNodes(project: Project, moves: ReadonlyMap<string, PlanPoint
   return collapses ? project : { ...project, nodes };
 }
 
-/** Deletes pipes, and nodes with every pipe that meets them; nodes left with no pipe go too. */
+/**
+ * A bend or joint (two pipes of one size and material) deleted on its own: its two pipes become one
+ * straight pipe between the neighbours, as a designer taking a bend out of a route means. Returns the
+ * project unchanged when the node is not such a joint.
+ */
+function joinAcross(project: Project, nodeId: string, nodeIds: ReadonlySet<string>, pipeIds: ReadonlySet<string>): Project {
+  const meeting = project.pipes.filter((p) => p.from === nodeId || p.to === nodeId);
+  if (meeting.length !== 2) return project;
+  const [a, b] = meeting as [Pipe, Pipe];
+  const farA = a.from === nodeId ? a.to : a.from;
+  const farB = b.from === nodeId ? b.to : b.from;
+  const same = a.outsideDiameter === b.outsideDiameter && a.insideDiameter === b.insideDiameter && a.material === b.material;
+  if (!same || farA === farB || pipeIds.has(a.id) || pipeIds.has(b.id) || nodeIds.has(farA) || nodeIds.has(farB)) return project;
+  // The joined pipe runs farA → farB and carries pipe a's flow in that sense.
+  const flow = a.to === nodeId ? a.flow : -a.flow;
+  const joined: Pipe = { ...a, from: farA, to: farB, flow };
+  return {
+    ...project,
+    nodes: project.nodes.filter((n) => n.id !== nodeId),
+    pipes: project.pipes.filter((p) => p.id !== b.id).map((p) => (p.id === a.id ? joined : p)),
+  };
+}
+
+/**
+ * Deletes pipes, and nodes with every pipe that meets them; nodes left with no pipe go too. A bend or
+ * joint deleted on its own is taken out of the line instead: its neighbours are joined by one pipe.
+ */
 export function deleteItems(project: Project, nodeIds: ReadonlySet<string>, pipeIds: ReadonlySet<string>): Project {
-  const pipes = project.pipes.filter((p) => !pipeIds.has(p.id) && !nodeIds.has(p.from) && !nodeIds.has(p.to));
+  let doc = project;
+  const remaining = new Set(nodeIds);
+  for (const id of nodeIds) {
+    const joined = joinAcross(doc, id, nodeIds, pipeIds);
+    if (joined !== doc) {
+      doc = joined;
+      remaining.delete(id);
+    }
+  }
+  const pipes = doc.pipes.filter((p) => !pipeIds.has(p.id) && !remaining.has(p.from) && !remaining.has(p.to));
   const touched = new Set<string>();
-  for (const p of project.pipes) if (!pipes.includes(p)) [p.from, p.to].forEach((id) => touched.add(id));
+  for (const p of doc.pipes) if (!pipes.includes(p)) [p.from, p.to].forEach((id) => touched.add(id));
   const stillUsed = new Set(pipes.flatMap((p) => [p.from, p.to]));
-  const nodes = project.nodes.filter((n) => !nodeIds.has(n.id) && !(touched.has(n.id) && !stillUsed.has(n.id)));
-  return { ...project, nodes, pipes };
+  const nodes = doc.nodes.filter((n) => !remaining.has(n.id) && !(touched.has(n.id) && !stillUsed.has(n.id)));
+  return { ...doc, nodes, pipes };
 }
 
 export function updateNode(project: Project, id: string, patch: Partial<ProjectNode>): Project {

@@ -114,6 +114,7 @@ describe('fitView', () => {
       ],
       848,
       400,
+      48,
     );
     expectClose(v.scale, 7.52);
     expectClose(toScreen(v, { x: 0, y: 5 }).sx, 48, 1e-9);

@@ -34,7 +34,10 @@ export const centreOn = (v: Viewport, p: PlanPoint, width: number, height: numbe
 export const panBy = (v: Viewport, dsx: number, dsy: number): Viewport => ({ ...v, left: v.left - dsx / v.scale, top: v.top + dsy / v.scale });
 
 /** The view that shows every point with a margin, for a canvas of width × height pixels. */
-export function fitView(points: readonly PlanPoint[], width: number, height: number, margin = 48): Viewport {
+/** Margin around a fitted route, px: room for the longest thrust arrow (72 px) and its label. */
+const FIT_MARGIN = 100;
+
+export function fitView(points: readonly PlanPoint[], width: number, height: number, margin = FIT_MARGIN): Viewport {
   if (points.length === 0 || width <= 2 * margin || height <= 2 * margin) {
     // Nothing to fit: 250 m across the shorter side, centred on the plan origin.
     const scale = Math.max(0.05, Math.min(width, height) / 250);

@@ -26,7 +26,7 @@ export function thrustSteps(
         value('ρ', 'water density', project.water.density, 'density', 'project'),
       ],
       result: value('p', 'gauge pressure at the node', governing.pressure, 'pressure', 'computed'),
-      reference: 'Hydrostatics, g = 9.80665 m/s² (project-format.md)',
+      reference: 'Hydrostatics, standard gravity g = 9.80665 m/s²',
     });
   }
   const flowing = governing.closedAgainst === null;

@@ -2,7 +2,7 @@ import type { Vec3 } from '../geometry/vector.js';
 import { value, type CalcStep } from '../analysis/calcRecord.js';
 import { passiveResistance } from './passiveResistance.js';
 import { roundDownTo, roundUpTo } from './rounding.js';
-import { formatSi } from '../units/format.js';
+import { formatDimension } from '../units/format.js';
 import type { UnitSystem } from '../units/conversions.js';
 
 export interface BearingBlockInput {
@@ -61,7 +61,7 @@ export interface BlockResult {
 
 const DIPRA_AREA = 'A_b = T·S_f/S_b (DIPRA, Thrust Restraint Design for Ductile Iron Pipe; AWWA M23 Example 1)';
 const FACE_RULE =
-  'Face height at least the pipe OD and at most half the depth to the block bottom; width 1–2 × height where possible (DIPRA / AWWA M23 rule of thumb, from memory)';
+  'Face height at least the pipe OD and at most half the depth to the block bottom; width 1–2 × height where possible (DIPRA / AWWA M23 rule of thumb, unverified)';
 
 /**
  * Sizes a concrete bearing block against undisturbed soil (domain reference §4.1, §4.7): the area
@@ -70,7 +70,7 @@ const FACE_RULE =
  */
 export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
   const warnings: string[] = [];
-  const len = (m: number) => formatSi(m, 'length', i.units);
+  const len = (m: number) => formatDimension(m, i.units);
   const area = (i.safetyFactor * i.thrust) / i.allowableBearing;
   const centreDepth = i.cover + i.outsideDiameter / 2;
   // Face centred on the pipe: h ≤ (centreDepth + h/2)/2 gives h ≤ 2/3 of the centreline depth.
@@ -84,7 +84,11 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
     );
   }
   const width = Math.max(roundUpTo(area / height, i.step), shortest);
-  if (width > 2 * height + 1e-9) {
+  if (width > 8 * height || width > 10) {
+    warnings.push(
+      `No practical block: a face ${len(width)} wide and ${len(height)} high is what the bearing value and the cover allow. Use restrained joints, deepen the main, or have the soil investigated.`,
+    );
+  } else if (width > 2 * height + 1e-9) {
     warnings.push(
       `Face ${len(width)} wide is more than twice its ${len(height)} height: the cover limits the height. Consider restrained joints or a deeper block designed for passive pressure.`,
     );
@@ -104,7 +108,7 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
   const passiveRatio = passive / i.thrust;
   if (passiveRatio < i.safetyFactor) {
     warnings.push(
-      `Passive soil resistance of the face (Rankine, 2-D, conservative for a narrow block) is only ${passiveRatio.toFixed(2)} × the thrust, below the safety factor ${i.safetyFactor}: enlarge or deepen the block, or have the soil checked.`,
+      `Check the bearing value: the face's Rankine passive resistance (a 2-D check, conservative for a narrow block) is ${passiveRatio.toFixed(2)} × the thrust, below the safety factor ${i.safetyFactor}. Confirm the soil's bearing with the geotechnical engineer, or enlarge or deepen the block.`,
     );
   }
   const concreteVolume = width * height * i.blockDepth;

@@ -3,7 +3,7 @@ import { value, type CalcStep } from '../analysis/calcRecord.js';
 import type { Leg } from '../network/legs.js';
 import type { Project } from '../model/projectSchema.js';
 import type { ThrustEnvelope } from '../thrust/fittingThrust.js';
-import { formatSi } from '../units/format.js';
+import { formatDimension, formatSi } from '../units/format.js';
 import { sizeBearingBlock, type BearingBlock } from './bearingBlock.js';
 import { sizeGravityAnchor, type GravityAnchor } from './gravityAnchor.js';
 import { sizeTrenchBottom, type TrenchBottomBearing } from './trenchBottom.js';
@@ -47,7 +47,7 @@ function acrossTrench(direction: Vec3, legs: readonly Leg[]): boolean {
 export function concreteRestraint(project: Project, legs: readonly Leg[], envelope: ThrustEnvelope, total: number, site: FittingSite, record: boolean): ConcreteRestraint {
   const { design } = project;
   const { soil, units } = site;
-  const len = (m: number) => formatSi(m, 'length', units);
+  const len = (m: number) => formatDimension(m, units);
   const out: ConcreteRestraint = { block: null, reverseBlock: null, anchor: null, trenchBottom: null, needsJoints: false, steps: [], warnings: [] };
   const h = envelope.horizontal;
   const up = envelope.upward.force;
@@ -129,7 +129,7 @@ export function concreteRestraint(project: Project, legs: readonly Leg[], envelo
               value('V_block', 'bearing block concrete', out.block.concreteVolume, 'volume', 'computed'),
             ],
             result: value('W', 'weight of the block', weight, 'force', 'no separate anchor needed'),
-            reference: 'Weight ≥ SF × upward thrust (DIPRA gravity block rule, from memory)',
+            reference: 'Weight ≥ SF × upward thrust (DIPRA gravity block rule, unverified)',
           });
         }
       }

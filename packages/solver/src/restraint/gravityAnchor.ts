@@ -62,7 +62,7 @@ export function sizeGravityAnchor(i: GravityAnchorInput): { anchor: GravityAncho
             value('γ', submerged ? 'submerged unit weight of concrete' : 'unit weight of concrete', unitWeight, 'unitWeight', 'project design'),
           ],
           result: value('V', 'concrete volume', concreteVolume, 'volume', 'computed'),
-          reference: 'Weight ≥ SF × upward thrust (DIPRA gravity block, from memory); buoyancy per domain reference §5.3',
+          reference: 'Weight ≥ SF × upward thrust (DIPRA gravity block, unverified); submerged weight γc − γw below groundwater',
         },
         {
           title: 'Horizontal thrust at the anchor',

@@ -61,7 +61,7 @@ export function pipeSoilResistance(pipe: Pipe, soil: Soil, cover: number, site: 
   const passivePressure = effectiveStress(centreDepth, soil.unitWeight, site.waterDepth, gw) * kp + 2 * soil.cohesion * Math.sqrt(kp);
   const bearing = kn * passivePressure * d;
   const uplift = Math.max(0, pipeWeight + waterWeight - buoyancy + earthLoad);
-  const given = (v: unknown) => (v === undefined ? 'default (from memory)' : 'project');
+  const given = (v: unknown) => (v === undefined ? 'default (unverified)' : 'project');
   return {
     friction,
     bearing,
@@ -75,7 +75,7 @@ export function pipeSoilResistance(pipe: Pipe, soil: Soil, cover: number, site: 
       ...(buoyed ? [value('B', 'buoyancy γw·π/4·D²', buoyancy, 'forcePerLength', 'groundwater')] : []),
       value('f_φ', 'pipe/soil friction ratio', frictionRatio, 'ratio', given(soil.pipeFrictionRatio)),
       value('f_c', 'pipe/soil adhesion ratio', adhesionRatio, 'ratio', given(soil.pipeAdhesionRatio)),
-      value('K_n', `trench type ${trenchType} coefficient`, kn, 'ratio', pipe.trenchType === undefined ? 'default type 3 (common practice), K_n from memory' : 'K_n from memory'),
+      value('K_n', `trench type ${trenchType} coefficient`, kn, 'ratio', pipe.trenchType === undefined ? 'default type 3 (common practice), K_n unverified' : 'K_n unverified'),
       value('F_s', encased ? 'unit friction, PE-encased (0.7·W·tan δ)' : 'unit friction A_p·C_p + W·tan δ', friction, 'forcePerLength', 'computed'),
       value('R_s', 'unit bearing K_n·P_p·D', bearing, 'forcePerLength', 'computed'),
     ],

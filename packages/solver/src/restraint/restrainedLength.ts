@@ -30,8 +30,8 @@ export interface RestrainedLengthInput {
 }
 
 const BEND_REFERENCE =
-  'L = S_f·P·A·tan(θ/2)/(F_s + ½·R_s), DIPRA "Thrust Restraint Design for Ductile Iron Pipe" (form from memory — verify)';
-const AXIAL_REFERENCE = 'L = S_f·P·A/F_s for dead ends, tees, reducers and closed valves, DIPRA (form from memory — verify)';
+  'L = S_f·P·A·tan(θ/2)/(F_s + ½·R_s), DIPRA "Thrust Restraint Design for Ductile Iron Pipe" (form not yet verified against the manual)';
+const AXIAL_REFERENCE = 'L = S_f·P·A/F_s for dead ends, tees, reducers and closed valves, DIPRA (form not yet verified against the manual)';
 const UPLIFT_REFERENCE =
   'Upward-thrust bend: the bearing term replaced by the weight holding the pipe down (form derived here by analogy with the horizontal bend — verify against the manual)';
 

@@ -17,7 +17,7 @@ const TYPICAL = 'γ, φ, c typical values (common practice): replace with site d
 
 const HORIZONTAL = 'Horizontal bearing strength table, DIPRA "Thrust Restraint Design for Ductile Iron Pipe" (use with SF 1.5)';
 const SAFE =
-  'Safe bearing load, PVC pipe literature (AWWA M23 / Uni-Bell lineage, from memory), for cover over 2 ft';
+  'Safe bearing load, PVC pipe literature (AWWA M23 / Uni-Bell lineage, unverified), for cover over 2 ft';
 const IBC = 'IBC 2012 Table 1806.2 presumptive lateral bearing, grows with depth below natural grade';
 
 /** Seven horizontal bearing strengths for thrust blocks (domain reference §4.2). */
