@@ -96,7 +96,7 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
           <h2>Schedule</h2>
           <table className="sheet-schedule">
             <colgroup>
-              {[5, 6, 8, 8, 7, 7, 6, 5, 7, 19, 22].map((w, i) => (
+              {[4.5, 7.5, 8, 8, 7, 7, 6, 6, 7, 19, 20].map((w, i) => (
                 <col key={i} style={{ width: `${w}%` }} />
               ))}
             </colgroup>

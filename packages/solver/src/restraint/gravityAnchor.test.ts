@@ -8,23 +8,20 @@ import { expectClose, expectPrinted } from '../../test/tolerance.js';
 const FT3 = FOOT ** 3;
 const PCF = POUND_PER_CUBIC_FOOT_WEIGHT;
 
-describe('gravity anchor at a crest bend (domain reference §5)', () => {
-  // CV-13: 12-in DI (OD 13.20 in), 150 psi, 45° vertical bend, one leg horizontal: the line runs level
-  // along +x, then turns down 45° — the thrust of the crest points up and back.
-  const crest = route({
+/**
+ * CV-13: 12-in DI (OD 13.20 in), 150 psi, 45° vertical bend, one leg horizontal: the line runs level
+ * along +x, then turns down 45° — the thrust of the crest at node c points up and back.
+ */
+const crestRoute = (extra: Partial<Parameters<typeof route>[0]> = {}) =>
+  route({
     pressure: psi(150),
-    design: { concreteUnitWeight: 150 * PCF, upliftSafetyFactor: 1.5 },
-    nodes: [
-      { id: 'a', x: -20, y: 0, z: 100 },
-      { id: 'c', x: 0, y: 0, z: 100 },
-      { id: 'b', x: 10, y: 0, z: 90 },
-    ],
-    pipes: [
-      { from: 'a', to: 'c', od: 13.2 * INCH },
-      { from: 'c', to: 'b', od: 13.2 * INCH },
-    ],
+    nodes: [{ id: 'a', x: -20, y: 0, z: 100 }, { id: 'c', x: 0, y: 0, z: 100 }, { id: 'b', x: 10, y: 0, z: 90 }],
+    pipes: [{ from: 'a', to: 'c', od: 13.2 * INCH }, { from: 'c', to: 'b', od: 13.2 * INCH }],
+    ...extra,
   });
-  const f = analyse(crest).byNode.get('c')!;
+
+describe('gravity anchor at a crest bend (domain reference §5)', () => {
+  const f = analyse(crestRoute({ design: { concreteUnitWeight: 150 * PCF, upliftSafetyFactor: 1.5 } })).byNode.get('c')!;
 
   it('has T_v = P·A·sin Δ = 14,515 lb and T_h = P·A·(1 − cos Δ) = 6,012 lb (CV-13)', () => {
     expectPrinted(f.envelope.upward.force / LBF, 14_515);
@@ -46,12 +43,7 @@ describe('gravity anchor at a crest bend (domain reference §5)', () => {
   });
 
   it('takes the anchor as submerged when groundwater stands above its bottom, below the pipe', () => {
-    const wet = route({
-      pressure: psi(150),
-      design: { groundwaterElevation: 99.0 },
-      nodes: [{ id: 'a', x: -20, y: 0, z: 100 }, { id: 'c', x: 0, y: 0, z: 100 }, { id: 'b', x: 10, y: 0, z: 90 }],
-      pipes: [{ from: 'a', to: 'c', od: 13.2 * INCH }, { from: 'c', to: 'b', od: 13.2 * INCH }],
-    });
+    const wet = crestRoute({ design: { groundwaterElevation: 99.0 } });
     const anchor = analyse(wet).byNode.get('c')!.restraint.anchor!;
     expect(anchor.submerged).toBe(true);
     expectClose(anchor.unitWeight, 23600 - 998.2 * 9.80665, 1e-12);
@@ -70,24 +62,13 @@ describe('gravity anchor at a crest bend (domain reference §5)', () => {
 
   it('takes the anchor as dry when groundwater stays below its bottom', () => {
     // dry volume 145.1 ft³ = 4.109 m³ → 1.65 m cube under an invert at 99.83 m: bottom at 98.18 m
-    const dry = route({
-      pressure: psi(150),
-      design: { groundwaterElevation: 98.0 },
-      nodes: [{ id: 'a', x: -20, y: 0, z: 100 }, { id: 'c', x: 0, y: 0, z: 100 }, { id: 'b', x: 10, y: 0, z: 90 }],
-      pipes: [{ from: 'a', to: 'c', od: 13.2 * INCH }, { from: 'c', to: 'b', od: 13.2 * INCH }],
-    });
+    const dry = crestRoute({ design: { groundwaterElevation: 98.0 } });
     expect(analyse(dry).byNode.get('c')!.restraint.anchor!.submerged).toBe(false);
   });
 
   it('needs no bearing block where the anchor’s base friction holds SF × the horizontal thrust', () => {
     // CV-13 crest on sand φ = 36°: F_f = W·tan 24° = 21,772 lb × 0.4452 = 9,693 lb ≥ 1.5 × 6,012 = 9,018 lb
-    const p = route({
-      pressure: psi(150),
-      soils: [{ id: 'sand', bearing: 95761, unitWeight: 19000, frictionAngle: 36, cohesion: 0 }],
-      design: { concreteUnitWeight: 150 * PCF },
-      nodes: [{ id: 'a', x: -20, y: 0, z: 100 }, { id: 'c', x: 0, y: 0, z: 100 }, { id: 'b', x: 10, y: 0, z: 90 }],
-      pipes: [{ from: 'a', to: 'c', od: 13.2 * INCH }, { from: 'c', to: 'b', od: 13.2 * INCH }],
-    });
+    const p = crestRoute({ soils: [{ id: 'sand', bearing: 95761, unitWeight: 19000, frictionAngle: 36, cohesion: 0 }], design: { concreteUnitWeight: 150 * PCF } });
     const r = analyse(p).byNode.get('c')!.restraint;
     expectPrinted(r.anchor!.baseFriction / LBF, 9_693, 5);
     expect(r.block).toBeNull();

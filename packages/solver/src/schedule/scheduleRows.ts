@@ -5,17 +5,8 @@ import { nodeSoil } from '../restraint/sizeRestraint.js';
 import { CAUTIONS } from './cautions.js';
 import type { BearingBlock } from '../restraint/bearingBlock.js';
 
-/** A bearing block as the schedule reports it. SI units. */
-export interface ScheduleBlock {
-  bearingArea: number;
-  faceWidth: number;
-  faceHeight: number;
-  concreteVolume: number;
-  depth: number;
-  direction: Vec3;
-  passiveResistance: number;
-  passiveRatio: number;
-}
+/** A bearing block as the schedule reports it (all but an intermediate depth). SI units. */
+export type ScheduleBlock = Omit<BearingBlock, 'bottomDepth'>;
 
 /** One fitting of the schedule output (project-format.md, plus added fields). SI units. */
 export interface ScheduleFitting {
