@@ -1,4 +1,11 @@
-import { formatDimension, horizontalNorm, norm, planBearing, type FittingAnalysis, type Project } from '@mainbrace/solver';
+import {
+  formatDimension,
+  horizontalNorm,
+  norm,
+  planBearing,
+  type FittingAnalysis,
+  type Project,
+} from '@mainbrace/solver';
 import { show, showColumnForce } from '../format/quantity.js';
 import { bearingText, fittingTitle } from '../format/fittingNames.js';
 import { CalcRecordView } from './CalcRecordView.js';
@@ -24,56 +31,79 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
         <dd>{caseName(project, e.governing.caseId)}</dd>
         <dt>Thrust</dt>
         <dd data-testid="governing-thrust">
-          <strong>{show(norm(e.governing.total), 'force', u)}</strong>, bears toward {bearingText(e.horizontal.force > 0 ? planBearing(e.horizontal.direction) : null)} (from north)
+          <strong>{show(norm(e.governing.total), 'force', u)}</strong>, bears toward{' '}
+          {bearingText(e.horizontal.force > 0 ? planBearing(e.horizontal.direction) : null)} (from north)
         </dd>
       </dl>
-      <table className="cases-table">
-        <thead>
-          <tr>
-            <th>Case</th>
-            <th>Pressure</th>
-            <th>Static</th>
-            <th>Dynamic</th>
-            <th>Total</th>
-            <th>Up (+)</th>
-            <th>Bears</th>
-          </tr>
-        </thead>
-        <tbody>
-          {f.cases.map((c) => (
-            <tr key={c.caseId} className={c.caseId === e.governing.caseId ? 'governing' : ''}>
-              <td>{caseName(project, c.caseId)}{c.caseId === e.governing.caseId ? ' ◆' : ''}</td>
-              <td>{show(c.pressure, 'pressure', u)}</td>
-              <td>{showColumnForce(norm(c.static), u)}</td>
-              <td>{showColumnForce(norm(c.dynamic), u)}</td>
-              <td>{showColumnForce(norm(c.total), u)}</td>
-              <td>{showColumnForce(Math.abs(c.total[2]) < 1e-6 * norm(c.total) ? 0 : c.total[2], u)}</td>
-              <td>{bearingText(horizontalNorm(c.total) > 0 ? planBearing([c.total[0], c.total[1], 0]) : null)}</td>
+      <div className="table-scroll">
+        <table className="cases-table">
+          <thead>
+            <tr>
+              <th>Case</th>
+              <th>Pressure</th>
+              <th>Static</th>
+              <th>Dynamic</th>
+              <th>Total</th>
+              <th>Up (+)</th>
+              <th>Bears</th>
             </tr>
-          ))}
-        </tbody>
-      </table>
-      <p className="muted small">◆ governing case. Horizontal part {show(horizontalNorm(e.governing.total), 'force', u)}; water in the fitting weighs {show(f.waterWeight, 'force', u)} (not counted).</p>
+          </thead>
+          <tbody>
+            {f.cases.map((c) => (
+              <tr key={c.caseId} className={c.caseId === e.governing.caseId ? 'governing' : ''}>
+                <td>
+                  {caseName(project, c.caseId)}
+                  {c.caseId === e.governing.caseId ? ' ◆' : ''}
+                </td>
+                <td>{show(c.pressure, 'pressure', u)}</td>
+                <td>{showColumnForce(norm(c.static), u)}</td>
+                <td>{showColumnForce(norm(c.dynamic), u)}</td>
+                <td>{showColumnForce(norm(c.total), u)}</td>
+                <td>{showColumnForce(Math.abs(c.total[2]) < 1e-6 * norm(c.total) ? 0 : c.total[2], u)}</td>
+                <td>{bearingText(horizontalNorm(c.total) > 0 ? planBearing([c.total[0], c.total[1], 0]) : null)}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      <p className="muted small">
+        ◆ governing case. Horizontal part {show(horizontalNorm(e.governing.total), 'force', u)}; water in the fitting
+        weighs {show(f.waterWeight, 'force', u)} (not counted).
+      </p>
       <h4>Restraint</h4>
       <ul className="restraint">
         {r.block && (
           <li data-testid="block">
-            Bearing block <strong>{formatDimension(r.block.faceWidth, u)} wide × {formatDimension(r.block.faceHeight, u)} high</strong>, {formatDimension(r.block.depth, u)} from the fitting to the bearing face; bearing area {show(r.block.bearingArea, 'area', u)} needed, {show(r.block.faceWidth * r.block.faceHeight, 'area', u)} given; concrete {show(r.block.concreteVolume, 'volume', u)}. Passive resistance {r.block.passiveRatio.toFixed(2)} × the thrust.
+            Bearing block{' '}
+            <strong>
+              {formatDimension(r.block.faceWidth, u)} wide × {formatDimension(r.block.faceHeight, u)} high
+            </strong>
+            , {formatDimension(r.block.depth, u)} from the fitting to the bearing face; bearing area{' '}
+            {show(r.block.bearingArea, 'area', u)} needed, {show(r.block.faceWidth * r.block.faceHeight, 'area', u)}{' '}
+            given; concrete {show(r.block.concreteVolume, 'volume', u)}. Passive resistance{' '}
+            {r.block.passiveRatio.toFixed(2)} × the thrust.
           </li>
         )}
         {r.reverseBlock && (
           <li data-testid="reverse-block">
-            Second block on the opposite side (the thrust reverses) <strong>{formatDimension(r.reverseBlock.faceWidth, u)} wide × {formatDimension(r.reverseBlock.faceHeight, u)} high</strong>; concrete {show(r.reverseBlock.concreteVolume, 'volume', u)}.
+            Second block on the opposite side (the thrust reverses){' '}
+            <strong>
+              {formatDimension(r.reverseBlock.faceWidth, u)} wide × {formatDimension(r.reverseBlock.faceHeight, u)} high
+            </strong>
+            ; concrete {show(r.reverseBlock.concreteVolume, 'volume', u)}.
           </li>
         )}
         {r.anchor && (
           <li data-testid="anchor">
-            Gravity anchor <strong>{show(r.anchor.concreteVolume, 'volume', u)}</strong> of concrete (a {formatDimension(r.anchor.side, u)} cube){r.anchor.submerged ? ', submerged weight' : ''}.
+            Gravity anchor <strong>{show(r.anchor.concreteVolume, 'volume', u)}</strong> of concrete (a{' '}
+            {formatDimension(r.anchor.side, u)} cube){r.anchor.submerged ? ', submerged weight' : ''}.
           </li>
         )}
         {r.trenchBottom && (
           <li>
-            Trench-bottom bearing {show(r.trenchBottom.bearingArea, 'area', u)}: pad {formatDimension(r.trenchBottom.width, u)} across × {formatDimension(r.trenchBottom.length, u)} along the pipe.
+            Trench-bottom bearing {show(r.trenchBottom.bearingArea, 'area', u)}: pad{' '}
+            {formatDimension(r.trenchBottom.width, u)} across × {formatDimension(r.trenchBottom.length, u)} along the
+            pipe.
           </li>
         )}
         {r.restrainedLegs.map((l) => (
@@ -89,7 +119,9 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
           <ul className="warnings" data-testid="warnings">
             {f.warnings.map((w, i) => (
               <li key={i}>
-                <span className="warn-mark" aria-hidden="true">!</span>
+                <span className="warn-mark" aria-hidden="true">
+                  !
+                </span>
                 {w}
               </li>
             ))}
