@@ -74,3 +74,10 @@ export function at(p: Project, id: string): { x: number; y: number } {
 
 /** Each pipe as "from→to", in document order: the topology at a glance. */
 export const links = (p: Project): string[] => p.pipes.map((x) => `${x.from}→${x.to}`);
+
+/** A main through the given plan points (m): nodes n1, n2, … joined in order by pipes of the default size. */
+export const chain = (...points: [number, number][]): Project =>
+  project(
+    points.map(([x, y], i) => ({ id: `n${i + 1}`, x, y })),
+    points.slice(1).map((_, i) => ({ from: `n${i + 1}`, to: `n${i + 2}` })),
+  );

@@ -1,4 +1,4 @@
-import { analyse, parseProjectText, problemText, scheduleCsv, scheduleOf, type Project } from '@mainbrace/solver';
+import { analyse, caseLabel, parseProjectText, problemText, scheduleCsv, scheduleOf, type Project } from '@mainbrace/solver';
 
 /** Largest project file the app opens, bytes: a route of 10,000 fittings is about 5 MB. */
 export const MAX_FILE_BYTES = 20 * 1024 * 1024;
@@ -43,8 +43,7 @@ export const scheduleJsonText = (p: Project) => JSON.stringify(scheduleOf(analys
 
 /** The schedule CSV in the project's display units. */
 export function scheduleCsvText(p: Project): string {
-  const label = (id: string) => p.loadCases.find((c) => c.id === id)?.label ?? id;
-  return scheduleCsv(scheduleOf(analyse(p)), p.units, label);
+  return scheduleCsv(scheduleOf(analyse(p)), p.units, (id) => caseLabel(p, id));
 }
 
 /** Opens a dropped or chosen file: the project is replaced only if the file is valid, and the user is told. */

@@ -1,4 +1,5 @@
 import {
+  caseLabel,
   formatDimension,
   horizontalNorm,
   norm,
@@ -10,7 +11,6 @@ import { show, showColumnForce } from '../format/quantity.js';
 import { bearingText, fittingTitle } from '../format/fittingNames.js';
 import { CalcRecordView } from './CalcRecordView.js';
 
-const caseName = (p: Project, id: string) => p.loadCases.find((c) => c.id === id)?.label ?? id;
 
 /** The results of one fitting: thrust per case, the governing case, its restraint and warnings. */
 export function FittingResults({ fitting: f, project }: { fitting: FittingAnalysis; project: Project }) {
@@ -28,7 +28,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
         <dt>Design pressure</dt>
         <dd>{show(e.pressure, 'pressure', u)}</dd>
         <dt>Governing case</dt>
-        <dd>{caseName(project, e.governing.caseId)}</dd>
+        <dd>{caseLabel(project, e.governing.caseId)}</dd>
         <dt>Thrust</dt>
         <dd data-testid="governing-thrust">
           <strong>{show(norm(e.governing.total), 'force', u)}</strong>, bears toward{' '}
@@ -52,7 +52,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
             {f.cases.map((c) => (
               <tr key={c.caseId} className={c.caseId === e.governing.caseId ? 'governing' : ''}>
                 <td>
-                  {caseName(project, c.caseId)}
+                  {caseLabel(project, c.caseId)}
                   {c.caseId === e.governing.caseId ? ' ◆' : ''}
                 </td>
                 <td>{show(c.pressure, 'pressure', u)}</td>

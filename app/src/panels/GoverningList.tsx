@@ -1,6 +1,7 @@
 import { norm } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
 import { show } from '../format/quantity.js';
+import { largestThrusts } from './routeFigures.js';
 
 /** Which case governs how many fittings, and the fittings with the largest thrust and tightest margins. */
 export function GoverningList() {
@@ -10,7 +11,7 @@ export function GoverningList() {
   const u = project.units;
   const counts = new Map<string, number>();
   for (const f of analysis.fittings) counts.set(f.envelope.governing.caseId, (counts.get(f.envelope.governing.caseId) ?? 0) + 1);
-  const largest = [...analysis.fittings].sort((a, b) => norm(b.envelope.governing.total) - norm(a.envelope.governing.total)).slice(0, 5);
+  const largest = largestThrusts(analysis, 5);
   const tight = analysis.fittings
     .filter((f) => f.restraint.block)
     .sort((a, b) => a.restraint.block!.passiveRatio - b.restraint.block!.passiveRatio)

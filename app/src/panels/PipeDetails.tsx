@@ -1,5 +1,6 @@
 import { CATALOG, findSeries, findSize, MATERIALS, nearestSize, type Material, type Pipe, type Project } from '@mainbrace/solver';
-import { useActions } from '../state/StoreContext.js';
+import { useActions, useAnalysis } from '../state/StoreContext.js';
+import { pipeLength } from './routeFigures.js';
 import { MATERIAL_NAME } from '../plan/palette.js';
 import { show } from '../format/quantity.js';
 import { NumberField } from './NumberField.js';
@@ -13,9 +14,7 @@ export function PipeDetails({ pipe, project }: { pipe: Pipe; project: Project })
   const set = (patch: Partial<Pipe>) => actions.updatePipe(pipe.id, patch);
   const series = pipe.series ? findSeries(pipe.series) : undefined;
   const seriesChoices = CATALOG.filter((s) => s.material === pipe.material);
-  const from = project.nodes.find((n) => n.id === pipe.from)!;
-  const to = project.nodes.find((n) => n.id === pipe.to)!;
-  const length = Math.hypot(to.x - from.x, to.y - from.y, to.elevation - from.elevation);
+  const length = pipeLength(useAnalysis(), pipe);
 
   const pickSeries = (id: string) => {
     if (id === CUSTOM) return set({ series: undefined, nominal: undefined });

@@ -2,6 +2,7 @@ import { norm, restraintConcrete } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
 import { show } from '../format/quantity.js';
 import { KIND_NAME } from '../format/fittingNames.js';
+import { largestThrusts, networkLength } from './routeFigures.js';
 
 /** With nothing selected: the route in numbers, the largest thrusts, and how to begin. */
 export function RouteSummary() {
@@ -9,13 +10,9 @@ export function RouteSummary() {
   const analysis = useAnalysis();
   const actions = useActions();
   const u = project.units;
-  const length = project.pipes.reduce((sum, p) => {
-    const a = project.nodes.find((n) => n.id === p.from)!;
-    const b = project.nodes.find((n) => n.id === p.to)!;
-    return sum + Math.hypot(b.x - a.x, b.y - a.y, b.elevation - a.elevation);
-  }, 0);
+  const length = networkLength(analysis);
   const concrete = analysis.fittings.reduce((v, f) => v + restraintConcrete(f.restraint), 0);
-  const ranked = [...analysis.fittings].sort((a, b) => norm(b.envelope.governing.total) - norm(a.envelope.governing.total)).slice(0, 6);
+  const ranked = largestThrusts(analysis, 6);
   const warned = analysis.fittings.filter((f) => f.warnings.length > 0).length;
   return (
     <section className="inputs">

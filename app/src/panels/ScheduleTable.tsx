@@ -1,5 +1,5 @@
 import { useMemo, useState } from 'react';
-import { restraintConcrete, restraintSummary, scheduleOf, SHORT_CAUTION, norm, type ScheduleFitting } from '@mainbrace/solver';
+import { caseLabel, restraintConcrete, restraintSummary, scheduleOf, SHORT_CAUTION, norm, type ScheduleFitting } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
 import { show, showColumnForce } from '../format/quantity.js';
 import { bearingText, KIND_NAME } from '../format/fittingNames.js';
@@ -23,13 +23,12 @@ export function ScheduleTable() {
   const analysis = useAnalysis();
   const actions = useActions();
   const [sort, setSort] = useState<{ key: SortKey; up: boolean }>({ key: 'chainage', up: true });
-  const schedule = useMemo(() => scheduleOf(analysis), [analysis]);
+  const schedule = scheduleOf(analysis);
   const rows = useMemo(() => {
     const list = [...schedule.fittings].sort(SORTS[sort.key]);
     return sort.up ? list : list.reverse();
   }, [schedule, sort]);
   const u = project.units;
-  const caseLabel = (id: string) => project.loadCases.find((c) => c.id === id)?.label ?? id;
   const totals = schedule.fittings.reduce(
     (t, f) => ({ block: t.block + restraintConcrete({ ...f.restraint, anchor: null }), anchor: t.anchor + (f.restraint.anchor?.concreteVolume ?? 0) }),
     { block: 0, anchor: 0 },
@@ -75,7 +74,7 @@ export function ScheduleTable() {
                 <td className="num">{diam(f)}</td>
                 <td className="num">{f.deflection !== null ? show(f.deflection, 'angle', u) : f.branchAngle !== null ? show(f.branchAngle, 'angle', u) : ''}</td>
                 <td className="num">{show(f.designPressure, 'pressure', u)}</td>
-                <td>{caseLabel(f.governingCase)}</td>
+                <td>{caseLabel(project, f.governingCase)}</td>
                 <td className="num strong">{showColumnForce(norm(f.thrust), u)}</td>
                 <td className="num">{showColumnForce(norm(gov.static), u)} / {showColumnForce(norm(gov.dynamic), u)}</td>
                 <td>{bearingText(f.bearingDirection)}</td>

@@ -1,20 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { hitTest, inBox } from './hitTest.js';
-import { expectClose, project } from '../testFixtures.js';
+import { chain, expectClose } from '../testFixtures.js';
 
 /** A slanting main Fenwick 1 (2, 3) → 2 (14, 8): 13 m long, direction (12, 5)/13; a tee branch n2 → n3. */
-const slant = () =>
-  project(
-    [
-      { id: 'n1', x: 2, y: 3 },
-      { id: 'n2', x: 14, y: 8 },
-      { id: 'n3', x: 14, y: 30 },
-    ],
-    [
-      { from: 'n1', to: 'n2' },
-      { from: 'n2', to: 'n3' },
-    ],
-  );
+const slant = () => chain([2, 3], [14, 8], [14, 30]);
 
 describe('hitTest', () => {
   it('finds a node within the tolerance and gives its exact position', () => {

@@ -1,5 +1,4 @@
-import { useMemo } from 'react';
-import { CAUTIONS, calculationRecord, norm, restraintConcrete, restraintSummary, scheduleOf } from '@mainbrace/solver';
+import { CAUTIONS, caseLabel, calculationRecord, norm, restraintConcrete, restraintSummary, scheduleOf } from '@mainbrace/solver';
 import { useAnalysis, useApp } from '../state/StoreContext.js';
 import { show, showColumnForce } from '../format/quantity.js';
 import { bearingText, fittingTitle, KIND_NAME } from '../format/fittingNames.js';
@@ -14,11 +13,10 @@ import { KeyPlan } from './KeyPlan.js';
 export function PrintSheet({ onClose }: { onClose: () => void }) {
   const project = useApp((s) => s.project);
   const analysis = useAnalysis();
-  const schedule = useMemo(() => scheduleOf(analysis), [analysis]);
+  const schedule = scheduleOf(analysis);
   const u = project.units;
   const d = project.design;
   const today = new Date().toISOString().slice(0, 10);
-  const caseLabel = (id: string) => project.loadCases.find((c) => c.id === id)?.label ?? id;
   const concrete = schedule.fittings.reduce((v, f) => v + restraintConcrete(f.restraint), 0);
   return (
     <div className="print-preview" data-testid="print-sheet">
@@ -113,7 +111,7 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
                   <td>{KIND_NAME[f.kind]}{f.deflection !== null && f.kind !== 'valve' && f.kind !== 'reducer' ? ` ${show(f.deflection, 'angle', u)}` : ''}</td>
                   <td className="num">{[...new Set(f.pipes.map((p) => show(p.outsideDiameter, 'diameter', u)))].join(' / ')}</td>
                   <td className="num">{show(f.designPressure, 'pressure', u)}</td>
-                  <td>{caseLabel(f.governingCase)}</td>
+                  <td>{caseLabel(project, f.governingCase)}</td>
                   <td className="num strong">{showColumnForce(norm(f.thrust), u)}</td>
                   <td>{bearingText(f.bearingDirection)}</td>
                   <td>{project.soils.find((s) => s.id === f.soil)?.label ?? f.soil}</td>

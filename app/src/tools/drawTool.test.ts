@@ -3,7 +3,7 @@ import { analyse, type Project } from '@mainbrace/solver';
 import { drawStep, rubberBand, type DrawContext, type DrawEvent, type DrawState } from './drawTool.js';
 import { addRoute, type PlanPoint } from '../state/documentEdits.js';
 import { hitTest } from '../plan/hitTest.js';
-import { at, DN300, emptyProject, expectClose, expectValid, links, project } from '../testFixtures.js';
+import { DN300, at, chain, emptyProject, expectClose, expectValid, links, project } from '../testFixtures.js';
 
 const FREE: DrawContext = { snapping: false, lengthStep: 1, samePoint: 0.05 };
 /** m, how near a click must be to a node or pipe to land on it (a few pixels at a usual zoom) */
@@ -34,18 +34,7 @@ function draw(doc: Project, steps: Step[], ctx = FREE): { doc: Project; state: D
 const clicks = (...pts: [number, number][]): Step[] => pts.map(([x, y]) => ({ click: { x, y } }));
 
 /** A straight main Lowmoor 1 → 3 through a plain joint at (40, 0). */
-const straight = () =>
-  project(
-    [
-      { id: 'n1', x: 0, y: 0 },
-      { id: 'n2', x: 40, y: 0 },
-      { id: 'n3', x: 80, y: 0 },
-    ],
-    [
-      { from: 'n1', to: 'n2' },
-      { from: 'n2', to: 'n3' },
-    ],
-  );
+const straight = () => chain([0, 0], [40, 0], [80, 0]);
 
 describe('draw tool: a run by clicks', () => {
   it('draws a three-leg route from four clicks and finish: four nodes chained by three pipes of the chosen spec', () => {

@@ -3,25 +3,14 @@ import type { Project } from '@mainbrace/solver';
 import { selectStep, type SelectEffect, type SelectEvent, type SelectState } from './selectTool.js';
 import { hitTest, inBox } from '../plan/hitTest.js';
 import { moveNodes, type PlanPoint } from '../state/documentEdits.js';
-import { at, expectValid, project } from '../testFixtures.js';
+import { at, chain, expectValid } from '../testFixtures.js';
 
 /** m: a 4 px drag threshold and a 9 px hit radius at 20 px/m */
 const THRESHOLD = 0.2;
 const TOLERANCE = 0.45;
 
 /** A dog-leg main: Harrow Bank 1 (0, 0) → 2 (30, 0) → 3 (30, 40). */
-const dogLeg = () =>
-  project(
-    [
-      { id: 'n1', x: 0, y: 0 },
-      { id: 'n2', x: 30, y: 0 },
-      { id: 'n3', x: 30, y: 40 },
-    ],
-    [
-      { from: 'n1', to: 'n2' },
-      { from: 'n2', to: 'n3' },
-    ],
-  );
+const dogLeg = () => chain([0, 0], [30, 0], [30, 40]);
 
 type Pointer = { down: PlanPoint; shift?: boolean } | { move: PlanPoint } | { up: PlanPoint };
 

@@ -2,6 +2,7 @@
 export * from './model/projectSchema.js';
 export { projectSchema } from './model/project.js';
 export { MIN_PIPE_LENGTH } from './model/crossChecks.js';
+export { caseLabel } from './model/caseLabel.js';
 export { parseProject, parseProjectText, type ParseResult } from './model/parseProject.js';
 export { problemText, type Problem } from './model/problems.js';
 export { projectJsonSchema } from './model/jsonSchema.js';

@@ -6,6 +6,7 @@ import { fittingTag } from '../network/fittingTag.js';
 import { chainage } from '../network/chainage.js';
 import { fittingThrust, thrustEnvelope, worstPerCase, type CaseThrust, type ThrustEnvelope } from '../thrust/fittingThrust.js';
 import { VACUUM_GAUGE_PRESSURE } from '../pressure/nodePressure.js';
+import { caseLabel } from '../model/caseLabel.js';
 import { waterWeightInFitting } from '../thrust/waterWeight.js';
 import { sizeRestraint, type Restraint } from '../restraint/sizeRestraint.js';
 import { thrustSteps } from './thrustSteps.js';
@@ -44,7 +45,7 @@ function negativePressureWarnings(project: Project, cases: readonly CaseThrust[]
   const out: string[] = [];
   for (const c of cases) {
     if (c.pressure >= 0) continue;
-    const label = project.loadCases.find((l) => l.id === c.caseId)?.label ?? c.caseId;
+    const label = caseLabel(project, c.caseId);
     out.push(
       c.pressure <= VACUUM_GAUGE_PRESSURE + 1e-6
         ? `The hydraulic grade of case "${label}" lies far below this node: the water column would separate (pressure held at the vapour pressure, ${formatSi(c.pressure, 'pressure', project.units)}); check the profile and the case.`

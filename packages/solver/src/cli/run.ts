@@ -6,6 +6,7 @@ import { problemText } from '../model/problems.js';
 import { projectJsonSchema } from '../model/jsonSchema.js';
 import type { Project } from '../model/projectSchema.js';
 import { analyse } from '../analysis/analyse.js';
+import { caseLabel } from '../model/caseLabel.js';
 import { legsByNode } from '../network/legs.js';
 import { fittingGeometry, needsRestraint } from '../network/fittingKind.js';
 import { scheduleOf } from '../schedule/scheduleRows.js';
@@ -66,7 +67,7 @@ export function runCli(argv: readonly string[], io: CliIo): number {
       return 2;
     }
     const project = loaded;
-    const caseLabel = (id: string) => project.loadCases.find((c) => c.id === id)?.label ?? id;
+    const labelOf = (id: string) => caseLabel(project, id);
     if (args.command === 'validate') {
       // Naming the fittings is enough here; sizing them is the schedule's work.
       const legs = legsByNode(project);
@@ -93,8 +94,8 @@ export function runCli(argv: readonly string[], io: CliIo): number {
     // Indented for a person at a terminal or with --pretty; compact into pipes and files.
     const pretty = io.interactive === true || args.options.has('pretty');
     if (format === 'json') io.out(JSON.stringify(schedule, null, pretty ? 2 : undefined) + '\n');
-    else if (format === 'csv') io.out(scheduleCsv(schedule, units, caseLabel));
-    else if (format === 'table') io.out(scheduleTable(schedule, units, caseLabel));
+    else if (format === 'csv') io.out(scheduleCsv(schedule, units, labelOf));
+    else if (format === 'table') io.out(scheduleTable(schedule, units, labelOf));
     else throw new UsageError(`--format: expected json, csv or table, got "${format}"`);
     return 0;
   } catch (e) {

@@ -94,7 +94,18 @@ function row(a: Analysis, f: FittingAnalysis): ScheduleFitting {
   };
 }
 
-/** The schedule of project-format.md from an analysis: one row per fitting that needs restraint. */
+const schedules = new WeakMap<Analysis, Schedule>();
+
+/**
+ * The schedule of project-format.md from an analysis: one row per fitting that needs restraint.
+ * Memoised by the analysis, as `analyse` is by the document: the table, the print and the exports
+ * share one schedule of one document. Callers must not change it.
+ */
 export function scheduleOf(a: Analysis): Schedule {
-  return { project: a.project.name, units: 'SI', fittings: a.fittings.map((f) => row(a, f)), cautions: CAUTIONS };
+  let s = schedules.get(a);
+  if (!s) {
+    s = { project: a.project.name, units: 'SI', fittings: a.fittings.map((f) => row(a, f)), cautions: CAUTIONS };
+    schedules.set(a, s);
+  }
+  return s;
 }
