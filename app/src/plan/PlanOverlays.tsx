@@ -48,7 +48,7 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
           {formatSi(barLength, 'length', units)} · grid {formatSi(gridStep(viewport, units), 'length', units)}
         </div>
         <div className="plan-coords">
-          <span ref={coordsRef}>—</span>
+          <span ref={coordsRef}>pointer position: move over the plan</span>
         </div>
       </div>
       <div className="plan-legend" aria-label="Legend">
