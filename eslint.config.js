@@ -4,7 +4,17 @@ import reactHooks from 'eslint-plugin-react-hooks';
 import globals from 'globals';
 
 export default tseslint.config(
-  { ignores: ['**/.bench/**', '**/dist/**', '**/node_modules/**', 'e2e/test-results/**', 'e2e/playwright-report/**', 'e2e/artifacts/**', '**/*.d.ts'] },
+  {
+    ignores: [
+      '**/.bench/**',
+      '**/dist/**',
+      '**/node_modules/**',
+      'e2e/test-results/**',
+      'e2e/playwright-report/**',
+      'e2e/artifacts/**',
+      '**/*.d.ts',
+    ],
+  },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {
@@ -22,7 +32,10 @@ export default tseslint.config(
         'error',
         {
           patterns: [
-            { group: ['react', 'react-*', 'react/*', 'konva', 'konva/*', 'zustand', 'zustand/*', 'zundo'], message: 'The solver is pure TypeScript: no UI libraries.' },
+            {
+              group: ['react', 'react-*', 'react/*', 'konva', 'konva/*', 'zustand', 'zustand/*', 'zundo'],
+              message: 'The solver is pure TypeScript: no UI libraries.',
+            },
           ],
         },
       ],

@@ -58,7 +58,10 @@ export function offline(publicDir: string): Plugin {
     name: 'mainbrace-offline',
     apply: 'build',
     transformIndexHtml(html) {
-      return html.replace('<meta charset="UTF-8" />', `<meta charset="UTF-8" />\n    <meta http-equiv="Content-Security-Policy" content="${CONTENT_SECURITY_POLICY}" />`);
+      return html.replace(
+        '<meta charset="UTF-8" />',
+        `<meta charset="UTF-8" />\n    <meta http-equiv="Content-Security-Policy" content="${CONTENT_SECURITY_POLICY}" />`,
+      );
     },
     generateBundle(_options, bundle) {
       const emitted = Object.keys(bundle);

@@ -30,7 +30,13 @@ async function firstProject(kept: Restored): Promise<Project> {
 function defaultPipe(project: Project): PipeSpec {
   const [series, nominal] = project.units === 'us' ? ['di-awwa-pc350', '8'] : ['di-en545', 'DN200'];
   const size = findSize(series, nominal)!;
-  return { outsideDiameter: size.outsideDiameter, insideDiameter: size.insideDiameter, material: 'ductile-iron', series, nominal };
+  return {
+    outsideDiameter: size.outsideDiameter,
+    insideDiameter: size.insideDiameter,
+    material: 'ductile-iron',
+    series,
+    nominal,
+  };
 }
 
 async function start() {
@@ -39,13 +45,18 @@ async function start() {
   const store = createAppStore(project, defaultPipe(project));
   const actions = createActions(store);
   startAutosave(store, (message) =>
-    actions.notify({ tone: 'warning', title: 'Autosave failed: your work is only in this tab — save it to a file', lines: [message] }),
+    actions.notify({
+      tone: 'warning',
+      title: 'Autosave failed: your work is only in this tab — save it to a file',
+      lines: [message],
+    }),
   );
   installShortcuts(store, actions);
   if (kept.kind === 'unreadable') {
     actions.notify({
       tone: 'warning',
-      title: 'The project kept from your last visit could not be read; a copy is kept in this browser under "mainbrace.project.v1.unreadable" and the demo opened instead',
+      title:
+        'The project kept from your last visit could not be read; a copy is kept in this browser under "mainbrace.project.v1.unreadable" and the demo opened instead',
       lines: kept.lines,
     });
   }
@@ -55,7 +66,10 @@ async function start() {
       value: Object.freeze({
         project: () => structuredClone(store.getState().project),
         schedule: () => structuredClone(scheduleOf(analyse(store.getState().project))),
-        selection: () => ({ nodes: [...store.getState().selection.nodes], pipes: [...store.getState().selection.pipes] }),
+        selection: () => ({
+          nodes: [...store.getState().selection.nodes],
+          pipes: [...store.getState().selection.pipes],
+        }),
         viewport: () => ({ ...store.getState().viewport }),
         canUndo: () => store.temporal.getState().pastStates.length > 0,
       }),

@@ -10,15 +10,24 @@ import { generateRoute } from '../../packages/solver/bench/generateRoute.js';
 const BASE = process.env.BENCH_URL ?? 'http://127.0.0.1:4174/';
 const DIST = join(import.meta.dirname, '../../app/dist');
 
-const pct = (xs: number[], p: number) => [...xs].sort((a, b) => a - b)[Math.min(xs.length - 1, Math.floor(p * xs.length))]!;
+const pct = (xs: number[], p: number) =>
+  [...xs].sort((a, b) => a - b)[Math.min(xs.length - 1, Math.floor(p * xs.length))]!;
 
 async function startup(page: Page): Promise<number> {
   const t: number[] = [];
   for (let i = 0; i < 5; i++) {
     await page.goto(BASE);
-    await page.evaluate(() => new Promise((r) => { const q = indexedDB.deleteDatabase('keyval-store'); q.onsuccess = q.onerror = q.onblocked = () => r(null); }));
+    await page.evaluate(
+      () =>
+        new Promise((r) => {
+          const q = indexedDB.deleteDatabase('keyval-store');
+          q.onsuccess = q.onerror = q.onblocked = () => r(null);
+        }),
+    );
     await page.goto(BASE);
-    await page.waitForFunction(() => performance.getEntriesByName('mainbrace-plan-drawn').length > 0, null, { timeout: 20_000 });
+    await page.waitForFunction(() => performance.getEntriesByName('mainbrace-plan-drawn').length > 0, null, {
+      timeout: 20_000,
+    });
     t.push(await page.evaluate(() => performance.getEntriesByName('mainbrace-plan-drawn')[0]!.startTime));
   }
   return pct(t, 0.5);
@@ -30,9 +39,17 @@ async function openBigRoute(page: Page, pipes: number) {
   let fittings = pipes;
   let route = generateRoute(fittings);
   while (route.pipes!.length < pipes) route = generateRoute(++fittings + 50);
-  writeFileSync(file, JSON.stringify({ ...route, loadCases: route.loadCases.map((c) => (c.id === 'test' ? { ...c, kind: 'test' } : c)) }));
+  writeFileSync(
+    file,
+    JSON.stringify({ ...route, loadCases: route.loadCases.map((c) => (c.id === 'test' ? { ...c, kind: 'test' } : c)) }),
+  );
   await page.setInputFiles('[data-testid=open-file]', file);
-  await page.waitForFunction((n) => (window as unknown as { __mainbrace: { project(): { pipes: unknown[] } } }).__mainbrace.project().pipes.length >= n, pipes);
+  await page.waitForFunction(
+    (n) =>
+      (window as unknown as { __mainbrace: { project(): { pipes: unknown[] } } }).__mainbrace.project().pipes.length >=
+      n,
+    pipes,
+  );
   await page.click('[data-testid=tool-fit]');
   return route;
 }
@@ -40,7 +57,14 @@ async function openBigRoute(page: Page, pipes: number) {
 async function dragFrames(page: Page): Promise<number[]> {
   const plan = (await page.locator('[data-testid=plan]').boundingBox())!;
   const target = await page.evaluate(() => {
-    const hook = (window as unknown as { __mainbrace: { project(): { nodes: { x: number; y: number }[] }; viewport(): { scale: number; left: number; top: number } } }).__mainbrace;
+    const hook = (
+      window as unknown as {
+        __mainbrace: {
+          project(): { nodes: { x: number; y: number }[] };
+          viewport(): { scale: number; left: number; top: number };
+        };
+      }
+    ).__mainbrace;
     const v = hook.viewport();
     const n = hook.project().nodes[Math.floor(hook.project().nodes.length / 2)]!;
     return { sx: (n.x - v.left) * v.scale, sy: (v.top - n.y) * v.scale };
@@ -60,7 +84,8 @@ async function dragFrames(page: Page): Promise<number[]> {
   });
   await page.mouse.move(plan.x + target.sx, plan.y + target.sy);
   await page.mouse.down();
-  for (let i = 1; i <= 120; i++) await page.mouse.move(plan.x + target.sx + i * 1.5, plan.y + target.sy + Math.sin(i / 9) * 30);
+  for (let i = 1; i <= 120; i++)
+    await page.mouse.move(plan.x + target.sx + i * 1.5, plan.y + target.sy + Math.sin(i / 9) * 30);
   await page.mouse.up();
   return (await page.evaluate(() => {
     const w = window as unknown as { __frames: number[]; __stop: boolean };
@@ -105,16 +130,35 @@ function bundleSize(): { initial: number; lazy: number } {
 
 const browser = await chromium.launch({
   executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-  args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+  args: [
+    '--headless',
+    '--no-sandbox',
+    '--disable-gpu',
+    '--disable-quic',
+    '--no-first-run',
+    '--disable-background-networking',
+    '--disable-component-update',
+    '--disable-sync',
+  ],
 });
 const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
 const start = await startup(page);
 console.log(`app     demo drawn ${start.toFixed(0)} ms after navigation (median of 5, goal ≤ 1000)`);
 await openBigRoute(page, 1000);
 const frames = await dragFrames(page);
-console.log(`app     drag on a 1,000-pipe route: frame p50 ${pct(frames, 0.5).toFixed(1)} ms, p95 ${pct(frames, 0.95).toFixed(1)} ms over ${frames.length} frames (goal p95 ≤ 16.7)`);
-const fittings = await page.evaluate(() => (window as unknown as { __mainbrace: { schedule(): { fittings: unknown[] } } }).__mainbrace.schedule().fittings.length);
-console.log(`app     recompute and repaint after a test-pressure change, ${fittings} fittings: ${(await recompute(page)).toFixed(0)} ms (median of 5)`);
+console.log(
+  `app     drag on a 1,000-pipe route: frame p50 ${pct(frames, 0.5).toFixed(1)} ms, p95 ${pct(frames, 0.95).toFixed(1)} ms over ${frames.length} frames (goal p95 ≤ 16.7)`,
+);
+const fittings = await page.evaluate(
+  () =>
+    (window as unknown as { __mainbrace: { schedule(): { fittings: unknown[] } } }).__mainbrace.schedule().fittings
+      .length,
+);
+console.log(
+  `app     recompute and repaint after a test-pressure change, ${fittings} fittings: ${(await recompute(page)).toFixed(0)} ms (median of 5)`,
+);
 const size = bundleSize();
-console.log(`app     JavaScript + CSS gzipped: first load ${(size.initial / 1024).toFixed(1)} kB (goal ≤ 250), loaded later ${(size.lazy / 1024).toFixed(1)} kB`);
+console.log(
+  `app     JavaScript + CSS gzipped: first load ${(size.initial / 1024).toFixed(1)} kB (goal ≤ 250), loaded later ${(size.lazy / 1024).toFixed(1)} kB`,
+);
 await browser.close();

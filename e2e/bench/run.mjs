@@ -6,7 +6,11 @@ import { build } from 'rolldown';
 
 const root = fileURLToPath(new URL('../..', import.meta.url));
 execSync('pnpm --filter app build --mode test', { cwd: root, stdio: 'ignore' });
-const server = spawn('pnpm', ['--filter', 'app', 'exec', 'vite', 'preview', '--host', '127.0.0.1', '--port', '4174', '--strictPort'], { cwd: root, stdio: 'ignore', detached: true });
+const server = spawn(
+  'pnpm',
+  ['--filter', 'app', 'exec', 'vite', 'preview', '--host', '127.0.0.1', '--port', '4174', '--strictPort'],
+  { cwd: root, stdio: 'ignore', detached: true },
+);
 try {
   for (let i = 0; i < 100; i++) {
     try {
@@ -16,7 +20,13 @@ try {
     }
   }
   const out = join(root, 'e2e/.bench/appBench.mjs');
-  await build({ input: join(root, 'e2e/bench/appBench.ts'), platform: 'node', external: [/^@playwright/, /^playwright/], output: { file: out, format: 'esm' }, logLevel: 'silent' });
+  await build({
+    input: join(root, 'e2e/bench/appBench.ts'),
+    platform: 'node',
+    external: [/^@playwright/, /^playwright/],
+    output: { file: out, format: 'esm' },
+    logLevel: 'silent',
+  });
   execSync(`node ${out}`, { cwd: join(root, 'e2e'), stdio: 'inherit' });
 } finally {
   process.kill(-server.pid, 'SIGTERM');

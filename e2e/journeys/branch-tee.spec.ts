@@ -5,7 +5,9 @@ import { MainbracePage, magnitude, pressureAt } from '../pages/mainbrace.js';
 const OD_DN200 = 0.222;
 const OD_DN100 = 0.118;
 
-test('a DN100 branch started on a straight joint of a DN200 run makes a tee pushed by p·A of the branch alone', async ({ page }) => {
+test('a DN100 branch started on a straight joint of a DN200 run makes a tee pushed by p·A of the branch alone', async ({
+  page,
+}) => {
   const app = new MainbracePage(page);
   await app.blankCanvas();
   // A straight run with a joint in the middle: the joint needs no restraint, only the two caps do.
@@ -28,15 +30,26 @@ test('a DN100 branch started on a straight joint of a DN200 run makes a tee push
   expect(doc.nodes).toHaveLength(4);
   expect(doc.pipes).toHaveLength(3);
   const tip = doc.nodes.find((n) => n.x === 40 && n.y === 30)!;
-  const branch = doc.pipes.find((p) => (p.from === joint.id && p.to === tip.id) || (p.to === joint.id && p.from === tip.id))!;
+  const branch = doc.pipes.find(
+    (p) => (p.from === joint.id && p.to === tip.id) || (p.to === joint.id && p.from === tip.id),
+  )!;
   expect(branch).toBeTruthy();
 
   // Make the branch DN100 through the pipe's details.
   await app.tool('select');
   await app.clickPlan(40, 15);
-  await expect.poll(() => page.evaluate(() => (window as unknown as { __mainbrace: { selection(): { pipes: string[] } } }).__mainbrace.selection().pipes)).toEqual([branch.id]);
+  await expect
+    .poll(() =>
+      page.evaluate(
+        () =>
+          (window as unknown as { __mainbrace: { selection(): { pipes: string[] } } }).__mainbrace.selection().pipes,
+      ),
+    )
+    .toEqual([branch.id]);
   await page.getByTestId('pipe-size').selectOption('DN100');
-  await expect.poll(async () => (await app.project()).pipes.find((p) => p.id === branch.id)!.outsideDiameter).toBeCloseTo(OD_DN100, 9);
+  await expect
+    .poll(async () => (await app.project()).pipes.find((p) => p.id === branch.id)!.outsideDiameter)
+    .toBeCloseTo(OD_DN100, 9);
   doc = await app.project();
   for (const p of doc.pipes.filter((x) => x.id !== branch.id)) expect(p.outsideDiameter).toBeCloseTo(OD_DN200, 9);
 

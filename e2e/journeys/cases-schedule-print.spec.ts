@@ -17,7 +17,11 @@ test('the exported schedule JSON is the command line’s schedule of the same fi
   const app = new MainbracePage(page);
   await app.gotoFresh();
   const exported = JSON.parse(await app.exportText('Schedule as JSON'));
-  const cli = JSON.parse(execFileSync(process.execPath, [`${root}packages/solver/bin/mainbrace.mjs`, 'schedule', demo, '--format', 'json'], { encoding: 'utf8' }));
+  const cli = JSON.parse(
+    execFileSync(process.execPath, [`${root}packages/solver/bin/mainbrace.mjs`, 'schedule', demo, '--format', 'json'], {
+      encoding: 'utf8',
+    }),
+  );
   // Same content: every field and text equal; numbers equal to 1e-12 (Chromium's and Node's Math.atan2
   // may differ in the last bit).
   expect(sameContent(exported, cli)).toEqual([]);
@@ -26,7 +30,9 @@ test('the exported schedule JSON is the command line’s schedule of the same fi
   expect(csv.split('\r\n').filter((l) => l.length > 0)).toHaveLength(cli.fittings.length + 1);
 });
 
-test('raising the field-test pressure grows every block’s bearing area with its horizontal thrust', async ({ page }) => {
+test('raising the field-test pressure grows every block’s bearing area with its horizontal thrust', async ({
+  page,
+}) => {
   const app = new MainbracePage(page);
   await app.gotoFresh();
   const before = await app.schedule();

@@ -1,7 +1,9 @@
 import { test, expect } from '@playwright/test';
 import { MainbracePage, magnitude, pressureAt } from '../pages/mainbrace.js';
 
-test('drawing a three-leg route by clicks gives two bends and two dead ends with the textbook thrust', async ({ page }) => {
+test('drawing a three-leg route by clicks gives two bends and two dead ends with the textbook thrust', async ({
+  page,
+}) => {
   const app = new MainbracePage(page);
   await app.blankCanvas();
   await app.draw([

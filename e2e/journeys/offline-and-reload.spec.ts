@@ -1,11 +1,20 @@
 import { test, expect, type Page } from '@playwright/test';
 
-type Hook = { project(): { name: string; nodes: { id: string; x: number; y: number }[] }; viewport(): { scale: number; left: number; top: number } };
+type Hook = {
+  project(): { name: string; nodes: { id: string; x: number; y: number }[] };
+  viewport(): { scale: number; left: number; top: number };
+};
 const hook = (page: Page) => page.evaluate(() => (window as unknown as { __mainbrace: Hook }).__mainbrace.project());
 
 async function fresh(page: Page) {
   await page.goto('/');
-  await page.evaluate(() => new Promise((r) => { const q = indexedDB.deleteDatabase('keyval-store'); q.onsuccess = q.onerror = q.onblocked = () => r(null); }));
+  await page.evaluate(
+    () =>
+      new Promise((r) => {
+        const q = indexedDB.deleteDatabase('keyval-store');
+        q.onsuccess = q.onerror = q.onblocked = () => r(null);
+      }),
+  );
   await page.reload();
   await page.waitForFunction(() => (window as unknown as { __mainbrace?: Hook }).__mainbrace?.project().nodes.length);
 }

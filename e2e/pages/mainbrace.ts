@@ -46,7 +46,9 @@ export class MainbracePage {
   }
 
   async ready() {
-    await this.page.waitForFunction(() => (window as unknown as { __mainbrace?: Hook }).__mainbrace?.project().nodes.length !== undefined);
+    await this.page.waitForFunction(
+      () => (window as unknown as { __mainbrace?: Hook }).__mainbrace?.project().nodes.length !== undefined,
+    );
     await expect(this.page.getByTestId('plan')).toBeVisible();
   }
 
@@ -122,7 +124,11 @@ export class MainbracePage {
     const n = (await this.project()).nodes.find((x) => x.id === id)!;
     await this.tool('select');
     await this.clickPlan(n.x, n.y);
-    await expect.poll(async () => this.page.evaluate(() => (window as unknown as { __mainbrace: Hook }).__mainbrace.selection().nodes)).toEqual([id]);
+    await expect
+      .poll(async () =>
+        this.page.evaluate(() => (window as unknown as { __mainbrace: Hook }).__mainbrace.selection().nodes),
+      )
+      .toEqual([id]);
   }
 
   async undo() {
@@ -146,7 +152,10 @@ export class MainbracePage {
   /** Chooses an item of the Export menu and returns the downloaded file's text. */
   async exportText(item: 'Schedule as CSV' | 'Schedule as JSON'): Promise<string> {
     await this.page.getByRole('button', { name: 'Export ▾' }).click();
-    const [download] = await Promise.all([this.page.waitForEvent('download'), this.page.getByRole('menuitem', { name: item }).click()]);
+    const [download] = await Promise.all([
+      this.page.waitForEvent('download'),
+      this.page.getByRole('menuitem', { name: item }).click(),
+    ]);
     const path = await download.path();
     const { readFileSync } = await import('node:fs');
     return readFileSync(path!, 'utf8');

@@ -13,7 +13,9 @@ export function sameContent(a: unknown, b: unknown, path = '$'): string[] {
   if (a && b && typeof a === 'object' && typeof b === 'object') {
     const keys = new Set([...Object.keys(a), ...Object.keys(b)]);
     return [...keys].flatMap((k) =>
-      k in a && k in b ? sameContent((a as Record<string, unknown>)[k], (b as Record<string, unknown>)[k], `${path}.${k}`) : [`${path}.${k}: only on one side`],
+      k in a && k in b
+        ? sameContent((a as Record<string, unknown>)[k], (b as Record<string, unknown>)[k], `${path}.${k}`)
+        : [`${path}.${k}: only on one side`],
     );
   }
   return a === b ? [] : [`${path}: ${JSON.stringify(a)} ≠ ${JSON.stringify(b)}`];

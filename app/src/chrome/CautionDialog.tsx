@@ -7,14 +7,23 @@ export function CautionDialog({ onClose }: { onClose: () => void }) {
   useEffect(() => close.current?.focus(), []);
   return (
     <div className="dialog-backdrop" onClick={onClose}>
-      <div className="dialog" role="dialog" aria-modal="true" aria-labelledby="caution-title" onClick={(e) => e.stopPropagation()} onKeyDown={(e) => e.key === 'Escape' && onClose()}>
+      <div
+        className="dialog"
+        role="dialog"
+        aria-modal="true"
+        aria-labelledby="caution-title"
+        onClick={(e) => e.stopPropagation()}
+        onKeyDown={(e) => e.key === 'Escape' && onClose()}
+      >
         <h2 id="caution-title">Before you build from these results</h2>
         <ul>
           {CAUTIONS.map((c) => (
             <li key={c}>{c}</li>
           ))}
         </ul>
-        <button ref={close} onClick={onClose}>Understood</button>
+        <button ref={close} onClick={onClose}>
+          Understood
+        </button>
       </div>
     </div>
   );

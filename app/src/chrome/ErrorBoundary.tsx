@@ -18,7 +18,9 @@ export class ErrorBoundary extends Component<{ store: AppStore; children: ReactN
         <h1>Mainbrace stopped drawing this screen</h1>
         <p>Your project is safe: it is still in this tab and in the browser’s storage. Save a copy, then reload.</p>
         <p className="muted">What went wrong: {this.state.error.message}</p>
-        <button onClick={() => download(`${fileStem(project)}.json`, projectText(project), 'application/json')}>Save the project</button>{' '}
+        <button onClick={() => download(`${fileStem(project)}.json`, projectText(project), 'application/json')}>
+          Save the project
+        </button>{' '}
         <button onClick={() => window.location.reload()}>Reload</button>{' '}
         <button onClick={() => this.setState({ error: null })}>Try again</button>
       </div>

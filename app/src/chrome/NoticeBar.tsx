@@ -7,7 +7,11 @@ export function NoticeBar() {
   // An empty slot keeps the window's grid rows in place when there is nothing to say.
   if (!notice) return <div className="notice-slot" />;
   return (
-    <div className={`notice notice-${notice.tone}`} role={notice.tone === 'info' ? 'status' : 'alert'} data-testid="notice">
+    <div
+      className={`notice notice-${notice.tone}`}
+      role={notice.tone === 'info' ? 'status' : 'alert'}
+      data-testid="notice"
+    >
       <div className="notice-body">
         <strong>{notice.title}</strong>
         {notice.lines.length > 0 && (
@@ -19,7 +23,9 @@ export function NoticeBar() {
           </ul>
         )}
       </div>
-      <button onClick={() => actions.notify(null)} aria-label="Dismiss">×</button>
+      <button onClick={() => actions.notify(null)} aria-label="Dismiss">
+        ×
+      </button>
     </div>
   );
 }

@@ -1,7 +1,14 @@
 import { useRef, useState } from 'react';
 import { useStore } from 'zustand';
 import { useActions, useApp, useAppStore } from '../state/StoreContext.js';
-import { download, fileStem, openProjectFile, projectText, scheduleCsvText, scheduleJsonText } from '../files/projectFile.js';
+import {
+  download,
+  fileStem,
+  openProjectFile,
+  projectText,
+  scheduleCsvText,
+  scheduleJsonText,
+} from '../files/projectFile.js';
 import { newProject } from '../files/newProject.js';
 import { CautionDialog } from './CautionDialog.js';
 
@@ -29,7 +36,14 @@ export function TopBar({ onPrint }: { onPrint: () => void }) {
     <header className="topbar">
       <div className="brand" aria-label="Mainbrace">
         <svg width="22" height="22" viewBox="0 0 64 64" aria-hidden="true">
-          <path d="M8 44 H30 L46 20 H58" fill="none" stroke="#1d6fb8" strokeWidth="8" strokeLinecap="round" strokeLinejoin="round" />
+          <path
+            d="M8 44 H30 L46 20 H58"
+            fill="none"
+            stroke="#1d6fb8"
+            strokeWidth="8"
+            strokeLinecap="round"
+            strokeLinejoin="round"
+          />
           <rect x="20" y="48" width="22" height="9" fill="none" stroke="#26251f" strokeWidth="3" />
         </svg>
         Mainbrace
@@ -42,42 +56,111 @@ export function TopBar({ onPrint }: { onPrint: () => void }) {
         onChange={(e) => actions.renameProject(e.target.value)}
       />
       <nav className="file-actions" aria-label="File">
-        <button onClick={() => actions.replaceProject(newProject(project()))} title="New project (keeps soils, cases and design settings)">New</button>
-        <button onClick={() => fileInput.current?.click()} title="Open a project file (or drop one on the window)">Open…</button>
-        <input ref={fileInput} type="file" accept=".json,application/json" hidden data-testid="open-file" onChange={(e) => { void open(e.target.files?.[0]); e.target.value = ''; }} />
-        <button onClick={() => download(`${fileStem(project())}.json`, projectText(project()), 'application/json')} title="Save the project file (Ctrl+S)">Save</button>
+        <button
+          onClick={() => actions.replaceProject(newProject(project()))}
+          title="New project (keeps soils, cases and design settings)"
+        >
+          New
+        </button>
+        <button onClick={() => fileInput.current?.click()} title="Open a project file (or drop one on the window)">
+          Open…
+        </button>
+        <input
+          ref={fileInput}
+          type="file"
+          accept=".json,application/json"
+          hidden
+          data-testid="open-file"
+          onChange={(e) => {
+            void open(e.target.files?.[0]);
+            e.target.value = '';
+          }}
+        />
+        <button
+          onClick={() => download(`${fileStem(project())}.json`, projectText(project()), 'application/json')}
+          title="Save the project file (Ctrl+S)"
+        >
+          Save
+        </button>
         <div className="menu">
-          <button aria-haspopup="menu" aria-expanded={exportOpen} onClick={() => setExportOpen(!exportOpen)}>Export ▾</button>
+          <button aria-haspopup="menu" aria-expanded={exportOpen} onClick={() => setExportOpen(!exportOpen)}>
+            Export ▾
+          </button>
           {exportOpen && (
             <div className="menu-list" role="menu" onClick={() => setExportOpen(false)}>
-              <button role="menuitem" onClick={() => download(`${fileStem(project())}-schedule.csv`, scheduleCsvText(project()), 'text/csv')}>Schedule as CSV</button>
-              <button role="menuitem" onClick={() => download(`${fileStem(project())}-schedule.json`, scheduleJsonText(project()), 'application/json')}>Schedule as JSON</button>
-              <button role="menuitem" onClick={onPrint}>Print the schedule…</button>
+              <button
+                role="menuitem"
+                onClick={() => download(`${fileStem(project())}-schedule.csv`, scheduleCsvText(project()), 'text/csv')}
+              >
+                Schedule as CSV
+              </button>
+              <button
+                role="menuitem"
+                onClick={() =>
+                  download(`${fileStem(project())}-schedule.json`, scheduleJsonText(project()), 'application/json')
+                }
+              >
+                Schedule as JSON
+              </button>
+              <button role="menuitem" onClick={onPrint}>
+                Print the schedule…
+              </button>
             </div>
           )}
         </div>
       </nav>
       <div className="history" role="group" aria-label="History">
-        <button onClick={actions.undo} disabled={!canUndo} title="Undo (Ctrl+Z)" aria-label="Undo" data-testid="undo">↶</button>
-        <button onClick={actions.redo} disabled={!canRedo} title="Redo (Ctrl+Shift+Z or Ctrl+Y)" aria-label="Redo" data-testid="redo">↷</button>
+        <button onClick={actions.undo} disabled={!canUndo} title="Undo (Ctrl+Z)" aria-label="Undo" data-testid="undo">
+          ↶
+        </button>
+        <button
+          onClick={actions.redo}
+          disabled={!canRedo}
+          title="Redo (Ctrl+Shift+Z or Ctrl+Y)"
+          aria-label="Redo"
+          data-testid="redo"
+        >
+          ↷
+        </button>
       </div>
       <div className="units-switch" role="radiogroup" aria-label="Units">
         {(['si', 'us'] as const).map((u) => (
-          <button key={u} role="radio" aria-checked={units === u} className={units === u ? 'on' : ''} onClick={() => actions.setUnits(u)}>
+          <button
+            key={u}
+            role="radio"
+            aria-checked={units === u}
+            className={units === u ? 'on' : ''}
+            onClick={() => actions.setUnits(u)}
+          >
             {u === 'si' ? 'SI' : 'US'}
           </button>
         ))}
       </div>
       <label className="case-select">
         Thrust shown
-        <select value={caseValue} onChange={(e) => actions.setCaseView(e.target.value === '__envelope' ? { kind: 'envelope' } : { kind: 'case', id: e.target.value })}>
+        <select
+          value={caseValue}
+          onChange={(e) =>
+            actions.setCaseView(
+              e.target.value === '__envelope' ? { kind: 'envelope' } : { kind: 'case', id: e.target.value },
+            )
+          }
+        >
           <option value="__envelope">Worst of all cases</option>
           {cases.map((c) => (
-            <option key={c.id} value={c.id}>{c.label ?? c.id}</option>
+            <option key={c.id} value={c.id}>
+              {c.label ?? c.id}
+            </option>
           ))}
         </select>
       </label>
-      <button className="caution" title="Results must be checked by a licensed engineer against local codes and the utility’s standards" onClick={() => setCautionOpen(true)} aria-haspopup="dialog" data-testid="caution">
+      <button
+        className="caution"
+        title="Results must be checked by a licensed engineer against local codes and the utility’s standards"
+        onClick={() => setCautionOpen(true)}
+        aria-haspopup="dialog"
+        data-testid="caution"
+      >
         <span aria-hidden="true">⚠</span> Design aid — check by a licensed engineer. <u>Cautions</u>
       </button>
       {cautionOpen && <CautionDialog onClose={() => setCautionOpen(false)} />}

@@ -9,15 +9,25 @@ import { ErrorBoundary } from './ErrorBoundary.js';
 import { MAX_FILE_BYTES, readProjectFile } from '../files/projectFile.js';
 import { DN300, project } from '../testFixtures.js';
 
-vi.mock('idb-keyval', () => ({ get: vi.fn(async () => undefined), set: vi.fn(async () => Promise.reject(new Error('QuotaExceededError: the disk is full'))) }));
+vi.mock('idb-keyval', () => ({
+  get: vi.fn(async () => undefined),
+  set: vi.fn(async () => Promise.reject(new Error('QuotaExceededError: the disk is full'))),
+}));
 
 afterEach(cleanup);
 
 const HOSTILE = '<img src=x onerror="window.__pwned=1">';
 const route = () =>
   project(
-    [{ id: 'n1', x: 0, y: 0 }, { id: 'n2', x: 30, y: 0 }, { id: 'n3', x: 30, y: 30 }],
-    [{ from: 'n1', to: 'n2' }, { from: 'n2', to: 'n3' }],
+    [
+      { id: 'n1', x: 0, y: 0 },
+      { id: 'n2', x: 30, y: 0 },
+      { id: 'n3', x: 30, y: 30 },
+    ],
+    [
+      { from: 'n1', to: 'n2' },
+      { from: 'n2', to: 'n3' },
+    ],
   );
 
 describe('robustness of the app at its edges', () => {
@@ -53,7 +63,10 @@ describe('robustness of the app at its edges', () => {
   });
 
   it('names the problems of a bad file and leaves the open project as it was', async () => {
-    const file = new File([JSON.stringify({ format: 'mainbrace-project', version: 1, loadCases: [], soils: [] })], 'bad.json');
+    const file = new File(
+      [JSON.stringify({ format: 'mainbrace-project', version: 1, loadCases: [], soils: [] })],
+      'bad.json',
+    );
     const r = await readProjectFile(file);
     expect(r.ok).toBe(false);
     if (!r.ok) expect(r.lines).toContain('loadCases: must have at least one load case');

@@ -6,7 +6,9 @@ import { download, fileStem, projectText } from '../files/projectFile.js';
 
 /** A field the user types into (a slider, box or button is not one: its undo is the app's). */
 const typing = (t: EventTarget | null) =>
-  (t instanceof HTMLInputElement && !['range', 'checkbox', 'radio', 'button', 'file'].includes(t.type)) || t instanceof HTMLTextAreaElement || t instanceof HTMLSelectElement;
+  (t instanceof HTMLInputElement && !['range', 'checkbox', 'radio', 'button', 'file'].includes(t.type)) ||
+  t instanceof HTMLTextAreaElement ||
+  t instanceof HTMLSelectElement;
 
 /** Keyboard shortcuts of the whole window; keys typed into a field are left to the field. */
 export function installShortcuts(store: AppStore, actions: Actions): () => void {

@@ -23,7 +23,17 @@ export function blankProject(): Project {
       { id: 'surge', label: 'Working + surge', kind: 'surge', pressure: 900e3, datumElevation: 100, flowFactor: 1 },
       { id: 'test', label: 'Field test', kind: 'test', pressure: 1000e3, datumElevation: 100, flowFactor: 0 },
     ],
-    soils: [{ id: 'sand', label: 'Sand', bearing: 2000 * PSF, unitWeight: 18500, frictionAngle: 32, cohesion: 0, source: 'Safe bearing load table of the PVC literature (sand 2,000 psf)' }],
+    soils: [
+      {
+        id: 'sand',
+        label: 'Sand',
+        bearing: 2000 * PSF,
+        unitWeight: 18500,
+        frictionAngle: 32,
+        cohesion: 0,
+        source: 'Safe bearing load table of the PVC literature (sand 2,000 psf)',
+      },
+    ],
     defaultSoil: 'sand',
     nodes: [],
     pipes: [],

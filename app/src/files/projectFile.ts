@@ -1,4 +1,12 @@
-import { analyse, caseLabel, parseProjectText, problemText, scheduleCsv, scheduleOf, type Project } from '@mainbrace/solver';
+import {
+  analyse,
+  caseLabel,
+  parseProjectText,
+  problemText,
+  scheduleCsv,
+  scheduleOf,
+  type Project,
+} from '@mainbrace/solver';
 
 /** Largest project file the app opens, bytes: a route of 10,000 fittings is about 5 MB. */
 export const MAX_FILE_BYTES = 20 * 1024 * 1024;
@@ -8,7 +16,10 @@ export type OpenResult = { ok: true; project: Project } | { ok: false; lines: st
 /** Reads and validates a project file; never throws, and never touches the current project. */
 export async function readProjectFile(file: File): Promise<OpenResult> {
   if (file.size > MAX_FILE_BYTES) {
-    return { ok: false, lines: [`${file.name}: the file is ${(file.size / 1048576).toFixed(1)} MB; project files over 20 MB are refused`] };
+    return {
+      ok: false,
+      lines: [`${file.name}: the file is ${(file.size / 1048576).toFixed(1)} MB; project files over 20 MB are refused`],
+    };
   }
   let text: string;
   try {
@@ -33,7 +44,11 @@ export function download(name: string, text: string, type: string) {
 }
 
 /** A file name from the project name: letters, digits and dashes. */
-export const fileStem = (p: Project) => p.name.replace(/[^\p{L}\p{N}]+/gu, '-').replace(/^-|-$/g, '').toLowerCase() || 'mainbrace-project';
+export const fileStem = (p: Project) =>
+  p.name
+    .replace(/[^\p{L}\p{N}]+/gu, '-')
+    .replace(/^-|-$/g, '')
+    .toLowerCase() || 'mainbrace-project';
 
 /** The project file as saved: the document itself, two-space JSON. */
 export const projectText = (p: Project) => JSON.stringify(p, null, 2) + '\n';
@@ -49,11 +64,15 @@ export function scheduleCsvText(p: Project): string {
 /** Opens a dropped or chosen file: the project is replaced only if the file is valid, and the user is told. */
 export async function openProjectFile(
   file: File,
-  actions: { replaceProject: (p: Project) => void; notify: (n: { tone: 'info' | 'error'; title: string; lines: string[] }) => void },
+  actions: {
+    replaceProject: (p: Project) => void;
+    notify: (n: { tone: 'info' | 'error'; title: string; lines: string[] }) => void;
+  },
 ): Promise<void> {
   const r = await readProjectFile(file);
   if (r.ok) {
     actions.replaceProject(r.project);
     actions.notify({ tone: 'info', title: `Opened ${file.name}`, lines: [] });
-  } else actions.notify({ tone: 'error', title: `${file.name} was not opened — your project is unchanged`, lines: r.lines });
+  } else
+    actions.notify({ tone: 'error', title: `${file.name} was not opened — your project is unchanged`, lines: r.lines });
 }

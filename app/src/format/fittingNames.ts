@@ -18,7 +18,8 @@ export const KIND_NAME: Record<FittingKind, string> = {
 export function fittingTitle(f: FittingAnalysis, units: UnitSystem): string {
   const g = f.geometry;
   const name = KIND_NAME[g.kind];
-  if (g.deflection !== null && g.kind !== 'valve' && g.kind !== 'reducer') return `${name} ${formatSi(g.deflection, 'angle', units)}`;
+  if (g.deflection !== null && g.kind !== 'valve' && g.kind !== 'reducer')
+    return `${name} ${formatSi(g.deflection, 'angle', units)}`;
   if (g.branchAngle !== null) return `${name}, branch at ${formatSi(g.branchAngle, 'angle', units)}`;
   return name;
 }
@@ -29,4 +30,5 @@ const COMPASS = ['N', 'NE', 'E', 'SE', 'S', 'SW', 'W', 'NW'];
  * Direction of a horizontal thrust as a whole-degree bearing clockwise from north with its compass
  * point — the side of the fitting the block goes on: "169° S".
  */
-export const bearingText = (deg: number | null): string => (deg === null ? '—' : `${Math.round(deg) % 360}° ${COMPASS[Math.round(deg / 45) % 8]}`);
+export const bearingText = (deg: number | null): string =>
+  deg === null ? '—' : `${Math.round(deg) % 360}° ${COMPASS[Math.round(deg / 45) % 8]}`;

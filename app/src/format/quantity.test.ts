@@ -93,7 +93,7 @@ describe('decimal commas and feet-and-inches', () => {
     if (!bad.ok) expect(bad.message).toMatch(/decimals with a point/);
   });
 
-  it("reads 4'6\" and 4 ft 6 in as 4.5 ft = 1.3716 m (1 ft = 0.3048 m exact)", () => {
+  it('reads 4\'6" and 4 ft 6 in as 4.5 ft = 1.3716 m (1 ft = 0.3048 m exact)', () => {
     for (const text of [`4'6"`, `4' 6`, '4 ft 6 in', '4.5 ft']) {
       const r = parseTyped(text, 'length', 'us');
       expect(r.ok && Math.abs(r.si - 1.3716) < 1e-12).toBe(true);

@@ -27,7 +27,9 @@ export function CalcRecordView({ fitting, project }: { fitting: FittingAnalysis;
                 <td className="num">{show(step.result.value, step.result.dimension, units, 4)}</td>
                 <td>
                   {step.result.label}
-                  {step.result.source && step.result.source !== 'computed' && <span className="src"> — {step.result.source}</span>}
+                  {step.result.source && step.result.source !== 'computed' && (
+                    <span className="src"> — {step.result.source}</span>
+                  )}
                 </td>
               </tr>
             </tbody>

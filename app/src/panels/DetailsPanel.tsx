@@ -36,7 +36,9 @@ export function DetailsPanel() {
   return (
     <aside className="details" aria-label="Details" data-testid="details">
       {body}
-      <p className="caution-foot" role="note">{SHORT_CAUTION}</p>
+      <p className="caution-foot" role="note">
+        {SHORT_CAUTION}
+      </p>
     </aside>
   );
 }

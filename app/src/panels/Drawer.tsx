@@ -38,8 +38,23 @@ export function Drawer() {
           </button>
         ))}
         <span className="spacer" />
-        <button title="Lower the drawer" aria-label="Lower the drawer" disabled={i === 0} onClick={() => actions.setDrawerHeight(heights[Math.max(0, i - 1)]!)}>▾</button>
-        <button title="Raise the drawer" aria-label="Raise the drawer" disabled={i === heights.length - 1} onClick={() => actions.setDrawerHeight(heights[Math.min(heights.length - 1, i + 1)]!)} data-testid="drawer-raise">▴</button>
+        <button
+          title="Lower the drawer"
+          aria-label="Lower the drawer"
+          disabled={i === 0}
+          onClick={() => actions.setDrawerHeight(heights[Math.max(0, i - 1)]!)}
+        >
+          ▾
+        </button>
+        <button
+          title="Raise the drawer"
+          aria-label="Raise the drawer"
+          disabled={i === heights.length - 1}
+          onClick={() => actions.setDrawerHeight(heights[Math.min(heights.length - 1, i + 1)]!)}
+          data-testid="drawer-raise"
+        >
+          ▴
+        </button>
       </div>
       {drawer.height !== 'closed' && (
         <div className="drawer-body" id="drawer-body" role="tabpanel" aria-labelledby={`tab-${drawer.tab}`}>

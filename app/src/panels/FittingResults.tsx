@@ -11,7 +11,6 @@ import { show, showColumnForce } from '../format/quantity.js';
 import { bearingText, fittingTitle } from '../format/fittingNames.js';
 import { CalcRecordView } from './CalcRecordView.js';
 
-
 /** The results of one fitting: thrust per case, the governing case, its restraint and warnings. */
 export function FittingResults({ fitting: f, project }: { fitting: FittingAnalysis; project: Project }) {
   const u = project.units;

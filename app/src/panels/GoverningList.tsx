@@ -10,7 +10,8 @@ export function GoverningList() {
   const actions = useActions();
   const u = project.units;
   const counts = new Map<string, number>();
-  for (const f of analysis.fittings) counts.set(f.envelope.governing.caseId, (counts.get(f.envelope.governing.caseId) ?? 0) + 1);
+  for (const f of analysis.fittings)
+    counts.set(f.envelope.governing.caseId, (counts.get(f.envelope.governing.caseId) ?? 0) + 1);
   const largest = largestThrusts(analysis, 5);
   const tight = analysis.fittings
     .filter((f) => f.restraint.block)
@@ -30,7 +31,10 @@ export function GoverningList() {
       <ol>
         {largest.map((f) => (
           <li key={f.node.id}>
-            <button className="link" onClick={() => actions.selectNode(f.node.id)}>{f.tag}</button> {show(norm(f.envelope.governing.total), 'force', u)}
+            <button className="link" onClick={() => actions.selectNode(f.node.id)}>
+              {f.tag}
+            </button>{' '}
+            {show(norm(f.envelope.governing.total), 'force', u)}
           </li>
         ))}
       </ol>
@@ -38,7 +42,10 @@ export function GoverningList() {
       <ol>
         {tight.map((f) => (
           <li key={f.node.id}>
-            <button className="link" onClick={() => actions.selectNode(f.node.id)}>{f.tag}</button> {f.restraint.block!.passiveRatio.toFixed(2)} × thrust
+            <button className="link" onClick={() => actions.selectNode(f.node.id)}>
+              {f.tag}
+            </button>{' '}
+            {f.restraint.block!.passiveRatio.toFixed(2)} × thrust
           </li>
         ))}
       </ol>

@@ -43,9 +43,12 @@ export function NumberField(p: NumberFieldProps) {
     const r = parseTyped(text, p.dimension, p.units);
     if (!r.ok) return setError(`${p.label}: ${r.message}`);
     if (p.min !== undefined && (p.exclusiveMin ? r.si <= p.min : r.si < p.min)) {
-      return setError(`${p.label}: must be ${p.exclusiveMin ? 'more than' : 'at least'} ${show(p.min, p.dimension, p.units, 4)}`);
+      return setError(
+        `${p.label}: must be ${p.exclusiveMin ? 'more than' : 'at least'} ${show(p.min, p.dimension, p.units, 4)}`,
+      );
     }
-    if (p.max !== undefined && r.si > p.max) return setError(`${p.label}: must be at most ${show(p.max, p.dimension, p.units, 4)}`);
+    if (p.max !== undefined && r.si > p.max)
+      return setError(`${p.label}: must be at most ${show(p.max, p.dimension, p.units, 4)}`);
     setError(null);
     if (Math.abs(r.si - p.value) > 1e-12 * Math.max(1, Math.abs(p.value))) p.onCommit(r.si);
   };

@@ -1,4 +1,13 @@
-import { CATALOG, findSeries, findSize, MATERIALS, nearestSize, type Material, type Pipe, type Project } from '@mainbrace/solver';
+import {
+  CATALOG,
+  findSeries,
+  findSize,
+  MATERIALS,
+  nearestSize,
+  type Material,
+  type Pipe,
+  type Project,
+} from '@mainbrace/solver';
 import { useActions, useAnalysis } from '../state/StoreContext.js';
 import { pipeLength } from './routeFigures.js';
 import { MATERIAL_NAME } from '../plan/palette.js';
@@ -19,7 +28,12 @@ export function PipeDetails({ pipe, project }: { pipe: Pipe; project: Project })
   const pickSeries = (id: string) => {
     if (id === CUSTOM) return set({ series: undefined, nominal: undefined });
     const size = nearestSize(id, pipe.outsideDiameter)!;
-    set({ series: id, nominal: size.nominal, outsideDiameter: size.outsideDiameter, insideDiameter: size.insideDiameter });
+    set({
+      series: id,
+      nominal: size.nominal,
+      outsideDiameter: size.outsideDiameter,
+      insideDiameter: size.insideDiameter,
+    });
   };
   const pickSize = (nominal: string) => {
     const size = pipe.series ? findSize(pipe.series, nominal) : undefined;
@@ -29,40 +43,72 @@ export function PipeDetails({ pipe, project }: { pipe: Pipe; project: Project })
     const first = CATALOG.find((s) => s.material === m);
     if (!first) return set({ material: m, series: undefined, nominal: undefined });
     const size = nearestSize(first.id, pipe.outsideDiameter)!;
-    set({ material: m, series: first.id, nominal: size.nominal, outsideDiameter: size.outsideDiameter, insideDiameter: size.insideDiameter });
+    set({
+      material: m,
+      series: first.id,
+      nominal: size.nominal,
+      outsideDiameter: size.outsideDiameter,
+      insideDiameter: size.insideDiameter,
+    });
   };
 
   return (
     <section className="inputs" aria-label={`Pipe ${pipe.id}`}>
       <h3>
-        Pipe <span className="tag">{pipe.id}</span> <span className="muted">{pipe.from} → {pipe.to}, {show(length, 'length', u, 4)}</span>
+        Pipe <span className="tag">{pipe.id}</span>{' '}
+        <span className="muted">
+          {pipe.from} → {pipe.to}, {show(length, 'length', u, 4)}
+        </span>
       </h3>
       <div className="field">
         <label htmlFor="pipe-label">Label</label>
-        <input id="pipe-label" value={pipe.label ?? ''} maxLength={80} onChange={(e) => set({ label: e.target.value || undefined })} />
+        <input
+          id="pipe-label"
+          value={pipe.label ?? ''}
+          maxLength={80}
+          onChange={(e) => set({ label: e.target.value || undefined })}
+        />
       </div>
       <div className="field">
         <label htmlFor="pipe-material">Material</label>
         <select id="pipe-material" value={pipe.material} onChange={(e) => pickMaterial(e.target.value as Material)}>
           {MATERIALS.map((m) => (
-            <option key={m} value={m}>{MATERIAL_NAME[m]}</option>
+            <option key={m} value={m}>
+              {MATERIAL_NAME[m]}
+            </option>
           ))}
         </select>
       </div>
       <div className="field">
         <label htmlFor="pipe-series">Series</label>
-        <select id="pipe-series" value={series ? series.id : CUSTOM} onChange={(e) => pickSeries(e.target.value)} data-testid="pipe-series">
+        <select
+          id="pipe-series"
+          value={series ? series.id : CUSTOM}
+          onChange={(e) => pickSeries(e.target.value)}
+          data-testid="pipe-series"
+        >
           {seriesChoices.map((s) => (
-            <option key={s.id} value={s.id}>{s.label}</option>
+            <option key={s.id} value={s.id}>
+              {s.label}
+            </option>
           ))}
           <option value={CUSTOM}>Custom diameters</option>
         </select>
-        {series && <div className="field-hint">{series.standard}; {series.wallBasis}</div>}
+        {series && (
+          <div className="field-hint">
+            {series.standard}; {series.wallBasis}
+          </div>
+        )}
       </div>
       {series ? (
         <div className="field">
           <label htmlFor="pipe-size">Nominal size</label>
-          <select id="pipe-size" value={pipe.nominal ?? ''} onChange={(e) => pickSize(e.target.value)} data-testid="pipe-size">
+          <select
+            id="pipe-size"
+            value={pipe.nominal ?? ''}
+            onChange={(e) => pickSize(e.target.value)}
+            data-testid="pipe-size"
+          >
             {series.sizes.map((s) => (
               <option key={s.nominal} value={s.nominal}>
                 {s.label} — OD {show(s.outsideDiameter, 'diameter', u, 4)}
@@ -75,15 +121,46 @@ export function PipeDetails({ pipe, project }: { pipe: Pipe; project: Project })
         </div>
       ) : (
         <div className="field-row">
-          <NumberField label="Outside diameter" value={pipe.outsideDiameter} dimension="diameter" units={u} min={pipe.insideDiameter} exclusiveMin max={5} onCommit={(outsideDiameter) => set({ outsideDiameter })} />
-          <NumberField label="Inside diameter" value={pipe.insideDiameter} dimension="diameter" units={u} min={0} exclusiveMin max={pipe.outsideDiameter * 0.999999} onCommit={(insideDiameter) => set({ insideDiameter })} />
+          <NumberField
+            label="Outside diameter"
+            value={pipe.outsideDiameter}
+            dimension="diameter"
+            units={u}
+            min={pipe.insideDiameter}
+            exclusiveMin
+            max={5}
+            onCommit={(outsideDiameter) => set({ outsideDiameter })}
+          />
+          <NumberField
+            label="Inside diameter"
+            value={pipe.insideDiameter}
+            dimension="diameter"
+            units={u}
+            min={0}
+            exclusiveMin
+            max={pipe.outsideDiameter * 0.999999}
+            onCommit={(insideDiameter) => set({ insideDiameter })}
+          />
         </div>
       )}
-      <NumberField label={`Flow, ${pipe.from} → ${pipe.to}`} value={pipe.flow} dimension="flow" units={u} min={-100} max={100} onCommit={(flow) => set({ flow })} hint="Negative when the water runs the other way; cases multiply it by their flow factor." />
+      <NumberField
+        label={`Flow, ${pipe.from} → ${pipe.to}`}
+        value={pipe.flow}
+        dimension="flow"
+        units={u}
+        min={-100}
+        max={100}
+        onCommit={(flow) => set({ flow })}
+        hint="Negative when the water runs the other way; cases multiply it by their flow factor."
+      />
       <div className="field-row">
         <div className="field">
           <label htmlFor="pipe-trench">Trench type</label>
-          <select id="pipe-trench" value={pipe.trenchType ?? ''} onChange={(e) => set({ trenchType: e.target.value ? Number(e.target.value) : undefined })}>
+          <select
+            id="pipe-trench"
+            value={pipe.trenchType ?? ''}
+            onChange={(e) => set({ trenchType: e.target.value ? Number(e.target.value) : undefined })}
+          >
             <option value="">Default (type 3)</option>
             <option value="1">1 — flat bottom, loose backfill</option>
             <option value="2">2 — backfill lightly consolidated to centreline</option>
@@ -94,7 +171,11 @@ export function PipeDetails({ pipe, project }: { pipe: Pipe; project: Project })
         </div>
         <div className="field">
           <label htmlFor="pipe-encasement">Encasement</label>
-          <select id="pipe-encasement" value={pipe.encasement ?? 'none'} onChange={(e) => set({ encasement: e.target.value as Pipe['encasement'] })}>
+          <select
+            id="pipe-encasement"
+            value={pipe.encasement ?? 'none'}
+            onChange={(e) => set({ encasement: e.target.value as Pipe['encasement'] })}
+          >
             <option value="none">None</option>
             <option value="polyethylene">Polyethylene (AWWA C105)</option>
           </select>

@@ -19,7 +19,8 @@ export function RouteSummary() {
       <h3>Route</h3>
       {project.nodes.length === 0 ? (
         <p>
-          Press <kbd>D</kbd> or pick <em>Draw main</em>, then click on the plan to lay out the main. Each click is a bend; Enter or a double-click finishes.
+          Press <kbd>D</kbd> or pick <em>Draw main</em>, then click on the plan to lay out the main. Each click is a
+          bend; Enter or a double-click finishes.
         </p>
       ) : (
         <>
@@ -44,7 +45,9 @@ export function RouteSummary() {
               </li>
             ))}
           </ol>
-          <p className="muted small">Click a fitting on the plan, or a row of the schedule, to see its results and calculation.</p>
+          <p className="muted small">
+            Click a fitting on the plan, or a row of the schedule, to see its results and calculation.
+          </p>
         </>
       )}
     </section>

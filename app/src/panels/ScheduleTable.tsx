@@ -1,5 +1,13 @@
 import { useMemo, useState } from 'react';
-import { caseLabel, restraintConcrete, restraintSummary, scheduleOf, SHORT_CAUTION, norm, type ScheduleFitting } from '@mainbrace/solver';
+import {
+  caseLabel,
+  restraintConcrete,
+  restraintSummary,
+  scheduleOf,
+  SHORT_CAUTION,
+  norm,
+  type ScheduleFitting,
+} from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
 import { show, showColumnForce } from '../format/quantity.js';
 import { bearingText, KIND_NAME } from '../format/fittingNames.js';
@@ -30,7 +38,10 @@ export function ScheduleTable() {
   }, [schedule, sort]);
   const u = project.units;
   const totals = schedule.fittings.reduce(
-    (t, f) => ({ block: t.block + restraintConcrete({ ...f.restraint, anchor: null }), anchor: t.anchor + (f.restraint.anchor?.concreteVolume ?? 0) }),
+    (t, f) => ({
+      block: t.block + restraintConcrete({ ...f.restraint, anchor: null }),
+      anchor: t.anchor + (f.restraint.anchor?.concreteVolume ?? 0),
+    }),
     { block: 0, anchor: 0 },
   );
   const head = (key: SortKey, text: string) => (
@@ -41,7 +52,8 @@ export function ScheduleTable() {
       </button>
     </th>
   );
-  const diam = (f: ScheduleFitting) => [...new Set(f.pipes.map((p) => show(p.outsideDiameter, 'diameter', u)))].join(' / ');
+  const diam = (f: ScheduleFitting) =>
+    [...new Set(f.pipes.map((p) => show(p.outsideDiameter, 'diameter', u)))].join(' / ');
   return (
     <div className="schedule">
       <table className="schedule-table" data-testid="schedule-table">
@@ -67,21 +79,38 @@ export function ScheduleTable() {
           {rows.map((f) => {
             const gov = f.cases.find((c) => c.case === f.governingCase)!;
             return (
-              <tr key={f.node} className={selection.nodes.has(f.node) ? 'selected' : ''} onClick={() => actions.selectNode(f.node)} tabIndex={0} onKeyDown={(e) => e.key === 'Enter' && actions.selectNode(f.node)} data-testid={`row-${f.node}`}>
+              <tr
+                key={f.node}
+                className={selection.nodes.has(f.node) ? 'selected' : ''}
+                onClick={() => actions.selectNode(f.node)}
+                tabIndex={0}
+                onKeyDown={(e) => e.key === 'Enter' && actions.selectNode(f.node)}
+                data-testid={`row-${f.node}`}
+              >
                 <td className="tag">{f.tag}</td>
                 <td className="num">{show(f.chainage, 'length', u, 4)}</td>
                 <td>{KIND_NAME[f.kind]}</td>
                 <td className="num">{diam(f)}</td>
-                <td className="num">{f.deflection !== null ? show(f.deflection, 'angle', u) : f.branchAngle !== null ? show(f.branchAngle, 'angle', u) : ''}</td>
+                <td className="num">
+                  {f.deflection !== null
+                    ? show(f.deflection, 'angle', u)
+                    : f.branchAngle !== null
+                      ? show(f.branchAngle, 'angle', u)
+                      : ''}
+                </td>
                 <td className="num">{show(f.designPressure, 'pressure', u)}</td>
                 <td>{caseLabel(project, f.governingCase)}</td>
                 <td className="num strong">{showColumnForce(norm(f.thrust), u)}</td>
-                <td className="num">{showColumnForce(norm(gov.static), u)} / {showColumnForce(norm(gov.dynamic), u)}</td>
+                <td className="num">
+                  {showColumnForce(norm(gov.static), u)} / {showColumnForce(norm(gov.dynamic), u)}
+                </td>
                 <td>{bearingText(f.bearingDirection)}</td>
                 <td>{project.soils.find((s) => s.id === f.soil)?.label ?? f.soil}</td>
                 <td>{restraintSummary(f, u)}</td>
                 <td className="num">{concreteOf(f) > 0 ? show(concreteOf(f), 'volume', u) : '—'}</td>
-                <td className="warn-cell">{f.warnings.length > 0 ? <span title={f.warnings.join('\n')}>⚠ {f.warnings.length}</span> : ''}</td>
+                <td className="warn-cell">
+                  {f.warnings.length > 0 ? <span title={f.warnings.join('\n')}>⚠ {f.warnings.length}</span> : ''}
+                </td>
               </tr>
             );
           })}
@@ -89,7 +118,8 @@ export function ScheduleTable() {
         <tfoot>
           <tr>
             <td colSpan={12}>
-              {schedule.fittings.length} fittings · concrete in blocks {show(totals.block, 'volume', u)}, in anchors {show(totals.anchor, 'volume', u)}
+              {schedule.fittings.length} fittings · concrete in blocks {show(totals.block, 'volume', u)}, in anchors{' '}
+              {show(totals.anchor, 'volume', u)}
             </td>
             <td className="num strong">{show(totals.block + totals.anchor, 'volume', u)}</td>
             <td />

@@ -8,10 +8,15 @@ import { NumberField } from './NumberField.js';
 export function TestPressureControl() {
   const project = useApp((s) => s.project);
   const actions = useActions();
-  const [rule, setRule] = useState<TestRule>(project.pipes.some((p) => p.material === 'pvc') ? 'awwa-c605' : 'awwa-c600');
+  const [rule, setRule] = useState<TestRule>(
+    project.pipes.some((p) => p.material === 'pvc') ? 'awwa-c605' : 'awwa-c600',
+  );
   const u = project.units;
   const test = project.loadCases.find((c) => c.kind === 'test') ?? project.loadCases.find((c) => c.id === 'test');
-  const working = project.loadCases.find((c) => c.kind === 'working') ?? project.loadCases.find((c) => c.id === 'working') ?? project.loadCases[0]!;
+  const working =
+    project.loadCases.find((c) => c.kind === 'working') ??
+    project.loadCases.find((c) => c.id === 'working') ??
+    project.loadCases[0]!;
   // A fixed range, so the slider does not rescale under the pointer: to 3.5 MPa (about 500 psi, above
   // ductile-iron pressure class 350 plus its margin), or further if a case already asks for more.
   const highest = Math.max(3.5e6, ...project.loadCases.map((c) => c.pressure * 1.2));
@@ -43,7 +48,16 @@ export function TestPressureControl() {
         onBlur={actions.endLiveEdit}
         onChange={(e) => setLive(Number(e.target.value))}
       />
-      <NumberField label="Test pressure at its datum" value={test.pressure} dimension="pressure" units={u} min={0} max={10e6} onCommit={(pressure) => actions.updateCase(test.id, { pressure })} testId="test-pressure" />
+      <NumberField
+        label="Test pressure at its datum"
+        value={test.pressure}
+        dimension="pressure"
+        units={u}
+        min={0}
+        max={10e6}
+        onCommit={(pressure) => actions.updateCase(test.id, { pressure })}
+        testId="test-pressure"
+      />
       {proposal && (
         <div className="proposal">
           <label>
@@ -56,15 +70,27 @@ export function TestPressureControl() {
           <ul>
             {proposal.criteria.map((c, i) => (
               <li key={i} className={i === proposal.governing ? 'strong' : ''}>
-                {c.rule}: working {show(c.working, 'pressure', u)} at {show(c.elevation, 'elevation', u, 4)} → at least {show(c.least, 'pressure', u)} there, {show(c.atTestPoint, 'pressure', u)} at the test point
+                {c.rule}: working {show(c.working, 'pressure', u)} at {show(c.elevation, 'elevation', u, 4)} → at least{' '}
+                {show(c.least, 'pressure', u)} there, {show(c.atTestPoint, 'pressure', u)} at the test point
                 {i === proposal.governing ? ' — governs' : ''}
               </li>
             ))}
           </ul>
-          <button onClick={() => actions.updateCase(test.id, { pressure: Math.ceil(proposal.pressure / 100) * 100, datumElevation: proposal.testPointElevation })} data-testid="apply-proposal">
+          <button
+            onClick={() =>
+              actions.updateCase(test.id, {
+                pressure: Math.ceil(proposal.pressure / 100) * 100,
+                datumElevation: proposal.testPointElevation,
+              })
+            }
+            data-testid="apply-proposal"
+          >
             Use {show(proposal.pressure, 'pressure', u)} at {show(proposal.testPointElevation, 'elevation', u, 4)}
           </button>
-          <p className="muted small">The test must not exceed the pipe, fitting or thrust-restraint design pressure, nor the rating of closed valves in the section.</p>
+          <p className="muted small">
+            The test must not exceed the pipe, fitting or thrust-restraint design pressure, nor the rating of closed
+            valves in the section.
+          </p>
         </div>
       )}
     </div>

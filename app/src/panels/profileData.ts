@@ -47,11 +47,21 @@ export function profileData(project: Project, analysis: Analysis): ProfileData {
   const points = path.map((id) => {
     const n = nodes.get(id)!;
     const od = Math.max(0, ...(analysis.legs.get(id) ?? []).map((l) => l.pipe.outsideDiameter));
-    return { node: id, chainage: chain.get(id)!, pipe: n.elevation, ground: n.elevation + od / 2 + n.cover, tag: analysis.byNode.get(id)?.tag ?? null };
+    return {
+      node: id,
+      chainage: chain.get(id)!,
+      pipe: n.elevation,
+      ground: n.elevation + od / 2 + n.cover,
+      tag: analysis.byNode.get(id)?.tag ?? null,
+    };
   });
   const grades = project.loadCases
     .filter((c) => c.datumElevation !== undefined)
-    .map((c) => ({ caseId: c.id, label: c.label ?? c.id, elevation: c.datumElevation! + c.pressure / (project.water.density * STANDARD_GRAVITY) }));
+    .map((c) => ({
+      caseId: c.id,
+      label: c.label ?? c.id,
+      elevation: c.datumElevation! + c.pressure / (project.water.density * STANDARD_GRAVITY),
+    }));
   const pressures = project.loadCases.map((c) => ({
     caseId: c.id,
     label: c.label ?? c.id,

@@ -23,7 +23,10 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
   const tool = useApp((s) => s.tool);
   const caseView = useApp((s) => s.caseView);
   const cases = useApp((s) => s.project.loadCases);
-  const shown = caseView.kind === 'envelope' ? 'worst of all cases' : (cases.find((c) => c.id === caseView.id)?.label ?? caseView.id);
+  const shown =
+    caseView.kind === 'envelope'
+      ? 'worst of all cases'
+      : (cases.find((c) => c.id === caseView.id)?.label ?? caseView.id);
   const drawing = useApp((s) => s.draw.phase === 'drawing');
   const us = units === 'us';
   const barLength = us ? gridSpacing(viewport.scale * FOOT, 110) * FOOT : gridSpacing(viewport.scale, 110);
@@ -37,7 +40,9 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
         <svg width="34" height="46" viewBox="0 0 34 46" aria-hidden="true">
           <path d="M17 4 L25 30 L17 25 L9 30 Z" fill={PALETTE.ink} />
           <path d="M17 4 L9 30 L17 25 Z" fill={PALETTE.paper} stroke={PALETTE.ink} strokeWidth="1" />
-          <text x="17" y="43" textAnchor="middle" fontSize="11" fontWeight="700" fill={PALETTE.ink}>N</text>
+          <text x="17" y="43" textAnchor="middle" fontSize="11" fontWeight="700" fill={PALETTE.ink}>
+            N
+          </text>
         </svg>
       </div>
       <div className="plan-scale" data-testid="scale-bar">
@@ -57,7 +62,15 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
           <div key={m} className="legend-row">
             <svg width="34" height="10" aria-hidden="true">
               {m === 'steel' && <line x1="2" y1="5" x2="32" y2="5" stroke={PALETTE.ink} strokeWidth="5" />}
-              <line x1="2" y1="5" x2="32" y2="5" stroke={PALETTE.pipe} strokeWidth="3" strokeDasharray={MATERIAL_DASH[m].map((d) => d * 3).join(' ')} />
+              <line
+                x1="2"
+                y1="5"
+                x2="32"
+                y2="5"
+                stroke={PALETTE.pipe}
+                strokeWidth="3"
+                strokeDasharray={MATERIAL_DASH[m].map((d) => d * 3).join(' ')}
+              />
             </svg>
             {MATERIAL_NAME[m]}
           </div>
@@ -87,7 +100,10 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
           tie-in to an existing main
         </div>
         <div className="legend-row">
-          <span className="legend-warn" aria-hidden="true">!</span> warning
+          <span className="legend-warn" aria-hidden="true">
+            !
+          </span>{' '}
+          warning
         </div>
       </div>
       {tool === 'draw' && (

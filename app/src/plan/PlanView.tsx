@@ -43,7 +43,9 @@ export function PlanView() {
   useEffect(() => {
     const el = box.current;
     if (!el) return;
-    const ro = new ResizeObserver(() => setSize({ width: Math.max(50, el.clientWidth), height: Math.max(50, el.clientHeight) }));
+    const ro = new ResizeObserver(() =>
+      setSize({ width: Math.max(50, el.clientWidth), height: Math.max(50, el.clientHeight) }),
+    );
     ro.observe(el);
     setSize({ width: Math.max(50, el.clientWidth), height: Math.max(50, el.clientHeight) });
     return () => ro.disconnect();
@@ -74,10 +76,14 @@ export function PlanView() {
   // their pipes out (and so is not redrawn), the interactive layer draws them where they are now.
   const movedKey = preview ? [...preview.keys()].sort().join('\u0000') : '';
   const scene = useMemo(
-    () => planScene(project, analysis, caseView, selection, null, movedKey ? new Set(movedKey.split('\u0000')) : undefined),
+    () =>
+      planScene(project, analysis, caseView, selection, null, movedKey ? new Set(movedKey.split('\u0000')) : undefined),
     [project, analysis, caseView, selection, movedKey],
   );
-  const moving = useMemo(() => (preview ? dragScene(project, analysis, selection, preview) : null), [project, analysis, selection, preview]);
+  const moving = useMemo(
+    () => (preview ? dragScene(project, analysis, selection, preview) : null),
+    [project, analysis, selection, preview],
+  );
   const drawStatic = useCallback(
     (c: Context) => {
       const ctx = native(c);
@@ -122,7 +128,11 @@ export function PlanView() {
   const tolerance = () => HIT_PX / store.getState().viewport.scale;
   const drawCtx = (free = false): DrawContext => {
     const s = store.getState();
-    return { snapping: s.snapping && !free, lengthStep: s.project.units === 'us' ? 5 * FOOT : 1, samePoint: 3 / s.viewport.scale };
+    return {
+      snapping: s.snapping && !free,
+      lengthStep: s.project.units === 'us' ? 5 * FOOT : 1,
+      samePoint: 3 / s.viewport.scale,
+    };
   };
 
   const onPointerDown = (e: ReactPointerEvent<HTMLDivElement>) => {
@@ -148,7 +158,11 @@ export function PlanView() {
       panning.current = { last: local(e), start: local(e), clearOnClick: true };
       return;
     }
-    selectState.current = selectStep(selectState.current, { type: 'down', at, hit, additive: e.shiftKey }, selectCtx()).state;
+    selectState.current = selectStep(
+      selectState.current,
+      { type: 'down', at, hit, additive: e.shiftKey },
+      selectCtx(),
+    ).state;
   };
 
   const selectCtx = () => {
@@ -178,7 +192,10 @@ export function PlanView() {
       return;
     }
     if (s.tool === 'draw') {
-      if (s.draw.phase === 'drawing') actions.setDraw(drawStep(s.draw, { type: 'move', at, hit: hitTest(s.project, at, tolerance()) }, drawCtx(e.altKey)).state);
+      if (s.draw.phase === 'drawing')
+        actions.setDraw(
+          drawStep(s.draw, { type: 'move', at, hit: hitTest(s.project, at, tolerance()) }, drawCtx(e.altKey)).state,
+        );
       return;
     }
     const out = selectStep(selectState.current, { type: 'move', at }, selectCtx());
@@ -206,7 +223,10 @@ export function PlanView() {
     else if (effect.kind === 'box') {
       const found = inBox(s.project, effect.from, effect.to);
       const base = effect.additive ? s.selection : { nodes: new Set<string>(), pipes: new Set<string>() };
-      actions.select({ nodes: new Set([...base.nodes, ...found.nodes]), pipes: new Set([...base.pipes, ...found.pipes]) });
+      actions.select({
+        nodes: new Set([...base.nodes, ...found.nodes]),
+        pipes: new Set([...base.pipes, ...found.pipes]),
+      });
     } else if (effect.kind === 'select') {
       const h = effect.hit;
       if (h.kind === 'none') {
@@ -219,7 +239,11 @@ export function PlanView() {
         if (next.has(h.id)) next.delete(h.id);
         else next.add(h.id);
         actions.select({ ...s.selection, [key]: next });
-      } else actions.select({ nodes: new Set(key === 'nodes' ? [h.id] : []), pipes: new Set(key === 'pipes' ? [h.id] : []) });
+      } else
+        actions.select({
+          nodes: new Set(key === 'nodes' ? [h.id] : []),
+          pipes: new Set(key === 'pipes' ? [h.id] : []),
+        });
     }
   };
 
@@ -274,7 +298,12 @@ export function PlanView() {
               const ctx = native(c);
               if (moving) {
                 drawPipes(ctx, viewport, moving);
-                drawFittings(ctx, viewport, moving, placeTags(ctx, viewport, moving, new LabelSpace(size.width, size.height)));
+                drawFittings(
+                  ctx,
+                  viewport,
+                  moving,
+                  placeTags(ctx, viewport, moving, new LabelSpace(size.width, size.height)),
+                );
               }
               drawOverlay(ctx, viewport, draw, selectBox, units, snappedNow);
             }}

@@ -19,8 +19,10 @@ export function drawGrid(ctx: CanvasRenderingContext2D, v: Viewport, width: numb
   ctx.lineWidth = 1;
   ctx.font = '10px system-ui, sans-serif';
   ctx.fillStyle = PALETTE.gridLabel;
-  const i0 = Math.floor(topLeft.x / step), i1 = Math.ceil(bottomRight.x / step);
-  const j0 = Math.floor(bottomRight.y / step), j1 = Math.ceil(topLeft.y / step);
+  const i0 = Math.floor(topLeft.x / step),
+    i1 = Math.ceil(bottomRight.x / step);
+  const j0 = Math.floor(bottomRight.y / step),
+    j1 = Math.ceil(topLeft.y / step);
   const fmt = (m: number) => `${Math.round((m / unit) * 100) / 100}`;
   for (let i = i0; i <= i1; i++) {
     const sx = Math.round(toScreen(v, { x: i * step, y: 0 }).sx) + 0.5;

@@ -29,7 +29,8 @@ export function drawOverlay(
     }
     const band = rubberBand(draw);
     if (band) {
-      const a = toScreen(v, band.from), b = toScreen(v, band.to);
+      const a = toScreen(v, band.from),
+        b = toScreen(v, band.to);
       ctx.setLineDash([6, 4]);
       ctx.beginPath();
       ctx.moveTo(a.sx, a.sy);
@@ -48,7 +49,8 @@ export function drawOverlay(
     }
   }
   if (box) {
-    const a = toScreen(v, box.from), b = toScreen(v, box.to);
+    const a = toScreen(v, box.from),
+      b = toScreen(v, box.to);
     ctx.fillStyle = 'rgba(224, 138, 0, 0.08)';
     ctx.strokeStyle = PALETTE.selection;
     ctx.lineWidth = 1;

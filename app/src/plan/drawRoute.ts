@@ -25,8 +25,12 @@ function path(ctx: Ctx, v: Viewport, pts: readonly { x: number; y: number }[]) {
 /** Concrete hatching: 45° lines clipped to the polygon, as drawings mark concrete. */
 function hatch(ctx: Ctx, v: Viewport, pts: readonly { x: number; y: number }[], color: string) {
   const s = pts.map((p) => toScreen(v, p));
-  const xs = s.map((p) => p.sx), ys = s.map((p) => p.sy);
-  const x0 = Math.min(...xs), x1 = Math.max(...xs), y0 = Math.min(...ys), y1 = Math.max(...ys);
+  const xs = s.map((p) => p.sx),
+    ys = s.map((p) => p.sy);
+  const x0 = Math.min(...xs),
+    x1 = Math.max(...xs),
+    y0 = Math.min(...ys),
+    y1 = Math.max(...ys);
   ctx.save();
   path(ctx, v, pts);
   ctx.clip();
@@ -76,7 +80,8 @@ export function drawRestraints(ctx: Ctx, v: Viewport, scene: Scene) {
 export function drawPipes(ctx: Ctx, v: Viewport, scene: Scene) {
   ctx.lineCap = 'round';
   for (const p of scene.pipes) {
-    const a = toScreen(v, p.a), b = toScreen(v, p.b);
+    const a = toScreen(v, p.a),
+      b = toScreen(v, p.b);
     const w = pipeWidth(p.outsideDiameter);
     if (p.selected) {
       ctx.strokeStyle = PALETTE.selection;
@@ -107,9 +112,15 @@ export function drawPipes(ctx: Ctx, v: Viewport, scene: Scene) {
   ctx.setLineDash([]);
 }
 
-
 /** Haloed text: legible over pipes and hatching. */
-export function label(ctx: Ctx, text: string, x: number, y: number, color: string = PALETTE.ink, font = '600 11px system-ui, sans-serif') {
+export function label(
+  ctx: Ctx,
+  text: string,
+  x: number,
+  y: number,
+  color: string = PALETTE.ink,
+  font = '600 11px system-ui, sans-serif',
+) {
   ctx.font = font;
   ctx.textAlign = 'left';
   ctx.textBaseline = 'middle';
@@ -141,7 +152,12 @@ function warningMark(ctx: Ctx, wx: number, ty: number) {
 const TAG_FONT = '600 11px system-ui, sans-serif';
 
 /** Tags get their room first (above right of the symbol, else the other corners); selected ones always show. */
-export function placeTags(ctx: Ctx, v: Viewport, scene: Scene, space: LabelSpace): Map<string, { x: number; y: number }> {
+export function placeTags(
+  ctx: Ctx,
+  v: Viewport,
+  scene: Scene,
+  space: LabelSpace,
+): Map<string, { x: number; y: number }> {
   ctx.font = TAG_FONT;
   const out = new Map<string, { x: number; y: number }>();
   const ordered = [...scene.fittings].sort((a, b) => Number(b.selected) - Number(a.selected));
@@ -203,8 +219,10 @@ export function drawArrows(ctx: Ctx, v: Viewport, scene: Scene, units: UnitSyste
   for (const a of scene.arrows) {
     const s = toScreen(v, a.at);
     const length = a.horizontal > 0 ? Math.max(10, (ARROW_PX * a.horizontal) / scene.largestForce) : 0;
-    const ux = a.direction.x, uy = -a.direction.y;
-    const ex = s.sx + ux * length, ey = s.sy + uy * length;
+    const ux = a.direction.x,
+      uy = -a.direction.y;
+    const ex = s.sx + ux * length,
+      ey = s.sy + uy * length;
     ctx.strokeStyle = PALETTE.thrust;
     ctx.fillStyle = PALETTE.thrust;
     ctx.lineWidth = 2.2;
@@ -222,7 +240,8 @@ export function drawArrows(ctx: Ctx, v: Viewport, scene: Scene, units: UnitSyste
     }
     const total = Math.hypot(a.horizontal, a.vertical);
     let text = formatSi(a.horizontal, 'force', units);
-    if (Math.abs(a.vertical) > 0.02 * total) text += `  ${a.vertical > 0 ? '↑' : '↓'} ${formatSi(Math.abs(a.vertical), 'force', units)}`;
+    if (Math.abs(a.vertical) > 0.02 * total)
+      text += `  ${a.vertical > 0 ? '↑' : '↓'} ${formatSi(Math.abs(a.vertical), 'force', units)}`;
     ctx.font = ARROW_FONT;
     const w = ctx.measureText(text).width + 4;
     const h = 13;

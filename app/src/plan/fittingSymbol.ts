@@ -4,9 +4,13 @@ import { PALETTE } from './palette.js';
 /** A fitting's symbol, oriented along its first pipe: our own small glyph per kind. */
 export function symbol(ctx: CanvasRenderingContext2D, f: SceneFitting, x: number, y: number) {
   const r = 6;
-  const ax = f.axis.x, ay = -f.axis.y; // screen y is down
+  const ax = f.axis.x,
+    ay = -f.axis.y; // screen y is down
   const l = Math.hypot(ax, ay) || 1;
-  const ux = ax / l, uy = ay / l, nx = -uy, ny = ux;
+  const ux = ax / l,
+    uy = ay / l,
+    nx = -uy,
+    ny = ux;
   ctx.lineWidth = 1.6;
   ctx.strokeStyle = PALETTE.ink;
   ctx.fillStyle = PALETTE.paper;

@@ -38,8 +38,15 @@ export function hitTest(project: Project, at: PlanPoint, tolerance: number): Hit
 
 /** Nodes and pipes wholly inside a plan rectangle (box select). */
 export function inBox(project: Project, from: PlanPoint, to: PlanPoint): { nodes: string[]; pipes: string[] } {
-  const x0 = Math.min(from.x, to.x), x1 = Math.max(from.x, to.x);
-  const y0 = Math.min(from.y, to.y), y1 = Math.max(from.y, to.y);
-  const inside = new Set(project.nodes.filter((n) => n.x >= x0 && n.x <= x1 && n.y >= y0 && n.y <= y1).map((n) => n.id));
-  return { nodes: [...inside], pipes: project.pipes.filter((p) => inside.has(p.from) && inside.has(p.to)).map((p) => p.id) };
+  const x0 = Math.min(from.x, to.x),
+    x1 = Math.max(from.x, to.x);
+  const y0 = Math.min(from.y, to.y),
+    y1 = Math.max(from.y, to.y);
+  const inside = new Set(
+    project.nodes.filter((n) => n.x >= x0 && n.x <= x1 && n.y >= y0 && n.y <= y1).map((n) => n.id),
+  );
+  return {
+    nodes: [...inside],
+    pipes: project.pipes.filter((p) => inside.has(p.from) && inside.has(p.to)).map((p) => p.id),
+  };
 }

@@ -1,4 +1,12 @@
-import { horizontalNorm, norm, type Analysis, type FittingKind, type Material, type Project, type Vec3 } from '@mainbrace/solver';
+import {
+  horizontalNorm,
+  norm,
+  type Analysis,
+  type FittingKind,
+  type Material,
+  type Project,
+  type Vec3,
+} from '@mainbrace/solver';
 import type { PlanPoint } from '../state/documentEdits.js';
 import type { CaseView, Selection } from '../state/store.js';
 
@@ -55,9 +63,11 @@ const plan = (v: Vec3): PlanPoint => ({ x: v[0], y: v[1] });
 
 /** A rectangle from a centre line (p → q) and a width, as four plan points. */
 function strip(p: PlanPoint, q: PlanPoint, width: number): PlanPoint[] {
-  const dx = q.x - p.x, dy = q.y - p.y;
+  const dx = q.x - p.x,
+    dy = q.y - p.y;
   const l = Math.hypot(dx, dy) || 1;
-  const nx = (-dy / l) * (width / 2), ny = (dx / l) * (width / 2);
+  const nx = (-dy / l) * (width / 2),
+    ny = (dx / l) * (width / 2);
   return [
     { x: p.x + nx, y: p.y + ny },
     { x: q.x + nx, y: q.y + ny },
@@ -85,7 +95,9 @@ export function planScene(
   hidden?: ReadonlySet<string>,
 ): Scene {
   const where = new Map<string, PlanPoint>(project.nodes.map((n) => [n.id, preview?.get(n.id) ?? { x: n.x, y: n.y }]));
-  const shownPipes = hidden?.size ? project.pipes.filter((p) => !hidden.has(p.from) && !hidden.has(p.to)) : project.pipes;
+  const shownPipes = hidden?.size
+    ? project.pipes.filter((p) => !hidden.has(p.from) && !hidden.has(p.to))
+    : project.pipes;
   const pipes: ScenePipe[] = shownPipes.map((p) => ({
     id: p.id,
     a: where.get(p.from)!,
@@ -105,12 +117,26 @@ export function planScene(
     if (hidden?.has(id) || !where.has(id)) continue;
     const at = where.get(id)!;
     const axis = f.legs[0] ? plan(f.legs[0].direction) : { x: 1, y: 0 };
-    fittings.push({ node: id, tag: f.tag, kind: f.geometry.kind, at, axis, warned: f.warnings.length > 0, selected: selection.nodes.has(id) });
+    fittings.push({
+      node: id,
+      tag: f.tag,
+      kind: f.geometry.kind,
+      at,
+      axis,
+      warned: f.warnings.length > 0,
+      selected: selection.nodes.has(id),
+    });
     if (preview?.has(id)) continue; // results follow on drop
     const t = shownThrust(f, view);
     const h = horizontalNorm(t);
     if (norm(t) > 0) {
-      arrows.push({ node: id, at, direction: h > 0 ? { x: t[0] / h, y: t[1] / h } : { x: 0, y: 0 }, horizontal: h, vertical: t[2] });
+      arrows.push({
+        node: id,
+        at,
+        direction: h > 0 ? { x: t[0] / h, y: t[1] / h } : { x: 0, y: 0 },
+        horizontal: h,
+        vertical: t[2],
+      });
       largestForce = Math.max(largestForce, h);
     }
     const r = f.restraint;
@@ -124,12 +150,29 @@ export function planScene(
     }
     if (r.anchor) {
       const s = r.anchor.side / 2;
-      polygons.push({ node: id, kind: 'anchor', points: [{ x: at.x - s, y: at.y - s }, { x: at.x + s, y: at.y - s }, { x: at.x + s, y: at.y + s }, { x: at.x - s, y: at.y + s }] });
+      polygons.push({
+        node: id,
+        kind: 'anchor',
+        points: [
+          { x: at.x - s, y: at.y - s },
+          { x: at.x + s, y: at.y - s },
+          { x: at.x + s, y: at.y + s },
+          { x: at.x - s, y: at.y + s },
+        ],
+      });
     }
     if (r.trenchBottom && f.legs[0]) {
       const d = plan(f.legs[0].direction);
       const half = r.trenchBottom.length / 2;
-      polygons.push({ node: id, kind: 'pad', points: strip({ x: at.x - d.x * half, y: at.y - d.y * half }, { x: at.x + d.x * half, y: at.y + d.y * half }, r.trenchBottom.width) });
+      polygons.push({
+        node: id,
+        kind: 'pad',
+        points: strip(
+          { x: at.x - d.x * half, y: at.y - d.y * half },
+          { x: at.x + d.x * half, y: at.y + d.y * half },
+          r.trenchBottom.width,
+        ),
+      });
     }
     for (const leg of r.restrainedLegs) {
       const l = f.legs.find((x) => x.pipe.id === leg.pipe);
@@ -137,7 +180,11 @@ export function planScene(
       const d = plan(l.direction);
       const planLength = Math.min(leg.length, l.length) * Math.hypot(d.x, d.y);
       const dir = { x: d.x / (Math.hypot(d.x, d.y) || 1), y: d.y / (Math.hypot(d.x, d.y) || 1) };
-      polygons.push({ node: id, kind: 'restrained', points: strip(at, { x: at.x + dir.x * planLength, y: at.y + dir.y * planLength }, l.pipe.outsideDiameter * 3) });
+      polygons.push({
+        node: id,
+        kind: 'restrained',
+        points: strip(at, { x: at.x + dir.x * planLength, y: at.y + dir.y * planLength }, l.pipe.outsideDiameter * 3),
+      });
     }
   }
   const plainNodes = project.nodes
@@ -150,7 +197,12 @@ export function planScene(
  * What moves while nodes are dragged: the dragged nodes and the pipes that meet them, at their
  * preview positions, without results (the document changes, and results follow, on drop).
  */
-export function dragScene(project: Project, analysis: Analysis, selection: Selection, preview: ReadonlyMap<string, PlanPoint>): Scene {
+export function dragScene(
+  project: Project,
+  analysis: Analysis,
+  selection: Selection,
+  preview: ReadonlyMap<string, PlanPoint>,
+): Scene {
   const touching = project.pipes.filter((p) => preview.has(p.from) || preview.has(p.to));
   const ids = new Set([...preview.keys(), ...touching.flatMap((p) => [p.from, p.to])]);
   const sub: Project = { ...project, nodes: project.nodes.filter((n) => ids.has(n.id)), pipes: touching };

@@ -9,10 +9,15 @@ const PAD = 22;
 /** A small plan of the whole route with every fitting's tag, north and a scale: where each row is. */
 export function KeyPlan({ project, analysis }: { project: Project; analysis: Analysis }) {
   if (project.nodes.length === 0) return null;
-  const xs = project.nodes.map((n) => n.x), ys = project.nodes.map((n) => n.y);
-  const x0 = Math.min(...xs), x1 = Math.max(...xs), y0 = Math.min(...ys), y1 = Math.max(...ys);
+  const xs = project.nodes.map((n) => n.x),
+    ys = project.nodes.map((n) => n.y);
+  const x0 = Math.min(...xs),
+    x1 = Math.max(...xs),
+    y0 = Math.min(...ys),
+    y1 = Math.max(...ys);
   const scale = Math.min((W - 2 * PAD) / Math.max(x1 - x0, 1), (H - 2 * PAD) / Math.max(y1 - y0, 1));
-  const cx = (x0 + x1) / 2, cy = (y0 + y1) / 2;
+  const cx = (x0 + x1) / 2,
+    cy = (y0 + y1) / 2;
   const sx = (x: number) => W / 2 + (x - cx) * scale;
   const sy = (y: number) => H / 2 - (y - cy) * scale;
   const at = new Map(project.nodes.map((n) => [n.id, n]));
@@ -22,22 +27,39 @@ export function KeyPlan({ project, analysis }: { project: Project; analysis: Ana
       <svg viewBox={`0 0 ${W} ${H}`} role="img" aria-label="Key plan of the route with fitting tags">
         <rect x="0.5" y="0.5" width={W - 1} height={H - 1} fill="none" stroke="#999" />
         {project.pipes.map((p) => {
-          const a = at.get(p.from)!, b = at.get(p.to)!;
-          return <line key={p.id} x1={sx(a.x)} y1={sy(a.y)} x2={sx(b.x)} y2={sy(b.y)} stroke="#1d6fb8" strokeWidth={1 + p.outsideDiameter * 4} />;
+          const a = at.get(p.from)!,
+            b = at.get(p.to)!;
+          return (
+            <line
+              key={p.id}
+              x1={sx(a.x)}
+              y1={sy(a.y)}
+              x2={sx(b.x)}
+              y2={sy(b.y)}
+              stroke="#1d6fb8"
+              strokeWidth={1 + p.outsideDiameter * 4}
+            />
+          );
         })}
         {analysis.fittings.map((f, i) => (
           <g key={f.node.id}>
             <circle cx={sx(f.node.x)} cy={sy(f.node.y)} r="2.2" fill="#26251f" />
-            <text x={sx(f.node.x) + 3} y={sy(f.node.y) + (i % 2 ? 9 : -3)} fontSize="7.5" fontWeight="700">{f.tag}</text>
+            <text x={sx(f.node.x) + 3} y={sy(f.node.y) + (i % 2 ? 9 : -3)} fontSize="7.5" fontWeight="700">
+              {f.tag}
+            </text>
           </g>
         ))}
         <g transform={`translate(${W - 18}, 10)`}>
           <path d="M0 0 L5 14 L0 11 L-5 14 Z" fill="#26251f" />
-          <text x="0" y="23" textAnchor="middle" fontSize="8" fontWeight="700">N</text>
+          <text x="0" y="23" textAnchor="middle" fontSize="8" fontWeight="700">
+            N
+          </text>
         </g>
         <g transform={`translate(10, ${H - 12})`}>
           <rect width={bar * scale} height="4" fill="#26251f" />
-          <text x={bar * scale + 4} y="5" fontSize="7.5">{formatSi(bar, 'length', project.units)}</text>
+          <text x={bar * scale + 4} y="5" fontSize="7.5">
+            {formatSi(bar, 'length', project.units)}
+          </text>
         </g>
       </svg>
       <figcaption className="small muted">Key plan</figcaption>

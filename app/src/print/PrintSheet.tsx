@@ -1,4 +1,12 @@
-import { CAUTIONS, caseLabel, calculationRecord, norm, restraintConcrete, restraintSummary, scheduleOf } from '@mainbrace/solver';
+import {
+  CAUTIONS,
+  caseLabel,
+  calculationRecord,
+  norm,
+  restraintConcrete,
+  restraintSummary,
+  scheduleOf,
+} from '@mainbrace/solver';
 import { useAnalysis, useApp } from '../state/StoreContext.js';
 import { show, showColumnForce } from '../format/quantity.js';
 import { bearingText, fittingTitle, KIND_NAME } from '../format/fittingNames.js';
@@ -48,7 +56,12 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
           <div className="basis-grid">
             <table>
               <thead>
-                <tr><th>Case</th><th>Pressure</th><th>at datum</th><th>Flow factor</th></tr>
+                <tr>
+                  <th>Case</th>
+                  <th>Pressure</th>
+                  <th>at datum</th>
+                  <th>Flow factor</th>
+                </tr>
               </thead>
               <tbody>
                 {project.loadCases.map((c) => (
@@ -63,12 +76,21 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
             </table>
             <table>
               <thead>
-                <tr><th>Soil</th><th>Bearing</th><th>γ</th><th>φ</th><th>c</th></tr>
+                <tr>
+                  <th>Soil</th>
+                  <th>Bearing</th>
+                  <th>γ</th>
+                  <th>φ</th>
+                  <th>c</th>
+                </tr>
               </thead>
               <tbody>
                 {project.soils.map((s) => (
                   <tr key={s.id}>
-                    <td>{s.label ?? s.id}{s.source ? <div className="small muted">{s.source}</div> : null}</td>
+                    <td>
+                      {s.label ?? s.id}
+                      {s.source ? <div className="small muted">{s.source}</div> : null}
+                    </td>
                     <td>
                       {show(s.bearing, 'stress', u)}
                       {s.bearingPerDepth ? ` + ${show(s.bearingPerDepth, 'stressGradient', u)} of depth` : ''}
@@ -82,11 +104,26 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
             </table>
             <KeyPlan project={project} analysis={analysis} />
             <ul className="basis-list">
-              <li>Safety factors: bearing {d.bearingSafetyFactor}, uplift {d.upliftSafetyFactor}, restrained joints {d.restraintSafetyFactor}</li>
-              <li>Pressure acts on the {d.thrustArea} diameter; water {show(project.water.density, 'density', u)}</li>
-              <li>Concrete {show(d.concreteUnitWeight, 'unitWeight', u)}; blocks {show(d.blockDepth, 'length', u)} deep to the bearing face</li>
-              <li>Groundwater {d.groundwaterElevation === null ? 'below every block' : `at ${show(d.groundwaterElevation, 'elevation', u, 4)}`}</li>
-              <li>Thrust by the steady momentum balance at each fitting; bearing area A = SF·T/σ; anchors W ≥ SF·T_up</li>
+              <li>
+                Safety factors: bearing {d.bearingSafetyFactor}, uplift {d.upliftSafetyFactor}, restrained joints{' '}
+                {d.restraintSafetyFactor}
+              </li>
+              <li>
+                Pressure acts on the {d.thrustArea} diameter; water {show(project.water.density, 'density', u)}
+              </li>
+              <li>
+                Concrete {show(d.concreteUnitWeight, 'unitWeight', u)}; blocks {show(d.blockDepth, 'length', u)} deep to
+                the bearing face
+              </li>
+              <li>
+                Groundwater{' '}
+                {d.groundwaterElevation === null
+                  ? 'below every block'
+                  : `at ${show(d.groundwaterElevation, 'elevation', u, 4)}`}
+              </li>
+              <li>
+                Thrust by the steady momentum balance at each fitting; bearing area A = SF·T/σ; anchors W ≥ SF·T_up
+              </li>
             </ul>
           </div>
         </section>
@@ -100,7 +137,17 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
             </colgroup>
             <thead>
               <tr>
-                <th>Tag</th><th>Chainage</th><th>Fitting</th><th>Pipe OD</th><th>Design pressure</th><th>Governs</th><th>Thrust</th><th>Bears (from N)</th><th>Soil</th><th>Restraint</th><th>Warnings</th>
+                <th>Tag</th>
+                <th>Chainage</th>
+                <th>Fitting</th>
+                <th>Pipe OD</th>
+                <th>Design pressure</th>
+                <th>Governs</th>
+                <th>Thrust</th>
+                <th>Bears (from N)</th>
+                <th>Soil</th>
+                <th>Restraint</th>
+                <th>Warnings</th>
               </tr>
             </thead>
             <tbody>
@@ -108,8 +155,15 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
                 <tr key={f.node}>
                   <td className="tag">{f.tag}</td>
                   <td className="num">{show(f.chainage, 'length', u, 4)}</td>
-                  <td>{KIND_NAME[f.kind]}{f.deflection !== null && f.kind !== 'valve' && f.kind !== 'reducer' ? ` ${show(f.deflection, 'angle', u)}` : ''}</td>
-                  <td className="num">{[...new Set(f.pipes.map((p) => show(p.outsideDiameter, 'diameter', u)))].join(' / ')}</td>
+                  <td>
+                    {KIND_NAME[f.kind]}
+                    {f.deflection !== null && f.kind !== 'valve' && f.kind !== 'reducer'
+                      ? ` ${show(f.deflection, 'angle', u)}`
+                      : ''}
+                  </td>
+                  <td className="num">
+                    {[...new Set(f.pipes.map((p) => show(p.outsideDiameter, 'diameter', u)))].join(' / ')}
+                  </td>
                   <td className="num">{show(f.designPressure, 'pressure', u)}</td>
                   <td>{caseLabel(project, f.governingCase)}</td>
                   <td className="num strong">{showColumnForce(norm(f.thrust), u)}</td>
@@ -122,7 +176,8 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
             </tbody>
           </table>
           <p className="sheet-total">
-            Total concrete in blocks and anchors: <strong>{show(concrete, 'volume', u)}</strong> for {schedule.fittings.length} fittings
+            Total concrete in blocks and anchors: <strong>{show(concrete, 'volume', u)}</strong> for{' '}
+            {schedule.fittings.length} fittings
           </p>
         </section>
         <section className="sheet-cautions">

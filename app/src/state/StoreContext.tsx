@@ -6,7 +6,15 @@ import type { Actions } from './actions.js';
 
 const StoreCtx = createContext<{ store: AppStore; actions: Actions } | null>(null);
 
-export function StoreProvider({ store, actions, children }: { store: AppStore; actions: Actions; children: ReactNode }) {
+export function StoreProvider({
+  store,
+  actions,
+  children,
+}: {
+  store: AppStore;
+  actions: Actions;
+  children: ReactNode;
+}) {
   return <StoreCtx.Provider value={{ store, actions }}>{children}</StoreCtx.Provider>;
 }
 

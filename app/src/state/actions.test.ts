@@ -124,7 +124,16 @@ describe('replaceProject', () => {
 
 describe('typing into a text field', () => {
   it('makes one undo step for a burst of keystrokes, and a new one after a pause', () => {
-    const store = createAppStore(project([{ id: 'n1', x: 0, y: 0 }, { id: 'n2', x: 10, y: 0 }], [{ from: 'n1', to: 'n2' }]), DN300);
+    const store = createAppStore(
+      project(
+        [
+          { id: 'n1', x: 0, y: 0 },
+          { id: 'n2', x: 10, y: 0 },
+        ],
+        [{ from: 'n1', to: 'n2' }],
+      ),
+      DN300,
+    );
     const actions = createActions(store);
     const original = store.getState().project.name;
     vi.useFakeTimers();

@@ -1,7 +1,16 @@
 import { parseProject, type LoadCase, type Pipe, type Project, type ProjectNode, type Soil } from '@mainbrace/solver';
 import type { AppState, AppStore, CaseView, DrawerTab, Selection, ToolName } from './store.js';
 import { EMPTY_SELECTION } from './store.js';
-import { addRoute, deleteItems, moveNodes, updateNode, updatePipe, type PipeSpec, type PlanPoint, type RouteEnd } from './documentEdits.js';
+import {
+  addRoute,
+  deleteItems,
+  moveNodes,
+  updateNode,
+  updatePipe,
+  type PipeSpec,
+  type PlanPoint,
+  type RouteEnd,
+} from './documentEdits.js';
 import type { Viewport } from './viewport.js';
 import type { DrawState } from '../tools/drawTool.js';
 
@@ -12,7 +21,10 @@ const TYPING_WINDOW_MS = 1500;
 function prune(sel: Selection, p: Project): Selection {
   const nodes = new Set(p.nodes.map((n) => n.id));
   const pipes = new Set(p.pipes.map((x) => x.id));
-  return { nodes: new Set([...sel.nodes].filter((id) => nodes.has(id))), pipes: new Set([...sel.pipes].filter((id) => pipes.has(id))) };
+  return {
+    nodes: new Set([...sel.nodes].filter((id) => nodes.has(id))),
+    pipes: new Set([...sel.pipes].filter((id) => pipes.has(id))),
+  };
 }
 
 /**
@@ -32,7 +44,13 @@ export function createActions(store: AppStore) {
     if (after === before) return;
     const check = validated(after);
     if (!check.ok) {
-      set({ notice: { tone: 'error', title: 'That change was not made: it would leave the project invalid', lines: check.lines } });
+      set({
+        notice: {
+          tone: 'error',
+          title: 'That change was not made: it would leave the project invalid',
+          lines: check.lines,
+        },
+      });
       return;
     }
     // Keystrokes into one text field within a moment of each other are one undo step, not one per letter.
@@ -49,7 +67,8 @@ export function createActions(store: AppStore) {
 
   return {
     // ——— document edits (undoable)
-    addRun: (start: RouteEnd, vertices: PlanPoint[], end: RouteEnd | null) => edit((p) => addRoute(p, start, vertices, end, get().pipeSpec)),
+    addRun: (start: RouteEnd, vertices: PlanPoint[], end: RouteEnd | null) =>
+      edit((p) => addRoute(p, start, vertices, end, get().pipeSpec)),
     moveNodes: (moves: ReadonlyMap<string, PlanPoint>) => {
       set({ dragPreview: null });
       edit((p) => moveNodes(p, moves));
@@ -64,21 +83,34 @@ export function createActions(store: AppStore) {
       const gone = { nodes: before.nodes.length - after.nodes.length, pipes: before.pipes.length - after.pipes.length };
       set({
         selection: EMPTY_SELECTION,
-        notice: { tone: 'info', title: `Deleted ${gone.nodes} node${gone.nodes === 1 ? '' : 's'} and ${gone.pipes} pipe${gone.pipes === 1 ? '' : 's'} — Ctrl+Z brings them back`, lines: [] },
+        notice: {
+          tone: 'info',
+          title: `Deleted ${gone.nodes} node${gone.nodes === 1 ? '' : 's'} and ${gone.pipes} pipe${gone.pipes === 1 ? '' : 's'} — Ctrl+Z brings them back`,
+          lines: [],
+        },
       });
     },
-    updateNode: (id: string, patch: Partial<ProjectNode>) => edit((p) => updateNode(p, id, patch), 'label' in patch ? `node-label-${id}` : undefined),
-    updatePipe: (id: string, patch: Partial<Pipe>) => edit((p) => updatePipe(p, id, patch), 'label' in patch ? `pipe-label-${id}` : undefined),
+    updateNode: (id: string, patch: Partial<ProjectNode>) =>
+      edit((p) => updateNode(p, id, patch), 'label' in patch ? `node-label-${id}` : undefined),
+    updatePipe: (id: string, patch: Partial<Pipe>) =>
+      edit((p) => updatePipe(p, id, patch), 'label' in patch ? `pipe-label-${id}` : undefined),
     renameProject: (name: string) => edit((p) => ({ ...p, name }), 'project-name'),
     setUnits: (units: Project['units']) => edit((p) => (p.units === units ? p : { ...p, units })),
     updateDesign: (patch: Partial<Project['design']>) => edit((p) => ({ ...p, design: { ...p.design, ...patch } })),
     setWaterDensity: (density: number) => edit((p) => ({ ...p, water: { density } })),
     updateCase: (id: string, patch: Partial<LoadCase>) =>
-      edit((p) => ({ ...p, loadCases: p.loadCases.map((c) => (c.id === id ? { ...c, ...patch, id } : c)) }), 'label' in patch ? `case-label-${id}` : undefined),
+      edit(
+        (p) => ({ ...p, loadCases: p.loadCases.map((c) => (c.id === id ? { ...c, ...patch, id } : c)) }),
+        'label' in patch ? `case-label-${id}` : undefined,
+      ),
     addCase: (c: LoadCase) => edit((p) => ({ ...p, loadCases: [...p.loadCases, c] })),
-    removeCase: (id: string) => edit((p) => (p.loadCases.length <= 1 ? p : { ...p, loadCases: p.loadCases.filter((c) => c.id !== id) })),
+    removeCase: (id: string) =>
+      edit((p) => (p.loadCases.length <= 1 ? p : { ...p, loadCases: p.loadCases.filter((c) => c.id !== id) })),
     updateSoil: (id: string, patch: Partial<Soil>) =>
-      edit((p) => ({ ...p, soils: p.soils.map((s) => (s.id === id ? { ...s, ...patch, id } : s)) }), 'label' in patch ? `soil-label-${id}` : undefined),
+      edit(
+        (p) => ({ ...p, soils: p.soils.map((s) => (s.id === id ? { ...s, ...patch, id } : s)) }),
+        'label' in patch ? `soil-label-${id}` : undefined,
+      ),
     addSoil: (soil: Soil) => edit((p) => ({ ...p, soils: [...p.soils, soil] })),
     removeSoil: (id: string) =>
       edit((p) => {
@@ -140,7 +172,8 @@ export function createActions(store: AppStore) {
     select: (selection: Selection) => set({ selection }),
     selectNode: (id: string) => set({ selection: { nodes: new Set([id]), pipes: new Set() } }),
     clearSelection: () => set({ selection: EMPTY_SELECTION }),
-    setDrawer: (tab: DrawerTab, height?: AppState['drawer']['height']) => set({ drawer: { tab, height: height ?? (get().drawer.height === 'closed' ? 'low' : get().drawer.height) } }),
+    setDrawer: (tab: DrawerTab, height?: AppState['drawer']['height']) =>
+      set({ drawer: { tab, height: height ?? (get().drawer.height === 'closed' ? 'low' : get().drawer.height) } }),
     setDrawerHeight: (height: AppState['drawer']['height']) => set({ drawer: { ...get().drawer, height } }),
     notify: (notice: AppState['notice']) => set({ notice }),
   };
@@ -151,5 +184,7 @@ export type Actions = ReturnType<typeof createActions>;
 /** Checks a whole document before it replaces the current one (used by Open and restore). */
 export function validated(data: unknown): { ok: true; project: Project } | { ok: false; lines: string[] } {
   const r = parseProject(data);
-  return r.ok ? { ok: true, project: r.project } : { ok: false, lines: r.problems.map((p) => (p.path ? `${p.path}: ${p.message}` : p.message)) };
+  return r.ok
+    ? { ok: true, project: r.project }
+    : { ok: false, lines: r.problems.map((p) => (p.path ? `${p.path}: ${p.message}` : p.message)) };
 }

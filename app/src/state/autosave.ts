@@ -9,7 +9,8 @@ const DELAY_MS = 400;
 const UNREADABLE_KEY = 'mainbrace.project.v1.unreadable';
 
 /** What was kept from the last visit: a valid project, nothing, or a copy that no longer reads. */
-export type Restored = { kind: 'project'; project: Project } | { kind: 'none' } | { kind: 'unreadable'; lines: string[] };
+export type Restored =
+  { kind: 'project'; project: Project } | { kind: 'none' } | { kind: 'unreadable'; lines: string[] };
 
 /**
  * The project kept from the last visit. A kept copy that no longer validates is not thrown away: it is

@@ -100,8 +100,15 @@ describe('deleteItems', () => {
 
   it('takes a bend out of the line: its two pipes become one between the neighbours, flow kept', () => {
     const chain = project(
-      [{ id: 'n1', x: 0, y: 0 }, { id: 'n2', x: 30, y: 10 }, { id: 'n3', x: 60, y: 0 }],
-      [{ from: 'n1', to: 'n2', flow: 0.02 }, { from: 'n2', to: 'n3', flow: 0.02 }],
+      [
+        { id: 'n1', x: 0, y: 0 },
+        { id: 'n2', x: 30, y: 10 },
+        { id: 'n3', x: 60, y: 0 },
+      ],
+      [
+        { from: 'n1', to: 'n2', flow: 0.02 },
+        { from: 'n2', to: 'n3', flow: 0.02 },
+      ],
     );
     const doc = deleteItems(chain, new Set(['n2']), none);
     expect(doc.nodes.map((n) => n.id)).toEqual(['n1', 'n3']);

@@ -17,9 +17,7 @@ export interface PipeSpec {
 
 /** Where a drawn run starts or ends: an existing node, a point on a pipe (split there), or open ground. */
 export type RouteEnd =
-  | { kind: 'node'; id: string }
-  | { kind: 'pipe'; id: string; at: PlanPoint }
-  | { kind: 'point'; at: PlanPoint };
+  { kind: 'node'; id: string } | { kind: 'pipe'; id: string; at: PlanPoint } | { kind: 'point'; at: PlanPoint };
 
 /** The next free id with a prefix: n1, n2, ... after the largest number in use. */
 export function nextId(prefix: string, used: Iterable<string>): string {
@@ -46,7 +44,10 @@ export function splitPipe(project: Project, pipeId: string, at: PlanPoint): { pr
   const dx = b.x - a.x;
   const dy = b.y - a.y;
   const t = Math.min(0.98, Math.max(0.02, ((at.x - a.x) * dx + (at.y - a.y) * dy) / (dx * dx + dy * dy || 1)));
-  const nodeId = nextId('n', project.nodes.map((n) => n.id));
+  const nodeId = nextId(
+    'n',
+    project.nodes.map((n) => n.id),
+  );
   const node: ProjectNode = {
     id: nodeId,
     x: round(a.x + t * dx),
@@ -59,7 +60,15 @@ export function splitPipe(project: Project, pipeId: string, at: PlanPoint): { pr
     ...(a.soil !== undefined ? { soil: a.soil } : {}),
   };
   const { label: _label, ...rest } = pipe;
-  const second: Pipe = { ...rest, id: nextId('p', project.pipes.map((p) => p.id)), from: nodeId, to: pipe.to };
+  const second: Pipe = {
+    ...rest,
+    id: nextId(
+      'p',
+      project.pipes.map((p) => p.id),
+    ),
+    from: nodeId,
+    to: pipe.to,
+  };
   return {
     nodeId,
     project: {
@@ -85,10 +94,17 @@ function freeNode(id: string, at: PlanPoint, like: ProjectNode | undefined): Pro
   };
 }
 
-function resolveEnd(project: Project, end: RouteEnd, like: ProjectNode | undefined): { project: Project; nodeId: string } {
+function resolveEnd(
+  project: Project,
+  end: RouteEnd,
+  like: ProjectNode | undefined,
+): { project: Project; nodeId: string } {
   if (end.kind === 'node') return { project, nodeId: end.id };
   if (end.kind === 'pipe') return splitPipe(project, end.id, end.at);
-  const id = nextId('n', project.nodes.map((n) => n.id));
+  const id = nextId(
+    'n',
+    project.nodes.map((n) => n.id),
+  );
   return { project: { ...project, nodes: [...project.nodes, freeNode(id, end.at, like)] }, nodeId: id };
 }
 
@@ -110,7 +126,13 @@ function pieceOfSplit(before: Project, after: Project, start: RouteEnd, end: Rou
  * Adds a drawn run: from its start (a node, a split pipe or a new point) through the vertices to its
  * end, one pipe per segment, all with the same pipe spec. A start on a node makes a branch there.
  */
-export function addRoute(project: Project, start: RouteEnd, vertices: readonly PlanPoint[], end: RouteEnd | null, spec: PipeSpec): Project {
+export function addRoute(
+  project: Project,
+  start: RouteEnd,
+  vertices: readonly PlanPoint[],
+  end: RouteEnd | null,
+  spec: PipeSpec,
+): Project {
   let doc = project;
   const first = resolveEnd(doc, start, undefined);
   doc = first.project;
@@ -124,7 +146,10 @@ export function addRoute(project: Project, start: RouteEnd, vertices: readonly P
     if (to.id === previous.id || Math.hypot(to.x - previous.x, to.y - previous.y) < 0.01) continue;
     doc = next.project;
     const pipe: Pipe = {
-      id: nextId('p', doc.pipes.map((p) => p.id)),
+      id: nextId(
+        'p',
+        doc.pipes.map((p) => p.id),
+      ),
       from: previous.id,
       to: to.id,
       outsideDiameter: spec.outsideDiameter,
@@ -140,16 +165,18 @@ export function addRoute(project: Project, start: RouteEnd, vertices: readonly P
   return doc;
 }
 
-
 /**
  * Moves nodes to new plan positions (m); pipes follow because they refer to the nodes. A move that
  * would put a pipe's two nodes on one point is refused (the document is returned unchanged).
  */
 export function moveNodes(project: Project, moves: ReadonlyMap<string, PlanPoint>): Project {
-  const nodes = project.nodes.map((n) => (moves.has(n.id) ? { ...n, x: round(moves.get(n.id)!.x), y: round(moves.get(n.id)!.y) } : n));
+  const nodes = project.nodes.map((n) =>
+    moves.has(n.id) ? { ...n, x: round(moves.get(n.id)!.x), y: round(moves.get(n.id)!.y) } : n,
+  );
   const byId = new Map(nodes.map((n) => [n.id, n]));
   const collapses = project.pipes.some((p) => {
-    const a = byId.get(p.from), b = byId.get(p.to);
+    const a = byId.get(p.from),
+      b = byId.get(p.to);
     const moved = moves.has(p.from) || moves.has(p.to);
     return moved && a && b && Math.hypot(a.x - b.x, a.y - b.y, a.elevation - b.elevation) < MIN_PIPE_LENGTH;
   });
@@ -161,14 +188,21 @@ export function moveNodes(project: Project, moves: ReadonlyMap<string, PlanPoint
  * straight pipe between the neighbours, as a designer taking a bend out of a route means. Returns the
  * project unchanged when the node is not such a joint.
  */
-function joinAcross(project: Project, nodeId: string, nodeIds: ReadonlySet<string>, pipeIds: ReadonlySet<string>): Project {
+function joinAcross(
+  project: Project,
+  nodeId: string,
+  nodeIds: ReadonlySet<string>,
+  pipeIds: ReadonlySet<string>,
+): Project {
   const meeting = project.pipes.filter((p) => p.from === nodeId || p.to === nodeId);
   if (meeting.length !== 2) return project;
   const [a, b] = meeting as [Pipe, Pipe];
   const farA = a.from === nodeId ? a.to : a.from;
   const farB = b.from === nodeId ? b.to : b.from;
-  const same = a.outsideDiameter === b.outsideDiameter && a.insideDiameter === b.insideDiameter && a.material === b.material;
-  if (!same || farA === farB || pipeIds.has(a.id) || pipeIds.has(b.id) || nodeIds.has(farA) || nodeIds.has(farB)) return project;
+  const same =
+    a.outsideDiameter === b.outsideDiameter && a.insideDiameter === b.insideDiameter && a.material === b.material;
+  if (!same || farA === farB || pipeIds.has(a.id) || pipeIds.has(b.id) || nodeIds.has(farA) || nodeIds.has(farB))
+    return project;
   // The joined pipe runs farA → farB and carries pipe a's flow in that sense.
   const flow = a.to === nodeId ? a.flow : -a.flow;
   const joined: Pipe = { ...a, from: farA, to: farB, flow };

@@ -52,6 +52,12 @@ export const viewSlice = (): ViewSlice => ({
   notice: null,
 });
 
-export const toolSlice = (pipeSpec: PipeSpec): ToolSlice => ({ tool: 'select', snapping: true, pipeSpec, draw: { phase: 'idle' }, dragPreview: null });
+export const toolSlice = (pipeSpec: PipeSpec): ToolSlice => ({
+  tool: 'select',
+  snapping: true,
+  pipeSpec,
+  draw: { phase: 'idle' },
+  dragPreview: null,
+});
 
 export const selectionSlice = (): SelectionSlice => ({ selection: EMPTY_SELECTION });

@@ -2,7 +2,16 @@ import { createStore, type StoreApi } from 'zustand/vanilla';
 import { temporal, type TemporalState } from 'zundo';
 import type { Project } from '@mainbrace/solver';
 import type { PipeSpec } from './documentEdits.js';
-import { projectSlice, selectionSlice, toolSlice, viewSlice, type ProjectSlice, type SelectionSlice, type ToolSlice, type ViewSlice } from './slices.js';
+import {
+  projectSlice,
+  selectionSlice,
+  toolSlice,
+  viewSlice,
+  type ProjectSlice,
+  type SelectionSlice,
+  type ToolSlice,
+  type ViewSlice,
+} from './slices.js';
 
 export { EMPTY_SELECTION } from './slices.js';
 export type { CaseView, DrawerTab, Selection, ToolName } from './slices.js';
@@ -19,10 +28,13 @@ export type AppStore = StoreApi<AppState> & { temporal: StoreApi<TemporalState<{
  */
 export function createAppStore(project: Project, pipeSpec: PipeSpec): AppStore {
   return createStore<AppState>()(
-    temporal((): AppState => ({ ...projectSlice(project), ...viewSlice(), ...toolSlice(pipeSpec), ...selectionSlice() }), {
-      partialize: (s) => ({ project: s.project }),
-      equality: (a, b) => a.project === b.project,
-      limit: 200,
-    }),
+    temporal(
+      (): AppState => ({ ...projectSlice(project), ...viewSlice(), ...toolSlice(pipeSpec), ...selectionSlice() }),
+      {
+        partialize: (s) => ({ project: s.project }),
+        equality: (a, b) => a.project === b.project,
+        limit: 200,
+      },
+    ),
   ) as AppStore;
 }

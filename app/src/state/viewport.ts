@@ -16,9 +16,15 @@ export interface Viewport {
   top: number;
 }
 
-export const toScreen = (v: Viewport, p: PlanPoint): ScreenPoint => ({ sx: (p.x - v.left) * v.scale, sy: (v.top - p.y) * v.scale });
+export const toScreen = (v: Viewport, p: PlanPoint): ScreenPoint => ({
+  sx: (p.x - v.left) * v.scale,
+  sy: (v.top - p.y) * v.scale,
+});
 
-export const toPlan = (v: Viewport, s: ScreenPoint): PlanPoint => ({ x: v.left + s.sx / v.scale, y: v.top - s.sy / v.scale });
+export const toPlan = (v: Viewport, s: ScreenPoint): PlanPoint => ({
+  x: v.left + s.sx / v.scale,
+  y: v.top - s.sy / v.scale,
+});
 
 /** Zooms by `factor` keeping the plan point under the screen point `at` where it is. */
 export function zoomAt(v: Viewport, at: ScreenPoint, factor: number): Viewport {
@@ -28,10 +34,18 @@ export function zoomAt(v: Viewport, at: ScreenPoint, factor: number): Viewport {
 }
 
 /** The same scale, moved so that a plan point sits in the middle of a width × height canvas. */
-export const centreOn = (v: Viewport, p: PlanPoint, width: number, height: number): Viewport => ({ scale: v.scale, left: p.x - width / 2 / v.scale, top: p.y + height / 2 / v.scale });
+export const centreOn = (v: Viewport, p: PlanPoint, width: number, height: number): Viewport => ({
+  scale: v.scale,
+  left: p.x - width / 2 / v.scale,
+  top: p.y + height / 2 / v.scale,
+});
 
 /** Moves the view by a screen-pixel drag. */
-export const panBy = (v: Viewport, dsx: number, dsy: number): Viewport => ({ ...v, left: v.left - dsx / v.scale, top: v.top + dsy / v.scale });
+export const panBy = (v: Viewport, dsx: number, dsy: number): Viewport => ({
+  ...v,
+  left: v.left - dsx / v.scale,
+  top: v.top + dsy / v.scale,
+});
 
 /** The view that shows every point with a margin, for a canvas of width × height pixels. */
 /** Margin around a fitted route, px: room for the longest thrust arrow (72 px) and its label. */
@@ -43,7 +57,10 @@ export function fitView(points: readonly PlanPoint[], width: number, height: num
     const scale = Math.max(0.05, Math.min(width, height) / 250);
     return { scale, left: -width / 2 / scale, top: height / 2 / scale };
   }
-  let minX = Infinity, maxX = -Infinity, minY = Infinity, maxY = -Infinity;
+  let minX = Infinity,
+    maxX = -Infinity,
+    minY = Infinity,
+    maxY = -Infinity;
   for (const p of points) {
     minX = Math.min(minX, p.x);
     maxX = Math.max(maxX, p.x);

@@ -54,7 +54,11 @@ function target(s: Extract<DrawState, { phase: 'drawing' }>, at: PlanPoint, hit:
 }
 
 const endOf = (hit: Hit, at: PlanPoint): RouteEnd =>
-  hit.kind === 'node' ? { kind: 'node', id: hit.id } : hit.kind === 'pipe' ? { kind: 'pipe', id: hit.id, at: hit.at } : { kind: 'point', at };
+  hit.kind === 'node'
+    ? { kind: 'node', id: hit.id }
+    : hit.kind === 'pipe'
+      ? { kind: 'pipe', id: hit.id, at: hit.at }
+      : { kind: 'point', at };
 
 /** One step of the draw tool: a pure function of its state and a plan-space event. */
 export function drawStep(state: DrawState, event: DrawEvent, ctx: DrawContext): DrawOutcome {
@@ -89,7 +93,9 @@ export function drawStep(state: DrawState, event: DrawEvent, ctx: DrawContext): 
 }
 
 /** The rubber-band segment while drawing, with its live length (m) and turn from the previous segment (°). */
-export function rubberBand(state: DrawState): { from: PlanPoint; to: PlanPoint; length: number; deflection: number | null } | null {
+export function rubberBand(
+  state: DrawState,
+): { from: PlanPoint; to: PlanPoint; length: number; deflection: number | null } | null {
   if (state.phase !== 'drawing' || !state.cursor) return null;
   const from = lastPoint(state);
   const to = state.cursor;

@@ -36,8 +36,13 @@ function positions(s: Extract<SelectState, { phase: 'dragging' }>): Map<string, 
 }
 
 /** One step of the select tool: a pure function of its state and a plan-space pointer event. */
-export function selectStep(state: SelectState, event: SelectEvent, ctx: SelectContext): { state: SelectState; effect?: SelectEffect } {
-  if (event.type === 'down') return { state: { phase: 'pressed', origin: event.at, hit: event.hit, additive: event.additive } };
+export function selectStep(
+  state: SelectState,
+  event: SelectEvent,
+  ctx: SelectContext,
+): { state: SelectState; effect?: SelectEffect } {
+  if (event.type === 'down')
+    return { state: { phase: 'pressed', origin: event.at, hit: event.hit, additive: event.additive } };
   if (state.phase === 'idle') return { state };
   if (event.type === 'move') {
     if (state.phase === 'pressed') {
@@ -49,10 +54,17 @@ export function selectStep(state: SelectState, event: SelectEvent, ctx: SelectCo
           const at = ctx.nodeAt(id);
           if (at) starts.set(id, at);
         }
-        const dragging: SelectState = { phase: 'dragging', origin: state.origin, ids, starts, offset: { x: event.at.x - state.origin.x, y: event.at.y - state.origin.y } };
+        const dragging: SelectState = {
+          phase: 'dragging',
+          origin: state.origin,
+          ids,
+          starts,
+          offset: { x: event.at.x - state.origin.x, y: event.at.y - state.origin.y },
+        };
         return { state: dragging, effect: { kind: 'preview', positions: positions(dragging) } };
       }
-      if (state.hit.kind === 'none') return { state: { phase: 'boxing', origin: state.origin, current: event.at, additive: state.additive } };
+      if (state.hit.kind === 'none')
+        return { state: { phase: 'boxing', origin: state.origin, current: event.at, additive: state.additive } };
       return { state };
     }
     if (state.phase === 'dragging') {
@@ -62,7 +74,12 @@ export function selectStep(state: SelectState, event: SelectEvent, ctx: SelectCo
     return { state: { ...state, current: event.at } };
   }
   // up
-  if (state.phase === 'pressed') return { state: { phase: 'idle' }, effect: { kind: 'select', hit: state.hit, additive: state.additive } };
-  if (state.phase === 'dragging') return { state: { phase: 'idle' }, effect: { kind: 'move', positions: positions(state) } };
-  return { state: { phase: 'idle' }, effect: { kind: 'box', from: state.origin, to: event.at, additive: state.additive } };
+  if (state.phase === 'pressed')
+    return { state: { phase: 'idle' }, effect: { kind: 'select', hit: state.hit, additive: state.additive } };
+  if (state.phase === 'dragging')
+    return { state: { phase: 'idle' }, effect: { kind: 'move', positions: positions(state) } };
+  return {
+    state: { phase: 'idle' },
+    effect: { kind: 'box', from: state.origin, to: event.at, additive: state.additive },
+  };
 }

@@ -14,7 +14,13 @@ export function generateRoute(fittings: number): ProjectInput {
   let count = 0;
   let i = 0;
   const node = (id: string, nx: number, ny: number, z: number, end?: 'tie-in') =>
-    nodes.push({ id, x: Math.round(nx * 100) / 100, y: Math.round(ny * 100) / 100, elevation: z, ...(end ? { end } : {}) });
+    nodes.push({
+      id,
+      x: Math.round(nx * 100) / 100,
+      y: Math.round(ny * 100) / 100,
+      elevation: z,
+      ...(end ? { end } : {}),
+    });
   node('n0', 0, 0, 100, 'tie-in');
   while (count < fittings) {
     i++;
@@ -24,7 +30,14 @@ export function generateRoute(fittings: number): ProjectInput {
     y += 40 * Math.sin(heading);
     const z = 100 + 3 * Math.sin(i / 7);
     node(`n${i}`, x, y, z);
-    pipes.push({ id: `p${i}`, from: `n${i - 1}`, to: `n${i}`, outsideDiameter: 0.326, insideDiameter: 0.3168, flow: 0.05 });
+    pipes.push({
+      id: `p${i}`,
+      from: `n${i - 1}`,
+      to: `n${i}`,
+      outsideDiameter: 0.326,
+      insideDiameter: 0.3168,
+      flow: 0.05,
+    });
     count++;
     if (i % 5 === 0 && count < fittings) {
       const bx = x + 15 * Math.cos(heading + Math.PI / 2);

@@ -11,7 +11,12 @@ const root = join(here, '../../..');
 const out = join(root, '.bench');
 mkdirSync(out, { recursive: true });
 
-await build({ input: join(here, 'solverBench.ts'), platform: 'node', output: { file: join(out, 'solverBench.mjs'), format: 'esm' }, logLevel: 'silent' });
+await build({
+  input: join(here, 'solverBench.ts'),
+  platform: 'node',
+  output: { file: join(out, 'solverBench.mjs'), format: 'esm' },
+  logLevel: 'silent',
+});
 execFileSync(process.execPath, [join(out, 'solverBench.mjs'), out], { stdio: 'inherit' });
 
 function median(cmd, args, repeats = 11) {
@@ -26,9 +31,22 @@ function median(cmd, args, repeats = 11) {
 }
 
 const file = join(out, 'route-10000.json');
-const bare = median(process.execPath, ['-e', `JSON.parse(require('fs').readFileSync(${JSON.stringify(file)}, 'utf8'))`]);
-const cli = median(process.execPath, [join(root, 'packages/solver/bin/mainbrace.mjs'), 'schedule', file, '--format', 'json']);
+const bare = median(process.execPath, [
+  '-e',
+  `JSON.parse(require('fs').readFileSync(${JSON.stringify(file)}, 'utf8'))`,
+]);
+const cli = median(process.execPath, [
+  join(root, 'packages/solver/bin/mainbrace.mjs'),
+  'schedule',
+  file,
+  '--format',
+  'json',
+]);
 const table = median(process.execPath, [join(root, 'packages/solver/bin/mainbrace.mjs'), 'schedule', file]);
 const validate = median(process.execPath, [join(root, 'packages/solver/bin/mainbrace.mjs'), 'validate', file]);
-console.log(`cli     10,000-node file: validate ${validate.toFixed(0)} ms (${(validate / bare).toFixed(2)}×), schedule as a table ${table.toFixed(0)} ms (${(table / bare).toFixed(2)}×)`);
-console.log(`cli     10,000-node file: schedule --format json ${cli.toFixed(0)} ms; bare node read + JSON.parse ${bare.toFixed(0)} ms; ratio ${(cli / bare).toFixed(2)} (goal ≤ 3)`);
+console.log(
+  `cli     10,000-node file: validate ${validate.toFixed(0)} ms (${(validate / bare).toFixed(2)}×), schedule as a table ${table.toFixed(0)} ms (${(table / bare).toFixed(2)}×)`,
+);
+console.log(
+  `cli     10,000-node file: schedule --format json ${cli.toFixed(0)} ms; bare node read + JSON.parse ${bare.toFixed(0)} ms; ratio ${(cli / bare).toFixed(2)} (goal ≤ 3)`,
+);

@@ -15,7 +15,13 @@ export { fittingGeometry, needsRestraint, type FittingKind, type FittingGeometry
 export { fittingTag, TAG_CODES } from './network/fittingTag.js';
 export { pressureAt, VACUUM_GAUGE_PRESSURE } from './pressure/nodePressure.js';
 export { momentumBalance, type ThrustParts } from './thrust/momentumBalance.js';
-export { fittingThrust, thrustEnvelope, worstPerCase, type CaseThrust, type ThrustEnvelope } from './thrust/fittingThrust.js';
+export {
+  fittingThrust,
+  thrustEnvelope,
+  worstPerCase,
+  type CaseThrust,
+  type ThrustEnvelope,
+} from './thrust/fittingThrust.js';
 export { analyse, analyseProject, calculationRecord, type Analysis, type FittingAnalysis } from './analysis/analyse.js';
 export type { CalcStep, RecordValue } from './analysis/calcRecord.js';
 export { nodeSoil, type Restraint } from './restraint/sizeRestraint.js';

@@ -15,14 +15,31 @@ beforeAll(() => {
   execFileSync('corepack', ['pnpm', '--filter', '@mainbrace/solver', 'build'], { cwd: root, stdio: 'ignore' });
 }, 60_000);
 
-interface FileNode { id: string; x: number; y: number; elevation: number; valve?: boolean }
-interface FilePipe { from: string; to: string; outsideDiameter: number; insideDiameter: number; flow?: number }
+interface FileNode {
+  id: string;
+  x: number;
+  y: number;
+  elevation: number;
+  valve?: boolean;
+}
+interface FilePipe {
+  from: string;
+  to: string;
+  outsideDiameter: number;
+  insideDiameter: number;
+  flow?: number;
+}
 
 /**
  * An independent oracle written here from brief.md, sharing no code with the solver:
  * F = −Σ (p·A_i + ρ·Q_i²/a_i)·n_i at each node, p = p_case + ρ·g·(datum − z), A on the OD.
  */
-function oracle(file: { nodes: FileNode[]; pipes: FilePipe[]; loadCases: { id: string; pressure: number; datumElevation?: number; flowFactor?: number }[]; water?: { density: number } }) {
+function oracle(file: {
+  nodes: FileNode[];
+  pipes: FilePipe[];
+  loadCases: { id: string; pressure: number; datumElevation?: number; flowFactor?: number }[];
+  water?: { density: number };
+}) {
   const rho = file.water?.density ?? 998.2;
   const at = new Map(file.nodes.map((n) => [n.id, n]));
   const out = new Map<string, Map<string, number[]>>();
@@ -38,7 +55,8 @@ function oracle(file: { nodes: FileNode[]; pipes: FilePipe[]; loadCases: { id: s
         const d = [far.x - n.x, far.y - n.y, far.elevation - n.elevation];
         const len = Math.hypot(d[0]!, d[1]!, d[2]!);
         const q = (pipe.flow ?? 0) * (c.flowFactor ?? 1);
-        const push = (p * Math.PI * pipe.outsideDiameter ** 2) / 4 + (rho * q * q) / ((Math.PI * pipe.insideDiameter ** 2) / 4);
+        const push =
+          (p * Math.PI * pipe.outsideDiameter ** 2) / 4 + (rho * q * q) / ((Math.PI * pipe.insideDiameter ** 2) / 4);
         for (let k = 0; k < 3; k++) f[k]! -= (push * d[k]!) / len;
       }
       perCase.set(c.id, f);
@@ -57,12 +75,17 @@ describe('the command line', () => {
     expect(schedule.project).toMatch(/Larkspur Rise/);
     expect(schedule.fittings.length).toBeGreaterThanOrEqual(14);
     const kinds = new Set(schedule.fittings.map((f: { kind: string }) => f.kind));
-    for (const k of ['bend', 'reducer', 'reducing-bend', 'tee', 'wye', 'cross', 'dead-end', 'valve']) expect(kinds).toContain(k);
+    for (const k of ['bend', 'reducer', 'reducing-bend', 'tee', 'wye', 'cross', 'dead-end', 'valve'])
+      expect(kinds).toContain(k);
     for (const f of schedule.fittings) {
       const mine = expected.get(f.node);
       if (!mine) continue; // the valve follows the closed-valve rule, checked in unit tests
       for (const c of f.cases) {
-        mine.get(c.case)!.forEach((v, k) => expect(Math.abs(c.total[k] - v)).toBeLessThan(1e-6 * Math.hypot(...mine.get(c.case)!) + 1e-6));
+        mine
+          .get(c.case)!
+          .forEach((v, k) =>
+            expect(Math.abs(c.total[k] - v)).toBeLessThan(1e-6 * Math.hypot(...mine.get(c.case)!) + 1e-6),
+          );
       }
       const r = f.restraint;
       expect(r.block !== null || r.anchor !== null || r.restrainedLength !== null).toBe(true);

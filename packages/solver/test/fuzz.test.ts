@@ -8,7 +8,9 @@ import { scheduleOf } from '../src/schedule/scheduleRows.js';
 import { randomRoute } from './randomRoutes.js';
 import { route } from './projectBuilder.js';
 
-const demo = JSON.parse(readFileSync(fileURLToPath(new URL('../../../public/demo/larkspur-rise.json', import.meta.url)), 'utf8'));
+const demo = JSON.parse(
+  readFileSync(fileURLToPath(new URL('../../../public/demo/larkspur-rise.json', import.meta.url)), 'utf8'),
+);
 const runs = { seed: 424242, numRuns: 300 };
 
 /** Every refusal names where: a path into the file, or the line and column of broken JSON. */
@@ -38,11 +40,17 @@ function mutate(doc: unknown, path: number[], value: unknown): unknown {
 
 describe('the project-file parser under random and mutated input (fast-check, fixed seed)', () => {
   it('never throws on arbitrary JSON values, and every refusal names a path', () => {
-    fc.assert(fc.property(fc.jsonValue(), (v) => expectNamedRefusal(parseProject(v))), runs);
+    fc.assert(
+      fc.property(fc.jsonValue(), (v) => expectNamedRefusal(parseProject(v))),
+      runs,
+    );
   });
 
   it('never throws on arbitrary text, and names the line and column of broken JSON', () => {
-    fc.assert(fc.property(fc.string(), (t) => expectNamedRefusal(parseProjectText(t))), runs);
+    fc.assert(
+      fc.property(fc.string(), (t) => expectNamedRefusal(parseProjectText(t))),
+      runs,
+    );
   });
 
   it('never throws on the demo with one value replaced anywhere, and a refusal names a path', () => {
@@ -82,12 +90,21 @@ describe('schedules of random routes', () => {
         (r, o) => {
           const project = route({
             cases: [
-              { id: 'w', pressure: o.pressure, ...(o.datum !== undefined ? { datumElevation: o.datum } : {}), flowFactor: 1 },
+              {
+                id: 'w',
+                pressure: o.pressure,
+                ...(o.datum !== undefined ? { datumElevation: o.datum } : {}),
+                flowFactor: 1,
+              },
               { id: 't', pressure: o.pressure * 1.5, datumElevation: 90, flowFactor: 0 },
             ],
             soils: [{ id: 's', bearing: o.bearing, unitWeight: 18000, frictionAngle: o.phi, cohesion: o.cohesion }],
             design: { groundwaterElevation: o.gw },
-            nodes: r.nodes.map((n, i) => ({ ...n, cover: o.cover, ...(o.joints && i % 2 ? { restraint: 'joints' } : {}) })),
+            nodes: r.nodes.map((n, i) => ({
+              ...n,
+              cover: o.cover,
+              ...(o.joints && i % 2 ? { restraint: 'joints' } : {}),
+            })),
             pipes: r.pipes,
           });
           expect(finiteEverywhere(scheduleOf(analyse(project)))).toBe(true);

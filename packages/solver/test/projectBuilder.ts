@@ -4,7 +4,10 @@ import { INCH, PSI, PSF } from '../src/units/conversions.js';
 
 /** Test fixtures: a valid project from the few fields a test cares about. */
 export type NodeSpec = { id: string; x: number; y: number; z?: number } & Record<string, unknown>;
-export type PipeSpec = { id?: string; from: string; to: string; od: number; id_?: number; flow?: number } & Record<string, unknown>;
+export type PipeSpec = { id?: string; from: string; to: string; od: number; id_?: number; flow?: number } & Record<
+  string,
+  unknown
+>;
 
 export interface RouteSpec {
   nodes: NodeSpec[];

@@ -75,11 +75,16 @@ describe('invariants of the momentum balance on random routes (fast-check, fixed
 
   it('thrust grows with pressure at every fitting', () => {
     fc.assert(
-      fc.property(randomRoute(), fc.integer({ min: 100, max: 2000 }), fc.integer({ min: 1, max: 1000 }), (r, kpa, more) => {
-        const low = allForces(r, kpa * 1000);
-        const high = allForces(r, (kpa + more) * 1000);
-        for (const [id, f] of low) expect(Math.hypot(...high.get(id)!)).toBeGreaterThanOrEqual(Math.hypot(...f));
-      }),
+      fc.property(
+        randomRoute(),
+        fc.integer({ min: 100, max: 2000 }),
+        fc.integer({ min: 1, max: 1000 }),
+        (r, kpa, more) => {
+          const low = allForces(r, kpa * 1000);
+          const high = allForces(r, (kpa + more) * 1000);
+          for (const [id, f] of low) expect(Math.hypot(...high.get(id)!)).toBeGreaterThanOrEqual(Math.hypot(...f));
+        },
+      ),
       runs,
     );
   });
@@ -110,9 +115,14 @@ describe('display units', () => {
   it('every dimension converts to display units and back to the same SI value', () => {
     const dims = Object.keys(DISPLAY_UNITS.si) as Dimension[];
     fc.assert(
-      fc.property(fc.constantFrom(...dims), fc.constantFrom('si' as const, 'us' as const), fc.double({ min: -1e9, max: 1e9, noNaN: true }), (dim, sys, v) => {
-        expectClose(fromDisplay(toDisplay(v, dim, sys), dim, sys), v, 1e-12, 1e-12);
-      }),
+      fc.property(
+        fc.constantFrom(...dims),
+        fc.constantFrom('si' as const, 'us' as const),
+        fc.double({ min: -1e9, max: 1e9, noNaN: true }),
+        (dim, sys, v) => {
+          expectClose(fromDisplay(toDisplay(v, dim, sys), dim, sys), v, 1e-12, 1e-12);
+        },
+      ),
       runs,
     );
   });

@@ -4,7 +4,13 @@ import { legsByNode, type Leg } from '../network/legs.js';
 import { fittingGeometry, needsRestraint, type FittingGeometry } from '../network/fittingKind.js';
 import { fittingTag } from '../network/fittingTag.js';
 import { chainage } from '../network/chainage.js';
-import { fittingThrust, thrustEnvelope, worstPerCase, type CaseThrust, type ThrustEnvelope } from '../thrust/fittingThrust.js';
+import {
+  fittingThrust,
+  thrustEnvelope,
+  worstPerCase,
+  type CaseThrust,
+  type ThrustEnvelope,
+} from '../thrust/fittingThrust.js';
 import { VACUUM_GAUGE_PRESSURE } from '../pressure/nodePressure.js';
 import { caseLabel } from '../model/caseLabel.js';
 import { waterWeightInFitting } from '../thrust/waterWeight.js';
@@ -74,7 +80,13 @@ function flowImbalance(legs: readonly Leg[], geometry: FittingGeometry): ((p: Pr
       : `The flows at this node do not balance (${formatSi(Math.abs(net), 'flow', p.units)} more ${net > 0 ? 'leaves than arrives' : 'arrives than leaves'}); check the pipes' flows.`;
 }
 
-function analyseFitting(project: Project, node: ProjectNode, legs: Leg[], geometry: FittingGeometry, at: number): FittingAnalysis {
+function analyseFitting(
+  project: Project,
+  node: ProjectNode,
+  legs: Leg[],
+  geometry: FittingGeometry,
+  at: number,
+): FittingAnalysis {
   const states = fittingThrust(node, geometry.kind, legs, project.loadCases, project.water.density);
   const cases = worstPerCase(states);
   const envelope = thrustEnvelope(states);
@@ -84,9 +96,13 @@ function analyseFitting(project: Project, node: ProjectNode, legs: Leg[], geomet
   const unbalanced = flowImbalance(legs, geometry);
   if (unbalanced) warnings.push(unbalanced(project));
   if (node.valve && geometry.kind === 'valve') {
-    warnings.push('Valve: sized open, and closed with the pressure on either side; its restraint holds the thrust both ways along the line.');
+    warnings.push(
+      'Valve: sized open, and closed with the pressure on either side; its restraint holds the thrust both ways along the line.',
+    );
   } else if (node.valve) {
-    warnings.push('The valve flag applies only where two pipes meet; this node was sized as its fitting without a closed valve.');
+    warnings.push(
+      'The valve flag applies only where two pipes meet; this node was sized as its fitting without a closed valve.',
+    );
   }
   if (norm(envelope.governing.total) === 0) warnings.push('No thrust at this fitting in any case.');
   return {

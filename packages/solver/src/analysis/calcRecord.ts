@@ -21,10 +21,5 @@ export interface CalcStep {
   reference: string;
 }
 
-export const value = (
-  symbol: string,
-  label: string,
-  v: number,
-  dimension: Dimension,
-  source?: string,
-): RecordValue => (source === undefined ? { symbol, label, value: v, dimension } : { symbol, label, value: v, dimension, source });
+export const value = (symbol: string, label: string, v: number, dimension: Dimension, source?: string): RecordValue =>
+  source === undefined ? { symbol, label, value: v, dimension } : { symbol, label, value: v, dimension, source };

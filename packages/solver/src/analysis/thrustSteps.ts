@@ -4,13 +4,15 @@ import type { Project, ProjectNode } from '../model/projectSchema.js';
 import type { CaseThrust } from '../thrust/fittingThrust.js';
 import { value, type CalcStep, type RecordValue } from './calcRecord.js';
 
-const MOMENTUM = 'Steady momentum balance on the fitting (linear momentum equation; e.g. White, "Fluid Mechanics", ch. 3)';
+const MOMENTUM =
+  'Steady momentum balance on the fitting (linear momentum equation; e.g. White, "Fluid Mechanics", ch. 3)';
 
 /** The calculation record of the governing case's thrust: pressure at the node, then the balance. */
 export function thrustSteps(
   project: Project,
   node: ProjectNode,
-  legs: readonly Leg[],   governing: CaseThrust,
+  legs: readonly Leg[],
+  governing: CaseThrust,
 ): CalcStep[] {
   const loadCase = project.loadCases.find((c) => c.id === governing.caseId)!;
   const steps: CalcStep[] = [];
@@ -31,15 +33,29 @@ export function thrustSteps(
   }
   const flowing = governing.closedAgainst === null;
   const areaInputs: RecordValue[] = legs.map((l) =>
-    value(`A(${l.pipe.id})`, `thrust area of ${l.pipe.id} (${project.design.thrustArea} diameter)`, l.thrustArea, 'area', 'pipe'),
+    value(
+      `A(${l.pipe.id})`,
+      `thrust area of ${l.pipe.id} (${project.design.thrustArea} diameter)`,
+      l.thrustArea,
+      'area',
+      'pipe',
+    ),
   );
   const flowInputs: RecordValue[] = legs.flatMap((l) => [
     value(`a(${l.pipe.id})`, `flow area of ${l.pipe.id}`, l.flowArea, 'area', 'pipe'),
-    value(`Q(${l.pipe.id})`, `outflow along ${l.pipe.id} × flow factor`, flowing ? l.outflow * loadCase.flowFactor : 0, 'flow', flowing ? 'pipe × case' : 'valve closed'),
+    value(
+      `Q(${l.pipe.id})`,
+      `outflow along ${l.pipe.id} × flow factor`,
+      flowing ? l.outflow * loadCase.flowFactor : 0,
+      'flow',
+      flowing ? 'pipe × case' : 'valve closed',
+    ),
   ]);
   steps.push({
     title: `Static thrust, case "${caseName}"`,
-    formula: governing.closedAgainst ? `F_s = −p·A·n on the side of ${governing.closedAgainst} (valve closed)` : 'F_s = −Σ p·A_i·n_i',
+    formula: governing.closedAgainst
+      ? `F_s = −p·A·n on the side of ${governing.closedAgainst} (valve closed)`
+      : 'F_s = −Σ p·A_i·n_i',
     inputs: [value('p', 'gauge pressure at the node', governing.pressure, 'pressure', 'computed'), ...areaInputs],
     result: value('|F_s|', 'static thrust', norm(governing.static), 'force', 'computed'),
     reference: MOMENTUM,

@@ -12,8 +12,11 @@ export function explainText(project: Project, f: FittingAnalysis, units: UnitSys
   const out = [`${f.tag} (node ${f.node.id}) — ${f.geometry.kind}`, ''];
   calculationRecord(project, f).forEach((step, i) => {
     out.push(`${i + 1}. ${step.title}`, `   ${step.formula}`);
-    for (const v of step.inputs) out.push(`     ${v.symbol} = ${shown(v, units)}  ${v.label}${v.source ? ` [${v.source}]` : ''}`);
-    out.push(`   → ${step.result.symbol} = ${shown(step.result, units)}  ${step.result.label}${step.result.source && step.result.source !== 'computed' ? ` (${step.result.source})` : ''}`);
+    for (const v of step.inputs)
+      out.push(`     ${v.symbol} = ${shown(v, units)}  ${v.label}${v.source ? ` [${v.source}]` : ''}`);
+    out.push(
+      `   → ${step.result.symbol} = ${shown(step.result, units)}  ${step.result.label}${step.result.source && step.result.source !== 'computed' ? ` (${step.result.source})` : ''}`,
+    );
     out.push(`   Source: ${step.reference}`, '');
   });
   if (f.warnings.length) out.push('Warnings', ...f.warnings.map((w) => `  - ${w}`), '');

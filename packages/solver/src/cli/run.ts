@@ -71,8 +71,12 @@ export function runCli(argv: readonly string[], io: CliIo): number {
     if (args.command === 'validate') {
       // Naming the fittings is enough here; sizing them is the schedule's work.
       const legs = legsByNode(project);
-      const fittings = project.nodes.filter((n) => needsRestraint(fittingGeometry(n, legs.get(n.id) ?? []).kind)).length;
-      io.out(`${args.positional[0]}: valid — ${project.nodes.length} nodes, ${project.pipes.length} pipes, ${fittings} fittings to restrain\n`);
+      const fittings = project.nodes.filter((n) =>
+        needsRestraint(fittingGeometry(n, legs.get(n.id) ?? []).kind),
+      ).length;
+      io.out(
+        `${args.positional[0]}: valid — ${project.nodes.length} nodes, ${project.pipes.length} pipes, ${fittings} fittings to restrain\n`,
+      );
       return 0;
     }
     const analysis = analyse(project);
@@ -83,7 +87,11 @@ export function runCli(argv: readonly string[], io: CliIo): number {
       const fitting = analysis.byNode.get(id);
       if (!fitting) {
         const known = project.nodes.some((n) => n.id === id);
-        io.err(known ? `node "${id}" needs no restraint (a straight joint, a tie-in or a free node)\n` : `no node "${id}" in ${args.positional[0]}\n`);
+        io.err(
+          known
+            ? `node "${id}" needs no restraint (a straight joint, a tie-in or a free node)\n`
+            : `no node "${id}" in ${args.positional[0]}\n`,
+        );
         return 2;
       }
       io.out(explainText(project, fitting, units));

@@ -30,26 +30,56 @@ export function crossCheck(p: Project, ctx: Ctx): void {
 
   const soilIds = new Set(p.soils.map((s) => s.id));
   if (p.defaultSoil !== undefined && !soilIds.has(p.defaultSoil)) {
-    ctx.addIssue({ code: 'custom', path: ['defaultSoil'], message: `must name a soil in "soils" (no soil "${p.defaultSoil}")` });
+    ctx.addIssue({
+      code: 'custom',
+      path: ['defaultSoil'],
+      message: `must name a soil in "soils" (no soil "${p.defaultSoil}")`,
+    });
   }
   const nodes = new Map(p.nodes.map((n) => [n.id, n]));
   p.nodes.forEach((n, i) => {
     if (n.soil !== undefined && !soilIds.has(n.soil)) {
-      ctx.addIssue({ code: 'custom', path: ['nodes', i, 'soil'], message: `must name a soil in "soils" (no soil "${n.soil}")` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['nodes', i, 'soil'],
+        message: `must name a soil in "soils" (no soil "${n.soil}")`,
+      });
     }
   });
   p.pipes.forEach((pipe, i) => {
     const a = nodes.get(pipe.from);
     const b = nodes.get(pipe.to);
-    if (!a) ctx.addIssue({ code: 'custom', path: ['pipes', i, 'from'], message: `must name a node in "nodes" (no node "${pipe.from}")` });
-    if (!b) ctx.addIssue({ code: 'custom', path: ['pipes', i, 'to'], message: `must name a node in "nodes" (no node "${pipe.to}")` });
+    if (!a)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['pipes', i, 'from'],
+        message: `must name a node in "nodes" (no node "${pipe.from}")`,
+      });
+    if (!b)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['pipes', i, 'to'],
+        message: `must name a node in "nodes" (no node "${pipe.to}")`,
+      });
     if (pipe.from === pipe.to) {
-      ctx.addIssue({ code: 'custom', path: ['pipes', i, 'to'], message: 'must differ from "from" (a pipe joins two nodes)' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['pipes', i, 'to'],
+        message: 'must differ from "from" (a pipe joins two nodes)',
+      });
     } else if (a && b && norm([a.x - b.x, a.y - b.y, a.elevation - b.elevation]) < MIN_PIPE_LENGTH) {
-      ctx.addIssue({ code: 'custom', path: ['pipes', i, 'to'], message: `must be at another point than "from" (nodes ${a.id} and ${b.id} coincide)` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['pipes', i, 'to'],
+        message: `must be at another point than "from" (nodes ${a.id} and ${b.id} coincide)`,
+      });
     }
     if (pipe.insideDiameter >= pipe.outsideDiameter) {
-      ctx.addIssue({ code: 'custom', path: ['pipes', i, 'insideDiameter'], message: `must be less than outsideDiameter (${pipe.outsideDiameter} m)` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['pipes', i, 'insideDiameter'],
+        message: `must be less than outsideDiameter (${pipe.outsideDiameter} m)`,
+      });
     }
   });
 }

@@ -26,7 +26,12 @@ describe('reading a project file', () => {
     if (!r.ok) return;
     expect(r.project.units).toBe('si');
     expect(r.project.water.density).toBe(998.2);
-    expect(r.project.design).toMatchObject({ thrustArea: 'outside', bearingSafetyFactor: 1.5, concreteUnitWeight: 23600, groundwaterElevation: null });
+    expect(r.project.design).toMatchObject({
+      thrustArea: 'outside',
+      bearingSafetyFactor: 1.5,
+      concreteUnitWeight: 23600,
+      groundwaterElevation: null,
+    });
     expect(r.project.nodes[0]).toMatchObject({ cover: 1.2, end: 'cap', valve: false });
     expect(r.project.loadCases[0]?.flowFactor).toBe(1);
   });

@@ -24,7 +24,8 @@ function describe(value: unknown): string {
   if (value === null) return 'null';
   if (Array.isArray(value)) return 'a list';
   if (typeof value === 'number' && !Number.isFinite(value)) return String(value);
-  if (typeof value === 'string') return `the text ${JSON.stringify(value.length > 30 ? value.slice(0, 30) + '…' : value)}`;
+  if (typeof value === 'string')
+    return `the text ${JSON.stringify(value.length > 30 ? value.slice(0, 30) + '…' : value)}`;
   return `a ${typeof value}`;
 }
 

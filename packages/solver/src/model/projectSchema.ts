@@ -5,10 +5,7 @@ import { z } from 'zod';
  * angles are degrees. Optional fields receive their documented defaults on parse.
  */
 
-const id = z
-  .string()
-  .min(1, { error: 'must be a non-empty id' })
-  .max(64, { error: 'must be at most 64 characters' });
+const id = z.string().min(1, { error: 'must be a non-empty id' }).max(64, { error: 'must be at most 64 characters' });
 const finite = () => z.number().finite();
 const positive = () => finite().gt(0, { error: 'must be greater than 0' });
 const nonNegative = () => finite().gte(0, { error: 'must be 0 or more' });
@@ -31,7 +28,10 @@ export const designSchema = z.strictObject({
   upliftSafetyFactor: safetyFactor().default(1.5),
   restraintSafetyFactor: safetyFactor().default(1.5),
   /** N/m³; 23,600 ≈ 150 lb/ft³ normal-weight concrete (common practice); at least 15 kN/m³ so that it sinks */
-  concreteUnitWeight: finite().gte(15000, { error: 'must be at least 15,000 N/m³ (concrete heavier than water)' }).lte(40000, { error: 'must be at most 40,000 N/m³' }).default(23600),
+  concreteUnitWeight: finite()
+    .gte(15000, { error: 'must be at least 15,000 N/m³ (concrete heavier than water)' })
+    .lte(40000, { error: 'must be at most 40,000 N/m³' })
+    .default(23600),
   /** m, or null when groundwater lies below every block */
   groundwaterElevation: finite().nullable().default(null),
   /** m, thickness of a bearing block from the fitting to its bearing face (concrete volume estimate) */
@@ -59,7 +59,10 @@ export const soilSchema = z.strictObject({
   /** Pa, allowable horizontal bearing of undisturbed soil; 0 for muck/peat */
   bearing: nonNegative(),
   /** N/m³; at least that of water, so that a submerged soil still weighs something */
-  unitWeight: finite().gte(10000, { error: 'must be at least 10,000 N/m³ (a soil heavier than water)' }).lte(30000, { error: 'must be at most 30,000 N/m³' }).default(18000),
+  unitWeight: finite()
+    .gte(10000, { error: 'must be at least 10,000 N/m³ (a soil heavier than water)' })
+    .lte(30000, { error: 'must be at most 30,000 N/m³' })
+    .default(18000),
   /** degrees */
   frictionAngle: finite().gte(0, { error: 'must be 0 or more' }).lt(60, { error: 'must be less than 60' }).default(30),
   /** Pa */
@@ -71,7 +74,10 @@ export const soilSchema = z.strictObject({
   /** m, least cover over the pipe for which the bearing value holds */
   minCover: nonNegative().optional(),
   /** pipe-to-soil friction angle as a fraction of the soil's, f_φ in δ = f_φ·φ (restrained joints) */
-  pipeFrictionRatio: finite().gt(0, { error: 'must be greater than 0' }).lte(1, { error: 'must be at most 1' }).optional(),
+  pipeFrictionRatio: finite()
+    .gt(0, { error: 'must be greater than 0' })
+    .lte(1, { error: 'must be at most 1' })
+    .optional(),
   /** pipe-to-soil adhesion as a fraction of the soil's cohesion, f_c in C_p = f_c·C (restrained joints) */
   pipeAdhesionRatio: finite().gte(0, { error: 'must be 0 or more' }).lte(1, { error: 'must be at most 1' }).optional(),
   /** where the values come from, shown beside the soil */
@@ -111,7 +117,12 @@ export const pipeSchema = z.strictObject({
   series: z.string().max(40).optional(),
   nominal: z.string().max(20).optional(),
   /** laying condition 1–5 of AWWA C150/C151, for the restrained-joint bearing term */
-  trenchType: z.number().int({ error: 'must be a whole number 1 to 5' }).gte(1, { error: 'must be 1 to 5' }).lte(5, { error: 'must be 1 to 5' }).optional(),
+  trenchType: z
+    .number()
+    .int({ error: 'must be a whole number 1 to 5' })
+    .gte(1, { error: 'must be 1 to 5' })
+    .lte(5, { error: 'must be 1 to 5' })
+    .optional(),
   /** polyethylene encasement (AWWA C105) lowers pipe–soil friction */
   encasement: z.enum(ENCASEMENTS).optional(),
   /** N/m, pipe self-weight; defaults to the material density times the wall area */

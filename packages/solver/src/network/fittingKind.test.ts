@@ -2,7 +2,8 @@ import { describe, it, expect } from 'vitest';
 import { analyse } from '../analysis/analyse.js';
 import { route } from '../../test/projectBuilder.js';
 
-const kinds = (p: ReturnType<typeof route>) => Object.fromEntries(analyse(p).fittings.map((f) => [f.node.id, f.geometry.kind]));
+const kinds = (p: ReturnType<typeof route>) =>
+  Object.fromEntries(analyse(p).fittings.map((f) => [f.node.id, f.geometry.kind]));
 
 describe('which fitting stands at each node', () => {
   it('names bends, dead ends and leaves straight joints out (project-format.md: under 0.5°)', () => {
@@ -46,14 +47,25 @@ describe('which fitting stands at each node', () => {
   it('calls a square branch a tee, a 45° branch a wye and four pipes a cross', () => {
     const p = route({
       nodes: [
-        { id: 'w0', x: -10, y: 0, end: 'tie-in' }, { id: 't', x: 0, y: 0 }, { id: 'y', x: 20, y: 0 }, { id: 'x', x: 40, y: 0 },
-        { id: 'x1', x: 50, y: 0, end: 'tie-in' }, { id: 'tb', x: 0, y: 10, end: 'tie-in' },
-        { id: 'yb', x: 30, y: 10, end: 'tie-in' }, { id: 'xn', x: 40, y: 10, end: 'tie-in' }, { id: 'xs', x: 40, y: -10, end: 'tie-in' },
+        { id: 'w0', x: -10, y: 0, end: 'tie-in' },
+        { id: 't', x: 0, y: 0 },
+        { id: 'y', x: 20, y: 0 },
+        { id: 'x', x: 40, y: 0 },
+        { id: 'x1', x: 50, y: 0, end: 'tie-in' },
+        { id: 'tb', x: 0, y: 10, end: 'tie-in' },
+        { id: 'yb', x: 30, y: 10, end: 'tie-in' },
+        { id: 'xn', x: 40, y: 10, end: 'tie-in' },
+        { id: 'xs', x: 40, y: -10, end: 'tie-in' },
       ],
       pipes: [
-        { from: 'w0', to: 't', od: 0.326 }, { from: 't', to: 'y', od: 0.326 }, { from: 'y', to: 'x', od: 0.326 },
-        { from: 'x', to: 'x1', od: 0.326 }, { from: 't', to: 'tb', od: 0.17 }, { from: 'y', to: 'yb', od: 0.17 },
-        { from: 'x', to: 'xn', od: 0.222 }, { from: 'x', to: 'xs', od: 0.17 },
+        { from: 'w0', to: 't', od: 0.326 },
+        { from: 't', to: 'y', od: 0.326 },
+        { from: 'y', to: 'x', od: 0.326 },
+        { from: 'x', to: 'x1', od: 0.326 },
+        { from: 't', to: 'tb', od: 0.17 },
+        { from: 'y', to: 'yb', od: 0.17 },
+        { from: 'x', to: 'xn', od: 0.222 },
+        { from: 'x', to: 'xs', od: 0.17 },
       ],
     });
     const a = analyse(p);
@@ -65,8 +77,15 @@ describe('which fitting stands at each node', () => {
   it('splits a vertical bend into its plan and slope changes', () => {
     // level along +x, then rising 1 in 1 while turning 90° in plan: plan change 90°, slope change +45°
     const p = route({
-      nodes: [{ id: 'n1', x: 0, y: 0, z: 100 }, { id: 'n2', x: 10, y: 0, z: 100 }, { id: 'n3', x: 10, y: 10, z: 110 }],
-      pipes: [{ from: 'n1', to: 'n2', od: 0.326 }, { from: 'n2', to: 'n3', od: 0.326 }],
+      nodes: [
+        { id: 'n1', x: 0, y: 0, z: 100 },
+        { id: 'n2', x: 10, y: 0, z: 100 },
+        { id: 'n3', x: 10, y: 10, z: 110 },
+      ],
+      pipes: [
+        { from: 'n1', to: 'n2', od: 0.326 },
+        { from: 'n2', to: 'n3', od: 0.326 },
+      ],
     });
     const g = analyse(p).byNode.get('n2')!.geometry;
     expect(g.horizontalDeflection).toBeCloseTo(90, 9);

@@ -108,4 +108,3 @@ export function fittingGeometry(node: ProjectNode, legs: readonly Leg[]): Fittin
 /** True for the kinds the schedule lists (project-format.md: all but straight joints and tie-ins). */
 export const needsRestraint = (kind: FittingKind): boolean =>
   kind !== 'straight' && kind !== 'tie-in' && kind !== 'none';
-

@@ -42,7 +42,9 @@ export function legsByNode(project: Project): Map<string, Leg[]> {
     const uy = dy / length;
     const uz = dz / length;
     legs.get(a.id)!.push({ pipe, far: b, direction: [ux, uy, uz], length, thrustArea, flowArea, outflow: pipe.flow });
-    legs.get(b.id)!.push({ pipe, far: a, direction: [-ux, -uy, -uz], length, thrustArea, flowArea, outflow: -pipe.flow });
+    legs
+      .get(b.id)!
+      .push({ pipe, far: a, direction: [-ux, -uy, -uz], length, thrustArea, flowArea, outflow: -pipe.flow });
   }
   return legs;
 }

@@ -10,7 +10,7 @@ describe('pressure at a node from the case datum', () => {
   });
 
   it('water of 62.4 lb/ft³ adds 0.4333 psi per foot of depth (domain reference §3.3)', () => {
-    const density = 62.4 * 0.45359237 / FOOT ** 3; // lb/ft³ → kg/m³ (NIST SP 811)
+    const density = (62.4 * 0.45359237) / FOOT ** 3; // lb/ft³ → kg/m³ (NIST SP 811)
     const p = pressureAt({ id: 't', pressure: 0, datumElevation: FOOT, flowFactor: 0 }, 0, density);
     expectClose(p / PSI, 0.4333, 2e-4);
   });
@@ -23,6 +23,9 @@ describe('pressure at a node from the case datum', () => {
   it('never goes below the vapour pressure: −98.99 kPa gauge (101.325 kPa atmosphere, 2.339 kPa vapour at 20 °C)', () => {
     expect(VACUUM_GAUGE_PRESSURE).toBe(-98_986);
     expect(pressureAt({ id: 'd', pressure: 0, datumElevation: 100, flowFactor: 0 }, 150, 998.2)).toBe(-98_986);
-    expect(pressureAt({ id: 'd', pressure: 0, datumElevation: 100, flowFactor: 0 }, 105, 998.2)).toBeCloseTo(-998.2 * 9.80665 * 5, 6);
+    expect(pressureAt({ id: 'd', pressure: 0, datumElevation: 100, flowFactor: 0 }, 105, 998.2)).toBeCloseTo(
+      -998.2 * 9.80665 * 5,
+      6,
+    );
   });
 });

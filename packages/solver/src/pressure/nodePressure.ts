@@ -18,5 +18,8 @@ export const VACUUM_GAUGE_PRESSURE = 2339 - 101325;
  */
 export function pressureAt(loadCase: LoadCase, elevation: number, density: number): number {
   if (loadCase.datumElevation === undefined) return Math.max(loadCase.pressure, VACUUM_GAUGE_PRESSURE);
-  return Math.max(VACUUM_GAUGE_PRESSURE, loadCase.pressure + density * STANDARD_GRAVITY * (loadCase.datumElevation - elevation));
+  return Math.max(
+    VACUUM_GAUGE_PRESSURE,
+    loadCase.pressure + density * STANDARD_GRAVITY * (loadCase.datumElevation - elevation),
+  );
 }

@@ -13,7 +13,10 @@ describe('field-test pressure from the working pressure and the route elevations
     const p = route({
       density: DENSITY,
       cases: [{ id: 'w', pressure: 100 * PSI, datumElevation: gauge }],
-      nodes: [{ id: 'a', x: 0, y: 0, z: gauge }, { id: 'b', x: 300, y: 0, z: gauge + 20 * FOOT }],
+      nodes: [
+        { id: 'a', x: 0, y: 0, z: gauge },
+        { id: 'b', x: 300, y: 0, z: gauge + 20 * FOOT },
+      ],
       pipes: [{ from: 'a', to: 'b', od: 0.33 }],
     });
     const r = proposeTestPressure(p, p.loadCases[0]!, 'awwa-c600', gauge)!;
@@ -28,7 +31,10 @@ describe('field-test pressure from the working pressure and the route elevations
     const p = route({
       density: DENSITY,
       cases: [{ id: 'w', pressure: 40 * PSI, datumElevation: 0 }],
-      nodes: [{ id: 'a', x: 0, y: 0, z: 0 }, { id: 'b', x: 300, y: 0, z: 60 * FOOT }],
+      nodes: [
+        { id: 'a', x: 0, y: 0, z: 0 },
+        { id: 'b', x: 300, y: 0, z: 60 * FOOT },
+      ],
       pipes: [{ from: 'a', to: 'b', od: 0.33 }],
     });
     // gauge at the low point: 1.5 × 40 = 60 psi; high point works at 40 − 26.0 = 14.0 psi → 1.25 × 14.0 + 26.0 = 43.5 psi
@@ -37,18 +43,28 @@ describe('field-test pressure from the working pressure and the route elevations
     const steep = route({
       density: DENSITY,
       cases: [{ id: 'w', pressure: 40 * PSI, datumElevation: 60 * FOOT }],
-      nodes: [{ id: 'a', x: 0, y: 0, z: 0 }, { id: 'b', x: 300, y: 0, z: 60 * FOOT }],
+      nodes: [
+        { id: 'a', x: 0, y: 0, z: 0 },
+        { id: 'b', x: 300, y: 0, z: 60 * FOOT },
+      ],
       pipes: [{ from: 'a', to: 'b', od: 0.33 }],
     });
     // working 40 psi at the top, 66.0 psi at the bottom gauge: 1.5 × 66.0 = 99.0; 1.25 × 40 + 26.0 = 76.0 → 99.0 governs
-    expectClose(proposeTestPressure(steep, steep.loadCases[0]!, 'awwa-c600')!.pressure / PSI, 1.5 * (40 + 60 * 0.43333), 1e-3);
+    expectClose(
+      proposeTestPressure(steep, steep.loadCases[0]!, 'awwa-c600')!.pressure / PSI,
+      1.5 * (40 + 60 * 0.43333),
+      1e-3,
+    );
   });
 
   it('AWWA C605: 1.5 × the working pressure at the lowest point, stated at the test point', () => {
     const p = route({
       density: DENSITY,
       cases: [{ id: 'w', pressure: 80 * PSI, datumElevation: 10 * FOOT }],
-      nodes: [{ id: 'a', x: 0, y: 0, z: 0 }, { id: 'b', x: 300, y: 0, z: 10 * FOOT }],
+      nodes: [
+        { id: 'a', x: 0, y: 0, z: 0 },
+        { id: 'b', x: 300, y: 0, z: 10 * FOOT },
+      ],
       pipes: [{ from: 'a', to: 'b', od: 0.33 }],
     });
     const r = proposeTestPressure(p, p.loadCases[0]!, 'awwa-c605', 10 * FOOT)!;

@@ -35,7 +35,12 @@ export interface TestProposal {
  * manufacturer's restatement); AWWA C605 — at least 1.5 × the working pressure at the lowest point
  * (read) and 1.25 × at the highest point (from memory). Static head between points: ρ·g·Δz.
  */
-export function proposeTestPressure(project: Project, working: LoadCase, rule: TestRule, testPointElevation?: number): TestProposal | null {
+export function proposeTestPressure(
+  project: Project,
+  working: LoadCase,
+  rule: TestRule,
+  testPointElevation?: number,
+): TestProposal | null {
   if (project.nodes.length === 0) return null;
   const rho = project.water.density;
   let low = Infinity;
@@ -52,8 +57,14 @@ export function proposeTestPressure(project: Project, working: LoadCase, rule: T
   };
   const criteria =
     rule === 'awwa-c600'
-      ? [criterion('AWWA C600: 1.5 × working pressure at the point of testing', 1.5, zt), criterion('AWWA C600: 1.25 × working pressure at the highest point', 1.25, high)]
-      : [criterion('AWWA C605: 1.5 × working pressure at the lowest point', 1.5, low), criterion('AWWA C605: 1.25 × working pressure at the highest point (from memory)', 1.25, high)];
+      ? [
+          criterion('AWWA C600: 1.5 × working pressure at the point of testing', 1.5, zt),
+          criterion('AWWA C600: 1.25 × working pressure at the highest point', 1.25, high),
+        ]
+      : [
+          criterion('AWWA C605: 1.5 × working pressure at the lowest point', 1.5, low),
+          criterion('AWWA C605: 1.25 × working pressure at the highest point (from memory)', 1.25, high),
+        ];
   let governing = 0;
   criteria.forEach((c, i) => {
     if (c.atTestPoint > criteria[governing]!.atTestPoint) governing = i;

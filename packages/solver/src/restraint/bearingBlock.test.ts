@@ -67,7 +67,9 @@ describe('bearing block area A = SF·T/σ (DIPRA form, domain reference §4.1)',
   });
 
   it('warns when the passive resistance of the face is below the safety factor', () => {
-    const r = sizeBearingBlock(base({ soil: { unitWeight: 14000, frictionAngle: 0, cohesion: 0 }, allowableBearing: 9000 * PSF }));
+    const r = sizeBearingBlock(
+      base({ soil: { unitWeight: 14000, frictionAngle: 0, cohesion: 0 }, allowableBearing: 9000 * PSF }),
+    );
     expect(r.block.passiveRatio).toBeLessThan(1.5);
     expect(r.warnings.some((w) => w.startsWith('Check the bearing value'))).toBe(true);
   });

@@ -112,50 +112,58 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
     );
   }
   const concreteVolume = width * height * i.blockDepth;
-  const steps: CalcStep[] = !i.record ? [] : [
-    {
-      title: 'Required bearing area',
-      formula: 'A = SF · T_h / σ_b',
-      inputs: [
-        value('T_h', 'largest horizontal thrust', i.thrust, 'force', 'momentum balance'),
-        value('SF', 'bearing safety factor', i.safetyFactor, 'ratio', 'project design'),
-        value('σ_b', 'allowable horizontal bearing', i.allowableBearing, 'stress', 'soil'),
-      ],
-      result: value('A', 'required bearing area', area, 'area', 'computed'),
-      reference: DIPRA_AREA,
-    },
-    {
-      title: 'Bearing face',
-      formula: 'OD ≤ h ≤ ⅔·(H + OD/2);  h ≈ √A;  b = A/h, both rounded up to the step',
-      inputs: [
-        value('OD', 'largest outside diameter', i.outsideDiameter, 'diameter', 'pipes'),
-        value('H', 'cover to top of pipe', i.cover, 'length', 'node'),
-        value('step', 'dimension step', i.step, 'length', 'display units'),
-      ],
-      result: value('b × h', 'face provided', width * height, 'area', `${len(width)} wide × ${len(height)} high`),
-      reference: FACE_RULE,
-    },
-    {
-      title: 'Concrete volume',
-      formula: 'V = b · h · d',
-      inputs: [value('d', 'block depth to the bearing face', i.blockDepth, 'length', 'project design')],
-      result: value('V', 'concrete volume', concreteVolume, 'volume', 'computed'),
-      reference: 'Prism of the face area and the stated block depth; the fitting’s own volume is not deducted',
-    },
-    {
-      title: 'Passive resistance of the face',
-      formula: 'R_p = b·[½·γ·Kp·(z₂² − z₁²) + 2·c·√Kp·(z₂ − z₁)],  Kp = tan²(45° + φ/2)',
-      inputs: [
-        value('z₁', 'depth of face top', top, 'length', 'computed'),
-        value('z₂', 'depth of face bottom', bottom, 'length', 'computed'),
-        value('γ', 'soil unit weight', i.soil.unitWeight, 'unitWeight', 'soil'),
-        value('φ', 'soil friction angle', i.soil.frictionAngle, 'angle', 'soil'),
-        value('c', 'soil cohesion', i.soil.cohesion, 'stress', 'soil'),
-      ],
-      result: value('R_p', 'ultimate passive resistance', passive, 'force', `${passiveRatio.toFixed(2)} × the thrust`),
-      reference: 'Rankine passive earth pressure with cohesion; submerged unit weight below the water table',
-    },
-  ];
+  const steps: CalcStep[] = !i.record
+    ? []
+    : [
+        {
+          title: 'Required bearing area',
+          formula: 'A = SF · T_h / σ_b',
+          inputs: [
+            value('T_h', 'largest horizontal thrust', i.thrust, 'force', 'momentum balance'),
+            value('SF', 'bearing safety factor', i.safetyFactor, 'ratio', 'project design'),
+            value('σ_b', 'allowable horizontal bearing', i.allowableBearing, 'stress', 'soil'),
+          ],
+          result: value('A', 'required bearing area', area, 'area', 'computed'),
+          reference: DIPRA_AREA,
+        },
+        {
+          title: 'Bearing face',
+          formula: 'OD ≤ h ≤ ⅔·(H + OD/2);  h ≈ √A;  b = A/h, both rounded up to the step',
+          inputs: [
+            value('OD', 'largest outside diameter', i.outsideDiameter, 'diameter', 'pipes'),
+            value('H', 'cover to top of pipe', i.cover, 'length', 'node'),
+            value('step', 'dimension step', i.step, 'length', 'display units'),
+          ],
+          result: value('b × h', 'face provided', width * height, 'area', `${len(width)} wide × ${len(height)} high`),
+          reference: FACE_RULE,
+        },
+        {
+          title: 'Concrete volume',
+          formula: 'V = b · h · d',
+          inputs: [value('d', 'block depth to the bearing face', i.blockDepth, 'length', 'project design')],
+          result: value('V', 'concrete volume', concreteVolume, 'volume', 'computed'),
+          reference: 'Prism of the face area and the stated block depth; the fitting’s own volume is not deducted',
+        },
+        {
+          title: 'Passive resistance of the face',
+          formula: 'R_p = b·[½·γ·Kp·(z₂² − z₁²) + 2·c·√Kp·(z₂ − z₁)],  Kp = tan²(45° + φ/2)',
+          inputs: [
+            value('z₁', 'depth of face top', top, 'length', 'computed'),
+            value('z₂', 'depth of face bottom', bottom, 'length', 'computed'),
+            value('γ', 'soil unit weight', i.soil.unitWeight, 'unitWeight', 'soil'),
+            value('φ', 'soil friction angle', i.soil.frictionAngle, 'angle', 'soil'),
+            value('c', 'soil cohesion', i.soil.cohesion, 'stress', 'soil'),
+          ],
+          result: value(
+            'R_p',
+            'ultimate passive resistance',
+            passive,
+            'force',
+            `${passiveRatio.toFixed(2)} × the thrust`,
+          ),
+          reference: 'Rankine passive earth pressure with cohesion; submerged unit weight below the water table',
+        },
+      ];
   return {
     block: {
       bearingArea: area,

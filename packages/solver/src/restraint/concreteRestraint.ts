@@ -44,16 +44,38 @@ function acrossTrench(direction: Vec3, legs: readonly Leg[]): boolean {
  * the trench bottom for downward thrust. A block's own weight may hold a small uplift, and an anchor's
  * base friction a small horizontal thrust, so that one piece of concrete does both jobs.
  */
-export function concreteRestraint(project: Project, legs: readonly Leg[], envelope: ThrustEnvelope, total: number, site: FittingSite, record: boolean): ConcreteRestraint {
+export function concreteRestraint(
+  project: Project,
+  legs: readonly Leg[],
+  envelope: ThrustEnvelope,
+  total: number,
+  site: FittingSite,
+  record: boolean,
+): ConcreteRestraint {
   const { design } = project;
   const { soil, units } = site;
   const len = (m: number) => formatDimension(m, units);
-  const out: ConcreteRestraint = { block: null, reverseBlock: null, anchor: null, trenchBottom: null, needsJoints: false, steps: [], warnings: [] };
+  const out: ConcreteRestraint = {
+    block: null,
+    reverseBlock: null,
+    anchor: null,
+    trenchBottom: null,
+    needsJoints: false,
+    steps: [],
+    warnings: [],
+  };
   const h = envelope.horizontal;
   const up = envelope.upward.force;
 
   if (present(up, total)) {
-    const r = sizeGravityAnchor({ upward: up, horizontal: h.force, safetyFactor: design.upliftSafetyFactor, concreteUnitWeight: design.concreteUnitWeight, site, record });
+    const r = sizeGravityAnchor({
+      upward: up,
+      horizontal: h.force,
+      safetyFactor: design.upliftSafetyFactor,
+      concreteUnitWeight: design.concreteUnitWeight,
+      site,
+      record,
+    });
     out.anchor = r.anchor;
     out.steps.push(...r.steps);
     out.warnings.push(...r.warnings);
@@ -64,7 +86,10 @@ export function concreteRestraint(project: Project, legs: readonly Leg[], envelo
     out.steps.push({
       title: 'Horizontal thrust held by the anchor’s base friction',
       formula: 'F_f ≥ SF · T_h',
-      inputs: [value('T_h', 'largest horizontal thrust', horizontalNeeded, 'force', 'momentum balance'), value('SF', 'bearing safety factor', design.bearingSafetyFactor, 'ratio', 'project design')],
+      inputs: [
+        value('T_h', 'largest horizontal thrust', horizontalNeeded, 'force', 'momentum balance'),
+        value('SF', 'bearing safety factor', design.bearingSafetyFactor, 'ratio', 'project design'),
+      ],
       result: value('F_f', 'base friction of the anchor', out.anchor!.baseFriction, 'force', 'no bearing block needed'),
       reference: 'Sliding resistance W′·tan(⅔φ) of a cast-in-place base (common practice)',
     });
@@ -110,7 +135,9 @@ export function concreteRestraint(project: Project, legs: readonly Leg[], envelo
         );
       }
       if (soil.minCover !== undefined && site.cover < soil.minCover) {
-        out.warnings.push(`The bearing value of ${site.soilName} holds for more than ${len(soil.minCover)} of cover; this fitting has ${len(site.cover)}.`);
+        out.warnings.push(
+          `The bearing value of ${site.soilName} holds for more than ${len(soil.minCover)} of cover; this fitting has ${len(site.cover)}.`,
+        );
       }
       // A block heavy enough to hold the uplift makes the anchor unnecessary.
       const submerged = site.groundwater !== null && site.groundwater > site.invert - out.block.faceHeight;
@@ -119,7 +146,9 @@ export function concreteRestraint(project: Project, legs: readonly Leg[], envelo
         out.anchor = null;
         out.warnings = out.warnings.filter((w) => !w.startsWith('Gravity anchor below groundwater'));
         if (record) {
-          out.steps = out.steps.filter((s) => !s.title.startsWith('Gravity anchor') && !s.title.startsWith('Horizontal thrust at the anchor'));
+          out.steps = out.steps.filter(
+            (s) => !s.title.startsWith('Gravity anchor') && !s.title.startsWith('Horizontal thrust at the anchor'),
+          );
           out.steps.push({
             title: 'Upward thrust held by the bearing block’s weight',
             formula: 'γ·V_block ≥ SF · T_up',
@@ -138,16 +167,27 @@ export function concreteRestraint(project: Project, legs: readonly Leg[], envelo
   if (present(envelope.downward.force, total)) {
     const vertical = soil.verticalBearing ?? soil.bearing;
     if (vertical > 0) {
-      const r = sizeTrenchBottom(envelope.downward.force, design.bearingSafetyFactor, vertical, site.trenchWidth, site.od, site.step, record);
+      const r = sizeTrenchBottom(
+        envelope.downward.force,
+        design.bearingSafetyFactor,
+        vertical,
+        site.trenchWidth,
+        site.od,
+        site.step,
+        record,
+      );
       const base = out.block ? out.block.faceWidth * out.block.depth : 0;
       if (base >= r.bearing.bearingArea) {
-        if (record) out.steps.push({ ...r.steps[0]!, title: 'Bearing on the trench bottom: the block’s base is enough' });
+        if (record)
+          out.steps.push({ ...r.steps[0]!, title: 'Bearing on the trench bottom: the block’s base is enough' });
       } else {
         out.trenchBottom = r.bearing;
         out.steps.push(...r.steps);
       }
     } else {
-      out.warnings.push(`No bearing under the fitting: ${site.soilName} cannot take the downward thrust; restrain the joints or replace the soil.`);
+      out.warnings.push(
+        `No bearing under the fitting: ${site.soilName} cannot take the downward thrust; restrain the joints or replace the soil.`,
+      );
       out.needsJoints = true;
     }
   }

@@ -15,13 +15,22 @@ const PCF = POUND_PER_CUBIC_FOOT_WEIGHT;
 const crestRoute = (extra: Partial<Parameters<typeof route>[0]> = {}) =>
   route({
     pressure: psi(150),
-    nodes: [{ id: 'a', x: -20, y: 0, z: 100 }, { id: 'c', x: 0, y: 0, z: 100 }, { id: 'b', x: 10, y: 0, z: 90 }],
-    pipes: [{ from: 'a', to: 'c', od: 13.2 * INCH }, { from: 'c', to: 'b', od: 13.2 * INCH }],
+    nodes: [
+      { id: 'a', x: -20, y: 0, z: 100 },
+      { id: 'c', x: 0, y: 0, z: 100 },
+      { id: 'b', x: 10, y: 0, z: 90 },
+    ],
+    pipes: [
+      { from: 'a', to: 'c', od: 13.2 * INCH },
+      { from: 'c', to: 'b', od: 13.2 * INCH },
+    ],
     ...extra,
   });
 
 describe('gravity anchor at a crest bend (domain reference §5)', () => {
-  const f = analyse(crestRoute({ design: { concreteUnitWeight: 150 * PCF, upliftSafetyFactor: 1.5 } })).byNode.get('c')!;
+  const f = analyse(crestRoute({ design: { concreteUnitWeight: 150 * PCF, upliftSafetyFactor: 1.5 } })).byNode.get(
+    'c',
+  )!;
 
   it('has T_v = P·A·sin Δ = 14,515 lb and T_h = P·A·(1 − cos Δ) = 6,012 lb (CV-13)', () => {
     expectPrinted(f.envelope.upward.force / LBF, 14_515);
@@ -36,8 +45,26 @@ describe('gravity anchor at a crest bend (domain reference §5)', () => {
 
   it('needs 248.5 ft³ submerged, with γ′ = 150 − 62.4 pcf (CV-13: water of 62.4 pcf)', () => {
     // Groundwater above the pipe: the whole anchor lies below it.
-    const site = { soil: { id: 's', bearing: 1e5, unitWeight: 18000, frictionAngle: 30, cohesion: 0 }, soilName: 's', od: 0.335, cover: 1.2, invert: 99.8, groundwater: 101, waterDepth: 0, trenchWidth: 1, waterUnitWeight: 62.4 * PCF, step: 0.05, units: 'si' as const };
-    const r = sizeGravityAnchor({ upward: 14_515 * LBF, horizontal: 0, safetyFactor: 1.5, concreteUnitWeight: 150 * PCF, site });
+    const site = {
+      soil: { id: 's', bearing: 1e5, unitWeight: 18000, frictionAngle: 30, cohesion: 0 },
+      soilName: 's',
+      od: 0.335,
+      cover: 1.2,
+      invert: 99.8,
+      groundwater: 101,
+      waterDepth: 0,
+      trenchWidth: 1,
+      waterUnitWeight: 62.4 * PCF,
+      step: 0.05,
+      units: 'si' as const,
+    };
+    const r = sizeGravityAnchor({
+      upward: 14_515 * LBF,
+      horizontal: 0,
+      safetyFactor: 1.5,
+      concreteUnitWeight: 150 * PCF,
+      site,
+    });
     expectClose(r.anchor.concreteVolume / FT3, 248.5, 5e-4);
     expect(r.warnings[0]).toMatch(/below groundwater/);
   });
@@ -52,8 +79,15 @@ describe('gravity anchor at a crest bend (domain reference §5)', () => {
   it('puts no anchor at a sag, where the thrust bears down on the trench bottom', () => {
     const sag = route({
       pressure: psi(150),
-      nodes: [{ id: 'a', x: -10, y: 0, z: 110 }, { id: 's', x: 0, y: 0, z: 100 }, { id: 'b', x: 20, y: 0, z: 100 }],
-      pipes: [{ from: 'a', to: 's', od: 13.2 * INCH }, { from: 's', to: 'b', od: 13.2 * INCH }],
+      nodes: [
+        { id: 'a', x: -10, y: 0, z: 110 },
+        { id: 's', x: 0, y: 0, z: 100 },
+        { id: 'b', x: 20, y: 0, z: 100 },
+      ],
+      pipes: [
+        { from: 'a', to: 's', od: 13.2 * INCH },
+        { from: 's', to: 'b', od: 13.2 * INCH },
+      ],
     });
     const r = analyse(sag).byNode.get('s')!.restraint;
     expect(r.anchor).toBeNull();
@@ -68,7 +102,10 @@ describe('gravity anchor at a crest bend (domain reference §5)', () => {
 
   it('needs no bearing block where the anchor’s base friction holds SF × the horizontal thrust', () => {
     // CV-13 crest on sand φ = 36°: F_f = W·tan 24° = 21,772 lb × 0.4452 = 9,693 lb ≥ 1.5 × 6,012 = 9,018 lb
-    const p = crestRoute({ soils: [{ id: 'sand', bearing: 95761, unitWeight: 19000, frictionAngle: 36, cohesion: 0 }], design: { concreteUnitWeight: 150 * PCF } });
+    const p = crestRoute({
+      soils: [{ id: 'sand', bearing: 95761, unitWeight: 19000, frictionAngle: 36, cohesion: 0 }],
+      design: { concreteUnitWeight: 150 * PCF },
+    });
     const r = analyse(p).byNode.get('c')!.restraint;
     expectPrinted(r.anchor!.baseFriction / LBF, 9_693, 5);
     expect(r.block).toBeNull();

@@ -35,7 +35,11 @@ export interface GravityAnchor {
  * groundwater stands above its bottom. Base friction uses tan(⅔φ) for concrete cast on soil (common
  * practice).
  */
-export function sizeGravityAnchor(i: GravityAnchorInput): { anchor: GravityAnchor; steps: CalcStep[]; warnings: string[] } {
+export function sizeGravityAnchor(i: GravityAnchorInput): {
+  anchor: GravityAnchor;
+  steps: CalcStep[];
+  warnings: string[];
+} {
   const { site } = i;
   const volumeAt = (unitWeight: number) => (i.safetyFactor * i.upward) / unitWeight;
   const drySide = roundUpTo(Math.cbrt(volumeAt(i.concreteUnitWeight)), site.step);
@@ -59,10 +63,17 @@ export function sizeGravityAnchor(i: GravityAnchorInput): { anchor: GravityAncho
           inputs: [
             value('T_up', 'largest upward thrust', i.upward, 'force', 'momentum balance'),
             value('SF', 'uplift safety factor', i.safetyFactor, 'ratio', 'project design'),
-            value('γ', submerged ? 'submerged unit weight of concrete' : 'unit weight of concrete', unitWeight, 'unitWeight', 'project design'),
+            value(
+              'γ',
+              submerged ? 'submerged unit weight of concrete' : 'unit weight of concrete',
+              unitWeight,
+              'unitWeight',
+              'project design',
+            ),
           ],
           result: value('V', 'concrete volume', concreteVolume, 'volume', 'computed'),
-          reference: 'Weight ≥ SF × upward thrust (DIPRA gravity block, unverified); submerged weight γc − γw below groundwater',
+          reference:
+            'Weight ≥ SF × upward thrust (DIPRA gravity block, unverified); submerged weight γc − γw below groundwater',
         },
         {
           title: 'Horizontal thrust at the anchor',
@@ -75,5 +86,9 @@ export function sizeGravityAnchor(i: GravityAnchorInput): { anchor: GravityAncho
           reference: 'Sliding resistance of a cast-in-place base (common practice)',
         },
       ];
-  return { anchor: { concreteVolume, side, unitWeight, submerged, horizontalThrust: i.horizontal, baseFriction }, steps, warnings };
+  return {
+    anchor: { concreteVolume, side, unitWeight, submerged, horizontalThrust: i.horizontal, baseFriction },
+    steps,
+    warnings,
+  };
 }

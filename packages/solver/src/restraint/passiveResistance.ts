@@ -14,14 +14,25 @@ export function rankinePassiveCoefficient(frictionAngle: number): number {
  * γ·zw + (γ − γw)·(z − zw) below it (the soil's unit weight taken as saturated below the water
  * table; a soil lighter than water adds nothing).
  */
-export function effectiveStress(z: number, unitWeight: number, waterDepth: number | null, waterUnitWeight: number): number {
+export function effectiveStress(
+  z: number,
+  unitWeight: number,
+  waterDepth: number | null,
+  waterUnitWeight: number,
+): number {
   if (waterDepth === null || z <= waterDepth) return unitWeight * z;
   const zw = Math.max(0, waterDepth);
   return unitWeight * zw + Math.max(0, unitWeight - waterUnitWeight) * (z - zw);
 }
 
 /** ∫ σ'v dz from z1 to z2 (depths below ground, m), N/m, with σ'v as `effectiveStress`. */
-function effectiveStressIntegral(z1: number, z2: number, unitWeight: number, waterDepth: number | null, waterUnitWeight: number): number {
+function effectiveStressIntegral(
+  z1: number,
+  z2: number,
+  unitWeight: number,
+  waterDepth: number | null,
+  waterUnitWeight: number,
+): number {
   const dry = (a: number, b: number) => (unitWeight * (b * b - a * a)) / 2;
   if (waterDepth === null || waterDepth >= z2) return dry(z1, z2);
   const zw = Math.max(waterDepth, 0);

@@ -38,7 +38,12 @@ export interface PipeSoilResistance {
  *
  * @param cover m, ground to top of pipe
  */
-export function pipeSoilResistance(pipe: Pipe, soil: Soil, cover: number, site: Pick<FittingSite, 'waterDepth' | 'waterUnitWeight'>): PipeSoilResistance {
+export function pipeSoilResistance(
+  pipe: Pipe,
+  soil: Soil,
+  cover: number,
+  site: Pick<FittingSite, 'waterDepth' | 'waterUnitWeight'>,
+): PipeSoilResistance {
   const d = pipe.outsideDiameter;
   const gw = site.waterUnitWeight;
   const pipeWeight = pipe.weightPerLength ?? pipeWeightPerLength(pipe.material, d, pipe.insideDiameter);
@@ -58,7 +63,8 @@ export function pipeSoilResistance(pipe: Pipe, soil: Soil, cover: number, site: 
   const trenchType = pipe.trenchType ?? DEFAULT_TRENCH_TYPE;
   const kn = TRENCH_COEFFICIENT[trenchType] ?? TRENCH_COEFFICIENT[DEFAULT_TRENCH_TYPE]!;
   const kp = rankinePassiveCoefficient(soil.frictionAngle);
-  const passivePressure = effectiveStress(centreDepth, soil.unitWeight, site.waterDepth, gw) * kp + 2 * soil.cohesion * Math.sqrt(kp);
+  const passivePressure =
+    effectiveStress(centreDepth, soil.unitWeight, site.waterDepth, gw) * kp + 2 * soil.cohesion * Math.sqrt(kp);
   const bearing = kn * passivePressure * d;
   const uplift = Math.max(0, pipeWeight + waterWeight - buoyancy + earthLoad);
   const given = (v: unknown) => (v === undefined ? 'default (unverified)' : 'project');
@@ -69,14 +75,32 @@ export function pipeSoilResistance(pipe: Pipe, soil: Soil, cover: number, site: 
     inputs: [
       value('D', `outside diameter of ${pipe.id}`, d, 'diameter', 'pipe'),
       value('H', 'cover to top of pipe', cover, 'length', 'node'),
-      value('W_p', 'pipe weight', pipeWeight, 'forcePerLength', pipe.weightPerLength === undefined ? 'material density × wall area' : 'project'),
+      value(
+        'W_p',
+        'pipe weight',
+        pipeWeight,
+        'forcePerLength',
+        pipe.weightPerLength === undefined ? 'material density × wall area' : 'project',
+      ),
       value('W_w', 'water weight', waterWeight, 'forcePerLength', 'computed'),
       value('W_e', "earth prism load σ'v(H)·D", earthLoad, 'forcePerLength', 'computed'),
       ...(buoyed ? [value('B', 'buoyancy γw·π/4·D²', buoyancy, 'forcePerLength', 'groundwater')] : []),
       value('f_φ', 'pipe/soil friction ratio', frictionRatio, 'ratio', given(soil.pipeFrictionRatio)),
       value('f_c', 'pipe/soil adhesion ratio', adhesionRatio, 'ratio', given(soil.pipeAdhesionRatio)),
-      value('K_n', `trench type ${trenchType} coefficient`, kn, 'ratio', pipe.trenchType === undefined ? 'default type 3 (common practice), K_n unverified' : 'K_n unverified'),
-      value('F_s', encased ? 'unit friction, PE-encased (0.7·W·tan δ)' : 'unit friction A_p·C_p + W·tan δ', friction, 'forcePerLength', 'computed'),
+      value(
+        'K_n',
+        `trench type ${trenchType} coefficient`,
+        kn,
+        'ratio',
+        pipe.trenchType === undefined ? 'default type 3 (common practice), K_n unverified' : 'K_n unverified',
+      ),
+      value(
+        'F_s',
+        encased ? 'unit friction, PE-encased (0.7·W·tan δ)' : 'unit friction A_p·C_p + W·tan δ',
+        friction,
+        'forcePerLength',
+        'computed',
+      ),
       value('R_s', 'unit bearing K_n·P_p·D', bearing, 'forcePerLength', 'computed'),
     ],
   };

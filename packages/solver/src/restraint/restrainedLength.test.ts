@@ -22,8 +22,15 @@ describe('restrained joint length (DIPRA method, domain reference §6.1)', () =>
     const p = route({
       pressure: 1e6,
       soils,
-      nodes: [{ id: 'a', x: -30, y: 0, end: 'tie-in' }, { id: 'b', x: 0, y: 0, restraint: 'joints' }, { id: 'c', x: 0, y: 30, end: 'tie-in' }],
-      pipes: [{ from: 'a', to: 'b', ...pipe }, { from: 'b', to: 'c', ...pipe }],
+      nodes: [
+        { id: 'a', x: -30, y: 0, end: 'tie-in' },
+        { id: 'b', x: 0, y: 0, restraint: 'joints' },
+        { id: 'c', x: 0, y: 30, end: 'tie-in' },
+      ],
+      pipes: [
+        { from: 'a', to: 'b', ...pipe },
+        { from: 'b', to: 'c', ...pipe },
+      ],
     });
     const r = analyse(p).byNode.get('b')!.restraint;
     expect(r.block).toBeNull();
@@ -35,7 +42,10 @@ describe('restrained joint length (DIPRA method, domain reference §6.1)', () =>
     const p = route({
       pressure: 1e6,
       soils,
-      nodes: [{ id: 'a', x: 0, y: 0, end: 'tie-in' }, { id: 'b', x: 20, y: 0, restraint: 'joints' }],
+      nodes: [
+        { id: 'a', x: 0, y: 0, end: 'tie-in' },
+        { id: 'b', x: 20, y: 0, restraint: 'joints' },
+      ],
       pipes: [{ from: 'a', to: 'b', ...pipe }],
     });
     const f = analyse(p).byNode.get('b')!;
@@ -48,7 +58,10 @@ describe('restrained joint length (DIPRA method, domain reference §6.1)', () =>
       route({
         pressure: 1e6,
         soils,
-        nodes: [{ id: 'a', x: 0, y: 0, end: 'tie-in' }, { id: 'b', x: 40, y: 0, restraint: 'joints' }],
+        nodes: [
+          { id: 'a', x: 0, y: 0, end: 'tie-in' },
+          { id: 'b', x: 40, y: 0, restraint: 'joints' },
+        ],
         pipes: [{ from: 'a', to: 'b', ...pipe, encasement }],
       });
     const bare = analyse(make('none')).byNode.get('b')!.restraint.restrainedLength!;
@@ -60,8 +73,15 @@ describe('restrained joint length (DIPRA method, domain reference §6.1)', () =>
     const p = route({
       pressure: 1e6,
       soils: [{ id: 'muck', bearing: 0, unitWeight: 14000, frictionAngle: 0, cohesion: 5000 }],
-      nodes: [{ id: 'a', x: -30, y: 0, end: 'tie-in' }, { id: 'b', x: 0, y: 0 }, { id: 'c', x: 0, y: 30, end: 'tie-in' }],
-      pipes: [{ from: 'a', to: 'b', od: 0.326 }, { from: 'b', to: 'c', od: 0.326 }],
+      nodes: [
+        { id: 'a', x: -30, y: 0, end: 'tie-in' },
+        { id: 'b', x: 0, y: 0 },
+        { id: 'c', x: 0, y: 30, end: 'tie-in' },
+      ],
+      pipes: [
+        { from: 'a', to: 'b', od: 0.326 },
+        { from: 'b', to: 'c', od: 0.326 },
+      ],
     });
     const f = analyse(p).byNode.get('b')!;
     expect(f.restraint.block).toBeNull();
@@ -72,8 +92,15 @@ describe('restrained joint length (DIPRA method, domain reference §6.1)', () =>
   it('zero thrust gives no restraint at all', () => {
     const p = route({
       pressure: 0,
-      nodes: [{ id: 'a', x: -30, y: 0, end: 'tie-in' }, { id: 'b', x: 0, y: 0 }, { id: 'c', x: 0, y: 30, end: 'tie-in' }],
-      pipes: [{ from: 'a', to: 'b', od: 0.326 }, { from: 'b', to: 'c', od: 0.326 }],
+      nodes: [
+        { id: 'a', x: -30, y: 0, end: 'tie-in' },
+        { id: 'b', x: 0, y: 0 },
+        { id: 'c', x: 0, y: 30, end: 'tie-in' },
+      ],
+      pipes: [
+        { from: 'a', to: 'b', od: 0.326 },
+        { from: 'b', to: 'c', od: 0.326 },
+      ],
     });
     const r = analyse(p).byNode.get('b')!.restraint;
     expect([r.block, r.anchor, r.trenchBottom, r.restrainedLength]).toEqual([null, null, null, null]);
@@ -87,7 +114,10 @@ describe('restrained joint length (DIPRA method, domain reference §6.1)', () =>
       pressure: 1e6,
       soils,
       design: { groundwaterElevation: 105 },
-      nodes: [{ id: 'a', x: 0, y: 0, end: 'tie-in' }, { id: 'b', x: 80, y: 0, restraint: 'joints' }],
+      nodes: [
+        { id: 'a', x: 0, y: 0, end: 'tie-in' },
+        { id: 'b', x: 80, y: 0, restraint: 'joints' },
+      ],
       pipes: [{ from: 'a', to: 'b', ...pipe }],
     });
     expectClose(analyse(p).byNode.get('b')!.restraint.restrainedLength!, 56.5183, 1e-4);
@@ -100,8 +130,15 @@ describe('restrained joint length (DIPRA method, domain reference §6.1)', () =>
     const p = route({
       pressure: 1e6,
       soils,
-      nodes: [{ id: 'a', x: -40, y: 0, z: 100, end: 'tie-in' }, { id: 'c', x: 0, y: 0, z: 100, restraint: 'joints' }, { id: 'b', x: 30, y: 0, z: 70, end: 'tie-in' }],
-      pipes: [{ from: 'a', to: 'c', ...pipe }, { from: 'c', to: 'b', ...pipe }],
+      nodes: [
+        { id: 'a', x: -40, y: 0, z: 100, end: 'tie-in' },
+        { id: 'c', x: 0, y: 0, z: 100, restraint: 'joints' },
+        { id: 'b', x: 30, y: 0, z: 70, end: 'tie-in' },
+      ],
+      pipes: [
+        { from: 'a', to: 'c', ...pipe },
+        { from: 'c', to: 'b', ...pipe },
+      ],
     });
     const r = analyse(p).byNode.get('c')!.restraint;
     expect(r.restrainedLegs).toHaveLength(2);

@@ -31,7 +31,8 @@ export interface RestrainedLengthInput {
 
 const BEND_REFERENCE =
   'L = S_f·P·A·tan(θ/2)/(F_s + ½·R_s), DIPRA "Thrust Restraint Design for Ductile Iron Pipe" (form not yet verified against the manual)';
-const AXIAL_REFERENCE = 'L = S_f·P·A/F_s for dead ends, tees, reducers and closed valves, DIPRA (form not yet verified against the manual)';
+const AXIAL_REFERENCE =
+  'L = S_f·P·A/F_s for dead ends, tees, reducers and closed valves, DIPRA (form not yet verified against the manual)';
 const UPLIFT_REFERENCE =
   'Upward-thrust bend: the bearing term replaced by the weight holding the pipe down (form derived here by analogy with the horizontal bend — verify against the manual)';
 
@@ -42,7 +43,11 @@ const UPLIFT_REFERENCE =
  * upward. Every other fitting: L = S_f·|T|/F_s along the pipe the thrust pulls on (the leg pointing
  * most nearly against the thrust: the branch of a tee, the large end of a reducer, the capped pipe).
  */
-export function restrainedLength(i: RestrainedLengthInput): { legs: RestrainedLeg[]; steps: CalcStep[]; warnings: string[] } {
+export function restrainedLength(i: RestrainedLengthInput): {
+  legs: RestrainedLeg[];
+  steps: CalcStep[];
+  warnings: string[];
+} {
   const warnings: string[] = [];
   const t = norm(i.thrust);
   const steps: CalcStep[] = [];
@@ -70,32 +75,41 @@ export function restrainedLength(i: RestrainedLengthInput): { legs: RestrainedLe
       continue;
     }
     out.push({ pipe: leg.pipe.id, length });
-    if (i.record) steps.push({
-      title: `Restrained length along ${leg.pipe.id}`,
-      formula,
-      inputs: [
-        value('T', 'governing thrust', t, 'force', 'momentum balance'),
-        ...(isBend ? [value('θ', 'deflection', i.deflection as number, 'angle', 'geometry')] : []),
-        value('S_f', 'restraint safety factor', i.safetyFactor, 'ratio', 'project design'),
-        ...r.inputs,
-        ...(isBend && upward ? [value('W_u', 'hold-down weight W_p + W_w − B + W_e', r.uplift, 'forcePerLength', 'computed')] : []),
-      ],
-      result: value('L', 'restrained length', length, 'length', 'computed'),
-      reference: isBend ? (upward ? UPLIFT_REFERENCE : BEND_REFERENCE) : AXIAL_REFERENCE,
-    });
+    if (i.record)
+      steps.push({
+        title: `Restrained length along ${leg.pipe.id}`,
+        formula,
+        inputs: [
+          value('T', 'governing thrust', t, 'force', 'momentum balance'),
+          ...(isBend ? [value('θ', 'deflection', i.deflection as number, 'angle', 'geometry')] : []),
+          value('S_f', 'restraint safety factor', i.safetyFactor, 'ratio', 'project design'),
+          ...r.inputs,
+          ...(isBend && upward
+            ? [value('W_u', 'hold-down weight W_p + W_w − B + W_e', r.uplift, 'forcePerLength', 'computed')]
+            : []),
+        ],
+        result: value('L', 'restrained length', length, 'length', 'computed'),
+        reference: isBend ? (upward ? UPLIFT_REFERENCE : BEND_REFERENCE) : AXIAL_REFERENCE,
+      });
     if (length > leg.length) {
       warnings.push(
         `Restrained length ${formatSi(length, 'length', i.units)} along ${leg.pipe.id} runs past the next node (${formatSi(leg.length, 'length', i.units)} away): the restrained zones of neighbouring fittings encroach and must be designed together.`,
       );
     }
     if (leg.pipe.material === 'hdpe') {
-      warnings.push(`${leg.pipe.id} is HDPE: fused PE is end-load bearing; restraint is needed at transitions to gasketed pipe and for thermal and Poisson loads.`);
+      warnings.push(
+        `${leg.pipe.id} is HDPE: fused PE is end-load bearing; restraint is needed at transitions to gasketed pipe and for thermal and Poisson loads.`,
+      );
     } else if (leg.pipe.material !== 'ductile-iron') {
-      warnings.push(`${leg.pipe.id} is not ductile iron: the restrained-length method is the ductile-iron manual's; use friction values for ${leg.pipe.material} from the restrained-joint maker.`);
+      warnings.push(
+        `${leg.pipe.id} is not ductile iron: the restrained-length method is the ductile-iron manual's; use friction values for ${leg.pipe.material} from the restrained-joint maker.`,
+      );
     }
   }
   if (isBend && (i.deflection as number) > 90) {
-    warnings.push('Bend sharper than 90°: restrained lengths grow quickly and the method is uncertain; consider a block or a different layout.');
+    warnings.push(
+      'Bend sharper than 90°: restrained lengths grow quickly and the method is uncertain; consider a block or a different layout.',
+    );
   }
   warnings.push(
     'Restrained lengths use coefficients recalled from the ductile-iron design manual (trench K_n, friction and adhesion ratios, encasement 0.7): verify them against the manual before construction.',

@@ -42,11 +42,27 @@ export function sizeRestraint(
 ): Restraint {
   const site = fittingSite(project, node, legs);
   const total = norm(envelope.governing.total);
-  const out: Restraint = { block: null, reverseBlock: null, anchor: null, trenchBottom: null, restrainedLength: null, restrainedLegs: [], steps: [], warnings: [] };
+  const out: Restraint = {
+    block: null,
+    reverseBlock: null,
+    anchor: null,
+    trenchBottom: null,
+    restrainedLength: null,
+    restrainedLegs: [],
+    steps: [],
+    warnings: [],
+  };
   let needJoints = node.restraint === 'joints';
   if (node.restraint === 'block') {
     const c = concreteRestraint(project, legs, envelope, total, site, record);
-    Object.assign(out, { block: c.block, reverseBlock: c.reverseBlock, anchor: c.anchor, trenchBottom: c.trenchBottom, steps: c.steps, warnings: c.warnings });
+    Object.assign(out, {
+      block: c.block,
+      reverseBlock: c.reverseBlock,
+      anchor: c.anchor,
+      trenchBottom: c.trenchBottom,
+      steps: c.steps,
+      warnings: c.warnings,
+    });
     needJoints = c.needsJoints;
   }
   if (needJoints && total > 0) {

@@ -28,19 +28,21 @@ export function sizeTrenchBottom(
   const length = Math.max(roundUpTo(bearingArea / trenchWidth, step), roundUpTo(outsideDiameter, step));
   return {
     bearing: { bearingArea, width: trenchWidth, length },
-    steps: !record ? [] : [
-      {
-        title: 'Bearing on the trench bottom',
-        formula: 'A = SF · T_down / σ_v;  length = A / trench width',
-        inputs: [
-          value('T_down', 'largest downward thrust', downward, 'force', 'momentum balance'),
-          value('SF', 'bearing safety factor', safetyFactor, 'ratio', 'project design'),
-          value('σ_v', 'allowable vertical bearing', verticalBearing, 'stress', 'soil'),
-          value('B', 'trench width', trenchWidth, 'length', 'design or OD + 0.6 m'),
+    steps: !record
+      ? []
+      : [
+          {
+            title: 'Bearing on the trench bottom',
+            formula: 'A = SF · T_down / σ_v;  length = A / trench width',
+            inputs: [
+              value('T_down', 'largest downward thrust', downward, 'force', 'momentum balance'),
+              value('SF', 'bearing safety factor', safetyFactor, 'ratio', 'project design'),
+              value('σ_v', 'allowable vertical bearing', verticalBearing, 'stress', 'soil'),
+              value('B', 'trench width', trenchWidth, 'length', 'design or OD + 0.6 m'),
+            ],
+            result: value('A', 'required bearing area', bearingArea, 'area', 'computed'),
+            reference: 'Bearing equation A = SF·T/σ (DIPRA) applied to the trench bottom',
+          },
         ],
-        result: value('A', 'required bearing area', bearingArea, 'area', 'computed'),
-        reference: 'Bearing equation A = SF·T/σ (DIPRA) applied to the trench bottom',
-      },
-    ],
   };
 }

@@ -11,7 +11,6 @@ export interface ScheduleColumn {
   cell: (f: ScheduleFitting, caseLabel: (id: string) => string) => number | string | null;
 }
 
-
 /** The schedule's columns, shared by the CSV export, the text table and the app's table. */
 export const SCHEDULE_COLUMNS: readonly ScheduleColumn[] = [
   { heading: 'Tag', cell: (f) => f.tag },
@@ -38,7 +37,11 @@ export const SCHEDULE_COLUMNS: readonly ScheduleColumn[] = [
   { heading: 'Block concrete', dimension: 'volume', cell: (f) => f.restraint.block?.concreteVolume ?? null },
   { heading: 'Opposite block width', dimension: 'length', cell: (f) => f.restraint.reverseBlock?.faceWidth ?? null },
   { heading: 'Opposite block height', dimension: 'length', cell: (f) => f.restraint.reverseBlock?.faceHeight ?? null },
-  { heading: 'Opposite block concrete', dimension: 'volume', cell: (f) => f.restraint.reverseBlock?.concreteVolume ?? null },
+  {
+    heading: 'Opposite block concrete',
+    dimension: 'volume',
+    cell: (f) => f.restraint.reverseBlock?.concreteVolume ?? null,
+  },
   { heading: 'Anchor concrete', dimension: 'volume', cell: (f) => f.restraint.anchor?.concreteVolume ?? null },
   { heading: 'Trench-bottom area', dimension: 'area', cell: (f) => f.restraint.trenchBottom?.bearingArea ?? null },
   { heading: 'Restrained length', dimension: 'length', cell: (f) => f.restraint.restrainedLength },

@@ -54,7 +54,8 @@ export interface Schedule {
 function row(a: Analysis, f: FittingAnalysis): ScheduleFitting {
   const { restraint: r, envelope: e, geometry: g } = f;
   // The schedule keeps every block field but the depth of the face bottom, an intermediate value.
-  const scheduled = (b: BearingBlock | null): ScheduleBlock | null => b && (({ bottomDepth: _bottom, ...rest }) => rest)(b);
+  const scheduled = (b: BearingBlock | null): ScheduleBlock | null =>
+    b && (({ bottomDepth: _bottom, ...rest }) => rest)(b);
   return {
     node: f.node.id,
     tag: f.tag,
@@ -73,7 +74,14 @@ function row(a: Analysis, f: FittingAnalysis): ScheduleFitting {
       material: l.pipe.material,
     })),
     soil: nodeSoil(a.project, f.node).id,
-    cases: f.cases.map((c) => ({ case: c.caseId, pressure: c.pressure, static: c.static, dynamic: c.dynamic, total: c.total, closedAgainst: c.closedAgainst })),
+    cases: f.cases.map((c) => ({
+      case: c.caseId,
+      pressure: c.pressure,
+      static: c.static,
+      dynamic: c.dynamic,
+      total: c.total,
+      closedAgainst: c.closedAgainst,
+    })),
     governingCase: e.governing.caseId,
     designPressure: e.pressure,
     thrust: e.governing.total,
@@ -85,7 +93,11 @@ function row(a: Analysis, f: FittingAnalysis): ScheduleFitting {
     restraint: {
       block: scheduled(r.block),
       reverseBlock: scheduled(r.reverseBlock),
-      anchor: r.anchor && { concreteVolume: r.anchor.concreteVolume, side: r.anchor.side, submerged: r.anchor.submerged },
+      anchor: r.anchor && {
+        concreteVolume: r.anchor.concreteVolume,
+        side: r.anchor.side,
+        submerged: r.anchor.submerged,
+      },
       trenchBottom: r.trenchBottom,
       restrainedLength: r.restrainedLength,
       restrainedLegs: r.restrainedLegs,

@@ -10,12 +10,14 @@ export function restraintSummary(f: ScheduleFitting, units: UnitSystem): string 
   const parts: string[] = [];
   const len = (m: number) => formatSi(m, 'length', units);
   const dim = (m: number) => formatDimension(m, units);
-  const block = (b: NonNullable<typeof r.block>) => `${dim(b.faceWidth)} wide × ${dim(b.faceHeight)} high, ${formatSi(b.concreteVolume, 'volume', units)}`;
+  const block = (b: NonNullable<typeof r.block>) =>
+    `${dim(b.faceWidth)} wide × ${dim(b.faceHeight)} high, ${formatSi(b.concreteVolume, 'volume', units)}`;
   if (r.block && r.reverseBlock) parts.push(`blocks both sides: ${block(r.block)}; opposite ${block(r.reverseBlock)}`);
   else if (r.block) parts.push(`block ${block(r.block)}`);
   if (r.anchor) parts.push(`anchor ${formatSi(r.anchor.concreteVolume, 'volume', units)}`);
   if (r.trenchBottom) parts.push(`bottom pad ${dim(r.trenchBottom.width)} × ${dim(r.trenchBottom.length)}`);
-  if (r.restrainedLength !== null) parts.push(`restrain ${r.restrainedLegs.map((l) => `${len(l.length)} along ${l.pipe}`).join(', ')}`);
+  if (r.restrainedLength !== null)
+    parts.push(`restrain ${r.restrainedLegs.map((l) => `${len(l.length)} along ${l.pipe}`).join(', ')}`);
   return parts.length ? parts.join('; ') : '—';
 }
 
@@ -26,7 +28,11 @@ export function scheduleTable(s: Schedule, units: UnitSystem, caseLabel: (id: st
     f.tag,
     f.kind,
     formatSi(f.chainage, 'length', units, 4),
-    f.deflection === null ? (f.branchAngle === null ? '' : formatSi(f.branchAngle, 'angle', units)) : formatSi(f.deflection, 'angle', units),
+    f.deflection === null
+      ? f.branchAngle === null
+        ? ''
+        : formatSi(f.branchAngle, 'angle', units)
+      : formatSi(f.deflection, 'angle', units),
     formatSi(f.designPressure, 'pressure', units),
     caseLabel(f.governingCase),
     formatSi(norm(f.thrust), 'force', units),
@@ -34,8 +40,18 @@ export function scheduleTable(s: Schedule, units: UnitSystem, caseLabel: (id: st
     f.warnings.length ? String(f.warnings.length) : '',
   ]);
   const widths = head.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i]!.length)));
-  const line = (cells: string[]) => cells.map((c, i) => c.padEnd(widths[i]!)).join('  ').trimEnd();
-  const out = [`Fitting schedule — ${s.project}`, '', line(head), line(widths.map((w) => '-'.repeat(w))), ...rows.map(line)];
+  const line = (cells: string[]) =>
+    cells
+      .map((c, i) => c.padEnd(widths[i]!))
+      .join('  ')
+      .trimEnd();
+  const out = [
+    `Fitting schedule — ${s.project}`,
+    '',
+    line(head),
+    line(widths.map((w) => '-'.repeat(w))),
+    ...rows.map(line),
+  ];
   const warned = s.fittings.filter((f) => f.warnings.length > 0);
   if (warned.length) {
     out.push('', 'Warnings');

@@ -32,11 +32,25 @@ export function fittingThrust(
   for (const c of loadCases) {
     const pressure = pressureAt(c, node.elevation, density);
     const open = momentumBalance(legs, pressure, density, c.flowFactor);
-    out.push({ caseId: c.id, pressure, static: open.static, dynamic: open.dynamic, total: open.total, closedAgainst: null });
+    out.push({
+      caseId: c.id,
+      pressure,
+      static: open.static,
+      dynamic: open.dynamic,
+      total: open.total,
+      closedAgainst: null,
+    });
     if (kind !== 'valve' || legs.length !== 2) continue;
     for (let side = 0; side < 2; side++) {
       const closed = momentumBalance(legs, pressure, density, 0, [side === 0, side === 1]);
-      out.push({ caseId: c.id, pressure, static: closed.static, dynamic: closed.dynamic, total: closed.total, closedAgainst: legs[side]!.pipe.id });
+      out.push({
+        caseId: c.id,
+        pressure,
+        static: closed.static,
+        dynamic: closed.dynamic,
+        total: closed.total,
+        closedAgainst: legs[side]!.pipe.id,
+      });
     }
   }
   return out;

@@ -9,8 +9,15 @@ describe('valves and thrusts that change direction between load states', () => {
   it('sizes a valve at a 90° bend for the open bend thrust when that is the larger (CV-9: 118.04 kN)', () => {
     const p = route({
       pressure: 1e6,
-      nodes: [{ id: 'a', x: -30, y: 0, end: 'tie-in' }, { id: 'v', x: 0, y: 0, valve: true }, { id: 'b', x: 0, y: 30, end: 'tie-in' }],
-      pipes: [{ from: 'a', to: 'v', od: 0.326 }, { from: 'v', to: 'b', od: 0.326 }],
+      nodes: [
+        { id: 'a', x: -30, y: 0, end: 'tie-in' },
+        { id: 'v', x: 0, y: 0, valve: true },
+        { id: 'b', x: 0, y: 30, end: 'tie-in' },
+      ],
+      pipes: [
+        { from: 'a', to: 'v', od: 0.326 },
+        { from: 'v', to: 'b', od: 0.326 },
+      ],
     });
     const f = analyse(p).byNode.get('v')!;
     expect(f.geometry.kind).toBe('valve');
@@ -21,8 +28,15 @@ describe('valves and thrusts that change direction between load states', () => {
   it('gives a closed valve between unequal pipes a block each way: p·A of either side (§1.3)', () => {
     const p = route({
       pressure: 1e6,
-      nodes: [{ id: 'a', x: -30, y: 0, end: 'tie-in' }, { id: 'v', x: 0, y: 0, valve: true }, { id: 'b', x: 30, y: 0, end: 'tie-in' }],
-      pipes: [{ from: 'a', to: 'v', od: 0.326 }, { from: 'v', to: 'b', od: 0.222 }],
+      nodes: [
+        { id: 'a', x: -30, y: 0, end: 'tie-in' },
+        { id: 'v', x: 0, y: 0, valve: true },
+        { id: 'b', x: 30, y: 0, end: 'tie-in' },
+      ],
+      pipes: [
+        { from: 'a', to: 'v', od: 0.326 },
+        { from: 'v', to: 'b', od: 0.222 },
+      ],
     });
     const f = analyse(p).byNode.get('v')!;
     // pressure from the DN300 side pushes +x with p·A(0.326); from the DN200 side −x with p·A(0.222)
@@ -40,8 +54,15 @@ describe('valves and thrusts that change direction between load states', () => {
     const p = route({
       pressure: 1e6,
       soils: [{ id: 's', bearing: 150e3, unitWeight: 18000, frictionAngle: 30, cohesion: 0 }],
-      nodes: [{ id: 'a', x: -200, y: 0, end: 'tie-in' }, { id: 'v', x: 0, y: 0, valve: true, restraint: 'joints' }, { id: 'b', x: 200, y: 0, end: 'tie-in' }],
-      pipes: [{ id: 'big', from: 'a', to: 'v', od: 0.326 }, { id: 'small', from: 'v', to: 'b', od: 0.222 }],
+      nodes: [
+        { id: 'a', x: -200, y: 0, end: 'tie-in' },
+        { id: 'v', x: 0, y: 0, valve: true, restraint: 'joints' },
+        { id: 'b', x: 200, y: 0, end: 'tie-in' },
+      ],
+      pipes: [
+        { id: 'big', from: 'a', to: 'v', od: 0.326 },
+        { id: 'small', from: 'v', to: 'b', od: 0.222 },
+      ],
     });
     const legs = analyse(p).byNode.get('v')!.restraint.restrainedLegs;
     expect(legs.map((l) => l.pipe).sort()).toEqual(['big', 'small']);
@@ -54,8 +75,15 @@ describe('valves and thrusts that change direction between load states', () => {
         { id: 'w', pressure: 150e3, datumElevation: 100, flowFactor: 0 },
         { id: 'down', pressure: 20e3, datumElevation: 100, flowFactor: 0 },
       ],
-      nodes: [{ id: 'a', x: -30, y: 0, z: 110, end: 'tie-in' }, { id: 'h', x: 0, y: 0, z: 110 }, { id: 'b', x: 0, y: 30, z: 110, end: 'tie-in' }],
-      pipes: [{ from: 'a', to: 'h', od: 0.326 }, { from: 'h', to: 'b', od: 0.326 }],
+      nodes: [
+        { id: 'a', x: -30, y: 0, z: 110, end: 'tie-in' },
+        { id: 'h', x: 0, y: 0, z: 110 },
+        { id: 'b', x: 0, y: 30, z: 110, end: 'tie-in' },
+      ],
+      pipes: [
+        { from: 'a', to: 'h', od: 0.326 },
+        { from: 'h', to: 'b', od: 0.326 },
+      ],
     });
     const f = analyse(p).byNode.get('h')!;
     const wp = 150e3 - 998.2 * 9.80665 * 10;

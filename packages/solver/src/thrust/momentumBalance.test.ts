@@ -43,7 +43,14 @@ describe('bends: T = 2·P·A·sin(Δ/2) (domain reference §1.2) from the vector
 describe('dead ends, tees, reducers and crosses from the vector sum', () => {
   const P = psi(150);
   it('a 12-in DI dead end at 150 psi pushes 20,527 lb toward the cap (CV-4)', () => {
-    const p = route({ pressure: P, nodes: [{ id: 'n1', x: 0, y: 0 }, { id: 'n2', x: 10, y: 0 }], pipes: [{ from: 'n1', to: 'n2', od: inches(13.2) }] });
+    const p = route({
+      pressure: P,
+      nodes: [
+        { id: 'n1', x: 0, y: 0 },
+        { id: 'n2', x: 10, y: 0 },
+      ],
+      pipes: [{ from: 'n1', to: 'n2', od: inches(13.2) }],
+    });
     const t = thrustAt(p, 'n2');
     expectPrinted(lbf(t.total), 20_527);
     expect(t.total[0]).toBeGreaterThan(0);
@@ -52,7 +59,12 @@ describe('dead ends, tees, reducers and crosses from the vector sum', () => {
   it('a 12×8 DI tee at 150 psi pushes 9,649 lb away from the branch (CV-5)', () => {
     const p = route({
       pressure: P,
-      nodes: [{ id: 'a', x: -10, y: 0 }, { id: 't', x: 0, y: 0 }, { id: 'b', x: 10, y: 0 }, { id: 'c', x: 0, y: 10 }],
+      nodes: [
+        { id: 'a', x: -10, y: 0 },
+        { id: 't', x: 0, y: 0 },
+        { id: 'b', x: 10, y: 0 },
+        { id: 'c', x: 0, y: 10 },
+      ],
       pipes: [
         { from: 'a', to: 't', od: inches(13.2) },
         { from: 't', to: 'b', od: inches(13.2) },
@@ -68,7 +80,11 @@ describe('dead ends, tees, reducers and crosses from the vector sum', () => {
   it('a 12×8 DI reducer at 150 psi pushes 10,878 lb toward the small end (CV-6)', () => {
     const p = route({
       pressure: P,
-      nodes: [{ id: 'a', x: -10, y: 0 }, { id: 'r', x: 0, y: 0 }, { id: 'b', x: 10, y: 0 }],
+      nodes: [
+        { id: 'a', x: -10, y: 0 },
+        { id: 'r', x: 0, y: 0 },
+        { id: 'b', x: 10, y: 0 },
+      ],
       pipes: [
         { from: 'a', to: 'r', od: inches(13.2) },
         { from: 'r', to: 'b', od: inches(9.05) },
@@ -83,8 +99,11 @@ describe('dead ends, tees, reducers and crosses from the vector sum', () => {
     const p = route({
       pressure: P,
       nodes: [
-        { id: 'a', x: -10, y: 0 }, { id: 'x', x: 0, y: 0 }, { id: 'b', x: 10, y: 0 },
-        { id: 'n', x: 0, y: 10 }, { id: 's', x: 0, y: -10 },
+        { id: 'a', x: -10, y: 0 },
+        { id: 'x', x: 0, y: 0 },
+        { id: 'b', x: 10, y: 0 },
+        { id: 'n', x: 0, y: 10 },
+        { id: 's', x: 0, y: -10 },
       ],
       pipes: [
         { from: 'a', to: 'x', od: inches(13.2) },
@@ -99,7 +118,14 @@ describe('dead ends, tees, reducers and crosses from the vector sum', () => {
   });
 
   it('a DN300 dead end at 10 bar pushes 83.47 kN (CV-10)', () => {
-    const p = route({ pressure: 1e6, nodes: [{ id: 'n1', x: 0, y: 0 }, { id: 'n2', x: 0, y: 10 }], pipes: [{ from: 'n1', to: 'n2', od: 0.326 }] });
+    const p = route({
+      pressure: 1e6,
+      nodes: [
+        { id: 'n1', x: 0, y: 0 },
+        { id: 'n2', x: 0, y: 10 },
+      ],
+      pipes: [{ from: 'n1', to: 'n2', od: 0.326 }],
+    });
     expectClose(Math.hypot(...thrustAt(p, 'n2').total), 83_470, 1e-4);
   });
 });
@@ -112,7 +138,11 @@ describe('dynamic thrust: ρ·Q²/a along each pipe', () => {
       pressure: 1e6,
       density: 998.2,
       design: { thrustArea: 'inside' },
-      nodes: [{ id: 'n1', x: -10, y: 0 }, { id: 'n2', x: 0, y: 0 }, { id: 'n3', x: 0, y: 10 }],
+      nodes: [
+        { id: 'n1', x: -10, y: 0 },
+        { id: 'n2', x: 0, y: 0 },
+        { id: 'n3', x: 0, y: 10 },
+      ],
       pipes: [
         { from: 'n1', to: 'n2', od: 0.326, id_: id, flow: q },
         { from: 'n2', to: 'n3', od: 0.326, id_: id, flow: q },
@@ -138,7 +168,11 @@ describe('dynamic thrust: ρ·Q²/a along each pipe', () => {
     const p = route({
       pressure: 800e3,
       density: 1000,
-      nodes: [{ id: 'a', x: -10, y: 0 }, { id: 'rb', x: 0, y: 0 }, { id: 'b', x: 10 * Math.cos(r), y: 10 * Math.sin(r) }],
+      nodes: [
+        { id: 'a', x: -10, y: 0 },
+        { id: 'rb', x: 0, y: 0 },
+        { id: 'b', x: 10 * Math.cos(r), y: 10 * Math.sin(r) },
+      ],
       pipes: [
         { from: 'a', to: 'rb', od: 0.274, id_: 0.25, flow: 0.08 },
         { from: 'rb', to: 'b', od: 0.222, id_: 0.2, flow: 0.08 },

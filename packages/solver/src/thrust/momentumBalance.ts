@@ -32,8 +32,12 @@ export function momentumBalance(
   flowFactor: number,
   pressurised?: readonly boolean[],
 ): ThrustParts {
-  let sx = 0, sy = 0, sz = 0;
-  let dx = 0, dy = 0, dz = 0;
+  let sx = 0,
+    sy = 0,
+    sz = 0;
+  let dx = 0,
+    dy = 0,
+    dz = 0;
   for (let i = 0; i < legs.length; i++) {
     if (pressurised && !pressurised[i]) continue;
     const leg = legs[i]!;

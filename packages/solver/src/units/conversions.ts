@@ -88,5 +88,4 @@ export const toDisplay = (si: number, dim: Dimension, system: UnitSystem): numbe
 export const fromDisplay = (shown: number, dim: Dimension, system: UnitSystem): number =>
   shown * DISPLAY_UNITS[system][dim].factor;
 
-export const unitSymbol = (dim: Dimension, system: UnitSystem): string =>
-  DISPLAY_UNITS[system][dim].symbol;
+export const unitSymbol = (dim: Dimension, system: UnitSystem): string => DISPLAY_UNITS[system][dim].symbol;

@@ -47,19 +47,15 @@ export interface FormattedQuantity {
 /**
  * SI value → "number unit" in the chosen system. Forces above 10,000 lbf read as kip (screens.md).
  */
-export function formatQuantity(
-  si: number,
-  dim: Dimension,
-  system: UnitSystem,
-  significant = 3,
-): FormattedQuantity {
+export function formatQuantity(si: number, dim: Dimension, system: UnitSystem, significant = 3): FormattedQuantity {
   let { symbol, factor } = DISPLAY_UNITS[system][dim];
   if (system === 'us' && dim === 'force' && Math.abs(si / factor) >= 10_000) {
     symbol = 'kip';
     factor = KIP;
   }
   // Angles read as an engineer writes them: 22.5°, 11.25°, 0.19° — two decimals at most.
-  const value = dim === 'angle' ? String(Math.round((si / factor) * 100) / 100) : formatNumber(si / factor, significant);
+  const value =
+    dim === 'angle' ? String(Math.round((si / factor) * 100) / 100) : formatNumber(si / factor, significant);
   const joined = dim === 'angle' || symbol === '' ? `${value}${symbol}` : `${value} ${symbol}`;
   return { value, unit: symbol, text: joined };
 }
