@@ -60,13 +60,13 @@ test('raising the field-test pressure grows every block’s bearing area with it
 test('the printed schedule is a multi-page landscape sheet that names every fitting', async ({ page }) => {
   const app = new MainbracePage(page);
   await app.gotoFresh();
-  const tags = (await app.schedule()).fittings.map((f) => f.tag);
+  const marks = (await app.schedule()).fittings.map((f) => f.mark);
   await page.getByRole('button', { name: 'Export ▾' }).click();
   await page.getByRole('menuitem', { name: 'Print the schedule…' }).click();
   const sheet = page.getByTestId('print-sheet');
   await expect(sheet).toBeVisible();
   const text = await sheet.innerText();
-  for (const tag of tags) expect(text).toContain(tag);
+  for (const mark of marks) expect(text).toContain(mark);
   expect(text).toMatch(/licensed professional engineer/);
   expect(text).toMatch(/cure before pressure testing|cured before pressure testing|Let block concrete cure/);
   await page.emulateMedia({ media: 'print' });

@@ -10,7 +10,7 @@ export interface HookProject {
 }
 export interface HookFitting {
   node: string;
-  tag: string;
+  mark: string;
   kind: string;
   thrust: [number, number, number];
   horizontalThrust: number;

@@ -1,3 +1,4 @@
+import { savedDocument } from '../state/savedDocument.js';
 import { useRef, useState } from 'react';
 import { useStore } from 'zustand';
 import { useActions, useApp, useAppStore } from '../state/StoreContext.js';
@@ -17,7 +18,7 @@ export function TopBar({ onPrint }: { onPrint: () => void }) {
   const store = useAppStore();
   const actions = useActions();
   const name = useApp((s) => s.project.name);
-  const units = useApp((s) => s.project.units);
+  const units = useApp((s) => s.units);
   const cases = useApp((s) => s.project.loadCases);
   const caseView = useApp((s) => s.caseView);
   const canUndo = useStore(store.temporal, (t) => t.pastStates.length > 0);
@@ -77,7 +78,9 @@ export function TopBar({ onPrint }: { onPrint: () => void }) {
           }}
         />
         <button
-          onClick={() => download(`${fileStem(project())}.json`, projectText(project()), 'application/json')}
+          onClick={() =>
+            download(`${fileStem(project())}.json`, projectText(savedDocument(store.getState())), 'application/json')
+          }
           title="Save the project file (Ctrl+S)"
         >
           Save
@@ -90,7 +93,13 @@ export function TopBar({ onPrint }: { onPrint: () => void }) {
             <div className="menu-list" role="menu" onClick={() => setExportOpen(false)}>
               <button
                 role="menuitem"
-                onClick={() => download(`${fileStem(project())}-schedule.csv`, scheduleCsvText(project()), 'text/csv')}
+                onClick={() =>
+                  download(
+                    `${fileStem(project())}-schedule.csv`,
+                    scheduleCsvText(project(), store.getState().units),
+                    'text/csv',
+                  )
+                }
               >
                 Schedule as CSV
               </button>

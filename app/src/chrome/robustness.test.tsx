@@ -1,6 +1,6 @@
 import { describe, it, expect, vi, afterEach } from 'vitest';
 import { render, screen, cleanup, act } from '@testing-library/react';
-import { scheduleCsv, scheduleOf, analyse } from '@mainbrace/solver';
+import { scheduleCsv, scheduleView, analyse } from '@mainbrace/solver';
 import { createAppStore } from '../state/store.js';
 import { createActions } from '../state/actions.js';
 import { StoreProvider } from '../state/StoreContext.js';
@@ -50,7 +50,7 @@ describe('robustness of the app at its edges', () => {
   it('keeps a label that a spreadsheet would run as a formula inert in the CSV export', () => {
     const p = route();
     const withFormula = { ...p, nodes: p.nodes.map((n) => (n.id === 'n2' ? { ...n, label: '=HYPERLINK("x")' } : n)) };
-    const csv = scheduleCsv(scheduleOf(analyse(withFormula)), 'si', (id) => id);
+    const csv = scheduleCsv(scheduleView(analyse(withFormula), 'si'));
     expect(csv).toContain(`"'=HYPERLINK(""x"")"`);
   });
 

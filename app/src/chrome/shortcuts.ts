@@ -1,3 +1,4 @@
+import { savedDocument } from '../state/savedDocument.js';
 import type { AppStore } from '../state/store.js';
 import type { Actions } from '../state/actions.js';
 import { drawStep } from '../tools/drawTool.js';
@@ -27,7 +28,7 @@ export function installShortcuts(store: AppStore, actions: Actions): () => void 
     }
     if (mod && e.key.toLowerCase() === 's') {
       e.preventDefault();
-      const p = store.getState().project;
+      const p = savedDocument(store.getState());
       download(`${fileStem(p)}.json`, projectText(p), 'application/json');
       return;
     }

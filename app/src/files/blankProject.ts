@@ -17,6 +17,7 @@ export function blankProject(): Project {
       groundwaterElevation: null,
       blockDepth: 0.6,
       trenchWidth: null,
+      dimensionStep: 0.05,
     },
     loadCases: [
       { id: 'working', label: 'Working', kind: 'working', pressure: 600e3, datumElevation: 100, flowFactor: 1 },

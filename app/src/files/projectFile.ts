@@ -1,11 +1,13 @@
 import {
   analyse,
-  caseLabel,
   parseProjectText,
   problemText,
   scheduleCsv,
+  scheduleJson,
   scheduleOf,
+  scheduleView,
   type Project,
+  type UnitSystem,
 } from '@mainbrace/solver';
 
 /** Largest project file the app opens, bytes: a route of 10,000 fittings is about 5 MB. */
@@ -54,12 +56,10 @@ export const fileStem = (p: Project) =>
 export const projectText = (p: Project) => JSON.stringify(p, null, 2) + '\n';
 
 /** The schedule JSON, the same content as the command line's `schedule --format json`. */
-export const scheduleJsonText = (p: Project) => JSON.stringify(scheduleOf(analyse(p)), null, 2) + '\n';
+export const scheduleJsonText = (p: Project) => scheduleJson(scheduleOf(analyse(p)), true);
 
-/** The schedule CSV in the project's display units. */
-export function scheduleCsvText(p: Project): string {
-  return scheduleCsv(scheduleOf(analyse(p)), p.units, (id) => caseLabel(p, id));
-}
+/** The schedule CSV in the chosen display units, the same as `schedule --format csv --units`. */
+export const scheduleCsvText = (p: Project, units: UnitSystem): string => scheduleCsv(scheduleView(analyse(p), units));
 
 /** Opens a dropped or chosen file: the project is replaced only if the file is valid, and the user is told. */
 export async function openProjectFile(

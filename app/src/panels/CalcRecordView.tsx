@@ -1,9 +1,10 @@
 import { calculationRecord, type FittingAnalysis, type Project } from '@mainbrace/solver';
 import { show } from '../format/quantity.js';
+import { useApp } from '../state/StoreContext.js';
 
 /** A fitting's calculation record: each step's formula, its inputs with their sources, and the result. */
 export function CalcRecordView({ fitting, project }: { fitting: FittingAnalysis; project: Project }) {
-  const units = project.units;
+  const units = useApp((s) => s.units);
   return (
     <ol className="record">
       {calculationRecord(project, fitting).map((step, i) => (

@@ -17,7 +17,7 @@ export function CasesPanel() {
   const project = useApp((s) => s.project);
   const actions = useActions();
   useAnalysis();
-  const u = project.units;
+  const u = useApp((s) => s.units);
   const set = (id: string, patch: Partial<LoadCase>) => actions.updateCase(id, patch);
   const add = () => {
     const id = nextId(

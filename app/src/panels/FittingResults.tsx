@@ -2,24 +2,34 @@ import {
   caseLabel,
   formatDimension,
   horizontalNorm,
+  legTarget,
   norm,
+  notVerifiedText,
   planBearing,
+  quantityText,
+  REGISTER,
+  unverified,
   type FittingAnalysis,
   type Project,
 } from '@mainbrace/solver';
 import { show, showColumnForce } from '../format/quantity.js';
 import { bearingText, fittingTitle } from '../format/fittingNames.js';
+import { useDiagnosticWords } from '../format/words.js';
+import { useAnalysis, useApp } from '../state/StoreContext.js';
 import { CalcRecordView } from './CalcRecordView.js';
 
 /** The results of one fitting: thrust per case, the governing case, its restraint and warnings. */
 export function FittingResults({ fitting: f, project }: { fitting: FittingAnalysis; project: Project }) {
-  const u = project.units;
+  const u = useApp((s) => s.units);
+  const analysis = useAnalysis();
+  const words = useDiagnosticWords();
   const r = f.restraint;
   const e = f.envelope;
+  const open = unverified(f.basis);
   return (
-    <section className="results" aria-label={`Results for ${f.tag}`} data-testid="fitting-results">
+    <section className="results" aria-label={`Results for ${f.mark}`} data-testid="fitting-results">
       <h3>
-        <span className="tag">{f.tag}</span> {fittingTitle(f, u)}
+        <span className="tag">{f.mark}</span> {fittingTitle(f.geometry)}
       </h3>
       <dl className="facts">
         <dt>Chainage</dt>
@@ -105,23 +115,39 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
             pipe.
           </li>
         )}
-        {r.restrainedLegs.map((l) => (
-          <li key={l.pipe} data-testid="restrained">
-            Restrain joints <strong>{show(l.length, 'length', u)}</strong> along {l.pipe}.
-          </li>
-        ))}
+        {r.restrainedLegs.map((l) => {
+          const toward = legTarget(analysis, f.node.id, l.pipe);
+          return (
+            <li key={l.pipe} data-testid="restrained">
+              Restrain joints <strong>{quantityText(l.length, 'restrained', u)}</strong>{' '}
+              {toward ? `toward ${toward}` : 'to the end of the line'}.
+            </li>
+          );
+        })}
         {!r.block && !r.anchor && !r.trenchBottom && r.restrainedLegs.length === 0 && <li>None needed.</li>}
       </ul>
-      {f.warnings.length > 0 && (
+      {f.diagnostics.length > 0 && (
         <>
-          <h4>Warnings</h4>
+          <h4>Findings</h4>
           <ul className="warnings" data-testid="warnings">
-            {f.warnings.map((w, i) => (
-              <li key={i}>
+            {f.diagnostics.map((d, i) => (
+              <li key={i} className={`finding-${d.severity}`} data-code={d.code}>
                 <span className="warn-mark" aria-hidden="true">
-                  !
+                  {d.severity === 'error' ? '✕' : d.severity === 'warning' ? '!' : 'i'}
                 </span>
-                {w}
+                {words(d)}
+              </li>
+            ))}
+          </ul>
+        </>
+      )}
+      {open.length > 0 && (
+        <>
+          <h4>Relies on values not yet verified</h4>
+          <ul className="unverified small" data-testid="unverified">
+            {open.map((id) => (
+              <li key={id}>
+                {REGISTER[id].quantity}: {notVerifiedText(REGISTER[id])}.
               </li>
             ))}
           </ul>

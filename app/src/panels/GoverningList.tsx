@@ -8,7 +8,7 @@ export function GoverningList() {
   const project = useApp((s) => s.project);
   const analysis = useAnalysis();
   const actions = useActions();
-  const u = project.units;
+  const u = useApp((s) => s.units);
   const counts = new Map<string, number>();
   for (const f of analysis.fittings)
     counts.set(f.envelope.governing.caseId, (counts.get(f.envelope.governing.caseId) ?? 0) + 1);
@@ -32,7 +32,7 @@ export function GoverningList() {
         {largest.map((f) => (
           <li key={f.node.id}>
             <button className="link" onClick={() => actions.selectNode(f.node.id)}>
-              {f.tag}
+              {f.mark}
             </button>{' '}
             {show(norm(f.envelope.governing.total), 'force', u)}
           </li>
@@ -43,7 +43,7 @@ export function GoverningList() {
         {tight.map((f) => (
           <li key={f.node.id}>
             <button className="link" onClick={() => actions.selectNode(f.node.id)}>
-              {f.tag}
+              {f.mark}
             </button>{' '}
             {f.restraint.block!.passiveRatio.toFixed(2)} × thrust
           </li>

@@ -1,11 +1,11 @@
 import type { Project, ProjectNode } from '@mainbrace/solver';
-import { useActions } from '../state/StoreContext.js';
+import { useActions, useApp } from '../state/StoreContext.js';
 import { NumberField } from './NumberField.js';
 
 /** The inputs of a node: label, position, elevation, cover, soil, end condition, valve, restraint method. */
 export function NodeDetails({ node, project, pipeCount }: { node: ProjectNode; project: Project; pipeCount: number }) {
   const actions = useActions();
-  const u = project.units;
+  const u = useApp((s) => s.units);
   const set = (patch: Partial<ProjectNode>) => actions.updateNode(node.id, patch);
   return (
     <section className="inputs" aria-label={`Node ${node.id}`}>

@@ -8,7 +8,7 @@ import {
   type Pipe,
   type Project,
 } from '@mainbrace/solver';
-import { useActions, useAnalysis } from '../state/StoreContext.js';
+import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
 import { pipeLength } from './routeFigures.js';
 import { MATERIAL_NAME } from '../plan/palette.js';
 import { show } from '../format/quantity.js';
@@ -17,9 +17,9 @@ import { NumberField } from './NumberField.js';
 const CUSTOM = '__custom';
 
 /** The inputs of a pipe: material, catalogue size or custom diameters, flow, label, laying details. */
-export function PipeDetails({ pipe, project }: { pipe: Pipe; project: Project }) {
+export function PipeDetails({ pipe }: { pipe: Pipe; project: Project }) {
   const actions = useActions();
-  const u = project.units;
+  const u = useApp((s) => s.units);
   const set = (patch: Partial<Pipe>) => actions.updatePipe(pipe.id, patch);
   const series = pipe.series ? findSeries(pipe.series) : undefined;
   const seriesChoices = CATALOG.filter((s) => s.material === pipe.material);

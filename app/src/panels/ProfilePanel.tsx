@@ -30,7 +30,7 @@ export function ProfilePanel() {
   const analysis = useAnalysis();
   const actions = useActions();
   const data = useMemo(() => profileData(project, analysis), [project, analysis]);
-  const u = project.units;
+  const u = useApp((s) => s.units);
   if (data.points.length < 2) return <p className="muted">Draw a main to see its profile.</p>;
   const x0 = data.points[0]!.chainage,
     x1 = data.points[data.points.length - 1]!.chainage;

@@ -9,11 +9,11 @@ export function RouteSummary() {
   const project = useApp((s) => s.project);
   const analysis = useAnalysis();
   const actions = useActions();
-  const u = project.units;
+  const u = useApp((s) => s.units);
   const length = networkLength(analysis);
   const concrete = analysis.fittings.reduce((v, f) => v + restraintConcrete(f.restraint), 0);
   const ranked = largestThrusts(analysis, 6);
-  const warned = analysis.fittings.filter((f) => f.warnings.length > 0).length;
+  const warned = analysis.fittings.filter((f) => f.diagnostics.some((d) => d.severity !== 'info')).length;
   return (
     <section className="inputs">
       <h3>Route</h3>
@@ -39,7 +39,7 @@ export function RouteSummary() {
             {ranked.map((f) => (
               <li key={f.node.id}>
                 <button className="link" onClick={() => actions.selectNode(f.node.id)}>
-                  {f.tag}
+                  {f.mark}
                 </button>{' '}
                 {KIND_NAME[f.geometry.kind].toLowerCase()} — {show(norm(f.envelope.governing.total), 'force', u)}
               </li>

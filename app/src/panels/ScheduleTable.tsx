@@ -1,131 +1,90 @@
-import { useMemo, useState } from 'react';
-import {
-  caseLabel,
-  restraintConcrete,
-  restraintSummary,
-  scheduleOf,
-  SHORT_CAUTION,
-  norm,
-  type ScheduleFitting,
-} from '@mainbrace/solver';
+import { useState } from 'react';
+import { APP_COLUMNS, columnNumber, pickColumns, scheduleView, SHORT_CAUTION, type ViewRow } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
-import { show, showColumnForce } from '../format/quantity.js';
-import { bearingText, KIND_NAME } from '../format/fittingNames.js';
 
-type SortKey = 'tag' | 'chainage' | 'kind' | 'pressure' | 'thrust' | 'concrete';
+/** Columns the table can sort by the number behind the cell; text columns sort by their text. */
+function compare(id: string) {
+  return (a: ViewRow, b: ViewRow) => {
+    const x = a.values[id] ?? null;
+    const y = b.values[id] ?? null;
+    if (x !== null || y !== null) return (x ?? -Infinity) - (y ?? -Infinity);
+    return a.cells[id]!.localeCompare(b.cells[id]!, undefined, { numeric: true });
+  };
+}
 
-const concreteOf = (f: ScheduleFitting) => restraintConcrete(f.restraint);
-const SORTS: Record<SortKey, (a: ScheduleFitting, b: ScheduleFitting) => number> = {
-  tag: (a, b) => a.tag.localeCompare(b.tag, undefined, { numeric: true }),
-  chainage: (a, b) => a.chainage - b.chainage,
-  kind: (a, b) => a.kind.localeCompare(b.kind),
-  pressure: (a, b) => a.designPressure - b.designPressure,
-  thrust: (a, b) => norm(a.thrust) - norm(b.thrust),
-  concrete: (a, b) => concreteOf(a) - concreteOf(b),
-};
-
-/** One row per fitting, sortable; a row selects its fitting on the plan. The canvas in words. */
+/**
+ * One row per fitting in crew order (by run and chainage), sortable; a row selects its fitting on the
+ * plan. The cells are the schedule view's, the same as the CSV, the command line and the print.
+ */
 export function ScheduleTable() {
-  const project = useApp((s) => s.project);
   const selection = useApp((s) => s.selection);
+  const units = useApp((s) => s.units);
   const analysis = useAnalysis();
   const actions = useActions();
-  const [sort, setSort] = useState<{ key: SortKey; up: boolean }>({ key: 'chainage', up: true });
-  const schedule = scheduleOf(analysis);
-  const rows = useMemo(() => {
-    const list = [...schedule.fittings].sort(SORTS[sort.key]);
-    return sort.up ? list : list.reverse();
-  }, [schedule, sort]);
-  const u = project.units;
-  const totals = schedule.fittings.reduce(
-    (t, f) => ({
-      block: t.block + restraintConcrete({ ...f.restraint, anchor: null }),
-      anchor: t.anchor + (f.restraint.anchor?.concreteVolume ?? 0),
-    }),
-    { block: 0, anchor: 0 },
-  );
-  const head = (key: SortKey, text: string) => (
-    <th aria-sort={sort.key === key ? (sort.up ? 'ascending' : 'descending') : 'none'}>
-      <button className="th-sort" onClick={() => setSort({ key, up: sort.key === key ? !sort.up : true })}>
-        {text}
-        {sort.key === key ? (sort.up ? ' ▲' : ' ▼') : ''}
-      </button>
-    </th>
-  );
-  const diam = (f: ScheduleFitting) =>
-    [...new Set(f.pipes.map((p) => show(p.outsideDiameter, 'diameter', u)))].join(' / ');
+  const [sort, setSort] = useState<{ id: string; up: boolean } | null>(null);
+  const view = scheduleView(analysis, units);
+  const columns = pickColumns(view, APP_COLUMNS);
+  const sorted = sort ? [...view.rows].sort(compare(sort.id)) : view.rows;
+  const rows = sort && !sort.up ? sorted.reverse() : sorted;
+  const total = view.rows.reduce((t, r) => t + (r.values.concrete ?? 0), 0);
+  const totalColumn = columns.findIndex((c) => c.id === 'concrete');
   return (
     <div className="schedule">
       <table className="schedule-table" data-testid="schedule-table">
         <thead>
           <tr>
-            {head('tag', 'Tag')}
-            {head('chainage', 'Chainage')}
-            {head('kind', 'Fitting')}
-            <th>Pipe OD</th>
-            <th>Defl.</th>
-            {head('pressure', 'Design pressure')}
-            <th>Governs</th>
-            {head('thrust', 'Thrust')}
-            <th>Static / dynamic</th>
-            <th title="Direction the thrust pushes, clockwise from north">Bears (from N)</th>
-            <th>Soil</th>
-            <th>Restraint</th>
-            {head('concrete', 'Concrete')}
-            <th>Warnings</th>
+            {columns.map((c) => (
+              <th key={c.id} aria-sort={sort?.id === c.id ? (sort.up ? 'ascending' : 'descending') : 'none'}>
+                <button
+                  className="th-sort"
+                  onClick={() => setSort({ id: c.id, up: sort?.id === c.id ? !sort.up : true })}
+                >
+                  {c.heading}
+                  {sort?.id === c.id ? (sort.up ? ' ▲' : ' ▼') : ''}
+                </button>
+              </th>
+            ))}
           </tr>
         </thead>
         <tbody>
-          {rows.map((f) => {
-            const gov = f.cases.find((c) => c.case === f.governingCase)!;
+          {rows.map((r) => {
+            const node = r.fitting.node;
+            const worst = r.fitting.diagnostics[0]?.severity;
             return (
               <tr
-                key={f.node}
-                className={selection.nodes.has(f.node) ? 'selected' : ''}
-                onClick={() => actions.selectNode(f.node)}
+                key={node}
+                className={`${selection.nodes.has(node) ? 'selected' : ''} ${worst === 'error' ? 'not-adequate' : ''}`}
+                onClick={() => actions.selectNode(node)}
                 tabIndex={0}
-                onKeyDown={(e) => e.key === 'Enter' && actions.selectNode(f.node)}
-                data-testid={`row-${f.node}`}
+                onKeyDown={(e) => e.key === 'Enter' && actions.selectNode(node)}
+                data-testid={`row-${node}`}
               >
-                <td className="tag">{f.tag}</td>
-                <td className="num">{show(f.chainage, 'length', u, 4)}</td>
-                <td>{KIND_NAME[f.kind]}</td>
-                <td className="num">{diam(f)}</td>
-                <td className="num">
-                  {f.deflection !== null
-                    ? show(f.deflection, 'angle', u)
-                    : f.branchAngle !== null
-                      ? show(f.branchAngle, 'angle', u)
-                      : ''}
-                </td>
-                <td className="num">{show(f.designPressure, 'pressure', u)}</td>
-                <td>{caseLabel(project, f.governingCase)}</td>
-                <td className="num strong">{showColumnForce(norm(f.thrust), u)}</td>
-                <td className="num">
-                  {showColumnForce(norm(gov.static), u)} / {showColumnForce(norm(gov.dynamic), u)}
-                </td>
-                <td>{bearingText(f.bearingDirection)}</td>
-                <td>{project.soils.find((s) => s.id === f.soil)?.label ?? f.soil}</td>
-                <td>{restraintSummary(f, u)}</td>
-                <td className="num">{concreteOf(f) > 0 ? show(concreteOf(f), 'volume', u) : '—'}</td>
-                <td className="warn-cell">
-                  {f.warnings.length > 0 ? <span title={f.warnings.join('\n')}>⚠ {f.warnings.length}</span> : ''}
-                </td>
+                {columns.map((c) => (
+                  <td key={c.id} className={c.kind === 'text' ? (c.id === 'mark' ? 'tag' : '') : 'num'} data-col={c.id}>
+                    {r.cells[c.id]}
+                  </td>
+                ))}
               </tr>
             );
           })}
         </tbody>
         <tfoot>
           <tr>
-            <td colSpan={12}>
-              {schedule.fittings.length} fittings · concrete in blocks {show(totals.block, 'volume', u)}, in anchors{' '}
-              {show(totals.anchor, 'volume', u)}
-            </td>
-            <td className="num strong">{show(totals.block + totals.anchor, 'volume', u)}</td>
-            <td />
+            <td colSpan={totalColumn}>{view.rows.length} fittings · total concrete</td>
+            <td className="num strong">{columnNumber(total, 'volume', units)}</td>
+            <td colSpan={columns.length - totalColumn - 1} />
           </tr>
         </tfoot>
       </table>
+      {view.notes.length > 0 && (
+        <ol className="schedule-notes" data-testid="schedule-notes">
+          {view.notes.map((n) => (
+            <li key={n.number} value={n.number} className={`note-${n.severity}`}>
+              {n.text} <span className="muted">({n.marks.join(', ')})</span>
+            </li>
+          ))}
+        </ol>
+      )}
       <p className="caution-foot">{SHORT_CAUTION}</p>
     </div>
   );

@@ -10,7 +10,7 @@ export function SoilsPanel() {
   const project = useApp((s) => s.project);
   const actions = useActions();
   const [pick, setPick] = useState(SOIL_LIBRARY[0]!.id);
-  const u = project.units;
+  const u = useApp((s) => s.units);
   const d = project.design;
   const setSoil = (id: string, patch: Partial<Soil>) => actions.updateSoil(id, patch);
   const copyFromLibrary = () => {

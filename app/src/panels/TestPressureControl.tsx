@@ -11,7 +11,7 @@ export function TestPressureControl() {
   const [rule, setRule] = useState<TestRule>(
     project.pipes.some((p) => p.material === 'pvc') ? 'awwa-c605' : 'awwa-c600',
   );
-  const u = project.units;
+  const u = useApp((s) => s.units);
   const test = project.loadCases.find((c) => c.kind === 'test') ?? project.loadCases.find((c) => c.id === 'test');
   const working =
     project.loadCases.find((c) => c.kind === 'working') ??

@@ -74,6 +74,6 @@ describe('profileData levels', () => {
     const a = analyse(doc);
     const { points } = profileData(doc, a);
     expect(points[0]!.tag).toBeNull(); // a tie-in is not a fitting to restrain
-    expect(points[1]!.tag).toBe(a.byNode.get('n2')!.tag);
+    expect(points[1]!.tag).toBe(a.byNode.get('n2')!.mark);
   });
 });

@@ -52,7 +52,7 @@ export function profileData(project: Project, analysis: Analysis): ProfileData {
       chainage: chain.get(id)!,
       pipe: n.elevation,
       ground: n.elevation + od / 2 + n.cover,
-      tag: analysis.byNode.get(id)?.tag ?? null,
+      tag: analysis.byNode.get(id)?.mark ?? null,
     };
   });
   const grades = project.loadCases

@@ -19,7 +19,7 @@ function roundForce(f: number, us: boolean): number {
 /** Scale bar, north arrow, grid spacing, pointer coordinates and the legend, over the plan canvas. */
 export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: RefObject<HTMLSpanElement | null> }) {
   const viewport = useApp((s) => s.viewport);
-  const units = useApp((s) => s.project.units);
+  const units = useApp((s) => s.units);
   const tool = useApp((s) => s.tool);
   const caseView = useApp((s) => s.caseView);
   const cases = useApp((s) => s.project.loadCases);

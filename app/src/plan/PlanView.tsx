@@ -23,6 +23,7 @@ export function PlanView() {
   const store = useAppStore();
   const actions = useActions();
   const project = useApp((s) => s.project);
+  const units = useApp((s) => s.units);
   const viewport = useApp((s) => s.viewport);
   const caseView = useApp((s) => s.caseView);
   const selection = useApp((s) => s.selection);
@@ -87,15 +88,15 @@ export function PlanView() {
   const drawStatic = useCallback(
     (c: Context) => {
       const ctx = native(c);
-      drawGrid(ctx, viewport, size.width, size.height, project.units);
+      drawGrid(ctx, viewport, size.width, size.height, units);
       drawRestraints(ctx, viewport, scene);
       drawPipes(ctx, viewport, scene);
       const space = new LabelSpace(size.width, size.height);
       const tags = placeTags(ctx, viewport, scene, space);
-      drawArrows(ctx, viewport, scene, project.units, space);
+      drawArrows(ctx, viewport, scene, units, space);
       drawFittings(ctx, viewport, scene, tags);
     },
-    [viewport, size, scene, project.units],
+    [viewport, size, scene, units],
   );
 
   // A fitting picked in the schedule or a list may be off screen: bring it to the middle.
@@ -130,7 +131,7 @@ export function PlanView() {
     const s = store.getState();
     return {
       snapping: s.snapping && !free,
-      lengthStep: s.project.units === 'us' ? 5 * FOOT : 1,
+      lengthStep: s.units === 'us' ? 5 * FOOT : 1,
       samePoint: 3 / s.viewport.scale,
     };
   };
@@ -181,8 +182,8 @@ export function PlanView() {
     const s = store.getState();
     const at = planAt(e);
     if (coords.current) {
-      const u = s.project.units === 'us' ? FOOT : 1;
-      const sym = s.project.units === 'us' ? 'ft' : 'm';
+      const u = s.units === 'us' ? FOOT : 1;
+      const sym = s.units === 'us' ? 'ft' : 'm';
       coords.current.textContent = `E ${(at.x / u).toFixed(1)} ${sym}   N ${(at.y / u).toFixed(1)} ${sym}`;
     }
     if (panning.current) {
@@ -270,7 +271,6 @@ export function PlanView() {
     return () => el?.removeEventListener('wheel', onWheel);
   }, [onWheel]);
 
-  const units = project.units;
   const cursor = tool === 'draw' ? 'crosshair' : tool === 'pan' ? 'grab' : 'default';
   const snappedNow = snapping && draw.phase === 'drawing';
   return (

@@ -119,11 +119,11 @@ export function planScene(
     const axis = f.legs[0] ? plan(f.legs[0].direction) : { x: 1, y: 0 };
     fittings.push({
       node: id,
-      tag: f.tag,
+      tag: f.mark,
       kind: f.geometry.kind,
       at,
       axis,
-      warned: f.warnings.length > 0,
+      warned: f.diagnostics.some((d) => d.severity !== 'info'),
       selected: selection.nodes.has(id),
     });
     if (preview?.has(id)) continue; // results follow on drop

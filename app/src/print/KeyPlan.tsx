@@ -1,6 +1,7 @@
 import type { Analysis, Project } from '@mainbrace/solver';
 import { formatSi } from '@mainbrace/solver';
 import { gridSpacing } from '../state/viewport.js';
+import { useApp } from '../state/StoreContext.js';
 
 const W = 420;
 const H = 230;
@@ -8,6 +9,7 @@ const PAD = 22;
 
 /** A small plan of the whole route with every fitting's tag, north and a scale: where each row is. */
 export function KeyPlan({ project, analysis }: { project: Project; analysis: Analysis }) {
+  const units = useApp((s) => s.units);
   if (project.nodes.length === 0) return null;
   const xs = project.nodes.map((n) => n.x),
     ys = project.nodes.map((n) => n.y);
@@ -45,7 +47,7 @@ export function KeyPlan({ project, analysis }: { project: Project; analysis: Ana
           <g key={f.node.id}>
             <circle cx={sx(f.node.x)} cy={sy(f.node.y)} r="2.2" fill="#26251f" />
             <text x={sx(f.node.x) + 3} y={sy(f.node.y) + (i % 2 ? 9 : -3)} fontSize="7.5" fontWeight="700">
-              {f.tag}
+              {f.mark}
             </text>
           </g>
         ))}
@@ -58,7 +60,7 @@ export function KeyPlan({ project, analysis }: { project: Project; analysis: Ana
         <g transform={`translate(10, ${H - 12})`}>
           <rect width={bar * scale} height="4" fill="#26251f" />
           <text x={bar * scale + 4} y="5" fontSize="7.5">
-            {formatSi(bar, 'length', project.units)}
+            {formatSi(bar, 'length', units)}
           </text>
         </g>
       </svg>

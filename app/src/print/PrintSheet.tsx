@@ -1,17 +1,24 @@
-import {
-  CAUTIONS,
-  caseLabel,
-  calculationRecord,
-  norm,
-  restraintConcrete,
-  restraintSummary,
-  scheduleOf,
-} from '@mainbrace/solver';
+import { CAUTIONS, calculationRecord, columnNumber, columnUnit, pickColumns, scheduleView } from '@mainbrace/solver';
 import { useAnalysis, useApp } from '../state/StoreContext.js';
-import { show, showColumnForce } from '../format/quantity.js';
-import { bearingText, fittingTitle, KIND_NAME } from '../format/fittingNames.js';
+import { show } from '../format/quantity.js';
+import { fittingTitle } from '../format/fittingNames.js';
 import { CalcRecordView } from '../panels/CalcRecordView.js';
 import { KeyPlan } from './KeyPlan.js';
+
+/** The columns the printed schedule shows, from the one schedule view. */
+const PRINT_COLUMNS = [
+  'mark',
+  'chainage',
+  'fitting',
+  'od',
+  'pressure',
+  'case',
+  'thrust',
+  'bears',
+  'soil',
+  'restraint',
+  'notes',
+];
 
 /**
  * The printable fitting schedule: its own layout (landscape sheet), shown as a preview over the app
@@ -21,11 +28,12 @@ import { KeyPlan } from './KeyPlan.js';
 export function PrintSheet({ onClose }: { onClose: () => void }) {
   const project = useApp((s) => s.project);
   const analysis = useAnalysis();
-  const schedule = scheduleOf(analysis);
-  const u = project.units;
+  const u = useApp((s) => s.units);
+  const view = scheduleView(analysis, u);
+  const columns = pickColumns(view, PRINT_COLUMNS);
   const d = project.design;
   const today = new Date().toISOString().slice(0, 10);
-  const concrete = schedule.fittings.reduce((v, f) => v + restraintConcrete(f.restraint), 0);
+  const concrete = view.rows.reduce((v, r) => v + (r.values.concrete ?? 0), 0);
   return (
     <div className="print-preview" data-testid="print-sheet">
       <div className="print-toolbar no-print">
@@ -45,7 +53,7 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
             <dt>Units</dt>
             <dd>{u === 'si' ? 'SI (kN, kPa, m, m³)' : 'US customary (lbf/kip, psi, ft, yd³)'}</dd>
             <dt>Fittings</dt>
-            <dd>{schedule.fittings.length}</dd>
+            <dd>{view.rows.length}</dd>
           </dl>
         </header>
         <section className="sheet-caution" role="note">
@@ -131,54 +139,52 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
           <h2>Schedule</h2>
           <table className="sheet-schedule">
             <colgroup>
-              {[4.5, 7.5, 8, 8, 7, 7, 6, 6, 7, 19, 20].map((w, i) => (
+              {[4.5, 6.5, 9, 6, 6.5, 7, 6, 6.5, 7, 33, 8].map((w, i) => (
                 <col key={i} style={{ width: `${w}%` }} />
               ))}
             </colgroup>
             <thead>
               <tr>
-                <th>Tag</th>
-                <th>Chainage</th>
-                <th>Fitting</th>
-                <th>Pipe OD</th>
-                <th>Design pressure</th>
-                <th>Governs</th>
-                <th>Thrust</th>
-                <th>Bears (from N)</th>
-                <th>Soil</th>
-                <th>Restraint</th>
-                <th>Warnings</th>
+                {columns.map((c) => (
+                  <th key={c.id}>{c.heading}</th>
+                ))}
               </tr>
             </thead>
             <tbody>
-              {schedule.fittings.map((f) => (
-                <tr key={f.node}>
-                  <td className="tag">{f.tag}</td>
-                  <td className="num">{show(f.chainage, 'length', u, 4)}</td>
-                  <td>
-                    {KIND_NAME[f.kind]}
-                    {f.deflection !== null && f.kind !== 'valve' && f.kind !== 'reducer'
-                      ? ` ${show(f.deflection, 'angle', u)}`
-                      : ''}
-                  </td>
-                  <td className="num">
-                    {[...new Set(f.pipes.map((p) => show(p.outsideDiameter, 'diameter', u)))].join(' / ')}
-                  </td>
-                  <td className="num">{show(f.designPressure, 'pressure', u)}</td>
-                  <td>{caseLabel(project, f.governingCase)}</td>
-                  <td className="num strong">{showColumnForce(norm(f.thrust), u)}</td>
-                  <td>{bearingText(f.bearingDirection)}</td>
-                  <td>{project.soils.find((s) => s.id === f.soil)?.label ?? f.soil}</td>
-                  <td>{restraintSummary(f, u)}</td>
-                  <td className="small">{f.warnings.join(' ')}</td>
+              {view.rows.map((r) => (
+                <tr
+                  key={r.fitting.node}
+                  className={r.fitting.diagnostics[0]?.severity === 'error' ? 'not-adequate' : ''}
+                >
+                  {columns.map((c) => (
+                    <td key={c.id} className={c.kind === 'text' ? (c.id === 'mark' ? 'tag' : '') : 'num'}>
+                      {r.cells[c.id]}
+                    </td>
+                  ))}
                 </tr>
               ))}
             </tbody>
           </table>
           <p className="sheet-total">
-            Total concrete in blocks and anchors: <strong>{show(concrete, 'volume', u)}</strong> for{' '}
-            {schedule.fittings.length} fittings
+            Total concrete in blocks and anchors:{' '}
+            <strong>
+              {columnNumber(concrete, 'volume', u)} {columnUnit('volume', u)}
+            </strong>{' '}
+            for {view.rows.length} fittings
           </p>
+          {view.notes.length > 0 && (
+            <>
+              <h3>Notes</h3>
+              <ol className="sheet-notes">
+                {view.notes.map((n) => (
+                  <li key={n.number} value={n.number} className={`note-${n.severity}`}>
+                    {n.severity === 'error' ? <strong>Not adequate. </strong> : null}
+                    {n.text} ({n.marks.join(', ')})
+                  </li>
+                ))}
+              </ol>
+            </>
+          )}
         </section>
         <section className="sheet-cautions">
           <h2>Cautions</h2>
@@ -193,7 +199,7 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
           {analysis.fittings.map((f) => (
             <div className="appendix-fitting" key={f.node.id}>
               <h3>
-                {f.tag} — {fittingTitle(f, u)} (node {f.node.id}
+                {f.mark} — {fittingTitle(f.geometry)} (node {f.node.id}
                 {f.node.label ? `, ${f.node.label}` : ''})
               </h3>
               {calculationRecord(project, f).length > 0 && <CalcRecordView fitting={f} project={project} />}

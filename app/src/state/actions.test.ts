@@ -1,3 +1,4 @@
+import { savedDocument } from './savedDocument.js';
 import { describe, expect, it, vi } from 'vitest';
 import { createAppStore } from './store.js';
 import { createActions } from './actions.js';
@@ -35,9 +36,18 @@ describe('document edits and history', () => {
   it('records one step per edit and none for an edit that changes nothing', () => {
     const { actions, undoSteps } = app();
     actions.renameProject('Saltmarsh Way rising main');
-    actions.setUnits('si'); // already SI: no new document
     actions.removeCase('working'); // the last case cannot go: no new document
     expect(undoSteps()).toBe(1);
+  });
+
+  it('switches display units as a view setting: no undo step, the same document, saved with the new units', () => {
+    const { store, actions, undoSteps, doc } = app();
+    actions.setUnits('us');
+    expect(undoSteps()).toBe(0);
+    expect(store.getState().project).toBe(doc);
+    expect(store.getState().units).toBe('us');
+    expect(savedDocument(store.getState()).units).toBe('us');
+    expect(savedDocument(store.getState())).toBe(savedDocument(store.getState()));
   });
 
   it('leaves no undo step for view, tool, selection, snapping or drawer changes', () => {

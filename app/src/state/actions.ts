@@ -95,7 +95,8 @@ export function createActions(store: AppStore) {
     updatePipe: (id: string, patch: Partial<Pipe>) =>
       edit((p) => updatePipe(p, id, patch), 'label' in patch ? `pipe-label-${id}` : undefined),
     renameProject: (name: string) => edit((p) => ({ ...p, name }), 'project-name'),
-    setUnits: (units: Project['units']) => edit((p) => (p.units === units ? p : { ...p, units })),
+    /** Display units are a view setting: no undo step, no change to any result. */
+    setUnits: (units: Project['units']) => set({ units }),
     updateDesign: (patch: Partial<Project['design']>) => edit((p) => ({ ...p, design: { ...p.design, ...patch } })),
     setWaterDensity: (density: number) => edit((p) => ({ ...p, water: { density } })),
     updateCase: (id: string, patch: Partial<LoadCase>) =>
@@ -128,7 +129,7 @@ export function createActions(store: AppStore) {
     /** Replaces the whole document (open, new); it is one undoable step like any edit. */
     replaceProject: (project: Project) => {
       edit(() => project);
-      set({ selection: EMPTY_SELECTION, draw: { phase: 'idle' }, dragPreview: null });
+      set({ units: project.units, selection: EMPTY_SELECTION, draw: { phase: 'idle' }, dragPreview: null });
     },
 
     /**

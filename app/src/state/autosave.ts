@@ -1,3 +1,4 @@
+import { savedDocument } from './savedDocument.js';
 import { get, set } from 'idb-keyval';
 import type { Project } from '@mainbrace/solver';
 import type { AppStore } from './store.js';
@@ -43,11 +44,11 @@ export async function restoreProject(): Promise<Restored> {
 export function startAutosave(store: AppStore, onFailure: (message: string) => void): () => void {
   let timer: ReturnType<typeof setTimeout> | null = null;
   let failed = false;
-  let saved: Project | null = store.getState().project;
+  let saved: Project | null = savedDocument(store.getState());
   const flush = () => {
     if (timer) clearTimeout(timer);
     timer = null;
-    const project = store.getState().project;
+    const project = savedDocument(store.getState());
     if (project === saved) return;
     saved = project;
     set(KEY, JSON.stringify(project)).then(
@@ -62,7 +63,7 @@ export function startAutosave(store: AppStore, onFailure: (message: string) => v
     );
   };
   const unsubscribe = store.subscribe((s, prev) => {
-    if (s.project === prev.project) return;
+    if (savedDocument(s) === savedDocument(prev)) return;
     if (timer) clearTimeout(timer);
     timer = setTimeout(flush, DELAY_MS);
   });

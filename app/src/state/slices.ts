@@ -1,4 +1,4 @@
-import type { Project } from '@mainbrace/solver';
+import type { Project, UnitSystem } from '@mainbrace/solver';
 import type { PipeSpec, PlanPoint } from './documentEdits.js';
 import type { Viewport } from './viewport.js';
 import type { DrawState } from '../tools/drawTool.js';
@@ -22,6 +22,8 @@ export interface ProjectSlice {
 
 /** How the plan and the panels are shown. */
 export interface ViewSlice {
+  /** display units: a view setting, saved into the file but never an undo step of the design */
+  units: UnitSystem;
   viewport: Viewport;
   caseView: CaseView;
   drawer: { tab: DrawerTab; height: 'low' | 'high' | 'full' | 'closed' };
@@ -45,7 +47,8 @@ export interface SelectionSlice {
 
 export const projectSlice = (project: Project): ProjectSlice => ({ project });
 
-export const viewSlice = (): ViewSlice => ({
+export const viewSlice = (units: UnitSystem): ViewSlice => ({
+  units,
   viewport: { scale: 1, left: 0, top: 0 },
   caseView: { kind: 'envelope' },
   drawer: { tab: 'schedule', height: 'low' },

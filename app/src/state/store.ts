@@ -29,7 +29,12 @@ export type AppStore = StoreApi<AppState> & { temporal: StoreApi<TemporalState<{
 export function createAppStore(project: Project, pipeSpec: PipeSpec): AppStore {
   return createStore<AppState>()(
     temporal(
-      (): AppState => ({ ...projectSlice(project), ...viewSlice(), ...toolSlice(pipeSpec), ...selectionSlice() }),
+      (): AppState => ({
+        ...projectSlice(project),
+        ...viewSlice(project.units),
+        ...toolSlice(pipeSpec),
+        ...selectionSlice(),
+      }),
       {
         partialize: (s) => ({ project: s.project }),
         equality: (a, b) => a.project === b.project,

@@ -12,7 +12,7 @@ export * from './units/format.js';
 export * from './units/quantities.js';
 export { legsByNode, type Leg } from './network/legs.js';
 export { fittingGeometry, needsRestraint, type FittingKind, type FittingGeometry } from './network/fittingKind.js';
-export { fittingTag, TAG_CODES } from './network/fittingTag.js';
+export { runLayout, fittingMarks, runLetter, type Run, type RunLayout } from './network/runs.js';
 export { pressureAt, VACUUM_GAUGE_PRESSURE } from './pressure/nodePressure.js';
 export { momentumBalance, type ThrustParts } from './thrust/momentumBalance.js';
 export {
@@ -29,8 +29,35 @@ export { SOIL_LIBRARY, findLibrarySoil, type LibrarySoil } from './restraint/soi
 export { rankinePassiveCoefficient, passiveResistance } from './restraint/passiveResistance.js';
 export { scheduleOf, type Schedule, type ScheduleFitting } from './schedule/scheduleRows.js';
 export { scheduleCsv } from './schedule/scheduleCsv.js';
-export { scheduleTable, restraintSummary } from './schedule/scheduleTable.js';
-export { SCHEDULE_COLUMNS, columnHeading, columnValue, type ScheduleColumn } from './schedule/scheduleColumns.js';
+export { scheduleTable } from './schedule/scheduleTable.js';
+export { scheduleJson, diagnosticJson, JSON_DECIMALS } from './schedule/scheduleJson.js';
+export { restraintSummary, blockText, restrainedText } from './schedule/restraintText.js';
+export { SCHEDULE_COLUMNS, TABLE_COLUMNS, APP_COLUMNS, type ScheduleColumn } from './schedule/scheduleColumns.js';
+export {
+  scheduleView,
+  pickColumns,
+  type ScheduleView,
+  type ViewColumn,
+  type ViewRow,
+} from './schedule/scheduleView.js';
+export { scheduleNotes, type ScheduleNote } from './schedule/scheduleNotes.js';
+export { columnNumber, columnUnit, quantityText, COLUMN_UNITS, type ColumnKind } from './schedule/columnUnits.js';
+export { KIND_NAME, bearingText, compassPoint, fittingTitle, angleText } from './schedule/fittingNames.js';
+export { DIAGNOSTIC_CODES, type CodeSpec } from './diagnostics/codes.js';
+export {
+  diagnostic,
+  bySeverity,
+  uniqueDiagnostics,
+  worstSeverity,
+  type Diagnostic,
+  type DiagnosticCode,
+  type Severity,
+  type Subject,
+} from './diagnostics/diagnostic.js';
+export { diagnosticText, type WordingContext } from './diagnostics/wording.js';
+export { wordingContext, legName, legTarget } from './diagnostics/context.js';
+export { REGISTER, provenance, unverified, type ProvenanceId } from './provenance/register.js';
+export { notVerifiedText, type ProvenanceEntry, type SourceKind } from './provenance/entry.js';
 export { CAUTIONS, SHORT_CAUTION } from './schedule/cautions.js';
 export { restraintConcrete } from './schedule/concrete.js';
 export * from './catalog/catalog.js';

@@ -81,11 +81,10 @@ describe('the command line', () => {
       const mine = expected.get(f.node);
       if (!mine) continue; // the valve follows the closed-valve rule, checked in unit tests
       for (const c of f.cases) {
-        mine
-          .get(c.case)!
-          .forEach((v, k) =>
-            expect(Math.abs(c.total[k] - v)).toBeLessThan(1e-6 * Math.hypot(...mine.get(c.case)!) + 1e-6),
-          );
+        mine.get(c.case)!.forEach((v, k) =>
+          // JSON forces are stated to 0.1 N (docs/project-format.md): within half of that.
+          expect(Math.abs(c.total[k] - v)).toBeLessThan(0.05 + 1e-9 * Math.hypot(...mine.get(c.case)!)),
+        );
       }
       const r = f.restraint;
       expect(r.block !== null || r.anchor !== null || r.restrainedLength !== null).toBe(true);
@@ -97,15 +96,15 @@ describe('the command line', () => {
     expect(si.status).toBe(0);
     expect(si.stdout.split('\r\n')[0]).toContain('Thrust (kN)');
     const us = run('schedule', demo, '--format', 'csv', '--units', 'us');
-    expect(us.stdout.split('\r\n')[0]).toContain('Thrust (lbf)');
+    expect(us.stdout.split('\r\n')[0]).toContain('Thrust (kip)');
     expect(us.stdout.split('\r\n')[0]).toContain('Block concrete (yd³)');
   });
 
   it('prints a readable table with the cautions, and explains one fitting', () => {
     const t = run('schedule', demo);
-    expect(t.stdout).toContain('B4');
+    expect(t.stdout).toMatch(/^A4 .*Bend 45°/m);
     expect(t.stdout).toMatch(/licensed professional engineer/);
-    const e = run('explain', demo, 'n4');
+    const e = run('explain', demo, 'A4');
     expect(e.status).toBe(0);
     expect(e.stdout).toContain('Required bearing area');
     expect(e.stdout).toContain('A = SF · T_h / σ_b');

@@ -2,8 +2,7 @@ import { norm } from '../geometry/vector.js';
 import type { Project, ProjectNode } from '../model/projectSchema.js';
 import { legsByNode, type Leg } from '../network/legs.js';
 import { fittingGeometry, needsRestraint, type FittingGeometry } from '../network/fittingKind.js';
-import { fittingTag } from '../network/fittingTag.js';
-import { chainage } from '../network/chainage.js';
+import { fittingMarks, runLayout, type Run } from '../network/runs.js';
 import {
   fittingThrust,
   thrustEnvelope,
@@ -12,20 +11,23 @@ import {
   type ThrustEnvelope,
 } from '../thrust/fittingThrust.js';
 import { VACUUM_GAUGE_PRESSURE } from '../pressure/nodePressure.js';
-import { caseLabel } from '../model/caseLabel.js';
 import { waterWeightInFitting } from '../thrust/waterWeight.js';
 import { sizeRestraint, type Restraint } from '../restraint/sizeRestraint.js';
 import { thrustSteps } from './thrustSteps.js';
-import { formatSi } from '../units/format.js';
+import { diagnostic, uniqueDiagnostics, type Diagnostic } from '../diagnostics/diagnostic.js';
+import type { ProvenanceId } from '../provenance/register.js';
 import type { CalcStep } from './calcRecord.js';
 
 /** Everything computed for one fitting; the schedule, the plan and the record all read this. */
 export interface FittingAnalysis {
   node: ProjectNode;
-  tag: string;
+  /** run letter and number in chainage order along the run: A1, A2 … B1 */
+  mark: string;
+  /** letter of the run the fitting stands on */
+  run: string;
   legs: Leg[];
   geometry: FittingGeometry;
-  /** m along the route from its start */
+  /** m along its run from the run's start */
   chainage: number;
   /** one state per case, the worst of a valve's open and closed states */
   cases: CaseThrust[];
@@ -35,28 +37,33 @@ export interface FittingAnalysis {
   /** N, weight of the water in the fitting body (acts in −z; not part of the thrust) */
   waterWeight: number;
   restraint: Restraint;
-  warnings: string[];
+  /** findings about this fitting, most severe first */
+  diagnostics: Diagnostic[];
+  /** register entries the results rely on (thrust and restraint) */
+  basis: ProvenanceId[];
 }
 
 export interface Analysis {
   project: Project;
-  /** one entry per node that needs restraint, in node order */
+  /** one entry per node that needs restraint, by run (main first) and chainage */
   fittings: FittingAnalysis[];
   byNode: Map<string, FittingAnalysis>;
   legs: Map<string, Leg[]>;
+  runs: Run[];
+  /** run letter of every node on a pipe */
+  runOf: Map<string, string>;
+  /** m along its run of every node on a pipe */
   chainage: Map<string, number>;
+  /** marks of every fitting, tie-ins included */
+  marks: Map<string, string>;
 }
 
-function negativePressureWarnings(project: Project, cases: readonly CaseThrust[]): string[] {
-  const out: string[] = [];
+function negativePressure(node: string, cases: readonly CaseThrust[]): Diagnostic[] {
+  const out: Diagnostic[] = [];
   for (const c of cases) {
     if (c.pressure >= 0) continue;
-    const label = caseLabel(project, c.caseId);
-    out.push(
-      c.pressure <= VACUUM_GAUGE_PRESSURE + 1e-6
-        ? `The hydraulic grade of case "${label}" lies far below this node: the water column would separate (pressure held at the vapour pressure, ${formatSi(c.pressure, 'pressure', project.units)}); check the profile and the case.`
-        : `Pressure at this node is below zero (${formatSi(c.pressure, 'pressure', project.units)}) in case "${label}": the node stands above that case's hydraulic grade; check for vacuum and air entry.`,
-    );
+    const code = c.pressure <= VACUUM_GAUGE_PRESSURE + 1e-6 ? 'pressure.vapour-floor' : 'pressure.below-zero';
+    out.push(diagnostic(code, { node, case: c.caseId }, { pressure: c.pressure }));
   }
   return out;
 }
@@ -65,7 +72,7 @@ function negativePressureWarnings(project: Project, cases: readonly CaseThrust[]
  * Water in equals water out at a joint (continuity): a node whose pipes' flows do not balance, or a
  * cap with flow into it, has a flow typed wrong somewhere. Tie-ins and free ends pass water on.
  */
-function flowImbalance(legs: readonly Leg[], geometry: FittingGeometry): ((p: Project) => string) | null {
+function flowImbalance(node: string, legs: readonly Leg[], geometry: FittingGeometry): Diagnostic | null {
   if (geometry.kind === 'tie-in' || legs.length === 0) return null;
   let net = 0;
   let largest = 0;
@@ -74,10 +81,9 @@ function flowImbalance(legs: readonly Leg[], geometry: FittingGeometry): ((p: Pr
     largest = Math.max(largest, Math.abs(l.outflow));
   }
   if (Math.abs(net) <= 1e-6 + 0.01 * largest) return null;
-  return (p) =>
-    geometry.kind === 'dead-end'
-      ? `Flow of ${formatSi(Math.abs(net), 'flow', p.units)} runs into this cap: a closed end has no flow; check the pipe's flow or make the node a tie-in.`
-      : `The flows at this node do not balance (${formatSi(Math.abs(net), 'flow', p.units)} more ${net > 0 ? 'leaves than arrives' : 'arrives than leaves'}); check the pipes' flows.`;
+  return geometry.kind === 'dead-end'
+    ? diagnostic('flow.into-cap', { node }, { flow: Math.abs(net) })
+    : diagnostic('flow.unbalanced', { node }, { net });
 }
 
 function analyseFitting(
@@ -85,53 +91,65 @@ function analyseFitting(
   node: ProjectNode,
   legs: Leg[],
   geometry: FittingGeometry,
-  at: number,
+  place: { mark: string; run: string; chainage: number },
 ): FittingAnalysis {
   const states = fittingThrust(node, geometry.kind, legs, project.loadCases, project.water.density);
   const cases = worstPerCase(states);
   const envelope = thrustEnvelope(states);
   const restraint = sizeRestraint(project, node, legs, geometry, envelope);
-  const warnings = negativePressureWarnings(project, cases);
-  for (const w of restraint.warnings) warnings.push(w);
-  const unbalanced = flowImbalance(legs, geometry);
-  if (unbalanced) warnings.push(unbalanced(project));
-  if (node.valve && geometry.kind === 'valve') {
-    warnings.push(
-      'Valve: sized open, and closed with the pressure on either side; its restraint holds the thrust both ways along the line.',
-    );
-  } else if (node.valve) {
-    warnings.push(
-      'The valve flag applies only where two pipes meet; this node was sized as its fitting without a closed valve.',
-    );
-  }
-  if (norm(envelope.governing.total) === 0) warnings.push('No thrust at this fitting in any case.');
+  const found = [...negativePressure(node.id, cases), ...restraint.diagnostics];
+  const unbalanced = flowImbalance(node.id, legs, geometry);
+  if (unbalanced) found.push(unbalanced);
+  if (node.valve && geometry.kind === 'valve') found.push(diagnostic('valve.both-ways', { node: node.id }));
+  else if (node.valve) found.push(diagnostic('valve.flag-ignored', { node: node.id }));
+  if (norm(envelope.governing.total) === 0) found.push(diagnostic('thrust.none', { node: node.id }));
   return {
     node,
-    tag: fittingTag(geometry.kind, node.id),
+    ...place,
     legs,
     geometry,
-    chainage: at,
     cases,
     states,
     envelope,
     waterWeight: waterWeightInFitting(legs, project.water.density),
     restraint,
-    warnings,
+    diagnostics: uniqueDiagnostics(found),
+    basis: restraint.basis,
   };
 }
 
 /** The whole route's fittings, thrusts and restraints: a pure function of the project document. */
 export function analyseProject(project: Project): Analysis {
   const legs = legsByNode(project);
-  const chain = chainage(project, legs);
+  const layout = runLayout(project, legs);
+  const geometry = new Map<string, FittingGeometry>();
+  for (const node of project.nodes) geometry.set(node.id, fittingGeometry(node, legs.get(node.id) ?? []));
+  const marks = fittingMarks(layout, (id) => {
+    const kind = geometry.get(id)!.kind;
+    return kind !== 'straight' && kind !== 'none';
+  });
   const fittings: FittingAnalysis[] = [];
-  for (const node of project.nodes) {
-    const nodeLegs = legs.get(node.id) ?? [];
-    const geometry = fittingGeometry(node, nodeLegs);
-    if (!needsRestraint(geometry.kind)) continue;
-    fittings.push(analyseFitting(project, node, nodeLegs, geometry, chain.get(node.id) ?? 0));
+  const nodeById = new Map(project.nodes.map((n) => [n.id, n]));
+  const done = new Set<string>();
+  for (const run of layout.runs) {
+    for (const { id } of run.nodes) {
+      const g = geometry.get(id)!;
+      if (layout.runOf.get(id) !== run.letter || !needsRestraint(g.kind) || done.has(id)) continue;
+      done.add(id);
+      const place = { mark: marks.get(id)!, run: run.letter, chainage: layout.chainage.get(id)! };
+      fittings.push(analyseFitting(project, nodeById.get(id)!, legs.get(id) ?? [], g, place));
+    }
   }
-  return { project, fittings, byNode: new Map(fittings.map((f) => [f.node.id, f])), legs, chainage: chain };
+  return {
+    project,
+    fittings,
+    byNode: new Map(fittings.map((f) => [f.node.id, f])),
+    legs,
+    runs: layout.runs,
+    runOf: layout.runOf,
+    chainage: layout.chainage,
+    marks,
+  };
 }
 
 const cache = new WeakMap<Project, Analysis>();

@@ -1,16 +1,20 @@
-import { calculationRecord, type FittingAnalysis } from '../analysis/analyse.js';
+import { calculationRecord, type Analysis, type FittingAnalysis } from '../analysis/analyse.js';
 import type { RecordValue } from '../analysis/calcRecord.js';
 import { formatSi } from '../units/format.js';
 import type { UnitSystem } from '../units/conversions.js';
 import { SHORT_CAUTION } from '../schedule/cautions.js';
-import type { Project } from '../model/projectSchema.js';
+import { fittingTitle } from '../schedule/fittingNames.js';
+import { diagnosticText } from '../diagnostics/wording.js';
+import { wordingContext } from '../diagnostics/context.js';
+import { notVerifiedText } from '../provenance/entry.js';
+import { REGISTER, unverified } from '../provenance/register.js';
 
 const shown = (v: RecordValue, units: UnitSystem) => formatSi(v.value, v.dimension, units, 4);
 
 /** A fitting's calculation record as plain text: each step's formula, inputs with sources, result. */
-export function explainText(project: Project, f: FittingAnalysis, units: UnitSystem): string {
-  const out = [`${f.tag} (node ${f.node.id}) — ${f.geometry.kind}`, ''];
-  calculationRecord(project, f).forEach((step, i) => {
+export function explainText(a: Analysis, f: FittingAnalysis, units: UnitSystem): string {
+  const out = [`${f.mark} — ${fittingTitle(f.geometry)} (node ${f.node.id}, run ${f.run})`, ''];
+  calculationRecord(a.project, f).forEach((step, i) => {
     out.push(`${i + 1}. ${step.title}`, `   ${step.formula}`);
     for (const v of step.inputs)
       out.push(`     ${v.symbol} = ${shown(v, units)}  ${v.label}${v.source ? ` [${v.source}]` : ''}`);
@@ -19,7 +23,22 @@ export function explainText(project: Project, f: FittingAnalysis, units: UnitSys
     );
     out.push(`   Source: ${step.reference}`, '');
   });
-  if (f.warnings.length) out.push('Warnings', ...f.warnings.map((w) => `  - ${w}`), '');
+  if (f.diagnostics.length) {
+    const context = wordingContext(a, units);
+    out.push(
+      'Findings',
+      ...f.diagnostics.map((d) => `  - [${d.severity}] ${diagnosticText(d, context)} (${d.code})`),
+      '',
+    );
+  }
+  const open = unverified(f.basis);
+  if (open.length) {
+    out.push(
+      'Relies on values not yet verified',
+      ...open.map((id) => `  - ${REGISTER[id].quantity}: ${notVerifiedText(REGISTER[id])}`),
+      '',
+    );
+  }
   out.push(SHORT_CAUTION);
   return out.join('\n') + '\n';
 }

@@ -6,10 +6,11 @@ import { problemText } from '../model/problems.js';
 import { projectJsonSchema } from '../model/jsonSchema.js';
 import type { Project } from '../model/projectSchema.js';
 import { analyse } from '../analysis/analyse.js';
-import { caseLabel } from '../model/caseLabel.js';
 import { legsByNode } from '../network/legs.js';
 import { fittingGeometry, needsRestraint } from '../network/fittingKind.js';
 import { scheduleOf } from '../schedule/scheduleRows.js';
+import { scheduleJson } from '../schedule/scheduleJson.js';
+import { scheduleView } from '../schedule/scheduleView.js';
 import { scheduleCsv } from '../schedule/scheduleCsv.js';
 import { scheduleTable } from '../schedule/scheduleTable.js';
 import type { UnitSystem } from '../units/conversions.js';
@@ -67,7 +68,6 @@ export function runCli(argv: readonly string[], io: CliIo): number {
       return 2;
     }
     const project = loaded;
-    const labelOf = (id: string) => caseLabel(project, id);
     if (args.command === 'validate') {
       // Naming the fittings is enough here; sizing them is the schedule's work.
       const legs = legsByNode(project);
@@ -83,27 +83,26 @@ export function runCli(argv: readonly string[], io: CliIo): number {
     const units = unitsOption(args.options.get('units'), project);
     if (args.command === 'explain') {
       const id = args.positional[1];
-      if (!id) throw new UsageError('missing NODE: give the id of the fitting’s node');
-      const fitting = analysis.byNode.get(id);
+      if (!id) throw new UsageError('missing MARK: give the fitting’s mark (A4) or its node id');
+      const fitting = analysis.fittings.find((f) => f.mark === id) ?? analysis.byNode.get(id);
       if (!fitting) {
-        const known = project.nodes.some((n) => n.id === id);
+        const known = project.nodes.some((n) => n.id === id) || [...analysis.marks.values()].includes(id);
         io.err(
           known
-            ? `node "${id}" needs no restraint (a straight joint, a tie-in or a free node)\n`
-            : `no node "${id}" in ${args.positional[0]}\n`,
+            ? `"${id}" needs no restraint (a straight joint, a tie-in or a free node)\n`
+            : `no fitting marked "${id}" and no node "${id}" in ${args.positional[0]}\n`,
         );
         return 2;
       }
-      io.out(explainText(project, fitting, units));
+      io.out(explainText(analysis, fitting, units));
       return 0;
     }
     const format = args.options.get('format') ?? 'table';
-    const schedule = scheduleOf(analysis);
     // Indented for a person at a terminal or with --pretty; compact into pipes and files.
     const pretty = io.interactive === true || args.options.has('pretty');
-    if (format === 'json') io.out(JSON.stringify(schedule, null, pretty ? 2 : undefined) + '\n');
-    else if (format === 'csv') io.out(scheduleCsv(schedule, units, labelOf));
-    else if (format === 'table') io.out(scheduleTable(schedule, units, labelOf));
+    if (format === 'json') io.out(scheduleJson(scheduleOf(analysis), pretty));
+    else if (format === 'csv') io.out(scheduleCsv(scheduleView(analysis, units)));
+    else if (format === 'table') io.out(scheduleTable(scheduleView(analysis, units), project.name));
     else throw new UsageError(`--format: expected json, csv or table, got "${format}"`);
     return 0;
   } catch (e) {

@@ -4,8 +4,8 @@ Usage:
   mainbrace schedule FILE [--format json|csv|table] [--units us|si] [--pretty]
                                   the fitting schedule (default: table, the project's units;
                                   JSON is indented at a terminal or with --pretty)
-  mainbrace explain FILE NODE [--units us|si]
-                                  the calculation record of one fitting
+  mainbrace explain FILE MARK [--units us|si]
+                                  the calculation record of one fitting (its mark, A4, or node id)
   mainbrace validate FILE         check a project file
   mainbrace schema                the JSON Schema of the project file
 

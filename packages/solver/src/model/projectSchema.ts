@@ -38,6 +38,14 @@ export const designSchema = z.strictObject({
   blockDepth: positive().default(0.6),
   /** m, trench width for the face-width check, or null for OD + 2 × 0.3 m (common practice) */
   trenchWidth: positive().nullable().default(null),
+  /**
+   * m, the construction step built dimensions are rounded up to; the same whatever the display units
+   * (50 mm by default; a US office may set 2 in = 0.0508 m)
+   */
+  dimensionStep: finite()
+    .gte(0.001, { error: 'must be at least 0.001 m (1 mm)' })
+    .lte(0.3, { error: 'must be at most 0.3 m' })
+    .default(0.05),
 });
 
 export const loadCaseSchema = z.strictObject({

@@ -71,7 +71,9 @@ describe('which fitting stands at each node', () => {
     const a = analyse(p);
     expect(kinds(p)).toEqual({ t: 'tee', y: 'wye', x: 'cross' });
     expect(a.byNode.get('y')?.geometry.branchAngle).toBeCloseTo(45, 9);
-    expect(a.byNode.get('t')?.tag).toBe('T-t');
+    // The main runs w0 → t → y → x → x1 (straight on at each fitting); branches are lettered as met.
+    expect(['w0', 't', 'y', 'x', 'x1'].map((n) => a.marks.get(n))).toEqual(['A1', 'A2', 'A3', 'A4', 'A5']);
+    expect(['tb', 'yb', 'xn', 'xs'].map((n) => a.marks.get(n))).toEqual(['B1', 'C1', 'D1', 'E1']);
   });
 
   it('splits a vertical bend into its plan and slope changes', () => {

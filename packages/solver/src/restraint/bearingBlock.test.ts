@@ -17,7 +17,6 @@ const base = (over: Partial<BearingBlockInput> = {}): BearingBlockInput => ({
   soil: { unitWeight: 18000, frictionAngle: 30, cohesion: 0 },
   waterDepth: null,
   waterUnitWeight: 998.2 * 9.80665,
-  units: 'us',
   ...over,
 });
 
@@ -63,7 +62,7 @@ describe('bearing block area A = SF·T/σ (DIPRA form, domain reference §4.1)',
 
   it('warns when the cover is too shallow for a face one OD high', () => {
     const r = sizeBearingBlock(base({ cover: 0.3 * FOOT }));
-    expect(r.warnings.some((w) => w.startsWith('Block taller than the cover allows'))).toBe(true);
+    expect(r.diagnostics.map((d) => d.code)).toContain('block.taller-than-cover');
   });
 
   it('warns when the passive resistance of the face is below the safety factor', () => {
@@ -71,7 +70,7 @@ describe('bearing block area A = SF·T/σ (DIPRA form, domain reference §4.1)',
       base({ soil: { unitWeight: 14000, frictionAngle: 0, cohesion: 0 }, allowableBearing: 9000 * PSF }),
     );
     expect(r.block.passiveRatio).toBeLessThan(1.5);
-    expect(r.warnings.some((w) => w.startsWith('Check the bearing value'))).toBe(true);
+    expect(r.diagnostics.map((d) => d.code)).toContain('block.passive-short');
   });
 
   it('estimates concrete as face × block depth', () => {

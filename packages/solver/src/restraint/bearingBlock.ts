@@ -2,8 +2,7 @@ import type { Vec3 } from '../geometry/vector.js';
 import { value, type CalcStep } from '../analysis/calcRecord.js';
 import { passiveResistance } from './passiveResistance.js';
 import { roundDownTo, roundUpTo } from './rounding.js';
-import { formatDimension } from '../units/format.js';
-import type { UnitSystem } from '../units/conversions.js';
+import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 
 export interface BearingBlockInput {
   /** N, largest horizontal thrust over the cases */
@@ -26,8 +25,6 @@ export interface BearingBlockInput {
   waterDepth: number | null;
   /** N/m³, ρ·g of the groundwater */
   waterUnitWeight: number;
-  /** display units of the warnings */
-  units: UnitSystem;
   /** build the calculation record too (only when someone reads it) */
   record?: boolean;
 }
@@ -56,7 +53,7 @@ export interface BearingBlock {
 export interface BlockResult {
   block: BearingBlock;
   steps: CalcStep[];
-  warnings: string[];
+  diagnostics: Diagnostic[];
 }
 
 const DIPRA_AREA = 'A_b = T·S_f/S_b (DIPRA, Thrust Restraint Design for Ductile Iron Pipe; AWWA M23 Example 1)';
@@ -69,8 +66,7 @@ const FACE_RULE =
  * width × height ≥ the area, and a Rankine passive check of the chosen face (§4.6).
  */
 export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
-  const warnings: string[] = [];
-  const len = (m: number) => formatDimension(m, i.units);
+  const diagnostics: Diagnostic[] = [];
   const area = (i.safetyFactor * i.thrust) / i.allowableBearing;
   const centreDepth = i.cover + i.outsideDiameter / 2;
   // Face centred on the pipe: h ≤ (centreDepth + h/2)/2 gives h ≤ 2/3 of the centreline depth.
@@ -79,19 +75,15 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
   let height = Math.max(shortest, Math.min(roundUpTo(Math.sqrt(area), i.step), tallest));
   if (tallest < shortest) {
     height = shortest;
-    warnings.push(
-      `Block taller than the cover allows: a face ${len(height)} high needs the block bottom ${len(2 * height)} or more below ground, but the pipe centre is only ${len(centreDepth)} down. Deepen the cover, use restrained joints, or design the block for passive pressure.`,
+    diagnostics.push(
+      diagnostic('block.taller-than-cover', {}, { faceHeight: height, bottomDepth: 2 * height, centreDepth }),
     );
   }
   const width = Math.max(roundUpTo(area / height, i.step), shortest);
   if (width > 8 * height || width > 10) {
-    warnings.push(
-      `No practical block: a face ${len(width)} wide and ${len(height)} high is what the bearing value and the cover allow. Use restrained joints, deepen the main, or have the soil investigated.`,
-    );
+    diagnostics.push(diagnostic('block.impractical', {}, { faceWidth: width, faceHeight: height }));
   } else if (width > 2 * height + 1e-9) {
-    warnings.push(
-      `Face ${len(width)} wide is more than twice its ${len(height)} height: the cover limits the height. Consider restrained joints or a deeper block designed for passive pressure.`,
-    );
+    diagnostics.push(diagnostic('block.wide-face', {}, { faceWidth: width, faceHeight: height }));
   }
   const top = centreDepth - height / 2;
   const bottom = centreDepth + height / 2;
@@ -107,9 +99,7 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
   });
   const passiveRatio = passive / i.thrust;
   if (passiveRatio < i.safetyFactor) {
-    warnings.push(
-      `Check the bearing value: the face's Rankine passive resistance (a 2-D check, conservative for a narrow block) is ${passiveRatio.toFixed(2)} × the thrust, below the safety factor ${i.safetyFactor}. Confirm the soil's bearing with the geotechnical engineer, or enlarge or deepen the block.`,
-    );
+    diagnostics.push(diagnostic('block.passive-short', {}, { ratio: passiveRatio, safetyFactor: i.safetyFactor }));
   }
   const concreteVolume = width * height * i.blockDepth;
   const steps: CalcStep[] = !i.record
@@ -132,9 +122,15 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
           inputs: [
             value('OD', 'largest outside diameter', i.outsideDiameter, 'diameter', 'pipes'),
             value('H', 'cover to top of pipe', i.cover, 'length', 'node'),
-            value('step', 'dimension step', i.step, 'length', 'display units'),
+            value('step', 'construction step', i.step, 'length', 'project design'),
           ],
-          result: value('b × h', 'face provided', width * height, 'area', `${len(width)} wide × ${len(height)} high`),
+          result: value(
+            'b × h',
+            'face provided',
+            width * height,
+            'area',
+            'width × height, each rounded up to the step',
+          ),
           reference: FACE_RULE,
         },
         {
@@ -177,6 +173,6 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
       bottomDepth: bottom,
     },
     steps,
-    warnings,
+    diagnostics,
   };
 }

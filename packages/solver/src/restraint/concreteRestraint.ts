@@ -3,14 +3,12 @@ import { value, type CalcStep } from '../analysis/calcRecord.js';
 import type { Leg } from '../network/legs.js';
 import type { Project } from '../model/projectSchema.js';
 import type { ThrustEnvelope } from '../thrust/fittingThrust.js';
-import { formatDimension, formatSi } from '../units/format.js';
+import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
+import { REGISTER } from '../provenance/register.js';
 import { sizeBearingBlock, type BearingBlock } from './bearingBlock.js';
 import { sizeGravityAnchor, type GravityAnchor } from './gravityAnchor.js';
 import { sizeTrenchBottom, type TrenchBottomBearing } from './trenchBottom.js';
 import { concreteWeight, type FittingSite } from './site.js';
-
-/** A bearing face within this plan angle of a pipe's axis stands across that pipe's trench, degrees (common practice). */
-const ACROSS_TRENCH = 30;
 
 export interface ConcreteRestraint {
   block: BearingBlock | null;
@@ -21,19 +19,19 @@ export interface ConcreteRestraint {
   /** the soil cannot bear: restrained joints must be sized instead */
   needsJoints: boolean;
   steps: CalcStep[];
-  warnings: string[];
+  diagnostics: Diagnostic[];
 }
 
 /** A component counts as present above floating-point noise of the vector sum. */
 export const present = (force: number, total: number) => force > 1e-7 * total && force > 0;
 
-/** True when the bearing direction runs within ACROSS_TRENCH of a pipe's plan axis. */
+/** True when the bearing direction runs within the across-trench angle of a pipe's plan axis. */
 function acrossTrench(direction: Vec3, legs: readonly Leg[]): boolean {
   return legs.some((l) => {
     const plan = horizontal(l.direction);
     if (horizontalNorm(plan) < 1e-9) return false;
     const a = angleBetween(direction, plan);
-    return Math.min(a, 180 - a) < ACROSS_TRENCH;
+    return Math.min(a, 180 - a) < REGISTER['block.across-trench'].value;
   });
 }
 
@@ -46,6 +44,7 @@ function acrossTrench(direction: Vec3, legs: readonly Leg[]): boolean {
  */
 export function concreteRestraint(
   project: Project,
+  node: string,
   legs: readonly Leg[],
   envelope: ThrustEnvelope,
   total: number,
@@ -53,8 +52,7 @@ export function concreteRestraint(
   record: boolean,
 ): ConcreteRestraint {
   const { design } = project;
-  const { soil, units } = site;
-  const len = (m: number) => formatDimension(m, units);
+  const { soil } = site;
   const out: ConcreteRestraint = {
     block: null,
     reverseBlock: null,
@@ -62,45 +60,51 @@ export function concreteRestraint(
     trenchBottom: null,
     needsJoints: false,
     steps: [],
-    warnings: [],
+    diagnostics: [],
   };
   const h = envelope.horizontal;
   const up = envelope.upward.force;
 
-  if (present(up, total)) {
-    const r = sizeGravityAnchor({
-      upward: up,
-      horizontal: h.force,
-      safetyFactor: design.upliftSafetyFactor,
-      concreteUnitWeight: design.concreteUnitWeight,
-      site,
-      record,
-    });
-    out.anchor = r.anchor;
-    out.steps.push(...r.steps);
-    out.warnings.push(...r.warnings);
-  }
+  // The anchor's record and findings are kept apart until we know the anchor stays.
+  const anchor = present(up, total)
+    ? sizeGravityAnchor({
+        upward: up,
+        horizontal: h.force,
+        safetyFactor: design.upliftSafetyFactor,
+        concreteUnitWeight: design.concreteUnitWeight,
+        site,
+        record,
+      })
+    : null;
   const horizontalNeeded = Math.max(h.force, envelope.reverse?.force ?? 0);
-  const frictionHolds = out.anchor !== null && out.anchor.baseFriction >= design.bearingSafetyFactor * horizontalNeeded;
-  if (present(h.force, total) && frictionHolds && record) {
-    out.steps.push({
-      title: 'Horizontal thrust held by the anchor’s base friction',
-      formula: 'F_f ≥ SF · T_h',
-      inputs: [
-        value('T_h', 'largest horizontal thrust', horizontalNeeded, 'force', 'momentum balance'),
-        value('SF', 'bearing safety factor', design.bearingSafetyFactor, 'ratio', 'project design'),
-      ],
-      result: value('F_f', 'base friction of the anchor', out.anchor!.baseFriction, 'force', 'no bearing block needed'),
-      reference: 'Sliding resistance W′·tan(⅔φ) of a cast-in-place base (common practice)',
-    });
-  }
+  const frictionHolds = anchor !== null && anchor.anchor.baseFriction >= design.bearingSafetyFactor * horizontalNeeded;
+  const frictionStep: CalcStep[] =
+    present(h.force, total) && frictionHolds && record
+      ? [
+          {
+            title: 'Horizontal thrust held by the anchor’s base friction',
+            formula: 'F_f ≥ SF · T_h',
+            inputs: [
+              value('T_h', 'largest horizontal thrust', horizontalNeeded, 'force', 'momentum balance'),
+              value('SF', 'bearing safety factor', design.bearingSafetyFactor, 'ratio', 'project design'),
+            ],
+            result: value(
+              'F_f',
+              'base friction of the anchor',
+              anchor!.anchor.baseFriction,
+              'force',
+              'no bearing block needed',
+            ),
+            reference: 'Sliding resistance W′·tan(⅔φ) of a cast-in-place base (common practice)',
+          },
+        ]
+      : [];
+  let blockWeightHoldsUplift = false;
   if (present(h.force, total) && !frictionHolds) {
     const allowable = soil.bearing + (soil.bearingPerDepth ?? 0) * (site.cover + site.od / 2);
     if (allowable <= 0) {
       out.needsJoints = true;
-      out.warnings.push(
-        `No bearing: ${site.soilName} has no allowable bearing (muck, peat or unprepared fill). A thrust block cannot be used: restrained joints are sized instead; piles or soil replacement are the other choices.`,
-      );
+      out.diagnostics.push(diagnostic('soil.no-bearing', { node, soil: soil.id }));
     } else {
       const block = (force: number, direction: Vec3) => {
         const r = sizeBearingBlock({
@@ -115,14 +119,17 @@ export function concreteRestraint(
           soil,
           waterDepth: site.waterDepth,
           waterUnitWeight: site.waterUnitWeight,
-          units,
           record,
         });
         out.steps.push(...r.steps);
-        out.warnings.push(...r.warnings);
+        for (const d of r.diagnostics) out.diagnostics.push({ ...d, subject: { ...d.subject, node } });
         if (acrossTrench(direction, legs) && r.block.faceWidth > site.trenchWidth + 1e-9) {
-          out.warnings.push(
-            `Bearing face ${len(r.block.faceWidth)} wide is wider than the ${len(site.trenchWidth)} trench it stands across: cut the face by hand into undisturbed soil beyond the trench, or use restrained joints.`,
+          out.diagnostics.push(
+            diagnostic(
+              'block.wider-than-trench',
+              { node },
+              { faceWidth: r.block.faceWidth, trenchWidth: site.trenchWidth },
+            ),
           );
         }
         return r.block;
@@ -130,25 +137,19 @@ export function concreteRestraint(
       out.block = block(h.force, h.direction);
       if (envelope.reverse) {
         out.reverseBlock = block(envelope.reverse.force, envelope.reverse.direction);
-        out.warnings.push(
-          `The thrust reverses between load states (up to ${formatSi(envelope.reverse.force, 'force', units)} the other way): a second block bears on the opposite side.`,
-        );
+        out.diagnostics.push(diagnostic('block.thrust-reverses', { node }, { force: envelope.reverse.force }));
       }
       if (soil.minCover !== undefined && site.cover < soil.minCover) {
-        out.warnings.push(
-          `The bearing value of ${site.soilName} holds for more than ${len(soil.minCover)} of cover; this fitting has ${len(site.cover)}.`,
+        out.diagnostics.push(
+          diagnostic('soil.below-min-cover', { node, soil: soil.id }, { minCover: soil.minCover, cover: site.cover }),
         );
       }
       // A block heavy enough to hold the uplift makes the anchor unnecessary.
       const submerged = site.groundwater !== null && site.groundwater > site.invert - out.block.faceHeight;
       const weight = concreteWeight(design.concreteUnitWeight, site, submerged) * out.block.concreteVolume;
-      if (out.anchor && weight >= design.upliftSafetyFactor * up) {
-        out.anchor = null;
-        out.warnings = out.warnings.filter((w) => !w.startsWith('Gravity anchor below groundwater'));
+      if (anchor && weight >= design.upliftSafetyFactor * up) {
+        blockWeightHoldsUplift = true;
         if (record) {
-          out.steps = out.steps.filter(
-            (s) => !s.title.startsWith('Gravity anchor') && !s.title.startsWith('Horizontal thrust at the anchor'),
-          );
           out.steps.push({
             title: 'Upward thrust held by the bearing block’s weight',
             formula: 'γ·V_block ≥ SF · T_up',
@@ -158,11 +159,16 @@ export function concreteRestraint(
               value('V_block', 'bearing block concrete', out.block.concreteVolume, 'volume', 'computed'),
             ],
             result: value('W', 'weight of the block', weight, 'force', 'no separate anchor needed'),
-            reference: 'Weight ≥ SF × upward thrust (DIPRA gravity block rule, unverified)',
+            reference: 'Weight ≥ SF × upward thrust (statics)',
           });
         }
       }
     }
+  }
+  if (anchor && !blockWeightHoldsUplift) {
+    out.anchor = anchor.anchor;
+    out.steps.unshift(...anchor.steps, ...frictionStep);
+    for (const d of anchor.diagnostics) out.diagnostics.push({ ...d, subject: { ...d.subject, node } });
   }
   if (present(envelope.downward.force, total)) {
     const vertical = soil.verticalBearing ?? soil.bearing;
@@ -185,12 +191,9 @@ export function concreteRestraint(
         out.steps.push(...r.steps);
       }
     } else {
-      out.warnings.push(
-        `No bearing under the fitting: ${site.soilName} cannot take the downward thrust; restrain the joints or replace the soil.`,
-      );
+      out.diagnostics.push(diagnostic('pad.no-bearing', { node, soil: soil.id }));
       out.needsJoints = true;
     }
   }
-  out.warnings = [...new Set(out.warnings)];
   return out;
 }

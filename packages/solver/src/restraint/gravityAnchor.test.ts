@@ -56,7 +56,6 @@ describe('gravity anchor at a crest bend (domain reference §5)', () => {
       trenchWidth: 1,
       waterUnitWeight: 62.4 * PCF,
       step: 0.05,
-      units: 'si' as const,
     };
     const r = sizeGravityAnchor({
       upward: 14_515 * LBF,
@@ -66,7 +65,7 @@ describe('gravity anchor at a crest bend (domain reference §5)', () => {
       site,
     });
     expectClose(r.anchor.concreteVolume / FT3, 248.5, 5e-4);
-    expect(r.warnings[0]).toMatch(/below groundwater/);
+    expect(r.diagnostics.map((d) => d.code)).toEqual(['anchor.submerged']);
   });
 
   it('takes the anchor as submerged when groundwater stands above its bottom, below the pipe', () => {

@@ -1,6 +1,7 @@
 import { value, type CalcStep } from '../analysis/calcRecord.js';
 import { roundUpTo } from './rounding.js';
 import { concreteWeight, type FittingSite } from './site.js';
+import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 
 export interface GravityAnchorInput {
   /** N, largest upward thrust over the states */
@@ -38,7 +39,7 @@ export interface GravityAnchor {
 export function sizeGravityAnchor(i: GravityAnchorInput): {
   anchor: GravityAnchor;
   steps: CalcStep[];
-  warnings: string[];
+  diagnostics: Diagnostic[];
 } {
   const { site } = i;
   const volumeAt = (unitWeight: number) => (i.safetyFactor * i.upward) / unitWeight;
@@ -48,12 +49,7 @@ export function sizeGravityAnchor(i: GravityAnchorInput): {
   const concreteVolume = volumeAt(unitWeight);
   const side = roundUpTo(Math.cbrt(concreteVolume), site.step);
   const baseFriction = unitWeight * concreteVolume * Math.tan(((2 / 3) * site.soil.frictionAngle * Math.PI) / 180);
-  const warnings: string[] = [];
-  if (submerged) {
-    warnings.push(
-      'Gravity anchor below groundwater: sized with the submerged unit weight of concrete (γc − γw); design for the highest groundwater level.',
-    );
-  }
+  const diagnostics = submerged ? [diagnostic('anchor.submerged', {}, { unitWeight })] : [];
   const steps: CalcStep[] = !i.record
     ? []
     : [
@@ -89,6 +85,6 @@ export function sizeGravityAnchor(i: GravityAnchorInput): {
   return {
     anchor: { concreteVolume, side, unitWeight, submerged, horizontalThrust: i.horizontal, baseFriction },
     steps,
-    warnings,
+    diagnostics,
   };
 }

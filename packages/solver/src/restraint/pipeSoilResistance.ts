@@ -1,22 +1,20 @@
 import { value, type RecordValue } from '../analysis/calcRecord.js';
 import { pipeWeightPerLength } from '../catalog/materialDensity.js';
 import type { Pipe, Soil } from '../model/projectSchema.js';
+import { REGISTER } from '../provenance/register.js';
 import { effectiveStress, rankinePassiveCoefficient } from './passiveResistance.js';
 import type { FittingSite } from './site.js';
 
-/**
- * Trench-type coefficient K_n for laying conditions 1–5 of AWWA C150/C151 (DIPRA restrained-joint
- * method; values from memory — verify against the manual).
- */
-export const TRENCH_COEFFICIENT: Record<number, number> = { 1: 0.2, 2: 0.4, 3: 0.6, 4: 0.85, 5: 1.0 };
-/** Laying condition assumed when a pipe states none (common practice for a bedded trench). */
-export const DEFAULT_TRENCH_TYPE = 3;
-/** f_φ: pipe friction angle over soil friction angle, conservative end of the manual's range (from memory). */
-export const DEFAULT_FRICTION_RATIO = 0.5;
-/** f_c: pipe adhesion over soil cohesion (from memory). */
-export const DEFAULT_ADHESION_RATIO = 0.5;
-/** Friction on polyethylene-encased pipe relative to bare pipe, adhesion neglected (from memory). */
-export const ENCASED_FRICTION_FACTOR = 0.7;
+/** Trench-type coefficient K_n for laying conditions 1–5 of AWWA C150/C151 (register: unverified). */
+export const TRENCH_COEFFICIENT: Readonly<Record<number, number>> = REGISTER['joints.trench-coefficient'].value;
+/** Laying condition assumed when a pipe states none. */
+export const DEFAULT_TRENCH_TYPE = REGISTER['joints.default-trench-type'].value;
+/** f_φ: pipe friction angle over soil friction angle (register: unverified). */
+export const DEFAULT_FRICTION_RATIO = REGISTER['joints.friction-ratio'].value;
+/** f_c: pipe adhesion over soil cohesion (register: unverified). */
+export const DEFAULT_ADHESION_RATIO = REGISTER['joints.adhesion-ratio'].value;
+/** Friction on polyethylene-encased pipe relative to bare pipe, adhesion neglected (register: unverified). */
+export const ENCASED_FRICTION_FACTOR = REGISTER['joints.encasement-factor'].value;
 
 export interface PipeSoilResistance {
   /** N/m, unit frictional resistance F_s along the pipe */

@@ -50,7 +50,7 @@ describe('restrained joint length (DIPRA method, domain reference §6.1)', () =>
     });
     const f = analyse(p).byNode.get('b')!;
     expectClose(f.restraint.restrainedLength!, 25.5496, 1e-4);
-    expect(f.warnings.some((w) => w.includes('runs past the next node'))).toBe(true);
+    expect(f.diagnostics.map((d) => d.code)).toContain('joints.encroach');
   });
 
   it('longer for polyethylene-encased pipe (0.7 × friction, from memory)', () => {
@@ -85,7 +85,7 @@ describe('restrained joint length (DIPRA method, domain reference §6.1)', () =>
     });
     const f = analyse(p).byNode.get('b')!;
     expect(f.restraint.block).toBeNull();
-    expect(f.warnings[0]).toMatch(/^No bearing/);
+    expect(f.diagnostics.map((d) => d.code)).toContain('soil.no-bearing');
     expect(f.restraint.restrainedLength).toBeGreaterThan(0);
   });
 

@@ -3,8 +3,7 @@ import { value, type CalcStep } from '../analysis/calcRecord.js';
 import type { Leg } from '../network/legs.js';
 import type { FittingKind } from '../network/fittingKind.js';
 import type { Soil } from '../model/projectSchema.js';
-import { formatSi } from '../units/format.js';
-import type { UnitSystem } from '../units/conversions.js';
+import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { pipeSoilResistance } from './pipeSoilResistance.js';
 import type { FittingSite } from './site.js';
 
@@ -12,6 +11,8 @@ export interface RestrainedLeg {
   pipe: string;
   /** m, restrained length along this pipe from the fitting */
   length: number;
+  /** which equation gave it: a horizontal bend, a bend with upward thrust, or an axial thrust */
+  form: 'bend' | 'uplift' | 'axial';
 }
 
 export interface RestrainedLengthInput {
@@ -24,7 +25,8 @@ export interface RestrainedLengthInput {
   soil: Soil;
   cover: number;
   safetyFactor: number;
-  units: UnitSystem;
+  /** the fitting's node, which the diagnostics name */
+  node: string;
   site: Pick<FittingSite, 'waterDepth' | 'waterUnitWeight'>;
   record?: boolean;
 }
@@ -46,9 +48,9 @@ const UPLIFT_REFERENCE =
 export function restrainedLength(i: RestrainedLengthInput): {
   legs: RestrainedLeg[];
   steps: CalcStep[];
-  warnings: string[];
+  diagnostics: Diagnostic[];
 } {
-  const warnings: string[] = [];
+  const diagnostics: Diagnostic[] = [];
   const t = norm(i.thrust);
   const steps: CalcStep[] = [];
   const out: RestrainedLeg[] = [];
@@ -69,12 +71,16 @@ export function restrainedLength(i: RestrainedLengthInput): {
       formula = 'L = S_f·T / F_s';
     }
     if (!Number.isFinite(length) || length <= 0) {
-      warnings.push(
-        `No friction or bearing along ${leg.pipe.id}: the soil (φ = ${i.soil.frictionAngle}°, c = ${formatSi(i.soil.cohesion, 'stress', i.units)}) cannot hold restrained joints; use a block, piles or soil replacement.`,
+      diagnostics.push(
+        diagnostic(
+          'joints.no-resistance',
+          { node: i.node, pipe: leg.pipe.id },
+          { frictionAngle: i.soil.frictionAngle, cohesion: i.soil.cohesion },
+        ),
       );
       continue;
     }
-    out.push({ pipe: leg.pipe.id, length });
+    out.push({ pipe: leg.pipe.id, length, form: isBend ? (upward ? 'uplift' : 'bend') : 'axial' });
     if (i.record)
       steps.push({
         title: `Restrained length along ${leg.pipe.id}`,
@@ -92,29 +98,20 @@ export function restrainedLength(i: RestrainedLengthInput): {
         reference: isBend ? (upward ? UPLIFT_REFERENCE : BEND_REFERENCE) : AXIAL_REFERENCE,
       });
     if (length > leg.length) {
-      warnings.push(
-        `Restrained length ${formatSi(length, 'length', i.units)} along ${leg.pipe.id} runs past the next node (${formatSi(leg.length, 'length', i.units)} away): the restrained zones of neighbouring fittings encroach and must be designed together.`,
+      diagnostics.push(
+        diagnostic('joints.encroach', { node: i.node, pipe: leg.pipe.id }, { length, legLength: leg.length }),
       );
     }
     if (leg.pipe.material === 'hdpe') {
-      warnings.push(
-        `${leg.pipe.id} is HDPE: fused PE is end-load bearing; restraint is needed at transitions to gasketed pipe and for thermal and Poisson loads.`,
-      );
+      diagnostics.push(diagnostic('joints.fused-pe', { node: i.node, pipe: leg.pipe.id }));
     } else if (leg.pipe.material !== 'ductile-iron') {
-      warnings.push(
-        `${leg.pipe.id} is not ductile iron: the restrained-length method is the ductile-iron manual's; use friction values for ${leg.pipe.material} from the restrained-joint maker.`,
-      );
+      diagnostics.push(diagnostic('joints.material-basis', { node: i.node, pipe: leg.pipe.id }));
     }
   }
   if (isBend && (i.deflection as number) > 90) {
-    warnings.push(
-      'Bend sharper than 90°: restrained lengths grow quickly and the method is uncertain; consider a block or a different layout.',
-    );
+    diagnostics.push(diagnostic('joints.sharp-bend', {}, { deflection: i.deflection as number }));
   }
-  warnings.push(
-    'Restrained lengths use coefficients recalled from the ductile-iron design manual (trench K_n, friction and adhesion ratios, encasement 0.7): verify them against the manual before construction.',
-  );
-  return { legs: out, steps, warnings };
+  return { legs: out, steps, diagnostics };
 }
 
 /** The leg whose direction from the node points most nearly against the thrust. */

@@ -1,9 +1,3 @@
-import { INCH } from '../units/conversions.js';
-import type { UnitSystem } from '../units/conversions.js';
-
-/** Practical dimension step a crew builds to: 50 mm in SI, 2 in in US customary, m. */
-export const dimensionStep = (units: UnitSystem): number => (units === 'us' ? 2 * INCH : 0.05);
-
 /** Rounds a length up to the next whole step; a hair of floating-point slack avoids a step too many. */
 export const roundUpTo = (length: number, step: number): number => Math.ceil(length / step - 1e-9) * step;
 

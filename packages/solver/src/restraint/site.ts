@@ -1,8 +1,6 @@
 import { STANDARD_GRAVITY } from '../units/quantities.js';
-import type { UnitSystem } from '../units/conversions.js';
 import type { Leg } from '../network/legs.js';
 import type { Project, ProjectNode, Soil } from '../model/projectSchema.js';
-import { dimensionStep } from './rounding.js';
 
 /** Clear width each side of the pipe assumed for the trench when the design gives none, m (common practice). */
 export const TRENCH_CLEARANCE = 0.3;
@@ -31,9 +29,8 @@ export interface FittingSite {
   trenchWidth: number;
   /** N/m³, ρ·g of the project's water */
   waterUnitWeight: number;
-  /** m, dimension step of the display units */
+  /** m, the project's construction step */
   step: number;
-  units: UnitSystem;
 }
 
 export function fittingSite(project: Project, node: ProjectNode, legs: readonly Leg[]): FittingSite {
@@ -52,8 +49,7 @@ export function fittingSite(project: Project, node: ProjectNode, legs: readonly 
     waterDepth: gw === null ? null : Math.max(0, ground - gw),
     trenchWidth: project.design.trenchWidth ?? od + 2 * TRENCH_CLEARANCE,
     waterUnitWeight: project.water.density * STANDARD_GRAVITY,
-    step: dimensionStep(project.units),
-    units: project.units,
+    step: project.design.dimensionStep,
   };
 }
 

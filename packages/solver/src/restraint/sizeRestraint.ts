@@ -4,12 +4,15 @@ import type { Leg } from '../network/legs.js';
 import type { FittingGeometry } from '../network/fittingKind.js';
 import type { Project, ProjectNode } from '../model/projectSchema.js';
 import type { ThrustEnvelope } from '../thrust/fittingThrust.js';
+import { sameDiagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import type { BearingBlock } from './bearingBlock.js';
 import type { GravityAnchor } from './gravityAnchor.js';
 import type { TrenchBottomBearing } from './trenchBottom.js';
 import { restrainedLength, type RestrainedLeg } from './restrainedLength.js';
 import { concreteRestraint } from './concreteRestraint.js';
 import { fittingSite } from './site.js';
+import { restraintBasis } from './basis.js';
+import type { ProvenanceId } from '../provenance/register.js';
 
 export { nodeSoil, TRENCH_CLEARANCE } from './site.js';
 
@@ -24,7 +27,9 @@ export interface Restraint {
   restrainedLegs: RestrainedLeg[];
   /** the record of the restraint, in order (empty unless asked for) */
   steps: CalcStep[];
-  warnings: string[];
+  diagnostics: Diagnostic[];
+  /** the register entries the sizing relied on */
+  basis: ProvenanceId[];
 }
 
 /**
@@ -50,25 +55,23 @@ export function sizeRestraint(
     restrainedLength: null,
     restrainedLegs: [],
     steps: [],
-    warnings: [],
+    diagnostics: [],
+    basis: [],
   };
   let needJoints = node.restraint === 'joints';
   if (node.restraint === 'block') {
-    const c = concreteRestraint(project, legs, envelope, total, site, record);
-    Object.assign(out, {
-      block: c.block,
-      reverseBlock: c.reverseBlock,
-      anchor: c.anchor,
-      trenchBottom: c.trenchBottom,
-      steps: c.steps,
-      warnings: c.warnings,
-    });
+    const c = concreteRestraint(project, node.id, legs, envelope, total, site, record);
+    out.block = c.block;
+    out.reverseBlock = c.reverseBlock;
+    out.anchor = c.anchor;
+    out.trenchBottom = c.trenchBottom;
+    out.steps = c.steps;
+    out.diagnostics = c.diagnostics;
     needJoints = c.needsJoints;
   }
   if (needJoints && total > 0) {
     const thrusts = [envelope.governing.total, ...(envelope.reverse ? [envelope.reverse.state.total] : [])];
     const longest = new Map<string, RestrainedLeg>();
-    const warnings = new Set(out.warnings);
     for (const thrust of thrusts) {
       const r = restrainedLength({
         kind: geometry.kind,
@@ -78,17 +81,17 @@ export function sizeRestraint(
         soil: site.soil,
         cover: site.cover,
         safetyFactor: project.design.restraintSafetyFactor,
-        units: site.units,
+        node: node.id,
         site,
         record,
       });
       for (const leg of r.legs) if ((longest.get(leg.pipe)?.length ?? 0) < leg.length) longest.set(leg.pipe, leg);
       out.steps.push(...r.steps);
-      for (const w of r.warnings) warnings.add(w);
+      for (const d of r.diagnostics) if (!out.diagnostics.some((o) => sameDiagnostic(o, d))) out.diagnostics.push(d);
     }
     out.restrainedLegs = [...longest.values()];
     out.restrainedLength = out.restrainedLegs.length ? Math.max(...out.restrainedLegs.map((l) => l.length)) : null;
-    out.warnings = [...warnings];
   }
+  out.basis = restraintBasis(out, legs, site.soil);
   return out;
 }

@@ -1,69 +1,92 @@
-import { DISPLAY_UNITS, toDisplay, type Dimension, type UnitSystem } from '../units/conversions.js';
-import { roundForDrawing } from '../units/format.js';
-import type { ScheduleFitting } from './scheduleRows.js';
 import { norm } from '../geometry/vector.js';
+import type { Project } from '../model/projectSchema.js';
+import { restraintConcrete } from './concrete.js';
+import type { ColumnKind } from './columnUnits.js';
+import { bearingText, fittingTitle } from './fittingNames.js';
+import { restrainedText, restraintSummary } from './restraintText.js';
+import type { ScheduleFitting } from './scheduleRows.js';
+import type { UnitSystem } from '../units/conversions.js';
 
-/** A column of the tabular schedule: a heading, its display unit, and the cell's value. */
-export interface ScheduleColumn {
-  heading: string;
-  dimension?: Dimension;
-  /** SI number, text, or null for an empty cell */
-  cell: (f: ScheduleFitting, caseLabel: (id: string) => string) => number | string | null;
+/** What a text cell may read besides the row: names of cases and soils, the units, the note numbers. */
+export interface CellContext {
+  project: Project;
+  units: UnitSystem;
+  /** numbers of the notes this row carries: "1, 3" */
+  notes: (f: ScheduleFitting) => string;
 }
 
-/** The schedule's columns, shared by the CSV export, the text table and the app's table. */
+/** One column of the schedule, shared by every output: the CLI table, CSV, the app's table and the print. */
+export interface ScheduleColumn {
+  id: string;
+  heading: string;
+  kind: ColumnKind;
+  /** the SI number (numeric kinds) or the text of the cell; null for an empty cell */
+  cell: (f: ScheduleFitting, c: CellContext) => number | string | null;
+}
+
+const size = (f: ScheduleFitting) => Math.max(...f.pipes.map((p) => p.outsideDiameter));
+const caseName = (c: CellContext, id: string) => c.project.loadCases.find((x) => x.id === id)?.label ?? id;
+const soilName = (c: CellContext, id: string) => c.project.soils.find((x) => x.id === id)?.label ?? id;
+const col = (id: string, heading: string, kind: ColumnKind, cell: ScheduleColumn['cell']): ScheduleColumn => ({
+  id,
+  heading,
+  kind,
+  cell,
+});
+
+/** Every column, in the order the CSV writes them. Other outputs choose ids from this list. */
 export const SCHEDULE_COLUMNS: readonly ScheduleColumn[] = [
-  { heading: 'Tag', cell: (f) => f.tag },
-  { heading: 'Node', cell: (f) => f.node },
-  { heading: 'Label', cell: (f) => f.label },
-  { heading: 'Kind', cell: (f) => f.kind },
-  { heading: 'Chainage', dimension: 'length', cell: (f) => f.chainage },
-  { heading: 'East', dimension: 'length', cell: (f) => f.position[0] },
-  { heading: 'North', dimension: 'length', cell: (f) => f.position[1] },
-  { heading: 'Elevation', dimension: 'elevation', cell: (f) => f.position[2] },
-  { heading: 'Largest OD', dimension: 'diameter', cell: (f) => Math.max(...f.pipes.map((p) => p.outsideDiameter)) },
-  { heading: 'Deflection', dimension: 'angle', cell: (f) => f.deflection ?? f.branchAngle },
-  { heading: 'Design pressure', dimension: 'pressure', cell: (f) => f.designPressure },
-  { heading: 'Governing case', cell: (f, label) => label(f.governingCase) },
-  { heading: 'Thrust', dimension: 'force', cell: (f) => norm(f.thrust) },
-  { heading: 'Horizontal thrust', dimension: 'force', cell: (f) => f.horizontalThrust },
-  { heading: 'Upward thrust', dimension: 'force', cell: (f) => f.upwardThrust },
-  { heading: 'Downward thrust', dimension: 'force', cell: (f) => f.downwardThrust },
-  { heading: 'Bears toward (from north)', dimension: 'angle', cell: (f) => f.bearingDirection },
-  { heading: 'Soil', cell: (f) => f.soil },
-  { heading: 'Bearing area required', dimension: 'area', cell: (f) => f.restraint.block?.bearingArea ?? null },
-  { heading: 'Face width', dimension: 'length', cell: (f) => f.restraint.block?.faceWidth ?? null },
-  { heading: 'Face height', dimension: 'length', cell: (f) => f.restraint.block?.faceHeight ?? null },
-  { heading: 'Block concrete', dimension: 'volume', cell: (f) => f.restraint.block?.concreteVolume ?? null },
-  { heading: 'Opposite block width', dimension: 'length', cell: (f) => f.restraint.reverseBlock?.faceWidth ?? null },
-  { heading: 'Opposite block height', dimension: 'length', cell: (f) => f.restraint.reverseBlock?.faceHeight ?? null },
-  {
-    heading: 'Opposite block concrete',
-    dimension: 'volume',
-    cell: (f) => f.restraint.reverseBlock?.concreteVolume ?? null,
-  },
-  { heading: 'Anchor concrete', dimension: 'volume', cell: (f) => f.restraint.anchor?.concreteVolume ?? null },
-  { heading: 'Trench-bottom area', dimension: 'area', cell: (f) => f.restraint.trenchBottom?.bearingArea ?? null },
-  { heading: 'Restrained length', dimension: 'length', cell: (f) => f.restraint.restrainedLength },
-  { heading: 'Warnings', cell: (f) => f.warnings.join(' | ') },
+  col('mark', 'Mark', 'text', (f) => f.mark),
+  col('chainage', 'Chainage', 'chainage', (f) => f.chainage),
+  col('fitting', 'Fitting', 'text', (f) => fittingTitle(f)),
+  col('label', 'Label', 'text', (f) => f.label),
+  col('od', 'Largest OD', 'diameter', size),
+  col('east', 'East', 'coordinate', (f) => f.position[0]),
+  col('north', 'North', 'coordinate', (f) => f.position[1]),
+  col('level', 'Pipe level', 'level', (f) => f.position[2]),
+  col('pressure', 'Design pressure', 'pressure', (f) => f.designPressure),
+  col('case', 'Governing case', 'text', (f, c) => caseName(c, f.governingCase)),
+  col('thrust', 'Thrust', 'force', (f) => norm(f.thrust)),
+  col('horizontal', 'Horizontal thrust', 'force', (f) => f.horizontalThrust),
+  col('upward', 'Upward thrust', 'force', (f) => f.upwardThrust),
+  col('downward', 'Downward thrust', 'force', (f) => f.downwardThrust),
+  col('bears', 'Block bears toward', 'text', (f) => (f.restraint.block ? bearingText(f.bearingDirection) : null)),
+  col('soil', 'Soil', 'text', (f, c) => soilName(c, f.soil)),
+  col('area', 'Bearing area required', 'area', (f) => f.restraint.block?.bearingArea ?? null),
+  col('faceWidth', 'Face width', 'built', (f) => f.restraint.block?.faceWidth ?? null),
+  col('faceHeight', 'Face height', 'built', (f) => f.restraint.block?.faceHeight ?? null),
+  col('thickness', 'Block thickness', 'built', (f) => f.restraint.block?.depth ?? null),
+  col('blockConcrete', 'Block concrete', 'volume', (f) => f.restraint.block?.concreteVolume ?? null),
+  col('oppositeWidth', 'Opposite face width', 'built', (f) => f.restraint.reverseBlock?.faceWidth ?? null),
+  col('oppositeHeight', 'Opposite face height', 'built', (f) => f.restraint.reverseBlock?.faceHeight ?? null),
+  col('oppositeConcrete', 'Opposite block concrete', 'volume', (f) => f.restraint.reverseBlock?.concreteVolume ?? null),
+  col('anchorSide', 'Anchor side', 'built', (f) => f.restraint.anchor?.side ?? null),
+  col('anchorConcrete', 'Anchor concrete', 'volume', (f) => f.restraint.anchor?.concreteVolume ?? null),
+  col('padArea', 'Trench-bottom area', 'area', (f) => f.restraint.trenchBottom?.bearingArea ?? null),
+  col('padLength', 'Trench-bottom pad length', 'built', (f) => f.restraint.trenchBottom?.length ?? null),
+  col('restrained', 'Restrained length', 'restrained', (f) => f.restraint.restrainedLength),
+  col('restrainedLegs', 'Restrained legs', 'text', (f, c) => restrainedText(f, c.units) || null),
+  col('restraint', 'Restraint', 'text', (f, c) => restraintSummary(f, c.units)),
+  col('concrete', 'Concrete', 'volume', (f) => {
+    const v = restraintConcrete(f.restraint);
+    return v > 0 ? v : null;
+  }),
+  col('notes', 'Notes', 'text', (f, c) => c.notes(f) || null),
+  col('warnings', 'Warnings', 'text', (f) => f.warnings.join(' | ') || null),
 ];
 
-/** "Thrust (kN)": the heading with its display unit; forces keep one unit per column (no kip switch). */
-export function columnHeading(c: ScheduleColumn, units: UnitSystem): string {
-  if (!c.dimension) return c.heading;
-  return `${c.heading} (${DISPLAY_UNITS[units][c.dimension].symbol})`;
-}
-
-/** A cell in display units: numbers to four significant figures (more for large integers). */
-export function columnValue(
-  c: ScheduleColumn,
-  f: ScheduleFitting,
-  units: UnitSystem,
-  caseLabel: (id: string) => string,
-): string {
-  const v = c.cell(f, caseLabel);
-  if (v === null) return '';
-  if (typeof v === 'string') return v;
-  if (!c.dimension) return String(v);
-  return String(roundForDrawing(toDisplay(v, c.dimension, units), 4));
-}
+/** The columns of the compact outputs, by id. */
+export const TABLE_COLUMNS = ['mark', 'chainage', 'fitting', 'pressure', 'case', 'thrust', 'restraint', 'notes'];
+export const APP_COLUMNS = [
+  'mark',
+  'chainage',
+  'fitting',
+  'od',
+  'pressure',
+  'case',
+  'thrust',
+  'bears',
+  'restraint',
+  'concrete',
+  'notes',
+];

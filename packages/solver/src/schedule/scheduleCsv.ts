@@ -1,6 +1,4 @@
-import type { UnitSystem } from '../units/conversions.js';
-import { SCHEDULE_COLUMNS, columnHeading, columnValue } from './scheduleColumns.js';
-import type { Schedule } from './scheduleRows.js';
+import type { ScheduleView } from './scheduleView.js';
 
 /**
  * RFC 4180 field: quoted when it holds a comma, quote or line break. Text that a spreadsheet would
@@ -11,11 +9,10 @@ function csvField(text: string, isNumber: boolean): string {
   return /[",\r\n]/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
 }
 
-/** The schedule as CSV, one row per fitting, display units in the header. */
-export function scheduleCsv(s: Schedule, units: UnitSystem, caseLabel: (id: string) => string): string {
-  const header = SCHEDULE_COLUMNS.map((c) => csvField(columnHeading(c, units), false)).join(',');
-  const rows = s.fittings.map((f) =>
-    SCHEDULE_COLUMNS.map((c) => csvField(columnValue(c, f, units, caseLabel), c.dimension !== undefined)).join(','),
-  );
+/** The schedule as CSV: every column of the view, one row per fitting in crew order, units in the header. */
+export function scheduleCsv(view: ScheduleView): string {
+  const numeric = (kind: string) => kind !== 'text' && kind !== 'built';
+  const header = view.columns.map((c) => csvField(c.heading, false)).join(',');
+  const rows = view.rows.map((r) => view.columns.map((c) => csvField(r.cells[c.id]!, numeric(c.kind))).join(','));
   return [header, ...rows].join('\r\n') + '\r\n';
 }

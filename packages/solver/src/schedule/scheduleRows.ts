@@ -2,8 +2,12 @@ import { planBearing, type Vec3 } from '../geometry/vector.js';
 import type { Analysis, FittingAnalysis } from '../analysis/analyse.js';
 import type { FittingKind } from '../network/fittingKind.js';
 import { nodeSoil } from '../restraint/sizeRestraint.js';
-import { CAUTIONS } from './cautions.js';
 import type { BearingBlock } from '../restraint/bearingBlock.js';
+import type { Diagnostic } from '../diagnostics/diagnostic.js';
+import { diagnosticText } from '../diagnostics/wording.js';
+import { legTarget, wordingContext } from '../diagnostics/context.js';
+import { unverified, type ProvenanceId } from '../provenance/register.js';
+import { CAUTIONS } from './cautions.js';
 
 /** A bearing block as the schedule reports it (all but an intermediate depth). SI units. */
 export type ScheduleBlock = Omit<BearingBlock, 'bottomDepth'>;
@@ -11,18 +15,28 @@ export type ScheduleBlock = Omit<BearingBlock, 'bottomDepth'>;
 /** One fitting of the schedule output (project-format.md, plus added fields). SI units. */
 export interface ScheduleFitting {
   node: string;
-  tag: string;
+  /** run letter and number along the run: A1, A2 … B1 */
+  mark: string;
+  run: string;
   label: string | null;
   kind: Exclude<FittingKind, 'straight' | 'tie-in' | 'none'>;
   deflection: number | null;
   horizontalDeflection: number | null;
   verticalDeflection: number | null;
   branchAngle: number | null;
+  /** m along the run from its start */
   chainage: number;
   position: Vec3;
-  pipes: { id: string; outsideDiameter: number; insideDiameter: number; material: string }[];
+  pipes: { id: string; outsideDiameter: number; insideDiameter: number; material: string; toward: string | null }[];
   soil: string;
-  cases: { case: string; pressure: number; static: Vec3; dynamic: Vec3; total: Vec3; closedAgainst: string | null }[];
+  cases: {
+    case: string;
+    pressure: number;
+    static: Vec3;
+    dynamic: Vec3;
+    total: Vec3;
+    closedAgainst: string | null;
+  }[];
   governingCase: string;
   designPressure: number;
   thrust: Vec3;
@@ -39,26 +53,34 @@ export interface ScheduleFitting {
     anchor: { concreteVolume: number; side: number; submerged: boolean } | null;
     trenchBottom: { bearingArea: number; width: number; length: number } | null;
     restrainedLength: number | null;
-    restrainedLegs: { pipe: string; length: number }[];
+    /** per restrained pipe: its length and the mark of the next fitting it runs toward */
+    restrainedLegs: { pipe: string; length: number; toward: string | null }[];
   };
+  /** the diagnostics worded in SI, for readers of the first schedule format */
   warnings: string[];
+  diagnostics: Diagnostic[];
+  /** register entries the results rely on that were not read in their source */
+  unverified: ProvenanceId[];
 }
 
 export interface Schedule {
   project: string;
   units: 'SI';
+  /** by run (main first) and chainage along it: the order a crew walks the line */
   fittings: ScheduleFitting[];
   cautions: readonly string[];
 }
 
-function row(a: Analysis, f: FittingAnalysis): ScheduleFitting {
+function row(a: Analysis, f: FittingAnalysis, words: (d: Diagnostic) => string): ScheduleFitting {
   const { restraint: r, envelope: e, geometry: g } = f;
   // The schedule keeps every block field but the depth of the face bottom, an intermediate value.
   const scheduled = (b: BearingBlock | null): ScheduleBlock | null =>
     b && (({ bottomDepth: _bottom, ...rest }) => rest)(b);
+  const toward = (pipe: string) => legTarget(a, f.node.id, pipe);
   return {
     node: f.node.id,
-    tag: f.tag,
+    mark: f.mark,
+    run: f.run,
     label: f.node.label ?? null,
     kind: g.kind as ScheduleFitting['kind'],
     deflection: g.deflection,
@@ -72,6 +94,7 @@ function row(a: Analysis, f: FittingAnalysis): ScheduleFitting {
       outsideDiameter: l.pipe.outsideDiameter,
       insideDiameter: l.pipe.insideDiameter,
       material: l.pipe.material,
+      toward: toward(l.pipe.id),
     })),
     soil: nodeSoil(a.project, f.node).id,
     cases: f.cases.map((c) => ({
@@ -100,23 +123,27 @@ function row(a: Analysis, f: FittingAnalysis): ScheduleFitting {
       },
       trenchBottom: r.trenchBottom,
       restrainedLength: r.restrainedLength,
-      restrainedLegs: r.restrainedLegs,
+      restrainedLegs: r.restrainedLegs.map((l) => ({ pipe: l.pipe, length: l.length, toward: toward(l.pipe) })),
     },
-    warnings: f.warnings,
+    warnings: f.diagnostics.map(words),
+    diagnostics: f.diagnostics,
+    unverified: unverified(f.basis),
   };
 }
 
 const schedules = new WeakMap<Analysis, Schedule>();
 
 /**
- * The schedule of project-format.md from an analysis: one row per fitting that needs restraint.
- * Memoised by the analysis, as `analyse` is by the document: the table, the print and the exports
- * share one schedule of one document. Callers must not change it.
+ * The schedule of project-format.md from an analysis: one row per fitting that needs restraint, in
+ * the analysis' run-and-chainage order. Memoised by the analysis, as `analyse` is by the document: the
+ * table, the print and the exports share one schedule of one document. Callers must not change it.
  */
 export function scheduleOf(a: Analysis): Schedule {
   let s = schedules.get(a);
   if (!s) {
-    s = { project: a.project.name, units: 'SI', fittings: a.fittings.map((f) => row(a, f)), cautions: CAUTIONS };
+    const context = wordingContext(a, 'si');
+    const words = (d: Diagnostic) => diagnosticText(d, context);
+    s = { project: a.project.name, units: 'SI', fittings: a.fittings.map((f) => row(a, f, words)), cautions: CAUTIONS };
     schedules.set(a, s);
   }
   return s;

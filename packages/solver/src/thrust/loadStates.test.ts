@@ -95,6 +95,6 @@ describe('valves and thrusts that change direction between load states', () => {
     expectClose(f.envelope.horizontal.force, big, 1e-9);
     expectClose(f.envelope.reverse!.force, small, 1e-9);
     expect(f.restraint.reverseBlock).not.toBeNull();
-    expect(f.warnings.some((w) => w.startsWith('The thrust reverses'))).toBe(true);
+    expect(f.diagnostics.find((d) => d.code === 'block.thrust-reverses')?.values.force).toBeCloseTo(small, 6);
   });
 });

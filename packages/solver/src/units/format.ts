@@ -64,13 +64,39 @@ export const formatSi = (si: number, dim: Dimension, system: UnitSystem, signifi
   formatQuantity(si, dim, system, significant).text;
 
 /**
- * A built dimension as a crew reads it: metres to the centimetre in SI (0.75 m), feet and inches to
- * the inch in US customary (2 ft 2 in).
+ * Rounds up to `decimals` places: a built quantity shown on a drawing is never less than what was
+ * computed. A relative slack of 1e-9 keeps 0.7000000000000001 at 0.70 instead of 0.71.
+ */
+export function ceilTo(value: number, decimals: number): number {
+  const f = Math.pow(10, decimals);
+  const scaled = value * f;
+  const near = Math.round(scaled);
+  const k = Math.abs(scaled - near) <= 1e-9 * Math.max(1, Math.abs(scaled)) ? near : Math.ceil(scaled);
+  return k / f;
+}
+
+/** Rounds to `decimals` places, to nearest. */
+export const roundTo = (value: number, decimals: number): number => {
+  const f = Math.pow(10, decimals);
+  return Math.round(value * f) / f;
+};
+
+/** Whole inches of a built length, rounded up. */
+export const builtInches = (meters: number): number => ceilTo(meters / 0.0254, 0);
+
+/**
+ * A built dimension as a crew reads it, rounded up so that it is never less than computed: metres to
+ * the centimetre (to the millimetre where the centimetre would add more than a millimetre's worth) in
+ * SI (0.75 m), feet and inches to the inch in US customary (2 ft 2 in).
  */
 export function formatDimension(meters: number, system: UnitSystem): string {
   if (!Number.isFinite(meters)) return '—';
-  if (system === 'si') return `${meters.toFixed(2)} m`;
-  const inches = Math.round(meters / 0.0254);
+  if (system === 'si') {
+    const mm = ceilTo(meters, 3);
+    const cm = ceilTo(meters, 2);
+    return cm - mm < 1e-9 ? `${cm.toFixed(2)} m` : `${mm.toFixed(3)} m`;
+  }
+  const inches = builtInches(meters);
   const feet = Math.floor(inches / 12);
   const rest = inches - feet * 12;
   if (feet === 0) return `${rest} in`;

@@ -1,0 +1,165 @@
+import type { Dimension } from '../units/conversions.js';
+
+/** info: a fact worth knowing; warning: check before building; error: the restraint is not adequate as it stands. */
+export type Severity = 'info' | 'warning' | 'error';
+
+export interface CodeSpec {
+  severity: Severity;
+  /** the SI values a diagnostic of this code carries, with the kind of quantity of each */
+  values: Readonly<Record<string, Dimension>>;
+  /** what the finding means, for docs/diagnostics.md */
+  meaning: string;
+  /** what the engineer should do */
+  action: string;
+}
+
+/**
+ * Every finding the solver can report, by stable code. Codes never change meaning; a new finding gets a
+ * new code. docs/diagnostics.md is generated from this table (a test keeps it current).
+ */
+export const DIAGNOSTIC_CODES = {
+  'pressure.vapour-floor': {
+    severity: 'warning',
+    values: { pressure: 'pressure' },
+    meaning:
+      'The case’s hydraulic grade lies so far below the node that the water column would separate; the gauge pressure is held at the vapour pressure of water.',
+    action: 'Check the profile and the case’s pressure and datum.',
+  },
+  'pressure.below-zero': {
+    severity: 'warning',
+    values: { pressure: 'pressure' },
+    meaning: 'The node stands above the case’s hydraulic grade: the gauge pressure there is below zero.',
+    action: 'Check for vacuum and air entry at the high point; check the case datum.',
+  },
+  'flow.into-cap': {
+    severity: 'warning',
+    values: { flow: 'flow' },
+    meaning: 'A flow runs into a closed end, which has none.',
+    action: 'Check the pipe’s flow, or make the node a tie-in.',
+  },
+  'flow.unbalanced': {
+    severity: 'warning',
+    values: { net: 'flow' },
+    meaning: 'The flows at the node do not balance (positive: more leaves than arrives).',
+    action: 'Check the pipes’ flows.',
+  },
+  'valve.both-ways': {
+    severity: 'info',
+    values: {},
+    meaning:
+      'The valve is sized open, and closed with the pressure on either side: its restraint holds the thrust both ways along the line.',
+    action: 'None.',
+  },
+  'valve.flag-ignored': {
+    severity: 'warning',
+    values: {},
+    meaning:
+      'The valve flag applies only where two pipes meet; the node was sized as its fitting without a closed valve.',
+    action: 'Move the valve to a node between two pipes, or clear the flag.',
+  },
+  'thrust.none': {
+    severity: 'info',
+    values: {},
+    meaning: 'No thrust acts at the fitting in any case.',
+    action: 'None.',
+  },
+  'anchor.submerged': {
+    severity: 'info',
+    values: { unitWeight: 'unitWeight' },
+    meaning:
+      'The gravity anchor stands in groundwater and is sized with the submerged unit weight of concrete (γc − γw).',
+    action: 'Design for the highest groundwater level expected.',
+  },
+  'soil.no-bearing': {
+    severity: 'warning',
+    values: {},
+    meaning:
+      'The soil has no allowable bearing (muck, peat, unprepared fill): a thrust block cannot be used, so restrained joints are sized instead.',
+    action: 'Use the restrained joints, piles, or replace the soil.',
+  },
+  'soil.below-min-cover': {
+    severity: 'warning',
+    values: { minCover: 'length', cover: 'length' },
+    meaning: 'The soil’s bearing value holds only for more cover than the fitting has.',
+    action: 'Deepen the main or take a lower bearing value.',
+  },
+  'block.wider-than-trench': {
+    severity: 'warning',
+    values: { faceWidth: 'length', trenchWidth: 'length' },
+    meaning: 'The bearing face is wider than the trench it stands across.',
+    action: 'Cut the face by hand into undisturbed soil beyond the trench, or use restrained joints.',
+  },
+  'block.thrust-reverses': {
+    severity: 'info',
+    values: { force: 'force' },
+    meaning: 'The horizontal thrust reverses between load states: a second block bears on the opposite side.',
+    action: 'Build both blocks.',
+  },
+  'block.taller-than-cover': {
+    severity: 'warning',
+    values: { faceHeight: 'length', bottomDepth: 'length', centreDepth: 'length' },
+    meaning:
+      'The least face height (the pipe’s OD) needs the block bottom deeper than the cover allows for a face of half the depth to its bottom.',
+    action: 'Deepen the cover, use restrained joints, or design the block for passive pressure.',
+  },
+  'block.wide-face': {
+    severity: 'warning',
+    values: { faceWidth: 'length', faceHeight: 'length' },
+    meaning: 'The face is more than twice as wide as it is high because the cover limits its height.',
+    action: 'Consider restrained joints or a deeper block.',
+  },
+  'block.impractical': {
+    severity: 'error',
+    values: { faceWidth: 'length', faceHeight: 'length' },
+    meaning:
+      'No practical block: the face the bearing value and the cover allow is far too wide. The restraint is not adequate.',
+    action: 'Use restrained joints, deepen the main, or have the soil investigated.',
+  },
+  'block.passive-short': {
+    severity: 'warning',
+    values: { ratio: 'ratio', safetyFactor: 'ratio' },
+    meaning: 'The face’s passive resistance is less than the safety factor times the thrust.',
+    action: 'Confirm the soil’s bearing with the geotechnical engineer, or enlarge or deepen the block.',
+  },
+  'pad.no-bearing': {
+    severity: 'warning',
+    values: {},
+    meaning: 'The soil under the fitting cannot take the downward thrust: restrained joints are sized instead.',
+    action: 'Restrain the joints or replace the soil.',
+  },
+  'joints.no-resistance': {
+    severity: 'error',
+    values: { frictionAngle: 'angle', cohesion: 'stress' },
+    meaning:
+      'The soil gives no friction or bearing along the pipe: restrained joints cannot hold the thrust. The restraint is not adequate.',
+    action: 'Use a block, piles or soil replacement.',
+  },
+  'joints.encroach': {
+    severity: 'warning',
+    values: { length: 'length', legLength: 'length' },
+    meaning: 'The restrained length runs past the next fitting: the restrained zones of neighbouring fittings overlap.',
+    action: 'Design the neighbouring restrained zones together.',
+  },
+  'joints.fused-pe': {
+    severity: 'info',
+    values: {},
+    meaning:
+      'Fused PE is end-load bearing: restraint is needed at transitions to gasketed pipe and for thermal and Poisson loads.',
+    action: 'Restrain the transitions.',
+  },
+  'joints.material-basis': {
+    severity: 'warning',
+    values: {},
+    meaning:
+      'The restrained-length method and its friction values are the ductile-iron manual’s; the pipe is of another material.',
+    action: 'Use friction values for the material from the restrained-joint maker.',
+  },
+  'joints.sharp-bend': {
+    severity: 'warning',
+    values: { deflection: 'angle' },
+    meaning: 'A bend sharper than 90°: restrained lengths grow quickly and the method is uncertain.',
+    action: 'Consider a block or a different layout.',
+  },
+} as const satisfies Record<string, CodeSpec>;
+
+export type DiagnosticCode = keyof typeof DIAGNOSTIC_CODES;

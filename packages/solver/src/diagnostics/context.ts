@@ -1,0 +1,58 @@
+import type { Analysis } from '../analysis/analyse.js';
+import { planBearing } from '../geometry/vector.js';
+import type { UnitSystem } from '../units/conversions.js';
+import { compassPoint } from '../schedule/fittingNames.js';
+import type { WordingContext } from './wording.js';
+
+/**
+ * The mark of the next fitting along a pipe from a node, walking on through straight joints: what a
+ * crew reads as "toward A6". Null when the line ends at no marked node.
+ */
+export function legTarget(a: Analysis, node: string, pipe: string): string | null {
+  let at = node;
+  let via = pipe;
+  for (let guard = 0; guard < a.project.pipes.length + 1; guard++) {
+    const leg = a.legs.get(at)?.find((l) => l.pipe.id === via);
+    if (!leg) return null;
+    const far = leg.far.id;
+    const mark = a.marks.get(far);
+    if (mark !== undefined) return mark;
+    const onward = a.legs.get(far)?.find((l) => l.pipe.id !== via);
+    if (!onward || (a.legs.get(far)?.length ?? 0) !== 2) return null;
+    at = far;
+    via = onward.pipe.id;
+  }
+  return null;
+}
+
+/** Words a leg as a crew reads it: "the leg toward A6", or by its compass direction. */
+export function legName(a: Analysis, node: string | undefined, pipe: string): string {
+  if (node === undefined) return 'the pipe';
+  const target = legTarget(a, node, pipe);
+  if (target) return `the leg toward ${target}`;
+  const leg = a.legs.get(node)?.find((l) => l.pipe.id === pipe);
+  return leg ? `the leg running ${compassPoint(planBearing(leg.direction))}` : 'the pipe';
+}
+
+/** How diagnostics of this analysis are worded in the given units. */
+export function wordingContext(a: Analysis, units: UnitSystem): WordingContext {
+  const { project } = a;
+  return {
+    units,
+    caseName: (id) => project.loadCases.find((c) => c.id === id)?.label ?? id,
+    soilName: (id) => {
+      const s = project.soils.find((x) => x.id === id);
+      return s?.label ?? id;
+    },
+    legName: (node, pipe) => legName(a, node, pipe),
+    material: (pipe) => MATERIAL_NAME[project.pipes.find((p) => p.id === pipe)?.material ?? 'other'] ?? 'other',
+  };
+}
+
+const MATERIAL_NAME: Record<string, string> = {
+  'ductile-iron': 'ductile iron',
+  pvc: 'PVC',
+  hdpe: 'HDPE',
+  steel: 'steel',
+  other: 'of another material',
+};

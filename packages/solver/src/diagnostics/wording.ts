@@ -1,0 +1,97 @@
+import { formatDimension, formatSi } from '../units/format.js';
+import type { UnitSystem } from '../units/conversions.js';
+import { DIAGNOSTIC_CODES, type DiagnosticCode } from './codes.js';
+import type { Diagnostic, Subject } from './diagnostic.js';
+
+/** How the reader knows the things a diagnostic names; ids never reach the words. */
+export interface WordingContext {
+  units: UnitSystem;
+  caseName: (id: string) => string;
+  soilName: (id: string) => string;
+  /** the pipe as seen from a fitting: "the leg toward A6" */
+  legName: (node: string | undefined, pipe: string) => string;
+  material: (pipe: string) => string;
+}
+
+type Shown = Record<string, string>;
+type Words = (v: Shown, s: Subject, c: WordingContext) => string;
+
+const soil = (s: Subject, c: WordingContext) => (s.soil ? c.soilName(s.soil) : 'the soil');
+const leg = (s: Subject, c: WordingContext) => (s.pipe ? c.legName(s.node, s.pipe) : 'the pipe');
+const inCase = (s: Subject, c: WordingContext) => (s.case ? ` in case “${c.caseName(s.case)}”` : '');
+
+/** One sentence per code, with its values in the reader's units. */
+const WORDS: Record<DiagnosticCode, Words> = {
+  'pressure.vapour-floor': (v, s, c) =>
+    `The hydraulic grade${inCase(s, c)} lies far below this node: the water column would separate (pressure held at the vapour pressure, ${v.pressure}). Check the profile and the case.`,
+  'pressure.below-zero': (v, s, c) =>
+    `Pressure at this node is below zero (${v.pressure})${inCase(s, c)}: the node stands above the hydraulic grade. Check for vacuum and air entry.`,
+  'flow.into-cap': (v) =>
+    `A flow of ${v.flow} runs into this closed end: check the pipe’s flow or make the node a tie-in.`,
+  'flow.unbalanced': (v) =>
+    `The flows at this node do not balance (${v.netSize} more ${v.direction}); check the pipes’ flows.`,
+  'valve.both-ways': () =>
+    'Valve sized open, and closed with the pressure on either side: its restraint holds the thrust both ways along the line.',
+  'valve.flag-ignored': () =>
+    'The valve flag applies only where two pipes meet; this node was sized as its fitting without a closed valve.',
+  'thrust.none': () => 'No thrust at this fitting in any case.',
+  'anchor.submerged': () =>
+    'Gravity anchor below groundwater: sized with the submerged unit weight of concrete (γc − γw); design for the highest groundwater level.',
+  'soil.no-bearing': (_v, s, c) =>
+    `No bearing: ${soil(s, c)} has no allowable bearing (muck, peat or unprepared fill). A thrust block cannot be used: restrained joints are sized instead; piles or soil replacement are the other choices.`,
+  'soil.below-min-cover': (v, s, c) =>
+    `The bearing value of ${soil(s, c)} holds for more than ${v.minCover} of cover; this fitting has ${v.cover}.`,
+  'block.wider-than-trench': (v) =>
+    `Bearing face ${v.faceWidth} wide is wider than the ${v.trenchWidth} trench it stands across: cut the face by hand into undisturbed soil beyond the trench, or use restrained joints.`,
+  'block.thrust-reverses': (v) =>
+    `The thrust reverses between load states (up to ${v.force} the other way): a second block bears on the opposite side.`,
+  'block.taller-than-cover': (v) =>
+    `Block taller than the cover allows: a face ${v.faceHeight} high needs its bottom ${v.bottomDepth} or more below ground, but the pipe centre is only ${v.centreDepth} down. Deepen the cover, use restrained joints, or design the block for passive pressure.`,
+  'block.wide-face': (v) =>
+    `Face ${v.faceWidth} wide is more than twice its ${v.faceHeight} height: the cover limits the height. Consider restrained joints or a deeper block.`,
+  'block.impractical': (v) =>
+    `Not adequate: no practical block — a face ${v.faceWidth} wide and ${v.faceHeight} high is what the bearing value and the cover allow. Use restrained joints, deepen the main, or have the soil investigated.`,
+  'block.passive-short': (v) =>
+    `The face’s passive resistance is ${v.ratio} × the thrust, below the safety factor ${v.safetyFactor}: confirm the soil’s bearing with the geotechnical engineer, or enlarge or deepen the block.`,
+  'pad.no-bearing': (_v, s, c) =>
+    `No bearing under the fitting: ${soil(s, c)} cannot take the downward thrust; restrained joints are sized instead, or replace the soil.`,
+  'joints.no-resistance': (v, s, c) =>
+    `Not adequate: the soil along ${leg(s, c)} (φ = ${v.frictionAngle}, c = ${v.cohesion}) gives no friction or bearing, so restrained joints cannot hold; use a block, piles or soil replacement.`,
+  'joints.encroach': (v, s, c) =>
+    `The restrained length ${v.length} along ${leg(s, c)} runs past the next fitting (${v.legLength} away): the restrained zones of neighbouring fittings overlap and must be designed together.`,
+  'joints.fused-pe': (_v, s, c) =>
+    `${capital(leg(s, c))} is fused PE, which is end-load bearing: restrain the transitions to gasketed pipe and allow for thermal and Poisson loads.`,
+  'joints.material-basis': (_v, s, c) =>
+    `${capital(leg(s, c))} is ${s.pipe ? c.material(s.pipe) : 'not ductile iron'}: the restrained-length method is the ductile-iron manual’s; use friction values for this material from the restrained-joint maker.`,
+  'joints.sharp-bend': (v) =>
+    `Bend of ${v.deflection}, sharper than 90°: restrained lengths grow quickly and the method is uncertain; consider a block or a different layout.`,
+};
+
+const capital = (t: string) => t.charAt(0).toUpperCase() + t.slice(1);
+
+/** Built dimensions read as a crew builds them (rounded up); other values to drawing precision. */
+const BUILT = new Set(['faceWidth', 'faceHeight', 'trenchWidth', 'bottomDepth', 'centreDepth', 'cover', 'minCover']);
+
+function shownValues(d: Diagnostic, units: UnitSystem): Shown {
+  const kinds = DIAGNOSTIC_CODES[d.code].values as Record<string, string>;
+  const out: Shown = {};
+  for (const [name, v] of Object.entries(d.values)) {
+    const kind = kinds[name];
+    if (kind === 'ratio' || kind === undefined) out[name] = formatRatio(v);
+    else if (BUILT.has(name)) out[name] = formatDimension(v, units);
+    else out[name] = formatSi(v, kind as Parameters<typeof formatSi>[1], units);
+  }
+  if (d.code === 'flow.unbalanced') {
+    const net = d.values.net ?? 0;
+    out.netSize = formatSi(Math.abs(net), 'flow', units);
+    out.direction = net > 0 ? 'leaves than arrives' : 'arrives than leaves';
+  }
+  return out;
+}
+
+const formatRatio = (v: number) => (Number.isFinite(v) ? String(Math.round(v * 100) / 100) : '—');
+
+/** The diagnostic as one sentence in the reader's units. */
+export function diagnosticText(d: Diagnostic, c: WordingContext): string {
+  return WORDS[d.code](shownValues(d, c.units), d.subject, c);
+}

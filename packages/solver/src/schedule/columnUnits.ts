@@ -1,0 +1,77 @@
+import { CUBIC_YARD, FOOT, INCH, KIP, PSI, type UnitSystem } from '../units/conversions.js';
+import { ceilTo, formatDimension, roundTo } from '../units/format.js';
+
+/**
+ * The kinds of quantity a schedule column holds. Each has one unit and one precision per unit system
+ * (screens.md: one unit per column), and built quantities round up.
+ */
+export type ColumnKind =
+  | 'chainage'
+  | 'coordinate'
+  | 'level'
+  | 'diameter'
+  | 'angle'
+  | 'pressure'
+  | 'force'
+  | 'area'
+  | 'built'
+  | 'volume'
+  | 'restrained'
+  | 'text';
+
+interface Display {
+  symbol: string;
+  /** SI value of one display unit */
+  factor: number;
+  decimals: number;
+  up: boolean;
+}
+
+const d = (symbol: string, factor: number, decimals: number, up = false): Display => ({
+  symbol,
+  factor,
+  decimals,
+  up,
+});
+
+/** Units and precision of each numeric column kind ('built' is formatted by `formatDimension`). */
+export const COLUMN_UNITS: Record<Exclude<ColumnKind, 'text'>, Record<UnitSystem, Display>> = {
+  chainage: { si: d('m', 1, 1), us: d('ft', FOOT, 1) },
+  coordinate: { si: d('m', 1, 2), us: d('ft', FOOT, 2) },
+  level: { si: d('m', 1, 2), us: d('ft', FOOT, 2) },
+  diameter: { si: d('mm', 1e-3, 0), us: d('in', INCH, 2) },
+  angle: { si: d('°', 1, 2), us: d('°', 1, 2) },
+  pressure: { si: d('kPa', 1e3, 0), us: d('psi', PSI, 1) },
+  force: { si: d('kN', 1e3, 1), us: d('kip', KIP, 2) },
+  area: { si: d('m²', 1, 2), us: d('ft²', FOOT * FOOT, 1) },
+  built: { si: d('m', 1, 2, true), us: d('ft-in', FOOT, 0, true) },
+  volume: { si: d('m³', 1, 2, true), us: d('yd³', CUBIC_YARD, 2, true) },
+  restrained: { si: d('m', 1, 1, true), us: d('ft', FOOT, 0, true) },
+};
+
+/** Trailing zeros after the point dropped for angles: 22.5, 11.25, 90. */
+const trim = (text: string) => (text.includes('.') ? text.replace(/\.?0+$/, '') : text);
+
+/** An SI value as a column shows it: the number only, its unit is in the column heading. */
+export function columnNumber(si: number, kind: Exclude<ColumnKind, 'text'>, units: UnitSystem): string {
+  if (!Number.isFinite(si)) return '—';
+  if (kind === 'built') return formatDimension(si, units).replace(/ m$/, '');
+  const u = COLUMN_UNITS[kind][units];
+  const shown = si / u.factor;
+  const rounded = u.up ? ceilTo(shown, u.decimals) : roundTo(shown, u.decimals);
+  const text = rounded.toFixed(u.decimals);
+  const clean = /^-0(\.0*)?$/.test(text) ? text.slice(1) : text;
+  return kind === 'angle' ? trim(clean) : clean;
+}
+
+/** A column's unit as its heading shows it: "kN", "ft-in". */
+export const columnUnit = (kind: Exclude<ColumnKind, 'text'>, units: UnitSystem): string =>
+  COLUMN_UNITS[kind][units].symbol;
+
+/** A value with its unit, as running text uses it: "12.5 m", "2 ft 4 in", "45°". */
+export function quantityText(si: number, kind: Exclude<ColumnKind, 'text'>, units: UnitSystem): string {
+  if (kind === 'built') return formatDimension(si, units);
+  const n = columnNumber(si, kind, units);
+  const unit = columnUnit(kind, units);
+  return kind === 'angle' ? `${n}${unit}` : `${n} ${unit}`;
+}

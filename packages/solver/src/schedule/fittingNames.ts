@@ -1,0 +1,36 @@
+import type { FittingKind } from '../network/fittingKind.js';
+
+/** A fitting kind as a crew names it. */
+export const KIND_NAME: Record<FittingKind, string> = {
+  bend: 'Bend',
+  reducer: 'Reducer',
+  'reducing-bend': 'Reducing bend',
+  tee: 'Tee',
+  wye: 'Wye',
+  cross: 'Cross',
+  'dead-end': 'Dead end',
+  valve: 'Valve',
+  'tie-in': 'Tie-in',
+  straight: 'Straight joint',
+  none: 'Free node',
+};
+
+const COMPASS = ['N', 'NE', 'E', 'SE', 'S', 'SW', 'W', 'NW'];
+
+/** Eight-point compass name of a plan bearing, degrees clockwise from north. */
+export const compassPoint = (deg: number): string => COMPASS[Math.round((((deg % 360) + 360) % 360) / 45) % 8]!;
+
+/** "169° S": a bearing as a whole degree and its compass point, "—" when there is none. */
+export const bearingText = (deg: number | null): string =>
+  deg === null || !Number.isFinite(deg) ? '—' : `${Math.round(deg) % 360}° ${compassPoint(deg)}`;
+
+/** Deflection as an engineer writes it: 22.5°, 11.25°, 90°. */
+export const angleText = (deg: number): string => `${Math.round(deg * 100) / 100}°`;
+
+/** "Bend 45°", "Tee, branch 90°", "Dead end": the fitting as a crew names it. */
+export function fittingTitle(g: { kind: FittingKind; deflection: number | null; branchAngle: number | null }): string {
+  const name = KIND_NAME[g.kind];
+  if (g.deflection !== null && g.kind !== 'valve' && g.kind !== 'reducer') return `${name} ${angleText(g.deflection)}`;
+  if (g.branchAngle !== null) return `${name}, branch at ${angleText(g.branchAngle)}`;
+  return name;
+}

@@ -1,0 +1,33 @@
+import type { UnitSystem } from '../units/conversions.js';
+import { formatDimension } from '../units/format.js';
+import { quantityText } from './columnUnits.js';
+import type { ScheduleFitting } from './scheduleRows.js';
+
+type Block = NonNullable<ScheduleFitting['restraint']['block']>;
+
+const dim = (m: number, units: UnitSystem) => formatDimension(m, units);
+
+/** "0.80 w × 0.75 h × 0.60 t": face width, face height and thickness to the bearing face. */
+export const blockText = (b: Block, units: UnitSystem): string =>
+  `${dim(b.faceWidth, units)} w × ${dim(b.faceHeight, units)} h × ${dim(b.depth, units)} t`;
+
+/** Restrained lengths per leg, named by the fitting each runs toward: "12.5 m toward A4". */
+export function restrainedText(f: ScheduleFitting, units: UnitSystem): string {
+  return f.restraint.restrainedLegs
+    .map((l) => `${quantityText(l.length, 'restrained', units)} ${l.toward ? `toward ${l.toward}` : 'to the end'}`)
+    .join(', ');
+}
+
+/** What holds the fitting, in one line of display units: what a crew builds. */
+export function restraintSummary(f: ScheduleFitting, units: UnitSystem): string {
+  const r = f.restraint;
+  const parts: string[] = [];
+  if (r.block) parts.push(`block ${blockText(r.block, units)}`);
+  if (r.reverseBlock) parts.push(`opposite block ${blockText(r.reverseBlock, units)}`);
+  if (r.anchor)
+    parts.push(`anchor ${dim(r.anchor.side, units)} cube, ${quantityText(r.anchor.concreteVolume, 'volume', units)}`);
+  if (r.trenchBottom)
+    parts.push(`bottom pad ${dim(r.trenchBottom.width, units)} × ${dim(r.trenchBottom.length, units)}`);
+  if (r.restrainedLegs.length) parts.push(`restrain ${restrainedText(f, units)}`);
+  return parts.length ? parts.join('; ') : '—';
+}

@@ -1,0 +1,120 @@
+import type { Vec3 } from '../geometry/vector.js';
+import { DIAGNOSTIC_CODES } from '../diagnostics/codes.js';
+import type { Diagnostic } from '../diagnostics/diagnostic.js';
+import type { Dimension } from '../units/conversions.js';
+import { ceilTo, roundTo } from '../units/format.js';
+import type { Schedule, ScheduleBlock, ScheduleFitting } from './scheduleRows.js';
+
+/**
+ * Decimals kept in the JSON schedule per kind of quantity, SI (docs/project-format.md): millimetres,
+ * a hundredth of a millimetre for diameters, a tenth of a newton, a pascal, a ten-thousandth of a
+ * degree, of a square and of a cubic metre. Built dimensions and volumes round up, never down.
+ */
+export const JSON_DECIMALS: Record<Dimension | 'unit', number> = {
+  length: 3,
+  elevation: 3,
+  diameter: 5,
+  area: 4,
+  volume: 4,
+  force: 1,
+  pressure: 0,
+  stress: 0,
+  unitWeight: 0,
+  flow: 6,
+  density: 2,
+  angle: 4,
+  velocity: 3,
+  forcePerLength: 1,
+  stressGradient: 0,
+  ratio: 3,
+  unit: 6,
+};
+
+const r = (v: number, kind: keyof typeof JSON_DECIMALS) => roundTo(v, JSON_DECIMALS[kind]);
+const up = (v: number, kind: keyof typeof JSON_DECIMALS) => ceilTo(v, JSON_DECIMALS[kind]);
+const rn = (v: number | null, kind: keyof typeof JSON_DECIMALS) => (v === null ? null : r(v, kind));
+const vec = (v: Vec3, kind: keyof typeof JSON_DECIMALS): Vec3 => [r(v[0], kind), r(v[1], kind), r(v[2], kind)];
+
+function block(b: ScheduleBlock | null): ScheduleBlock | null {
+  return (
+    b && {
+      bearingArea: r(b.bearingArea, 'area'),
+      faceWidth: up(b.faceWidth, 'length'),
+      faceHeight: up(b.faceHeight, 'length'),
+      concreteVolume: up(b.concreteVolume, 'volume'),
+      depth: up(b.depth, 'length'),
+      direction: vec(b.direction, 'unit'),
+      passiveResistance: r(b.passiveResistance, 'force'),
+      passiveRatio: r(b.passiveRatio, 'ratio'),
+    }
+  );
+}
+
+/** A diagnostic as JSON: each value with its kind of quantity, SI, at the stated precision. */
+export function diagnosticJson(d: Diagnostic) {
+  const kinds = DIAGNOSTIC_CODES[d.code].values as Record<string, Dimension>;
+  const values: Record<string, { value: number; kind: Dimension }> = {};
+  for (const [name, v] of Object.entries(d.values)) {
+    const kind = kinds[name] ?? 'ratio';
+    values[name] = { value: r(v, kind), kind };
+  }
+  return { code: d.code, severity: d.severity, subject: d.subject, values };
+}
+
+function fitting(f: ScheduleFitting) {
+  const x = f.restraint;
+  return {
+    ...f,
+    deflection: rn(f.deflection, 'angle'),
+    horizontalDeflection: rn(f.horizontalDeflection, 'angle'),
+    verticalDeflection: rn(f.verticalDeflection, 'angle'),
+    branchAngle: rn(f.branchAngle, 'angle'),
+    chainage: r(f.chainage, 'length'),
+    position: vec(f.position, 'length'),
+    pipes: f.pipes.map((p) => ({
+      ...p,
+      outsideDiameter: r(p.outsideDiameter, 'diameter'),
+      insideDiameter: r(p.insideDiameter, 'diameter'),
+    })),
+    cases: f.cases.map((c) => ({
+      ...c,
+      pressure: r(c.pressure, 'pressure'),
+      static: vec(c.static, 'force'),
+      dynamic: vec(c.dynamic, 'force'),
+      total: vec(c.total, 'force'),
+    })),
+    designPressure: r(f.designPressure, 'pressure'),
+    thrust: vec(f.thrust, 'force'),
+    horizontalThrust: r(f.horizontalThrust, 'force'),
+    upwardThrust: r(f.upwardThrust, 'force'),
+    downwardThrust: r(f.downwardThrust, 'force'),
+    bearingDirection: rn(f.bearingDirection, 'angle'),
+    waterWeight: r(f.waterWeight, 'force'),
+    restraint: {
+      block: block(x.block),
+      reverseBlock: block(x.reverseBlock),
+      anchor: x.anchor && {
+        concreteVolume: up(x.anchor.concreteVolume, 'volume'),
+        side: up(x.anchor.side, 'length'),
+        submerged: x.anchor.submerged,
+      },
+      trenchBottom: x.trenchBottom && {
+        bearingArea: r(x.trenchBottom.bearingArea, 'area'),
+        width: up(x.trenchBottom.width, 'length'),
+        length: up(x.trenchBottom.length, 'length'),
+      },
+      restrainedLength: x.restrainedLength === null ? null : up(x.restrainedLength, 'length'),
+      restrainedLegs: x.restrainedLegs.map((l) => ({ ...l, length: up(l.length, 'length') })),
+    },
+    diagnostics: f.diagnostics.map(diagnosticJson),
+  };
+}
+
+/**
+ * The schedule as JSON text at the stated precision (no 0.7000000000000001), the same whatever the
+ * display units: what `schedule --format json` prints and the app exports.
+ */
+export function scheduleJson(s: Schedule, pretty = false): string {
+  const out = { project: s.project, units: s.units, fittings: s.fittings.map(fitting), cautions: s.cautions };
+  return JSON.stringify(out, null, pretty ? 2 : undefined) + '\n';
+}
