@@ -55,7 +55,7 @@ export function PipeDetails({ pipe }: { pipe: Pipe; project: Project }) {
   return (
     <section className="inputs" aria-label={`Pipe ${pipe.id}`}>
       <h3>
-        Pipe <span className="tag">{pipe.id}</span>{' '}
+        Pipe <span className="node-id">{pipe.id}</span>{' '}
         <span className="muted">
           {pipe.from} → {pipe.to}, {show(length, 'length', u, 4)}
         </span>

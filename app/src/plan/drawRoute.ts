@@ -131,7 +131,7 @@ export function label(
   ctx.fillText(text, x, y);
 }
 
-/** The warning marker beside a tag: a triangle with "!" (never colour alone). */
+/** The warning marker beside a mark: a triangle with "!" (never colour alone). */
 function warningMark(ctx: Ctx, wx: number, ty: number) {
   ctx.beginPath();
   ctx.moveTo(wx, ty - 6);
@@ -151,7 +151,10 @@ function warningMark(ctx: Ctx, wx: number, ty: number) {
 
 const TAG_FONT = '600 11px system-ui, sans-serif';
 
-/** Tags get their room first (above right of the symbol, else the other corners); selected ones always show. */
+/**
+ * Places the mark labels (fittings' and tie-ins'): marks get their room first, above right of the
+ * symbol, else the other corners; selected ones always show. Returns each label's left-middle point.
+ */
 export function placeTags(
   ctx: Ctx,
   v: Viewport,
@@ -160,10 +163,14 @@ export function placeTags(
 ): Map<string, { x: number; y: number }> {
   ctx.font = TAG_FONT;
   const out = new Map<string, { x: number; y: number }>();
-  const ordered = [...scene.fittings].sort((a, b) => Number(b.selected) - Number(a.selected));
+  const marked = [
+    ...scene.fittings.map((f) => ({ node: f.node, at: f.at, mark: f.mark, warned: f.warned, selected: f.selected })),
+    ...scene.plainNodes.flatMap((n) => (n.mark ? [{ ...n, node: n.id, mark: n.mark, warned: false }] : [])),
+  ];
+  const ordered = marked.sort((a, b) => Number(b.selected) - Number(a.selected));
   for (const f of ordered) {
     const s = toScreen(v, f.at);
-    const w = ctx.measureText(f.tag).width + (f.warned ? 18 : 0) + 4;
+    const w = ctx.measureText(f.mark).width + (f.warned ? 18 : 0) + 4;
     const h = 14;
     const spot = space.place([
       { x: s.sx + 8, y: s.sy - 19, w, h },
@@ -177,7 +184,7 @@ export function placeTags(
   return out;
 }
 
-/** Fitting symbols with their placed tags and warning markers; plain nodes and tie-ins. */
+/** Fitting symbols with their placed marks and warning markers; plain nodes and tie-ins (with their marks). */
 export function drawFittings(ctx: Ctx, v: Viewport, scene: Scene, tags: ReadonlyMap<string, { x: number; y: number }>) {
   for (const n of scene.plainNodes) {
     const s = toScreen(v, n.at);
@@ -195,6 +202,8 @@ export function drawFittings(ctx: Ctx, v: Viewport, scene: Scene, tags: Readonly
     ctx.strokeStyle = PALETTE.ink;
     ctx.lineWidth = 1.2;
     ctx.stroke();
+    const at = n.mark ? tags.get(n.id) : undefined;
+    if (at) label(ctx, n.mark!, at.x, at.y, PALETTE.ink, TAG_FONT);
   }
   for (const f of scene.fittings) {
     const s = toScreen(v, f.at);
@@ -208,8 +217,8 @@ export function drawFittings(ctx: Ctx, v: Viewport, scene: Scene, tags: Readonly
     symbol(ctx, f, s.sx, s.sy);
     const at = tags.get(f.node);
     if (!at) continue;
-    label(ctx, f.tag, at.x, at.y, PALETTE.ink, TAG_FONT);
-    if (f.warned) warningMark(ctx, at.x + ctx.measureText(f.tag).width + 10, at.y);
+    label(ctx, f.mark, at.x, at.y, PALETTE.ink, TAG_FONT);
+    if (f.warned) warningMark(ctx, at.x + ctx.measureText(f.mark).width + 10, at.y);
   }
 }
 

@@ -118,4 +118,14 @@ describe('planScene while nodes are dragged', () => {
       ['n3', true],
     ]);
   });
+
+  it('labels the bend and both tie-ins with their marks along the run: A1, A2, A3 (docs/project-format.md, Marks)', () => {
+    const doc = bend('tie-in');
+    const scene = planScene(doc, analyse(doc), ENVELOPE, EMPTY_SELECTION, null);
+    expect(scene.fittings.map((f) => [f.node, f.mark])).toEqual([['n2', 'A2']]);
+    expect(scene.plainNodes.map((n) => [n.id, n.mark])).toEqual([
+      ['n1', 'A1'],
+      ['n3', 'A3'],
+    ]);
+  });
 });

@@ -21,7 +21,8 @@ export interface ScenePipe {
 
 export interface SceneFitting {
   node: string;
-  tag: string;
+  /** run letter and number along the run: A1, A2 … B1 */
+  mark: string;
   kind: FittingKind;
   at: PlanPoint;
   /** plan direction of the first pipe, for orienting the symbol */
@@ -55,8 +56,8 @@ export interface Scene {
   polygons: ScenePolygon[];
   /** N, the largest arrow force, for the one arrow scale of the plan */
   largestForce: number;
-  /** plan positions of free nodes and tie-ins (no fitting), so they can be picked */
-  plainNodes: { id: string; at: PlanPoint; tieIn: boolean; selected: boolean }[];
+  /** plan positions of free nodes and tie-ins (no fitting), so they can be picked; a tie-in has a mark */
+  plainNodes: { id: string; at: PlanPoint; tieIn: boolean; mark: string | null; selected: boolean }[];
 }
 
 const plan = (v: Vec3): PlanPoint => ({ x: v[0], y: v[1] });
@@ -119,7 +120,7 @@ export function planScene(
     const axis = f.legs[0] ? plan(f.legs[0].direction) : { x: 1, y: 0 };
     fittings.push({
       node: id,
-      tag: f.mark,
+      mark: f.mark,
       kind: f.geometry.kind,
       at,
       axis,
@@ -189,7 +190,14 @@ export function planScene(
   }
   const plainNodes = project.nodes
     .filter((n) => !withFitting.has(n.id) && !hidden?.has(n.id))
-    .map((n) => ({ id: n.id, at: where.get(n.id)!, tieIn: n.end === 'tie-in', selected: selection.nodes.has(n.id) }));
+    .map((n) => ({
+      id: n.id,
+      at: where.get(n.id)!,
+      tieIn: n.end === 'tie-in',
+      // A tie-in is numbered along its run (restrained legs run "toward A1"), so the plan shows its mark.
+      mark: analysis?.marks.get(n.id) ?? null,
+      selected: selection.nodes.has(n.id),
+    }));
   return { pipes, fittings, arrows, polygons, largestForce, plainNodes };
 }
 

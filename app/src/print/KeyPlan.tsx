@@ -7,7 +7,7 @@ const W = 420;
 const H = 230;
 const PAD = 22;
 
-/** A small plan of the whole route with every fitting's tag, north and a scale: where each row is. */
+/** A small plan of the whole route with every fitting's mark, north and a scale: where each row is. */
 export function KeyPlan({ project, analysis }: { project: Project; analysis: Analysis }) {
   const units = useApp((s) => s.units);
   if (project.nodes.length === 0) return null;
@@ -26,7 +26,7 @@ export function KeyPlan({ project, analysis }: { project: Project; analysis: Ana
   const bar = gridSpacing(scale, 80);
   return (
     <figure className="key-plan">
-      <svg viewBox={`0 0 ${W} ${H}`} role="img" aria-label="Key plan of the route with fitting tags">
+      <svg viewBox={`0 0 ${W} ${H}`} role="img" aria-label="Key plan of the route with fitting marks">
         <rect x="0.5" y="0.5" width={W - 1} height={H - 1} fill="none" stroke="#999" />
         {project.pipes.map((p) => {
           const a = at.get(p.from)!,

@@ -31,7 +31,14 @@ export { scheduleOf, type Schedule, type ScheduleFitting } from './schedule/sche
 export { scheduleCsv } from './schedule/scheduleCsv.js';
 export { scheduleTable } from './schedule/scheduleTable.js';
 export { scheduleJson, diagnosticJson, JSON_DECIMALS } from './schedule/scheduleJson.js';
-export { restraintSummary, blockText, restrainedText } from './schedule/restraintText.js';
+export { restraintSummary, blockText, restrainedText, restrainedLegText } from './schedule/restraintText.js';
+export {
+  restraintElements,
+  elementName,
+  ELEMENT_WORD,
+  type RestraintElement,
+  type RestraintElementKind,
+} from './schedule/restraintElements.js';
 export { SCHEDULE_COLUMNS, TABLE_COLUMNS, APP_COLUMNS, type ScheduleColumn } from './schedule/scheduleColumns.js';
 export {
   scheduleView,

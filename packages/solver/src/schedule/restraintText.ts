@@ -11,11 +11,15 @@ const dim = (m: number, units: UnitSystem) => formatDimension(m, units);
 export const blockText = (b: Block, units: UnitSystem): string =>
   `${dim(b.faceWidth, units)} w × ${dim(b.faceHeight, units)} h × ${dim(b.depth, units)} t`;
 
+type RestrainedLeg = ScheduleFitting['restraint']['restrainedLegs'][number];
+
+/** One restrained leg, named by the fitting it runs toward: "12.5 m toward A4". */
+export const restrainedLegText = (l: RestrainedLeg, units: UnitSystem): string =>
+  `${quantityText(l.length, 'restrained', units)} ${l.toward ? `toward ${l.toward}` : 'to the end'}`;
+
 /** Restrained lengths per leg, named by the fitting each runs toward: "12.5 m toward A4". */
 export function restrainedText(f: ScheduleFitting, units: UnitSystem): string {
-  return f.restraint.restrainedLegs
-    .map((l) => `${quantityText(l.length, 'restrained', units)} ${l.toward ? `toward ${l.toward}` : 'to the end'}`)
-    .join(', ');
+  return f.restraint.restrainedLegs.map((l) => restrainedLegText(l, units)).join(', ');
 }
 
 /** What holds the fitting, in one line of display units: what a crew builds. */
