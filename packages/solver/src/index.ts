@@ -25,7 +25,17 @@ export {
 export { analyse, analyseProject, calculationRecord, type Analysis, type FittingAnalysis } from './analysis/analyse.js';
 export type { CalcStep, RecordValue } from './analysis/calcRecord.js';
 export { nodeSoil, type Restraint } from './restraint/sizeRestraint.js';
-export { SOIL_LIBRARY, findLibrarySoil, type LibrarySoil } from './restraint/soilLibrary.js';
+export {
+  SOIL_LIBRARY,
+  SOIL_KINDS,
+  ORDERING_DEPTH,
+  findLibrarySoil,
+  librarySoilToProject,
+  orderingBearing,
+  type LibrarySoil,
+  type SoilKind,
+  type SoilTable,
+} from './restraint/soilLibrary.js';
 export { rankinePassiveCoefficient, passiveResistance } from './restraint/passiveResistance.js';
 export { scheduleOf, type Schedule, type ScheduleFitting } from './schedule/scheduleRows.js';
 export { scheduleCsv } from './schedule/scheduleCsv.js';
@@ -68,5 +78,13 @@ export { notVerifiedText, type ProvenanceEntry, type SourceKind } from './proven
 export { CAUTIONS, SHORT_CAUTION } from './schedule/cautions.js';
 export { restraintConcrete } from './schedule/concrete.js';
 export * from './catalog/catalog.js';
+export {
+  BEDDINGS,
+  DEFAULT_BEDDING,
+  WRAP_WORDS,
+  beddingReference,
+  findBedding,
+  type Bedding,
+} from './catalog/layingConditions.js';
 export type { PipeSeries, PipeSize } from './catalog/pipeSeries.js';
 export { proposeTestPressure, type TestProposal, type TestRule, type TestCriterion } from './pressure/testPressure.js';

@@ -1,0 +1,109 @@
+import { useActions, useApp } from '../state/StoreContext.js';
+import { NumberField } from './NumberField.js';
+
+/** Blocks and anchors (their safety factors and concrete), then the water and the ground around the main. */
+export function DesignSettings() {
+  const project = useApp((s) => s.project);
+  const u = useApp((s) => s.units);
+  const actions = useActions();
+  const d = project.design;
+  return (
+    <>
+      <section className="settings-group" aria-labelledby="blocks-title">
+        <h4 id="blocks-title">Blocks and anchors</h4>
+        <div className="field-row">
+          <NumberField
+            label="Safety factor on bearing"
+            value={d.bearingSafetyFactor}
+            dimension="ratio"
+            units={u}
+            min={1}
+            max={10}
+            onCommit={(v) => actions.updateDesign({ bearingSafetyFactor: v })}
+          />
+          <NumberField
+            label="Safety factor on uplift"
+            value={d.upliftSafetyFactor}
+            dimension="ratio"
+            units={u}
+            min={1}
+            max={10}
+            onCommit={(v) => actions.updateDesign({ upliftSafetyFactor: v })}
+          />
+        </div>
+        <div className="field-row">
+          <NumberField
+            label="Concrete unit weight"
+            value={d.concreteUnitWeight}
+            dimension="unitWeight"
+            units={u}
+            min={10000}
+            max={40000}
+            onCommit={(v) => actions.updateDesign({ concreteUnitWeight: v })}
+          />
+          <NumberField
+            label="Block depth to bearing face"
+            value={d.blockDepth}
+            dimension="length"
+            units={u}
+            min={0.1}
+            max={5}
+            onCommit={(v) => actions.updateDesign({ blockDepth: v })}
+          />
+        </div>
+      </section>
+      <section className="settings-group" aria-labelledby="water-title">
+        <h4 id="water-title">Water and ground</h4>
+        <div className="field-row">
+          <NumberField
+            label="Water density"
+            value={project.water.density}
+            dimension="density"
+            units={u}
+            min={900}
+            max={1100}
+            onCommit={actions.setWaterDensity}
+          />
+          <div className="field">
+            <label htmlFor="thrust-area">Pressure acts on</label>
+            <select
+              id="thrust-area"
+              value={d.thrustArea}
+              onChange={(e) => actions.updateDesign({ thrustArea: e.target.value as 'outside' | 'inside' })}
+            >
+              <option value="outside">Outside diameter (push-on and mechanical joints)</option>
+              <option value="inside">Inside diameter (welded or flanged)</option>
+            </select>
+          </div>
+        </div>
+        {d.groundwaterElevation === null ? (
+          <div className="field">
+            <label>Groundwater</label>
+            <button
+              onClick={() =>
+                actions.updateDesign({
+                  groundwaterElevation: Math.min(...project.nodes.map((n) => n.elevation), 100),
+                })
+              }
+            >
+              Below every block — set a level
+            </button>
+          </div>
+        ) : (
+          <div className="field">
+            <NumberField
+              label="Highest groundwater elevation"
+              value={d.groundwaterElevation}
+              dimension="elevation"
+              units={u}
+              onCommit={(v) => actions.updateDesign({ groundwaterElevation: v })}
+            />
+            <button className="link" onClick={() => actions.updateDesign({ groundwaterElevation: null })}>
+              Below every block
+            </button>
+          </div>
+        )}
+      </section>
+    </>
+  );
+}
