@@ -18,6 +18,7 @@ export function blankProject(): Project {
       blockDepth: 0.6,
       trenchWidth: null,
       dimensionStep: 0.05,
+      layingLength: 6,
     },
     loadCases: [
       { id: 'working', label: 'Working', kind: 'working', pressure: 600e3, datumElevation: 100, flowFactor: 1 },

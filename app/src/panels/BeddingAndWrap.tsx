@@ -80,6 +80,16 @@ export function BeddingAndWrap() {
       </div>
       <div className="field-row">
         <NumberField
+          label="Pipe laying length"
+          value={project.design.layingLength}
+          dimension="length"
+          units={u}
+          min={0.5}
+          max={30}
+          onCommit={(v) => actions.updateDesign({ layingLength: v })}
+          hint="Joint to joint: restrained joints are counted and drawn from it."
+        />
+        <NumberField
           label="Safety factor on restrained length"
           value={project.design.restraintSafetyFactor}
           dimension="ratio"

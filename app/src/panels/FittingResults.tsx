@@ -3,11 +3,13 @@ import {
   elementName,
   formatDimension,
   horizontalNorm,
+  jointsText,
   legTarget,
   norm,
   notVerifiedText,
   planBearing,
   quantityText,
+  restrainedJointCount,
   REGISTER,
   unverified,
   type FittingAnalysis,
@@ -124,7 +126,9 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
             <li key={l.pipe} data-testid="restrained">
               <span className="element">{elementName(f.mark, 'joints')}</span> Restrain joints{' '}
               <strong>{quantityText(l.length, 'restrained', u)}</strong>{' '}
-              {toward ? `toward ${toward}` : 'to the end of the line'}.
+              {toward ? `toward ${toward}` : 'to the end of the line'}:{' '}
+              {jointsText(restrainedJointCount(l.length, project.design.layingLength))} at{' '}
+              {show(project.design.layingLength, 'length', u)} laying length, the first at the fitting.
             </li>
           );
         })}

@@ -41,7 +41,14 @@ export { scheduleOf, type Schedule, type ScheduleFitting } from './schedule/sche
 export { scheduleCsv } from './schedule/scheduleCsv.js';
 export { scheduleTable } from './schedule/scheduleTable.js';
 export { scheduleJson, diagnosticJson, JSON_DECIMALS } from './schedule/scheduleJson.js';
-export { restraintSummary, blockText, restrainedText, restrainedLegText } from './schedule/restraintText.js';
+export {
+  restraintSummary,
+  blockText,
+  restrainedText,
+  restrainedLegText,
+  jointsText,
+} from './schedule/restraintText.js';
+export { restrainedJointCount, restrainedJointPositions } from './schedule/restrainedJoints.js';
 export {
   restraintElements,
   elementName,

@@ -46,6 +46,14 @@ export const designSchema = z.strictObject({
     .gte(0.001, { error: 'must be at least 0.001 m (1 mm)' })
     .lte(0.3, { error: 'must be at most 0.3 m' })
     .default(0.05),
+  /**
+   * m, length of one pipe between joints: restrained joints are counted and drawn from it, the first at
+   * the fitting. 6 m is common practice (EN 545 pipes are made 6 m long; 20 ft pipes are 6.1 m).
+   */
+  layingLength: finite()
+    .gte(0.5, { error: 'must be at least 0.5 m' })
+    .lte(30, { error: 'must be at most 30 m' })
+    .default(6),
 });
 
 export const loadCaseSchema = z.strictObject({

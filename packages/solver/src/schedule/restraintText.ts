@@ -13,11 +13,14 @@ export const blockText = (b: Block, units: UnitSystem): string =>
 
 type RestrainedLeg = ScheduleFitting['restraint']['restrainedLegs'][number];
 
-/** One restrained leg, named by the fitting it runs toward: "12.5 m toward A4". */
+/** One restrained leg, named by the fitting it runs toward, with its joints: "12.5 m toward A4 (3 joints)". */
 export const restrainedLegText = (l: RestrainedLeg, units: UnitSystem): string =>
-  `${quantityText(l.length, 'restrained', units)} ${l.toward ? `toward ${l.toward}` : 'to the end'}`;
+  `${quantityText(l.length, 'restrained', units)} ${l.toward ? `toward ${l.toward}` : 'to the end'} (${jointsText(l.joints)})`;
 
-/** Restrained lengths per leg, named by the fitting each runs toward: "12.5 m toward A4". */
+/** "1 joint", "3 joints". */
+export const jointsText = (n: number): string => `${n} joint${n === 1 ? '' : 's'}`;
+
+/** Restrained lengths per leg, named by the fitting each runs toward: "12.5 m toward A4 (3 joints)". */
 export function restrainedText(f: ScheduleFitting, units: UnitSystem): string {
   return f.restraint.restrainedLegs.map((l) => restrainedLegText(l, units)).join(', ');
 }
