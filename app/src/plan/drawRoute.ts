@@ -116,7 +116,8 @@ export function label(
   ctx.font = font;
   ctx.textAlign = 'left';
   ctx.textBaseline = 'middle';
-  ctx.lineWidth = 3;
+  ctx.lineWidth = 4;
+  ctx.lineJoin = 'round';
   ctx.strokeStyle = PALETTE.halo;
   ctx.strokeText(text, x, y);
   ctx.fillStyle = color;
