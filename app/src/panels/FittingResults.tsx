@@ -124,7 +124,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
           const toward = legTarget(analysis, f.node.id, l.pipe);
           return (
             <li key={l.pipe} data-testid="restrained">
-              <span className="element">{elementName(f.mark, 'joints')}</span> Restrain joints{' '}
+              <span className="element">{elementName(f.mark, 'joints')}</span> Restrain{' '}
               <strong>{quantityText(l.length, 'restrained', u)}</strong>{' '}
               {toward ? `toward ${toward}` : 'to the end of the line'}:{' '}
               {jointsText(restrainedJointCount(l.length, project.design.layingLength))} at{' '}
