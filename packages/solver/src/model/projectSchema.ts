@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { REGISTER } from '../provenance/register.js';
 
 /**
  * The project file (shared design: project-format.md, v1). Stored quantities are SI base units;
@@ -9,6 +10,8 @@ const id = z.string().min(1, { error: 'must be a non-empty id' }).max(64, { erro
 const finite = () => z.number().finite();
 const positive = () => finite().gt(0, { error: 'must be greater than 0' });
 const nonNegative = () => finite().gte(0, { error: 'must be 0 or more' });
+/** Default safety factor on bearing, uplift and restrained length (register: design.safety-factor). */
+const SF = REGISTER['design.safety-factor'].value;
 const safetyFactor = () => finite().gte(1, { error: 'must be 1 or more' }).lte(10, { error: 'must be at most 10' });
 
 export const MATERIALS = ['ductile-iron', 'pvc', 'hdpe', 'steel', 'other'] as const;
@@ -18,24 +21,24 @@ export const RESTRAINT_METHODS = ['block', 'joints'] as const;
 export const ENCASEMENTS = ['none', 'polyethylene'] as const;
 
 export const waterSchema = z.strictObject({
-  /** kg/m³; 998.2 is water at 20 °C (Tanaka et al. 2001, Metrologia 38:301) */
-  density: positive().default(998.2),
+  /** kg/m³; water at 20 °C (register: water.density) */
+  density: positive().default(REGISTER['water.density'].value),
 });
 
 export const designSchema = z.strictObject({
   thrustArea: z.enum(['outside', 'inside']).default('outside'),
-  bearingSafetyFactor: safetyFactor().default(1.5),
-  upliftSafetyFactor: safetyFactor().default(1.5),
-  restraintSafetyFactor: safetyFactor().default(1.5),
+  bearingSafetyFactor: safetyFactor().default(SF),
+  upliftSafetyFactor: safetyFactor().default(SF),
+  restraintSafetyFactor: safetyFactor().default(SF),
   /** N/m³; 23,600 ≈ 150 lb/ft³ normal-weight concrete (common practice); at least 15 kN/m³ so that it sinks */
   concreteUnitWeight: finite()
     .gte(15000, { error: 'must be at least 15,000 N/m³ (concrete heavier than water)' })
     .lte(40000, { error: 'must be at most 40,000 N/m³' })
-    .default(23600),
+    .default(REGISTER['concrete.unit-weight'].value),
   /** m, or null when groundwater lies below every block */
   groundwaterElevation: finite().nullable().default(null),
   /** m, thickness of a bearing block from the fitting to its bearing face (concrete volume estimate) */
-  blockDepth: positive().default(0.6),
+  blockDepth: positive().default(REGISTER['design.block-depth'].value),
   /** m, trench width for the face-width check, or null for OD + 2 × 0.3 m (common practice) */
   trenchWidth: positive().nullable().default(null),
   /**
@@ -45,7 +48,7 @@ export const designSchema = z.strictObject({
   dimensionStep: finite()
     .gte(0.001, { error: 'must be at least 0.001 m (1 mm)' })
     .lte(0.3, { error: 'must be at most 0.3 m' })
-    .default(0.05),
+    .default(REGISTER['design.dimension-step'].value),
 });
 
 export const loadCaseSchema = z.strictObject({
@@ -143,7 +146,7 @@ export const projectShape = z.strictObject({
   version: z.literal(1, { error: 'must be 1 (the only version this program reads)' }),
   name: z.string().max(200).default('Untitled main'),
   units: z.enum(['us', 'si']).default('si'),
-  water: waterSchema.default({ density: 998.2 }),
+  water: waterSchema.default({ density: REGISTER['water.density'].value }),
   design: designSchema.default(() => designSchema.parse({})),
   loadCases: z.array(loadCaseSchema).min(1, { error: 'must have at least one load case' }),
   soils: z.array(soilSchema).min(1, { error: 'must have at least one soil' }),
