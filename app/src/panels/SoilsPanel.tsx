@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { SOIL_LIBRARY, type Soil } from '@mainbrace/solver';
+import { SOIL_LIBRARY, type Soil, LIMITS } from '@mainbrace/solver';
 import { useActions, useApp } from '../state/StoreContext.js';
 import { nextId } from '../state/documentEdits.js';
 import { NumberField } from './NumberField.js';
@@ -70,8 +70,8 @@ export function SoilsPanel() {
                     value={s.unitWeight}
                     dimension="unitWeight"
                     units={u}
-                    min={1000}
-                    max={30000}
+                    min={LIMITS.soilUnitWeight.hard.min}
+                    max={LIMITS.soilUnitWeight.hard.max}
                     onCommit={(unitWeight) => setSoil(s.id, { unitWeight })}
                   />
                 </td>
@@ -177,8 +177,8 @@ export function SoilsPanel() {
             value={d.concreteUnitWeight}
             dimension="unitWeight"
             units={u}
-            min={10000}
-            max={40000}
+            min={LIMITS.concreteUnitWeight.hard.min}
+            max={LIMITS.concreteUnitWeight.hard.max}
             onCommit={(v) => actions.updateDesign({ concreteUnitWeight: v })}
           />
           <NumberField

@@ -127,7 +127,7 @@ describe('the command line', () => {
     const r = run('schedule', file);
     expect(r.status).toBe(2);
     const lines = r.stderr.trim().split('\n');
-    expect(lines).toContain('pipes[1].outsideDiameter: must be greater than 0');
+    expect(lines).toContain('pipes[1].outsideDiameter: must be at least 0.01 m');
     expect(lines).toContain('nodes[2].cover: expected a number, got the text "deep"');
     expect(lines).toContain('loadCases[0].presure: unknown field (not part of the project format)');
     expect(r.stderr).not.toMatch(/\n\s+at /);

@@ -3,6 +3,7 @@ import { readFileSync, writeFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { diagnosticsMarkdown } from '../diagnostics/codeTable.js';
 import { provenanceMarkdown } from './registerTable.js';
+import { limitsMarkdown } from '../model/limitsTable.js';
 
 const docs = (name: string) => fileURLToPath(new URL(`../../../../docs/${name}`, import.meta.url));
 
@@ -15,6 +16,10 @@ function current(name: string, text: string) {
 describe('the generated reference pages in docs/', () => {
   it('docs/diagnostics.md lists every diagnostic code with its meaning and what to do', () => {
     current('diagnostics.md', diagnosticsMarkdown());
+  });
+
+  it('docs/limits.md lists every plausibility range with its hard and usual bounds', () => {
+    current('limits.md', limitsMarkdown());
   });
 
   it('docs/provenance.md lists every register entry with its source and whether it was verified', () => {
