@@ -1,0 +1,62 @@
+import { describe, it, expect } from 'vitest';
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { runCli } from './run.js';
+import { readLimited } from './readLimited.js';
+
+const demoPath = fileURLToPath(new URL('../../../../public/demo/larkspur-rise.json', import.meta.url));
+const dir = mkdtempSync(join(tmpdir(), 'mainbrace-cli-'));
+
+/** Runs the command line in this process against real files, collecting what it writes. */
+function cli(...argv: string[]) {
+  let stdout = '';
+  let stderr = '';
+  const status = runCli(argv, {
+    readFile: readLimited,
+    out: (t) => (stdout += t),
+    err: (t) => (stderr += t),
+  });
+  return { status, stdout, stderr };
+}
+
+function fileOf(name: string, content: string | Uint8Array): string {
+  const path = join(dir, name);
+  writeFileSync(path, content);
+  return path;
+}
+
+describe('the command line reads files with limits', () => {
+  it('refuses /dev/zero at the 20 MB limit instead of reading it forever', () => {
+    const r = cli('validate', '/dev/zero');
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(/^\/dev\/zero: the file is larger than 20\.0 MB; project files over 20\.0 MB are refused/);
+  });
+
+  it('applies the size limit to every command that reads a file, and --max-size changes it', () => {
+    const path = fileOf('demo.json', readFileSync(demoPath));
+    for (const argv of [['validate'], ['schedule'], ['explain', '--format', 'json'], ['explain']]) {
+      const [command, ...rest] = argv;
+      const r = cli(command!, path, ...(command === 'explain' ? ['n4'] : rest), '--max-size', '0.001');
+      expect(r.status).toBe(2);
+      expect(r.stderr).toMatch(/demo\.json: the file is 0\.0 MB; project files over 0\.0 MB are refused/);
+    }
+    expect(cli('validate', path, '--max-size', '1').status).toBe(0);
+    expect(cli('validate', path, '--max-size', 'lots').stderr).toMatch(/--max-size: expected a size in megabytes/);
+  });
+
+  it('reads a file that starts with a UTF-8 byte-order mark, as the app does', () => {
+    const bom = new Uint8Array([0xef, 0xbb, 0xbf, ...readFileSync(demoPath)]);
+    const r = cli('validate', fileOf('bom.json', bom));
+    expect(r.stderr).toBe('');
+    expect(r.stdout).toMatch(/valid — 19 nodes, 18 pipes/);
+    expect(r.status).toBe(0);
+  });
+
+  it('refuses bytes that are not UTF-8 with a message, not a garbled parse', () => {
+    const r = cli('validate', fileOf('latin1.json', new Uint8Array([0x7b, 0xe9, 0x7d])));
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(/latin1\.json: not UTF-8 text/);
+  });
+});
