@@ -7,6 +7,7 @@ import { runCli } from './run.js';
 import { readLimited } from './readLimited.js';
 
 const demoPath = fileURLToPath(new URL('../../../../public/demo/larkspur-rise.json', import.meta.url));
+const demo = () => JSON.parse(readFileSync(demoPath, 'utf8'));
 const dir = mkdtempSync(join(tmpdir(), 'mainbrace-cli-'));
 
 /** Runs the command line in this process against real files, collecting what it writes. */
@@ -59,4 +60,35 @@ describe('the command line reads files with limits', () => {
     expect(r.status).toBe(2);
     expect(r.stderr).toMatch(/latin1\.json: not UTF-8 text/);
   });
+});
+
+describe('the command line on numbers too small to be real', () => {
+  const cases: [string, (p: ReturnType<typeof demo>) => void, string][] = [
+    [
+      'a pressure of 1e-100 Pa',
+      (p) => (p.loadCases = [{ id: 'w', kind: 'working', pressure: 1e-100 }]),
+      'loadCases[0].pressure',
+    ],
+    ['a water density of 1e-300', (p) => (p.water = { density: 1e-300 }), 'water.density'],
+    ['a cohesion of 4.8e-305', (p) => (p.soils[1].cohesion = 4.8e-305), 'soils[1].cohesion'],
+  ];
+  for (const [what, change, field] of cases) {
+    it(`refuses ${what} with exit 2 naming ${field}, in the table and in explain`, () => {
+      const p = demo();
+      change(p);
+      const path = fileOf('tiny.json', JSON.stringify(p));
+      for (const argv of [
+        ['schedule', path],
+        ['schedule', path, '--format', 'table'],
+        ['explain', path, 'n13'],
+      ]) {
+        const r = cli(...argv);
+        expect(r.status).toBe(2);
+        expect(r.stderr).toMatch(
+          new RegExp(`^${field.replace(/[[\].]/g, '\\$&')}: .* is too small to be a real value`),
+        );
+        expect(r.stderr).not.toMatch(/internal error/);
+      }
+    });
+  }
 });

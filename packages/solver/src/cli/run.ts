@@ -14,6 +14,7 @@ import { scheduleCsv } from '../schedule/scheduleCsv.js';
 import { scheduleTable } from '../schedule/scheduleTable.js';
 import type { UnitSystem } from '../units/conversions.js';
 import { DEFAULT_MAX_BYTES } from './readLimited.js';
+import { tinyNumberProblems } from './tinyNumbers.js';
 
 /** What the command line needs from the outside world, so that it runs in tests without a process. */
 export interface CliIo {
@@ -70,7 +71,9 @@ function load(io: CliIo, path: string | undefined, maxBytes: number): Project | 
   const text = decode(bytes);
   if (text === null) return [`${name}: not UTF-8 text; save the project file as UTF-8`];
   const result = parseProjectText(text);
-  return result.ok ? result.project : result.problems.map(problemText);
+  if (!result.ok) return result.problems.map(problemText);
+  const tiny = tinyNumberProblems(result.project);
+  return tiny.length ? tiny : result.project;
 }
 
 function unitsOption(value: string | undefined, project: Project): UnitSystem {
