@@ -4,10 +4,14 @@ import { formatSi } from '../units/format.js';
 import type { UnitSystem } from '../units/conversions.js';
 import { SHORT_CAUTION } from '../schedule/cautions.js';
 import type { Project } from '../model/projectSchema.js';
+import { escapeControls } from './terminalText.js';
 
 const shown = (v: RecordValue, units: UnitSystem) => formatSi(v.value, v.dimension, units, 4);
 
-/** A fitting's calculation record as plain text: each step's formula, inputs with sources, result. */
+/**
+ * A fitting's calculation record as plain text: each step's formula, inputs with sources, result.
+ * Each line is escaped on its own, so a label cannot add lines or act on the terminal.
+ */
 export function explainText(project: Project, f: FittingAnalysis, units: UnitSystem): string {
   const out = [`${f.tag} (node ${f.node.id}) — ${f.geometry.kind}`, ''];
   calculationRecord(project, f).forEach((step, i) => {
@@ -21,5 +25,5 @@ export function explainText(project: Project, f: FittingAnalysis, units: UnitSys
   });
   if (f.warnings.length) out.push('Warnings', ...f.warnings.map((w) => `  - ${w}`), '');
   out.push(SHORT_CAUTION);
-  return out.join('\n') + '\n';
+  return out.map(escapeControls).join('\n') + '\n';
 }

@@ -28,6 +28,10 @@ function fileOf(name: string, content: string | Uint8Array): string {
   return path;
 }
 
+/** Anything a terminal acts on: every C0 control but the line feed, DEL, C1 controls. */
+// eslint-disable-next-line no-control-regex
+const TERMINAL_CONTROL = /[\u0000-\u0009\u000b-\u001f\u007f-\u009f]/;
+
 describe('the command line reads files with limits', () => {
   it('refuses /dev/zero at the 20 MB limit instead of reading it forever', () => {
     const r = cli('validate', '/dev/zero');
@@ -91,4 +95,59 @@ describe('the command line on numbers too small to be real', () => {
       }
     });
   }
+});
+
+describe('the command line never writes control characters from a file to the terminal', () => {
+  const hostile = () => {
+    const p = demo();
+    p.name = 'Main\u001b[8m';
+    p.soils[1].label = 'Soft clay\r\u001b[1A\u001b[2K';
+    p.soils[1].bearing = 0; // so the soil's label appears in a warning
+    p.loadCases[2].label = 'Test\u009b31m';
+    p.nodes.find((n: { id: string }) => n.id === 'n4').label = 'Hydrant\nB4: all clear';
+    return p;
+  };
+
+  it('escapes names, labels and warnings in the table', () => {
+    const r = cli('schedule', fileOf('hostile.json', JSON.stringify(hostile())));
+    expect(r.status).toBe(0);
+    expect(r.stdout).not.toMatch(TERMINAL_CONTROL);
+    expect(r.stdout).toContain('Fitting schedule — Main\\u001b[8m');
+    expect(r.stdout).toContain('No bearing: Soft clay\\u000d\\u001b[1A\\u001b[2K has no allowable bearing');
+    expect(r.stdout).toContain('Test\\u009b31m');
+  });
+
+  it('escapes the calculation record of explain', () => {
+    const r = cli('explain', fileOf('hostile.json', JSON.stringify(hostile())), 'n7');
+    expect(r.status).toBe(0);
+    expect(r.stdout).not.toMatch(TERMINAL_CONTROL);
+    expect(r.stdout).toContain('Soft clay\\u000d\\u001b[1A');
+  });
+
+  it('keeps CSV record ends but escapes a label that would add a line', () => {
+    const r = cli('schedule', fileOf('hostile.json', JSON.stringify(hostile())), '--format', 'csv');
+    expect(r.status).toBe(0);
+    const records = r.stdout.split('\r\n');
+    expect(records.every((line) => !TERMINAL_CONTROL.test(line) && !line.includes('\n'))).toBe(true);
+    expect(r.stdout).toContain('Hydrant\\u000aB4: all clear');
+  });
+
+  it('writes JSON whose strings mean exactly what the file said, with nothing a terminal acts on', () => {
+    const r = cli('schedule', fileOf('hostile.json', JSON.stringify(hostile())), '--format', 'json');
+    expect(r.status).toBe(0);
+    expect(r.stdout).not.toMatch(TERMINAL_CONTROL);
+    expect(JSON.parse(r.stdout).project).toContain('Main\u001b[8m');
+  });
+
+  it('escapes ids, field names and file names in error messages', () => {
+    const p = demo();
+    p['evil\u001b[2Jkey'] = 1;
+    const bad = cli('validate', fileOf('bad\u001b]0;x\u0007.json', JSON.stringify(p)));
+    expect(bad.status).toBe(2);
+    expect(bad.stderr).not.toMatch(TERMINAL_CONTROL);
+    expect(bad.stderr).toContain('evil\\u001b[2Jkey');
+    const missing = cli('explain', fileOf('ok.json', JSON.stringify(demo())), 'n99\u001b[1A');
+    expect(missing.status).toBe(2);
+    expect(missing.stderr).toContain('no node "n99\\u001b[1A"');
+  });
 });

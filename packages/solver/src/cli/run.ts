@@ -14,6 +14,7 @@ import { scheduleCsv } from '../schedule/scheduleCsv.js';
 import { scheduleTable } from '../schedule/scheduleTable.js';
 import type { UnitSystem } from '../units/conversions.js';
 import { DEFAULT_MAX_BYTES } from './readLimited.js';
+import { escapeControls, escapeStrings, terminalSafe } from './terminalText.js';
 import { tinyNumberProblems } from './tinyNumbers.js';
 
 /** What the command line needs from the outside world, so that it runs in tests without a process. */
@@ -36,7 +37,8 @@ function maxBytesOption(value: string | undefined): number {
   if (value === undefined) return DEFAULT_MAX_BYTES;
   const m = /^\s*(\d+(?:\.\d+)?)\s*(?:MB)?\s*$/i.exec(value);
   const mb = m ? Number(m[1]) : NaN;
-  if (!(mb > 0)) throw new UsageError(`--max-size: expected a size in megabytes such as 50, got "${value}"`);
+  if (!(mb > 0))
+    throw new UsageError(`--max-size: expected a size in megabytes such as 50, got "${escapeControls(value)}"`);
   return Math.floor(mb * 1024 * 1024);
 }
 
@@ -53,7 +55,7 @@ function decode(bytes: Uint8Array): string | null {
 
 function load(io: CliIo, path: string | undefined, maxBytes: number): Project | string[] {
   if (!path) throw new UsageError('missing FILE: give the path of a project file');
-  const name = path;
+  const name = escapeControls(path);
   let bytes: Uint8Array;
   try {
     bytes = io.readFile(path, maxBytes);
@@ -71,23 +73,27 @@ function load(io: CliIo, path: string | undefined, maxBytes: number): Project | 
   const text = decode(bytes);
   if (text === null) return [`${name}: not UTF-8 text; save the project file as UTF-8`];
   const result = parseProjectText(text);
-  if (!result.ok) return result.problems.map(problemText);
+  if (!result.ok) return result.problems.map((p) => escapeControls(problemText(p)));
   const tiny = tinyNumberProblems(result.project);
-  return tiny.length ? tiny : result.project;
+  return tiny.length ? tiny.map(escapeControls) : result.project;
 }
 
 function unitsOption(value: string | undefined, project: Project): UnitSystem {
   if (value === undefined) return project.units;
   if (value === 'us' || value === 'si') return value;
-  throw new UsageError(`--units: expected "us" or "si", got "${value}"`);
+  throw new UsageError(`--units: expected "us" or "si", got "${escapeControls(value)}"`);
 }
 
 /**
  * Runs one command line; returns the exit status (0 done, 2 bad input, 1 a fault of ours). Never
- * throws.
+ * throws. Nothing from the file reaches the terminal as a control character.
  */
 export function runCli(argv: readonly string[], rawIo: CliIo): number {
-  const io = rawIo;
+  const io: CliIo = {
+    ...rawIo,
+    out: (text) => rawIo.out(terminalSafe(text)),
+    err: (text) => rawIo.err(terminalSafe(text)),
+  };
   try {
     const args = parseArgs(argv);
     if (args.options.has('help') || args.command === undefined || args.command === 'help') {
@@ -99,7 +105,9 @@ export function runCli(argv: readonly string[], rawIo: CliIo): number {
       return 0;
     }
     if (!['schedule', 'validate', 'explain'].includes(args.command)) {
-      throw new UsageError(`unknown command "${args.command}": expected schedule, explain, validate or schema`);
+      throw new UsageError(
+        `unknown command "${escapeControls(args.command)}": expected schedule, explain, validate or schema`,
+      );
     }
     const loaded = load(io, args.positional[0], maxBytesOption(args.options.get('max-size')));
     if (Array.isArray(loaded)) {
@@ -107,8 +115,12 @@ export function runCli(argv: readonly string[], rawIo: CliIo): number {
       return 2;
     }
     const project = loaded;
-    const labelOf = (id: string) => caseLabel(project, id);
-    const file = args.positional[0]!;
+    // Tables and CSV print escaped names; labels are looked up by the escaped case id they will meet.
+    const labels = new Map(
+      project.loadCases.map((c) => [escapeControls(c.id), escapeControls(caseLabel(project, c.id))]),
+    );
+    const labelOf = (id: string) => labels.get(id) ?? id;
+    const file = escapeControls(args.positional[0]!);
     if (args.command === 'validate') {
       // Naming the fittings is enough here; sizing them is the schedule's work.
       const legs = legsByNode(project);
@@ -130,8 +142,8 @@ export function runCli(argv: readonly string[], rawIo: CliIo): number {
         const known = project.nodes.some((n) => n.id === id);
         io.err(
           known
-            ? `node "${id}" needs no restraint (a straight joint, a tie-in or a free node)\n`
-            : `no node "${id}" in ${file}\n`,
+            ? `node "${escapeControls(id)}" needs no restraint (a straight joint, a tie-in or a free node)\n`
+            : `no node "${escapeControls(id)}" in ${file}\n`,
         );
         return 2;
       }
@@ -143,9 +155,9 @@ export function runCli(argv: readonly string[], rawIo: CliIo): number {
     // Indented for a person at a terminal or with --pretty; compact into pipes and files.
     const pretty = io.interactive === true || args.options.has('pretty');
     if (format === 'json') io.out(JSON.stringify(schedule, null, pretty ? 2 : undefined) + '\n');
-    else if (format === 'csv') io.out(scheduleCsv(schedule, units, labelOf));
-    else if (format === 'table') io.out(scheduleTable(schedule, units, labelOf));
-    else throw new UsageError(`--format: expected json, csv or table, got "${format}"`);
+    else if (format === 'csv') io.out(scheduleCsv(escapeStrings(schedule), units, labelOf));
+    else if (format === 'table') io.out(scheduleTable(escapeStrings(schedule), units, labelOf));
+    else throw new UsageError(`--format: expected json, csv or table, got "${escapeControls(format)}"`);
     return 0;
   } catch (e) {
     if (e instanceof UsageError) {
