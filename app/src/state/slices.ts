@@ -20,13 +20,27 @@ export interface ProjectSlice {
   project: Project;
 }
 
+/** A choice offered inside a notice (keep this tab's version, save to a file...). */
+export interface NoticeAction {
+  label: string;
+  run: () => void;
+}
+
+/** A message the chrome shows until dismissed. */
+export interface Notice {
+  tone: 'warning' | 'error' | 'info';
+  title: string;
+  lines: string[];
+  actions?: NoticeAction[];
+}
+
 /** How the plan and the panels are shown. */
 export interface ViewSlice {
   viewport: Viewport;
   caseView: CaseView;
   drawer: { tab: DrawerTab; height: 'low' | 'high' | 'full' | 'closed' };
   /** a message the chrome shows until dismissed (storage failure, a refused file) */
-  notice: { tone: 'warning' | 'error' | 'info'; title: string; lines: string[] } | null;
+  notice: Notice | null;
 }
 
 /** The active tool and its transient state. */
