@@ -49,8 +49,8 @@ export class ErrorBoundary extends Component<{ store: AppStore; recovery: Recove
         <h1>Mainbrace stopped drawing this screen</h1>
         <p>
           Your project “{name}” is safe: it is kept in this browser. If this screen comes back after every reload, the
-          kept project is what stops it: download it (to send with a report), then start without it. Whichever way out
-          you choose, the kept project stays in <em>Kept copies</em>.
+          kept project is what stops it: download it (to send with a report), then start without it. Starting without
+          it, opening a file or starting a new project each keep it in <em>Kept copies</em>.
         </p>
         <p className="muted">What went wrong: {describe(error)}</p>
         <div className="recovery-actions">

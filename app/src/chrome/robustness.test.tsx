@@ -41,6 +41,24 @@ describe('robustness of the app at its edges', () => {
     expect((window as unknown as { __pwned?: number }).__pwned).toBeUndefined();
   });
 
+  it('draws the details and the schedule of a project with values far below drawing precision', async () => {
+    const { ScheduleTable } = await import('../panels/ScheduleTable.js');
+    const p = route();
+    // 1e-100 Pa once made number formatting throw on every render, and so on every reload.
+    const tiny = { ...p, loadCases: [{ ...p.loadCases[0]!, pressure: 1e-100 }], water: { density: 1e-300 } };
+    const store = createAppStore(tiny, DN300);
+    const actions = createActions(store);
+    actions.selectNode('n2');
+    vi.spyOn(console, 'error').mockImplementation(() => undefined);
+    const { container } = render(
+      <StoreProvider store={store} actions={actions}>
+        <DetailsPanel />
+        <ScheduleTable />
+      </StoreProvider>,
+    );
+    expect(container.textContent).toMatch(/e-1\d\d/);
+  });
+
   it('keeps a label that a spreadsheet would run as a formula inert in the CSV export', () => {
     const p = route();
     const withFormula = { ...p, nodes: p.nodes.map((n) => (n.id === 'n2' ? { ...n, label: '=HYPERLINK("x")' } : n)) };
