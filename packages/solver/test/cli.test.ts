@@ -145,6 +145,13 @@ describe('the command line', () => {
     expect(m.stderr).toMatch(/cannot read the file \(no such file\)/);
   });
 
+  it('stops reading /dev/zero at the size limit and exits 2 (the installed command, not only runCli)', () => {
+    const r = spawnSync(process.execPath, [bin, 'validate', '/dev/zero'], { encoding: 'utf8', timeout: 20_000 });
+    expect(r.signal).toBeNull();
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(/larger than 20\.0 MB/);
+  });
+
   it('refuses an unknown command or option value with exit 2', () => {
     expect(run('draw').status).toBe(2);
     expect(run('schedule', demo, '--format', 'pdf').stderr).toMatch(/--format: expected json, csv or table/);

@@ -8,10 +8,14 @@ import { diagnosticText } from '../diagnostics/wording.js';
 import { wordingContext } from '../diagnostics/context.js';
 import { notVerifiedText } from '../provenance/entry.js';
 import { REGISTER, unverified } from '../provenance/register.js';
+import { escapeControls } from './terminalText.js';
 
 const shown = (v: RecordValue, units: UnitSystem) => formatSi(v.value, v.dimension, units, 4);
 
-/** A fitting's calculation record as plain text: each step's formula, inputs with sources, result. */
+/**
+ * A fitting's calculation record as plain text: each step's formula, inputs with sources, result.
+ * Each line is escaped on its own, so a label cannot add lines or act on the terminal.
+ */
 export function explainText(a: Analysis, f: FittingAnalysis, units: UnitSystem): string {
   const out = [`${f.mark} — ${fittingTitle(f.geometry)} (node ${f.node.id}, run ${f.run})`, ''];
   calculationRecord(a.project, f).forEach((step, i) => {
@@ -40,5 +44,5 @@ export function explainText(a: Analysis, f: FittingAnalysis, units: UnitSystem):
     );
   }
   out.push(SHORT_CAUTION);
-  return out.join('\n') + '\n';
+  return out.map(escapeControls).join('\n') + '\n';
 }
