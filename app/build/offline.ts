@@ -1,7 +1,8 @@
 import { createHash } from 'node:crypto';
-import { readdirSync, statSync } from 'node:fs';
+import { readFileSync, readdirSync, statSync } from 'node:fs';
 import { join, relative } from 'node:path';
 import type { Plugin } from 'vite';
+import { serviceWorker } from './serviceWorker.js';
 
 /**
  * Only the app's own resources: no inline script, no other origin. Set as a meta tag in built pages
@@ -28,32 +29,21 @@ function filesUnder(dir: string): string[] {
   });
 }
 
-/** The service worker: precache every built file, then serve from the cache first (offline use). */
-function serviceWorker(version: string, files: string[]): string {
-  return `// Generated at build time: precaches the app so it works with no network.
-const CACHE = 'mainbrace-${version}';
-const FILES = ${JSON.stringify(files)};
-self.addEventListener('install', (e) => {
-  e.waitUntil(caches.open(CACHE).then((c) => c.addAll(FILES)).then(() => self.skipWaiting()));
-});
-self.addEventListener('activate', (e) => {
-  e.waitUntil(caches.keys().then((keys) => Promise.all(keys.filter((k) => k !== CACHE).map((k) => caches.delete(k)))).then(() => self.clients.claim()));
-});
-self.addEventListener('fetch', (e) => {
-  const url = new URL(e.request.url);
-  if (e.request.method !== 'GET' || url.origin !== self.location.origin) return;
-  if (e.request.mode === 'navigate') {
-    e.respondWith(fetch(e.request).catch(() => caches.match('./')));
-    return;
+/**
+ * The cache version: a hash of every shipped file's name and contents, so a changed demo, icon or
+ * manifest under the same name installs a new cache instead of being served stale.
+ */
+export function cacheVersion(files: readonly (readonly [name: string, content: string | Uint8Array])[]): string {
+  const hash = createHash('sha256');
+  for (const [name, content] of [...files].sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))) {
+    hash.update(`${name}\0${typeof content === 'string' ? Buffer.byteLength(content) : content.length}\0`);
+    hash.update(content);
   }
-  // Module scripts and styles ask with an Origin header; the cached copies were fetched without one.
-  e.respondWith(caches.match(e.request, { ignoreVary: true }).then((hit) => hit || fetch(e.request)));
-});
-`;
+  return hash.digest('hex').slice(0, 12);
 }
 
 /** Build plugin: the CSP meta tag, and a service worker listing every emitted and public file. */
-export function offline(publicDir: string): Plugin {
+export function offline(publicDir: string, htmlTemplate: string): Plugin {
   return {
     name: 'mainbrace-offline',
     apply: 'build',
@@ -64,11 +54,21 @@ export function offline(publicDir: string): Plugin {
       );
     },
     generateBundle(_options, bundle) {
-      const emitted = Object.keys(bundle);
-      const shipped = filesUnder(publicDir).map((f) => relative(publicDir, f).split('\\').join('/'));
-      const files = ['./', ...[...emitted, ...shipped].filter((f) => f !== 'sw.js').map((f) => `./${f}`)];
-      const version = createHash('sha256').update(files.join('\n')).digest('hex').slice(0, 12);
-      this.emitFile({ type: 'asset', fileName: 'sw.js', source: serviceWorker(version, files) });
+      const emitted = Object.values(bundle)
+        .filter((f) => f.fileName !== 'sw.js')
+        .map((f) => [f.fileName, f.type === 'chunk' ? f.code : f.source] as const);
+      const shipped = filesUnder(publicDir).map(
+        (f) => [relative(publicDir, f).split('\\').join('/'), readFileSync(f)] as const,
+      );
+      // The page itself is emitted after this hook: its template and the policy stand for it.
+      const page = ['./', readFileSync(htmlTemplate, 'utf8') + CONTENT_SECURITY_POLICY] as const;
+      const all = [...emitted, ...shipped];
+      const files = ['./', ...all.map(([name]) => `./${name}`)];
+      this.emitFile({
+        type: 'asset',
+        fileName: 'sw.js',
+        source: serviceWorker(cacheVersion([...all, page]), files),
+      });
     },
   };
 }

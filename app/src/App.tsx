@@ -6,6 +6,7 @@ import { PlanView } from './plan/PlanView.js';
 import { DetailsPanel } from './panels/DetailsPanel.js';
 import { Drawer } from './panels/Drawer.js';
 import { PrintSheet } from './print/PrintSheet.js';
+import { KeptCopiesDialog } from './chrome/KeptCopiesDialog.js';
 import { useActions } from './state/StoreContext.js';
 import { openProjectFile } from './files/projectFile.js';
 
@@ -41,6 +42,7 @@ export function App() {
       </main>
       <Drawer />
       {printing && <PrintSheet onClose={() => setPrinting(false)} />}
+      <KeptCopiesDialog />
     </div>
   );
 }

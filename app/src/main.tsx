@@ -6,6 +6,14 @@ import { createAppStore } from './state/store.js';
 import { createActions, validated } from './state/actions.js';
 import { StoreProvider } from './state/StoreContext.js';
 import { restoreProject, startAutosave, type Restored } from './state/autosave.js';
+import { browserStore } from './state/keyValue.js';
+import { newTabId, openTabChannel } from './state/tabChannel.js';
+import { bindKeptCopies, refreshKeptCopies, showKeptCopies } from './state/keptCopiesView.js';
+import { takeStartNotice } from './state/startNotice.js';
+import type { Notice } from './state/store.js';
+import { setSaveBeforeReload } from './chrome/loadChunk.js';
+import { registerServiceWorker, watchForNewVersion } from './chrome/newVersion.js';
+import { createRecovery } from './chrome/recoveryActions.js';
 import { installShortcuts } from './chrome/shortcuts.js';
 import { ErrorBoundary } from './chrome/ErrorBoundary.js';
 import { blankProject } from './files/blankProject.js';
@@ -39,27 +47,60 @@ function defaultPipe(project: Project): PipeSpec {
   };
 }
 
+/** What the user is told at start about the project kept from the last visit, if anything. */
+function keptNotice(kept: Restored): Notice | null {
+  const copies = { label: 'Show kept copies', run: showKeptCopies };
+  switch (kept.kind) {
+    case 'unreadable':
+      return {
+        tone: 'warning',
+        title: kept.copy
+          ? 'The project kept from your last visit could not be read: it is in Kept copies, unchanged, and the demo opened instead'
+          : 'The project kept from your last visit could not be read, and could not be copied aside: it stays in storage until you save over it; the demo opened instead',
+        lines: kept.lines,
+        ...(kept.copy ? { actions: [copies] } : {}),
+      };
+    case 'empty':
+      return {
+        tone: 'warning',
+        title: 'The project kept in this browser was empty, so there was nothing to open: the demo opened instead',
+        lines: ['The last save may have been cut short (the browser closed while saving, or its storage was cleared).'],
+      };
+    case 'storage-failed':
+      return {
+        tone: 'warning',
+        title: 'The browser’s storage could not be read: the demo opened, and a project kept there is left untouched',
+        lines: [kept.detail],
+      };
+    default:
+      return null;
+  }
+}
+
 async function start() {
-  const kept = await restoreProject();
+  const kv = browserStore;
+  const channel = openTabChannel();
+  bindKeptCopies(kv, channel);
+  const kept = await restoreProject(kv);
   const project = await firstProject(kept);
   const store = createAppStore(project, defaultPipe(project));
   const actions = createActions(store);
-  startAutosave(store, (message) =>
-    actions.notify({
-      tone: 'warning',
-      title: 'Autosave failed: your work is only in this tab — save it to a file',
-      lines: [message],
-    }),
-  );
+  const autosave = startAutosave(store, {
+    kv,
+    channel,
+    tab: newTabId(),
+    base: kept.kind === 'none' ? 0 : kept.kind === 'storage-failed' ? -1 : kept.revision,
+    notify: actions.notify,
+    adopt: actions.replaceProject,
+  });
+  setSaveBeforeReload(autosave.flush);
+  // A damaged or empty record is replaced by what opened (a damaged one is in the kept copies first).
+  if ((kept.kind === 'unreadable' && kept.copy) || kept.kind === 'empty') void autosave.claim();
   installShortcuts(store, actions);
-  if (kept.kind === 'unreadable') {
-    actions.notify({
-      tone: 'warning',
-      title:
-        'The project kept from your last visit could not be read; a copy is kept in this browser under "mainbrace.project.v1.unreadable" and the demo opened instead',
-      lines: kept.lines,
-    });
-  }
+  const notice = keptNotice(kept) ?? takeStartNotice();
+  if (notice) actions.notify(notice);
+  void refreshKeptCopies(false);
+  watchForNewVersion(actions.notify, autosave.flush);
   if (import.meta.env.DEV || import.meta.env.MODE === 'test') {
     // Read-only hook for the browser tests: the document and its results, never a way to change them.
     Object.defineProperty(window, '__mainbrace', {
@@ -77,7 +118,7 @@ async function start() {
   }
   createRoot(document.getElementById('root')!).render(
     <StrictMode>
-      <ErrorBoundary store={store}>
+      <ErrorBoundary store={store} recovery={createRecovery(kv, store, actions, autosave)}>
         <StoreProvider store={store} actions={actions}>
           <App />
         </StoreProvider>
@@ -87,10 +128,4 @@ async function start() {
 }
 
 void start();
-
-// Installed and offline: the service worker is built with the app (not in the dev server).
-if (import.meta.env.PROD && 'serviceWorker' in navigator) {
-  window.addEventListener('load', () => {
-    void navigator.serviceWorker.register('./sw.js').catch(() => undefined);
-  });
-}
+registerServiceWorker();

@@ -12,7 +12,11 @@ function kept(page: Page): Promise<{ name: string; loadCases: { id: string; pres
           const db = open.result;
           if (!db.objectStoreNames.contains('keyval')) return resolve(null);
           const get = db.transaction('keyval').objectStore('keyval').get('mainbrace.project.v1');
-          get.onsuccess = () => resolve(typeof get.result === 'string' ? JSON.parse(get.result) : null);
+          get.onsuccess = () => {
+            // The record carries its revision beside the text; earlier releases kept the bare text.
+            const text = typeof get.result === 'string' ? get.result : get.result?.text;
+            resolve(typeof text === 'string' ? JSON.parse(text) : null);
+          };
           get.onerror = () => resolve(null);
         };
       }),

@@ -1,6 +1,6 @@
 import { useActions, useApp } from '../state/StoreContext.js';
 
-/** Messages the user must see: a refused file with its problems, a storage failure. */
+/** Messages the user must see: a refused file with its problems, a storage failure, another tab's edits. */
 export function NoticeBar() {
   const notice = useApp((s) => s.notice);
   const actions = useActions();
@@ -21,6 +21,15 @@ export function NoticeBar() {
             ))}
             {notice.lines.length > 30 && <li>… and {notice.lines.length - 30} more</li>}
           </ul>
+        )}
+        {notice.actions && notice.actions.length > 0 && (
+          <div className="notice-actions">
+            {notice.actions.map((a) => (
+              <button key={a.label} onClick={a.run}>
+                {a.label}
+              </button>
+            ))}
+          </div>
         )}
       </div>
       <button onClick={() => actions.notify(null)} aria-label="Dismiss">

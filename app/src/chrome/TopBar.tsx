@@ -12,6 +12,7 @@ import {
 } from '../files/projectFile.js';
 import { newProject } from '../files/newProject.js';
 import { CautionDialog } from './CautionDialog.js';
+import { KeptCopiesButton } from './KeptCopiesDialog.js';
 
 /** Product name, project name, file actions, units, the case shown, and the caution. */
 export function TopBar({ onPrint }: { onPrint: () => void }) {
@@ -117,6 +118,7 @@ export function TopBar({ onPrint }: { onPrint: () => void }) {
             </div>
           )}
         </div>
+        <KeptCopiesButton />
       </nav>
       <div className="history" role="group" aria-label="History">
         <button onClick={actions.undo} disabled={!canUndo} title="Undo (Ctrl+Z)" aria-label="Undo" data-testid="undo">

@@ -5,14 +5,8 @@ import { createAppStore } from '../state/store.js';
 import { createActions } from '../state/actions.js';
 import { StoreProvider } from '../state/StoreContext.js';
 import { DetailsPanel } from '../panels/DetailsPanel.js';
-import { ErrorBoundary } from './ErrorBoundary.js';
 import { MAX_FILE_BYTES, readProjectFile } from '../files/projectFile.js';
 import { DN300, project } from '../testFixtures.js';
-
-vi.mock('idb-keyval', () => ({
-  get: vi.fn(async () => undefined),
-  set: vi.fn(async () => Promise.reject(new Error('QuotaExceededError: the disk is full'))),
-}));
 
 afterEach(cleanup);
 
@@ -47,6 +41,24 @@ describe('robustness of the app at its edges', () => {
     expect((window as unknown as { __pwned?: number }).__pwned).toBeUndefined();
   });
 
+  it('draws the details and the schedule of a project with values far below drawing precision', async () => {
+    const { ScheduleTable } = await import('../panels/ScheduleTable.js');
+    const p = route();
+    // 1e-100 Pa once made number formatting throw on every render, and so on every reload.
+    const tiny = { ...p, loadCases: [{ ...p.loadCases[0]!, pressure: 1e-100 }], water: { density: 1e-300 } };
+    const store = createAppStore(tiny, DN300);
+    const actions = createActions(store);
+    actions.selectNode('n2');
+    vi.spyOn(console, 'error').mockImplementation(() => undefined);
+    const { container } = render(
+      <StoreProvider store={store} actions={actions}>
+        <DetailsPanel />
+        <ScheduleTable />
+      </StoreProvider>,
+    );
+    expect(container.textContent).toMatch(/e-1\d\d/);
+  });
+
   it('keeps a label that a spreadsheet would run as a formula inert in the CSV export', () => {
     const p = route();
     const withFormula = { ...p, nodes: p.nodes.map((n) => (n.id === 'n2' ? { ...n, label: '=HYPERLINK("x")' } : n)) };
@@ -72,32 +84,34 @@ describe('robustness of the app at its edges', () => {
     if (!r.ok) expect(r.lines).toContain('loadCases: must have at least one load case');
   });
 
-  it('shows that autosave failed when storage refuses the project', async () => {
+  it('shows that autosave failed when storage refuses the project, with a detail that is never blank', async () => {
     const { startAutosave } = await import('../state/autosave.js');
-    const store = createAppStore(route(), DN300);
-    const actions = createActions(store);
-    startAutosave(store, (m) => actions.notify({ tone: 'warning', title: 'Autosave failed', lines: [m] }));
-    actions.renameProject('Kestrel Way main');
-    await act(async () => {
-      await new Promise((r) => setTimeout(r, 600));
-    });
-    expect(store.getState().notice?.title).toBe('Autosave failed');
-    expect(store.getState().notice?.lines[0]).toMatch(/disk is full/);
-  });
-
-  it('shows a recovery screen that keeps the project when a screen fails to render', () => {
-    const store = createAppStore(route(), DN300);
-    const Broken = () => {
-      throw new Error('drawing failed');
-    };
-    vi.spyOn(console, 'error').mockImplementation(() => undefined);
-    render(
-      <ErrorBoundary store={store}>
-        <Broken />
-      </ErrorBoundary>,
-    );
-    expect(screen.getByTestId('recovery').textContent).toMatch(/Your project is safe/);
-    expect(screen.getByText('Save the project')).toBeTruthy();
-    expect(store.getState().project.nodes).toHaveLength(3);
+    const { memoryStore } = await import('../state/keyValue.js');
+    // IndexedDB often rejects with a DOMException whose message is empty.
+    for (const refusal of [new DOMException('', 'QuotaExceededError'), undefined, new Error('')]) {
+      const store = createAppStore(route(), DN300);
+      const actions = createActions(store);
+      const kv = { ...memoryStore(), update: () => Promise.reject(refusal) };
+      const autosave = startAutosave(store, {
+        kv,
+        channel: null,
+        tab: 'a',
+        base: 0,
+        notify: actions.notify,
+        adopt: actions.replaceProject,
+        delayMs: 10,
+      });
+      actions.renameProject('Kestrel Way main');
+      await act(async () => {
+        await new Promise((r) => setTimeout(r, 60));
+      });
+      autosave.stop();
+      expect(store.getState().notice?.title).toMatch(/^Autosave failed/);
+      const detail = store.getState().notice?.lines[0] ?? '';
+      expect(detail.trim().length).toBeGreaterThan(20);
+      if (refusal instanceof DOMException)
+        expect(detail).toMatch(/QuotaExceededError: the browser’s storage for this site is full/);
+      expect(store.getState().notice?.actions?.map((a) => a.label)).toContain('Save to a file');
+    }
   });
 });

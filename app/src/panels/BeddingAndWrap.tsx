@@ -1,4 +1,12 @@
-import { BEDDINGS, DEFAULT_BEDDING, WRAP_WORDS, beddingReference, findBedding, type Pipe } from '@mainbrace/solver';
+import {
+  LIMITS,
+  BEDDINGS,
+  DEFAULT_BEDDING,
+  WRAP_WORDS,
+  beddingReference,
+  findBedding,
+  type Pipe,
+} from '@mainbrace/solver';
 import { useActions, useApp } from '../state/StoreContext.js';
 import { NumberField } from './NumberField.js';
 
@@ -84,8 +92,8 @@ export function BeddingAndWrap() {
           value={project.design.layingLength}
           dimension="length"
           units={u}
-          min={0.5}
-          max={30}
+          min={LIMITS.layingLength.hard.min}
+          max={LIMITS.layingLength.hard.max}
           onCommit={(v) => actions.updateDesign({ layingLength: v })}
           hint="Joint to joint: restrained joints are counted and drawn from it."
         />
@@ -94,8 +102,8 @@ export function BeddingAndWrap() {
           value={project.design.restraintSafetyFactor}
           dimension="ratio"
           units={u}
-          min={1}
-          max={10}
+          min={LIMITS.safetyFactor.hard.min}
+          max={LIMITS.safetyFactor.hard.max}
           onCommit={(v) => actions.updateDesign({ restraintSafetyFactor: v })}
         />
       </div>

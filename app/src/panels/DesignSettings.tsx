@@ -1,3 +1,4 @@
+import { LIMITS } from '@mainbrace/solver';
 import { useActions, useApp } from '../state/StoreContext.js';
 import { NumberField } from './NumberField.js';
 
@@ -17,8 +18,8 @@ export function DesignSettings() {
             value={d.bearingSafetyFactor}
             dimension="ratio"
             units={u}
-            min={1}
-            max={10}
+            min={LIMITS.safetyFactor.hard.min}
+            max={LIMITS.safetyFactor.hard.max}
             onCommit={(v) => actions.updateDesign({ bearingSafetyFactor: v })}
           />
           <NumberField
@@ -26,8 +27,8 @@ export function DesignSettings() {
             value={d.upliftSafetyFactor}
             dimension="ratio"
             units={u}
-            min={1}
-            max={10}
+            min={LIMITS.safetyFactor.hard.min}
+            max={LIMITS.safetyFactor.hard.max}
             onCommit={(v) => actions.updateDesign({ upliftSafetyFactor: v })}
           />
         </div>
@@ -37,8 +38,8 @@ export function DesignSettings() {
             value={d.concreteUnitWeight}
             dimension="unitWeight"
             units={u}
-            min={10000}
-            max={40000}
+            min={LIMITS.concreteUnitWeight.hard.min}
+            max={LIMITS.concreteUnitWeight.hard.max}
             onCommit={(v) => actions.updateDesign({ concreteUnitWeight: v })}
           />
           <NumberField
@@ -46,8 +47,8 @@ export function DesignSettings() {
             value={d.blockDepth}
             dimension="length"
             units={u}
-            min={0.1}
-            max={5}
+            min={LIMITS.blockDepth.hard.min}
+            max={LIMITS.blockDepth.hard.max}
             onCommit={(v) => actions.updateDesign({ blockDepth: v })}
           />
         </div>
@@ -60,8 +61,8 @@ export function DesignSettings() {
             value={project.water.density}
             dimension="density"
             units={u}
-            min={900}
-            max={1100}
+            min={LIMITS.density.hard.min}
+            max={LIMITS.density.hard.max}
             onCommit={actions.setWaterDensity}
           />
           <div className="field">

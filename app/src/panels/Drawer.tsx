@@ -4,8 +4,11 @@ import type { DrawerTab } from '../state/store.js';
 import { ScheduleTable } from './ScheduleTable.js';
 import { CasesPanel } from './CasesPanel.js';
 import { SoilsPanel } from './SoilsPanel.js';
+import { importOrReload } from '../chrome/loadChunk.js';
 
-const ProfilePanel = lazy(() => import('./ProfilePanel.js').then((m) => ({ default: m.ProfilePanel })));
+const ProfilePanel = lazy(() =>
+  importOrReload(() => import('./ProfilePanel.js')).then((m) => ({ default: m.ProfilePanel })),
+);
 
 const TABS: { tab: DrawerTab; label: string }[] = [
   { tab: 'schedule', label: 'Schedule' },

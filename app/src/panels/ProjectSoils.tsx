@@ -1,4 +1,4 @@
-import type { Soil } from '@mainbrace/solver';
+import { LIMITS, type Soil } from '@mainbrace/solver';
 import { useActions, useApp } from '../state/StoreContext.js';
 import { NumberField } from './NumberField.js';
 import { show } from '../format/quantity.js';
@@ -41,8 +41,8 @@ export function ProjectSoils() {
                 value={s.bearing}
                 dimension="stress"
                 units={u}
-                min={0}
-                max={5e6}
+                min={LIMITS.bearing.hard.min}
+                max={LIMITS.bearing.hard.max}
                 onCommit={(bearing) => setSoil(s.id, { bearing })}
                 hint={s.bearingPerDepth ? `+ ${show(s.bearingPerDepth, 'stressGradient', u)} of depth` : undefined}
               />
@@ -53,8 +53,8 @@ export function ProjectSoils() {
                 value={s.unitWeight}
                 dimension="unitWeight"
                 units={u}
-                min={1000}
-                max={30000}
+                min={LIMITS.soilUnitWeight.hard.min}
+                max={LIMITS.soilUnitWeight.hard.max}
                 onCommit={(unitWeight) => setSoil(s.id, { unitWeight })}
               />
             </td>
@@ -64,8 +64,8 @@ export function ProjectSoils() {
                 value={s.frictionAngle}
                 dimension="angle"
                 units={u}
-                min={0}
-                max={59}
+                min={LIMITS.frictionAngle.hard.min}
+                max={LIMITS.frictionAngle.hard.max}
                 onCommit={(frictionAngle) => setSoil(s.id, { frictionAngle })}
               />
             </td>
@@ -75,8 +75,8 @@ export function ProjectSoils() {
                 value={s.cohesion}
                 dimension="stress"
                 units={u}
-                min={0}
-                max={1e6}
+                min={LIMITS.cohesion.hard.min}
+                max={LIMITS.cohesion.hard.max}
                 onCommit={(cohesion) => setSoil(s.id, { cohesion })}
               />
             </td>

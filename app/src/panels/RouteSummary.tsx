@@ -2,6 +2,7 @@ import { norm, restraintConcrete } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
 import { show } from '../format/quantity.js';
 import { KIND_NAME } from '../format/fittingNames.js';
+import { useDiagnosticWords } from '../format/words.js';
 import { largestThrusts, networkLength } from './routeFigures.js';
 
 /** With nothing selected: the route in numbers, the largest thrusts, and how to begin. */
@@ -13,6 +14,7 @@ export function RouteSummary() {
   const length = networkLength(analysis);
   const concrete = analysis.fittings.reduce((v, f) => v + restraintConcrete(f.restraint), 0);
   const ranked = largestThrusts(analysis, 6);
+  const words = useDiagnosticWords();
   const warned = analysis.fittings.filter((f) => f.diagnostics.some((d) => d.severity !== 'info')).length;
   return (
     <section className="inputs">
@@ -34,6 +36,21 @@ export function RouteSummary() {
             <dt>Fittings with warnings</dt>
             <dd>{warned}</dd>
           </dl>
+          {analysis.diagnostics.length > 0 && (
+            <>
+              <h4>Checks on the inputs</h4>
+              <ul className="warnings" data-testid="input-checks">
+                {analysis.diagnostics.map((d, i) => (
+                  <li key={i} className={`finding-${d.severity}`} data-code={d.code}>
+                    <span className="warn-mark" aria-hidden="true">
+                      !
+                    </span>
+                    {words(d)}
+                  </li>
+                ))}
+              </ul>
+            </>
+          )}
           <h4>Largest thrusts</h4>
           <ol className="ranked">
             {ranked.map((f) => (

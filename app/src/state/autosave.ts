@@ -1,85 +1,212 @@
 import { savedDocument } from './savedDocument.js';
-import { get, set } from 'idb-keyval';
 import type { Project } from '@mainbrace/solver';
-import type { AppStore } from './store.js';
-import { validated } from './actions.js';
+import type { AppStore, Notice } from './store.js';
+import type { KeyValueStore } from './keyValue.js';
+import { readRecord, writeIfAt, writeOver } from './storedProject.js';
+import { deleteKeptCopy, keepCopy, updateKeptCopy, type KeptCopy } from './keptCopies.js';
+import { projectFromText } from './restore.js';
+import type { TabChannel } from './tabChannel.js';
+import { storageErrorDetail } from './storageError.js';
+import { download, fileStem, projectText } from '../files/projectFile.js';
+import { refreshKeptCopies, showKeptCopies } from './keptCopiesView.js';
 
-const KEY = 'mainbrace.project.v1';
 const DELAY_MS = 400;
 
-const UNREADABLE_KEY = 'mainbrace.project.v1.unreadable';
-
-/** What was kept from the last visit: a valid project, nothing, or a copy that no longer reads. */
-export type Restored =
-  { kind: 'project'; project: Project } | { kind: 'none' } | { kind: 'unreadable'; lines: string[] };
-
-/**
- * The project kept from the last visit. A kept copy that no longer validates is not thrown away: it is
- * moved to a backup key (so the next autosave cannot overwrite it) and the user is told.
- */
-export async function restoreProject(): Promise<Restored> {
-  let text: string | undefined;
-  try {
-    text = await get<string>(KEY);
-  } catch {
-    return { kind: 'none' };
-  }
-  if (!text) return { kind: 'none' };
-  let lines: string[];
-  try {
-    const r = validated(JSON.parse(text));
-    if (r.ok) return { kind: 'project', project: r.project };
-    lines = r.lines;
-  } catch (e) {
-    lines = [`not valid JSON: ${(e as Error).message}`];
-  }
-  await set(UNREADABLE_KEY, text).catch(() => undefined);
-  return { kind: 'unreadable', lines };
+export interface AutosaveOptions {
+  kv: KeyValueStore;
+  channel: TabChannel | null;
+  /** this tab's id */
+  tab: string;
+  /** the revision in storage this tab's document came from; -1 when storage could not be read */
+  base: number;
+  notify: (notice: Notice) => void;
+  /** replaces the document with another tab's version (an undoable step like Open) */
+  adopt: (project: Project) => void;
+  delayMs?: number;
 }
 
+const timeOf = (iso: string) => new Date(iso).toLocaleTimeString([], { hour: '2-digit', minute: '2-digit' });
+const showCopies = { label: 'Show kept copies', run: showKeptCopies };
+
 /**
- * Saves the document to IndexedDB shortly after every edit, and at once when the page is hidden.
- * A failure is shown to the user (their work is then only in this tab).
+ * Saves the document to browser storage shortly after every edit, and at once when the page is
+ * hidden. A save never overwrites a newer copy another tab saved: an idle tab takes the newer copy
+ * in; a tab with edits of its own keeps them as a kept copy and asks which version goes on.
  */
-export function startAutosave(store: AppStore, onFailure: (message: string) => void): () => void {
+export function startAutosave(store: AppStore, o: AutosaveOptions) {
+  const { kv, channel, tab } = o;
+  let base = o.base;
+  let saved: Project | null = savedDocument(store.getState());
   let timer: ReturnType<typeof setTimeout> | null = null;
   let failed = false;
-  let saved: Project | null = savedDocument(store.getState());
+  /** this tab's own version while another tab's newer copy is in storage */
+  let conflict: { mine: KeptCopy } | null = null;
+  let queue: Promise<unknown> = Promise.resolve();
+  const serial = (job: () => Promise<void>) => (queue = queue.then(job).catch(fail));
+  const current = () => savedDocument(store.getState());
+  const saveToFile = {
+    label: 'Save to a file',
+    run: () => download(`${fileStem(current())}.json`, projectText(current()), 'application/json'),
+  };
+
+  function fail(e: unknown) {
+    saved = null; // retry at the next edit or flush
+    if (failed) return;
+    failed = true;
+    o.notify({
+      tone: 'warning',
+      title: 'Autosave failed: your work is only in this tab — save it to a file',
+      lines: [storageErrorDetail(e)],
+      actions: [saveToFile],
+    });
+  }
+
+  const conflictNotice = (mine: KeptCopy): Notice => ({
+    tone: 'warning',
+    title: 'This project was changed in another tab: nothing was overwritten',
+    lines: [
+      `This tab’s version is in Kept copies (${timeOf(mine.keptAt)}); its further edits go there until you choose.`,
+      'Choose which version goes on here; the other stays in Kept copies.',
+    ],
+    actions: [
+      { label: 'Keep this tab’s version', run: () => serial(keepMine) },
+      { label: 'Open the other tab’s version', run: () => serial(takeTheirs) },
+      saveToFile,
+      showCopies,
+    ],
+  });
+
+  async function save() {
+    const project = current();
+    if (project === saved) return;
+    const text = JSON.stringify(project);
+    if (conflict) {
+      conflict.mine = await updateKeptCopy(kv, conflict.mine, text);
+      saved = project;
+      failed = false;
+      void refreshKeptCopies();
+      if (store.getState().notice?.title !== conflictNotice(conflict.mine).title)
+        o.notify(conflictNotice(conflict.mine));
+      return;
+    }
+    const r = await writeIfAt(kv, base, text, tab);
+    failed = false;
+    if (r.ok) return accept(r.record.revision, project, true);
+    // The same text from both tabs is no conflict.
+    if (r.current.text === text) return accept(r.current.revision, project, false);
+    const mine = await keepCopy(kv, text, 'this tab’s version, not saved over a newer one from another tab');
+    conflict = { mine };
+    saved = project;
+    void refreshKeptCopies();
+    o.notify(conflictNotice(mine));
+  }
+
+  function accept(revision: number, project: Project, tell: boolean) {
+    base = revision;
+    saved = project;
+    if (tell) channel?.post({ kind: 'saved', revision, tab });
+  }
+
+  async function keepMine() {
+    const project = current();
+    const text = JSON.stringify(project);
+    const theirs = await readRecord(kv);
+    if (theirs && theirs.text !== text)
+      await keepCopy(kv, theirs.text, 'another tab’s version, replaced by this tab’s');
+    const record = await writeOver(kv, text, tab);
+    if (conflict) await deleteKeptCopy(kv, conflict.mine.id); // it is the stored project now
+    conflict = null;
+    accept(record.revision, project, true);
+    void refreshKeptCopies();
+    o.notify({
+      tone: 'info',
+      title: 'This tab’s version is saved; the other tab’s version is in Kept copies',
+      lines: [],
+      actions: [showCopies],
+    });
+  }
+
+  async function takeTheirs() {
+    const theirs = await readRecord(kv);
+    const r = theirs ? projectFromText(theirs.text) : null;
+    if (!theirs || !r?.ok) {
+      o.notify({
+        tone: 'error',
+        title: 'The other tab’s version could not be read; this tab’s version goes on',
+        lines: r && !r.ok ? r.lines : [],
+      });
+      return keepMine();
+    }
+    const text = JSON.stringify(current());
+    const mine = conflict
+      ? await updateKeptCopy(kv, conflict.mine, text)
+      : await keepCopy(kv, text, 'this tab’s version');
+    conflict = null;
+    accept(theirs.revision, r.project, false);
+    o.adopt(r.project);
+    void refreshKeptCopies();
+    o.notify({
+      tone: 'info',
+      title: `Opened the other tab’s version; this tab’s version is in Kept copies (${timeOf(mine.keptAt)})`,
+      lines: [],
+      actions: [showCopies],
+    });
+  }
+
+  /** Another tab saved: an idle tab takes the newer copy in, so its next edit builds on it. */
+  async function follow(revision: number) {
+    if (conflict || timer || current() !== saved || revision <= base) return;
+    const theirs = await readRecord(kv);
+    if (!theirs || theirs.revision <= base) return;
+    const r = projectFromText(theirs.text);
+    if (!r.ok) return; // the next save finds the newer copy and asks
+    accept(theirs.revision, r.project, false);
+    o.adopt(r.project);
+    o.notify({ tone: 'info', title: 'Updated with the changes saved in another tab', lines: [] });
+  }
+
   const flush = () => {
     if (timer) clearTimeout(timer);
     timer = null;
-    const project = savedDocument(store.getState());
-    if (project === saved) return;
-    saved = project;
-    set(KEY, JSON.stringify(project)).then(
-      () => {
-        failed = false;
-      },
-      (e: unknown) => {
-        if (!failed) onFailure(e instanceof Error ? e.message : String(e));
-        failed = true;
-        saved = null;
-      },
-    );
+    return serial(save);
   };
   const unsubscribe = store.subscribe((s, prev) => {
-    if (savedDocument(s) === savedDocument(prev)) return;
+    const doc = savedDocument(s);
+    if (doc === savedDocument(prev) || doc === saved) return;
     if (timer) clearTimeout(timer);
-    timer = setTimeout(flush, DELAY_MS);
+    timer = setTimeout(flush, o.delayMs ?? DELAY_MS);
+  });
+  const unlisten = channel?.listen((m) => {
+    if (m.kind === 'saved' && m.tab !== tab) void serial(() => follow(m.revision));
   });
   const onHide = () => {
-    if (document.visibilityState === 'hidden') flush();
+    if (document.visibilityState === 'hidden') void flush();
   };
+  const onPageHide = () => void flush();
   document.addEventListener('visibilitychange', onHide);
-  window.addEventListener('pagehide', flush);
-  return () => {
-    unsubscribe();
-    document.removeEventListener('visibilitychange', onHide);
-    window.removeEventListener('pagehide', flush);
+  window.addEventListener('pagehide', onPageHide);
+  return {
+    /** saves now; true when this tab's document is in storage (before a reload) */
+    flush: async (): Promise<boolean> => {
+      await flush();
+      return current() === saved;
+    },
+    /** saves now even if nothing changed since the last save: the document replaces a set-aside copy */
+    claim: async () => {
+      saved = null;
+      await flush();
+    },
+    /** stops saving: pending edits are dropped (the error screen sets the kept project aside first) */
+    stop: () => {
+      if (timer) clearTimeout(timer);
+      timer = null;
+      unsubscribe();
+      unlisten?.();
+      document.removeEventListener('visibilitychange', onHide);
+      window.removeEventListener('pagehide', onPageHide);
+    },
   };
 }
 
-/** Saves at once (the first save after a restore or a new project). */
-export async function saveNow(project: Project): Promise<void> {
-  await set(KEY, JSON.stringify(project));
-}
+export type Autosave = ReturnType<typeof startAutosave>;
+export { restoreProject, type Restored } from './restore.js';

@@ -1,4 +1,11 @@
-import { MIN_PIPE_LENGTH, type Material, type Pipe, type Project, type ProjectNode } from '@mainbrace/solver';
+import {
+  MIN_PIPE_LENGTH,
+  type Material,
+  type Pipe,
+  type Project,
+  type ProjectNode,
+  geometryProblems,
+} from '@mainbrace/solver';
 
 /** A point on the plan, m: x east, y north. */
 export interface PlanPoint {
@@ -126,6 +133,15 @@ function pieceOfSplit(before: Project, after: Project, start: RouteEnd, end: Rou
  * Adds a drawn run: from its start (a node, a split pipe or a new point) through the vertices to its
  * end, one pipe per segment, all with the same pipe spec. A start on a node makes a branch there.
  */
+/**
+ * An edit whose result the project format would refuse — nodes on one point, pipes on top of each
+ * other — changes nothing (the document stays as it was).
+ */
+function keepGeometry(before: Project, after: Project): Project {
+  if (after === before || geometryProblems(after).length === 0) return after;
+  return geometryProblems(before).length > 0 ? after : before;
+}
+
 export function addRoute(
   project: Project,
   start: RouteEnd,
@@ -162,7 +178,7 @@ export function addRoute(
     doc = { ...doc, pipes: [...doc.pipes, pipe] };
     previous = to;
   }
-  return doc;
+  return keepGeometry(project, doc);
 }
 
 /**
@@ -180,7 +196,7 @@ export function moveNodes(project: Project, moves: ReadonlyMap<string, PlanPoint
     const moved = moves.has(p.from) || moves.has(p.to);
     return moved && a && b && Math.hypot(a.x - b.x, a.y - b.y, a.elevation - b.elevation) < MIN_PIPE_LENGTH;
   });
-  return collapses ? project : { ...project, nodes };
+  return collapses ? project : keepGeometry(project, { ...project, nodes });
 }
 
 /**
@@ -232,7 +248,7 @@ export function deleteItems(project: Project, nodeIds: ReadonlySet<string>, pipe
   for (const p of doc.pipes) if (!pipes.includes(p)) [p.from, p.to].forEach((id) => touched.add(id));
   const stillUsed = new Set(pipes.flatMap((p) => [p.from, p.to]));
   const nodes = doc.nodes.filter((n) => !remaining.has(n.id) && !(touched.has(n.id) && !stillUsed.has(n.id)));
-  return { ...doc, nodes, pipes };
+  return keepGeometry(project, { ...doc, nodes, pipes });
 }
 
 export function updateNode(project: Project, id: string, patch: Partial<ProjectNode>): Project {

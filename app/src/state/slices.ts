@@ -20,6 +20,20 @@ export interface ProjectSlice {
   project: Project;
 }
 
+/** A choice offered inside a notice (keep this tab's version, save to a file...). */
+export interface NoticeAction {
+  label: string;
+  run: () => void;
+}
+
+/** A message the chrome shows until dismissed. */
+export interface Notice {
+  tone: 'warning' | 'error' | 'info';
+  title: string;
+  lines: string[];
+  actions?: NoticeAction[];
+}
+
 /** How the plan and the panels are shown. */
 export interface ViewSlice {
   /** display units: a view setting, saved into the file but never an undo step of the design */
@@ -28,7 +42,7 @@ export interface ViewSlice {
   caseView: CaseView;
   drawer: { tab: DrawerTab; height: 'low' | 'high' | 'full' | 'closed' };
   /** a message the chrome shows until dismissed (storage failure, a refused file) */
-  notice: { tone: 'warning' | 'error' | 'info'; title: string; lines: string[] } | null;
+  notice: Notice | null;
 }
 
 /** The active tool and its transient state. */

@@ -14,7 +14,7 @@ import {
 } from './slices.js';
 
 export { EMPTY_SELECTION } from './slices.js';
-export type { CaseView, DrawerTab, Selection, ToolName } from './slices.js';
+export type { CaseView, DrawerTab, Notice, NoticeAction, Selection, ToolName } from './slices.js';
 
 /** The whole app state; only `project` is the design, and only it has undo history. */
 export type AppState = ProjectSlice & ViewSlice & ToolSlice & SelectionSlice;

@@ -1,7 +1,9 @@
 // The solver's public surface: the project model, the analysis, the schedule, and display units.
 export * from './model/projectSchema.js';
 export { projectSchema } from './model/project.js';
-export { MIN_PIPE_LENGTH } from './model/crossChecks.js';
+export { MIN_PIPE_LENGTH, OVERLAP_ANGLE, geometryProblems } from './model/crossChecks.js';
+export { LIMITS, unusual, type Limit, type LimitId } from './model/limits.js';
+export { implausibleInputs } from './model/plausibility.js';
 export { caseLabel } from './model/caseLabel.js';
 export { parseProject, parseProjectText, type ParseResult } from './model/parseProject.js';
 export { problemText, type Problem } from './model/problems.js';

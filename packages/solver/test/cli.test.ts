@@ -136,7 +136,7 @@ describe('the command line', () => {
     const r = run('schedule', file);
     expect(r.status).toBe(2);
     const lines = r.stderr.trim().split('\n');
-    expect(lines).toContain('pipes[1].outsideDiameter: must be greater than 0');
+    expect(lines).toContain('pipes[1].outsideDiameter: must be at least 0.01 m');
     expect(lines).toContain('nodes[2].cover: expected a number, got the text "deep"');
     expect(lines).toContain('loadCases[0].presure: unknown field (not part of the project format)');
     expect(r.stderr).not.toMatch(/\n\s+at /);
@@ -152,6 +152,13 @@ describe('the command line', () => {
     const m = run('validate', join(dir, 'nope.json'));
     expect(m.status).toBe(2);
     expect(m.stderr).toMatch(/cannot read the file \(no such file\)/);
+  });
+
+  it('stops reading /dev/zero at the size limit and exits 2 (the installed command, not only runCli)', () => {
+    const r = spawnSync(process.execPath, [bin, 'validate', '/dev/zero'], { encoding: 'utf8', timeout: 20_000 });
+    expect(r.signal).toBeNull();
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(/larger than 20\.0 MB/);
   });
 
   it('refuses an unknown command or option value with exit 2', () => {

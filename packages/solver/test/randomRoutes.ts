@@ -1,7 +1,8 @@
 import fc from 'fast-check';
 import type { NodeSpec, PipeSpec } from './projectBuilder.js';
+import { OVERLAP_ANGLE } from '../src/model/crossChecks.js';
 
-/** Outside diameters drawn for random routes, m (EN 545 DN100–DN600, domain reference §7.4). */
+/** Outside diameters drawn for random routes, m (EN 545:2010 external diameters, DN100–DN600). */
 const ODS = [0.118, 0.17, 0.222, 0.274, 0.326, 0.429, 0.532, 0.635];
 
 export interface RandomRoute {
@@ -9,9 +10,33 @@ export interface RandomRoute {
   pipes: PipeSpec[];
 }
 
+/** True when no two pipes leave a node within OVERLAP_ANGLE of one line (the project format refuses that). */
+function noOverlap(r: RandomRoute): boolean {
+  const at = new Map(r.nodes.map((n) => [n.id, n]));
+  const leaving = new Map<string, number[][]>();
+  const limit = Math.cos((OVERLAP_ANGLE * Math.PI) / 180);
+  for (const p of r.pipes) {
+    const a = at.get(p.from)!;
+    const b = at.get(p.to)!;
+    const d = [b.x - a.x, b.y - a.y, (b.z ?? 100) - (a.z ?? 100)];
+    const len = Math.hypot(d[0]!, d[1]!, d[2]!);
+    const u = d.map((v) => v / len);
+    for (const [id, dir] of [
+      [a.id, u],
+      [b.id, u.map((v) => -v)],
+    ] as const) {
+      const list = leaving.get(id) ?? [];
+      if (list.some((o) => o[0]! * dir[0]! + o[1]! * dir[1]! + o[2]! * dir[2]! > limit)) return false;
+      leaving.set(id, [...list, dir]);
+    }
+  }
+  return true;
+}
+
 /**
  * A random tree of pipes: node i joins a random earlier node, points on a 1 m grid kept apart so
- * no pipe has zero length; optional random elevations and flows.
+ * no pipe has zero length and no two pipes leave a node along one line; optional random elevations
+ * and flows.
  */
 export function randomRoute(opts: { level?: boolean; flows?: boolean } = {}): fc.Arbitrary<RandomRoute> {
   return fc
@@ -41,5 +66,6 @@ export function randomRoute(opts: { level?: boolean; flows?: boolean } = {}): fc
           flow: opts.flows ? flows[i]! / 1000 : 0,
         };
       }),
-    }));
+    }))
+    .filter(noOverlap);
 }

@@ -17,6 +17,7 @@ import { thrustSteps } from './thrustSteps.js';
 import { diagnostic, uniqueDiagnostics, type Diagnostic } from '../diagnostics/diagnostic.js';
 import type { ProvenanceId } from '../provenance/register.js';
 import type { CalcStep } from './calcRecord.js';
+import { implausibleInputs } from '../model/plausibility.js';
 
 /** Everything computed for one fitting; the schedule, the plan and the record all read this. */
 export interface FittingAnalysis {
@@ -56,6 +57,8 @@ export interface Analysis {
   chainage: Map<string, number>;
   /** marks of every fitting, tie-ins included */
   marks: Map<string, string>;
+  /** findings about the inputs of the whole project (values outside their usual range), most severe first */
+  diagnostics: Diagnostic[];
 }
 
 function negativePressure(node: string, cases: readonly CaseThrust[]): Diagnostic[] {
@@ -92,12 +95,13 @@ function analyseFitting(
   legs: Leg[],
   geometry: FittingGeometry,
   place: { mark: string; run: string; chainage: number },
+  inputs: readonly Diagnostic[],
 ): FittingAnalysis {
   const states = fittingThrust(node, geometry.kind, legs, project.loadCases, project.water.density);
   const cases = worstPerCase(states);
   const envelope = thrustEnvelope(states);
   const restraint = sizeRestraint(project, node, legs, geometry, envelope);
-  const found = [...negativePressure(node.id, cases), ...restraint.diagnostics];
+  const found = [...inputs, ...negativePressure(node.id, cases), ...restraint.diagnostics];
   const unbalanced = flowImbalance(node.id, legs, geometry);
   if (unbalanced) found.push(unbalanced);
   if (node.valve && geometry.kind === 'valve') found.push(diagnostic('valve.both-ways', { node: node.id }));
@@ -128,6 +132,8 @@ export function analyseProject(project: Project): Analysis {
     const kind = geometry.get(id)!.kind;
     return kind !== 'straight' && kind !== 'none';
   });
+  const inputs = implausibleInputs(project);
+  const atNode = (id: string) => inputs.filter((d) => d.subject.node === id);
   const fittings: FittingAnalysis[] = [];
   const nodeById = new Map(project.nodes.map((n) => [n.id, n]));
   const done = new Set<string>();
@@ -137,7 +143,7 @@ export function analyseProject(project: Project): Analysis {
       if (layout.runOf.get(id) !== run.letter || !needsRestraint(g.kind) || done.has(id)) continue;
       done.add(id);
       const place = { mark: marks.get(id)!, run: run.letter, chainage: layout.chainage.get(id)! };
-      fittings.push(analyseFitting(project, nodeById.get(id)!, legs.get(id) ?? [], g, place));
+      fittings.push(analyseFitting(project, nodeById.get(id)!, legs.get(id) ?? [], g, place, atNode(id)));
     }
   }
   return {
@@ -149,6 +155,7 @@ export function analyseProject(project: Project): Analysis {
     runOf: layout.runOf,
     chainage: layout.chainage,
     marks,
+    diagnostics: uniqueDiagnostics(inputs),
   };
 }
 

@@ -10,10 +10,14 @@ import { notVerifiedText } from '../provenance/entry.js';
 import { REGISTER, unverified } from '../provenance/register.js';
 import { scheduleOf } from '../schedule/scheduleRows.js';
 import { restraintElements } from '../schedule/restraintElements.js';
+import { escapeControls } from './terminalText.js';
 
 const shown = (v: RecordValue, units: UnitSystem) => formatSi(v.value, v.dimension, units, 4);
 
-/** A fitting's calculation record as plain text: each step's formula, inputs with sources, result. */
+/**
+ * A fitting's calculation record as plain text: each step's formula, inputs with sources, result.
+ * Each line is escaped on its own, so a label cannot add lines or act on the terminal.
+ */
 export function explainText(a: Analysis, f: FittingAnalysis, units: UnitSystem): string {
   const out = [`${f.mark} — ${fittingTitle(f.geometry)} (node ${f.node.id}, run ${f.run})`, ''];
   // What to build first, each element named by the fitting's mark; then how it was found.
@@ -51,5 +55,5 @@ export function explainText(a: Analysis, f: FittingAnalysis, units: UnitSystem):
     );
   }
   out.push(SHORT_CAUTION);
-  return out.join('\n') + '\n';
+  return out.map(escapeControls).join('\n') + '\n';
 }

@@ -14,41 +14,84 @@ import { scheduleView } from '../schedule/scheduleView.js';
 import { scheduleCsv } from '../schedule/scheduleCsv.js';
 import { scheduleTable } from '../schedule/scheduleTable.js';
 import type { UnitSystem } from '../units/conversions.js';
+import { DEFAULT_MAX_BYTES } from './readLimited.js';
+import { escapeControls, escapeStrings, terminalSafe } from './terminalText.js';
 
 /** What the command line needs from the outside world, so that it runs in tests without a process. */
 export interface CliIo {
   /** true when the output goes to a terminal: JSON is then indented for reading */
   interactive?: boolean;
-  /** the file's text, or throws an error with a `code` such as ENOENT */
-  readFile: (path: string) => string;
+  /**
+   * the file's bytes, at most `maxBytes` of them; throws an error with a `code` such as ENOENT, or
+   * ETOOLARGE when the file is longer
+   */
+  readFile: (path: string, maxBytes: number) => Uint8Array;
   out: (text: string) => void;
   err: (text: string) => void;
 }
 
 class UsageError extends Error {}
 
-function load(io: CliIo, path: string | undefined): Project | string[] {
-  if (!path) throw new UsageError('missing FILE: give the path of a project file');
-  let text: string;
+/** `--max-size 50` (megabytes, as the app counts them) → bytes; the app's 20 MB when not given. */
+function maxBytesOption(value: string | undefined): number {
+  if (value === undefined) return DEFAULT_MAX_BYTES;
+  const m = /^\s*(\d+(?:\.\d+)?)\s*(?:MB)?\s*$/i.exec(value);
+  const mb = m ? Number(m[1]) : NaN;
+  if (!(mb > 0))
+    throw new UsageError(`--max-size: expected a size in megabytes such as 50, got "${escapeControls(value)}"`);
+  return Math.floor(mb * 1024 * 1024);
+}
+
+const megabytes = (bytes: number) => `${(bytes / 1048576).toFixed(1)} MB`;
+
+/** The file's text: UTF-8, with or without a byte-order mark (the app reads both). */
+function decode(bytes: Uint8Array): string | null {
   try {
-    text = io.readFile(path);
-  } catch (e) {
-    const code = (e as { code?: string }).code;
-    const why = code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'it is a folder' : (e as Error).message;
-    return [`${path}: cannot read the file (${why})`];
+    return new TextDecoder('utf-8', { fatal: true }).decode(bytes);
+  } catch {
+    return null;
   }
+}
+
+function load(io: CliIo, path: string | undefined, maxBytes: number): Project | string[] {
+  if (!path) throw new UsageError('missing FILE: give the path of a project file');
+  const name = escapeControls(path);
+  let bytes: Uint8Array;
+  try {
+    bytes = io.readFile(path, maxBytes);
+  } catch (e) {
+    const { code, size } = e as { code?: string; size?: number | null };
+    if (code === 'ETOOLARGE') {
+      const what = `the file is ${typeof size === 'number' ? megabytes(size) : `larger than ${megabytes(maxBytes)}`}`;
+      return [
+        `${name}: ${what}; project files over ${megabytes(maxBytes)} are refused (raise the limit with --max-size MB)`,
+      ];
+    }
+    const why = code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'it is a folder' : (e as Error).message;
+    return [`${name}: cannot read the file (${why})`];
+  }
+  const text = decode(bytes);
+  if (text === null) return [`${name}: not UTF-8 text; save the project file as UTF-8`];
   const result = parseProjectText(text);
-  return result.ok ? result.project : result.problems.map(problemText);
+  return result.ok ? result.project : result.problems.map((p) => escapeControls(problemText(p)));
 }
 
 function unitsOption(value: string | undefined, project: Project): UnitSystem {
   if (value === undefined) return project.units;
   if (value === 'us' || value === 'si') return value;
-  throw new UsageError(`--units: expected "us" or "si", got "${value}"`);
+  throw new UsageError(`--units: expected "us" or "si", got "${escapeControls(value)}"`);
 }
 
-/** Runs one command line; returns the exit status (0 done, 2 bad input). Never throws. */
-export function runCli(argv: readonly string[], io: CliIo): number {
+/**
+ * Runs one command line; returns the exit status (0 done, 2 bad input, 1 a fault of ours). Never
+ * throws. Nothing from the file reaches the terminal as a control character.
+ */
+export function runCli(argv: readonly string[], rawIo: CliIo): number {
+  const io: CliIo = {
+    ...rawIo,
+    out: (text) => rawIo.out(terminalSafe(text)),
+    err: (text) => rawIo.err(terminalSafe(text)),
+  };
   try {
     const args = parseArgs(argv);
     if (args.options.has('help') || args.command === undefined || args.command === 'help') {
@@ -60,14 +103,17 @@ export function runCli(argv: readonly string[], io: CliIo): number {
       return 0;
     }
     if (!['schedule', 'validate', 'explain'].includes(args.command)) {
-      throw new UsageError(`unknown command "${args.command}": expected schedule, explain, validate or schema`);
+      throw new UsageError(
+        `unknown command "${escapeControls(args.command)}": expected schedule, explain, validate or schema`,
+      );
     }
-    const loaded = load(io, args.positional[0]);
+    const loaded = load(io, args.positional[0], maxBytesOption(args.options.get('max-size')));
     if (Array.isArray(loaded)) {
       io.err(loaded.join('\n') + '\n');
       return 2;
     }
     const project = loaded;
+    const file = escapeControls(args.positional[0]!);
     if (args.command === 'validate') {
       // Naming the fittings is enough here; sizing them is the schedule's work.
       const legs = legsByNode(project);
@@ -75,7 +121,7 @@ export function runCli(argv: readonly string[], io: CliIo): number {
         needsRestraint(fittingGeometry(n, legs.get(n.id) ?? []).kind),
       ).length;
       io.out(
-        `${args.positional[0]}: valid — ${project.nodes.length} nodes, ${project.pipes.length} pipes, ${fittings} fittings to restrain\n`,
+        `${file}: valid — ${project.nodes.length} nodes, ${project.pipes.length} pipes, ${fittings} fittings to restrain\n`,
       );
       return 0;
     }
@@ -89,8 +135,8 @@ export function runCli(argv: readonly string[], io: CliIo): number {
         const known = project.nodes.some((n) => n.id === id) || [...analysis.marks.values()].includes(id);
         io.err(
           known
-            ? `"${id}" needs no restraint (a straight joint, a tie-in or a free node)\n`
-            : `no fitting marked "${id}" and no node "${id}" in ${args.positional[0]}\n`,
+            ? `"${escapeControls(id)}" needs no restraint (a straight joint, a tie-in or a free node)\n`
+            : `no fitting marked "${escapeControls(id)}" and no node "${escapeControls(id)}" in ${file}\n`,
         );
         return 2;
       }
@@ -101,9 +147,10 @@ export function runCli(argv: readonly string[], io: CliIo): number {
     // Indented for a person at a terminal or with --pretty; compact into pipes and files.
     const pretty = io.interactive === true || args.options.has('pretty');
     if (format === 'json') io.out(scheduleJson(scheduleOf(analysis), pretty));
-    else if (format === 'csv') io.out(scheduleCsv(scheduleView(analysis, units)));
-    else if (format === 'table') io.out(scheduleTable(scheduleView(analysis, units), project.name));
-    else throw new UsageError(`--format: expected json, csv or table, got "${format}"`);
+    else if (format === 'csv') io.out(scheduleCsv(escapeStrings(scheduleView(analysis, units))));
+    else if (format === 'table')
+      io.out(scheduleTable(escapeStrings(scheduleView(analysis, units)), escapeControls(project.name)));
+    else throw new UsageError(`--format: expected json, csv or table, got "${escapeControls(format)}"`);
     return 0;
   } catch (e) {
     if (e instanceof UsageError) {

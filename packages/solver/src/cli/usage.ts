@@ -9,6 +9,9 @@ Usage:
   mainbrace validate FILE         check a project file
   mainbrace schema                the JSON Schema of the project file
 
-Exit status: 0 done; 2 a bad file or command line (one line per problem).
+Options for every command reading FILE:
+  --max-size MB                   refuse files larger than this (default 20, as the app)
+
+Exit status: 0 done; 2 a bad file or command line (one line per problem); 1 a fault of Mainbrace.
 Design aid only: results must be checked by a licensed engineer; local codes and the utility's standards govern.
 `;

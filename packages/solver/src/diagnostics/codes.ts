@@ -160,6 +160,69 @@ export const DIAGNOSTIC_CODES = {
     meaning: 'A bend sharper than 90°: restrained lengths grow quickly and the method is uncertain.',
     action: 'Consider a block or a different layout.',
   },
+  'input.pressure-unusual': {
+    severity: 'warning',
+    values: { value: 'pressure', low: 'pressure', high: 'pressure' },
+    meaning:
+      'A case pressure lies outside the usual range for a water main (50 kPa to 3 MPa): often a unit slip, such as kPa typed as Pa.',
+    action: 'Check the case pressure and its unit.',
+  },
+  'input.cover-unusual': {
+    severity: 'warning',
+    values: { value: 'length', low: 'length', high: 'length' },
+    meaning:
+      'A depth of cover lies outside the usual range (0.3 m to 6 m): often a unit slip, such as millimetres typed as metres.',
+    action: 'Check the cover and its unit.',
+  },
+  'input.velocity-unusual': {
+    severity: 'warning',
+    values: { value: 'velocity', low: 'velocity', high: 'velocity' },
+    meaning:
+      'The flow velocity in a pipe is higher than usual for a water main (above 5 m/s): often a unit slip in the flow.',
+    action: 'Check the pipe’s flow and its unit.',
+  },
+  'input.diameter-unusual': {
+    severity: 'warning',
+    values: { value: 'diameter', low: 'diameter', high: 'diameter' },
+    meaning: 'A pipe’s outside diameter lies outside the usual range (50 mm to 2 m).',
+    action: 'Check the diameter and its unit.',
+  },
+  'input.density-unusual': {
+    severity: 'warning',
+    values: { value: 'density', low: 'density', high: 'density' },
+    meaning: 'The water density lies outside the usual range for fresh or sea water.',
+    action: 'Check the water density (998.2 kg/m³ at 20 °C).',
+  },
+  'input.unit-weight-unusual': {
+    severity: 'warning',
+    values: { value: 'unitWeight', low: 'unitWeight', high: 'unitWeight' },
+    meaning: 'A unit weight (concrete or soil) lies outside its usual range.',
+    action: 'Check the unit weight and its unit.',
+  },
+  'input.length-unusual': {
+    severity: 'warning',
+    values: { value: 'length', low: 'length', high: 'length' },
+    meaning: 'A design length (block thickness, trench width) lies outside its usual range.',
+    action: 'Check the length and its unit.',
+  },
+  'input.stress-unusual': {
+    severity: 'warning',
+    values: { value: 'stress', low: 'stress', high: 'stress' },
+    meaning: 'A soil strength (bearing or cohesion) lies outside its usual range.',
+    action: 'Check the soil value and its unit.',
+  },
+  'input.angle-unusual': {
+    severity: 'warning',
+    values: { value: 'angle', low: 'angle', high: 'angle' },
+    meaning: 'A soil friction angle lies outside the usual range (0° to 45°).',
+    action: 'Check the friction angle.',
+  },
+  'input.factor-unusual': {
+    severity: 'warning',
+    values: { value: 'ratio', low: 'ratio', high: 'ratio' },
+    meaning: 'A safety factor lies outside the usual range (1.25 to 3).',
+    action: 'Check the safety factor.',
+  },
 } as const satisfies Record<string, CodeSpec>;
 
 export type DiagnosticCode = keyof typeof DIAGNOSTIC_CODES;

@@ -2,6 +2,7 @@ import type { Analysis } from '../analysis/analyse.js';
 import { planBearing } from '../geometry/vector.js';
 import type { UnitSystem } from '../units/conversions.js';
 import { compassPoint } from '../schedule/fittingNames.js';
+import { formatSi } from '../units/format.js';
 import type { WordingContext } from './wording.js';
 
 /**
@@ -34,6 +35,16 @@ export function legName(a: Analysis, node: string | undefined, pipe: string): st
   return leg ? `the leg running ${compassPoint(planBearing(leg.direction))}` : 'the pipe';
 }
 
+/** A node by its mark, else its label, else where it stands ("the point at 120 m E, 35.0 m N"). */
+export function nodeName(a: Analysis, id: string, units: UnitSystem): string {
+  const mark = a.marks.get(id);
+  if (mark) return mark;
+  const n = a.project.nodes.find((x) => x.id === id);
+  if (!n) return 'a point';
+  if (n.label) return `“${n.label}”`;
+  return `the point at ${formatSi(n.x, 'length', units, 4)} E, ${formatSi(n.y, 'length', units, 4)} N`;
+}
+
 /** How diagnostics of this analysis are worded in the given units. */
 export function wordingContext(a: Analysis, units: UnitSystem): WordingContext {
   const { project } = a;
@@ -45,6 +56,11 @@ export function wordingContext(a: Analysis, units: UnitSystem): WordingContext {
       return s?.label ?? id;
     },
     legName: (node, pipe) => legName(a, node, pipe),
+    nodeName: (id) => nodeName(a, id, units),
+    pipeName: (id) => {
+      const pipe = project.pipes.find((p) => p.id === id);
+      return pipe ? `the pipe from ${nodeName(a, pipe.from, units)} to ${nodeName(a, pipe.to, units)}` : 'a pipe';
+    },
     material: (pipe) => MATERIAL_NAME[project.pipes.find((p) => p.id === pipe)?.material ?? 'other'] ?? 'other',
   };
 }

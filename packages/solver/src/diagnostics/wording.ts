@@ -11,13 +11,30 @@ export interface WordingContext {
   /** the pipe as seen from a fitting: "the leg toward A6" */
   legName: (node: string | undefined, pipe: string) => string;
   material: (pipe: string) => string;
+  /** a node as the reader knows it: its mark, else "the node at 120.0 m E, 35.0 m N" */
+  nodeName: (id: string) => string;
+  /** a pipe as the reader knows it: "the pipe from A3 to A4" */
+  pipeName: (id: string) => string;
 }
 
 type Shown = Record<string, string>;
+
+const capital = (t: string) => t.charAt(0).toUpperCase() + t.slice(1);
 type Words = (v: Shown, s: Subject, c: WordingContext) => string;
 
 const soil = (s: Subject, c: WordingContext) => (s.soil ? c.soilName(s.soil) : 'the soil');
 const leg = (s: Subject, c: WordingContext) => (s.pipe ? c.legName(s.node, s.pipe) : 'the pipe');
+/** Where an input value sits, in the reader's words. */
+function place(s: Subject, c: WordingContext): string {
+  if (s.case) return `Case “${c.caseName(s.case)}”`;
+  if (s.soil) return `Soil “${c.soilName(s.soil)}”`;
+  if (s.node) return capital(c.nodeName(s.node));
+  if (s.pipe) return capital(c.pipeName(s.pipe));
+  return s.field?.startsWith('water') ? 'The water' : 'The design settings';
+}
+const outside = (what: string) => (v: Shown, s: Subject, c: WordingContext) =>
+  `${place(s, c)}: ${what} ${v.value} is outside the usual ${v.low} to ${v.high}; check the value and its unit (a unit slip?).`;
+
 const inCase = (s: Subject, c: WordingContext) => (s.case ? ` in case “${c.caseName(s.case)}”` : '');
 
 /** One sentence per code, with its values in the reader's units. */
@@ -63,11 +80,19 @@ const WORDS: Record<DiagnosticCode, Words> = {
     `${capital(leg(s, c))} is fused PE, which is end-load bearing: restrain the transitions to gasketed pipe and allow for thermal and Poisson loads.`,
   'joints.material-basis': (_v, s, c) =>
     `${capital(leg(s, c))} is ${s.pipe ? c.material(s.pipe) : 'not ductile iron'}: the restrained-length method is the ductile-iron manual’s; use friction values for this material from the restrained-joint maker.`,
+  'input.pressure-unusual': outside('the pressure'),
+  'input.cover-unusual': outside('the cover'),
+  'input.velocity-unusual': outside('the flow velocity'),
+  'input.diameter-unusual': outside('the outside diameter'),
+  'input.density-unusual': outside('the density'),
+  'input.unit-weight-unusual': outside('the unit weight'),
+  'input.length-unusual': outside('the length'),
+  'input.stress-unusual': outside('the strength'),
+  'input.angle-unusual': outside('the friction angle'),
+  'input.factor-unusual': outside('the safety factor'),
   'joints.sharp-bend': (v) =>
     `Bend of ${v.deflection}, sharper than 90°: restrained lengths grow quickly and the method is uncertain; consider a block or a different layout.`,
 };
-
-const capital = (t: string) => t.charAt(0).toUpperCase() + t.slice(1);
 
 /** Built dimensions read as a crew builds them (rounded up); other values to drawing precision. */
 const BUILT = new Set(['faceWidth', 'faceHeight', 'trenchWidth', 'bottomDepth', 'centreDepth', 'cover', 'minCover']);

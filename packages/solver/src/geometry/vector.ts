@@ -6,7 +6,8 @@ export const add = (a: Vec3, b: Vec3): Vec3 => [a[0] + b[0], a[1] + b[1], a[2] +
 export const sub = (a: Vec3, b: Vec3): Vec3 => [a[0] - b[0], a[1] - b[1], a[2] - b[2]];
 export const scale = (a: Vec3, k: number): Vec3 => [a[0] * k, a[1] * k, a[2] * k];
 export const dot = (a: Vec3, b: Vec3): number => a[0] * b[0] + a[1] * b[1] + a[2] * b[2];
-// Math.sqrt of the squares: Math.hypot is several times slower in V8 and no overflow is possible here.
+// Math.sqrt of the squares: Math.hypot is several times slower in V8. The project's hard limits
+// (model/limits.ts) keep every coordinate, diameter and force far below where a square overflows.
 export const norm = (a: Vec3): number => Math.sqrt(a[0] * a[0] + a[1] * a[1] + a[2] * a[2]);
 export const horizontalNorm = (a: Vec3): number => Math.sqrt(a[0] * a[0] + a[1] * a[1]);
 export const horizontal = (a: Vec3): Vec3 => [a[0], a[1], 0];

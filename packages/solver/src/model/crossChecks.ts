@@ -1,6 +1,7 @@
 import type { z } from 'zod';
 import type { Project } from './projectSchema.js';
 import { norm } from '../geometry/vector.js';
+import { pathText, type Problem } from './problems.js';
 
 type Ctx = z.core.$RefinementCtx<Project>;
 
@@ -20,6 +21,80 @@ function uniqueIds(items: readonly { id: string }[], list: string, ctx: Ctx) {
 
 /** Minimum distance between a pipe's two ends, m: below this the pipe has no direction. */
 export const MIN_PIPE_LENGTH = 0.001;
+
+type Add = (path: (string | number)[], message: string) => void;
+
+/** Two pipes leaving a node closer than this in direction lie on top of each other, degrees. */
+export const OVERLAP_ANGLE = 0.5;
+
+/** Nodes standing at one point (within MIN_PIPE_LENGTH) but not joined by a pipe. */
+function coincidentNodes(p: Project, add: Add) {
+  const cell = (v: number) => Math.floor(v / MIN_PIPE_LENGTH);
+  const grid = new Map<string, number[]>();
+  const joined = new Set(p.pipes.map((x) => `${x.from}\u0000${x.to}`));
+  p.nodes.forEach((n, i) => {
+    const [cx, cy, cz] = [cell(n.x), cell(n.y), cell(n.elevation)];
+    for (let dx = -1; dx <= 1; dx++)
+      for (let dy = -1; dy <= 1; dy++)
+        for (let dz = -1; dz <= 1; dz++) {
+          for (const j of grid.get(`${cx + dx},${cy + dy},${cz + dz}`) ?? []) {
+            const m = p.nodes[j]!;
+            const near = norm([n.x - m.x, n.y - m.y, n.elevation - m.elevation]) < MIN_PIPE_LENGTH;
+            if (near && !joined.has(`${n.id}\u0000${m.id}`) && !joined.has(`${m.id}\u0000${n.id}`)) {
+              add(
+                ['nodes', i],
+                `stands at the same point as nodes[${j}] ("${m.id}") but is not joined to it: merge the two nodes or move one`,
+              );
+            }
+          }
+        }
+    const key = `${cx},${cy},${cz}`;
+    grid.set(key, [...(grid.get(key) ?? []), i]);
+  });
+}
+
+/** A second pipe between the same two nodes, and two pipes leaving a node along the same line. */
+function overlappingPipes(p: Project, add: Add) {
+  const nodes = new Map(p.nodes.map((n) => [n.id, n]));
+  const pairs = new Map<string, number>();
+  const leaving = new Map<string, { pipe: number; dir: [number, number, number] }[]>();
+  p.pipes.forEach((pipe, i) => {
+    const key = [pipe.from, pipe.to].sort().join('\u0000');
+    const first = pairs.get(key);
+    if (first !== undefined) {
+      add(
+        ['pipes', i],
+        `joins the same two nodes as pipes[${first}] ("${p.pipes[first]!.id}"): one pipe between two nodes`,
+      );
+      return;
+    }
+    pairs.set(key, i);
+    const a = nodes.get(pipe.from);
+    const b = nodes.get(pipe.to);
+    if (!a || !b || pipe.from === pipe.to) return;
+    const d: [number, number, number] = [b.x - a.x, b.y - a.y, b.elevation - a.elevation];
+    const len = norm(d);
+    if (len < MIN_PIPE_LENGTH) return;
+    const u: [number, number, number] = [d[0] / len, d[1] / len, d[2] / len];
+    for (const [id, dir] of [
+      [a.id, u],
+      [b.id, [-u[0], -u[1], -u[2]] as [number, number, number]],
+    ] as const) {
+      const list = leaving.get(id) ?? [];
+      for (const other of list) {
+        const cos = other.dir[0] * dir[0] + other.dir[1] * dir[1] + other.dir[2] * dir[2];
+        if (cos > Math.cos((OVERLAP_ANGLE * Math.PI) / 180)) {
+          add(
+            ['pipes', i],
+            `leaves node "${id}" along the same line as pipes[${other.pipe}] ("${p.pipes[other.pipe]!.id}"): the two lie on top of each other (is the route folded back on itself?)`,
+          );
+        }
+      }
+      list.push({ pipe: i, dir });
+      leaving.set(id, list);
+    }
+  });
+}
 
 /** Checks that span several fields: unique ids, references that resolve, sane pipes. */
 export function crossCheck(p: Project, ctx: Ctx): void {
@@ -82,4 +157,19 @@ export function crossCheck(p: Project, ctx: Ctx): void {
       });
     }
   });
+  const add: Add = (path, message) => ctx.addIssue({ code: 'custom', path, message });
+  coincidentNodes(p, add);
+  overlappingPipes(p, add);
+}
+
+/**
+ * The geometric checks alone (coincident nodes, overlapping pipes), without the rest of the schema:
+ * cheap enough for an editor to run on every edit of a document that is otherwise valid.
+ */
+export function geometryProblems(p: Project): Problem[] {
+  const out: Problem[] = [];
+  const add: Add = (path, message) => out.push({ path: pathText(path), message });
+  coincidentNodes(p, add);
+  overlappingPipes(p, add);
+  return out;
 }

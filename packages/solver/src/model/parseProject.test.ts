@@ -39,7 +39,7 @@ describe('reading a project file', () => {
   it('names the path of a bad value and what was expected', () => {
     const d = good();
     d.pipes[0]!.outsideDiameter = -1;
-    expect(problems(d)).toContain('pipes[0].outsideDiameter: must be greater than 0');
+    expect(problems(d)).toContain('pipes[0].outsideDiameter: must be at least 0.01 m');
     const e = good() as Record<string, unknown>;
     (e.nodes as Record<string, unknown>[])[1]!.x = 'east';
     expect(problems(e)).toContain('nodes[1].x: expected a number, got the text "east"');

@@ -1,13 +1,17 @@
 import { projectSchema } from './project.js';
 import type { Project } from './projectSchema.js';
 import { plainErrors, problemsFromIssues, type Problem } from './problems.js';
+import { tinyNumberProblems } from './tinyNumbers.js';
 
 export type ParseResult = { ok: true; project: Project } | { ok: false; problems: Problem[] };
 
 /** Validates a decoded JSON value as a project file; never throws. */
 export function parseProject(data: unknown): ParseResult {
   const result = projectSchema.safeParse(data, { error: plainErrors });
-  if (result.success) return { ok: true, project: result.data };
+  if (result.success) {
+    const tiny = tinyNumberProblems(result.data);
+    return tiny.length ? { ok: false, problems: tiny } : { ok: true, project: result.data };
+  }
   return { ok: false, problems: problemsFromIssues(result.error.issues) };
 }
 

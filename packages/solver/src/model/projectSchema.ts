@@ -1,4 +1,7 @@
 import { z } from 'zod';
+import { REGISTER } from '../provenance/register.js';
+import type { Dimension } from '../units/conversions.js';
+import { LIMITS, type Limit, type LimitId } from './limits.js';
 
 /**
  * The project file (shared design: project-format.md, v1). Stored quantities are SI base units;
@@ -7,9 +10,36 @@ import { z } from 'zod';
 
 const id = z.string().min(1, { error: 'must be a non-empty id' }).max(64, { error: 'must be at most 64 characters' });
 const finite = () => z.number().finite();
-const positive = () => finite().gt(0, { error: 'must be greater than 0' });
-const nonNegative = () => finite().gte(0, { error: 'must be 0 or more' });
-const safetyFactor = () => finite().gte(1, { error: 'must be 1 or more' }).lte(10, { error: 'must be at most 10' });
+
+const SI_UNIT: Partial<Record<Dimension, string>> = {
+  pressure: 'Pa',
+  stress: 'Pa',
+  elevation: 'm',
+  length: 'm',
+  diameter: 'm',
+  flow: 'm³/s',
+  density: 'kg/m³',
+  unitWeight: 'N/m³',
+  angle: '°',
+  stressGradient: 'Pa/m',
+  forcePerLength: 'N/m',
+};
+
+/** A number within its hard plausibility range (model/limits.ts); the message gives the bound in SI. */
+function limited(id: LimitId) {
+  const l: Limit = LIMITS[id];
+  const unit = SI_UNIT[l.kind];
+  const v = (x: number) => `${x}${unit ? (unit === '°' ? '°' : ` ${unit}`) : ''}`;
+  let n = finite();
+  n = l.hard.exclusiveMin
+    ? n.gt(l.hard.min, { error: `must be more than ${v(l.hard.min)}` })
+    : n.gte(l.hard.min, { error: `must be at least ${v(l.hard.min)}` });
+  if (Number.isFinite(l.hard.max)) n = n.lte(l.hard.max, { error: `must be at most ${v(l.hard.max)}` });
+  return n;
+}
+/** Default safety factor on bearing, uplift and restrained length (register: design.safety-factor). */
+const SF = REGISTER['design.safety-factor'].value;
+const safetyFactor = () => limited('safetyFactor');
 
 export const MATERIALS = ['ductile-iron', 'pvc', 'hdpe', 'steel', 'other'] as const;
 export const END_CONDITIONS = ['cap', 'tie-in'] as const;
@@ -18,42 +48,33 @@ export const RESTRAINT_METHODS = ['block', 'joints'] as const;
 export const ENCASEMENTS = ['none', 'polyethylene'] as const;
 
 export const waterSchema = z.strictObject({
-  /** kg/m³; 998.2 is water at 20 °C (Tanaka et al. 2001, Metrologia 38:301) */
-  density: positive().default(998.2),
+  /** kg/m³; water at 20 °C (register: water.density) */
+  density: limited('density').default(REGISTER['water.density'].value),
 });
 
 export const designSchema = z.strictObject({
   thrustArea: z.enum(['outside', 'inside']).default('outside'),
-  bearingSafetyFactor: safetyFactor().default(1.5),
-  upliftSafetyFactor: safetyFactor().default(1.5),
-  restraintSafetyFactor: safetyFactor().default(1.5),
+  bearingSafetyFactor: safetyFactor().default(SF),
+  upliftSafetyFactor: safetyFactor().default(SF),
+  restraintSafetyFactor: safetyFactor().default(SF),
   /** N/m³; 23,600 ≈ 150 lb/ft³ normal-weight concrete (common practice); at least 15 kN/m³ so that it sinks */
-  concreteUnitWeight: finite()
-    .gte(15000, { error: 'must be at least 15,000 N/m³ (concrete heavier than water)' })
-    .lte(40000, { error: 'must be at most 40,000 N/m³' })
-    .default(23600),
+  concreteUnitWeight: limited('concreteUnitWeight').default(REGISTER['concrete.unit-weight'].value),
   /** m, or null when groundwater lies below every block */
-  groundwaterElevation: finite().nullable().default(null),
+  groundwaterElevation: limited('elevation').nullable().default(null),
   /** m, thickness of a bearing block from the fitting to its bearing face (concrete volume estimate) */
-  blockDepth: positive().default(0.6),
+  blockDepth: limited('blockDepth').default(REGISTER['design.block-depth'].value),
   /** m, trench width for the face-width check, or null for OD + 2 × 0.3 m (common practice) */
-  trenchWidth: positive().nullable().default(null),
+  trenchWidth: limited('trenchWidth').nullable().default(null),
   /**
    * m, the construction step built dimensions are rounded up to; the same whatever the display units
    * (50 mm by default; a US office may set 2 in = 0.0508 m)
    */
-  dimensionStep: finite()
-    .gte(0.001, { error: 'must be at least 0.001 m (1 mm)' })
-    .lte(0.3, { error: 'must be at most 0.3 m' })
-    .default(0.05),
+  dimensionStep: limited('dimensionStep').default(REGISTER['design.dimension-step'].value),
   /**
    * m, length of one pipe between joints: restrained joints are counted and drawn from it, the first at
    * the fitting. 6 m is common practice (EN 545 pipes are made 6 m long; 20 ft pipes are 6.1 m).
    */
-  layingLength: finite()
-    .gte(0.5, { error: 'must be at least 0.5 m' })
-    .lte(30, { error: 'must be at most 30 m' })
-    .default(6),
+  layingLength: limited('layingLength').default(6),
 });
 
 export const loadCaseSchema = z.strictObject({
@@ -62,40 +83,37 @@ export const loadCaseSchema = z.strictObject({
   /** what the case stands for; guides the cases panel and the test-pressure helper */
   kind: z.enum(CASE_KINDS).optional(),
   /** Pa, gauge, at datumElevation (or at every node when no datum is given) */
-  pressure: nonNegative(),
+  pressure: limited('pressure'),
   /** m */
-  datumElevation: finite().optional(),
+  datumElevation: limited('elevation').optional(),
   /** multiplies every pipe's flow; 0 = no flow (field test) */
-  flowFactor: finite().default(1),
+  flowFactor: limited('flowFactor').default(1),
 });
 
 export const soilSchema = z.strictObject({
   id,
   label: z.string().max(80).optional(),
   /** Pa, allowable horizontal bearing of undisturbed soil; 0 for muck/peat */
-  bearing: nonNegative(),
+  bearing: limited('bearing'),
   /** N/m³; at least that of water, so that a submerged soil still weighs something */
-  unitWeight: finite()
-    .gte(10000, { error: 'must be at least 10,000 N/m³ (a soil heavier than water)' })
-    .lte(30000, { error: 'must be at most 30,000 N/m³' })
-    .default(18000),
+  unitWeight: limited('soilUnitWeight').default(18000),
   /** degrees */
-  frictionAngle: finite().gte(0, { error: 'must be 0 or more' }).lt(60, { error: 'must be less than 60' }).default(30),
+  frictionAngle: limited('frictionAngle').default(30),
   /** Pa */
-  cohesion: nonNegative().default(0),
+  cohesion: limited('cohesion').default(0),
   /** Pa/m, allowable lateral bearing gained per metre of depth to the block centroid (IBC 1806.2 style) */
-  bearingPerDepth: nonNegative().optional(),
+  bearingPerDepth: limited('bearingPerDepth').optional(),
   /** Pa, allowable bearing of the trench bottom for downward thrust; defaults to `bearing` */
-  verticalBearing: nonNegative().optional(),
+  verticalBearing: limited('bearing').optional(),
   /** m, least cover over the pipe for which the bearing value holds */
-  minCover: nonNegative().optional(),
+  minCover: limited('minCover').optional(),
   /** pipe-to-soil friction angle as a fraction of the soil's, f_φ in δ = f_φ·φ (restrained joints) */
   pipeFrictionRatio: finite()
     .gt(0, { error: 'must be greater than 0' })
     .lte(1, { error: 'must be at most 1' })
     .optional(),
   /** pipe-to-soil adhesion as a fraction of the soil's cohesion, f_c in C_p = f_c·C (restrained joints) */
-  pipeAdhesionRatio: finite().gte(0, { error: 'must be 0 or more' }).lte(1, { error: 'must be at most 1' }).optional(),
+  pipeAdhesionRatio: limited('ratio').optional(),
   /** where the values come from, shown beside the soil */
   source: z.string().max(400).optional(),
 });
@@ -103,13 +121,13 @@ export const soilSchema = z.strictObject({
 export const nodeSchema = z.strictObject({
   id,
   /** m, plan east */
-  x: finite(),
+  x: limited('coordinate'),
   /** m, plan north */
-  y: finite(),
+  y: limited('coordinate'),
   /** m, pipe centreline elevation */
-  elevation: finite(),
+  elevation: limited('elevation'),
   /** m, ground surface to top of pipe */
-  cover: nonNegative().default(1.2),
+  cover: limited('cover').default(1.2),
   soil: id.optional(),
   end: z.enum(END_CONDITIONS).default('cap'),
   valve: z.boolean().default(false),
@@ -123,11 +141,11 @@ export const pipeSchema = z.strictObject({
   from: id,
   to: id,
   /** m */
-  outsideDiameter: positive(),
+  outsideDiameter: limited('outsideDiameter'),
   /** m */
-  insideDiameter: positive(),
+  insideDiameter: limited('insideDiameter'),
   /** m³/s, positive from `from` to `to` */
-  flow: finite().default(0),
+  flow: limited('flow').default(0),
   material: z.enum(MATERIALS).default('ductile-iron'),
   /** catalog series id and nominal size the diameters were taken from, if any */
   series: z.string().max(40).optional(),
@@ -142,7 +160,7 @@ export const pipeSchema = z.strictObject({
   /** polyethylene encasement (AWWA C105) lowers pipe–soil friction */
   encasement: z.enum(ENCASEMENTS).optional(),
   /** N/m, pipe self-weight; defaults to the material density times the wall area */
-  weightPerLength: positive().optional(),
+  weightPerLength: limited('weightPerLength').optional(),
   label: z.string().max(80).optional(),
 });
 
@@ -151,7 +169,7 @@ export const projectShape = z.strictObject({
   version: z.literal(1, { error: 'must be 1 (the only version this program reads)' }),
   name: z.string().max(200).default('Untitled main'),
   units: z.enum(['us', 'si']).default('si'),
-  water: waterSchema.default({ density: 998.2 }),
+  water: waterSchema.default({ density: REGISTER['water.density'].value }),
   design: designSchema.default(() => designSchema.parse({})),
   loadCases: z.array(loadCaseSchema).min(1, { error: 'must have at least one load case' }),
   soils: z.array(soilSchema).min(1, { error: 'must have at least one soil' }),

@@ -1,11 +1,9 @@
 import { STANDARD_GRAVITY } from '../units/quantities.js';
 import type { LoadCase } from '../model/projectSchema.js';
+import { REGISTER } from '../provenance/register.js';
 
-/**
- * The lowest gauge pressure water in a pipe can have, Pa: vapour pressure at 20 °C (2.339 kPa, from
- * memory) less one standard atmosphere (101.325 kPa, NIST SP 811). Below it the column separates.
- */
-export const VACUUM_GAUGE_PRESSURE = 2339 - 101325;
+/** The lowest gauge pressure water in a pipe can have, Pa (register: water.vapour-floor). Below it the column separates. */
+export const VACUUM_GAUGE_PRESSURE = REGISTER['water.vapour-floor'].value;
 
 /**
  * Gauge pressure at a point of elevation z for a load case, Pa: the case pressure at its datum

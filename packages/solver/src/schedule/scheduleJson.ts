@@ -115,6 +115,13 @@ function fitting(f: ScheduleFitting) {
  * display units: what `schedule --format json` prints and the app exports.
  */
 export function scheduleJson(s: Schedule, pretty = false): string {
-  const out = { project: s.project, units: s.units, fittings: s.fittings.map(fitting), cautions: s.cautions };
+  const out = {
+    project: s.project,
+    units: s.units,
+    warnings: s.warnings,
+    diagnostics: s.diagnostics.map(diagnosticJson),
+    fittings: s.fittings.map(fitting),
+    cautions: s.cautions,
+  };
   return JSON.stringify(out, null, pretty ? 2 : undefined) + '\n';
 }

@@ -25,7 +25,7 @@ export function scheduleNotes(
       let g = groups.get(d.code);
       if (!g) groups.set(d.code, (g = { texts: new Set(), marks: [], first: d }));
       g.texts.add(words(d));
-      if (!g.marks.includes(r.mark)) g.marks.push(r.mark);
+      if (r.mark && !g.marks.includes(r.mark)) g.marks.push(r.mark);
     }
   }
   const ordered = [...groups.values()].sort((a, b) => bySeverity(a.first, b.first));

@@ -70,6 +70,9 @@ export interface ScheduleFitting {
 export interface Schedule {
   project: string;
   units: 'SI';
+  /** findings about the project's inputs as a whole (unusual values), worded in SI and as data */
+  warnings: string[];
+  diagnostics: Diagnostic[];
   /** by run (main first) and chainage along it: the order a crew walks the line */
   fittings: ScheduleFitting[];
   cautions: readonly string[];
@@ -152,7 +155,14 @@ export function scheduleOf(a: Analysis): Schedule {
   if (!s) {
     const context = wordingContext(a, 'si');
     const words = (d: Diagnostic) => diagnosticText(d, context);
-    s = { project: a.project.name, units: 'SI', fittings: a.fittings.map((f) => row(a, f, words)), cautions: CAUTIONS };
+    s = {
+      project: a.project.name,
+      units: 'SI',
+      warnings: a.diagnostics.map(words),
+      diagnostics: a.diagnostics,
+      fittings: a.fittings.map((f) => row(a, f, words)),
+      cautions: CAUTIONS,
+    };
     schedules.set(a, s);
   }
   return s;

@@ -44,7 +44,12 @@ export function scheduleView(a: Analysis, units: UnitSystem): ScheduleView {
   if (cached) return cached;
   const schedule = scheduleOf(a);
   const context = wordingContext(a, units);
-  const { notes, byMark } = scheduleNotes(schedule.fittings, (d) => diagnosticText(d, context));
+  // Findings of the project as a whole come first, under no mark; a fitting's own follow.
+  const rowsForNotes = [
+    { mark: '', diagnostics: schedule.diagnostics.filter((d) => !a.byNode.has(d.subject.node ?? '')) },
+    ...schedule.fittings,
+  ];
+  const { notes, byMark } = scheduleNotes(rowsForNotes, (d) => diagnosticText(d, context));
   const cellContext: CellContext = {
     project: a.project,
     units,

@@ -11,6 +11,19 @@ describe('numbers as an engineer writes them', () => {
     expect(formatNumber(-0.0004)).toBe('-0.000400');
   });
 
+  it('never throws, whatever the number: tiny, subnormal, huge or not a number', () => {
+    for (const v of [1e-100, 1e-300, 4.8e-305, 5e-324, -1e-200, 1e300, -1.7e308, Infinity, -Infinity, NaN])
+      for (const significant of [3, 4]) expect(() => formatNumber(v, significant)).not.toThrow();
+    // A value far below drawing precision keeps its power of ten: it must not read as zero.
+    expect(formatNumber(1e-100)).toBe('1.00e-100');
+    expect(formatNumber(4.8e-305, 4)).toBe('4.800e-305');
+    expect(formatNumber(Infinity)).toBe('—');
+    expect(formatNumber(NaN)).toBe('—');
+    for (const dim of ['pressure', 'force', 'length', 'volume', 'angle', 'density'] as const)
+      for (const v of [1e-300, 1e300, NaN]) expect(() => formatQuantity(v, dim, 'us')).not.toThrow();
+    expect(formatDimension(1e-300, 'si')).toBe('0.00 m');
+  });
+
   it('writes forces above 10,000 lbf in kip (screens.md) and carries the unit', () => {
     expect(formatQuantity(29_030 * LBF, 'force', 'us').text).toBe('29.0 kip');
     expect(formatQuantity(7_385 * LBF, 'force', 'us').text).toBe('7,385 lbf');

@@ -30,9 +30,16 @@ function groupThousands(fixed: string): string {
   return (negative ? '-' : '') + grouped + frac;
 }
 
-/** Plain number with thousands separators and drawing precision, e.g. 29,030 or 0.765. */
+/** More decimals than this are written in powers of ten (toFixed throws beyond 100; no drawing needs 20). */
+const MAX_FIXED_DECIMALS = 20;
+
+/**
+ * Plain number with thousands separators and drawing precision, e.g. 29,030 or 0.765. Never throws:
+ * a value too small for fixed decimals (1e-100) reads 1.00e-100, never 0, so a unit slip stays visible.
+ */
 export function formatNumber(value: number, significant = 3): string {
   if (!Number.isFinite(value)) return '—';
+  if (decimalsFor(value, significant) > MAX_FIXED_DECIMALS) return value.toPrecision(significant);
   const rounded = roundForDrawing(value, significant);
   const text = groupThousands(rounded.toFixed(decimalsFor(rounded, significant)));
   return /^-0(\.0*)?$/.test(text) ? text.slice(1) : text;

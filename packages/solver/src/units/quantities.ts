@@ -1,3 +1,4 @@
+import { REGISTER } from '../provenance/register.js';
 /**
  * Branded SI lengths and areas where the code most easily mixes them up (diameters and the areas
  * made from them). Everything inside the solver is SI; the constructors are identity functions.
@@ -12,8 +13,8 @@ export type SquareMeters = Brand<number, 'm2'>;
 
 export const meters = (v: number) => v as Meters;
 
-/** Standard acceleration of gravity, m/s², exact (3rd CGPM 1901; NIST SP 330). */
-export const STANDARD_GRAVITY = 9.80665;
+/** Standard acceleration of gravity, m/s², exact (register: gravity.standard). */
+export const STANDARD_GRAVITY = REGISTER['gravity.standard'].value;
 
 /** Area of a circle of diameter d, m². */
 export const circleArea = (d: Meters): SquareMeters => ((Math.PI * d * d) / 4) as SquareMeters;

@@ -1,0 +1,72 @@
+import { describe, it, expect, afterEach } from 'vitest';
+import { render, cleanup } from '@testing-library/react';
+import { readFileSync } from 'node:fs';
+import { resolve } from 'node:path';
+import {
+  analyse,
+  parseProject,
+  pickColumns,
+  scheduleCsv,
+  scheduleTable,
+  scheduleView,
+  TABLE_COLUMNS,
+  type Project,
+  type UnitSystem,
+} from '@mainbrace/solver';
+import { createAppStore } from '../state/store.js';
+import { createActions } from '../state/actions.js';
+import { StoreProvider } from '../state/StoreContext.js';
+import { ScheduleTable } from './ScheduleTable.js';
+import { PrintSheet } from '../print/PrintSheet.js';
+import { DN300 } from '../testFixtures.js';
+
+afterEach(cleanup);
+
+function demo(): Project {
+  const r = parseProject(
+    JSON.parse(readFileSync(resolve(import.meta.dirname, '../../../public/demo/larkspur-rise.json'), 'utf8')),
+  );
+  if (!r.ok) throw new Error('demo does not parse');
+  return r.project;
+}
+
+/** The texts of a rendered table's body rows, cell by cell. */
+const bodyCells = (table: Element) =>
+  [...table.querySelectorAll('tbody tr')].map((tr) => [...tr.querySelectorAll('td')].map((td) => td.textContent ?? ''));
+
+describe('the four schedule outputs agree cell for cell (app table, print, CLI table, CSV)', () => {
+  for (const units of ['si', 'us'] as UnitSystem[]) {
+    it(`on the demo in ${units.toUpperCase()}`, () => {
+      const project = { ...demo(), units };
+      const store = createAppStore(project, DN300);
+      const actions = createActions(store);
+      const view = scheduleView(analyse(project), units);
+      const { container } = render(
+        <StoreProvider store={store} actions={actions}>
+          <ScheduleTable />
+          <PrintSheet onClose={() => {}} />
+        </StoreProvider>,
+      );
+      const [appTable, printTable] = [
+        container.querySelector('[data-testid="schedule-table"]')!,
+        container.querySelector('.sheet-schedule')!,
+      ];
+      for (const table of [appTable, printTable]) {
+        const heads = [...table.querySelectorAll('thead th')].map((th) => th.textContent!.replace(/ [▲▼]$/, ''));
+        const columns = heads.map((h) => view.columns.find((c) => c.heading === h)!);
+        expect(columns.every(Boolean)).toBe(true);
+        const rows = bodyCells(table);
+        expect(rows.length).toBe(view.rows.length);
+        rows.forEach((cells, i) => cells.forEach((text, k) => expect(text).toBe(view.rows[i]!.cells[columns[k]!.id])));
+      }
+      // The CLI table's compact columns and the CSV hold the very same cells.
+      const cli = scheduleTable(view, project.name);
+      const csv = scheduleCsv(view);
+      for (const r of view.rows) {
+        const line = cli.split('\n').find((l) => l.startsWith(`${r.cells.mark} `))!;
+        for (const c of pickColumns(view, TABLE_COLUMNS)) expect(line).toContain(r.cells[c.id]);
+        expect(csv).toContain(r.cells.restraint);
+      }
+    });
+  }
+});

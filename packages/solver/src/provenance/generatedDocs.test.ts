@@ -1,0 +1,28 @@
+import { describe, it, expect } from 'vitest';
+import { readFileSync, writeFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { diagnosticsMarkdown } from '../diagnostics/codeTable.js';
+import { provenanceMarkdown } from './registerTable.js';
+import { limitsMarkdown } from '../model/limitsTable.js';
+
+const docs = (name: string) => fileURLToPath(new URL(`../../../../docs/${name}`, import.meta.url));
+
+/** A generated page matches its source; UPDATE_DOCS=1 rewrites it instead. */
+function current(name: string, text: string) {
+  if (process.env.UPDATE_DOCS) writeFileSync(docs(name), text);
+  expect(readFileSync(docs(name), 'utf8')).toBe(text);
+}
+
+describe('the generated reference pages in docs/', () => {
+  it('docs/diagnostics.md lists every diagnostic code with its meaning and what to do', () => {
+    current('diagnostics.md', diagnosticsMarkdown());
+  });
+
+  it('docs/limits.md lists every plausibility range with its hard and usual bounds', () => {
+    current('limits.md', limitsMarkdown());
+  });
+
+  it('docs/provenance.md lists every register entry with its source and whether it was verified', () => {
+    current('provenance.md', provenanceMarkdown());
+  });
+});

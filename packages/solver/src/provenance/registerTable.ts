@@ -1,0 +1,43 @@
+import type { ProvenanceEntry } from './entry.js';
+import { REGISTER } from './register.js';
+
+const cell = (t: string) => t.replace(/\|/g, '\\|');
+
+function valueText(v: ProvenanceEntry['value']): string {
+  if (v === null) return 'formula';
+  if (typeof v === 'number') return String(v);
+  if (Array.isArray(v)) return v.join(', ');
+  return Object.entries(v)
+    .map(([k, x]) => `${k}: ${x}`)
+    .join('; ');
+}
+
+/** docs/provenance.md: the register of every coefficient, table, formula and default the solver uses. */
+export function provenanceMarkdown(): string {
+  const rows = (Object.entries(REGISTER) as [string, ProvenanceEntry][]).map(
+    ([id, e]) =>
+      `| \`${id}\` | ${cell(e.quantity)} | ${cell(valueText(e.value))} | ${cell(e.unit)} | ${e.kind} | ${cell(e.source)}${e.clause ? `, ${cell(e.clause)}` : ''} | ${e.verified ? 'yes' : '**no**'} |`,
+  );
+  const open = Object.values(REGISTER).filter((e) => !e.verified).length;
+  return [
+    '# Provenance register',
+    '',
+    'Every coefficient, table, formula and default the solver relies on, with where it comes from. The code reads',
+    'its values from `packages/solver/src/provenance/register.ts`, and every result lists the entries it depends on',
+    'that were not read in their source: the calculation record, `explain` and the print say',
+    '“not verified against <document, clause>” beside them.',
+    '',
+    '*verified* means the value was read in the document itself, or in a faithful reproduction of its table named',
+    'in the source. *common practice* is a rule of thumb of the trade; *own rule* a choice of this project;',
+    '*derived* worked out from statics and other entries.',
+    '',
+    `${open} of ${Object.keys(REGISTER).length} entries are not yet verified.`,
+    '',
+    'This page is generated from the register; a test keeps it current (`UPDATE_DOCS=1 corepack pnpm test`).',
+    '',
+    '| id | quantity | value | unit | kind | source | verified |',
+    '|---|---|---|---|---|---|---|',
+    ...rows,
+    '',
+  ].join('\n');
+}
