@@ -1,4 +1,4 @@
-import { PSF, type Project } from '@mainbrace/solver';
+import { findLibrarySoil, librarySoilToProject, type Project } from '@mainbrace/solver';
 
 /** A project with no route: the usual three cases and one soil, ready to draw on. */
 export function blankProject(): Project {
@@ -18,23 +18,15 @@ export function blankProject(): Project {
       blockDepth: 0.6,
       trenchWidth: null,
       dimensionStep: 0.05,
+      layingLength: 6,
     },
     loadCases: [
       { id: 'working', label: 'Working', kind: 'working', pressure: 600e3, datumElevation: 100, flowFactor: 1 },
       { id: 'surge', label: 'Working + surge', kind: 'surge', pressure: 900e3, datumElevation: 100, flowFactor: 1 },
       { id: 'test', label: 'Field test', kind: 'test', pressure: 1000e3, datumElevation: 100, flowFactor: 0 },
     ],
-    soils: [
-      {
-        id: 'sand',
-        label: 'Sand',
-        bearing: 2000 * PSF,
-        unitWeight: 18500,
-        frictionAngle: 32,
-        cohesion: 0,
-        source: 'Safe bearing load table of the PVC literature (sand 2,000 psf)',
-      },
-    ],
+    // The common-practice sand class, as a project soil: a modest bearing until the user gives site data.
+    soils: [{ ...librarySoilToProject(findLibrarySoil('sand-cp')!, 'sand'), label: 'Sand' }],
     defaultSoil: 'sand',
     nodes: [],
     pipes: [],

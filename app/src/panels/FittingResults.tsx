@@ -1,12 +1,15 @@
 import {
   caseLabel,
+  elementName,
   formatDimension,
   horizontalNorm,
+  jointsText,
   legTarget,
   norm,
   notVerifiedText,
   planBearing,
   quantityText,
+  restrainedJointCount,
   REGISTER,
   unverified,
   type FittingAnalysis,
@@ -29,7 +32,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
   return (
     <section className="results" aria-label={`Results for ${f.mark}`} data-testid="fitting-results">
       <h3>
-        <span className="tag">{f.mark}</span> {fittingTitle(f.geometry)}
+        <span className="mark">{f.mark}</span> {fittingTitle(f.geometry)}
       </h3>
       <dl className="facts">
         <dt>Chainage</dt>
@@ -83,7 +86,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
       <ul className="restraint">
         {r.block && (
           <li data-testid="block">
-            Bearing block{' '}
+            <span className="element">{elementName(f.mark, 'block')}</span> Bearing block{' '}
             <strong>
               {formatDimension(r.block.faceWidth, u)} wide × {formatDimension(r.block.faceHeight, u)} high
             </strong>
@@ -95,7 +98,8 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
         )}
         {r.reverseBlock && (
           <li data-testid="reverse-block">
-            Second block on the opposite side (the thrust reverses){' '}
+            <span className="element">{elementName(f.mark, 'reverseBlock')}</span> Second block on the opposite side
+            (the thrust reverses){' '}
             <strong>
               {formatDimension(r.reverseBlock.faceWidth, u)} wide × {formatDimension(r.reverseBlock.faceHeight, u)} high
             </strong>
@@ -104,23 +108,27 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
         )}
         {r.anchor && (
           <li data-testid="anchor">
-            Gravity anchor <strong>{show(r.anchor.concreteVolume, 'volume', u)}</strong> of concrete (a{' '}
+            <span className="element">{elementName(f.mark, 'anchor')}</span> Gravity anchor{' '}
+            <strong>{show(r.anchor.concreteVolume, 'volume', u)}</strong> of concrete (a{' '}
             {formatDimension(r.anchor.side, u)} cube){r.anchor.submerged ? ', submerged weight' : ''}.
           </li>
         )}
         {r.trenchBottom && (
-          <li>
-            Trench-bottom bearing {show(r.trenchBottom.bearingArea, 'area', u)}: pad{' '}
-            {formatDimension(r.trenchBottom.width, u)} across × {formatDimension(r.trenchBottom.length, u)} along the
-            pipe.
+          <li data-testid="pad">
+            <span className="element">{elementName(f.mark, 'trenchBottom')}</span> Trench-bottom bearing{' '}
+            {show(r.trenchBottom.bearingArea, 'area', u)}: pad {formatDimension(r.trenchBottom.width, u)} across ×{' '}
+            {formatDimension(r.trenchBottom.length, u)} along the pipe.
           </li>
         )}
         {r.restrainedLegs.map((l) => {
           const toward = legTarget(analysis, f.node.id, l.pipe);
           return (
             <li key={l.pipe} data-testid="restrained">
-              Restrain joints <strong>{quantityText(l.length, 'restrained', u)}</strong>{' '}
-              {toward ? `toward ${toward}` : 'to the end of the line'}.
+              <span className="element">{elementName(f.mark, 'joints')}</span> Restrain{' '}
+              <strong>{quantityText(l.length, 'restrained', u)}</strong>{' '}
+              {toward ? `toward ${toward}` : 'to the end of the line'}:{' '}
+              {jointsText(restrainedJointCount(l.length, project.design.layingLength))} at{' '}
+              {show(project.design.layingLength, 'length', u)} laying length, the first at the fitting.
             </li>
           );
         })}

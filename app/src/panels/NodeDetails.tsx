@@ -10,7 +10,7 @@ export function NodeDetails({ node, project, pipeCount }: { node: ProjectNode; p
   return (
     <section className="inputs" aria-label={`Node ${node.id}`}>
       <h3>
-        Node <span className="tag">{node.id}</span>
+        Node <span className="node-id">{node.id}</span>
       </h3>
       <div className="field">
         <label htmlFor="node-label">Label</label>

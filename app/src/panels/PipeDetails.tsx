@@ -1,5 +1,10 @@
 import {
+  BEDDINGS,
   CATALOG,
+  DEFAULT_BEDDING,
+  WRAP_WORDS,
+  beddingReference,
+  findBedding,
   findSeries,
   findSize,
   MATERIALS,
@@ -24,6 +29,7 @@ export function PipeDetails({ pipe }: { pipe: Pipe; project: Project }) {
   const series = pipe.series ? findSeries(pipe.series) : undefined;
   const seriesChoices = CATALOG.filter((s) => s.material === pipe.material);
   const length = pipeLength(useAnalysis(), pipe);
+  const bedding = findBedding(pipe.trenchType);
 
   const pickSeries = (id: string) => {
     if (id === CUSTOM) return set({ series: undefined, nominal: undefined });
@@ -55,7 +61,7 @@ export function PipeDetails({ pipe }: { pipe: Pipe; project: Project }) {
   return (
     <section className="inputs" aria-label={`Pipe ${pipe.id}`}>
       <h3>
-        Pipe <span className="tag">{pipe.id}</span>{' '}
+        Pipe <span className="node-id">{pipe.id}</span>{' '}
         <span className="muted">
           {pipe.from} → {pipe.to}, {show(length, 'length', u, 4)}
         </span>
@@ -153,33 +159,38 @@ export function PipeDetails({ pipe }: { pipe: Pipe; project: Project }) {
         onCommit={(flow) => set({ flow })}
         hint="Negative when the water runs the other way; cases multiply it by their flow factor."
       />
-      <div className="field-row">
-        <div className="field">
-          <label htmlFor="pipe-trench">Trench type</label>
-          <select
-            id="pipe-trench"
-            value={pipe.trenchType ?? ''}
-            onChange={(e) => set({ trenchType: e.target.value ? Number(e.target.value) : undefined })}
-          >
-            <option value="">Default (type 3)</option>
-            <option value="1">1 — flat bottom, loose backfill</option>
-            <option value="2">2 — backfill lightly consolidated to centreline</option>
-            <option value="3">3 — bedded in loose soil, backfill to top</option>
-            <option value="4">4 — granular bedding, compacted to top</option>
-            <option value="5">5 — compacted granular to centreline and top</option>
-          </select>
+      <h4>Bedding and wrap</h4>
+      <div className="field">
+        <label htmlFor="pipe-trench">Bedding</label>
+        <select
+          id="pipe-trench"
+          value={pipe.trenchType ?? ''}
+          onChange={(e) => set({ trenchType: e.target.value ? Number(e.target.value) : undefined })}
+        >
+          <option value="">Not stated (taken as condition {DEFAULT_BEDDING})</option>
+          {BEDDINGS.map((b) => (
+            <option key={b.condition} value={b.condition}>
+              {b.short} (condition {b.condition})
+            </option>
+          ))}
+        </select>
+        <div className="field-hint">
+          {bedding.words} Reference: {beddingReference(bedding.condition)}.
         </div>
-        <div className="field">
-          <label htmlFor="pipe-encasement">Encasement</label>
-          <select
-            id="pipe-encasement"
-            value={pipe.encasement ?? 'none'}
-            onChange={(e) => set({ encasement: e.target.value as Pipe['encasement'] })}
-          >
-            <option value="none">None</option>
-            <option value="polyethylene">Polyethylene (AWWA C105)</option>
-          </select>
-        </div>
+      </div>
+      <div className="field">
+        <label htmlFor="pipe-encasement">Wrap</label>
+        <select
+          id="pipe-encasement"
+          value={pipe.encasement ?? 'none'}
+          onChange={(e) => set({ encasement: e.target.value as Pipe['encasement'] })}
+        >
+          {(Object.keys(WRAP_WORDS) as NonNullable<Pipe['encasement']>[]).map((w) => (
+            <option key={w} value={w}>
+              {WRAP_WORDS[w]}
+            </option>
+          ))}
+        </select>
       </div>
     </section>
   );

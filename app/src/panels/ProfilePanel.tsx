@@ -21,7 +21,7 @@ const ticks = (a: number, b: number, step: number) => {
 };
 
 /**
- * The main line in section: ground and pipe to their own vertical scale, fittings tagged; below it the
+ * The main line in section: ground and pipe to their own vertical scale, fittings marked; below it the
  * pressure of every case along the line, where the low points show as peaks. Grades far above the
  * pipe are named rather than drawn, so the pipe is never flattened to a line.
  */
@@ -72,7 +72,7 @@ export function ProfilePanel() {
       <svg
         viewBox={`0 0 ${W} ${H1}`}
         role="img"
-        aria-label="Section of the main line: ground and pipe against chainage, fittings tagged"
+        aria-label="Section of the main line: ground and pipe against chainage, fittings marked"
       >
         {ticks(z0, z1, zStep).map((z) => (
           <g key={`z${z}`}>
@@ -86,14 +86,14 @@ export function ProfilePanel() {
         <path d={line('ground')} className="profile-ground" />
         <path d={line('pipe')} className="profile-pipe" />
         {data.points
-          .filter((p) => p.tag)
+          .filter((p) => p.mark)
           .map((p, i) => (
             <g key={p.node} className="profile-fitting" onClick={() => actions.selectNode(p.node)}>
               <circle cx={sx(p.chainage)} cy={sz(p.pipe)} r="4" />
-              <text x={sx(p.chainage)} y={sz(p.pipe) + (i % 2 ? 16 : -9)} textAnchor="middle" className="profile-tag">
-                {p.tag}
+              <text x={sx(p.chainage)} y={sz(p.pipe) + (i % 2 ? 16 : -9)} textAnchor="middle" className="profile-mark">
+                {p.mark}
               </text>
-              <title>{`${p.tag}: pipe at ${show(p.pipe, 'elevation', u, 4)}, design pressure ${show(analysis.byNode.get(p.node)!.envelope.pressure, 'pressure', u)}`}</title>
+              <title>{`${p.mark}: pipe at ${show(p.pipe, 'elevation', u, 4)}, design pressure ${show(analysis.byNode.get(p.node)!.envelope.pressure, 'pressure', u)}`}</title>
             </g>
           ))}
         <text x={W - M.right + 8} y={M.top + 10} className="profile-label">

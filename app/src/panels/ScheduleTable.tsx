@@ -60,7 +60,11 @@ export function ScheduleTable() {
                 data-testid={`row-${node}`}
               >
                 {columns.map((c) => (
-                  <td key={c.id} className={c.kind === 'text' ? (c.id === 'mark' ? 'tag' : '') : 'num'} data-col={c.id}>
+                  <td
+                    key={c.id}
+                    className={c.kind === 'text' ? (c.id === 'mark' ? 'mark' : '') : 'num'}
+                    data-col={c.id}
+                  >
                     {r.cells[c.id]}
                   </td>
                 ))}

@@ -69,11 +69,11 @@ describe('profileData levels', () => {
     expectClose(grades[1]!.elevation, 92.5 + 102.1555, 1e-4);
   });
 
-  it('tags the fittings on the path and leaves plain points untagged', () => {
+  it('marks the fittings on the path and leaves plain points unmarked', () => {
     const doc = withBranch();
     const a = analyse(doc);
     const { points } = profileData(doc, a);
-    expect(points[0]!.tag).toBeNull(); // a tie-in is not a fitting to restrain
-    expect(points[1]!.tag).toBe(a.byNode.get('n2')!.mark);
+    expect(points[0]!.mark).toBeNull(); // a tie-in is not a fitting to restrain
+    expect(points[1]!.mark).toBe(a.byNode.get('n2')!.mark);
   });
 });

@@ -8,7 +8,7 @@ export interface ProfilePoint {
   pipe: number;
   /** m, ground surface: centreline + OD/2 + cover */
   ground: number;
-  tag: string | null;
+  mark: string | null;
 }
 
 export interface ProfileData {
@@ -52,7 +52,7 @@ export function profileData(project: Project, analysis: Analysis): ProfileData {
       chainage: chain.get(id)!,
       pipe: n.elevation,
       ground: n.elevation + od / 2 + n.cover,
-      tag: analysis.byNode.get(id)?.mark ?? null,
+      mark: analysis.byNode.get(id)?.mark ?? null,
     };
   });
   const grades = project.loadCases

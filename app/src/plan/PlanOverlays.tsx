@@ -1,10 +1,12 @@
 import type { RefObject } from 'react';
-import { FOOT, formatSi, POUND_FORCE, type Material } from '@mainbrace/solver';
+import { FOOT, formatSi, KIND_NAME, POUND_FORCE, type Material } from '@mainbrace/solver';
 import { useApp } from '../state/StoreContext.js';
 import { gridSpacing } from '../state/viewport.js';
 import { gridStep } from './drawGrid.js';
 import { ARROW_PX } from './drawRoute.js';
-import { MATERIAL_DASH, MATERIAL_NAME, PALETTE } from './palette.js';
+import { LINE, MATERIAL_DASH, MATERIAL_NAME, PALETTE } from './palette.js';
+import { FittingGlyph } from './FittingGlyph.js';
+import { LEGEND_KINDS } from './symbols.js';
 import type { Scene } from './planScene.js';
 
 /** A round force below `f` for the arrow legend: 1, 2, 5 × 10ⁿ in kN or lbf. */
@@ -34,6 +36,11 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
   const ref = scene.largestForce > 0 ? roundForce(scene.largestForce, us) : 0;
   const refPx = ref > 0 ? (ARROW_PX * ref) / scene.largestForce : 0;
   const materials = [...new Set(scene.pipes.map((p) => p.material))] as Material[];
+  const present = new Set<string>([
+    ...scene.fittings.map((f) => f.kind),
+    ...scene.plainNodes.filter((n) => n.tieIn).map(() => 'tie-in'),
+  ]);
+  const kinds = LEGEND_KINDS.filter((k) => present.has(k));
   return (
     <>
       <div className="plan-north" aria-label="North is up">
@@ -84,6 +91,15 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
             horizontal thrust {formatSi(ref, 'force', units)}
           </div>
         )}
+        {kinds.length > 0 && (
+          <div className="legend-row legend-glyphs">
+            {kinds.map((k) => (
+              <span key={k} className="legend-glyph">
+                <FittingGlyph kind={k} /> {KIND_NAME[k].toLowerCase()}
+              </span>
+            ))}
+          </div>
+        )}
         <div className="legend-row">
           <span className="legend-swatch legend-block" /> bearing block
         </div>
@@ -91,13 +107,20 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
           <span className="legend-swatch legend-anchor" /> gravity anchor
         </div>
         <div className="legend-row">
-          <span className="legend-swatch legend-restrained" /> restrained joints
-        </div>
-        <div className="legend-row">
-          <svg width="30" height="12" aria-hidden="true">
-            <path d="M15 1 L20 6 L15 11 L10 6 Z" fill={PALETTE.paper} stroke={PALETTE.ink} strokeWidth="1.3" />
+          <svg width="34" height="16" viewBox="0 0 34 16" aria-hidden="true">
+            <line x1="1" y1="11" x2="33" y2="11" stroke={PALETTE.pipe} strokeWidth="3" />
+            <g stroke={PALETTE.restraint} strokeWidth={LINE.joint}>
+              <line x1="4" y1="6.5" x2="4" y2="15.5" />
+              <line x1="17" y1="6.5" x2="17" y2="15.5" />
+              <line x1="30" y1="6.5" x2="30" y2="15.5" />
+            </g>
+            <g stroke={PALETTE.restraint} strokeWidth={LINE.dimension}>
+              <line x1="4" y1="2.5" x2="30" y2="2.5" />
+              <line x1="1.5" y1="5" x2="6.5" y2="0" />
+              <line x1="27.5" y1="5" x2="32.5" y2="0" />
+            </g>
           </svg>
-          tie-in to an existing main
+          restrained joints, with the restrained length
         </div>
         <div className="legend-row">
           <span className="legend-warn" aria-hidden="true">

@@ -9,6 +9,7 @@ import { dragScene, planScene } from './planScene.js';
 import { hitTest, inBox } from './hitTest.js';
 import { drawArrows, drawFittings, drawPipes, drawRestraints, placeTags } from './drawRoute.js';
 import { LabelSpace } from './labelSpace.js';
+import { drawRestrainedZones } from './drawZones.js';
 import { drawGrid } from './drawGrid.js';
 import { drawOverlay } from './drawOverlay.js';
 import { drawStep, type DrawContext } from '../tools/drawTool.js';
@@ -93,6 +94,7 @@ export function PlanView() {
       drawPipes(ctx, viewport, scene);
       const space = new LabelSpace(size.width, size.height);
       const tags = placeTags(ctx, viewport, scene, space);
+      drawRestrainedZones(ctx, viewport, scene, units, space);
       drawArrows(ctx, viewport, scene, units, space);
       drawFittings(ctx, viewport, scene, tags);
     },

@@ -1,6 +1,6 @@
 import { FOOT, type UnitSystem } from '@mainbrace/solver';
 import { gridSpacing, toPlan, toScreen, type Viewport } from '../state/viewport.js';
-import { PALETTE } from './palette.js';
+import { PALETTE, TYPE } from './palette.js';
 
 /** Grid spacing in metres for the view, in round numbers of the display unit (m, or ft). */
 export function gridStep(v: Viewport, units: UnitSystem): number {
@@ -17,7 +17,7 @@ export function drawGrid(ctx: CanvasRenderingContext2D, v: Viewport, width: numb
   ctx.fillStyle = PALETTE.paper;
   ctx.fillRect(0, 0, width, height);
   ctx.lineWidth = 1;
-  ctx.font = '10px system-ui, sans-serif';
+  ctx.font = TYPE.grid;
   ctx.fillStyle = PALETTE.gridLabel;
   const i0 = Math.floor(topLeft.x / step),
     i1 = Math.ceil(bottomRight.x / step);

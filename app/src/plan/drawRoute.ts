@@ -1,13 +1,11 @@
 import { formatSi, type UnitSystem } from '@mainbrace/solver';
 import type { Scene } from './planScene.js';
 import { toScreen, type Viewport } from '../state/viewport.js';
-import { MATERIAL_DASH, PALETTE, pipeWidth } from './palette.js';
+import { LINE, MATERIAL_DASH, PALETTE, TYPE, pipeWidth } from './palette.js';
 import type { LabelSpace } from './labelSpace.js';
 import { symbol } from './fittingSymbol.js';
 
 type Ctx = CanvasRenderingContext2D;
-
-const ARROW_FONT = '600 10.5px system-ui, sans-serif';
 
 /** Longest thrust arrow on the plan, px; every arrow is scaled to the largest force (one scale). */
 export const ARROW_PX = 72;
@@ -35,9 +33,9 @@ function hatch(ctx: Ctx, v: Viewport, pts: readonly { x: number; y: number }[], 
   path(ctx, v, pts);
   ctx.clip();
   ctx.strokeStyle = color;
-  ctx.lineWidth = 0.8;
+  ctx.lineWidth = LINE.hatch;
   ctx.beginPath();
-  for (let k = x0 - (y1 - y0); k < x1; k += 5) {
+  for (let k = x0 - (y1 - y0); k < x1; k += LINE.hatchPitch) {
     ctx.moveTo(k, y1);
     ctx.lineTo(k + (y1 - y0), y0);
   }
@@ -45,23 +43,17 @@ function hatch(ctx: Ctx, v: Viewport, pts: readonly { x: number; y: number }[], 
   ctx.restore();
 }
 
-/** Blocks (hatched), anchors (crossed), trench pads (dashed) and restrained bands, under the pipes. */
+/** Blocks (hatched), anchors (crossed) and trench pads (dashed), under the pipes. */
 export function drawRestraints(ctx: Ctx, v: Viewport, scene: Scene) {
   for (const poly of scene.polygons) {
-    if (poly.kind === 'restrained') {
-      path(ctx, v, poly.points);
-      ctx.fillStyle = PALETTE.restrained;
-      ctx.fill();
-      continue;
-    }
     path(ctx, v, poly.points);
     ctx.fillStyle = PALETTE.blockFill;
     ctx.fill();
     if (poly.kind === 'block') hatch(ctx, v, poly.points, PALETTE.block);
     path(ctx, v, poly.points);
     ctx.setLineDash(poly.kind === 'pad' ? [4, 3] : []);
-    ctx.strokeStyle = poly.kind === 'anchor' ? PALETTE.anchor : PALETTE.block;
-    ctx.lineWidth = poly.kind === 'anchor' ? 1.6 : 1.1;
+    ctx.strokeStyle = poly.kind === 'anchor' ? PALETTE.anchor : poly.kind === 'pad' ? PALETTE.pad : PALETTE.block;
+    ctx.lineWidth = poly.kind === 'anchor' ? LINE.anchor : LINE.block;
     ctx.stroke();
     ctx.setLineDash([]);
     if (poly.kind === 'anchor') {
@@ -119,19 +111,20 @@ export function label(
   x: number,
   y: number,
   color: string = PALETTE.ink,
-  font = '600 11px system-ui, sans-serif',
+  font: string = TYPE.mark,
 ) {
   ctx.font = font;
   ctx.textAlign = 'left';
   ctx.textBaseline = 'middle';
-  ctx.lineWidth = 3;
+  ctx.lineWidth = 4;
+  ctx.lineJoin = 'round';
   ctx.strokeStyle = PALETTE.halo;
   ctx.strokeText(text, x, y);
   ctx.fillStyle = color;
   ctx.fillText(text, x, y);
 }
 
-/** The warning marker beside a tag: a triangle with "!" (never colour alone). */
+/** The warning marker beside a mark: a triangle with "!" (never colour alone). */
 function warningMark(ctx: Ctx, wx: number, ty: number) {
   ctx.beginPath();
   ctx.moveTo(wx, ty - 6);
@@ -144,27 +137,32 @@ function warningMark(ctx: Ctx, wx: number, ty: number) {
   ctx.lineWidth = 1;
   ctx.stroke();
   ctx.fillStyle = PALETTE.ink;
-  ctx.font = 'bold 8px system-ui, sans-serif';
+  ctx.font = TYPE.symbol;
   ctx.textAlign = 'center';
   ctx.fillText('!', wx, ty + 1.5);
 }
 
-const TAG_FONT = '600 11px system-ui, sans-serif';
-
-/** Tags get their room first (above right of the symbol, else the other corners); selected ones always show. */
+/**
+ * Places the mark labels (fittings' and tie-ins'): marks get their room first, above right of the
+ * symbol, else the other corners; selected ones always show. Returns each label's left-middle point.
+ */
 export function placeTags(
   ctx: Ctx,
   v: Viewport,
   scene: Scene,
   space: LabelSpace,
 ): Map<string, { x: number; y: number }> {
-  ctx.font = TAG_FONT;
+  ctx.font = TYPE.mark;
   const out = new Map<string, { x: number; y: number }>();
-  const ordered = [...scene.fittings].sort((a, b) => Number(b.selected) - Number(a.selected));
+  const marked = [
+    ...scene.fittings.map((f) => ({ node: f.node, at: f.at, mark: f.mark, warned: f.warned, selected: f.selected })),
+    ...scene.plainNodes.flatMap((n) => (n.mark ? [{ ...n, node: n.id, mark: n.mark, warned: false }] : [])),
+  ];
+  const ordered = marked.sort((a, b) => Number(b.selected) - Number(a.selected));
   for (const f of ordered) {
     const s = toScreen(v, f.at);
-    const w = ctx.measureText(f.tag).width + (f.warned ? 18 : 0) + 4;
-    const h = 14;
+    const w = ctx.measureText(f.mark).width + (f.warned ? 18 : 0) + 4;
+    const h = 15;
     const spot = space.place([
       { x: s.sx + 8, y: s.sy - 19, w, h },
       { x: s.sx - 8 - w, y: s.sy - 19, w, h },
@@ -177,39 +175,43 @@ export function placeTags(
   return out;
 }
 
-/** Fitting symbols with their placed tags and warning markers; plain nodes and tie-ins. */
+/** The selection ring round a symbol: amber, and thicker than any symbol line. */
+function ring(ctx: Ctx, x: number, y: number) {
+  ctx.beginPath();
+  ctx.arc(x, y, 11, 0, Math.PI * 2);
+  ctx.strokeStyle = PALETTE.selection;
+  ctx.lineWidth = 3;
+  ctx.stroke();
+}
+
+/** Fitting symbols with their placed marks and warning markers; plain nodes and tie-ins (with their marks). */
 export function drawFittings(ctx: Ctx, v: Viewport, scene: Scene, tags: ReadonlyMap<string, { x: number; y: number }>) {
   for (const n of scene.plainNodes) {
     const s = toScreen(v, n.at);
-    ctx.beginPath();
-    // A tie-in is a diamond (it hands its thrust to the existing main); a plain joint a dot.
     if (n.tieIn) {
-      ctx.moveTo(s.sx, s.sy - 5.5);
-      ctx.lineTo(s.sx + 5.5, s.sy);
-      ctx.lineTo(s.sx, s.sy + 5.5);
-      ctx.lineTo(s.sx - 5.5, s.sy);
-      ctx.closePath();
-    } else ctx.arc(s.sx, s.sy, 3, 0, Math.PI * 2);
-    ctx.fillStyle = n.selected ? PALETTE.selection : n.tieIn ? PALETTE.paper : PALETTE.pipe;
-    ctx.fill();
-    ctx.strokeStyle = PALETTE.ink;
-    ctx.lineWidth = 1.2;
-    ctx.stroke();
+      // A tie-in hands its thrust to the existing main: the open diamond of the symbol set.
+      if (n.selected) ring(ctx, s.sx, s.sy);
+      symbol(ctx, { kind: 'tie-in', axis: { x: 1, y: 0 } }, s.sx, s.sy);
+    } else {
+      ctx.beginPath();
+      ctx.arc(s.sx, s.sy, 3, 0, Math.PI * 2);
+      ctx.fillStyle = n.selected ? PALETTE.selection : PALETTE.pipe;
+      ctx.fill();
+      ctx.strokeStyle = PALETTE.ink;
+      ctx.lineWidth = 1.2;
+      ctx.stroke();
+    }
+    const at = n.mark ? tags.get(n.id) : undefined;
+    if (at) label(ctx, n.mark!, at.x, at.y, PALETTE.ink, TYPE.mark);
   }
   for (const f of scene.fittings) {
     const s = toScreen(v, f.at);
-    if (f.selected) {
-      ctx.beginPath();
-      ctx.arc(s.sx, s.sy, 11, 0, Math.PI * 2);
-      ctx.strokeStyle = PALETTE.selection;
-      ctx.lineWidth = 3;
-      ctx.stroke();
-    }
+    if (f.selected) ring(ctx, s.sx, s.sy);
     symbol(ctx, f, s.sx, s.sy);
     const at = tags.get(f.node);
     if (!at) continue;
-    label(ctx, f.tag, at.x, at.y, PALETTE.ink, TAG_FONT);
-    if (f.warned) warningMark(ctx, at.x + ctx.measureText(f.tag).width + 10, at.y);
+    label(ctx, f.mark, at.x, at.y, PALETTE.ink, TYPE.mark);
+    if (f.warned) warningMark(ctx, at.x + ctx.measureText(f.mark).width + 10, at.y);
   }
 }
 
@@ -225,7 +227,7 @@ export function drawArrows(ctx: Ctx, v: Viewport, scene: Scene, units: UnitSyste
       ey = s.sy + uy * length;
     ctx.strokeStyle = PALETTE.thrust;
     ctx.fillStyle = PALETTE.thrust;
-    ctx.lineWidth = 2.2;
+    ctx.lineWidth = LINE.thrust;
     if (length > 0) {
       ctx.beginPath();
       ctx.moveTo(s.sx, s.sy);
@@ -242,7 +244,7 @@ export function drawArrows(ctx: Ctx, v: Viewport, scene: Scene, units: UnitSyste
     let text = formatSi(a.horizontal, 'force', units);
     if (Math.abs(a.vertical) > 0.02 * total)
       text += `  ${a.vertical > 0 ? '↑' : '↓'} ${formatSi(Math.abs(a.vertical), 'force', units)}`;
-    ctx.font = ARROW_FONT;
+    ctx.font = TYPE.force;
     const w = ctx.measureText(text).width + 4;
     const h = 13;
     const spot = space.place([
@@ -250,6 +252,6 @@ export function drawArrows(ctx: Ctx, v: Viewport, scene: Scene, units: UnitSyste
       { x: ux >= 0 ? ex - 3 - w : ex + 3, y: uy >= 0 ? ey + 2 : ey - 2 - h, w, h },
       { x: ex - w / 2, y: uy >= 0 ? ey + 4 : ey - 4 - h, w, h },
     ]);
-    if (spot) label(ctx, text, spot.x + 2, spot.y + h / 2, PALETTE.thrust, ARROW_FONT);
+    if (spot) label(ctx, text, spot.x + 2, spot.y + h / 2, PALETTE.thrust, TYPE.force);
   }
 }

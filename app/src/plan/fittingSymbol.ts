@@ -1,73 +1,49 @@
-import type { SceneFitting } from './planScene.js';
-import { PALETTE } from './palette.js';
+import type { FittingKind } from '@mainbrace/solver';
+import { PALETTE, TYPE } from './palette.js';
+import { GLYPHS } from './symbols.js';
 
-/** A fitting's symbol, oriented along its first pipe: our own small glyph per kind. */
-export function symbol(ctx: CanvasRenderingContext2D, f: SceneFitting, x: number, y: number) {
-  const r = 6;
-  const ax = f.axis.x,
-    ay = -f.axis.y; // screen y is down
-  const l = Math.hypot(ax, ay) || 1;
-  const ux = ax / l,
-    uy = ay / l,
-    nx = -uy,
-    ny = ux;
-  ctx.lineWidth = 1.6;
-  ctx.strokeStyle = PALETTE.ink;
-  ctx.fillStyle = PALETTE.paper;
-  ctx.beginPath();
-  switch (f.kind) {
-    case 'bend':
-      ctx.arc(x, y, r * 0.8, 0, Math.PI * 2);
-      ctx.fill();
-      ctx.stroke();
-      break;
-    case 'reducer':
-    case 'reducing-bend':
-      ctx.moveTo(x + ux * r + nx * r * 0.45, y + uy * r + ny * r * 0.45);
-      ctx.lineTo(x - ux * r + nx * r, y - uy * r + ny * r);
-      ctx.lineTo(x - ux * r - nx * r, y - uy * r - ny * r);
-      ctx.lineTo(x + ux * r - nx * r * 0.45, y + uy * r - ny * r * 0.45);
-      ctx.closePath();
-      ctx.fill();
-      ctx.stroke();
-      if (f.kind === 'reducing-bend') {
-        ctx.beginPath();
-        ctx.arc(x, y, 2, 0, Math.PI * 2);
-        ctx.fillStyle = PALETTE.ink;
-        ctx.fill();
-      }
-      break;
-    case 'tee':
-    case 'wye':
-    case 'cross':
-      ctx.rect(x - r, y - r, 2 * r, 2 * r);
-      ctx.fill();
-      ctx.stroke();
-      ctx.beginPath();
-      ctx.fillStyle = PALETTE.ink;
-      ctx.font = 'bold 9px system-ui, sans-serif';
-      ctx.textAlign = 'center';
-      ctx.textBaseline = 'middle';
-      ctx.fillText(f.kind === 'tee' ? 'T' : f.kind === 'wye' ? 'Y' : '+', x, y + 0.5);
-      break;
-    case 'dead-end':
-      ctx.lineWidth = 3.2;
-      ctx.moveTo(x + nx * r * 1.2, y + ny * r * 1.2);
-      ctx.lineTo(x - nx * r * 1.2, y - ny * r * 1.2);
-      ctx.stroke();
-      break;
-    case 'valve':
-      ctx.moveTo(x - ux * r + nx * r * 0.8, y - uy * r + ny * r * 0.8);
-      ctx.lineTo(x + ux * r - nx * r * 0.8, y + uy * r - ny * r * 0.8);
-      ctx.lineTo(x + ux * r + nx * r * 0.8, y + uy * r + ny * r * 0.8);
-      ctx.lineTo(x - ux * r - nx * r * 0.8, y - uy * r - ny * r * 0.8);
-      ctx.closePath();
-      ctx.fillStyle = PALETTE.ink;
-      ctx.fill();
-      break;
-    default:
-      ctx.arc(x, y, 3, 0, Math.PI * 2);
-      ctx.fill();
-      ctx.stroke();
+const paths = new Map<string, Path2D>();
+const path2d = (d: string) => {
+  let p = paths.get(d);
+  if (!p) paths.set(d, (p = new Path2D(d)));
+  return p;
+};
+
+/** A fitting's symbol at (x, y) px, turned to its first pipe's plan direction (`axis`, y north). */
+export function symbol(
+  ctx: CanvasRenderingContext2D,
+  f: { kind: FittingKind; axis: { x: number; y: number } },
+  x: number,
+  y: number,
+) {
+  const g = GLYPHS[f.kind];
+  ctx.save();
+  ctx.translate(x, y);
+  if (g.turns) ctx.rotate(Math.atan2(-f.axis.y, f.axis.x)); // screen y is down
+  const p = path2d(g.d);
+  if (g.fill !== 'none') {
+    ctx.fillStyle = g.fill === 'ink' ? PALETTE.ink : PALETTE.paper;
+    ctx.fill(p);
   }
+  if (g.stroke > 0) {
+    ctx.lineWidth = g.stroke;
+    ctx.strokeStyle = PALETTE.ink;
+    ctx.lineCap = 'butt';
+    ctx.stroke(p);
+  }
+  if (g.dot) {
+    ctx.beginPath();
+    ctx.arc(0, 0, g.dot, 0, Math.PI * 2);
+    ctx.fillStyle = PALETTE.ink;
+    ctx.fill();
+  }
+  if (g.letter) {
+    if (g.turns) ctx.rotate(-Math.atan2(-f.axis.y, f.axis.x)); // letters stay upright
+    ctx.fillStyle = PALETTE.ink;
+    ctx.font = TYPE.symbol;
+    ctx.textAlign = 'center';
+    ctx.textBaseline = 'middle';
+    ctx.fillText(g.letter, 0, 0.5);
+  }
+  ctx.restore();
 }

@@ -88,6 +88,58 @@ describe('planScene bearing blocks', () => {
   });
 });
 
+/** The 90° bend held by restrained joints instead of a block, at a laying length of `laying` m. */
+function jointedBend(laying: number) {
+  const doc = bend('tie-in');
+  return {
+    ...doc,
+    design: { ...doc.design, layingLength: laying },
+    nodes: doc.nodes.map((n) => (n.id === 'n2' ? { ...n, restraint: 'joints' as const } : n)),
+  };
+}
+
+describe('planScene restrained zones', () => {
+  it('gives each restrained leg a zone with a joint every laying length from the fitting, ⌈L/ℓ⌉ of them', () => {
+    for (const laying of [6, 5.5, 2]) {
+      const doc = jointedBend(laying);
+      const f = analyse(doc).byNode.get('n2')!;
+      const scene = planScene(doc, analyse(doc), ENVELOPE, EMPTY_SELECTION, null);
+      expect(scene.zones.map((z) => z.pipe).sort()).toEqual(f.restraint.restrainedLegs.map((l) => l.pipe).sort());
+      for (const z of scene.zones) {
+        const L = f.restraint.restrainedLegs.find((l) => l.pipe === z.pipe)!.length;
+        expect(L).toBeGreaterThan(0);
+        expect(L).toBeLessThan(20); // within the shorter pipe, so every joint is drawn
+        // Hand count: joints at 0, ℓ, 2ℓ … closer to the fitting than L.
+        const expected: number[] = [];
+        for (let d = 0; d < L; d += laying) expected.push(d);
+        expect(z.joints).toBe(expected.length);
+        z.jointsAt.forEach((d, i) => expectClose(d, expected[i]!, 1e-9));
+        expectClose(z.planLength, L, 1e-9); // a level pipe: plan length is pipe length
+        expect(z.at).toEqual({ x: 0, y: 0 });
+      }
+    }
+  });
+
+  it('stands each dimension line outside the bend, away from the other pipe', () => {
+    const doc = jointedBend(6);
+    const zones = planScene(doc, analyse(doc), ENVELOPE, EMPTY_SELECTION, null).zones;
+    const west = zones.find((z) => z.pipe === 'p1')!; // toward n1 at (−20, 0)
+    const north = zones.find((z) => z.pipe === 'p2')!; // toward n3 at (0, 30)
+    expectClose(west.direction.x, -1, 1e-12);
+    expectClose(north.direction.y, 1, 1e-12);
+    // Left of west is south, left of north is west: outside the bend is south for one, east for the other.
+    expect(west.side).toBe(1);
+    expect(north.side).toBe(-1);
+  });
+
+  it('draws no bands: zones replace them, and blocks, anchors and pads stay polygons', () => {
+    const doc = jointedBend(6);
+    const scene = planScene(doc, analyse(doc), ENVELOPE, EMPTY_SELECTION, null);
+    expect(scene.polygons.filter((p) => p.node === 'n2')).toEqual([]);
+    expect(scene.zones.length).toBe(2);
+  });
+});
+
 describe('planScene while nodes are dragged', () => {
   it('draws a moved node where it is now, with no arrow and no block until the drop', () => {
     const doc = bend('cap');
@@ -116,6 +168,16 @@ describe('planScene while nodes are dragged', () => {
     expect(scene.plainNodes.map((n) => [n.id, n.tieIn])).toEqual([
       ['n1', true],
       ['n3', true],
+    ]);
+  });
+
+  it('labels the bend and both tie-ins with their marks along the run: A1, A2, A3 (docs/project-format.md, Marks)', () => {
+    const doc = bend('tie-in');
+    const scene = planScene(doc, analyse(doc), ENVELOPE, EMPTY_SELECTION, null);
+    expect(scene.fittings.map((f) => [f.node, f.mark])).toEqual([['n2', 'A2']]);
+    expect(scene.plainNodes.map((n) => [n.id, n.mark])).toEqual([
+      ['n1', 'A1'],
+      ['n3', 'A3'],
     ]);
   });
 });

@@ -1,6 +1,9 @@
 import {
   horizontalNorm,
   norm,
+  restrainedJointCount,
+  restrainedJointPositions,
+  type Leg,
   type Analysis,
   type FittingKind,
   type Material,
@@ -21,7 +24,8 @@ export interface ScenePipe {
 
 export interface SceneFitting {
   node: string;
-  tag: string;
+  /** run letter and number along the run: A1, A2 … B1 */
+  mark: string;
   kind: FittingKind;
   at: PlanPoint;
   /** plan direction of the first pipe, for orienting the symbol */
@@ -41,11 +45,34 @@ export interface SceneArrow {
   vertical: number;
 }
 
-/** A plan polygon in metres: bearing blocks, anchors, trench pads and restrained bands. */
+/** A plan polygon in metres: bearing blocks, anchors and trench pads. */
 export interface ScenePolygon {
   node: string;
-  kind: 'block' | 'anchor' | 'pad' | 'restrained';
+  kind: 'block' | 'anchor' | 'pad';
   points: PlanPoint[];
+}
+
+/**
+ * A restrained zone: the leg of a fitting whose joints must be restrained, drawn as the pipe with a
+ * tick at every restrained joint and a dimension line giving the length. Plan metres.
+ */
+export interface SceneZone {
+  node: string;
+  pipe: string;
+  /** the fitting, where the zone starts */
+  at: PlanPoint;
+  /** unit plan vector along the leg, away from the fitting */
+  direction: PlanPoint;
+  /** m on plan drawn: the restrained length along the pipe, held to the pipe's end, projected on plan */
+  planLength: number;
+  /** m along the pipe, as scheduled (may run past the next fitting) */
+  length: number;
+  /** joints to restrain at the laying length, the fitting's own first */
+  joints: number;
+  /** m on plan from the fitting of each restrained joint on this pipe */
+  jointsAt: number[];
+  /** which side of the pipe the dimension line stands: +1 left of `direction`, −1 right */
+  side: 1 | -1;
 }
 
 export interface Scene {
@@ -53,10 +80,11 @@ export interface Scene {
   fittings: SceneFitting[];
   arrows: SceneArrow[];
   polygons: ScenePolygon[];
+  zones: SceneZone[];
   /** N, the largest arrow force, for the one arrow scale of the plan */
   largestForce: number;
-  /** plan positions of free nodes and tie-ins (no fitting), so they can be picked */
-  plainNodes: { id: string; at: PlanPoint; tieIn: boolean; selected: boolean }[];
+  /** plan positions of free nodes and tie-ins (no fitting), so they can be picked; a tie-in has a mark */
+  plainNodes: { id: string; at: PlanPoint; tieIn: boolean; mark: string | null; selected: boolean }[];
 }
 
 const plan = (v: Vec3): PlanPoint => ({ x: v[0], y: v[1] });
@@ -74,6 +102,41 @@ function strip(p: PlanPoint, q: PlanPoint, width: number): PlanPoint[] {
     { x: q.x - nx, y: q.y - ny },
     { x: p.x - nx, y: p.y - ny },
   ];
+}
+
+/**
+ * The zone of one restrained leg. Its dimension line stands on the side away from the fitting's other
+ * pipes (outside a bend), so that two legs' lines do not cross; a lone leg takes its left.
+ */
+function restrainedZone(
+  node: string,
+  at: PlanPoint,
+  leg: Leg,
+  length: number,
+  legs: readonly Leg[],
+  layingLength: number,
+): SceneZone | null {
+  const flat = Math.hypot(leg.direction[0], leg.direction[1]);
+  if (flat < 1e-9) return null; // a vertical pipe has no length on plan
+  const direction = { x: leg.direction[0] / flat, y: leg.direction[1] / flat };
+  const planLength = Math.min(length, leg.length) * flat;
+  const left = { x: -direction.y, y: direction.x };
+  const others = legs
+    .filter((o) => o !== leg)
+    .reduce((s, o) => s + o.direction[0] * left.x + o.direction[1] * left.y, 0);
+  return {
+    node,
+    pipe: leg.pipe.id,
+    at,
+    direction,
+    planLength,
+    length,
+    joints: restrainedJointCount(length, layingLength),
+    jointsAt: restrainedJointPositions(length, layingLength)
+      .map((d) => d * flat)
+      .filter((d) => d <= planLength + 1e-9),
+    side: others > 1e-9 ? -1 : 1,
+  };
 }
 
 /** The thrust the plan shows at a fitting for the chosen view: one case's total, or the governing one. */
@@ -109,6 +172,7 @@ export function planScene(
   const fittings: SceneFitting[] = [];
   const arrows: SceneArrow[] = [];
   const polygons: ScenePolygon[] = [];
+  const zones: SceneZone[] = [];
   let largestForce = 0;
   const withFitting = new Set<string>();
   for (const f of analysis?.fittings ?? []) {
@@ -119,7 +183,7 @@ export function planScene(
     const axis = f.legs[0] ? plan(f.legs[0].direction) : { x: 1, y: 0 };
     fittings.push({
       node: id,
-      tag: f.mark,
+      mark: f.mark,
       kind: f.geometry.kind,
       at,
       axis,
@@ -176,21 +240,21 @@ export function planScene(
     }
     for (const leg of r.restrainedLegs) {
       const l = f.legs.find((x) => x.pipe.id === leg.pipe);
-      if (!l) continue;
-      const d = plan(l.direction);
-      const planLength = Math.min(leg.length, l.length) * Math.hypot(d.x, d.y);
-      const dir = { x: d.x / (Math.hypot(d.x, d.y) || 1), y: d.y / (Math.hypot(d.x, d.y) || 1) };
-      polygons.push({
-        node: id,
-        kind: 'restrained',
-        points: strip(at, { x: at.x + dir.x * planLength, y: at.y + dir.y * planLength }, l.pipe.outsideDiameter * 3),
-      });
+      const z = l && restrainedZone(id, at, l, leg.length, f.legs, project.design.layingLength);
+      if (z) zones.push(z);
     }
   }
   const plainNodes = project.nodes
     .filter((n) => !withFitting.has(n.id) && !hidden?.has(n.id))
-    .map((n) => ({ id: n.id, at: where.get(n.id)!, tieIn: n.end === 'tie-in', selected: selection.nodes.has(n.id) }));
-  return { pipes, fittings, arrows, polygons, largestForce, plainNodes };
+    .map((n) => ({
+      id: n.id,
+      at: where.get(n.id)!,
+      tieIn: n.end === 'tie-in',
+      // A tie-in is numbered along its run (restrained legs run "toward A1"), so the plan shows its mark.
+      mark: analysis?.marks.get(n.id) ?? null,
+      selected: selection.nodes.has(n.id),
+    }));
+  return { pipes, fittings, arrows, polygons, zones, largestForce, plainNodes };
 }
 
 /**
@@ -212,6 +276,7 @@ export function dragScene(
     ...scene,
     arrows: [],
     polygons: [],
+    zones: [],
     largestForce: 0,
     fittings: scene.fittings.filter((f) => moving(f.node)),
     plainNodes: scene.plainNodes.filter((n) => moving(n.id)),

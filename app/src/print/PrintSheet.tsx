@@ -157,7 +157,7 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
                   className={r.fitting.diagnostics[0]?.severity === 'error' ? 'not-adequate' : ''}
                 >
                   {columns.map((c) => (
-                    <td key={c.id} className={c.kind === 'text' ? (c.id === 'mark' ? 'tag' : '') : 'num'}>
+                    <td key={c.id} className={c.kind === 'text' ? (c.id === 'mark' ? 'mark' : '') : 'num'}>
                       {r.cells[c.id]}
                     </td>
                   ))}

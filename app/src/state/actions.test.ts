@@ -50,6 +50,20 @@ describe('document edits and history', () => {
     expect(savedDocument(store.getState())).toBe(savedDocument(store.getState()));
   });
 
+  it('sets bedding and wrap on every pipe as one undo step, and makes none when every pipe has them already', () => {
+    const { store, actions, undoSteps, doc } = app();
+    actions.setBeddingEverywhere({ trenchType: 4, encasement: 'polyethylene' });
+    expect(store.getState().project.pipes.map((p) => [p.trenchType, p.encasement])).toEqual([
+      [4, 'polyethylene'],
+      [4, 'polyethylene'],
+    ]);
+    expect(undoSteps()).toBe(1);
+    actions.setBeddingEverywhere({ trenchType: 4 });
+    expect(undoSteps()).toBe(1);
+    actions.undo();
+    expect(store.getState().project).toBe(doc);
+  });
+
   it('leaves no undo step for view, tool, selection, snapping or drawer changes', () => {
     const { actions, undoSteps } = app();
     actions.setViewport({ scale: 7, left: -3, top: 40 });

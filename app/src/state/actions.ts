@@ -94,6 +94,13 @@ export function createActions(store: AppStore) {
       edit((p) => updateNode(p, id, patch), 'label' in patch ? `node-label-${id}` : undefined),
     updatePipe: (id: string, patch: Partial<Pipe>) =>
       edit((p) => updatePipe(p, id, patch), 'label' in patch ? `pipe-label-${id}` : undefined),
+    /** Bedding and wrap for every pipe at once: one undo step. */
+    setBeddingEverywhere: (patch: Pick<Partial<Pipe>, 'trenchType' | 'encasement'>) =>
+      edit((p) =>
+        p.pipes.every((x) => (Object.keys(patch) as (keyof typeof patch)[]).every((k) => x[k] === patch[k]))
+          ? p
+          : { ...p, pipes: p.pipes.map((x) => ({ ...x, ...patch })) },
+      ),
     renameProject: (name: string) => edit((p) => ({ ...p, name }), 'project-name'),
     /** Display units are a view setting: no undo step, no change to any result. */
     setUnits: (units: Project['units']) => set({ units }),

@@ -27,13 +27,37 @@ export {
 export { analyse, analyseProject, calculationRecord, type Analysis, type FittingAnalysis } from './analysis/analyse.js';
 export type { CalcStep, RecordValue } from './analysis/calcRecord.js';
 export { nodeSoil, type Restraint } from './restraint/sizeRestraint.js';
-export { SOIL_LIBRARY, findLibrarySoil, type LibrarySoil } from './restraint/soilLibrary.js';
+export {
+  SOIL_LIBRARY,
+  SOIL_KINDS,
+  ORDERING_DEPTH,
+  findLibrarySoil,
+  librarySoilToProject,
+  orderingBearing,
+  type LibrarySoil,
+  type SoilKind,
+  type SoilTable,
+} from './restraint/soilLibrary.js';
 export { rankinePassiveCoefficient, passiveResistance } from './restraint/passiveResistance.js';
 export { scheduleOf, type Schedule, type ScheduleFitting } from './schedule/scheduleRows.js';
 export { scheduleCsv } from './schedule/scheduleCsv.js';
 export { scheduleTable } from './schedule/scheduleTable.js';
 export { scheduleJson, diagnosticJson, JSON_DECIMALS } from './schedule/scheduleJson.js';
-export { restraintSummary, blockText, restrainedText } from './schedule/restraintText.js';
+export {
+  restraintSummary,
+  blockText,
+  restrainedText,
+  restrainedLegText,
+  jointsText,
+} from './schedule/restraintText.js';
+export { restrainedJointCount, restrainedJointPositions } from './schedule/restrainedJoints.js';
+export {
+  restraintElements,
+  elementName,
+  ELEMENT_WORD,
+  type RestraintElement,
+  type RestraintElementKind,
+} from './schedule/restraintElements.js';
 export { SCHEDULE_COLUMNS, TABLE_COLUMNS, APP_COLUMNS, type ScheduleColumn } from './schedule/scheduleColumns.js';
 export {
   scheduleView,
@@ -63,5 +87,13 @@ export { notVerifiedText, type ProvenanceEntry, type SourceKind } from './proven
 export { CAUTIONS, SHORT_CAUTION } from './schedule/cautions.js';
 export { restraintConcrete } from './schedule/concrete.js';
 export * from './catalog/catalog.js';
+export {
+  BEDDINGS,
+  DEFAULT_BEDDING,
+  WRAP_WORDS,
+  beddingReference,
+  findBedding,
+  type Bedding,
+} from './catalog/layingConditions.js';
 export type { PipeSeries, PipeSize } from './catalog/pipeSeries.js';
 export { proposeTestPressure, type TestProposal, type TestRule, type TestCriterion } from './pressure/testPressure.js';

@@ -108,6 +108,15 @@ describe('the command line', () => {
     expect(e.status).toBe(0);
     expect(e.stdout).toContain('Required bearing area');
     expect(e.stdout).toContain('A = SF · T_h / σ_b');
+    // The restraint elements are listed first, each named by the fitting's mark.
+    expect(e.stdout).toMatch(/^Restraint\n {2}A4 block {2}1\.00 m w × 1\.00 m h × 0\.60 m t, 0\.60 m³$/m);
+    const valve = run('explain', demo, 'A10');
+    expect(valve.stdout).toMatch(/^ {2}A10 block {11}\S/m);
+    expect(valve.stdout).toMatch(/^ {2}A10 opposite block {2}\S/m);
+    expect(run('explain', demo, 'A6').stdout).toMatch(/^ {2}A6 anchor {2}1\.25 m cube, 1\.80 m³$/m);
+    // 6.2 m restrained at the demo's default 6 m laying length: joints at 0 and 6 m, two of them.
+    expect(run('explain', demo, 'A13').stdout).toMatch(/^ {2}A13 joints {2}6\.2 m toward A12 \(2 joints\)$/m);
+    expect(t.stdout).toMatch(/^A13 .*restrain 6\.2 m toward A12 \(2 joints\), 6\.2 m toward A14 \(2 joints\)/m);
   });
 
   it('validates a good file and prints the JSON Schema', () => {

@@ -8,6 +8,8 @@ import { diagnosticText } from '../diagnostics/wording.js';
 import { wordingContext } from '../diagnostics/context.js';
 import { notVerifiedText } from '../provenance/entry.js';
 import { REGISTER, unverified } from '../provenance/register.js';
+import { scheduleOf } from '../schedule/scheduleRows.js';
+import { restraintElements } from '../schedule/restraintElements.js';
 import { escapeControls } from './terminalText.js';
 
 const shown = (v: RecordValue, units: UnitSystem) => formatSi(v.value, v.dimension, units, 4);
@@ -18,6 +20,15 @@ const shown = (v: RecordValue, units: UnitSystem) => formatSi(v.value, v.dimensi
  */
 export function explainText(a: Analysis, f: FittingAnalysis, units: UnitSystem): string {
   const out = [`${f.mark} — ${fittingTitle(f.geometry)} (node ${f.node.id}, run ${f.run})`, ''];
+  // What to build first, each element named by the fitting's mark; then how it was found.
+  const row = scheduleOf(a).fittings.find((r) => r.node === f.node.id);
+  const elements = row ? restraintElements(row, units) : [];
+  const width = Math.max(0, ...elements.map((e) => e.name.length));
+  out.push(
+    'Restraint',
+    ...(elements.length ? elements.map((e) => `  ${e.name.padEnd(width)}  ${e.text}`) : ['  none']),
+    '',
+  );
   calculationRecord(a.project, f).forEach((step, i) => {
     out.push(`${i + 1}. ${step.title}`, `   ${step.formula}`);
     for (const v of step.inputs)

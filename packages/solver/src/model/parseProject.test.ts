@@ -85,3 +85,50 @@ describe('reading a project file', () => {
     expect(problems({ ...good(), version: 2 })).toContain('version: must be 1 (the only version this program reads)');
   });
 });
+
+/** Every value of `stored` is found unchanged at the same path of `read`. */
+function keeps(stored: unknown, read: unknown, path = '$'): string[] {
+  if (stored === null || typeof stored !== 'object') return Object.is(stored, read) ? [] : [path];
+  if (read === null || typeof read !== 'object') return [path];
+  return Object.entries(stored).flatMap(([k, v]) => keeps(v, (read as Record<string, unknown>)[k], `${path}.${k}`));
+}
+
+describe('files written before soil classes and laying length', () => {
+  it('open with every stored value unchanged, soils read as stored values, only defaults added', () => {
+    // A file as an earlier version saved it: a soil copied from the old library under its old id and
+    // source text, a pipe with a trench type and encasement, and no laying length.
+    const old = {
+      ...good(),
+      design: { bearingSafetyFactor: 2, blockDepth: 0.5, trenchWidth: null, dimensionStep: 0.05 },
+      soils: [
+        {
+          id: 'dipra-sandy-silt',
+          label: 'Sandy silt',
+          bearing: 143641.3,
+          unitWeight: 18000,
+          frictionAngle: 30,
+          cohesion: 0,
+          source: 'Horizontal bearing strength table, DIPRA (use with SF 1.5); γ, φ, c typical values',
+        },
+        {
+          id: 'pvc-sand',
+          label: 'Sand',
+          bearing: 95760.5,
+          unitWeight: 18500,
+          frictionAngle: 32,
+          cohesion: 0,
+          minCover: 0.6096,
+          source: 'Safe bearing load, PVC pipe literature (AWWA M23 / Uni-Bell lineage, unverified)',
+        },
+      ],
+      defaultSoil: 'pvc-sand',
+      pipes: [{ ...good().pipes[0]!, trenchType: 4, encasement: 'polyethylene' }],
+    };
+    const r = parseProject(structuredClone(old));
+    expect(r.ok).toBe(true);
+    if (!r.ok) return;
+    expect(keeps(old, r.project)).toEqual([]);
+    expect(r.project.soils).toEqual(old.soils);
+    expect(r.project.design.layingLength).toBe(6); // the documented default
+  });
+});

@@ -70,6 +70,11 @@ export const designSchema = z.strictObject({
    * (50 mm by default; a US office may set 2 in = 0.0508 m)
    */
   dimensionStep: limited('dimensionStep').default(REGISTER['design.dimension-step'].value),
+  /**
+   * m, length of one pipe between joints: restrained joints are counted and drawn from it, the first at
+   * the fitting. 6 m is common practice (EN 545 pipes are made 6 m long; 20 ft pipes are 6.1 m).
+   */
+  layingLength: limited('layingLength').default(6),
 });
 
 export const loadCaseSchema = z.strictObject({

@@ -11,11 +11,18 @@ const dim = (m: number, units: UnitSystem) => formatDimension(m, units);
 export const blockText = (b: Block, units: UnitSystem): string =>
   `${dim(b.faceWidth, units)} w × ${dim(b.faceHeight, units)} h × ${dim(b.depth, units)} t`;
 
-/** Restrained lengths per leg, named by the fitting each runs toward: "12.5 m toward A4". */
+type RestrainedLeg = ScheduleFitting['restraint']['restrainedLegs'][number];
+
+/** One restrained leg, named by the fitting it runs toward, with its joints: "12.5 m toward A4 (3 joints)". */
+export const restrainedLegText = (l: RestrainedLeg, units: UnitSystem): string =>
+  `${quantityText(l.length, 'restrained', units)} ${l.toward ? `toward ${l.toward}` : 'to the end'} (${jointsText(l.joints)})`;
+
+/** "1 joint", "3 joints". */
+export const jointsText = (n: number): string => `${n} joint${n === 1 ? '' : 's'}`;
+
+/** Restrained lengths per leg, named by the fitting each runs toward: "12.5 m toward A4 (3 joints)". */
 export function restrainedText(f: ScheduleFitting, units: UnitSystem): string {
-  return f.restraint.restrainedLegs
-    .map((l) => `${quantityText(l.length, 'restrained', units)} ${l.toward ? `toward ${l.toward}` : 'to the end'}`)
-    .join(', ');
+  return f.restraint.restrainedLegs.map((l) => restrainedLegText(l, units)).join(', ');
 }
 
 /** What holds the fitting, in one line of display units: what a crew builds. */

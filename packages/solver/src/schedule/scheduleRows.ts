@@ -8,6 +8,7 @@ import { diagnosticText } from '../diagnostics/wording.js';
 import { legTarget, wordingContext } from '../diagnostics/context.js';
 import { unverified, type ProvenanceId } from '../provenance/register.js';
 import { CAUTIONS } from './cautions.js';
+import { restrainedJointCount } from './restrainedJoints.js';
 
 /** A bearing block as the schedule reports it (all but an intermediate depth). SI units. */
 export type ScheduleBlock = Omit<BearingBlock, 'bottomDepth'>;
@@ -53,8 +54,11 @@ export interface ScheduleFitting {
     anchor: { concreteVolume: number; side: number; submerged: boolean } | null;
     trenchBottom: { bearingArea: number; width: number; length: number } | null;
     restrainedLength: number | null;
-    /** per restrained pipe: its length and the mark of the next fitting it runs toward */
-    restrainedLegs: { pipe: string; length: number; toward: string | null }[];
+    /**
+     * per restrained pipe: its length, the mark of the next fitting it runs toward, and the joints to
+     * restrain at the project's laying length (the first at the fitting)
+     */
+    restrainedLegs: { pipe: string; length: number; toward: string | null; joints: number }[];
   };
   /** the diagnostics worded in SI, for readers of the first schedule format */
   warnings: string[];
@@ -126,7 +130,12 @@ function row(a: Analysis, f: FittingAnalysis, words: (d: Diagnostic) => string):
       },
       trenchBottom: r.trenchBottom,
       restrainedLength: r.restrainedLength,
-      restrainedLegs: r.restrainedLegs.map((l) => ({ pipe: l.pipe, length: l.length, toward: toward(l.pipe) })),
+      restrainedLegs: r.restrainedLegs.map((l) => ({
+        pipe: l.pipe,
+        length: l.length,
+        toward: toward(l.pipe),
+        joints: restrainedJointCount(l.length, a.project.design.layingLength),
+      })),
     },
     warnings: f.diagnostics.map(words),
     diagnostics: f.diagnostics,

@@ -1,0 +1,15 @@
+/**
+ * Joints to restrain along a leg of restrained length `length` (m) when pipes are `layingLength` (m)
+ * long and the first joint is at the fitting: every joint closer to the fitting than the restrained
+ * length, ⌈L/ℓ⌉ of them (the last pipe reaches past L). None for no restrained length.
+ */
+export function restrainedJointCount(length: number, layingLength: number): number {
+  if (!(length > 0) || !(layingLength > 0)) return 0;
+  // A length a rounding hair above a whole number of pipes needs no extra joint.
+  return Math.max(1, Math.ceil(length / layingLength - 1e-9));
+}
+
+/** m from the fitting along the pipe of each joint to restrain: 0, ℓ, 2ℓ … */
+export function restrainedJointPositions(length: number, layingLength: number): number[] {
+  return Array.from({ length: restrainedJointCount(length, layingLength) }, (_, k) => k * layingLength);
+}
