@@ -55,7 +55,7 @@ export function RouteSummary() {
           <ol className="ranked">
             {ranked.map((f) => (
               <li key={f.node.id}>
-                <button className="link" onClick={() => actions.selectNode(f.node.id)}>
+                <button className="link" onClick={() => actions.revealNode(f.node.id)}>
                   {f.mark}
                 </button>{' '}
                 {KIND_NAME[f.geometry.kind].toLowerCase()} — {show(norm(f.envelope.governing.total), 'force', u)}
