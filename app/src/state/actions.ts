@@ -12,6 +12,7 @@ import {
   type RouteEnd,
 } from './documentEdits.js';
 import type { Viewport } from './viewport.js';
+import { routePieces } from './connectivity.js';
 import type { DrawState } from '../tools/drawTool.js';
 import { fittedView, revealFitting as planCommandReveal, showFitting } from '../tools/planCommands.js';
 import { planInputOf } from '../tools/planBridge.js';
@@ -69,8 +70,23 @@ export function createActions(store: AppStore) {
 
   return {
     // ——— document edits (undoable)
-    addRun: (start: RouteEnd, vertices: PlanPoint[], end: RouteEnd | null) =>
-      edit((p) => addRoute(p, start, vertices, end, get().pipeSpec)),
+    addRun: (start: RouteEnd, vertices: PlanPoint[], end: RouteEnd | null) => {
+      const before = routePieces(get().project).length;
+      edit((p) => addRoute(p, start, vertices, end, get().pipeSpec));
+      const after = routePieces(get().project).length;
+      // A run not joined to the main is sized alone, with dead-end blocks at both ends: say so at once.
+      if (after > before && after > 1)
+        set({
+          notice: {
+            tone: 'warning',
+            title: `That run is not connected to the rest of the main (the route is now ${after} separate pieces)`,
+            lines: [
+              'Each piece is sized on its own, with a dead-end block at every free end.',
+              'To join it, undo (Ctrl+Z) and draw it again starting or ending on a node or pipe: the plan rings what a click would join.',
+            ],
+          },
+        });
+    },
     moveNodes: (moves: ReadonlyMap<string, PlanPoint>) => {
       set({ dragPreview: null });
       edit((p) => moveNodes(p, moves));

@@ -341,3 +341,18 @@ describe('the action table', () => {
     expect(h.undoSteps()).toBe(2);
   });
 });
+
+describe('runs not joined to the main', () => {
+  it('warns when a drawn run stands apart from the main, and not when it branches from it', () => {
+    const h = planHarness(dogLeg());
+    h.key('d');
+    h.click({ x: 15, y: 0 }); // on p1: a tee
+    h.click({ x: 15, y: 20 });
+    h.key('Enter');
+    expect(h.state().notice).toBeNull();
+    h.click({ x: -20, y: 20 }); // open ground, 20 m from anything
+    h.click({ x: -20, y: 40 });
+    h.key('Enter');
+    expect(h.state().notice?.title).toMatch(/not connected to the rest of the main .*2 separate pieces/);
+  });
+});
