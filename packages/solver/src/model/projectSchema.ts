@@ -126,8 +126,13 @@ export const nodeSchema = z.strictObject({
   y: limited('coordinate'),
   /** m, pipe centreline elevation */
   elevation: limited('elevation'),
-  /** m, ground surface to top of pipe */
+  /** m, ground surface to top of pipe; derived from groundLevel when the node has one */
   cover: limited('cover').default(1.2),
+  /**
+   * m, ground surface elevation (a survey level), optional. With it the pipe centreline stays where
+   * `elevation` puts it and the cover is groundLevel − elevation − OD/2 (model/groundLevel.ts).
+   */
+  groundLevel: limited('elevation').optional(),
   soil: id.optional(),
   end: z.enum(END_CONDITIONS).default('cap'),
   valve: z.boolean().default(false),
