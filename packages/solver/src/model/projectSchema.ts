@@ -181,6 +181,16 @@ export const projectShape = z.strictObject({
   defaultSoil: id.optional(),
   nodes: z.array(nodeSchema).default([]),
   pipes: z.array(pipeSchema).default([]),
+  /**
+   * where the plan lies on the earth, optional: x and y are metres in this projection of WGS 84, so the
+   * design can be exported as GeoJSON longitude/latitude (project-format.md, "Georeference")
+   */
+  georeference: z
+    .strictObject({
+      /** a proj4 definition, such as the local transverse Mercator an import made */
+      proj4: z.string().min(1, { error: 'must be a proj4 definition' }).max(400),
+    })
+    .optional(),
 });
 
 export type Project = z.output<typeof projectShape>;
