@@ -21,6 +21,11 @@ export interface ImportOptions {
   pipe?: PipeChoice;
   /** project name */
   name?: string;
+  /**
+   * where the cases' pressures are stated: kept as the base project has them, or moved to the route's
+   * highest pipe centreline (the default: a new route's levels are its own, not the base's datum)
+   */
+  caseDatum?: 'keep' | 'high-point';
 }
 
 export type ImportResult = { ok: true; project: Project; notes: ImportNote[] } | { ok: false; notes: ImportNote[] };
@@ -78,8 +83,19 @@ function assemble(
     return { ok: false, notes };
   }
   const { georeference: _g, ...rest } = base;
+  let loadCases = rest.loadCases;
+  if ((o.caseDatum ?? 'high-point') === 'high-point') {
+    const high = Math.max(...net.nodes.map((n) => n.elevation));
+    loadCases = loadCases.map((c) => (c.datumElevation === undefined ? c : { ...c, datumElevation: high }));
+    notes.push({
+      level: 'note',
+      where: '',
+      message: `the load cases' pressures are stated at the route's highest pipe centreline, ${high.toFixed(3)} m: check them in the cases panel`,
+    });
+  }
   const candidate: Project = {
     ...rest,
+    loadCases,
     ...(o.name !== undefined ? { name: o.name.slice(0, 200) } : {}),
     ...(georeference ? { georeference } : {}),
     nodes: net.nodes,
