@@ -25,7 +25,14 @@ export {
   type CaseThrust,
   type ThrustEnvelope,
 } from './thrust/fittingThrust.js';
-export { analyse, analyseProject, calculationRecord, type Analysis, type FittingAnalysis } from './analysis/analyse.js';
+export {
+  analyse,
+  analyseNext,
+  analyseProject,
+  calculationRecord,
+  type Analysis,
+  type FittingAnalysis,
+} from './analysis/analyse.js';
 export type { CalcStep, RecordValue } from './analysis/calcRecord.js';
 export { nodeSoil, type Restraint } from './restraint/sizeRestraint.js';
 export {
