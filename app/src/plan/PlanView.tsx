@@ -97,6 +97,7 @@ export function PlanView() {
       drawRestrainedZones(ctx, viewport, scene, units, space);
       drawArrows(ctx, viewport, scene, units, space);
       drawFittings(ctx, viewport, scene, tags);
+      performance.mark('mainbrace-results-drawn');
     },
     [viewport, size, scene, units],
   );
