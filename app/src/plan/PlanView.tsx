@@ -23,7 +23,7 @@ const native = (c: Context) => (c as unknown as { _context: CanvasRenderingConte
 export function PlanView() {
   const store = useAppStore();
   const actions = useActions();
-  const project = useApp((s) => s.project);
+  const nodes = useApp((s) => s.project.nodes);
   const units = useApp((s) => s.units);
   const viewport = useApp((s) => s.viewport);
   const caseView = useApp((s) => s.caseView);
@@ -33,6 +33,9 @@ export function PlanView() {
   const tool = useApp((s) => s.tool);
   const snapping = useApp((s) => s.snapping);
   const analysis = useAnalysis();
+  // The drawn document: the store's in every result input (positions, pipes, restraint), and the same
+  // object after an edit of the name or the units, so such an edit redraws nothing.
+  const drawn = analysis.project;
   const box = useRef<HTMLDivElement>(null);
   const coords = useRef<HTMLSpanElement>(null);
   const [size, setSize] = useState({ width: 800, height: 500 });
@@ -56,8 +59,8 @@ export function PlanView() {
   useEffect(() => {
     if (fitted.current || size.width <= 50) return;
     fitted.current = true;
-    actions.setViewport(fitView(project.nodes, size.width, size.height));
-  }, [size, project.nodes, actions]);
+    actions.setViewport(fitView(nodes, size.width, size.height));
+  }, [size, nodes, actions]);
 
   useEffect(() => {
     const down = (e: KeyboardEvent) => {
@@ -79,12 +82,12 @@ export function PlanView() {
   const movedKey = preview ? [...preview.keys()].sort().join('\u0000') : '';
   const scene = useMemo(
     () =>
-      planScene(project, analysis, caseView, selection, null, movedKey ? new Set(movedKey.split('\u0000')) : undefined),
-    [project, analysis, caseView, selection, movedKey],
+      planScene(drawn, analysis, caseView, selection, null, movedKey ? new Set(movedKey.split('\u0000')) : undefined),
+    [drawn, analysis, caseView, selection, movedKey],
   );
   const moving = useMemo(
-    () => (preview ? dragScene(project, analysis, selection, preview) : null),
-    [project, analysis, selection, preview],
+    () => (preview ? dragScene(drawn, analysis, selection, preview) : null),
+    [drawn, analysis, selection, preview],
   );
   const drawStatic = useCallback(
     (c: Context) => {

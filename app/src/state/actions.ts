@@ -13,6 +13,7 @@ import {
 } from './documentEdits.js';
 import type { Viewport } from './viewport.js';
 import type { DrawState } from '../tools/drawTool.js';
+import { editProblems } from './editCheck.js';
 
 /** Typing pauses shorter than this, ms, keep extending the same undo step. */
 const TYPING_WINDOW_MS = 1500;
@@ -37,18 +38,20 @@ export function createActions(store: AppStore) {
   /**
    * An undoable edit: a new document from the old one. A change that would leave the document
    * invalid (two nodes on one point, an ID above the OD) is refused with a message, never stored.
+   * Only the parts the edit replaced are checked (`editProblems`); a whole document that was checked
+   * already (opened, restored) comes `checked` and is not checked again.
    */
-  const edit = (change: (p: Project) => Project, typing?: string) => {
+  const edit = (change: (p: Project) => Project, typing?: string, checked = false) => {
     const before = get().project;
     const after = change(before);
     if (after === before) return;
-    const check = validated(after);
-    if (!check.ok) {
+    const lines = checked ? [] : editProblems(before, after);
+    if (lines.length) {
       set({
         notice: {
           tone: 'error',
           title: 'That change was not made: it would leave the project invalid',
-          lines: check.lines,
+          lines,
         },
       });
       return;
@@ -133,9 +136,12 @@ export function createActions(store: AppStore) {
         };
       }),
     setDefaultSoil: (id: string) => edit((p) => ({ ...p, defaultSoil: id })),
-    /** Replaces the whole document (open, new); it is one undoable step like any edit. */
+    /**
+     * Replaces the whole document (open, new, another tab's copy); it is one undoable step like any
+     * edit. Every caller hands a document that passed the whole-file check (`validated`, the file reader).
+     */
     replaceProject: (project: Project) => {
-      edit(() => project);
+      edit(() => project, undefined, true);
       set({ units: project.units, selection: EMPTY_SELECTION, draw: { phase: 'idle' }, dragPreview: null });
     },
 
