@@ -1,6 +1,9 @@
 import { useCallback, useEffect, useMemo, useRef, useState, type PointerEvent as ReactPointerEvent } from 'react';
-import { Layer, Shape, Stage } from 'react-konva';
+// Konva's core entry and react-konva's core build: the plan draws with 2-D calls inside its own
+// shapes, so none of Konva's ready-made shapes, filters or animations are loaded (issue 16).
+import { Layer, Shape, Stage } from 'react-konva/lib/ReactKonvaCore.js';
 import type { Context } from 'konva/lib/Context';
+import type { Shape as KonvaShape } from 'konva/lib/Shape';
 import { FOOT } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp, useAppStore } from '../state/StoreContext.js';
 import { centreOn, fitView, panBy, toPlan, toScreen, zoomAt, type ScreenPoint } from '../state/viewport.js';
@@ -15,9 +18,22 @@ import { drawOverlay } from './drawOverlay.js';
 import { drawStep, type DrawContext } from '../tools/drawTool.js';
 import { selectStep, type SelectState } from '../tools/selectTool.js';
 import { PlanOverlays } from './PlanOverlays.js';
+import { reuseEqualParts } from './sceneReuse.js';
+import type { Scene } from './planScene.js';
 
 const HIT_PX = 9;
-const native = (c: Context) => (c as unknown as { _context: CanvasRenderingContext2D })._context;
+/**
+ * The 2-D context a shape draws into, through Konva's public API: its layer's canvas element. Konva has
+ * already applied the pixel ratio and the shape's transform to that same context.
+ */
+const native = (shape: KonvaShape): CanvasRenderingContext2D =>
+  shape.getLayer()!.getNativeCanvasElement().getContext('2d')!;
+
+/** A scene builder that keeps the parts equal to the last scene's (see `reuseEqualParts`). */
+function sceneKeeper() {
+  let last: Scene | null = null;
+  return (next: Scene) => (last = reuseEqualParts(last, next));
+}
 
 /** The plan: the route to scale on a grid, thrusts, restraints, and the drawing and selecting tools. */
 export function PlanView() {
@@ -80,29 +96,57 @@ export function PlanView() {
   // While nodes are dragged the document is unchanged: the static layer leaves the dragged nodes and
   // their pipes out (and so is not redrawn), the interactive layer draws them where they are now.
   const movedKey = preview ? [...preview.keys()].sort().join('\u0000') : '';
+  const [keep] = useState(sceneKeeper);
   const scene = useMemo(
     () =>
-      planScene(drawn, analysis, caseView, selection, null, movedKey ? new Set(movedKey.split('\u0000')) : undefined),
-    [drawn, analysis, caseView, selection, movedKey],
+      keep(
+        planScene(drawn, analysis, caseView, selection, null, movedKey ? new Set(movedKey.split('\u0000')) : undefined),
+      ),
+    [keep, drawn, analysis, caseView, selection, movedKey],
   );
   const moving = useMemo(
     () => (preview ? dragScene(drawn, analysis, selection, preview) : null),
     [drawn, analysis, selection, preview],
   );
-  const drawStatic = useCallback(
-    (c: Context) => {
-      const ctx = native(c);
-      drawGrid(ctx, viewport, size.width, size.height, units);
-      drawRestraints(ctx, viewport, scene);
-      drawPipes(ctx, viewport, scene);
-      const space = new LabelSpace(size.width, size.height);
-      const tags = placeTags(ctx, viewport, scene, space);
-      drawRestrainedZones(ctx, viewport, scene, units, space);
-      drawArrows(ctx, viewport, scene, units, space);
-      drawFittings(ctx, viewport, scene, tags);
+
+  // Layers for what changes at different rates. A test-pressure change redraws the two layers of
+  // results (blocks with the grid under them; thrust arrows and restrained zones); the pipes, and the
+  // symbols with their marks, are the same objects (`reuseEqualParts`) and are not drawn again.
+  // The marks get their room first; the thrust labels take what is left.
+  const { width, height } = size;
+  const [measure] = useState(() => document.createElement('canvas').getContext('2d'));
+  const { fittings, plainNodes, pipes, polygons, zones, arrows, largestForce } = scene;
+  const marks = useMemo(() => {
+    const space = new LabelSpace(width, height);
+    const tags = measure ? placeTags(measure, viewport, { fittings, plainNodes }, space) : new Map();
+    return { space, tags };
+  }, [measure, viewport, width, height, fittings, plainNodes]);
+  const drawGround = useCallback(
+    (_: Context, shape: KonvaShape) => {
+      const ctx = native(shape);
+      drawGrid(ctx, viewport, width, height, units);
+      drawRestraints(ctx, viewport, { polygons }, width, height);
+    },
+    [viewport, width, height, units, polygons],
+  );
+  const drawRoute = useCallback(
+    (_: Context, shape: KonvaShape) => drawPipes(native(shape), viewport, { pipes }, width, height),
+    [viewport, width, height, pipes],
+  );
+  const drawThrust = useCallback(
+    (_: Context, shape: KonvaShape) => {
+      const ctx = native(shape);
+      const space = marks.space.clone();
+      drawRestrainedZones(ctx, viewport, { zones }, units, space);
+      drawArrows(ctx, viewport, { arrows, largestForce }, units, space);
       performance.mark('mainbrace-results-drawn');
     },
-    [viewport, size, scene, units],
+    [viewport, units, zones, arrows, largestForce, marks],
+  );
+  const drawMarks = useCallback(
+    (_: Context, shape: KonvaShape) =>
+      drawFittings(native(shape), viewport, { fittings, plainNodes }, marks.tags, width, height),
+    [viewport, width, height, fittings, plainNodes, marks],
   );
 
   // A fitting picked in the schedule or a list may be off screen: bring it to the middle.
@@ -296,12 +340,21 @@ export function PlanView() {
     >
       <Stage width={size.width} height={size.height} listening={false}>
         <Layer listening={false}>
-          <Shape sceneFunc={drawStatic} />
+          <Shape sceneFunc={drawGround} />
+        </Layer>
+        <Layer listening={false}>
+          <Shape sceneFunc={drawRoute} />
+        </Layer>
+        <Layer listening={false}>
+          <Shape sceneFunc={drawThrust} />
+        </Layer>
+        <Layer listening={false}>
+          <Shape sceneFunc={drawMarks} />
         </Layer>
         <Layer listening={false}>
           <Shape
-            sceneFunc={(c) => {
-              const ctx = native(c);
+            sceneFunc={(_, shape) => {
+              const ctx = native(shape);
               if (moving) {
                 drawPipes(ctx, viewport, moving);
                 drawFittings(
