@@ -114,6 +114,15 @@ async function start() {
           pipes: [...store.getState().selection.pipes],
         }),
         viewport: () => ({ ...store.getState().viewport }),
+        // cheap reads for the benchmarks, which must not clone a 10,000-node document to count it
+        counts: () => {
+          const p = store.getState().project;
+          return { nodes: p.nodes.length, pipes: p.pipes.length, fittings: analyse(p).fittings.length };
+        },
+        nodeAt: (i: number) => {
+          const n = store.getState().project.nodes[i];
+          return n ? { x: n.x, y: n.y } : null;
+        },
         canUndo: () => store.temporal.getState().pastStates.length > 0,
       }),
     });

@@ -16,6 +16,7 @@ import { routePieces } from './connectivity.js';
 import type { DrawState } from '../tools/drawTool.js';
 import { fittedView, revealFitting as planCommandReveal, showFitting } from '../tools/planCommands.js';
 import { planInputOf } from '../tools/planBridge.js';
+import { editProblems } from './editCheck.js';
 
 /** Typing pauses shorter than this, ms, keep extending the same undo step. */
 const TYPING_WINDOW_MS = 1500;
@@ -40,18 +41,20 @@ export function createActions(store: AppStore) {
   /**
    * An undoable edit: a new document from the old one. A change that would leave the document
    * invalid (two nodes on one point, an ID above the OD) is refused with a message, never stored.
+   * Only the parts the edit replaced are checked (`editProblems`); a whole document that was checked
+   * already (opened, restored) comes `checked` and is not checked again.
    */
-  const edit = (change: (p: Project) => Project, typing?: string) => {
+  const edit = (change: (p: Project) => Project, typing?: string, checked = false) => {
     const before = get().project;
     const after = change(before);
     if (after === before) return;
-    const check = validated(after);
-    if (!check.ok) {
+    const lines = checked ? [] : editProblems(before, after);
+    if (lines.length) {
       set({
         notice: {
           tone: 'error',
           title: 'That change was not made: it would leave the project invalid',
-          lines: check.lines,
+          lines,
         },
       });
       return;
@@ -151,9 +154,12 @@ export function createActions(store: AppStore) {
         };
       }),
     setDefaultSoil: (id: string) => edit((p) => ({ ...p, defaultSoil: id })),
-    /** Replaces the whole document (open, new); it is one undoable step like any edit. */
+    /**
+     * Replaces the whole document (open, new, another tab's copy); it is one undoable step like any
+     * edit. Every caller hands a document that passed the whole-file check (`validated`, the file reader).
+     */
     replaceProject: (project: Project) => {
-      edit(() => project);
+      edit(() => project, undefined, true);
       set({ units: project.units, selection: EMPTY_SELECTION, draw: { phase: 'idle' }, dragPreview: null });
       // A route opened into the old view may lie wholly off screen: show all of it.
       if (get().canvas.width > 0) set({ viewport: fittedView(planInputOf(get())) });

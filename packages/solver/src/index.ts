@@ -7,6 +7,7 @@ export { implausibleInputs } from './model/plausibility.js';
 export { nodeCover, nodeGround, nodeOutsideDiameters, pipeLevelFor, coverFor } from './model/groundLevel.js';
 export { caseLabel } from './model/caseLabel.js';
 export { parseProject, parseProjectText, type ParseResult } from './model/parseProject.js';
+export { partProblems, crossProblems, type ProjectList } from './model/partCheck.js';
 export { problemText, type Problem } from './model/problems.js';
 export { projectJsonSchema } from './model/jsonSchema.js';
 export * from './geometry/vector.js';
