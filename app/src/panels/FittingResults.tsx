@@ -109,8 +109,12 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
         {r.anchor && (
           <li data-testid="anchor">
             <span className="element">{elementName(f.mark, 'anchor')}</span> Gravity anchor{' '}
-            <strong>{show(r.anchor.concreteVolume, 'volume', u)}</strong> of concrete (a{' '}
-            {formatDimension(r.anchor.side, u)} cube){r.anchor.submerged ? ', submerged weight' : ''}.
+            <strong>
+              {formatDimension(r.anchor.length, u)} long × {formatDimension(r.anchor.width, u)} wide ×{' '}
+              {formatDimension(r.anchor.height, u)} high
+            </strong>
+            , {show(r.anchor.concreteVolume, 'volume', u)} of concrete{r.anchor.submerged ? ', submerged weight' : ''}
+            {r.anchor.horizontalThrust > 0 ? '; its base friction also holds the horizontal thrust' : ''}.
           </li>
         )}
         {r.trenchBottom && (

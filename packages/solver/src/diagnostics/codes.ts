@@ -70,6 +70,14 @@ export const DIAGNOSTIC_CODES = {
       'The gravity anchor stands in groundwater and is sized with the submerged unit weight of concrete (γc − γw).',
     action: 'Design for the highest groundwater level expected.',
   },
+  'anchor.no-weight': {
+    severity: 'error',
+    values: { concreteUnitWeight: 'unitWeight', waterUnitWeight: 'unitWeight', upward: 'force' },
+    meaning:
+      'The concrete weighs no more than the groundwater (γc − γw ≤ 0): no gravity anchor can hold the upward thrust. The restraint is not adequate; restrained joints are sized instead.',
+    action:
+      'Check the concrete unit weight and the water density; use restrained joints, tie-downs or heavier concrete.',
+  },
   'soil.no-bearing': {
     severity: 'warning',
     values: {},

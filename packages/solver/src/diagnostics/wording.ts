@@ -54,6 +54,8 @@ const WORDS: Record<DiagnosticCode, Words> = {
   'thrust.none': () => 'No thrust at this fitting in any case.',
   'anchor.submerged': () =>
     'Gravity anchor below groundwater: sized with the submerged unit weight of concrete (γc − γw); design for the highest groundwater level.',
+  'anchor.no-weight': (v) =>
+    `Not adequate: concrete of ${v.concreteUnitWeight} weighs no more than the groundwater (${v.waterUnitWeight}), so no gravity anchor can hold the ${v.upward} upward thrust. Restrained joints are sized instead; check the concrete unit weight and water density, or use tie-downs or heavier concrete.`,
   'soil.no-bearing': (_v, s, c) =>
     `No bearing: ${soil(s, c)} has no allowable bearing (muck, peat or unprepared fill). A thrust block cannot be used: restrained joints are sized instead; piles or soil replacement are the other choices.`,
   'soil.below-min-cover': (v, s, c) =>

@@ -108,6 +108,15 @@ export const REGISTER = {
     source: 'Mainbrace face-proportion rule (no published source states it)',
     verified: true,
   },
+  'block.thickest': {
+    quantity:
+      'A bearing block may be thickened to hold an uplift by its weight up to this multiple of the design thickness (on its bare bearing area); beyond it a separate anchor is built',
+    value: 2,
+    unit: '—',
+    kind: 'own rule',
+    source: 'Mainbrace rule: a block much thicker than its face is an anchor in all but name',
+    verified: true,
+  },
   'passive.rankine': {
     quantity: 'Rankine passive earth pressure with cohesion, Kp = tan²(45° + φ/2)',
     value: null,

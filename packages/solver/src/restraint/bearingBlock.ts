@@ -48,10 +48,17 @@ export interface BearingBlock {
   passiveRatio: number;
   /** m, depth below ground of the face's bottom */
   bottomDepth: number;
+  /** N, horizontal thrust the face bears */
+  thrust: number;
+  /** N, upward thrust the block's weight holds (0 unless it is thickened to stand in for an anchor) */
+  upwardThrust: number;
 }
 
 export interface BlockResult {
-  block: BearingBlock;
+  /** the block, or null where none within the limits holds */
+  block: BearingBlock | null;
+  /** m², required bearing area SF·T/σ */
+  bearingArea: number;
   steps: CalcStep[];
   diagnostics: Diagnostic[];
 }
@@ -171,7 +178,10 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
       passiveResistance: passive,
       passiveRatio,
       bottomDepth: bottom,
+      thrust: i.thrust,
+      upwardThrust: 0,
     },
+    bearingArea: area,
     steps,
     diagnostics,
   };

@@ -1,7 +1,7 @@
 import type { UnitSystem } from '../units/conversions.js';
 import { formatDimension } from '../units/format.js';
 import { quantityText } from './columnUnits.js';
-import { blockText, restrainedLegText } from './restraintText.js';
+import { anchorText, blockText, restrainedLegText } from './restraintText.js';
 import type { ScheduleFitting } from './scheduleRows.js';
 
 /** What a fitting is held by, one element each; a fitting may need several. */
@@ -40,7 +40,7 @@ export function restraintElements(f: ScheduleFitting, units: UnitSystem): Restra
   const add = (kind: RestraintElementKind, text: string) => out.push({ kind, name: elementName(f.mark, kind), text });
   if (r.block) add('block', `${blockText(r.block, units)}, ${vol(r.block.concreteVolume)}`);
   if (r.reverseBlock) add('reverseBlock', `${blockText(r.reverseBlock, units)}, ${vol(r.reverseBlock.concreteVolume)}`);
-  if (r.anchor) add('anchor', `${dim(r.anchor.side)} cube, ${vol(r.anchor.concreteVolume)}`);
+  if (r.anchor) add('anchor', `${anchorText(r.anchor, units)}, ${vol(r.anchor.concreteVolume)}`);
   if (r.trenchBottom) add('trenchBottom', `${dim(r.trenchBottom.width)} × ${dim(r.trenchBottom.length)}`);
   for (const leg of r.restrainedLegs) add('joints', restrainedLegText(leg, units));
   return out;

@@ -11,6 +11,12 @@ const dim = (m: number, units: UnitSystem) => formatDimension(m, units);
 export const blockText = (b: Block, units: UnitSystem): string =>
   `${dim(b.faceWidth, units)} w × ${dim(b.faceHeight, units)} h × ${dim(b.depth, units)} t`;
 
+type Anchor = NonNullable<ScheduleFitting['restraint']['anchor']>;
+
+/** "1.25 l × 1.25 w × 1.25 h": plan length along the pipe, width across it, height. */
+export const anchorText = (a: Anchor, units: UnitSystem): string =>
+  `${dim(a.length, units)} l × ${dim(a.width, units)} w × ${dim(a.height, units)} h`;
+
 type RestrainedLeg = ScheduleFitting['restraint']['restrainedLegs'][number];
 
 /** One restrained leg, named by the fitting it runs toward, with its joints: "12.5 m toward A4 (3 joints)". */
@@ -32,7 +38,7 @@ export function restraintSummary(f: ScheduleFitting, units: UnitSystem): string 
   if (r.block) parts.push(`block ${blockText(r.block, units)}`);
   if (r.reverseBlock) parts.push(`opposite block ${blockText(r.reverseBlock, units)}`);
   if (r.anchor)
-    parts.push(`anchor ${dim(r.anchor.side, units)} cube, ${quantityText(r.anchor.concreteVolume, 'volume', units)}`);
+    parts.push(`anchor ${anchorText(r.anchor, units)}, ${quantityText(r.anchor.concreteVolume, 'volume', units)}`);
   if (r.trenchBottom)
     parts.push(`bottom pad ${dim(r.trenchBottom.width, units)} × ${dim(r.trenchBottom.length, units)}`);
   if (r.restrainedLegs.length) parts.push(`restrain ${restrainedText(f, units)}`);

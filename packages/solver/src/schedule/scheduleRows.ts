@@ -51,7 +51,20 @@ export interface ScheduleFitting {
     block: ScheduleBlock | null;
     /** a second block on the opposite side, where the thrust reverses between load states */
     reverseBlock: ScheduleBlock | null;
-    anchor: { concreteVolume: number; side: number; submerged: boolean } | null;
+    /**
+     * built as length × width × height (a cube: all three equal `side`); it holds the upward thrust by
+     * its weight and, where no block is built, the horizontal thrust by base friction
+     */
+    anchor: {
+      concreteVolume: number;
+      length: number;
+      width: number;
+      height: number;
+      side: number;
+      submerged: boolean;
+      upwardThrust: number;
+      horizontalThrust: number;
+    } | null;
     trenchBottom: { bearingArea: number; width: number; length: number } | null;
     restrainedLength: number | null;
     /**
@@ -125,8 +138,13 @@ function row(a: Analysis, f: FittingAnalysis, words: (d: Diagnostic) => string):
       reverseBlock: scheduled(r.reverseBlock),
       anchor: r.anchor && {
         concreteVolume: r.anchor.concreteVolume,
+        length: r.anchor.length,
+        width: r.anchor.width,
+        height: r.anchor.height,
         side: r.anchor.side,
         submerged: r.anchor.submerged,
+        upwardThrust: r.anchor.upwardThrust,
+        horizontalThrust: r.anchor.horizontalThrust,
       },
       trenchBottom: r.trenchBottom,
       restrainedLength: r.restrainedLength,
