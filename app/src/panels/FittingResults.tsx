@@ -22,6 +22,13 @@ import { useAnalysis, useApp } from '../state/StoreContext.js';
 import { CalcRecordView } from './CalcRecordView.js';
 
 /** The results of one fitting: thrust per case, the governing case, its restraint and warnings. */
+/** What set a block's face, in words. */
+const BLOCK_GOVERNS = {
+  bearing: 'the bearing area',
+  passive: 'the passive resistance',
+  minimum: 'the least face, one OD each way',
+} as const;
+
 export function FittingResults({ fitting: f, project }: { fitting: FittingAnalysis; project: Project }) {
   const u = useApp((s) => s.units);
   const analysis = useAnalysis();
@@ -93,7 +100,8 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
             , {formatDimension(r.block.depth, u)} from the fitting to the bearing face; bearing area{' '}
             {show(r.block.bearingArea, 'area', u)} needed, {show(r.block.faceWidth * r.block.faceHeight, 'area', u)}{' '}
             given; concrete {show(r.block.concreteVolume, 'volume', u)}. Passive resistance{' '}
-            {r.block.passiveRatio.toFixed(2)} × the thrust.
+            {r.block.passiveRatio.toFixed(2)} × the thrust (3-D factor {r.block.shapeFactor.toFixed(2)}); the face is
+            set by {BLOCK_GOVERNS[r.block.governs]}.
           </li>
         )}
         {r.reverseBlock && (

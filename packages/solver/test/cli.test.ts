@@ -109,7 +109,7 @@ describe('the command line', () => {
     expect(e.stdout).toContain('Required bearing area');
     expect(e.stdout).toContain('A = SF · T_h / σ_b');
     // The restraint elements are listed first, each named by the fitting's mark.
-    expect(e.stdout).toMatch(/^Restraint\n {2}A4 block {2}1\.00 m w × 1\.00 m h × 0\.60 m t, 0\.60 m³$/m);
+    expect(e.stdout).toMatch(/^Restraint\n {2}A4 block {2}1\.10 m w × 0\.90 m h × 0\.60 m t, 0\.60 m³$/m);
     const valve = run('explain', demo, 'A10');
     expect(valve.stdout).toMatch(/^ {2}A10 block {11}\S/m);
     expect(valve.stdout).toMatch(/^ {2}A10 opposite block {2}\S/m);

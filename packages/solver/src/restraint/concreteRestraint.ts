@@ -233,7 +233,9 @@ function sizeBlocks(
     return out;
   }
   const block = (force: number, direction: Vec3) => {
+    const across = acrossTrench(direction, legs);
     const r = sizeBearingBlock({
+      ...(across ? { trenchWidth: site.trenchWidth } : {}),
       thrust: force,
       direction,
       allowableBearing: allowable,
@@ -249,7 +251,7 @@ function sizeBlocks(
     });
     out.steps.push(...r.steps);
     for (const d of r.diagnostics) out.diagnostics.push({ ...d, subject: { ...d.subject, node } });
-    if (r.block && acrossTrench(direction, legs) && r.block.faceWidth > site.trenchWidth + 1e-9) {
+    if (r.block && across && r.block.faceWidth > site.trenchWidth + 1e-9) {
       out.diagnostics.push(
         diagnostic(
           'block.wider-than-trench',

@@ -24,6 +24,7 @@ export interface ScheduleColumn {
   cell: (f: ScheduleFitting, c: CellContext) => number | string | null;
 }
 
+const BLOCK_GOVERNS = { bearing: 'bearing area', passive: 'passive resistance', minimum: 'least face' } as const;
 const size = (f: ScheduleFitting) => Math.max(...f.pipes.map((p) => p.outsideDiameter));
 const caseName = (c: CellContext, id: string) => c.project.loadCases.find((x) => x.id === id)?.label ?? id;
 const soilName = (c: CellContext, id: string) => c.project.soils.find((x) => x.id === id)?.label ?? id;
@@ -55,6 +56,9 @@ export const SCHEDULE_COLUMNS: readonly ScheduleColumn[] = [
   col('area', 'Bearing area required', 'area', (f) => f.restraint.block?.bearingArea ?? null),
   col('faceWidth', 'Face width', 'built', (f) => f.restraint.block?.faceWidth ?? null),
   col('faceHeight', 'Face height', 'built', (f) => f.restraint.block?.faceHeight ?? null),
+  col('blockGoverns', 'Block face set by', 'text', (f) =>
+    f.restraint.block ? BLOCK_GOVERNS[f.restraint.block.governs] : null,
+  ),
   col('thickness', 'Block thickness', 'built', (f) => f.restraint.block?.depth ?? null),
   col('blockConcrete', 'Block concrete', 'volume', (f) => f.restraint.block?.concreteVolume ?? null),
   col('oppositeWidth', 'Opposite face width', 'built', (f) => f.restraint.reverseBlock?.faceWidth ?? null),

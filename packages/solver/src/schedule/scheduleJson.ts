@@ -46,6 +46,8 @@ function block(b: ScheduleBlock | null): ScheduleBlock | null {
       direction: vec(b.direction, 'unit'),
       passiveResistance: r(b.passiveResistance, 'force'),
       passiveRatio: r(b.passiveRatio, 'ratio'),
+      shapeFactor: r(b.shapeFactor, 'ratio'),
+      governs: b.governs,
       thrust: r(b.thrust, 'force'),
       upwardThrust: r(b.upwardThrust, 'force'),
     }
