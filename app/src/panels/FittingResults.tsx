@@ -1,6 +1,7 @@
 import {
   caseLabel,
   elementName,
+  fittingProfile,
   formatDimension,
   horizontalNorm,
   jointsText,
@@ -39,7 +40,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
   return (
     <section className="results" aria-label={`Results for ${f.mark}`} data-testid="fitting-results">
       <h3>
-        <span className="mark">{f.mark}</span> {fittingTitle(f.geometry)}
+        <span className="mark">{f.mark}</span> {fittingTitle({ ...f.geometry, profile: fittingProfile(f) })}
       </h3>
       <dl className="facts">
         <dt>Chainage</dt>
@@ -50,8 +51,24 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
         <dd>{caseLabel(project, e.governing.caseId)}</dd>
         <dt>Thrust</dt>
         <dd data-testid="governing-thrust">
-          <strong>{show(norm(e.governing.total), 'force', u)}</strong>, bears toward{' '}
-          {bearingText(e.horizontal.force > 0 ? planBearing(e.horizontal.direction) : null)} (from north)
+          {e.horizontal.force > 0 && (
+            <>
+              horizontal <strong>{show(e.horizontal.force, 'force', u)}</strong>, bears toward{' '}
+              {bearingText(planBearing(e.horizontal.direction))} (from north)
+            </>
+          )}
+          {e.upward.force > 0 && (
+            <>
+              {e.horizontal.force > 0 ? '; ' : ''}upward <strong>{show(e.upward.force, 'force', u)}</strong>
+            </>
+          )}
+          {e.downward.force > 0 && (
+            <>
+              {e.horizontal.force > 0 || e.upward.force > 0 ? '; ' : ''}downward{' '}
+              <strong>{show(e.downward.force, 'force', u)}</strong>
+            </>
+          )}{' '}
+          (total {show(norm(e.governing.total), 'force', u)})
         </dd>
       </dl>
       <div className="table-scroll">
@@ -93,7 +110,11 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
       <ul className="restraint">
         {r.block && (
           <li data-testid="block">
-            <span className="element">{elementName(f.mark, 'block')}</span> Bearing block{' '}
+            <span className="element">{elementName(f.mark, 'block')}</span> Bearing block, bears{' '}
+            {bearingText(planBearing(r.block.direction))} for {show(r.block.thrust, 'force', u)} horizontal
+            {r.block.upwardThrust > 0
+              ? ` and holds ${show(r.block.upwardThrust, 'force', u)} up by its weight`
+              : ''}:{' '}
             <strong>
               {formatDimension(r.block.faceWidth, u)} wide × {formatDimension(r.block.faceHeight, u)} high
             </strong>
@@ -116,7 +137,8 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
         )}
         {r.anchor && (
           <li data-testid="anchor">
-            <span className="element">{elementName(f.mark, 'anchor')}</span> Gravity anchor{' '}
+            <span className="element">{elementName(f.mark, 'anchor')}</span> Gravity anchor, holds{' '}
+            {show(r.anchor.upwardThrust, 'force', u)} up:{' '}
             <strong>
               {formatDimension(r.anchor.length, u)} long × {formatDimension(r.anchor.width, u)} wide ×{' '}
               {formatDimension(r.anchor.height, u)} high
@@ -127,9 +149,10 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
         )}
         {r.trenchBottom && (
           <li data-testid="pad">
-            <span className="element">{elementName(f.mark, 'trenchBottom')}</span> Trench-bottom bearing{' '}
-            {show(r.trenchBottom.bearingArea, 'area', u)}: pad {formatDimension(r.trenchBottom.width, u)} across ×{' '}
-            {formatDimension(r.trenchBottom.length, u)} along the pipe.
+            <span className="element">{elementName(f.mark, 'trenchBottom')}</span> Trench-bottom bearing, bears{' '}
+            {show(e.downward.force, 'force', u)} down: {show(r.trenchBottom.bearingArea, 'area', u)}: pad{' '}
+            {formatDimension(r.trenchBottom.width, u)} across × {formatDimension(r.trenchBottom.length, u)} along the
+            pipe.
           </li>
         )}
         {r.restrainedLegs.map((l) => {

@@ -49,8 +49,9 @@ export const SCHEDULE_COLUMNS: readonly ScheduleColumn[] = [
   col('case', 'Governing case', 'text', (f, c) => caseName(c, f.governingCase)),
   col('thrust', 'Thrust', 'force', (f) => norm(f.thrust)),
   col('horizontal', 'Horizontal thrust', 'force', (f) => f.horizontalThrust),
-  col('upward', 'Upward thrust', 'force', (f) => f.upwardThrust),
-  col('downward', 'Downward thrust', 'force', (f) => f.downwardThrust),
+  col('upward', 'Upward thrust', 'force', (f) => (f.upwardThrust > 0 ? f.upwardThrust : null)),
+  col('downward', 'Downward thrust', 'force', (f) => (f.downwardThrust > 0 ? f.downwardThrust : null)),
+  col('profile', 'Crest or sag', 'text', (f) => f.profile),
   col('bears', 'Block bears toward', 'text', (f) => (f.restraint.block ? bearingText(f.bearingDirection) : null)),
   col('soil', 'Soil', 'text', (f, c) => soilName(c, f.soil)),
   col('area', 'Bearing area required', 'area', (f) => f.restraint.block?.bearingArea ?? null),
@@ -80,7 +81,18 @@ export const SCHEDULE_COLUMNS: readonly ScheduleColumn[] = [
 ];
 
 /** The columns of the compact outputs, by id. */
-export const TABLE_COLUMNS = ['mark', 'chainage', 'fitting', 'pressure', 'case', 'thrust', 'restraint', 'notes'];
+export const TABLE_COLUMNS = [
+  'mark',
+  'chainage',
+  'fitting',
+  'pressure',
+  'case',
+  'horizontal',
+  'upward',
+  'downward',
+  'restraint',
+  'notes',
+];
 export const APP_COLUMNS = [
   'mark',
   'chainage',
@@ -88,8 +100,9 @@ export const APP_COLUMNS = [
   'od',
   'pressure',
   'case',
-  'thrust',
-  'bears',
+  'horizontal',
+  'upward',
+  'downward',
   'restraint',
   'concrete',
   'notes',

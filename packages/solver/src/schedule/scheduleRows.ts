@@ -46,6 +46,11 @@ export interface ScheduleFitting {
   downwardThrust: number;
   /** degrees clockwise from north of the horizontal thrust, or null */
   bearingDirection: number | null;
+  /**
+   * a bend with a vertical part: a crest (its thrust lifts: an anchor holds it) or a sag (its thrust
+   * bears down on the trench bottom); null for a plan bend or any other fitting
+   */
+  profile: 'crest' | 'sag' | null;
   waterWeight: number;
   restraint: {
     block: ScheduleBlock | null;
@@ -91,6 +96,22 @@ export interface Schedule {
   cautions: readonly string[];
 }
 
+/**
+ * A change of grade smaller than this is taken up along the line, not a vertical bend a crew marks,
+ * degrees (Mainbrace rule: the smallest standard fitting bend is 11.25°; joints deflect a few degrees).
+ */
+const VERTICAL_BEND = 1;
+
+/** Crest or sag of a bend with a vertical part, by the way its largest vertical thrust points. */
+export function fittingProfile(f: FittingAnalysis): ScheduleFitting['profile'] {
+  const g = f.geometry;
+  if (g.kind !== 'bend' && g.kind !== 'reducing-bend') return null;
+  if (g.verticalDeflection === null || Math.abs(g.verticalDeflection) < VERTICAL_BEND) return null;
+  const { upward, downward } = f.envelope;
+  if (upward.force <= 0 && downward.force <= 0) return null;
+  return upward.force >= downward.force ? 'crest' : 'sag';
+}
+
 function row(a: Analysis, f: FittingAnalysis, words: (d: Diagnostic) => string): ScheduleFitting {
   const { restraint: r, envelope: e, geometry: g } = f;
   // The schedule keeps every block field but the depth of the face bottom, an intermediate value.
@@ -132,6 +153,7 @@ function row(a: Analysis, f: FittingAnalysis, words: (d: Diagnostic) => string):
     upwardThrust: e.upward.force,
     downwardThrust: e.downward.force,
     bearingDirection: e.horizontal.force > 0 ? planBearing(e.horizontal.direction) : null,
+    profile: fittingProfile(f),
     waterWeight: f.waterWeight,
     restraint: {
       block: scheduled(r.block),
