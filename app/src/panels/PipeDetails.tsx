@@ -9,6 +9,8 @@ import {
   findSize,
   MATERIALS,
   nearestSize,
+  notVerifiedText,
+  REGISTER,
   type Material,
   type Pipe,
   type Project,
@@ -30,6 +32,7 @@ export function PipeDetails({ pipe }: { pipe: Pipe; project: Project }) {
   const seriesChoices = CATALOG.filter((s) => s.material === pipe.material);
   const length = pipeLength(useAnalysis(), pipe);
   const bedding = findBedding(pipe.trenchType);
+  const rating = pipe.series && pipe.nominal ? findSize(pipe.series, pipe.nominal)?.rating : undefined;
 
   const pickSeries = (id: string) => {
     if (id === CUSTOM) return set({ series: undefined, nominal: undefined });
@@ -124,6 +127,14 @@ export function PipeDetails({ pipe }: { pipe: Pipe; project: Project }) {
           <div className="field-hint">
             OD {show(pipe.outsideDiameter, 'diameter', u, 4)}, ID {show(pipe.insideDiameter, 'diameter', u, 4)}
           </div>
+          {rating && (
+            <div className="field-hint" data-testid="pipe-rating">
+              Rated {rating.label}: working {show(rating.working, 'pressure', u, 4)}, with surge{' '}
+              {show(rating.withSurge, 'pressure', u, 4)}, field test {show(rating.test, 'pressure', u, 4)}
+              {REGISTER[rating.basis].verified ? '' : ` (${notVerifiedText(REGISTER[rating.basis])})`}. Each case is
+              checked against its limit.
+            </div>
+          )}
         </div>
       ) : (
         <div className="field-row">

@@ -18,6 +18,7 @@ import { diagnostic, uniqueDiagnostics, type Diagnostic } from '../diagnostics/d
 import type { ProvenanceId } from '../provenance/register.js';
 import type { CalcStep } from './calcRecord.js';
 import { implausibleInputs } from '../model/plausibility.js';
+import { pipeRatingChecks } from '../pressure/pipeRating.js';
 
 /** Everything computed for one fitting; the schedule, the plan and the record all read this. */
 export interface FittingAnalysis {
@@ -57,7 +58,10 @@ export interface Analysis {
   chainage: Map<string, number>;
   /** marks of every fitting, tie-ins included */
   marks: Map<string, string>;
-  /** findings about the inputs of the whole project (values outside their usual range), most severe first */
+  /**
+   * findings about the project as a whole: inputs outside their usual range, and pipes loaded past
+   * their pressure rating; most severe first
+   */
   diagnostics: Diagnostic[];
 }
 
@@ -155,7 +159,7 @@ export function analyseProject(project: Project): Analysis {
     runOf: layout.runOf,
     chainage: layout.chainage,
     marks,
-    diagnostics: uniqueDiagnostics(inputs),
+    diagnostics: uniqueDiagnostics([...inputs, ...pipeRatingChecks(project)]),
   };
 }
 

@@ -64,18 +64,23 @@ describe('the pipe catalogue', () => {
   });
 
   it('makes AWWA C900 PVC to the ductile-iron outside diameter of the same nominal size', () => {
-    // AWWA C900 DI-OD series = C151 ODs, domain.md §7.2
-    for (const id of ['pvc-c900-dr18', 'pvc-c900-dr14']) {
-      const series = findSeries(id)!;
-      expect(series.sizes.map((s) => s.nominal)).toEqual(['4', '6', '8', '10', '12', '14', '16', '18', '20', '24']);
-      for (const s of series.sizes) expect(s.outsideDiameter).toBe(size('di-awwa-pc350', s.nominal).outsideDiameter);
+    // AWWA C900 DI-OD series = C151 ODs, docs/check-values.md CV-26 (domain reference §7.2)
+    const upTo24 = ['4', '6', '8', '10', '12', '14', '16', '18', '20', '24'];
+    expect(findSeries('pvc-c900-dr14')!.sizes.map((s) => s.nominal)).toEqual(upTo24);
+    // DR 18 and DR 25 go on above 24 in (C900-16 spans 4–60 in; the DR/size pairs above 24 in from memory)
+    for (const id of ['pvc-c900-dr18', 'pvc-c900-dr25'])
+      expect(findSeries(id)!.sizes.map((s) => s.nominal)).toEqual([...upTo24, '30', '36']);
+    for (const id of ['pvc-c900-dr18', 'pvc-c900-dr14', 'pvc-c900-dr25']) {
+      for (const s of findSeries(id)!.sizes)
+        expect(s.outsideDiameter).toBe(size('di-awwa-pc350', s.nominal).outsideDiameter);
     }
+    expectClose(odInches('pvc-c900-dr25', '36'), 38.3, 1e-12);
   });
 
   it('keeps the dimension-ratio rule t = OD/DR and ID = OD − 2t on every plastic series', () => {
     // prettier-ignore
     const dr: Record<string, number> = {
-      'pvc-c900-dr18': 18, 'pvc-c900-dr14': 14,
+      'pvc-c900-dr18': 18, 'pvc-c900-dr14': 14, 'pvc-c900-dr25': 25,
       'hdpe-dips-dr11': 11, 'hdpe-dips-dr17': 17, 'hdpe-ips-dr11': 11, 'hdpe-ips-dr17': 17,
     };
     for (const [id, ratio] of Object.entries(dr)) {
@@ -117,6 +122,7 @@ describe('the pipe catalogue', () => {
       'hdpe-ips-dr17',
       'pvc-c900-dr14',
       'pvc-c900-dr18',
+      'pvc-c900-dr25',
     ]);
     for (const series of CATALOG) {
       expect(new Set(series.sizes.map((s) => s.nominal)).size).toBe(series.sizes.length);
@@ -125,6 +131,10 @@ describe('the pipe catalogue', () => {
       for (const s of series.sizes) {
         expect(s.insideDiameter).toBeGreaterThan(0);
         expect(s.insideDiameter).toBeLessThan(s.outsideDiameter);
+        // every catalogue size is rated, and the limits never fall below the working rating
+        expect(s.rating).toBeDefined();
+        expect(s.rating!.withSurge).toBeGreaterThanOrEqual(s.rating!.working);
+        expect(s.rating!.test).toBeGreaterThanOrEqual(s.rating!.working);
       }
     }
   });

@@ -3,7 +3,7 @@ import { DI_AWWA_PC250, DI_AWWA_PC350 } from './ductileIronAwwa.js';
 import { DI_EN545 } from './ductileIronEn545.js';
 import { HDPE_C906_SERIES } from './hdpeC906.js';
 import type { PipeSeries, PipeSize } from './pipeSeries.js';
-import { PVC_C900_DR14, PVC_C900_DR18 } from './pvcC900.js';
+import { PVC_C900_DR14, PVC_C900_DR18, PVC_C900_DR25 } from './pvcC900.js';
 
 /** Every pipe series the editor offers, each naming its standard; ids are stored in project files. */
 export const CATALOG: readonly PipeSeries[] = [
@@ -12,6 +12,7 @@ export const CATALOG: readonly PipeSeries[] = [
   DI_EN545,
   PVC_C900_DR18,
   PVC_C900_DR14,
+  PVC_C900_DR25,
   ...HDPE_C906_SERIES,
 ];
 

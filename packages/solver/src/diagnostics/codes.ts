@@ -160,6 +160,27 @@ export const DIAGNOSTIC_CODES = {
     meaning: 'A bend sharper than 90°: restrained lengths grow quickly and the method is uncertain.',
     action: 'Consider a block or a different layout.',
   },
+  'pipe.over-working-rating': {
+    severity: 'error',
+    values: { pressure: 'pressure', limit: 'pressure' },
+    meaning:
+      'A working case puts more pressure on the pipe than its rated working pressure (AWWA pressure class, EN PFA, PN). The pipe is not adequate.',
+    action: 'Choose a higher class of pipe, or lower the working pressure.',
+  },
+  'pipe.over-surge-rating': {
+    severity: 'error',
+    values: { pressure: 'pressure', limit: 'pressure' },
+    meaning:
+      'A surge case (or a case of no stated kind) puts more pressure on the pipe than its rating allows with surge (the class plus the standard’s surge allowance, EN PMA). The pipe is not adequate.',
+    action: 'Choose a higher class of pipe, or limit the surge (slower valve closing, surge protection).',
+  },
+  'pipe.over-test-rating': {
+    severity: 'error',
+    values: { pressure: 'pressure', limit: 'pressure' },
+    meaning:
+      'The field-test case puts more pressure on the pipe than the test limit for its class (EN PEA; AWWA: the pipe’s design pressure). The test would overload the pipe.',
+    action: 'Lower the test pressure, test in shorter sections, or choose a higher class of pipe.',
+  },
   'input.pressure-unusual': {
     severity: 'warning',
     values: { value: 'pressure', low: 'pressure', high: 'pressure' },

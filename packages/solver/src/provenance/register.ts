@@ -1,4 +1,5 @@
 import type { ProvenanceEntry } from './entry.js';
+import { PSI } from '../units/conversions.js';
 
 const DIPRA = 'DIPRA, Thrust Restraint Design for Ductile Iron Pipe, 7th ed. (2016)';
 
@@ -226,6 +227,48 @@ export const REGISTER = {
     unit: 'kg/m³',
     kind: 'published',
     source: 'EN 545 (ductile iron); ASTM D1784 (PVC 12454); ASTM D3350 (PE4710); usual carbon-steel value',
+    verified: false,
+  },
+  'rating.di-awwa': {
+    quantity:
+      'Ductile iron AWWA C151 pressure classes 150–350 psi: working ≤ the class; working + surge and the field test ≤ the class + the 100 psi surge allowance of the thickness design',
+    value: { surgeAllowance: 100 * PSI },
+    unit: 'Pa',
+    kind: 'published',
+    source:
+      'AWWA C150/A21.50, thickness design for rated working pressure plus a 100 psi surge allowance (read in a consulting engineer’s restatement); AWWA C600, test pressure not above the pipe’s design pressure (read in a manufacturer’s field-testing guideline)',
+    clause: 'C150 design basis; C600 hydrostatic test criteria',
+    verified: false,
+  },
+  'rating.pvc-c900': {
+    quantity:
+      'PVC AWWA C900-16 pressure class by DR (DR 14: 305, DR 18: 235, DR 25: 165 psi); working + occasional surge ≤ 1.6 × the class; field test ≤ the same limit',
+    value: { dr14: 305 * PSI, dr18: 235 * PSI, dr25: 165 * PSI, occasionalSurgeFactor: 1.6 },
+    unit: 'Pa',
+    kind: 'published',
+    source:
+      'AWWA C900-16 (DR 14 and DR 18 classes read in a producer’s C900 specification; DR 25 and the 1.6 factor from memory); AWWA C605, test pressure not above the pipe’s design pressure (from memory)',
+    clause: 'C900-16 pressure class and short-term rating; C605 hydrostatic testing',
+    verified: false,
+  },
+  'rating.pe-c906': {
+    quantity:
+      'PE 4710 AWWA C906 pressure class by DR (DR 11: 200, DR 17: 125 psi); working + occasional surge ≤ 2 × the class; field test ≤ 1.5 × the class',
+    value: { dr11: 200 * PSI, dr17: 125 * PSI, occasionalSurgeFactor: 2, testFactor: 1.5 },
+    unit: 'Pa',
+    kind: 'published',
+    source:
+      'AWWA C906-21 pressure class table and surge allowances (from memory); ASTM F2164 field test limit (from memory)',
+    clause: 'C906 Sec. 4.6 and Table 9 (pressure class); F2164 test pressure',
+    verified: false,
+  },
+  'rating.en545': {
+    quantity: 'Ductile iron EN 545 pressure class Cxx: PFA = xx bar, PMA = 1.2 × PFA, PEA = 1.2 × PFA + 5 bar',
+    value: { pmaFactor: 1.2, peaMargin: 5e5 },
+    unit: 'Pa',
+    kind: 'published',
+    source: 'EN 545:2010, Ductile iron pipes, fittings, accessories and their joints for water pipelines (from memory)',
+    clause: 'definitions of PFA, PMA, PEA and the pressure-class table',
     verified: false,
   },
   'fitting.straight-tolerance': {
