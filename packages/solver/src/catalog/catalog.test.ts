@@ -1,7 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import { expectClose } from '../../test/tolerance.js';
 import { INCH } from '../units/conversions.js';
-import { CATALOG, findSeries, findSize, nearestSize, seriesForMaterial } from './catalog.js';
+import { CATALOG, findSeries, findSize, nearestSize, seriesChoices, seriesForMaterial } from './catalog.js';
 import { EN545_CLASS } from './ductileIronEn545.js';
 import { pipeWeightPerLength } from './materialDensity.js';
 
@@ -120,13 +120,17 @@ describe('the pipe catalogue', () => {
       'hdpe-dips-dr17',
       'hdpe-ips-dr11',
       'hdpe-ips-dr17',
+      'pe100-iso4427-sdr11',
+      'pe100-iso4427-sdr17',
       'pvc-c900-dr14',
       'pvc-c900-dr18',
       'pvc-c900-dr25',
+      'pvcu-iso1452-pn10',
+      'pvcu-iso1452-pn16',
     ]);
     for (const series of CATALOG) {
       expect(new Set(series.sizes.map((s) => s.nominal)).size).toBe(series.sizes.length);
-      expect(series.standard).toMatch(/AWWA|EN 545/);
+      expect(series.standard).toMatch(/AWWA|EN 545|ISO 1452|ISO 4427/);
       expect(series.wallBasis).toMatch(/ID = OD − 2/);
       for (const s of series.sizes) {
         expect(s.insideDiameter).toBeGreaterThan(0);
@@ -141,6 +145,14 @@ describe('the pipe catalogue', () => {
 
   it('lists the series of a material and finds the nearest size by outside diameter', () => {
     expect(seriesForMaterial('ductile-iron').map((s) => s.id)).toEqual(['di-awwa-pc350', 'di-awwa-pc250', 'di-en545']);
+    // a metric project is offered metric pipe first, a US project inch pipe first
+    expect(seriesChoices('pvc', 'si')[0]!.id).toBe('pvcu-iso1452-pn10');
+    expect(seriesChoices('hdpe', 'si')[0]!.id).toBe('pe100-iso4427-sdr11');
+    expect(seriesChoices('pvc', 'us')[0]!.id).toBe('pvc-c900-dr18');
+    expect(seriesChoices('ductile-iron', 'si')[0]!.id).toBe('di-en545');
+    expect(seriesChoices('pvc', 'si')).toHaveLength(seriesForMaterial('pvc').length);
+    expect(seriesForMaterial('pvc').map((s) => s.id)).toContain('pvcu-iso1452-pn10');
+    expect(seriesForMaterial('hdpe').map((s) => s.id)).toContain('pe100-iso4427-sdr11');
     expect(seriesForMaterial('steel')).toEqual([]);
     expect(nearestSize('di-en545', 0.33)?.nominal).toBe('DN300'); // 326 mm is 4 mm away, 378 mm is 48
     expect(nearestSize('pvc-c900-dr18', 10 * INCH)?.nominal).toBe('8'); // 9.05 in is 0.95 away, 11.10 is 1.10

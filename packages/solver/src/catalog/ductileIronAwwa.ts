@@ -46,6 +46,7 @@ export const DI_AWWA_PC350: PipeSeries = {
   id: 'di-awwa-pc350',
   label: 'Ductile iron, AWWA C151, pressure class 350',
   material: 'ductile-iron',
+  sizing: 'inch',
   standard: STANDARD,
   wallBasis: 'ID = OD − 2 × t, t the pressure class 350 nominal wall of AWWA C150/C151 (cement lining not deducted)',
   sizes: sizesFrom(PC350_WALL, 350),
@@ -55,6 +56,7 @@ export const DI_AWWA_PC250: PipeSeries = {
   id: 'di-awwa-pc250',
   label: 'Ductile iron, AWWA C151, pressure class 250',
   material: 'ductile-iron',
+  sizing: 'inch',
   standard: STANDARD,
   wallBasis:
     'ID = OD − 2 × t, t the pressure class 250 nominal wall of AWWA C150/C151 (cement lining not deducted); ' +

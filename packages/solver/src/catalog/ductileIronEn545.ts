@@ -30,6 +30,7 @@ export const DI_EN545: PipeSeries = {
   id: 'di-en545',
   label: 'Ductile iron, EN 545 / ISO 2531, preferred classes',
   material: 'ductile-iron',
+  sizing: 'metric',
   standard: 'EN 545:2010 / ISO 2531 external diameters and pressure-class minimum walls',
   wallBasis:
     'ID = OD − 2 × t, t the EN 545:2010 minimum wall of the preferred class (C40 to DN300, C30 DN350–600, ' +

@@ -36,6 +36,7 @@ function c906Series(odSeries: 'ips' | 'dips', dr: 11 | 17): PipeSeries {
     id: `hdpe-${odSeries}-dr${dr}`,
     label: `HDPE (PE 4710), AWWA C906, ${name}, DR ${dr} (${c906Rating(dr).label})`,
     material: 'hdpe',
+    sizing: 'inch',
     standard:
       odSeries === 'ips'
         ? 'AWWA C906, iron pipe size (IPS) outside diameters of ASME B36.10'

@@ -42,6 +42,8 @@ export interface PipeSeries {
   standard: string;
   /** how the inside diameter was obtained */
   wallBasis: string;
+  /** sizes named in inches (AWWA) or in millimetres (EN, ISO): the picker offers a project's own first */
+  sizing: 'inch' | 'metric';
   sizes: readonly PipeSize[];
 }
 

@@ -1,8 +1,10 @@
 import { describe, it, expect } from 'vitest';
 import { expectClose } from '../../test/tolerance.js';
 import { PSI } from '../units/conversions.js';
-import { findSize } from './catalog.js';
+import { findSeries, findSize } from './catalog.js';
+import { metricWall, pvcSdr, PE100_PN, PVC_SDR } from './metricPlastic.js';
 import { BAR, plasticPressure } from './pressureRatings.js';
+import { REGISTER } from '../provenance/register.js';
 
 const rating = (series: string, nominal: string) => {
   const r = findSize(series, nominal)?.rating;
@@ -67,5 +69,43 @@ describe('pressure ratings of the catalogue series', () => {
     const c25 = rating('di-en545', 'DN800');
     expectClose(c25.withSurge / BAR, 30, 1e-12);
     expectClose(c25.test / BAR, 35, 1e-12);
+  });
+
+  it('gives metric PVC-U its PN from the design stress of its size: SDR 26 and SDR 21 both make PN 10', () => {
+    // docs/check-values.md CV-31: 20·σs/(SDR − 1) bar = 20·12.5/25 = 10 (above 90 mm), 20·10/20 = 10 (to 90 mm);
+    // PN 16: 20·12.5/16 = 15.6 and 20·10/12.6 = 15.9, the nominal PN the standard rounds to
+    const stress = REGISTER['rating.pvc-iso1452-stress'].value;
+    expectClose(plasticPressure(stress.above90mm, PVC_SDR[10].above90) / BAR, 10, 1e-12);
+    expectClose(plasticPressure(stress.upTo90mm, PVC_SDR[10].upTo90) / BAR, 10, 1e-12);
+    expectClose(plasticPressure(stress.above90mm, PVC_SDR[16].above90) / BAR, 16, 0.03);
+    expectClose(plasticPressure(stress.upTo90mm, PVC_SDR[16].upTo90) / BAR, 16, 0.03);
+    expect(pvcSdr(10, 90)).toBe(21);
+    expect(pvcSdr(10, 110)).toBe(26);
+    const pn10 = rating('pvcu-iso1452-pn10', 'dn110');
+    expectClose(pn10.working / BAR, 10, 1e-12);
+    expectClose(pn10.withSurge / BAR, 12.5, 1e-12);
+    expectClose(pn10.test / BAR, 15, 1e-12);
+  });
+
+  it('gives PE 100 its PN from 8 MPa: SDR 11 is PN 16 and SDR 17 is PN 10', () => {
+    // docs/check-values.md CV-31: 20·8/(11 − 1) = 16 bar, 20·8/(17 − 1) = 10 bar
+    const sigma = REGISTER['rating.pe100-stress'].value;
+    for (const sdr of [11, 17] as const) {
+      expectClose(plasticPressure(sigma, sdr) / BAR, PE100_PN[sdr], 1e-12);
+      expectClose(rating(`pe100-iso4427-sdr${sdr}`, 'dn160').working / BAR, PE100_PN[sdr], 1e-12);
+    }
+  });
+
+  it('takes metric plastic walls as OD/SDR rounded up to 0.1 mm', () => {
+    // hand: 110/26 = 4.231 → 4.3 mm; 63/21 = 3.000 → 3.0 mm; 160/11 = 14.545 → 14.6 mm; 90/13.6 = 6.618 → 6.7 mm
+    expectClose(metricWall(110, 26), 4.3e-3, 1e-9);
+    expectClose(metricWall(63, 21), 3.0e-3, 1e-9);
+    expectClose(metricWall(160, 11), 14.6e-3, 1e-9);
+    expectClose(metricWall(90, 13.6), 6.7e-3, 1e-9);
+    const s = findSize('pe100-iso4427-sdr11', 'dn160')!;
+    expectClose(s.outsideDiameter, 0.16, 1e-12);
+    expectClose(s.insideDiameter, 0.16 - 2 * 14.6e-3, 1e-9);
+    expect(findSeries('pvcu-iso1452-pn10')!.sizes.map((x) => x.nominal)).toContain('dn630');
+    expect(findSeries('pe100-iso4427-sdr17')!.sizes.at(-1)!.nominal).toBe('dn1000');
   });
 });

@@ -63,6 +63,19 @@ export function en545Rating(pressureClass: string): PressureRating {
   };
 }
 
+/** Metric PVC-U or PE of nominal pressure PN (bar): PFA = PN, PMA = 1.25·PFA, PEA = 1.5·PFA (register: rating.plastic-metric). */
+export function metricPlasticRating(pn: number): PressureRating {
+  const r = REGISTER['rating.plastic-metric'].value;
+  const pfa = pn * BAR;
+  return {
+    label: `PN ${pn}`,
+    working: pfa,
+    withSurge: r.pmaFactor * pfa,
+    test: r.peaFactor * pfa,
+    basis: 'rating.plastic-metric',
+  };
+}
+
 /**
  * Pressure a plastic pipe of a standard dimension ratio holds at its design stress, from the thin
  * wall hoop stress σ = p·(SDR − 1)/2 (Barlow with the mean diameter): p = 2·σs/(SDR − 1), Pa.

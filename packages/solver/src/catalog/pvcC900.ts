@@ -25,6 +25,7 @@ function c900Series(dr: 14 | 18 | 25): PipeSeries {
     id: `pvc-c900-dr${dr}`,
     label: `PVC, AWWA C900, DR ${dr} (${rating.label})`,
     material: 'pvc',
+    sizing: 'inch',
     standard: 'AWWA C900-16 (DI-OD series); outside diameters of AWWA C151',
     wallBasis: `minimum wall t = OD/${dr}; ID = OD − 2t`,
     sizes: C900_NOMINALS[dr].map((n) => sizeFromDr(n, `${n} in`, C151_OD[n]! * INCH, dr, rating)),

@@ -271,6 +271,44 @@ export const REGISTER = {
     clause: 'definitions of PFA, PMA, PEA and the pressure-class table',
     verified: false,
   },
+  'rating.plastic-metric': {
+    quantity:
+      'Metric PVC-U and PE: PFA = PN (20 °C), PMA = 1.25 × PFA, PEA = 1.5 × PFA; PN = 20·σs/(SDR − 1) bar, σs = MRS/C',
+    value: { pmaFactor: 1.25, peaFactor: 1.5 },
+    unit: '—',
+    kind: 'published',
+    source:
+      'ISO 1452-2:2009 (PVC-U) and ISO 4427-2:2019 / EN 12201-2:2011 (PE); allowable pressures after EN 805:2000 (from memory)',
+    clause: 'PN, SDR and design coefficient tables; PFA/PMA/PEA',
+    verified: false,
+  },
+  'rating.pvc-iso1452-stress': {
+    quantity: 'PVC-U design stress σs = MRS/C: MRS 25 MPa, C 2.5 to 90 mm OD and 2.0 above (10 and 12.5 MPa)',
+    value: { upTo90mm: 10e6, above90mm: 12.5e6 },
+    unit: 'Pa',
+    kind: 'published',
+    source: 'ISO 1452-1:2009 / ISO 1452-2:2009, design coefficient C (from memory)',
+    clause: 'overall service (design) coefficient',
+    verified: false,
+  },
+  'rating.pe100-stress': {
+    quantity: 'PE 100 design stress σs = MRS/C: MRS 10 MPa, C 1.25 (8 MPa)',
+    value: 8e6,
+    unit: 'Pa',
+    kind: 'published',
+    source: 'ISO 4427-1:2019 / EN 12201-1:2011, PE 100 MRS and minimum design coefficient for water (from memory)',
+    clause: 'MRS and C',
+    verified: false,
+  },
+  'rating.metric-wall-rounding': {
+    quantity: 'Minimum wall of a metric plastic pipe: OD/SDR rounded up to 0.1 mm',
+    value: 1e-4,
+    unit: 'm',
+    kind: 'common practice',
+    source:
+      'ISO 4065 wall-thickness rounding (from memory); the standards’ tables may differ by 0.1 mm, which changes only the inside area',
+    verified: false,
+  },
   'fitting.straight-tolerance': {
     quantity: 'Two pipes deflecting less than this are a straight joint',
     value: 0.5,
