@@ -235,9 +235,10 @@ export const REGISTER = {
     value: { surgeAllowance: 100 * PSI },
     unit: 'Pa',
     kind: 'published',
-    source:
-      'AWWA C150/A21.50, thickness design for rated working pressure plus a 100 psi surge allowance (read in a consulting engineer’s restatement); AWWA C600, test pressure not above the pipe’s design pressure (read in a manufacturer’s field-testing guideline)',
-    clause: 'C150 design basis; C600 hydrostatic test criteria',
+    // read second-hand: the C150 design basis in a consulting engineer's restatement, the C600 test criterion in a
+    // manufacturer's field-testing guideline
+    source: 'AWWA C150/A21.50 and AWWA C600',
+    clause: 'thickness design basis (working pressure plus 100 psi surge allowance); hydrostatic test pressure',
     verified: false,
   },
   'rating.pvc-c900': {
@@ -246,9 +247,10 @@ export const REGISTER = {
     value: { dr14: 305 * PSI, dr18: 235 * PSI, dr25: 165 * PSI, occasionalSurgeFactor: 1.6 },
     unit: 'Pa',
     kind: 'published',
-    source:
-      'AWWA C900-16 (DR 14 and DR 18 classes read in a producer’s C900 specification; DR 25 and the 1.6 factor from memory); AWWA C605, test pressure not above the pipe’s design pressure (from memory)',
-    clause: 'C900-16 pressure class and short-term rating; C605 hydrostatic testing',
+    // DR 14 and DR 18 classes read in a producer's C900 specification; DR 25, the 1.6 factor and the C605 test
+    // limit recalled, not read
+    source: 'AWWA C900-16; AWWA C605-13',
+    clause: 'pressure class and short-term rating; hydrostatic test pressure',
     verified: false,
   },
   'rating.pe-c906': {
@@ -257,9 +259,9 @@ export const REGISTER = {
     value: { dr11: 200 * PSI, dr17: 125 * PSI, occasionalSurgeFactor: 2, testFactor: 1.5 },
     unit: 'Pa',
     kind: 'published',
-    source:
-      'AWWA C906-21 pressure class table and surge allowances (from memory); ASTM F2164 field test limit (from memory)',
-    clause: 'C906 Sec. 4.6 and Table 9 (pressure class); F2164 test pressure',
+    // recalled, not read
+    source: 'AWWA C906-21; ASTM F2164',
+    clause: 'Sec. 4.6 and Table 9, pressure class and surge; field test pressure',
     verified: false,
   },
   'rating.en545': {
@@ -267,8 +269,9 @@ export const REGISTER = {
     value: { pmaFactor: 1.2, peaMargin: 5e5 },
     unit: 'Pa',
     kind: 'published',
-    source: 'EN 545:2010, Ductile iron pipes, fittings, accessories and their joints for water pipelines (from memory)',
-    clause: 'definitions of PFA, PMA, PEA and the pressure-class table',
+    // recalled, not read (the class walls were read in a producer's reproduction of the table)
+    source: 'EN 545:2010',
+    clause: 'definitions of PFA, PMA, PEA',
     verified: false,
   },
   'rating.plastic-metric': {
@@ -277,9 +280,9 @@ export const REGISTER = {
     value: { pmaFactor: 1.25, peaFactor: 1.5 },
     unit: '—',
     kind: 'published',
-    source:
-      'ISO 1452-2:2009 (PVC-U) and ISO 4427-2:2019 / EN 12201-2:2011 (PE); allowable pressures after EN 805:2000 (from memory)',
-    clause: 'PN, SDR and design coefficient tables; PFA/PMA/PEA',
+    // recalled, not read
+    source: 'ISO 1452-2:2009 (PVC-U), ISO 4427-2:2019 / EN 12201-2:2011 (PE), EN 805:2000',
+    clause: 'PN, PFA, PMA, PEA',
     verified: false,
   },
   'rating.pvc-iso1452-stress': {
@@ -287,7 +290,8 @@ export const REGISTER = {
     value: { upTo90mm: 10e6, above90mm: 12.5e6 },
     unit: 'Pa',
     kind: 'published',
-    source: 'ISO 1452-1:2009 / ISO 1452-2:2009, design coefficient C (from memory)',
+    // recalled, not read
+    source: 'ISO 1452-1:2009 / ISO 1452-2:2009',
     clause: 'overall service (design) coefficient',
     verified: false,
   },
@@ -296,8 +300,9 @@ export const REGISTER = {
     value: 8e6,
     unit: 'Pa',
     kind: 'published',
-    source: 'ISO 4427-1:2019 / EN 12201-1:2011, PE 100 MRS and minimum design coefficient for water (from memory)',
-    clause: 'MRS and C',
+    // recalled, not read
+    source: 'ISO 4427-1:2019 / EN 12201-1:2011',
+    clause: 'MRS and design coefficient',
     verified: false,
   },
   'rating.metric-wall-rounding': {
@@ -305,8 +310,80 @@ export const REGISTER = {
     value: 1e-4,
     unit: 'm',
     kind: 'common practice',
-    source:
-      'ISO 4065 wall-thickness rounding (from memory); the standards’ tables may differ by 0.1 mm, which changes only the inside area',
+    // recalled, not read; the standards' tables may differ by 0.1 mm, which changes only the inside area
+    source: 'ISO 4065',
+    clause: 'wall-thickness rounding',
+    verified: false,
+  },
+  'surge.joukowsky': {
+    quantity: 'Joukowsky pressure rise for an instantaneous velocity change ΔP = ρ·a·Δv',
+    value: null,
+    unit: '—',
+    kind: 'published',
+    source: 'Joukowsky (1900); Hicks, Civil Engineering Formulas (McGraw-Hill), ch. 12 Water hammer',
+    clause: 'water-hammer pressure rise',
+    verified: false,
+  },
+  'surge.korteweg': {
+    quantity: 'Korteweg wave speed a = √(K/ρ) / √(1 + c₁·K·D/(E·e)), D the inside diameter, e the wall',
+    value: null,
+    unit: '—',
+    kind: 'published',
+    source: 'Hicks, Civil Engineering Formulas (McGraw-Hill), ch. 12 (read in a copy of the book)',
+    clause: 'Eq. 12.63, velocity of a pressure wave along a pipe',
+    verified: true,
+  },
+  'surge.support-factor': {
+    quantity:
+      'Pipe support factor c₁: 1 for pipe free to move at its joints (gasketed ductile iron and PVC); 1 − ν² for pipe anchored throughout (fused PE, welded steel)',
+    value: null,
+    unit: '—',
+    kind: 'published',
+    // read as restated in two engineering references, not in the book itself
+    source: 'Wylie & Streeter, Fluid Transients in Systems (1993)',
+    clause: 'wave speed in thin-walled pipe, support cases',
+    verified: false,
+  },
+  'surge.water-bulk-modulus': {
+    quantity: 'Bulk modulus of water at about 20 °C',
+    value: 2.19e9,
+    unit: 'Pa',
+    kind: 'published',
+    // recalled, not read
+    source: 'Wylie & Streeter, Fluid Transients in Systems (1993)',
+    clause: 'bulk modulus of water',
+    verified: false,
+  },
+  'surge.pipe-elasticity': {
+    quantity:
+      'Short-term modulus of elasticity E and Poisson’s ratio ν of pipe materials for the wave speed (ductile iron, PVC, PE, steel)',
+    value: {
+      'ductile-iron.E': 165e9,
+      'ductile-iron.nu': 0.28,
+      'pvc.E': 2.76e9,
+      'pvc.nu': 0.38,
+      'hdpe.E': 0.79e9,
+      'hdpe.nu': 0.45,
+      'steel.E': 207e9,
+      'steel.nu': 0.3,
+    },
+    unit: 'Pa',
+    kind: 'published',
+    // E of PVC (400,000 psi) and HDPE (115,000 psi) read in a web copy of a thermoplastic surge note; ductile iron
+    // 24 × 10⁶ psi reproduces Moser's Table 4.1 wave speeds (read); steel 30 × 10⁶ psi usual; ν recalled, not read
+    source: 'Moser, Buried Pipe Design (McGraw-Hill); Uni-Bell, Handbook of PVC Pipe Design and Construction',
+    clause: 'material properties for water-hammer wave speed',
+    verified: false,
+  },
+  'check.thermoplastic-surge-table': {
+    quantity:
+      'Check value: surge per 1 ft/s of sudden velocity change, PVC DR 18 / DR 25 17.4 / 14.7 psi (E 400,000 psi), HDPE DR 11 / DR 17 12.7 / 9.9 psi (E 115,000 psi), from a = 4660/√(1 + K·(DR − 2)/E), K 300,000 psi',
+    value: { 'pvc.dr18': 17.4, 'pvc.dr25': 14.7, 'hdpe.dr11': 12.7, 'hdpe.dr17': 9.9 },
+    unit: 'psi',
+    kind: 'published',
+    // formula recalled; table values read in a web copy of a thermoplastic pipe design note
+    source: 'Uni-Bell, Handbook of PVC Pipe Design and Construction',
+    clause: 'surge pressure for a 1 ft/s velocity change',
     verified: false,
   },
   'fitting.straight-tolerance': {
