@@ -34,7 +34,7 @@ export const DI_EN545: PipeSeries = {
   standard: 'EN 545:2010 / ISO 2531 external diameters and pressure-class minimum walls',
   wallBasis:
     'ID = OD − 2 × t, t the EN 545:2010 minimum wall of the preferred class (C40 to DN300, C30 DN350–600, ' +
-    'C25 DN700–1200; DN450, 1100, 1200 from memory); nominal walls are thicker, cement lining not deducted',
+    'C25 DN700–1200; DN450, 1100, 1200 not verified against EN 545:2010, wall table); nominal walls are thicker, cement lining not deducted',
   sizes: EN545.map(([dn, od, wall, pressureClass]) =>
     sizeFromWall(`DN${dn}`, `DN ${dn}`, od * MM, wall * MM, en545Rating(pressureClass)),
   ),

@@ -151,8 +151,16 @@ export const DIAGNOSTIC_CODES = {
     severity: 'warning',
     values: {},
     meaning:
-      'The restrained-length method and its friction values are the ductile-iron manual’s; the pipe is of another material.',
-    action: 'Use friction values for the material from the restrained-joint maker.',
+      'The restrained-length method is the ductile-iron manual’s; the pipe is of another material and is sized with the pipe–soil friction (and adhesion) ratios the project gives the soil.',
+    action: 'Confirm those ratios for this material with the restrained-joint maker or a geotechnical engineer.',
+  },
+  'joints.no-material-basis': {
+    severity: 'error',
+    values: { frictionMissing: 'ratio', adhesionMissing: 'ratio' },
+    meaning:
+      'Restrained joints on a pipe that is not ductile iron need the pipe–soil friction ratio f_φ (and, in a soil with cohesion, the adhesion ratio f_c) for that material; the project gives none and no published default was found, so the joints are not sized. The restraint is not adequate.',
+    action:
+      'Give the soil the pipe friction (and adhesion) ratio for this material from the restrained-joint maker or a geotechnical engineer, or hold the fitting with concrete.',
   },
   'joints.sharp-bend': {
     severity: 'warning',

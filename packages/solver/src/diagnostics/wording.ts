@@ -80,7 +80,14 @@ const WORDS: Record<DiagnosticCode, Words> = {
   'joints.fused-pe': (_v, s, c) =>
     `${capital(leg(s, c))} is fused PE, which is end-load bearing: restrain the transitions to gasketed pipe and allow for thermal and Poisson loads.`,
   'joints.material-basis': (_v, s, c) =>
-    `${capital(leg(s, c))} is ${s.pipe ? c.material(s.pipe) : 'not ductile iron'}: the restrained-length method is the ductile-iron manual’s; use friction values for this material from the restrained-joint maker.`,
+    `${capital(leg(s, c))} is ${s.pipe ? c.material(s.pipe) : 'not ductile iron'}: its restrained length uses the ductile-iron manual’s method with the friction ratios given for ${soil(s, c)}; confirm them for this material with the restrained-joint maker.`,
+  'joints.no-material-basis': (v, s, c) => {
+    const missing = [
+      ...(v.frictionMissing === '1' ? ['pipe friction ratio f_φ'] : []),
+      ...(v.adhesionMissing === '1' ? ['adhesion ratio f_c'] : []),
+    ].join(' and ');
+    return `Not adequate: restrained joints along ${leg(s, c)} (${s.pipe ? c.material(s.pipe) : 'not ductile iron'}) are not sized — there is no published ${missing} for this material to default to. Give ${soil(s, c)} its ${missing} for this pipe (restrained-joint maker or geotechnical engineer), or hold the fitting with concrete.`;
+  },
   'pipe.over-working-rating': (v, s, c) =>
     `Not adequate: ${pipe(s, c)} carries ${v.pressure}${inCase(s, c)}, more than its rated working pressure ${v.limit}; choose a higher class of pipe or lower the working pressure.`,
   'pipe.over-surge-rating': (v, s, c) =>

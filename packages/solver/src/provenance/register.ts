@@ -159,7 +159,7 @@ export const REGISTER = {
     verified: true,
   },
   'joints.friction-ratio': {
-    quantity: 'Pipe–soil friction ratio f_φ in δ = f_φ·φ (default)',
+    quantity: 'Pipe–soil friction ratio f_φ in δ = f_φ·φ (default for ductile iron)',
     value: 0.5,
     unit: '—',
     kind: 'published',
@@ -168,13 +168,23 @@ export const REGISTER = {
     verified: false,
   },
   'joints.adhesion-ratio': {
-    quantity: 'Pipe–soil adhesion ratio f_c in C_p = f_c·c (default)',
+    quantity: 'Pipe–soil adhesion ratio f_c in C_p = f_c·c (default for ductile iron)',
     value: 0.5,
     unit: '—',
     kind: 'published',
     source: DIPRA,
     clause: 'soil-parameter table, f_c',
     verified: false,
+  },
+  'joints.material-basis': {
+    quantity:
+      'Restrained joints on PVC, PE, steel or other pipe: sized only with the project’s own f_φ (and f_c in cohesive soil), refused without them',
+    value: null,
+    unit: '—',
+    kind: 'own rule',
+    source:
+      'Mainbrace rule: no published pipe–soil friction table for these materials was read (restrained-joint makers publish them for PVC)',
+    verified: true,
   },
   'joints.encasement-factor': {
     quantity: 'Friction on polyethylene-encased pipe relative to bare pipe (adhesion neglected)',
