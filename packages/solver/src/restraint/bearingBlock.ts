@@ -58,7 +58,7 @@ export interface BlockResult {
 
 const DIPRA_AREA = 'A_b = T·S_f/S_b (DIPRA, Thrust Restraint Design for Ductile Iron Pipe; AWWA M23 Example 1)';
 const FACE_RULE =
-  'Face height at least the pipe OD and at most half the depth to the block bottom; width 1–2 × height where possible (DIPRA / AWWA M23 rule of thumb, unverified)';
+  'Face height at least the pipe OD and at most half the depth to the block bottom; width 1–2 × height where possible (Mainbrace’s own rule: no published source states it)';
 
 /**
  * Sizes a concrete bearing block against undisturbed soil (domain reference §4.1, §4.7): the area
