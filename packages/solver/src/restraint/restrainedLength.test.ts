@@ -3,7 +3,7 @@ import { analyse } from '../analysis/analyse.js';
 import { route } from '../../test/projectBuilder.js';
 import { expectClose } from '../../test/tolerance.js';
 
-// Hand calculation of the restrained-joint method (domain reference §6.1, DIPRA form from memory):
+// Hand calculation of the restrained-joint method, docs/check-values.md CV-34 (DIPRA form, from memory):
 // 12-in DI, OD D = 0.33528 m, ID 0.3162 m, pipe weight W_p = 700 N/m (given), cover H = 1.2 m,
 // soil γ = 18 kN/m³, φ = 30°, c = 0, f_φ = 0.6, trench type 4 (K_n = 0.85), P = 1 MPa, S_f = 1.5.
 //   W_e = γ·H·D = 18000 × 1.2 × 0.33528 = 7,242.05 N/m
