@@ -104,5 +104,16 @@ export {
   findBedding,
   type Bedding,
 } from './catalog/layingConditions.js';
-export type { PipeSeries, PipeSize } from './catalog/pipeSeries.js';
+export type { PipeSeries, PipeSize, PressureRating } from './catalog/pipeSeries.js';
+export { pipeRating, pipeRatingChecks, caseLimit } from './pressure/pipeRating.js';
+export {
+  surgeEstimate,
+  waveSpeed,
+  pipeWaveSpeed,
+  joukowsky,
+  supportFactor,
+  PIPE_ELASTICITY,
+  type SurgeEstimate,
+  type PipeSurge,
+} from './pressure/surge.js';
 export { proposeTestPressure, type TestProposal, type TestRule, type TestCriterion } from './pressure/testPressure.js';
