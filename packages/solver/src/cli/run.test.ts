@@ -154,3 +154,22 @@ describe('the command line never writes control characters from a file to the te
     expect(missing.stderr).toContain('no node "n99\\u001b[1A"');
   });
 });
+
+describe('the JSON schedule of the command line', () => {
+  it('leaves out what the file already says, unless --full, and keeps every result', async () => {
+    const path = fileOf('demo.json', JSON.stringify(demo()));
+    const compact = JSON.parse((await cli('schedule', path, '--format', 'json')).stdout);
+    const full = JSON.parse((await cli('schedule', path, '--format', 'json', '--full')).stdout);
+    expect(compact.fittings.length).toBe(full.fittings.length);
+    compact.fittings.forEach((f: Record<string, unknown>, i: number) => {
+      const { position, label, soil, pipes, ...results } = full.fittings[i];
+      expect([position, soil]).not.toContain(undefined); // the full form does echo them
+      expect(label === undefined).toBe(false);
+      expect(f.position ?? f.label ?? f.soil).toBeUndefined();
+      expect(f.pipes).toEqual(
+        pipes.map((p: { id: string; toward: string | null }) => ({ id: p.id, toward: p.toward })),
+      );
+      expect({ ...f, pipes: undefined }).toEqual({ ...results, pipes: undefined });
+    });
+  });
+});

@@ -156,7 +156,9 @@ export async function runCli(argv: readonly string[], rawIo: CliIo): Promise<num
     const format = args.options.get('format') ?? 'table';
     // Indented for a person at a terminal or with --pretty; compact into pipes and files.
     const pretty = io.interactive === true || args.options.has('pretty');
-    if (format === 'json') io.out(scheduleJson(scheduleOf(analysis), pretty));
+    // What the file already says (positions, labels, soils, pipe sizes) is left out unless --full.
+    const full = args.options.has('full');
+    if (format === 'json') io.out(scheduleJson(scheduleOf(analysis), { pretty, echo: full }));
     else if (format === 'csv') io.out(scheduleCsv(escapeStrings(scheduleView(analysis, units))));
     else if (format === 'table')
       io.out(scheduleTable(escapeStrings(scheduleView(analysis, units)), escapeControls(project.name)));
