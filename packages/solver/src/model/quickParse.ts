@@ -1,7 +1,7 @@
 import { REGISTER } from '../provenance/register.js';
 import { LIMITS, type LimitId } from './limits.js';
 import type { Project } from './projectSchema.js';
-import { crossCheck } from './crossChecks.js';
+import { MIN_PIPE_LENGTH, overlappingPipes, referenceChecks } from './crossChecks.js';
 import { SMALLEST_VALUE } from './tinyNumbers.js';
 
 /**
@@ -241,6 +241,31 @@ function pipe(v: unknown): Project['pipes'][number] {
 }
 
 /**
+ * True when two nodes may stand at one point without a pipe between them (crossChecks.ts words it):
+ * nodes sorted by x, each compared with those less than MIN_PIPE_LENGTH further east. It finds every
+ * pair the schema's grid finds (a pair that close is that close in x), without a string per cell.
+ */
+function mayCoincide(p: Project): boolean {
+  const n = p.nodes;
+  const order = Array.from(n.keys()).sort((a, b) => n[a]!.x - n[b]!.x);
+  let joined: Set<string> | null = null;
+  for (let k = 0; k < order.length; k++) {
+    const a = n[order[k]!]!;
+    for (let j = k + 1; j < order.length; j++) {
+      const b = n[order[j]!]!;
+      if (b.x - a.x >= MIN_PIPE_LENGTH) break;
+      const dx = a.x - b.x,
+        dy = a.y - b.y,
+        dz = a.elevation - b.elevation;
+      if (Math.sqrt(dx * dx + dy * dy + dz * dz) >= MIN_PIPE_LENGTH) continue;
+      joined ??= new Set(p.pipes.map((x) => `${x.from}\u0000${x.to}`));
+      if (!joined.has(`${a.id}\u0000${b.id}`) && !joined.has(`${b.id}\u0000${a.id}`)) return true;
+    }
+  }
+  return false;
+}
+
+/**
  * The project a decoded JSON value describes, with its defaults, when it is certainly valid; null when
  * it may not be (the schema then decides and words the problems). Never throws.
  */
@@ -265,11 +290,12 @@ export function quickParse(data: unknown): Project | null {
     out.pipes = o.pipes === undefined ? [] : list(o.pipes, 0, pipe);
     const project = out as Project;
     let problem = false;
-    crossCheck(project, {
-      addIssue: () => {
-        problem = true;
-      },
-    } as unknown as Parameters<typeof crossCheck>[1]);
+    const flag = () => {
+      problem = true;
+    };
+    referenceChecks(project, { addIssue: flag });
+    if (!problem && mayCoincide(project)) return null;
+    if (!problem) overlappingPipes(project, flag);
     return problem ? null : project;
   } catch (e) {
     if (e === NO) return null;
