@@ -1,4 +1,5 @@
 import { checkProjectText } from '../state/projectCheck.js';
+import { prepareResults } from '../state/results.js';
 import {
   analyse,
   scheduleCsv,
@@ -70,6 +71,7 @@ export async function openProjectFile(
 ): Promise<void> {
   const r = await readProjectFile(file);
   if (r.ok) {
+    await prepareResults(r.project, r.project.units);
     actions.replaceProject(r.project);
     actions.notify({ tone: 'info', title: `Opened ${file.name}`, lines: [] });
   } else

@@ -18,10 +18,15 @@ import { editProblems } from './editCheck.js';
 /** Typing pauses shorter than this, ms, keep extending the same undo step. */
 const TYPING_WINDOW_MS = 1500;
 
-/** Keeps a selection to ids that still exist (after undo, delete or open). */
+/**
+ * Keeps a selection to ids that still exist (after undo, delete or open); the same object when every
+ * id still exists, so that an edit elsewhere (a keystroke in the name) does not look like a new selection.
+ */
 function prune(sel: Selection, p: Project): Selection {
+  if (sel.nodes.size === 0 && sel.pipes.size === 0) return sel;
   const nodes = new Set(p.nodes.map((n) => n.id));
   const pipes = new Set(p.pipes.map((x) => x.id));
+  if ([...sel.nodes].every((id) => nodes.has(id)) && [...sel.pipes].every((id) => pipes.has(id))) return sel;
   return {
     nodes: new Set([...sel.nodes].filter((id) => nodes.has(id))),
     pipes: new Set([...sel.pipes].filter((id) => pipes.has(id))),
