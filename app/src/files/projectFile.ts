@@ -66,6 +66,7 @@ export async function openProjectFile(
   file: File,
   actions: {
     replaceProject: (p: Project) => void;
+    markSaved?: (p: Project) => void;
     notify: (n: { tone: 'info' | 'error'; title: string; lines: string[] }) => void;
   },
 ): Promise<void> {
@@ -73,6 +74,7 @@ export async function openProjectFile(
   if (r.ok) {
     await prepareResults(r.project, r.project.units);
     actions.replaceProject(r.project);
+    actions.markSaved?.(r.project);
     actions.notify({ tone: 'info', title: `Opened ${file.name}`, lines: [] });
   } else
     actions.notify({ tone: 'error', title: `${file.name} was not opened — your project is unchanged`, lines: r.lines });
