@@ -1,4 +1,5 @@
-import { parseProjectText, problemText, type Project } from '@mainbrace/solver';
+import { problemText, type Project } from '@mainbrace/solver';
+import { checks } from './checks.js';
 import { projectFromText } from './restore.js';
 
 export interface CheckRequest {
@@ -41,7 +42,7 @@ function checker(): Worker | null {
 
 function onPage(text: string, words: CheckRequest['words']): Checked {
   if (words === 'stored') return projectFromText(text);
-  const r = parseProjectText(text);
+  const r = checks().parseProjectText(text);
   return r.ok ? r : { ok: false, lines: r.problems.map(problemText) };
 }
 
