@@ -1,4 +1,4 @@
-import { parseProject, type LoadCase, type Pipe, type Project, type ProjectNode, type Soil } from '@mainbrace/solver';
+import { type LoadCase, type Pipe, type Project, type ProjectNode, type Soil } from '@mainbrace/solver';
 import type { AppState, AppStore, CaseView, DrawerTab, Selection, ToolName } from './store.js';
 import { EMPTY_SELECTION } from './store.js';
 import {
@@ -17,14 +17,20 @@ import type { DrawState } from '../tools/drawTool.js';
 import { fittedView, revealFitting as planCommandReveal, showFitting } from '../tools/planCommands.js';
 import { planInputOf } from '../tools/planBridge.js';
 import { editProblems } from './editCheck.js';
+import { checks } from './checks.js';
 
 /** Typing pauses shorter than this, ms, keep extending the same undo step. */
 const TYPING_WINDOW_MS = 1500;
 
-/** Keeps a selection to ids that still exist (after undo, delete or open). */
+/**
+ * Keeps a selection to ids that still exist (after undo, delete or open); the same object when every
+ * id still exists, so that an edit elsewhere (a keystroke in the name) does not look like a new selection.
+ */
 function prune(sel: Selection, p: Project): Selection {
+  if (sel.nodes.size === 0 && sel.pipes.size === 0) return sel;
   const nodes = new Set(p.nodes.map((n) => n.id));
   const pipes = new Set(p.pipes.map((x) => x.id));
+  if ([...sel.nodes].every((id) => nodes.has(id)) && [...sel.pipes].every((id) => pipes.has(id))) return sel;
   return {
     nodes: new Set([...sel.nodes].filter((id) => nodes.has(id))),
     pipes: new Set([...sel.pipes].filter((id) => pipes.has(id))),
@@ -230,7 +236,7 @@ export type Actions = ReturnType<typeof createActions>;
 
 /** Checks a whole document before it replaces the current one (used by Open and restore). */
 export function validated(data: unknown): { ok: true; project: Project } | { ok: false; lines: string[] } {
-  const r = parseProject(data);
+  const r = checks().parseProject(data);
   return r.ok
     ? { ok: true, project: r.project }
     : { ok: false, lines: r.problems.map((p) => (p.path ? `${p.path}: ${p.message}` : p.message)) };
