@@ -2,20 +2,14 @@ import { savedDocument } from '../state/savedDocument.js';
 import { useRef, useState } from 'react';
 import { useStore } from 'zustand';
 import { useActions, useApp, useAppStore } from '../state/StoreContext.js';
-import {
-  download,
-  fileStem,
-  openProjectFile,
-  projectText,
-  scheduleCsvText,
-  scheduleJsonText,
-} from '../files/projectFile.js';
+import { download, fileStem, projectText, scheduleCsvText, scheduleJsonText } from '../files/projectFile.js';
 import { newProject } from '../files/newProject.js';
+import { loadExchange } from '../files/routeImport.js';
 import { CautionDialog } from './CautionDialog.js';
 import { KeptCopiesButton } from './KeptCopiesDialog.js';
 
 /** Product name, project name, file actions, units, the case shown, and the caution. */
-export function TopBar({ onPrint }: { onPrint: () => void }) {
+export function TopBar({ onPrint, onOpen }: { onPrint: () => void; onOpen: (file: File) => Promise<void> }) {
   const store = useAppStore();
   const actions = useActions();
   const name = useApp((s) => s.project.name);
@@ -29,7 +23,13 @@ export function TopBar({ onPrint }: { onPrint: () => void }) {
   const fileInput = useRef<HTMLInputElement>(null);
 
   const open = async (file: File | undefined) => {
-    if (file) await openProjectFile(file, actions);
+    if (file) await onOpen(file);
+  };
+  const exportGeoJson = async () => {
+    const ex = await loadExchange();
+    const r = ex.designGeoJson(project());
+    if (r.ok) download(`${fileStem(project())}.geojson`, r.text, 'application/geo+json');
+    else actions.notify({ tone: 'error', title: 'The design was not exported as GeoJSON', lines: [r.message] });
   };
   const project = () => store.getState().project;
   const caseValue = caseView.kind === 'envelope' ? '__envelope' : caseView.id;
@@ -64,13 +64,16 @@ export function TopBar({ onPrint }: { onPrint: () => void }) {
         >
           New
         </button>
-        <button onClick={() => fileInput.current?.click()} title="Open a project file (or drop one on the window)">
+        <button
+          onClick={() => fileInput.current?.click()}
+          title="Open a project file, or import a route: a CSV survey or a GeoJSON file (or drop one on the window)"
+        >
           Open…
         </button>
         <input
           ref={fileInput}
           type="file"
-          accept=".json,application/json"
+          accept=".json,application/json,.geojson,application/geo+json,.csv,text/csv,.txt"
           hidden
           data-testid="open-file"
           onChange={(e) => {
@@ -111,6 +114,9 @@ export function TopBar({ onPrint }: { onPrint: () => void }) {
                 }
               >
                 Schedule as JSON
+              </button>
+              <button role="menuitem" onClick={() => void exportGeoJson()} data-testid="export-geojson">
+                Design as GeoJSON (for a GIS)
               </button>
               <button role="menuitem" onClick={onPrint}>
                 Print the schedule…
