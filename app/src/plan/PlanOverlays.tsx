@@ -1,6 +1,7 @@
 import type { RefObject } from 'react';
-import { FOOT, formatSi, KIND_NAME, POUND_FORCE, type Material } from '@mainbrace/solver';
+import { FOOT, formatSi, KIND_NAME, KIP, type Material } from '@mainbrace/solver';
 import { useApp } from '../state/StoreContext.js';
+import { showColumnForce } from '../format/quantity.js';
 import { gridSpacing } from '../state/viewport.js';
 import { gridStep } from './drawGrid.js';
 import { ARROW_PX } from './drawRoute.js';
@@ -9,9 +10,9 @@ import { FittingGlyph } from './FittingGlyph.js';
 import { LEGEND_KINDS } from './symbols.js';
 import type { Scene } from './planScene.js';
 
-/** A round force below `f` for the arrow legend: 1, 2, 5 × 10ⁿ in kN or lbf. */
+/** A round force below `f` for the arrow legend: 1, 2, 5 × 10ⁿ in kN or kip (the plan's one force unit). */
 function roundForce(f: number, us: boolean): number {
-  const unit = us ? POUND_FORCE : 1000;
+  const unit = us ? KIP : 1000;
   const v = f / unit;
   const p = Math.pow(10, Math.floor(Math.log10(v)));
   const m = [5, 2, 1].find((k) => k * p <= v) ?? 1;
@@ -90,7 +91,7 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
               <line x1="2" y1="5" x2={refPx - 4} y2="5" stroke={PALETTE.thrust} strokeWidth="2.2" />
               <path d={`M${refPx + 2} 5 l-8 -4 v8 z`} fill={PALETTE.thrust} />
             </svg>
-            horizontal thrust {formatSi(ref, 'force', units)}
+            horizontal thrust {showColumnForce(ref, units)}
           </div>
         )}
         {kinds.length > 0 && (

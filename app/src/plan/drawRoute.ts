@@ -4,6 +4,7 @@ import { toScreen, type Viewport } from '../state/viewport.js';
 import { LINE, MATERIAL_DASH, PALETTE, TYPE, pipeWidth } from './palette.js';
 import type { LabelSpace } from './labelSpace.js';
 import { symbol } from './fittingSymbol.js';
+import { showColumnForce } from '../format/quantity.js';
 
 type Ctx = CanvasRenderingContext2D;
 
@@ -241,9 +242,10 @@ export function drawArrows(ctx: Ctx, v: Viewport, scene: Scene, units: UnitSyste
       ctx.fill();
     }
     const total = Math.hypot(a.horizontal, a.vertical);
-    let text = formatSi(a.horizontal, 'force', units);
+    // One force unit for the whole plan (kN, or kip in US units): a label never switches to lbf.
+    let text = showColumnForce(a.horizontal, units);
     if (Math.abs(a.vertical) > 0.02 * total)
-      text += `  ${a.vertical > 0 ? '↑' : '↓'} ${formatSi(Math.abs(a.vertical), 'force', units)}`;
+      text += `  ${a.vertical > 0 ? '↑' : '↓'} ${showColumnForce(Math.abs(a.vertical), units)}`;
     ctx.font = TYPE.force;
     const w = ctx.measureText(text).width + 4;
     const h = 13;
