@@ -1,4 +1,4 @@
-import { formatSi, type UnitSystem } from '@mainbrace/solver';
+import type { UnitSystem } from '@mainbrace/solver';
 import type { Scene } from './planScene.js';
 import { toScreen, type Viewport } from '../state/viewport.js';
 import { LINE, MATERIAL_DASH, PALETTE, TYPE, pipeWidth } from './palette.js';
