@@ -1,6 +1,6 @@
 import type { RefObject } from 'react';
 import { FOOT, formatSi, KIND_NAME, KIP, type Material } from '@mainbrace/solver';
-import { useApp } from '../state/StoreContext.js';
+import { useActions, useApp } from '../state/StoreContext.js';
 import { showColumnForce } from '../format/quantity.js';
 import { gridSpacing } from '../state/viewport.js';
 import { gridStep } from './drawGrid.js';
@@ -24,6 +24,8 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
   const viewport = useApp((s) => s.viewport);
   const units = useApp((s) => s.units);
   const tool = useApp((s) => s.tool);
+  const legendOpen = useApp((s) => s.legendOpen);
+  const actions = useActions();
   const caseView = useApp((s) => s.caseView);
   const cases = useApp((s) => s.project.loadCases);
   const shown =
@@ -66,8 +68,39 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
           <span ref={coordsRef}>pointer position: move over the plan</span>
         </div>
       </div>
-      <div className="plan-legend" aria-label="Legend">
-        <div className="legend-title">Thrust shown: {shown}</div>
+      {!legendOpen && (
+        <button
+          className="legend-toggle legend-closed"
+          aria-expanded={false}
+          aria-controls="plan-legend"
+          onClick={() => actions.setLegendOpen(true)}
+          onPointerDown={(e) => e.stopPropagation()}
+          data-testid="legend-toggle"
+        >
+          Legend ▴
+        </button>
+      )}
+      <div
+        className="plan-legend"
+        id="plan-legend"
+        aria-label="Legend"
+        hidden={!legendOpen}
+        data-testid="legend"
+        onPointerDown={(e) => e.stopPropagation()}
+      >
+        <div className="legend-title">
+          <span>Thrust shown: {shown}</span>
+          <button
+            className="legend-toggle"
+            aria-expanded={true}
+            aria-controls="plan-legend"
+            title="Hide the legend (Fit then uses the whole plan)"
+            onClick={() => actions.setLegendOpen(false)}
+            data-testid="legend-hide"
+          >
+            Hide ▾
+          </button>
+        </div>
         {materials.map((m) => (
           <div key={m} className="legend-row">
             <svg width="34" height="10" aria-hidden="true">

@@ -135,6 +135,8 @@ export function PlanView() {
 
   const onWheel = useCallback(
     (e: WheelEvent) => {
+      // The legend scrolls its own content.
+      if (e.target instanceof Element && e.target.closest('.plan-legend')) return;
       e.preventDefault();
       const r = box.current!.getBoundingClientRect();
       send({ type: 'wheel', at: { sx: e.clientX - r.left, sy: e.clientY - r.top }, deltaY: e.deltaY });

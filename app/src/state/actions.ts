@@ -61,7 +61,9 @@ export function createActions(store: AppStore) {
     const same = typing !== undefined && lastTyping?.key === typing && now - lastTyping.at < TYPING_WINDOW_MS;
     lastTyping = typing === undefined ? null : { key: typing, at: now };
     if (same) history().pause();
-    set({ project: after, selection: prune(get().selection, after) });
+    // A passing message ("Deleted 2 nodes — Ctrl+Z brings them back") is out of date after the next edit.
+    const stale = get().notice?.tone === 'info' ? { notice: null } : {};
+    set({ project: after, selection: prune(get().selection, after), ...stale });
     if (same) history().resume();
   };
   const history = () => store.temporal.getState();
