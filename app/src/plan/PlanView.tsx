@@ -1,7 +1,7 @@
 import { useCallback, useEffect, useMemo, useRef, type PointerEvent as ReactPointerEvent } from 'react';
 import { Layer, Shape, Stage } from 'react-konva';
 import type { Context } from 'konva/lib/Context';
-import { FOOT } from '@mainbrace/solver';
+import { analyse, FOOT } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp, useAppStore } from '../state/StoreContext.js';
 import { toPlan, type ScreenPoint } from '../state/viewport.js';
 import { dragScene, planScene } from './planScene.js';
@@ -11,6 +11,9 @@ import { drawRestrainedZones } from './drawZones.js';
 import { drawGrid } from './drawGrid.js';
 import { drawHover, drawOverlay } from './drawOverlay.js';
 import { PlanOverlays } from './PlanOverlays.js';
+import { liveChanges } from './liveChange.js';
+import { drawLiveChange } from './drawLiveChange.js';
+import { EMPTY_SELECTION } from '../state/slices.js';
 import { sendPlanEvent } from '../tools/planBridge.js';
 import type { PlanEvent, PointerKind } from '../tools/planInput.js';
 import { runCommand } from '../chrome/appCommands.js';
@@ -41,6 +44,19 @@ export function PlanView() {
   const selectBox = useApp((s) => s.selectBox);
   const gesture = useApp((s) => s.gesture.kind);
   const analysis = useAnalysis();
+  const liveBase = useApp((s) => s.liveBase);
+  // While the test pressure is dragged: the scene before the drag, for its arrow scale and block ghosts.
+  const before = useMemo(
+    () =>
+      liveBase
+        ? {
+            scene: planScene(liveBase, analyse(liveBase), caseView, EMPTY_SELECTION, null),
+            analysis: analyse(liveBase),
+          }
+        : null,
+    [liveBase, caseView],
+  );
+  const changes = useMemo(() => (before ? liveChanges(before.analysis, analysis) : []), [before, analysis]);
   const box = useRef<HTMLDivElement>(null);
   const coords = useRef<HTMLSpanElement>(null);
 
@@ -67,10 +83,15 @@ export function PlanView() {
   // While nodes are dragged the document is unchanged: the static layer leaves the dragged nodes and
   // their pipes out (and so is not redrawn), the interactive layer draws them where they are now.
   const movedKey = preview ? [...preview.keys()].sort().join('\u0000') : '';
-  const scene = useMemo(
+  const current = useMemo(
     () =>
       planScene(project, analysis, caseView, selection, null, movedKey ? new Set(movedKey.split('\u0000')) : undefined),
     [project, analysis, caseView, selection, movedKey],
+  );
+  // One arrow scale held through the drag, so the arrows grow with the pressure instead of rescaling.
+  const scene = useMemo(
+    () => (before ? { ...current, largestForce: Math.max(before.scene.largestForce, 1e-9) } : current),
+    [current, before],
   );
   const moving = useMemo(
     () => (preview ? dragScene(project, analysis, selection, preview) : null),
@@ -194,6 +215,11 @@ export function PlanView() {
                   placeTags(ctx, viewport, moving, new LabelSpace(size.width, size.height)),
                 );
               }
+              if (before)
+                drawLiveChange(ctx, viewport, before.scene.polygons, changes, (id) => {
+                  const c = project.loadCases.find((x) => x.id === id);
+                  return c?.label ?? id;
+                });
               drawHover(ctx, viewport, project, hover, tool === 'draw');
               drawOverlay(ctx, viewport, draw, selectBox, units, snappedNow);
             }}

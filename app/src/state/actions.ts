@@ -170,6 +170,7 @@ export function createActions(store: AppStore) {
     beginLiveEdit: () => {
       if (liveStart) return; // a key held down repeats: the gesture began at the first press
       liveStart = get().project;
+      set({ liveBase: liveStart });
       history().pause();
     },
     endLiveEdit: () => {
@@ -178,6 +179,7 @@ export function createActions(store: AppStore) {
       set({ project: liveStart });
       history().resume();
       liveStart = null;
+      set({ liveBase: null });
       if (final !== get().project) set({ project: final });
     },
     /** A document change during a live edit (no undo step of its own). */
