@@ -70,7 +70,9 @@ export function createActions(store: AppStore) {
     const same = typing !== undefined && lastTyping?.key === typing && now - lastTyping.at < TYPING_WINDOW_MS;
     lastTyping = typing === undefined ? null : { key: typing, at: now };
     if (same) history().pause();
-    set({ project: after, selection: prune(get().selection, after) });
+    // A passing message ("Deleted 2 nodes — Ctrl+Z brings them back") is out of date after the next edit.
+    const stale = get().notice?.tone === 'info' ? { notice: null } : {};
+    set({ project: after, selection: prune(get().selection, after), ...stale });
     if (same) history().resume();
   };
   const history = () => store.temporal.getState();
@@ -180,6 +182,7 @@ export function createActions(store: AppStore) {
     beginLiveEdit: () => {
       if (liveStart) return; // a key held down repeats: the gesture began at the first press
       liveStart = get().project;
+      set({ liveBase: liveStart });
       history().pause();
     },
     endLiveEdit: () => {
@@ -188,6 +191,7 @@ export function createActions(store: AppStore) {
       set({ project: liveStart });
       history().resume();
       liveStart = null;
+      set({ liveBase: null });
       if (final !== get().project) set({ project: final });
     },
     /** A document change during a live edit (no undo step of its own). */
