@@ -97,3 +97,4 @@ export {
 } from './catalog/layingConditions.js';
 export type { PipeSeries, PipeSize } from './catalog/pipeSeries.js';
 export { proposeTestPressure, type TestProposal, type TestRule, type TestCriterion } from './pressure/testPressure.js';
+export * from './geometry/similarity.js';
