@@ -12,6 +12,7 @@ import {
   type RouteEnd,
 } from './documentEdits.js';
 import type { Viewport } from './viewport.js';
+import { setPlanLength } from './legLength.js';
 import type { DrawState } from '../tools/drawTool.js';
 
 /** Typing pauses shorter than this, ms, keep extending the same undo step. */
@@ -94,6 +95,9 @@ export function createActions(store: AppStore) {
       edit((p) => updateNode(p, id, patch), 'label' in patch ? `node-label-${id}` : undefined),
     updatePipe: (id: string, patch: Partial<Pipe>) =>
       edit((p) => updatePipe(p, id, patch), 'label' in patch ? `pipe-label-${id}` : undefined),
+    /** A pipe's plan length, moving one of its nodes along it (the other stays). */
+    setPipeLength: (id: string, length: number, moving: 'from' | 'to') =>
+      edit((p) => setPlanLength(p, id, length, moving)),
     /** Bedding and wrap for every pipe at once: one undo step. */
     setBeddingEverywhere: (patch: Pick<Partial<Pipe>, 'trenchType' | 'encasement'>) =>
       edit((p) =>
