@@ -1,7 +1,7 @@
 import { useCallback, useEffect, useMemo, useRef, useState, type PointerEvent as ReactPointerEvent } from 'react';
 import { Layer, Shape, Stage } from 'react-konva';
 import type { Context } from 'konva/lib/Context';
-import { FOOT } from '@mainbrace/solver';
+import { FOOT, imageToPlan } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp, useAppStore } from '../state/StoreContext.js';
 import { centreOn, fitView, panBy, toPlan, toScreen, zoomAt, type ScreenPoint } from '../state/viewport.js';
 import type { PlanPoint } from '../state/documentEdits.js';
@@ -15,6 +15,9 @@ import { drawOverlay } from './drawOverlay.js';
 import { drawStep, type DrawContext } from '../tools/drawTool.js';
 import { selectStep, type SelectState } from '../tools/selectTool.js';
 import { PlanOverlays } from './PlanOverlays.js';
+import { drawPicks, drawUnderlay } from './drawUnderlay.js';
+import { useUnderlayImage } from '../state/underlayImage.js';
+import { UnderlayHint } from './UnderlayHint.js';
 
 const HIT_PX = 9;
 const native = (c: Context) => (c as unknown as { _context: CanvasRenderingContext2D })._context;
@@ -32,6 +35,9 @@ export function PlanView() {
   const draw = useApp((s) => s.draw);
   const tool = useApp((s) => s.tool);
   const snapping = useApp((s) => s.snapping);
+  const underlay = useApp((s) => s.project.underlay);
+  const underlayPick = useApp((s) => s.underlayPick);
+  const underlayImage = useUnderlayImage(underlay);
   const analysis = useAnalysis();
   const box = useRef<HTMLDivElement>(null);
   const coords = useRef<HTMLSpanElement>(null);
@@ -90,6 +96,7 @@ export function PlanView() {
     (c: Context) => {
       const ctx = native(c);
       drawGrid(ctx, viewport, size.width, size.height, units);
+      if (underlay && underlayImage.status === 'ready') drawUnderlay(ctx, viewport, underlay, underlayImage.image);
       drawRestraints(ctx, viewport, scene);
       drawPipes(ctx, viewport, scene);
       const space = new LabelSpace(size.width, size.height);
@@ -98,7 +105,7 @@ export function PlanView() {
       drawArrows(ctx, viewport, scene, units, space);
       drawFittings(ctx, viewport, scene, tags);
     },
-    [viewport, size, scene, units],
+    [viewport, size, scene, units, underlay, underlayImage],
   );
 
   // A fitting picked in the schedule or a list may be off screen: bring it to the middle.
@@ -148,6 +155,10 @@ export function PlanView() {
     }
     if (e.button !== 0) return;
     const at = planAt(e);
+    if (s.underlayPick && s.underlayPick.length < 2) {
+      actions.pickUnderlayPoint(at); // calibrating the site plan: the click picks a point on the image
+      return;
+    }
     const hit = hitTest(s.project, at, tolerance());
     if (s.tool === 'draw') {
       const out = drawStep(s.draw, { type: 'click', at, hit }, drawCtx(e.altKey));
@@ -273,7 +284,8 @@ export function PlanView() {
     return () => el?.removeEventListener('wheel', onWheel);
   }, [onWheel]);
 
-  const cursor = tool === 'draw' ? 'crosshair' : tool === 'pan' ? 'grab' : 'default';
+  const cursor =
+    tool === 'draw' || (underlayPick && underlayPick.length < 2) ? 'crosshair' : tool === 'pan' ? 'grab' : 'default';
   const snappedNow = snapping && draw.phase === 'drawing';
   return (
     <div
@@ -308,11 +320,18 @@ export function PlanView() {
                 );
               }
               drawOverlay(ctx, viewport, draw, selectBox, units, snappedNow);
+              if (underlayPick && underlay)
+                drawPicks(
+                  ctx,
+                  viewport,
+                  underlayPick.map((q) => imageToPlan(underlay, q)),
+                );
             }}
           />
         </Layer>
       </Stage>
       <PlanOverlays scene={scene} coordsRef={coords} />
+      <UnderlayHint />
     </div>
   );
 }

@@ -1,4 +1,13 @@
-import { parseProject, type LoadCase, type Pipe, type Project, type ProjectNode, type Soil } from '@mainbrace/solver';
+import {
+  parseProject,
+  planToImage,
+  type LoadCase,
+  type Pipe,
+  type Project,
+  type ProjectNode,
+  type Soil,
+  type Underlay,
+} from '@mainbrace/solver';
 import type { AppState, AppStore, CaseView, DrawerTab, Selection, ToolName } from './store.js';
 import { EMPTY_SELECTION } from './store.js';
 import {
@@ -105,6 +114,18 @@ export function createActions(store: AppStore) {
           ? p
           : { ...p, pipes: p.pipes.map((x) => ({ ...x, ...patch })) },
       ),
+    /** Puts a site-plan image under the route, or takes it away (undefined). */
+    setUnderlay: (underlay: Underlay | undefined) => {
+      set({ underlayPick: null });
+      edit((p) => {
+        if (underlay) return { ...p, underlay };
+        const { underlay: _gone, ...rest } = p;
+        return rest;
+      });
+    },
+    /** Opacity, lock or placement of the underlay. */
+    updateUnderlay: (patch: Partial<Underlay>) =>
+      edit((p) => (p.underlay ? { ...p, underlay: { ...p.underlay, ...patch } } : p)),
     renameProject: (name: string) => edit((p) => ({ ...p, name }), 'project-name'),
     /** Display units are a view setting: no undo step, no change to any result. */
     setUnits: (units: Project['units']) => set({ units }),
@@ -140,7 +161,13 @@ export function createActions(store: AppStore) {
     /** Replaces the whole document (open, new); it is one undoable step like any edit. */
     replaceProject: (project: Project) => {
       edit(() => project);
-      set({ units: project.units, selection: EMPTY_SELECTION, draw: { phase: 'idle' }, dragPreview: null });
+      set({
+        units: project.units,
+        selection: EMPTY_SELECTION,
+        draw: { phase: 'idle' },
+        dragPreview: null,
+        underlayPick: null,
+      });
     },
 
     /**
@@ -180,6 +207,15 @@ export function createActions(store: AppStore) {
     toggleSnapping: () => set({ snapping: !get().snapping }),
     setPipeSpec: (pipeSpec: PipeSpec) => set({ pipeSpec }),
     setDraw: (draw: DrawState) => set({ draw }),
+    /** Starts picking two points on the underlay to calibrate it. */
+    startUnderlayPick: () => set({ underlayPick: [] }),
+    /** A point clicked on the plan while picking: kept as the image pixel under it. */
+    pickUnderlayPoint: (at: PlanPoint) => {
+      const { underlayPick, project } = get();
+      if (!underlayPick || underlayPick.length >= 2 || !project.underlay) return;
+      set({ underlayPick: [...underlayPick, planToImage(project.underlay, at)] });
+    },
+    cancelUnderlayPick: () => set({ underlayPick: null }),
     setDragPreview: (dragPreview: ReadonlyMap<string, PlanPoint> | null) => set({ dragPreview }),
     select: (selection: Selection) => set({ selection }),
     selectNode: (id: string) => set({ selection: { nodes: new Set([id]), pipes: new Set() } }),

@@ -1,4 +1,4 @@
-import type { Project, UnitSystem } from '@mainbrace/solver';
+import type { ImagePoint, Project, UnitSystem } from '@mainbrace/solver';
 import type { PipeSpec, PlanPoint } from './documentEdits.js';
 import type { Viewport } from './viewport.js';
 import type { DrawState } from '../tools/drawTool.js';
@@ -6,7 +6,7 @@ import type { DrawState } from '../tools/drawTool.js';
 export type ToolName = 'select' | 'draw' | 'pan';
 /** Which thrusts the plan shows: one load case or the envelope of all. */
 export type CaseView = { kind: 'case'; id: string } | { kind: 'envelope' };
-export type DrawerTab = 'schedule' | 'profile' | 'cases' | 'soils';
+export type DrawerTab = 'schedule' | 'profile' | 'cases' | 'soils' | 'underlay';
 
 export interface Selection {
   nodes: ReadonlySet<string>;
@@ -53,6 +53,8 @@ export interface ToolSlice {
   draw: DrawState;
   /** nodes being dragged and where they are now; the document changes once, on drop */
   dragPreview: ReadonlyMap<string, PlanPoint> | null;
+  /** image points picked on the plan to calibrate the underlay; null when not picking */
+  underlayPick: readonly ImagePoint[] | null;
 }
 
 export interface SelectionSlice {
@@ -75,6 +77,7 @@ export const toolSlice = (pipeSpec: PipeSpec): ToolSlice => ({
   pipeSpec,
   draw: { phase: 'idle' },
   dragPreview: null,
+  underlayPick: null,
 });
 
 export const selectionSlice = (): SelectionSlice => ({ selection: EMPTY_SELECTION });
