@@ -18,6 +18,7 @@ import { PlanOverlays } from './PlanOverlays.js';
 import { drawPicks, drawUnderlay } from './drawUnderlay.js';
 import { useUnderlayImage } from '../state/underlayImage.js';
 import { UnderlayHint } from './UnderlayHint.js';
+import { TypedEntryBox } from './TypedEntryBox.js';
 
 const HIT_PX = 9;
 const native = (c: Context) => (c as unknown as { _context: CanvasRenderingContext2D })._context;
@@ -332,6 +333,7 @@ export function PlanView() {
       </Stage>
       <PlanOverlays scene={scene} coordsRef={coords} />
       <UnderlayHint />
+      <TypedEntryBox />
     </div>
   );
 }

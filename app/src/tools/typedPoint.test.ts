@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { typedPoint } from './typedPoint.js';
+import { typedPoint, typedStep } from './typedPoint.js';
+import { NO_HIT } from './hit.js';
+import type { DrawState } from './drawTool.js';
 import type { TypedEntry } from '../format/typedEntry.js';
 
 const step = (length: number, direction: Extract<TypedEntry, { kind: 'step' }>['direction']): TypedEntry => ({
@@ -13,6 +15,13 @@ const at = (r: ReturnType<typeof typedPoint>) => {
 };
 
 describe('where a typed entry puts the next node', () => {
+  it('with the pointer on the last node, a bare length goes straight on: 4 m after a leg heading north-east', () => {
+    // previous leg (3, 3): unit (0.707107, 0.707107); 4 m on from (3, 3) → (5.828427, 5.828427)
+    const p = at(typedPoint(step(4, { kind: 'pointer' }), { x: 3, y: 3 }, { x: 3, y: 3 }, { x: 3, y: 3 }));
+    expect(p.x).toBeCloseTo(3 + 4 / Math.SQRT2, 12);
+    expect(p.y).toBeCloseTo(3 + 4 / Math.SQRT2, 12);
+  });
+
   it('toward the pointer: 10 m toward (3, 4) from the origin lands on (6, 8) (a 3-4-5 triangle, doubled)', () => {
     const p = at(typedPoint(step(10, { kind: 'pointer' }), { x: 0, y: 0 }, null, { x: 3, y: 4 }));
     expect(p.x).toBeCloseTo(6, 12);
@@ -53,6 +62,49 @@ describe('where a typed entry puts the next node', () => {
     expect(typedPoint(step(5, { kind: 'pointer' }), { x: 0, y: 0 }, null, { x: 0, y: 0 })).toEqual({
       ok: false,
       message: 'point the pointer where the leg goes, or give a bearing (12.5 @90)',
+    });
+  });
+});
+
+describe('typed entries as steps of the draw tool', () => {
+  const none = () => NO_HIT;
+  it('coordinates start a run; a length and a turn place the next nodes exactly, unsnapped', () => {
+    let state: DrawState = { phase: 'idle' };
+    const r1 = typedStep(state, { kind: 'point', x: 100, y: 200 }, none);
+    if (!r1.ok) throw new Error(r1.message);
+    state = r1.state;
+    expect(state).toMatchObject({ phase: 'drawing', startPoint: { x: 100, y: 200 } });
+    // 12.34 m due east (bearing 90°): (112.34, 200); snapping to whole metres would have given 112
+    const r2 = typedStep(state, step(12.34, { kind: 'bearing', degrees: 90 }), none);
+    if (!r2.ok) throw new Error(r2.message);
+    state = r2.state;
+    const v = state.phase === 'drawing' ? state.vertices[0]! : null;
+    expect(v?.x).toBeCloseTo(112.34, 12);
+    expect(v?.y).toBeCloseTo(200, 12);
+    // then 5 m turning 90° left: north, to (112.34, 205)
+    const r3 = typedStep(state, step(5, { kind: 'deflection', degrees: 90 }), none);
+    if (!r3.ok) throw new Error(r3.message);
+    const w = r3.state.phase === 'drawing' ? r3.state.vertices[1]! : null;
+    expect(w?.x).toBeCloseTo(112.34, 12);
+    expect(w?.y).toBeCloseTo(205, 12);
+  });
+
+  it('a typed point on an existing node ends the run there', () => {
+    const state: DrawState = {
+      phase: 'drawing',
+      start: { kind: 'point', at: { x: 0, y: 0 } },
+      startPoint: { x: 0, y: 0 },
+      vertices: [],
+      cursor: null,
+    };
+    const r = typedStep(state, { kind: 'point', x: 10, y: 0 }, () => ({ kind: 'node', id: 'n7', at: { x: 10, y: 0 } }));
+    expect(r).toMatchObject({ ok: true, state: { phase: 'idle' }, commit: { end: { kind: 'node', id: 'n7' } } });
+  });
+
+  it('a length before the run has started is refused with what to do', () => {
+    expect(typedStep({ phase: 'idle' }, step(5, { kind: 'pointer' }), none)).toEqual({
+      ok: false,
+      message: 'start the run first: click on the plan or type its coordinates (E 120 N 340)',
     });
   });
 });
