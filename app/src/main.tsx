@@ -85,6 +85,8 @@ async function start() {
   const project = await firstProject(kept);
   const store = createAppStore(project, defaultPipe(project));
   const actions = createActions(store);
+  // The demo or a blank project is nobody's unsaved work: New replaces it without asking.
+  if (kept.kind !== 'project') actions.markSaved(project);
   const autosave = startAutosave(store, {
     kv,
     channel,

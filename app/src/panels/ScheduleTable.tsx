@@ -54,9 +54,9 @@ export function ScheduleTable() {
               <tr
                 key={node}
                 className={`${selection.nodes.has(node) ? 'selected' : ''} ${worst === 'error' ? 'not-adequate' : ''}`}
-                onClick={() => actions.selectNode(node)}
+                onClick={() => actions.revealNode(node)}
                 tabIndex={0}
-                onKeyDown={(e) => e.key === 'Enter' && actions.selectNode(node)}
+                onKeyDown={(e) => e.key === 'Enter' && actions.revealNode(node)}
                 data-testid={`row-${node}`}
               >
                 {columns.map((c) => (

@@ -1,6 +1,5 @@
 import {
   parseProject,
-  planToImage,
   type LoadCase,
   type Pipe,
   type Project,
@@ -22,7 +21,10 @@ import {
 } from './documentEdits.js';
 import type { Viewport } from './viewport.js';
 import { setPlanLength } from './legLength.js';
+import { routePieces } from './connectivity.js';
 import type { DrawState } from '../tools/drawTool.js';
+import { fittedView, revealFitting as planCommandReveal, showFitting } from '../tools/planCommands.js';
+import { planInputOf } from '../tools/planBridge.js';
 
 /** Typing pauses shorter than this, ms, keep extending the same undo step. */
 const TYPING_WINDOW_MS = 1500;
@@ -77,8 +79,23 @@ export function createActions(store: AppStore) {
 
   return {
     // ——— document edits (undoable)
-    addRun: (start: RouteEnd, vertices: PlanPoint[], end: RouteEnd | null) =>
-      edit((p) => addRoute(p, start, vertices, end, get().pipeSpec)),
+    addRun: (start: RouteEnd, vertices: PlanPoint[], end: RouteEnd | null) => {
+      const before = routePieces(get().project).length;
+      edit((p) => addRoute(p, start, vertices, end, get().pipeSpec));
+      const after = routePieces(get().project).length;
+      // A run not joined to the main is sized alone, with dead-end blocks at both ends: say so at once.
+      if (after > before && after > 1)
+        set({
+          notice: {
+            tone: 'warning',
+            title: `That run is not connected to the rest of the main (the route is now ${after} separate pieces)`,
+            lines: [
+              'Each piece is sized on its own, with a dead-end block at every free end.',
+              'To join it, undo (Ctrl+Z) and draw it again starting or ending on a node or pipe: the plan rings what a click would join.',
+            ],
+          },
+        });
+    },
     moveNodes: (moves: ReadonlyMap<string, PlanPoint>) => {
       set({ dragPreview: null });
       edit((p) => moveNodes(p, moves));
@@ -168,7 +185,11 @@ export function createActions(store: AppStore) {
         dragPreview: null,
         underlayPick: null,
       });
+      // A route opened into the old view may lie wholly off screen: show all of it.
+      if (get().canvas.width > 0) set({ viewport: fittedView(planInputOf(get())) });
     },
+    /** The document as last saved to or opened from a file: New asks before discarding anything else. */
+    markSaved: (project: Project) => set({ fileBaseline: project }),
 
     /**
      * A live edit (a slider being dragged): changes show at once but leave no undo steps until it
@@ -209,16 +230,21 @@ export function createActions(store: AppStore) {
     setDraw: (draw: DrawState) => set({ draw }),
     /** Starts picking two points on the underlay to calibrate it. */
     startUnderlayPick: () => set({ underlayPick: [] }),
-    /** A point clicked on the plan while picking: kept as the image pixel under it. */
-    pickUnderlayPoint: (at: PlanPoint) => {
-      const { underlayPick, project } = get();
-      if (!underlayPick || underlayPick.length >= 2 || !project.underlay) return;
-      set({ underlayPick: [...underlayPick, planToImage(project.underlay, at)] });
-    },
     cancelUnderlayPick: () => set({ underlayPick: null }),
     setDragPreview: (dragPreview: ReadonlyMap<string, PlanPoint> | null) => set({ dragPreview }),
     select: (selection: Selection) => set({ selection }),
     selectNode: (id: string) => set({ selection: { nodes: new Set([id]), pipes: new Set() } }),
+    /** Selects a fitting and brings it to the middle of the plan, close enough to read (schedule, details). */
+    zoomToFitting: (id: string) => {
+      const next = showFitting(planInputOf(get()), id);
+      set({ selection: next.selection, viewport: next.viewport });
+    },
+    /** Selects a fitting and, when it is off screen, brings it to the middle at the same scale. */
+    revealNode: (id: string) => {
+      const next = planCommandReveal(planInputOf(get()), id);
+      set({ selection: next.selection, viewport: next.viewport });
+    },
+    setLegendOpen: (legendOpen: boolean) => set({ legendOpen }),
     clearSelection: () => set({ selection: EMPTY_SELECTION }),
     setDrawer: (tab: DrawerTab, height?: AppState['drawer']['height']) =>
       set({ drawer: { tab, height: height ?? (get().drawer.height === 'closed' ? 'low' : get().drawer.height) } }),
