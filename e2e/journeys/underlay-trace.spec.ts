@@ -138,6 +138,8 @@ test('typed input places nodes exactly, and a leg length typed in the details pa
   await expect(page.locator('#typed-entry-help')).toContainText('at bearing 90°');
   await page.keyboard.press('Enter');
   await page.keyboard.type('12.5 L90');
+  await expect(page.locator('#typed-entry-help')).toContainText('turning 90° left');
+  await app.shot('typed-entry-box');
   await page.keyboard.press('Enter');
   await page.keyboard.press('Enter'); // Enter on an empty entry finishes the run
   const doc = await app.project();

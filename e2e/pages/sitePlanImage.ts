@@ -23,10 +23,11 @@ export function sitePlanPng(width: number, height: number, marks: readonly Px[],
     rgb[i + 2] = b;
   };
   for (const m of marks) {
-    for (let d = -12; d <= 12; d++) {
-      put(m.u + d, m.v, 0, 0, 0);
-      put(m.u, m.v + d, 0, 0, 0);
-    }
+    for (let d = -14; d <= 14; d++)
+      for (let w = -1; w <= 1; w++) {
+        put(m.u + d, m.v + w, 0, 0, 0);
+        put(m.u + w, m.v + d, 0, 0, 0);
+      }
     put(m.u, m.v, 255, 0, 0);
   }
   const raw = Buffer.alloc((width * 3 + 1) * height);

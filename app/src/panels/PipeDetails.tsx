@@ -95,7 +95,7 @@ export function PipeDetails({ pipe, project }: { pipe: Pipe; project: Project })
       />
       <button
         type="button"
-        className="link small"
+        className="link small leg-swap"
         onClick={() => setMoving(moving === 'to' ? 'from' : 'to')}
         data-testid="pipe-length-swap"
       >
