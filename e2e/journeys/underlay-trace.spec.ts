@@ -173,3 +173,42 @@ test('typed input places nodes exactly, and a leg length typed in the details pa
     ]);
   await app.shot('typed-input');
 });
+
+test('a site plan calibrated by the known coordinates of two marks lands each mark on its coordinates', async ({
+  page,
+}) => {
+  const app = new MainbracePage(page);
+  await app.blankCanvas();
+  await loadImage(page, 'invented-quarry-lane.png', sitePlanPng(1000, 700, [MARK_1, MARK_2]));
+  await expect.poll(async () => (await underlayOf(app)).underlay?.width).toBe(1000);
+  const before = {
+    scale: (
+      await page.evaluate(() =>
+        (window as unknown as { __mainbrace: { viewport(): { scale: number } } }).__mainbrace.viewport(),
+      )
+    ).scale,
+    mpp: (await underlayOf(app)).underlay!.metresPerPixel,
+  };
+  await page.getByTestId('calibrate-by-coordinates').check();
+  await page.getByTestId('calibrate-pick').click();
+  await clickImage(app, MARK_1);
+  await clickImage(app, MARK_2);
+  // Mark 1 at E 1000 N 2000; mark 2 at 40 m north-east of it (E 1028.284, N 2028.284): the image turns 45°.
+  const d = KNOWN / Math.SQRT2;
+  for (const [i, v] of ['1000', '2000', String(1000 + d), String(2000 + d)].entries())
+    await page.getByTestId(`calibrate-c${i}`).fill(v);
+  await page.getByTestId('calibrate-apply').click();
+  await expect(page.getByTestId('underlay-scale')).toContainText('calibrated by two known coordinates');
+  const u = (await underlayOf(app)).underlay!;
+  // Each pick was within a screen pixel of its mark: before calibration that is 1/(scale · m per px)
+  // image pixels, and each image pixel is 0.05 m after it; allow three such pixels at each mark.
+  const slack = (3 * M_PER_PX) / (before.scale * before.mpp);
+  const m1 = imageToPlan(u, MARK_1);
+  const m2 = imageToPlan(u, MARK_2);
+  expect(Math.abs(m1.x - 1000)).toBeLessThan(slack);
+  expect(Math.abs(m1.y - 2000)).toBeLessThan(slack);
+  expect(Math.abs(m2.x - (1000 + d))).toBeLessThan(slack);
+  expect(Math.abs(m2.y - (2000 + d))).toBeLessThan(slack);
+  expect(u.metresPerPixel).toBeCloseTo(M_PER_PX, 3);
+  expect(u.rotation).toBeCloseTo(45, 0);
+});
