@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { imageToPlan, type Project, type Underlay } from '@mainbrace/solver';
 import { planHarness } from './planHarness.js';
 import { at, chain, emptyProject, expectClose } from '../testFixtures.js';
+import { toScreen } from '../state/viewport.js';
 
 const type = (h: ReturnType<typeof planHarness>, text: string) => {
   h.send({ type: 'typedText', text });
@@ -105,5 +106,40 @@ describe('calibration picks, through the dispatcher', () => {
     h.click({ x: 0, y: 0 });
     h.key('Escape');
     expect(h.state().underlayPick).toBeNull();
+  });
+});
+
+describe('Fit with a site plan and no route yet', () => {
+  it('shows the whole image: its four corners inside the 800 × 500 canvas less the 100 px margin', () => {
+    const doc: Project = {
+      ...emptyProject(),
+      underlay: {
+        name: 'invented.png',
+        mediaType: 'image/png',
+        width: 2000,
+        height: 1000,
+        storageKey: 'k',
+        x: 5000,
+        y: 9000,
+        metresPerPixel: 0.2,
+        rotation: 30,
+        opacity: 0.5,
+        locked: false,
+      },
+    };
+    const h = planHarness(doc);
+    h.command('fit');
+    for (const q of [
+      { u: 0, v: 0 },
+      { u: 2000, v: 0 },
+      { u: 0, v: 1000 },
+      { u: 2000, v: 1000 },
+    ]) {
+      const p = toScreen(h.state().viewport, imageToPlan(doc.underlay!, q));
+      expect(p.sx).toBeGreaterThanOrEqual(100 - 1e-6);
+      expect(p.sx).toBeLessThanOrEqual(700 + 1e-6);
+      expect(p.sy).toBeGreaterThanOrEqual(100 - 1e-6);
+      expect(p.sy).toBeLessThanOrEqual(400 + 1e-6);
+    }
   });
 });
