@@ -4,6 +4,7 @@ import type { DrawerTab } from '../state/store.js';
 import { ScheduleTable } from './ScheduleTable.js';
 import { CasesPanel } from './CasesPanel.js';
 import { SoilsPanel } from './SoilsPanel.js';
+import { UnderlayPanel } from './UnderlayPanel.js';
 import { importOrReload } from '../chrome/loadChunk.js';
 
 const ProfilePanel = lazy(() =>
@@ -15,6 +16,7 @@ const TABS: { tab: DrawerTab; label: string }[] = [
   { tab: 'profile', label: 'Profile' },
   { tab: 'cases', label: 'Pressure cases' },
   { tab: 'soils', label: 'Soils & design' },
+  { tab: 'underlay', label: 'Site plan' },
 ];
 
 /** The route-wide views under the plan; it can be raised to fill the window for the schedule. */
@@ -84,6 +86,7 @@ export function Drawer() {
           )}
           {drawer.tab === 'cases' && <CasesPanel />}
           {drawer.tab === 'soils' && <SoilsPanel />}
+          {drawer.tab === 'underlay' && <UnderlayPanel />}
         </div>
       )}
     </section>

@@ -4,7 +4,7 @@ import { useCallback, useEffect, useMemo, useRef, useState, type PointerEvent as
 import { Layer, Shape, Stage } from 'react-konva/lib/ReactKonvaCore.js';
 import type { Context } from 'konva/lib/Context';
 import type { Shape as KonvaShape } from 'konva/lib/Shape';
-import { analyse, FOOT } from '@mainbrace/solver';
+import { analyse, FOOT, imageToPlan } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp, useAppStore } from '../state/StoreContext.js';
 import { toPlan, type ScreenPoint } from '../state/viewport.js';
 import { dragScene, planScene } from './planScene.js';
@@ -17,6 +17,10 @@ import { PlanOverlays } from './PlanOverlays.js';
 import { liveChanges } from './liveChange.js';
 import { drawLiveChange } from './drawLiveChange.js';
 import { EMPTY_SELECTION } from '../state/slices.js';
+import { drawPicks, drawUnderlay } from './drawUnderlay.js';
+import { useUnderlayImage } from '../state/underlayImage.js';
+import { UnderlayHint } from './UnderlayHint.js';
+import { TypedEntryBox } from './TypedEntryBox.js';
 import { sendPlanEvent } from '../tools/planBridge.js';
 import type { PlanEvent, PointerKind } from '../tools/planInput.js';
 import { runCommand } from '../chrome/appCommands.js';
@@ -58,6 +62,9 @@ export function PlanView() {
   const hover = useApp((s) => s.hover);
   const selectBox = useApp((s) => s.selectBox);
   const gesture = useApp((s) => s.gesture.kind);
+  const underlay = useApp((s) => s.project.underlay);
+  const underlayPick = useApp((s) => s.underlayPick);
+  const underlayImage = useUnderlayImage(underlay);
   const analysis = useAnalysis();
   // The drawn document: the store's in every result input (positions, pipes, restraint), and the same
   // object after an edit of the name or the units, so such an edit redraws nothing.
@@ -138,9 +145,10 @@ export function PlanView() {
     (_: Context, shape: KonvaShape) => {
       const ctx = native(shape);
       drawGrid(ctx, viewport, width, height, units);
+      if (underlay && underlayImage.status === 'ready') drawUnderlay(ctx, viewport, underlay, underlayImage.image);
       drawRestraints(ctx, viewport, { polygons }, width, height);
     },
-    [viewport, width, height, units, polygons],
+    [viewport, width, height, units, polygons, underlay, underlayImage],
   );
   const drawRoute = useCallback(
     (_: Context, shape: KonvaShape) => drawPipes(native(shape), viewport, { pipes }, width, height),
@@ -222,7 +230,7 @@ export function PlanView() {
   const cursor =
     gesture === 'pan'
       ? 'grabbing'
-      : tool === 'draw'
+      : tool === 'draw' || (underlayPick && underlayPick.length < 2)
         ? 'crosshair'
         : tool === 'pan'
           ? 'grab'
@@ -280,11 +288,19 @@ export function PlanView() {
                 });
               drawHover(ctx, viewport, drawn, hover, tool === 'draw');
               drawOverlay(ctx, viewport, draw, selectBox, units, snappedNow);
+              if (underlayPick && underlay)
+                drawPicks(
+                  ctx,
+                  viewport,
+                  underlayPick.map((q) => imageToPlan(underlay, q)),
+                );
             }}
           />
         </Layer>
       </Stage>
       <PlanOverlays scene={scene} coordsRef={coords} />
+      <UnderlayHint />
+      <TypedEntryBox />
     </div>
   );
 }

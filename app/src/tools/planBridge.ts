@@ -22,6 +22,9 @@ export function planInputOf(s: AppState): PlanInput {
     dragPreview: s.dragPreview,
     selectBox: s.selectBox,
     spaceHeld: s.spaceHeld,
+    underlayPick: s.underlayPick,
+    typed: s.typed,
+    typedError: s.typedError,
   };
 }
 
@@ -39,6 +42,9 @@ const KEYS = [
   'selectBox',
   'spaceHeld',
   'legendOpen',
+  'underlayPick',
+  'typed',
+  'typedError',
 ] as const satisfies readonly (keyof PlanInput & keyof AppState)[];
 
 /** Fittings in chainage order: the schedule's row order (run letter, then number). */

@@ -1,3 +1,4 @@
+import { imageToPlan } from '@mainbrace/solver';
 import type { ActionName } from '../chrome/actionTable.js';
 import { centreOn, fitView, panBy, toScreen, zoomAt } from '../state/viewport.js';
 import { EMPTY_SELECTION, type ToolName } from '../state/slices.js';
@@ -14,12 +15,23 @@ import {
 
 type Outcome = { state: PlanInput; intents: PlanIntent[] };
 
-/** The view that shows the whole route, leaving the legend's strip on the right clear. */
+/** The view that shows the whole route (or, with no route yet, the site plan), leaving the legend's strip clear. */
 export function fittedView(s: Pick<PlanInput, 'project' | 'canvas' | 'legendOpen'>) {
   const width = s.canvas.width - fitInsetRight(s);
   // A small plan cannot spare 100 px of margin a side: keep room for arrows in proportion.
   const margin = Math.min(100, 0.14 * Math.min(width, s.canvas.height));
-  return fitView(s.project.nodes, width, s.canvas.height, margin);
+  // With no route yet, a site plan to trace is what there is to see: fit its corners.
+  const u = s.project.underlay;
+  const points =
+    s.project.nodes.length === 0 && u
+      ? [
+          { u: 0, v: 0 },
+          { u: u.width, v: 0 },
+          { u: 0, v: u.height },
+          { u: u.width, v: u.height },
+        ].map((q) => imageToPlan(u, q))
+      : s.project.nodes;
+  return fitView(points, width, s.canvas.height, margin);
 }
 
 const setTool = (s: PlanInput, tool: ToolName): PlanInput => ({

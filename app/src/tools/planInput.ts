@@ -1,4 +1,4 @@
-import type { Project, UnitSystem } from '@mainbrace/solver';
+import type { ImagePoint, Project, UnitSystem } from '@mainbrace/solver';
 import type { PlanPoint, RouteEnd } from '../state/documentEdits.js';
 import type { ScreenPoint, Viewport } from '../state/viewport.js';
 import type { Selection, ToolName } from '../state/slices.js';
@@ -29,7 +29,11 @@ export type PlanEvent =
   | { type: 'key'; key: string; shift: boolean; ctrl: boolean; meta: boolean; alt: boolean; planFocused: boolean }
   | { type: 'keyUp'; key: string }
   | { type: 'command'; name: ActionName }
-  | { type: 'resize'; width: number; height: number };
+  | { type: 'resize'; width: number; height: number }
+  /** the typed-entry box's text changed (typed input while drawing) */
+  | { type: 'typedText'; text: string }
+  /** Enter in the typed-entry box: place the node it describes, or finish the run when empty */
+  | { type: 'typedEnter' };
 
 /** The gesture in progress: what the pointers pressed on the plan are doing. */
 export type Gesture =
@@ -68,6 +72,12 @@ export interface PlanInput {
   dragPreview: ReadonlyMap<string, PlanPoint> | null;
   selectBox: { from: PlanPoint; to: PlanPoint } | null;
   spaceHeld: boolean;
+  /** image points picked to calibrate the site-plan underlay; null when not picking */
+  underlayPick: readonly ImagePoint[] | null;
+  /** the typed entry while drawing (a length, turn, bearing or coordinates), '' when none */
+  typed: string;
+  /** why the last typed entry was not placed, in words; null when it was */
+  typedError: string | null;
 }
 
 /** What the dispatcher asks of the rest of the app: design edits and commands outside the plan. */
