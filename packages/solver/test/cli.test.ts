@@ -113,7 +113,9 @@ describe('the command line', () => {
     const valve = run('explain', demo, 'A10');
     expect(valve.stdout).toMatch(/^ {2}A10 block {11}\S/m);
     expect(valve.stdout).toMatch(/^ {2}A10 opposite block {2}\S/m);
-    expect(run('explain', demo, 'A6').stdout).toMatch(/^ {2}A6 anchor {2}1\.25 m cube, 1\.80 m³$/m);
+    expect(run('explain', demo, 'A6').stdout).toMatch(
+      /^ {2}A6 anchor {2}1\.25 m L × 1\.25 m W × 1\.25 m H \(cube\), 1\.80 m³$/m,
+    );
     // 6.2 m restrained at the demo's default 6 m laying length: joints at 0 and 6 m, two of them.
     expect(run('explain', demo, 'A13').stdout).toMatch(/^ {2}A13 joints {2}6\.2 m toward A12 \(2 joints\)$/m);
     expect(t.stdout).toMatch(/^A13 .*restrain 6\.2 m toward A12 \(2 joints\), 6\.2 m toward A14 \(2 joints\)/m);

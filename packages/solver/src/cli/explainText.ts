@@ -22,7 +22,7 @@ export function explainText(a: Analysis, f: FittingAnalysis, units: UnitSystem):
   const out = [`${f.mark} — ${fittingTitle(f.geometry)} (node ${f.node.id}, run ${f.run})`, ''];
   // What to build first, each element named by the fitting's mark; then how it was found.
   const row = scheduleOf(a).fittings.find((r) => r.node === f.node.id);
-  const elements = row ? restraintElements(row, units) : [];
+  const elements = row ? restraintElements(row, units, a.project.design.dimensionStep) : [];
   const width = Math.max(0, ...elements.map((e) => e.name.length));
   out.push(
     'Restraint',

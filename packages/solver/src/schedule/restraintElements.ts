@@ -1,7 +1,6 @@
 import type { UnitSystem } from '../units/conversions.js';
-import { formatDimension } from '../units/format.js';
 import { quantityText } from './columnUnits.js';
-import { blockText, restrainedLegText } from './restraintText.js';
+import { anchorText, blockText, padText, restrainedLegText } from './restraintText.js';
 import type { ScheduleFitting } from './scheduleRows.js';
 
 /** What a fitting is held by, one element each; a fitting may need several. */
@@ -32,16 +31,15 @@ export interface RestraintElement {
 }
 
 /** The restraint of one schedule row as separate elements, each named by the fitting's mark. */
-export function restraintElements(f: ScheduleFitting, units: UnitSystem): RestraintElement[] {
+export function restraintElements(f: ScheduleFitting, units: UnitSystem, step: number): RestraintElement[] {
   const r = f.restraint;
-  const dim = (m: number) => formatDimension(m, units);
   const vol = (v: number) => quantityText(v, 'volume', units);
   const out: RestraintElement[] = [];
   const add = (kind: RestraintElementKind, text: string) => out.push({ kind, name: elementName(f.mark, kind), text });
   if (r.block) add('block', `${blockText(r.block, units)}, ${vol(r.block.concreteVolume)}`);
   if (r.reverseBlock) add('reverseBlock', `${blockText(r.reverseBlock, units)}, ${vol(r.reverseBlock.concreteVolume)}`);
-  if (r.anchor) add('anchor', `${dim(r.anchor.side)} cube, ${vol(r.anchor.concreteVolume)}`);
-  if (r.trenchBottom) add('trenchBottom', `${dim(r.trenchBottom.width)} × ${dim(r.trenchBottom.length)}`);
+  if (r.anchor) add('anchor', `${anchorText(r.anchor, units)}, ${vol(r.anchor.concreteVolume)}`);
+  if (r.trenchBottom) add('trenchBottom', padText(r.trenchBottom, step, units));
   for (const leg of r.restrainedLegs) add('joints', restrainedLegText(leg, units));
   return out;
 }

@@ -2,6 +2,7 @@ import type { UnitSystem } from '../units/conversions.js';
 import { formatDimension } from '../units/format.js';
 import { quantityText } from './columnUnits.js';
 import type { ScheduleFitting } from './scheduleRows.js';
+import { anchorBox, padThickness } from './settingOut.js';
 
 type Block = NonNullable<ScheduleFitting['restraint']['block']>;
 
@@ -10,6 +11,16 @@ const dim = (m: number, units: UnitSystem) => formatDimension(m, units);
 /** "0.80 w × 0.75 h × 0.60 t": face width, face height and thickness to the bearing face. */
 export const blockText = (b: Block, units: UnitSystem): string =>
   `${dim(b.faceWidth, units)} w × ${dim(b.faceHeight, units)} h × ${dim(b.depth, units)} t`;
+
+/** "1.25 L × 1.25 W × 1.25 H (cube)": an anchor's three dimensions, "cube" while sizing gives only a volume. */
+export function anchorText(anchor: object, units: UnitSystem): string {
+  const b = anchorBox(anchor);
+  return `${dim(b.length, units)} L × ${dim(b.width, units)} W × ${dim(b.height, units)} H${b.cube ? ' (cube)' : ''}`;
+}
+
+/** "0.90 w × 0.70 l × 0.15 t": a trench-bottom pad across the trench, along the pipe, and thick. */
+export const padText = (p: { width: number; length: number }, step: number, units: UnitSystem): string =>
+  `${dim(p.width, units)} w × ${dim(p.length, units)} l × ${dim(padThickness(step), units)} t`;
 
 type RestrainedLeg = ScheduleFitting['restraint']['restrainedLegs'][number];
 
@@ -26,15 +37,13 @@ export function restrainedText(f: ScheduleFitting, units: UnitSystem): string {
 }
 
 /** What holds the fitting, in one line of display units: what a crew builds. */
-export function restraintSummary(f: ScheduleFitting, units: UnitSystem): string {
+export function restraintSummary(f: ScheduleFitting, units: UnitSystem, step: number): string {
   const r = f.restraint;
   const parts: string[] = [];
   if (r.block) parts.push(`block ${blockText(r.block, units)}`);
   if (r.reverseBlock) parts.push(`opposite block ${blockText(r.reverseBlock, units)}`);
-  if (r.anchor)
-    parts.push(`anchor ${dim(r.anchor.side, units)} cube, ${quantityText(r.anchor.concreteVolume, 'volume', units)}`);
-  if (r.trenchBottom)
-    parts.push(`bottom pad ${dim(r.trenchBottom.width, units)} × ${dim(r.trenchBottom.length, units)}`);
+  if (r.anchor) parts.push(`anchor ${anchorText(r.anchor, units)}`);
+  if (r.trenchBottom) parts.push(`bottom pad ${padText(r.trenchBottom, step, units)}`);
   if (r.restrainedLegs.length) parts.push(`restrain ${restrainedText(f, units)}`);
   return parts.length ? parts.join('; ') : '—';
 }

@@ -71,6 +71,8 @@ function fitting(f: ScheduleFitting) {
     branchAngle: rn(f.branchAngle, 'angle'),
     chainage: r(f.chainage, 'length'),
     position: vec(f.position, 'length'),
+    cover: r(f.cover, 'length'),
+    groundLevel: r(f.groundLevel, 'elevation'),
     pipes: f.pipes.map((p) => ({
       ...p,
       outsideDiameter: r(p.outsideDiameter, 'diameter'),
