@@ -11,6 +11,7 @@ import {
   quantityText,
   restrainedJointCount,
   REGISTER,
+  scheduleView,
   unverified,
   type FittingAnalysis,
   type Project,
@@ -20,6 +21,7 @@ import { bearingText, fittingTitle } from '../format/fittingNames.js';
 import { useDiagnosticWords } from '../format/words.js';
 import { useAnalysis, useApp } from '../state/StoreContext.js';
 import { CalcRecordView } from './CalcRecordView.js';
+import { RestraintSketch } from '../print/RestraintSketch.js';
 
 /** The results of one fitting: thrust per case, the governing case, its restraint and warnings. */
 export function FittingResults({ fitting: f, project }: { fitting: FittingAnalysis; project: Project }) {
@@ -29,6 +31,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
   const r = f.restraint;
   const e = f.envelope;
   const open = unverified(f.basis);
+  const row = scheduleView(analysis, u).rows.find((x) => x.fitting.node === f.node.id);
   return (
     <section className="results" aria-label={`Results for ${f.mark}`} data-testid="fitting-results">
       <h3>
@@ -134,6 +137,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
         })}
         {!r.block && !r.anchor && !r.trenchBottom && r.restrainedLegs.length === 0 && <li>None needed.</li>}
       </ul>
+      {row && <RestraintSketch fitting={row.fitting} analysis={analysis} units={u} notes={row.cells.notes} />}
       {f.diagnostics.length > 0 && (
         <>
           <h4>Findings</h4>
