@@ -7,6 +7,7 @@ import {
   fileStem,
   openProjectFile,
   projectText,
+  quantitiesCsvText,
   scheduleCsvText,
   scheduleJsonText,
 } from '../files/projectFile.js';
@@ -111,6 +112,18 @@ export function TopBar({ onPrint }: { onPrint: () => void }) {
                 }
               >
                 Schedule as JSON
+              </button>
+              <button
+                role="menuitem"
+                onClick={() =>
+                  download(
+                    `${fileStem(project())}-quantities.csv`,
+                    quantitiesCsvText(project(), store.getState().units),
+                    'text/csv',
+                  )
+                }
+              >
+                Quantities as CSV
               </button>
               <button role="menuitem" onClick={onPrint}>
                 Print the schedule…

@@ -4,6 +4,7 @@ import type { DrawerTab } from '../state/store.js';
 import { ScheduleTable } from './ScheduleTable.js';
 import { CasesPanel } from './CasesPanel.js';
 import { SoilsPanel } from './SoilsPanel.js';
+import { SheetPanel } from './SheetPanel.js';
 import { importOrReload } from '../chrome/loadChunk.js';
 
 const ProfilePanel = lazy(() =>
@@ -15,6 +16,7 @@ const TABS: { tab: DrawerTab; label: string }[] = [
   { tab: 'profile', label: 'Profile' },
   { tab: 'cases', label: 'Pressure cases' },
   { tab: 'soils', label: 'Soils & design' },
+  { tab: 'sheet', label: 'Sheet & quantities' },
 ];
 
 /** The route-wide views under the plan; it can be raised to fill the window for the schedule. */
@@ -69,6 +71,7 @@ export function Drawer() {
           )}
           {drawer.tab === 'cases' && <CasesPanel />}
           {drawer.tab === 'soils' && <SoilsPanel />}
+          {drawer.tab === 'sheet' && <SheetPanel />}
         </div>
       )}
     </section>

@@ -6,7 +6,7 @@ import type { DrawState } from '../tools/drawTool.js';
 export type ToolName = 'select' | 'draw' | 'pan';
 /** Which thrusts the plan shows: one load case or the envelope of all. */
 export type CaseView = { kind: 'case'; id: string } | { kind: 'envelope' };
-export type DrawerTab = 'schedule' | 'profile' | 'cases' | 'soils';
+export type DrawerTab = 'schedule' | 'profile' | 'cases' | 'soils' | 'sheet';
 
 export interface Selection {
   nodes: ReadonlySet<string>;
