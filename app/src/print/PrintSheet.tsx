@@ -20,6 +20,7 @@ import { RestraintSketch } from './RestraintSketch.js';
 import { TakeOffTable } from './TakeOffTable.js';
 import { TitleBlock } from './TitleBlock.js';
 import { Appendix } from './Appendix.js';
+import { PlanExportButtons } from './PlanExportButtons.js';
 
 /** Fittings per crew page: six sketches a page is the budget (crew-sheet.md). */
 export const PER_PAGE = 6;
@@ -233,6 +234,7 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
           />{' '}
           Calculation appendix (for the reviewing engineer)
         </label>
+        <PlanExportButtons />
         <span className="muted" role="status" aria-live="polite" data-testid="print-progress">
           {done
             ? `${pages.length} sheet${pages.length === 1 ? '' : 's'} for ${view.rows.length} fittings${appendix ? ', then the appendix' : ''}`
