@@ -85,6 +85,8 @@ async function start() {
   const project = await firstProject(kept);
   const store = createAppStore(project, defaultPipe(project));
   const actions = createActions(store);
+  // The demo or a blank project is nobody's unsaved work: New replaces it without asking.
+  if (kept.kind !== 'project') actions.markSaved(project);
   const autosave = startAutosave(store, {
     kv,
     channel,
@@ -112,6 +114,15 @@ async function start() {
           pipes: [...store.getState().selection.pipes],
         }),
         viewport: () => ({ ...store.getState().viewport }),
+        // cheap reads for the benchmarks, which must not clone a 10,000-node document to count it
+        counts: () => {
+          const p = store.getState().project;
+          return { nodes: p.nodes.length, pipes: p.pipes.length, fittings: analyse(p).fittings.length };
+        },
+        nodeAt: (i: number) => {
+          const n = store.getState().project.nodes[i];
+          return n ? { x: n.x, y: n.y } : null;
+        },
         canUndo: () => store.temporal.getState().pastStates.length > 0,
       }),
     });

@@ -73,12 +73,14 @@ export async function openProjectFile(
   file: File,
   actions: {
     replaceProject: (p: Project) => void;
+    markSaved?: (p: Project) => void;
     notify: (n: { tone: 'info' | 'error'; title: string; lines: string[] }) => void;
   },
 ): Promise<void> {
   const r = await readProjectFile(file);
   if (r.ok) {
     actions.replaceProject(r.project);
+    actions.markSaved?.(r.project);
     actions.notify({ tone: 'info', title: `Opened ${file.name}`, lines: [] });
   } else
     actions.notify({ tone: 'error', title: `${file.name} was not opened — your project is unchanged`, lines: r.lines });

@@ -115,7 +115,7 @@ export function runCli(argv: readonly string[], rawIo: CliIo): number {
     }
     if (!['schedule', 'quantities', 'validate', 'explain'].includes(args.command)) {
       throw new UsageError(
-        `unknown command "${escapeControls(args.command)}": expected schedule, quantities, explain, validate or schema`,
+        `unknown command "${escapeControls(args.command)}": expected schedule, quantities, explain, validate, schema, import or export`,
       );
     }
     const loaded = load(io, args.positional[0], maxBytesOption(args.options.get('max-size')));

@@ -159,8 +159,13 @@ export const nodeSchema = z.strictObject({
   y: limited('coordinate'),
   /** m, pipe centreline elevation */
   elevation: limited('elevation'),
-  /** m, ground surface to top of pipe */
+  /** m, ground surface to top of pipe; derived from groundLevel when the node has one */
   cover: limited('cover').default(1.2),
+  /**
+   * m, ground surface elevation (a survey level), optional. With it the pipe centreline stays where
+   * `elevation` puts it and the cover is groundLevel − elevation − OD/2 (model/groundLevel.ts).
+   */
+  groundLevel: limited('elevation').optional(),
   soil: id.optional(),
   end: z.enum(END_CONDITIONS).default('cap'),
   valve: z.boolean().default(false),
@@ -210,6 +215,16 @@ export const projectShape = z.strictObject({
   nodes: z.array(nodeSchema).default([]),
   pipes: z.array(pipeSchema).default([]),
   sheet: sheetSchema.optional(),
+  /**
+   * where the plan lies on the earth, optional: x and y are metres in this projection of WGS 84, so the
+   * design can be exported as GeoJSON longitude/latitude (project-format.md, "Georeference")
+   */
+  georeference: z
+    .strictObject({
+      /** a proj4 definition, such as the local transverse Mercator an import made */
+      proj4: z.string().min(1, { error: 'must be a proj4 definition' }).max(400),
+    })
+    .optional(),
 });
 
 export type Project = z.output<typeof projectShape>;
