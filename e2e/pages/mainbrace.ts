@@ -145,7 +145,7 @@ export class MainbracePage {
     await this.page.getByTestId('open-file').setInputFiles(path);
   }
 
-  async drawerTab(tab: 'schedule' | 'profile' | 'cases' | 'soils') {
+  async drawerTab(tab: 'schedule' | 'profile' | 'cases' | 'soils' | 'sheet') {
     await this.page.getByTestId(`tab-${tab}`).click();
   }
 

@@ -29,6 +29,7 @@ export type ActionName =
   | 'exportCsv'
   | 'exportJson'
   | 'exportGeoJson'
+  | 'exportQuantities'
   | 'print'
   | 'undo'
   | 'redo'
@@ -58,6 +59,14 @@ export const ACTIONS: readonly ActionSpec[] = [
   {
     name: 'exportGeoJson',
     label: 'Design as GeoJSON (for a GIS)',
+    keys: [],
+    undo: 'none',
+    scope: 'window',
+    menu: 'export',
+  },
+  {
+    name: 'exportQuantities',
+    label: 'Quantities as CSV',
     keys: [],
     undo: 'none',
     scope: 'window',

@@ -2,7 +2,14 @@ import { loadExchange } from '../files/routeImport.js';
 import { savedDocument } from '../state/savedDocument.js';
 import type { AppStore } from '../state/store.js';
 import type { Actions } from '../state/actions.js';
-import { download, fileStem, projectText, scheduleCsvText, scheduleJsonText } from '../files/projectFile.js';
+import {
+  download,
+  fileStem,
+  projectText,
+  quantitiesCsvText,
+  scheduleCsvText,
+  scheduleJsonText,
+} from '../files/projectFile.js';
 import { blankProject } from '../files/blankProject.js';
 import type { ActionName } from './actionTable.js';
 
@@ -82,6 +89,12 @@ export function runCommand(name: ActionName, store: AppStore, actions: Actions) 
       return download(
         `${fileStem(project())}-schedule.csv`,
         scheduleCsvText(project(), store.getState().units),
+        'text/csv',
+      );
+    case 'exportQuantities':
+      return download(
+        `${fileStem(project())}-quantities.csv`,
+        quantitiesCsvText(project(), store.getState().units),
         'text/csv',
       );
     case 'exportJson':

@@ -6,6 +6,9 @@ import {
   scheduleJson,
   scheduleOf,
   scheduleView,
+  takeOff,
+  takeOffCsv,
+  takeOffRows,
   type Project,
   type UnitSystem,
 } from '@mainbrace/solver';
@@ -60,6 +63,10 @@ export const scheduleJsonText = (p: Project) => scheduleJson(scheduleOf(analyse(
 
 /** The schedule CSV in the chosen display units, the same as `schedule --format csv --units`. */
 export const scheduleCsvText = (p: Project, units: UnitSystem): string => scheduleCsv(scheduleView(analyse(p), units));
+
+/** The quantities take-off as CSV, the same lines as `mainbrace quantities --format csv`. */
+export const quantitiesCsvText = (p: Project, units: UnitSystem): string =>
+  takeOffCsv(takeOffRows(takeOff(scheduleOf(analyse(p)).fittings, p, units), units));
 
 /** Opens a dropped or chosen file: the project is replaced only if the file is valid, and the user is told. */
 export async function openProjectFile(

@@ -5,6 +5,7 @@ import { ScheduleTable } from './ScheduleTable.js';
 import { CasesPanel } from './CasesPanel.js';
 import { SoilsPanel } from './SoilsPanel.js';
 import { UnderlayPanel } from './UnderlayPanel.js';
+import { SheetPanel } from './SheetPanel.js';
 import { importOrReload } from '../chrome/loadChunk.js';
 
 const ProfilePanel = lazy(() =>
@@ -17,6 +18,7 @@ const TABS: { tab: DrawerTab; label: string }[] = [
   { tab: 'cases', label: 'Pressure cases' },
   { tab: 'soils', label: 'Soils & design' },
   { tab: 'underlay', label: 'Site plan' },
+  { tab: 'sheet', label: 'Sheet & quantities' },
 ];
 
 /** The route-wide views under the plan; it can be raised to fill the window for the schedule. */
@@ -87,6 +89,7 @@ export function Drawer() {
           {drawer.tab === 'cases' && <CasesPanel />}
           {drawer.tab === 'soils' && <SoilsPanel />}
           {drawer.tab === 'underlay' && <UnderlayPanel />}
+          {drawer.tab === 'sheet' && <SheetPanel />}
         </div>
       )}
     </section>

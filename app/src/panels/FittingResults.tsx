@@ -12,6 +12,7 @@ import {
   quantityText,
   restrainedJointCount,
   REGISTER,
+  scheduleView,
   unverified,
   formatNumber,
   toDisplay,
@@ -23,6 +24,7 @@ import { bearingText, fittingTitle } from '../format/fittingNames.js';
 import { useDiagnosticWords } from '../format/words.js';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
 import { CalcRecordView } from './CalcRecordView.js';
+import { RestraintSketch } from '../print/RestraintSketch.js';
 
 /** The results of one fitting: thrust per case, the governing case, its restraint and warnings. */
 /** What set a block's face, in words. */
@@ -41,6 +43,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
   const e = f.envelope;
   const open = unverified(f.basis);
   const forceUnit = u === 'us' ? 'kip' : 'kN';
+  const row = scheduleView(analysis, u).rows.find((x) => x.fitting.node === f.node.id);
   return (
     <section className="results" aria-label={`Results for ${f.mark}`} data-testid="fitting-results">
       <h3>
@@ -189,6 +192,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
         })}
         {!r.block && !r.anchor && !r.trenchBottom && r.restrainedLegs.length === 0 && <li>None needed.</li>}
       </ul>
+      {row && <RestraintSketch fitting={row.fitting} analysis={analysis} units={u} notes={row.cells.notes} />}
       {f.diagnostics.length > 0 && (
         <>
           <h4>Findings</h4>

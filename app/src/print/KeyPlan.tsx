@@ -9,8 +9,27 @@ const W = 420;
 const H = 230;
 const PAD = 22;
 
-/** A small plan of the whole route with every fitting's mark, north and a scale: where each row is. */
-export function KeyPlan({ project, analysis }: { project: Project; analysis: Analysis }) {
+/**
+ * Mark size in viewBox units: the key plan prints about 88 mm wide, so 12.5 of 420 units is 2.6 mm,
+ * 7.4 pt (crew-sheet.md: marks at least 7 pt).
+ */
+const MARK = 12.5;
+/** More pipes than this are drawn as every n-th one joined up: a key plan shows the shape, not each joint. */
+const MOST_SEGMENTS = 1500;
+
+/**
+ * A small plan of the whole route with fitting marks, north and a scale: where each row is. With
+ * `marks`, only those fittings (a page's) are labelled and drawn strong, the rest as dots.
+ */
+export function KeyPlan({
+  project,
+  analysis,
+  marks,
+}: {
+  project: Project;
+  analysis: Analysis;
+  marks?: ReadonlySet<string>;
+}) {
   const units = useApp((s) => s.units);
   if (project.nodes.length === 0) return null;
   const xs = project.nodes.map((n) => n.x),
@@ -33,7 +52,10 @@ export function KeyPlan({ project, analysis }: { project: Project; analysis: Ana
     <figure className="key-plan">
       <svg viewBox={`0 0 ${W} ${H}`} role="img" aria-label="Key plan of the route with fitting marks">
         <rect x="0.5" y="0.5" width={W - 1} height={H - 1} fill="none" stroke={PALETTE.gridMajor} />
-        {project.pipes.map((p) => {
+        {(project.pipes.length > MOST_SEGMENTS
+          ? project.pipes.filter((_, i) => i % Math.ceil(project.pipes.length / MOST_SEGMENTS) === 0)
+          : project.pipes
+        ).map((p) => {
           const a = at.get(p.from)!,
             b = at.get(p.to)!;
           return (
@@ -51,41 +73,47 @@ export function KeyPlan({ project, analysis }: { project: Project; analysis: Ana
         {tieIns.map((n) => (
           <g key={n.id}>
             <FittingGlyph kind="tie-in" x={sx(n.x)} y={sy(n.y)} scale={0.6} />
-            <text x={sx(n.x) + 5} y={sy(n.y) - 4} fontSize="7.5" fontFamily={LABEL_FACE} fontWeight="700">
+            <text x={sx(n.x) + 5} y={sy(n.y) - 4} fontSize={MARK} fontFamily={LABEL_FACE} fontWeight="700">
               {analysis.marks.get(n.id)}
             </text>
           </g>
         ))}
-        {analysis.fittings.map((f, i) => (
-          <g key={f.node.id}>
-            <FittingGlyph
-              kind={f.geometry.kind}
-              x={sx(f.node.x)}
-              y={sy(f.node.y)}
-              angle={f.legs[0] ? (Math.atan2(-f.legs[0].direction[1], f.legs[0].direction[0]) * 180) / Math.PI : 0}
-              scale={0.6}
-            />
-            <text
-              x={sx(f.node.x) + 5}
-              y={sy(f.node.y) + (i % 2 ? 10 : -4)}
-              fontSize="7.5"
-              fontFamily={LABEL_FACE}
-              fontWeight="700"
-              fill={PALETTE.ink}
-            >
-              {f.mark}
-            </text>
-          </g>
-        ))}
+        {analysis.fittings.map((f, i) =>
+          marks && !marks.has(f.mark) ? (
+            marks.size < 60 || i % 20 === 0 ? (
+              <circle key={f.node.id} cx={sx(f.node.x)} cy={sy(f.node.y)} r={1.6} fill={PALETTE.gridLabel} />
+            ) : null
+          ) : (
+            <g key={f.node.id}>
+              <FittingGlyph
+                kind={f.geometry.kind}
+                x={sx(f.node.x)}
+                y={sy(f.node.y)}
+                angle={f.legs[0] ? (Math.atan2(-f.legs[0].direction[1], f.legs[0].direction[0]) * 180) / Math.PI : 0}
+                scale={0.6}
+              />
+              <text
+                x={sx(f.node.x) + 5}
+                y={sy(f.node.y) + (i % 2 ? 14 : -5)}
+                fontSize={MARK}
+                fontFamily={LABEL_FACE}
+                fontWeight="700"
+                fill={PALETTE.ink}
+              >
+                {f.mark}
+              </text>
+            </g>
+          ),
+        )}
         <g transform={`translate(${W - 18}, 10)`}>
           <path d="M0 0 L5 14 L0 11 L-5 14 Z" fill={PALETTE.ink} />
-          <text x="0" y="23" textAnchor="middle" fontSize="8" fontWeight="700">
+          <text x="0" y="25" textAnchor="middle" fontSize={MARK} fontWeight="700">
             N
           </text>
         </g>
         <g transform={`translate(10, ${H - 12})`}>
           <rect width={bar * scale} height="4" fill={PALETTE.ink} />
-          <text x={bar * scale + 4} y="5" fontSize="7.5">
+          <text x={bar * scale + 4} y="5" fontSize={MARK}>
             {formatSi(bar, 'length', units)}
           </text>
         </g>

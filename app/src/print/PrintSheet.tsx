@@ -1,213 +1,282 @@
-import { CAUTIONS, calculationRecord, columnNumber, columnUnit, pickColumns, scheduleView } from '@mainbrace/solver';
+import { useEffect, useMemo, useState } from 'react';
+import {
+  CAUTIONS,
+  columnNumber,
+  columnUnit,
+  pickColumns,
+  positionColumns,
+  scheduleView,
+  takeOff,
+  takeOffRows,
+  type Analysis,
+  type Project,
+  type ScheduleView,
+  type UnitSystem,
+  type ViewRow,
+} from '@mainbrace/solver';
 import { useAnalysis, useApp } from '../state/StoreContext.js';
-import { show } from '../format/quantity.js';
-import { fittingTitle } from '../format/fittingNames.js';
-import { CalcRecordView } from '../panels/CalcRecordView.js';
 import { KeyPlan } from './KeyPlan.js';
+import { RestraintSketch } from './RestraintSketch.js';
+import { TakeOffTable } from './TakeOffTable.js';
+import { TitleBlock } from './TitleBlock.js';
+import { Appendix } from './Appendix.js';
+import { PlanExportButtons } from './PlanExportButtons.js';
 
-/** The columns the printed schedule shows, from the one schedule view. */
-const PRINT_COLUMNS = [
+/** Fittings per crew page: six sketches a page is the budget (crew-sheet.md). */
+export const PER_PAGE = 6;
+/** Pages made per step while the sheet is prepared: each step stays a short task on a long route. */
+const PAGES_PER_STEP = 3;
+
+/** The schedule columns of the crew part: where each fitting is and what to build, no forces. */
+const crewColumns = (project: Project) => [
   'mark',
-  'chainage',
+  ...positionColumns(project.sheet?.chainageStyle),
   'fitting',
   'od',
-  'pressure',
-  'case',
-  'horizontal',
-  'upward',
-  'downward',
-  'bears',
-  'soil',
+  'east',
+  'north',
+  'level',
+  'ground',
   'restraint',
+  'concrete',
   'notes',
 ];
 
+/** The four cautions a crew must not miss, printed on every page (the full list is in the appendix). */
+const PAGE_CAUTIONS = [CAUTIONS[0]!, CAUTIONS[1]!, CAUTIONS[3]!, CAUTIONS[4]!, CAUTIONS[5]!];
+
+type Paper = 'a4' | 'letter';
+
 /**
- * The printable fitting schedule: its own layout (landscape sheet), shown as a preview over the app
- * and alone on paper. Project, date, units, design basis, the schedule, cautions, and an appendix
- * with each fitting's calculation record.
+ * Makes `total` items in steps of `step` (one step per macrotask), so that a 10,000-node route's
+ * sheet is built without a long task: returns how many are ready.
+ */
+function useSteps(total: number, step: number): number {
+  const [state, setState] = useState(() => ({ total, ready: Math.min(total, step) }));
+  // A new schedule starts over (adjusting state during render, not in an effect).
+  if (state.total !== total) setState({ total, ready: Math.min(total, step) });
+  const ready = state.total === total ? state.ready : Math.min(total, step);
+  useEffect(() => {
+    if (ready >= total) return;
+    const id = setTimeout(() => setState((s) => ({ total: s.total, ready: Math.min(s.total, s.ready + step) })), 0);
+    return () => clearTimeout(id);
+  }, [ready, total, step]);
+  return ready;
+}
+
+function CrewPage({
+  rows,
+  index,
+  pages,
+  view,
+  analysis,
+  project,
+  units,
+  extra,
+}: {
+  rows: ViewRow[];
+  index: number;
+  pages: number;
+  view: ScheduleView;
+  analysis: Analysis;
+  project: Project;
+  units: UnitSystem;
+  /** what fills the free half of a short last page: the job's take-off */
+  extra?: React.ReactNode;
+}) {
+  const columns = pickColumns(view, crewColumns(project));
+  const marks = new Set(rows.map((r) => r.fitting.mark));
+  const notes = view.notes.filter((n) => n.marks.some((m) => marks.has(m)) || (index === 0 && n.marks.length === 0));
+  const pageTakeOff = takeOff(
+    rows.map((r) => r.fitting),
+    project,
+    units,
+  );
+  const first = rows[0]!.cells,
+    end = rows[rows.length - 1]!.cells;
+  const position = positionColumns(project.sheet?.chainageStyle)[0]!;
+  return (
+    <section className="sheet-page" data-testid="crew-page" aria-label={`Sheet ${index + 1} of ${pages}`}>
+      <TitleBlock
+        project={project}
+        units={units}
+        subtitle={`${first.mark}–${end.mark}, ${position === 'station' ? 'stations' : 'chainage'} ${first[position]} to ${end[position]}`}
+        sheet={`Sheet ${index + 1} of ${pages}`}
+        note={
+          pageTakeOff.concreteNet > 0
+            ? `Concrete this sheet ${columnNumber(pageTakeOff.concreteNet, 'volume', units)} ${columnUnit('volume', units)} net, ` +
+              `${columnNumber(pageTakeOff.concreteOrdered, 'volume', units)} ${columnUnit('volume', units)} to order with ${Math.round(pageTakeOff.waste * 1000) / 10} % waste`
+            : undefined
+        }
+      />
+      <table className="sheet-schedule crew-table">
+        <thead>
+          <tr>
+            {columns.map((c) => (
+              <th key={c.id} className={`col-${c.id}`}>
+                {c.heading}
+              </th>
+            ))}
+          </tr>
+        </thead>
+        <tbody>
+          {rows.map((r) => (
+            <tr
+              key={r.fitting.node}
+              className={r.fitting.diagnostics.some((d) => d.severity === 'error') ? 'not-adequate' : ''}
+            >
+              {columns.map((c) => (
+                <td key={c.id} className={c.kind === 'text' ? (c.id === 'mark' ? 'mark' : '') : 'num'}>
+                  {r.cells[c.id]}
+                </td>
+              ))}
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      <div className={`sheet-body ${extra ? 'with-extra' : ''}`}>
+        <div className={`sketches ${rows.length <= PER_PAGE / 2 ? 'one-row' : ''}`}>
+          {rows.map((r) => (
+            <RestraintSketch
+              key={r.fitting.node}
+              fitting={r.fitting}
+              analysis={analysis}
+              units={units}
+              notes={r.cells.notes}
+            />
+          ))}
+        </div>
+        <aside className="sheet-side">
+          <KeyPlan project={project} analysis={analysis} marks={marks} />
+          {notes.length > 0 && (
+            <ol className="sheet-notes">
+              {notes.map((n) => (
+                <li key={n.number} value={n.number} className={`note-${n.severity}`}>
+                  {n.severity === 'error' ? <strong>NOT ADEQUATE. </strong> : null}
+                  {n.text} ({n.marks.join(', ') || 'whole route'})
+                </li>
+              ))}
+            </ol>
+          )}
+        </aside>
+        {extra}
+      </div>
+      <footer className="sheet-foot">
+        <ol className="sheet-cautions">
+          {PAGE_CAUTIONS.map((c) => (
+            <li key={c}>{c}</li>
+          ))}
+        </ol>
+        <div className="sheet-pageno">
+          Sheet {index + 1} of {pages}
+        </div>
+      </footer>
+    </section>
+  );
+}
+
+/**
+ * The printable sheet (crew-sheet.md): the crew part — pages of six fittings, each with the title
+ * block, the schedule rows, a dimensioned sketch per fitting, the key plan, the numbered notes and
+ * quantities, cautions and page number — then the job's quantities take-off, then, if asked for, the
+ * calculation appendix for the reviewing engineer. Pages are made a few at a time with progress, so
+ * that a long route does not freeze the tab.
  */
 export function PrintSheet({ onClose }: { onClose: () => void }) {
   const project = useApp((s) => s.project);
   const analysis = useAnalysis();
-  const u = useApp((s) => s.units);
-  const view = scheduleView(analysis, u);
-  const columns = pickColumns(view, PRINT_COLUMNS);
-  const d = project.design;
-  const today = new Date().toISOString().slice(0, 10);
-  const concrete = view.rows.reduce((v, r) => v + (r.values.concrete ?? 0), 0);
+  const units = useApp((s) => s.units);
+  const [appendix, setAppendix] = useState(false);
+  const [paper, setPaper] = useState<Paper>('a4');
+  const view = scheduleView(analysis, units);
+  const pages = useMemo(() => {
+    const out: ViewRow[][] = [];
+    for (let i = 0; i < view.rows.length; i += PER_PAGE) out.push(view.rows.slice(i, i + PER_PAGE));
+    return out;
+  }, [view]);
+  // The job's take-off fills the second row of sketches of a last page with three fittings or fewer.
+  const fitsOnLast = (pages[pages.length - 1]?.length ?? PER_PAGE) <= PER_PAGE / 2;
+  const ready = useSteps(pages.length, PAGES_PER_STEP);
+  const done = ready >= pages.length;
+  const job = useMemo(
+    () =>
+      takeOffRows(
+        takeOff(
+          view.rows.map((r) => r.fitting),
+          project,
+          units,
+        ),
+        units,
+      ),
+    [view, project, units],
+  );
   return (
-    <div className="print-preview" data-testid="print-sheet">
+    <div className={`print-preview paper-${paper}`} data-testid="print-sheet">
+      <style>{`@page { size: ${paper === 'a4' ? 'A4' : 'letter'} landscape; }`}</style>
       <div className="print-toolbar no-print">
-        <button onClick={() => window.print()}>Print</button>
+        <button onClick={() => window.print()} disabled={!done} data-testid="print-now">
+          Print
+        </button>
         <button onClick={onClose}>Back to the plan</button>
-        <span className="muted">Landscape; the schedule, then the calculation of every fitting.</span>
+        <label>
+          Paper{' '}
+          <select value={paper} onChange={(e) => setPaper(e.target.value as Paper)} aria-label="Paper size">
+            <option value="a4">A4 landscape</option>
+            <option value="letter">Letter landscape</option>
+          </select>
+        </label>
+        <label>
+          <input
+            type="checkbox"
+            checked={appendix}
+            onChange={(e) => setAppendix(e.target.checked)}
+            data-testid="print-appendix"
+          />{' '}
+          Calculation appendix (for the reviewing engineer)
+        </label>
+        <PlanExportButtons />
+        <span className="muted" role="status" aria-live="polite" data-testid="print-progress">
+          {done
+            ? `${pages.length} sheet${pages.length === 1 ? '' : 's'} for ${view.rows.length} fittings${appendix ? ', then the appendix' : ''}`
+            : `Preparing sheet ${ready} of ${pages.length}…`}
+        </span>
       </div>
-      <article className="sheet">
-        <header className="sheet-head">
-          <div>
-            <div className="sheet-kicker">Fitting schedule — thrust restraint</div>
-            <h1>{project.name}</h1>
-          </div>
-          <dl>
-            <dt>Date</dt>
-            <dd>{today}</dd>
-            <dt>Units</dt>
-            <dd>{u === 'si' ? 'SI (kN, kPa, m, m³)' : 'US customary (lbf/kip, psi, ft, yd³)'}</dd>
-            <dt>Fittings</dt>
-            <dd>{view.rows.length}</dd>
-          </dl>
-        </header>
-        <section className="sheet-caution" role="note">
-          <strong>Design aid only.</strong> {CAUTIONS[0]} {CAUTIONS[1]}
-        </section>
-        <section className="sheet-basis">
-          <h2>Design basis</h2>
-          <div className="basis-grid">
-            <table>
-              <thead>
-                <tr>
-                  <th>Case</th>
-                  <th>Pressure</th>
-                  <th>at datum</th>
-                  <th>Flow factor</th>
-                </tr>
-              </thead>
-              <tbody>
-                {project.loadCases.map((c) => (
-                  <tr key={c.id}>
-                    <td>{c.label ?? c.id}</td>
-                    <td>{show(c.pressure, 'pressure', u)}</td>
-                    <td>{c.datumElevation === undefined ? 'every node' : show(c.datumElevation, 'elevation', u, 4)}</td>
-                    <td>{c.flowFactor}</td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-            <table>
-              <thead>
-                <tr>
-                  <th>Soil</th>
-                  <th>Bearing</th>
-                  <th>γ</th>
-                  <th>φ</th>
-                  <th>c</th>
-                </tr>
-              </thead>
-              <tbody>
-                {project.soils.map((s) => (
-                  <tr key={s.id}>
-                    <td>
-                      {s.label ?? s.id}
-                      {s.source ? <div className="small muted">{s.source}</div> : null}
-                    </td>
-                    <td>
-                      {show(s.bearing, 'stress', u)}
-                      {s.bearingPerDepth ? ` + ${show(s.bearingPerDepth, 'stressGradient', u)} of depth` : ''}
-                    </td>
-                    <td>{show(s.unitWeight, 'unitWeight', u)}</td>
-                    <td>{show(s.frictionAngle, 'angle', u)}</td>
-                    <td>{show(s.cohesion, 'stress', u)}</td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-            <KeyPlan project={project} analysis={analysis} />
-            <ul className="basis-list">
-              <li>
-                Safety factors: bearing {d.bearingSafetyFactor}, uplift {d.upliftSafetyFactor}, restrained joints{' '}
-                {d.restraintSafetyFactor}
-              </li>
-              <li>
-                Pressure acts on the {d.thrustArea} diameter; water {show(project.water.density, 'density', u)}
-              </li>
-              <li>
-                Concrete {show(d.concreteUnitWeight, 'unitWeight', u)}; blocks {show(d.blockDepth, 'length', u)} deep to
-                the bearing face
-              </li>
-              <li>
-                Groundwater{' '}
-                {d.groundwaterElevation === null
-                  ? 'below every block'
-                  : `at ${show(d.groundwaterElevation, 'elevation', u, 4)}`}
-              </li>
-              <li>
-                Thrust by the steady momentum balance at each fitting; bearing area A = SF·T/σ; anchors W ≥ SF·T_up
-              </li>
-            </ul>
-          </div>
-        </section>
-        <section>
-          <h2>Schedule</h2>
-          <table className="sheet-schedule">
-            <colgroup>
-              {[4.5, 6.5, 9, 6, 6.5, 7, 6, 6.5, 7, 33, 8].map((w, i) => (
-                <col key={i} style={{ width: `${w}%` }} />
-              ))}
-            </colgroup>
-            <thead>
-              <tr>
-                {columns.map((c) => (
-                  <th key={c.id}>{c.heading}</th>
-                ))}
-              </tr>
-            </thead>
-            <tbody>
-              {view.rows.map((r) => (
-                <tr
-                  key={r.fitting.node}
-                  className={r.fitting.diagnostics[0]?.severity === 'error' ? 'not-adequate' : ''}
-                >
-                  {columns.map((c) => (
-                    <td key={c.id} className={c.kind === 'text' ? (c.id === 'mark' ? 'mark' : '') : 'num'}>
-                      {r.cells[c.id]}
-                    </td>
-                  ))}
-                </tr>
-              ))}
-            </tbody>
-          </table>
-          <p className="sheet-total">
-            Total concrete in blocks and anchors:{' '}
-            <strong>
-              {columnNumber(concrete, 'volume', u)} {columnUnit('volume', u)}
-            </strong>{' '}
-            for {view.rows.length} fittings
-          </p>
-          {view.notes.length > 0 && (
-            <>
-              <h3>Notes</h3>
-              <ol className="sheet-notes">
-                {view.notes.map((n) => (
-                  <li key={n.number} value={n.number} className={`note-${n.severity}`}>
-                    {n.severity === 'error' ? <strong>Not adequate. </strong> : null}
-                    {n.text} ({n.marks.join(', ')})
-                  </li>
-                ))}
-              </ol>
-            </>
-          )}
-        </section>
-        <section className="sheet-cautions">
-          <h2>Cautions</h2>
-          <ol>
-            {CAUTIONS.map((c) => (
-              <li key={c}>{c}</li>
-            ))}
-          </ol>
-        </section>
-        <section className="appendix">
-          <h2>Appendix — calculation of each fitting</h2>
-          {analysis.fittings.map((f) => (
-            <div className="appendix-fitting" key={f.node.id}>
-              <h3>
-                {f.mark} — {fittingTitle(f.geometry)} (node {f.node.id}
-                {f.node.label ? `, ${f.node.label}` : ''})
-              </h3>
-              {calculationRecord(project, f).length > 0 && <CalcRecordView fitting={f} project={project} />}
-            </div>
-          ))}
-        </section>
+      <article className="sheet crew-sheet" data-ready={done ? 'yes' : 'no'}>
+        {pages.slice(0, ready).map((rows, i) => (
+          <CrewPage
+            key={i}
+            rows={rows}
+            index={i}
+            pages={pages.length}
+            view={view}
+            analysis={analysis}
+            project={project}
+            units={units}
+            extra={
+              i === pages.length - 1 && fitsOnLast ? (
+                <section className="sheet-takeoff in-page" data-testid="job-takeoff">
+                  <h3>Quantities take-off — whole route</h3>
+                  <div className="takeoff-pair">
+                    <TakeOffTable rows={job.filter((l) => l.section === 'Concrete')} compact />
+                    <TakeOffTable
+                      rows={job.filter((l) => l.section === 'Restrained joints' || l.section === 'Anchors')}
+                      compact
+                    />
+                    <TakeOffTable rows={job.filter((l) => l.section === 'Fittings')} compact />
+                  </div>
+                </section>
+              ) : undefined
+            }
+          />
+        ))}
+        {pages.length === 0 && <p className="muted">No fitting needs restraint yet: draw the route first.</p>}
+        {done && pages.length > 0 && !fitsOnLast && (
+          <section className="sheet-takeoff" data-testid="job-takeoff">
+            <h2>Quantities take-off — whole route</h2>
+            <TakeOffTable rows={job} />
+          </section>
+        )}
+        {done && appendix && <Appendix project={project} analysis={analysis} units={units} />}
       </article>
     </div>
   );

@@ -1,4 +1,13 @@
-import { type LoadCase, type Pipe, type Project, type ProjectNode, type Soil, type Underlay } from '@mainbrace/solver';
+import {
+  sheetSchema,
+  type LoadCase,
+  type Pipe,
+  type Project,
+  type ProjectNode,
+  type Sheet,
+  type Soil,
+  type Underlay,
+} from '@mainbrace/solver';
 import type { AppState, AppStore, CaseView, DrawerTab, Selection, ToolName } from './store.js';
 import { EMPTY_SELECTION } from './store.js';
 import {
@@ -150,6 +159,12 @@ export function createActions(store: AppStore) {
     /** Display units are a view setting: no undo step, no change to any result. */
     setUnits: (units: Project['units']) => set({ units }),
     updateDesign: (patch: Partial<Project['design']>) => edit((p) => ({ ...p, design: { ...p.design, ...patch } })),
+    /** Title-block fields and the chainage style; typing in one field is one undo step. */
+    updateSheet: (patch: Partial<Sheet>) =>
+      edit(
+        (p) => ({ ...p, sheet: { ...sheetSchema.parse(p.sheet ?? {}), ...patch } }),
+        `sheet-${Object.keys(patch).join('-')}`,
+      ),
     setWaterDensity: (density: number) => edit((p) => ({ ...p, water: { density } })),
     updateCase: (id: string, patch: Partial<LoadCase>) =>
       edit(

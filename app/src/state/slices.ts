@@ -9,7 +9,7 @@ import type { ScreenPoint } from './viewport.js';
 export type ToolName = 'select' | 'draw' | 'pan';
 /** Which thrusts the plan shows: one load case or the envelope of all. */
 export type CaseView = { kind: 'case'; id: string } | { kind: 'envelope' };
-export type DrawerTab = 'schedule' | 'profile' | 'cases' | 'soils' | 'underlay';
+export type DrawerTab = 'schedule' | 'profile' | 'cases' | 'soils' | 'sheet' | 'underlay';
 
 export interface Selection {
   nodes: ReadonlySet<string>;

@@ -55,6 +55,8 @@ export { scheduleJson, diagnosticJson, JSON_DECIMALS } from './schedule/schedule
 export {
   restraintSummary,
   blockText,
+  anchorText,
+  padText,
   restrainedText,
   restrainedLegText,
   jointsText,
@@ -95,6 +97,10 @@ export { REGISTER, provenance, unverified, type ProvenanceId } from './provenanc
 export { notVerifiedText, type ProvenanceEntry, type SourceKind } from './provenance/entry.js';
 export { CAUTIONS, SHORT_CAUTION } from './schedule/cautions.js';
 export { restraintConcrete } from './schedule/concrete.js';
+export * from './schedule/quantities.js';
+export { takeOffCsv, takeOffTable } from './schedule/quantitiesText.js';
+export * from './schedule/settingOut.js';
+export { stationText, positionColumns } from './schedule/stations.js';
 export * from './catalog/catalog.js';
 export {
   BEDDINGS,

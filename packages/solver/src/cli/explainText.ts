@@ -23,7 +23,7 @@ export function explainText(a: Analysis, f: FittingAnalysis, units: UnitSystem):
   const row = scheduleOf(a).fittings.find((r) => r.node === f.node.id);
   const title = fittingTitle({ ...f.geometry, profile: row?.profile ?? null });
   const out = [`${f.mark} — ${title} (node ${f.node.id}, run ${f.run})`, ''];
-  const elements = row ? restraintElements(row, units) : [];
+  const elements = row ? restraintElements(row, units, a.project.design.dimensionStep) : [];
   const width = Math.max(0, ...elements.map((e) => e.name.length));
   out.push(
     'Restraint',

@@ -173,3 +173,27 @@ describe('the JSON schedule of the command line', () => {
     });
   });
 });
+
+describe('the command line quantities and stations', () => {
+  it('prints the take-off as CSV whose total to order is the net concrete plus the waste allowance', async () => {
+    const r = await cli('quantities', demoPath, '--format', 'csv');
+    expect(r.status).toBe(0);
+    const lines = r.stdout.trimEnd().split('\r\n');
+    const value = (item: RegExp) => Number(lines.find((l) => item.test(l.split(',')[1]!))!.split(',')[4]);
+    // Rounded up to 0.01 m³ each, so within a hundredth of the hand sum net × 1.10.
+    expect(Math.abs(value(/^Total to order$/) - value(/^Net$/) * 1.1)).toBeLessThan(0.011 * 2);
+  });
+
+  it('writes stations in the table when the project asks for them', async () => {
+    const path = fileOf(
+      'stations.json',
+      JSON.stringify({ ...demo(), units: 'us', sheet: { chainageStyle: 'stations' } }),
+    );
+    const r = await cli('schedule', path);
+    expect(r.status).toBe(0);
+    expect(r.stdout).toMatch(/Station/);
+    expect(r.stdout).not.toMatch(/Chainage \(ft\)/);
+    // A2 lies 393.7 ft along the main (the schedule's chainage): station 3+93.7.
+    expect(r.stdout).toMatch(/A2\s+3\+93\.7/);
+  });
+});

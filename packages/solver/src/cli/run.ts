@@ -12,6 +12,9 @@ import { scheduleJson } from '../schedule/scheduleJson.js';
 import { scheduleView } from '../schedule/scheduleView.js';
 import { scheduleCsv } from '../schedule/scheduleCsv.js';
 import { scheduleTable } from '../schedule/scheduleTable.js';
+import { takeOff, takeOffRows, type TakeOffRow } from '../schedule/quantities.js';
+import { takeOffCsv, takeOffTable } from '../schedule/quantitiesText.js';
+import { positionColumns } from '../schedule/stations.js';
 import type { UnitSystem } from '../units/conversions.js';
 import { DEFAULT_MAX_BYTES } from './readLimited.js';
 import { escapeControls, escapeStrings, terminalSafe } from './terminalText.js';
@@ -30,6 +33,14 @@ export interface CliIo {
 }
 
 class UsageError extends Error {}
+
+/** A take-off line with every text escaped (sizes and marks come from the file). */
+const escapeRow = (r: TakeOffRow): TakeOffRow => ({
+  ...r,
+  item: escapeControls(r.item),
+  size: escapeControls(r.size),
+  marks: escapeControls(r.marks),
+});
 
 /** `--max-size 50` (megabytes, as the app counts them) → bytes; the app's 20 MB when not given. */
 function maxBytesOption(value: string | undefined): number {
@@ -112,9 +123,9 @@ export async function runCli(argv: readonly string[], rawIo: CliIo): Promise<num
       io.out(JSON.stringify(projectJsonSchema(), null, 2) + '\n');
       return 0;
     }
-    if (!['schedule', 'validate', 'explain'].includes(args.command)) {
+    if (!['schedule', 'quantities', 'validate', 'explain'].includes(args.command)) {
       throw new UsageError(
-        `unknown command "${escapeControls(args.command)}": expected schedule, explain, validate, schema, import or export`,
+        `unknown command "${escapeControls(args.command)}": expected schedule, quantities, explain, validate, schema, import or export`,
       );
     }
     const loaded = await load(io, args.positional[0], maxBytesOption(args.options.get('max-size')));
@@ -154,6 +165,16 @@ export async function runCli(argv: readonly string[], rawIo: CliIo): Promise<num
       return 0;
     }
     const format = args.options.get('format') ?? 'table';
+    if (args.command === 'quantities') {
+      const t = takeOff(scheduleOf(analysis).fittings, project, units);
+      if (format === 'json')
+        io.out(JSON.stringify(t, null, io.interactive || args.options.has('pretty') ? 2 : undefined) + '\n');
+      else if (format === 'csv') io.out(takeOffCsv(takeOffRows(t, units).map(escapeRow)));
+      else if (format === 'table')
+        io.out(takeOffTable(takeOffRows(t, units).map(escapeRow), escapeControls(project.name), t.waste));
+      else throw new UsageError(`--format: expected json, csv or table, got "${escapeControls(format)}"`);
+      return 0;
+    }
     // Indented for a person at a terminal or with --pretty; compact into pipes and files.
     const pretty = io.interactive === true || args.options.has('pretty');
     // What the file already says (positions, labels, soils, pipe sizes) is left out unless --full.
@@ -161,7 +182,13 @@ export async function runCli(argv: readonly string[], rawIo: CliIo): Promise<num
     if (format === 'json') io.out(scheduleJson(scheduleOf(analysis), { pretty, echo: full }));
     else if (format === 'csv') io.out(scheduleCsv(escapeStrings(scheduleView(analysis, units))));
     else if (format === 'table')
-      io.out(scheduleTable(escapeStrings(scheduleView(analysis, units)), escapeControls(project.name)));
+      io.out(
+        scheduleTable(
+          escapeStrings(scheduleView(analysis, units)),
+          escapeControls(project.name),
+          positionColumns(project.sheet?.chainageStyle),
+        ),
+      );
     else throw new UsageError(`--format: expected json, csv or table, got "${escapeControls(format)}"`);
     return 0;
   } catch (e) {

@@ -5,6 +5,10 @@ Usage:
                                   the fitting schedule (default: table, the project's units;
                                   JSON is indented at a terminal or with --pretty, and repeats
                                   positions, labels, soils and pipe sizes only with --full)
+  mainbrace quantities FILE [--format table|csv|json] [--units us|si]
+                                  the quantities take-off: concrete by element and to order (with
+                                  the project's waste allowance), restrained joints by size,
+                                  fittings by size and angle, anchors
   mainbrace explain FILE MARK [--units us|si]
                                   the calculation record of one fitting (its mark, A4, or node id)
   mainbrace validate FILE         check a project file

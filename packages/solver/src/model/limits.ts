@@ -39,6 +39,7 @@ export const LIMITS = {
   trenchWidth: limit('length', 'trench width', { min: 0.1, max: 20 }, { min: 0.3, max: 5 }),
   dimensionStep: limit('length', 'construction step', { min: 0.001, max: 0.3 }),
   layingLength: limit('length', 'pipe laying length', { min: 0.5, max: 30 }),
+  concreteWaste: limit('ratio', 'concrete waste allowance', { min: 0, max: 1 }, { min: 0, max: 0.25 }),
   safetyFactor: limit('ratio', 'safety factor', { min: 1, max: 10 }, { min: 1.25, max: 3 }),
   bearing: limit('stress', 'allowable bearing', { min: 0, max: 5e6 }, { min: 0, max: 1e6 }),
   bearingPerDepth: limit('stressGradient', 'bearing per depth', { min: 0, max: 1e6 }),

@@ -73,6 +73,39 @@ export const designSchema = z.strictObject({
    * the fitting. 6 m is common practice (EN 545 pipes are made 6 m long; 20 ft pipes are 6.1 m).
    */
   layingLength: limited('layingLength').default(6),
+  /**
+   * fraction added to the concrete take-off for waste (0.1 = 10 %); optional so that files and code
+   * written before it keep their shape: absent means the register's default (quantities.concrete-waste)
+   */
+  concreteWaste: limited('concreteWaste').optional(),
+});
+
+export const CHAINAGE_STYLES = ['chainage', 'stations', 'both'] as const;
+
+const titleField = (max: number) =>
+  z
+    .string()
+    .max(max, { error: `must be at most ${max} characters` })
+    .default('');
+
+/**
+ * The drawing sheet: the title block a utility expects (editable project fields, printed on every
+ * page) and how positions along a run are written. Optional as a whole so that earlier files keep
+ * their shape; its fields default to empty.
+ */
+export const sheetSchema = z.strictObject({
+  drawingNumber: titleField(40),
+  revision: titleField(12),
+  /** the date of issue as the office writes it (free text: 2026-12-03, 3 Dec 2026) */
+  date: titleField(30),
+  drawnBy: titleField(40),
+  checkedBy: titleField(40),
+  approvedBy: titleField(40),
+  /**
+   * positions along a run: chainage (m or ft from the run's start), stations (9+31.8: 100 ft stations
+   * in US units, 1 km stations in SI) or both
+   */
+  chainageStyle: z.enum(CHAINAGE_STYLES).default('chainage'),
 });
 
 export const loadCaseSchema = z.strictObject({
@@ -241,6 +274,7 @@ export const projectShape = z.strictObject({
   pipes: z.array(pipeSchema).default([]),
   /** a site-plan image to trace the route over (optional) */
   underlay: underlaySchema.optional(),
+  sheet: sheetSchema.optional(),
   /**
    * where the plan lies on the earth, optional: x and y are metres in this projection of WGS 84, so the
    * design can be exported as GeoJSON longitude/latitude (project-format.md, "Georeference")
@@ -260,6 +294,8 @@ export type Soil = Project['soils'][number];
 export type ProjectNode = Project['nodes'][number];
 export type Pipe = Project['pipes'][number];
 export type Design = Project['design'];
+export type Sheet = z.output<typeof sheetSchema>;
+export type ChainageStyle = (typeof CHAINAGE_STYLES)[number];
 export type Material = (typeof MATERIALS)[number];
 export type Underlay = NonNullable<Project['underlay']>;
 export type RestraintMethod = (typeof RESTRAINT_METHODS)[number];

@@ -76,6 +76,22 @@ export const REGISTER = {
     source: 'Usual block thickness behind a fitting',
     verified: true,
   },
+  'quantities.concrete-waste': {
+    quantity: 'Default waste allowance added to the concrete take-off (over-break, spillage, formwork)',
+    value: 0.1,
+    unit: '—',
+    kind: 'common practice',
+    source: 'Usual allowance of 5–10 % on ordered concrete (from memory); the project states its own',
+    verified: false,
+  },
+  'pad.thickness': {
+    quantity: 'Thickness of a concrete pad poured on the trench bottom under a sag fitting',
+    value: 0.15,
+    unit: 'm',
+    kind: 'common practice',
+    source: 'Usual least thickness of a plain concrete pad, 150 mm ≈ 6 in (from memory)',
+    verified: false,
+  },
   'trench.clearance': {
     quantity: 'Clear width each side of the pipe when the trench width is not given',
     value: 0.3,

@@ -39,7 +39,7 @@ describe('vertical bends: thrust parts apart, each restraint element with its ow
     expectClose(row.horizontalThrust, p * area * (1 - Math.SQRT1_2), 1e-9);
     expectClose(row.upwardThrust, p * area * Math.SQRT1_2, 1e-9);
     expect(row.downwardThrust).toBe(0);
-    const els = restraintElements(row, 'si');
+    const els = restraintElements(row, 'si', 0.05);
     const block = els.find((e) => e.kind === 'block')!;
     const anchor = els.find((e) => e.kind === 'anchor')!;
     expect(block.bears).toBeCloseTo(90, 9); // east, the outside of the bend
@@ -57,7 +57,7 @@ describe('vertical bends: thrust parts apart, each restraint element with its ow
     const row = scheduleOf(a).fittings.find((f) => f.node === 'c')!;
     expect(row.profile).toBe('sag');
     expect(row.upwardThrust).toBe(0);
-    const els = restraintElements(row, 'si');
+    const els = restraintElements(row, 'si', 0.05);
     expect(els.some((e) => e.kind === 'anchor')).toBe(false);
     // The downward part (p·A·sin 45°) needs more than the block's base: a pad of the trench's width.
     const pad = els.find((e) => e.kind === 'trenchBottom')!;

@@ -8,6 +8,7 @@ import {
   blockForceText,
   blockText,
   padForceText,
+  padText,
   restrainedLegText,
 } from './restraintText.js';
 import type { ScheduleFitting } from './scheduleRows.js';
@@ -46,9 +47,8 @@ export interface RestraintElement {
 }
 
 /** The restraint of one schedule row as separate elements, each named by the fitting's mark. */
-export function restraintElements(f: ScheduleFitting, units: UnitSystem): RestraintElement[] {
+export function restraintElements(f: ScheduleFitting, units: UnitSystem, step: number): RestraintElement[] {
   const r = f.restraint;
-  const dim = (m: number) => formatDimension(m, units);
   const vol = (v: number) => quantityText(v, 'volume', units);
   const out: RestraintElement[] = [];
   const add = (
@@ -85,7 +85,7 @@ export function restraintElements(f: ScheduleFitting, units: UnitSystem): Restra
   if (r.trenchBottom)
     add(
       'trenchBottom',
-      `${dim(r.trenchBottom.width)} × ${dim(r.trenchBottom.length)}`,
+      padText(r.trenchBottom, step, units),
       f.downwardThrust,
       'down',
       padForceText(f.downwardThrust, units),

@@ -4,6 +4,7 @@ import { quantityText } from './columnUnits.js';
 import type { ScheduleFitting } from './scheduleRows.js';
 import { planBearing } from '../geometry/vector.js';
 import { bearingText } from './fittingNames.js';
+import { padThickness } from './settingOut.js';
 
 type Block = NonNullable<ScheduleFitting['restraint']['block']>;
 
@@ -18,6 +19,10 @@ type Anchor = NonNullable<ScheduleFitting['restraint']['anchor']>;
 /** "1.25 l × 1.25 w × 1.25 h": plan length along the pipe, width across it, height. */
 export const anchorText = (a: Anchor, units: UnitSystem): string =>
   `${dim(a.length, units)} l × ${dim(a.width, units)} w × ${dim(a.height, units)} h`;
+
+/** "0.90 w × 0.70 l × 0.15 t": a trench-bottom pad across the trench, along the pipe, and thick. */
+export const padText = (p: { width: number; length: number }, step: number, units: UnitSystem): string =>
+  `${dim(p.width, units)} w × ${dim(p.length, units)} l × ${dim(padThickness(step), units)} t`;
 
 type RestrainedLeg = ScheduleFitting['restraint']['restrainedLegs'][number];
 
@@ -55,7 +60,7 @@ export const padForceText = (downward: number, units: UnitSystem): string => `be
  * What holds the fitting, in one line of display units: what a crew builds, each element with its own
  * force and the way it bears (block: horizontal, toward the outside of the bend; anchor: up; pad: down).
  */
-export function restraintSummary(f: ScheduleFitting, units: UnitSystem): string {
+export function restraintSummary(f: ScheduleFitting, units: UnitSystem, step: number): string {
   const r = f.restraint;
   const parts: string[] = [];
   if (r.block) parts.push(`block ${blockText(r.block, units)} ${blockForceText(r.block, units)}`);
@@ -66,9 +71,7 @@ export function restraintSummary(f: ScheduleFitting, units: UnitSystem): string 
       `anchor ${anchorText(r.anchor, units)}, ${quantityText(r.anchor.concreteVolume, 'volume', units)}, ${anchorForceText(r.anchor, units)}`,
     );
   if (r.trenchBottom)
-    parts.push(
-      `bottom pad ${dim(r.trenchBottom.width, units)} × ${dim(r.trenchBottom.length, units)} ${padForceText(f.downwardThrust, units)}`,
-    );
+    parts.push(`bottom pad ${padText(r.trenchBottom, step, units)} ${padForceText(f.downwardThrust, units)}`);
   if (r.restrainedLegs.length) parts.push(`restrain ${restrainedText(f, units)}`);
   return parts.length ? parts.join('; ') : '—';
 }

@@ -6,6 +6,8 @@ import { bearingText, fittingTitle } from './fittingNames.js';
 import { restrainedText, restraintSummary } from './restraintText.js';
 import type { ScheduleFitting } from './scheduleRows.js';
 import type { UnitSystem } from '../units/conversions.js';
+import { settingOut, type SettingOut } from './settingOut.js';
+import { stationText } from './stations.js';
 
 /** What a text cell may read besides the row: names of cases and soils, the units, the note numbers. */
 export interface CellContext {
@@ -25,6 +27,13 @@ export interface ScheduleColumn {
 }
 
 const BLOCK_GOVERNS = { bearing: 'bearing area', passive: 'passive resistance', minimum: 'least face' } as const;
+const setOuts = new WeakMap<ScheduleFitting, SettingOut>();
+/** Setting-out of a row, made once per schedule row (several columns read it). */
+function setOut(f: ScheduleFitting, c: CellContext): SettingOut {
+  let s = setOuts.get(f);
+  if (!s) setOuts.set(f, (s = settingOut(f, c.project.design.dimensionStep)));
+  return s;
+}
 const size = (f: ScheduleFitting) => Math.max(...f.pipes.map((p) => p.outsideDiameter));
 const caseName = (c: CellContext, id: string) => c.project.loadCases.find((x) => x.id === id)?.label ?? id;
 const soilName = (c: CellContext, id: string) => c.project.soils.find((x) => x.id === id)?.label ?? id;
@@ -39,12 +48,19 @@ const col = (id: string, heading: string, kind: ColumnKind, cell: ScheduleColumn
 export const SCHEDULE_COLUMNS: readonly ScheduleColumn[] = [
   col('mark', 'Mark', 'text', (f) => f.mark),
   col('chainage', 'Chainage', 'chainage', (f) => f.chainage),
+  col('station', 'Station', 'text', (f, c) => stationText(f.chainage, c.units)),
   col('fitting', 'Fitting', 'text', (f) => fittingTitle(f)),
   col('label', 'Label', 'text', (f) => f.label),
   col('od', 'Largest OD', 'diameter', size),
   col('east', 'East', 'coordinate', (f) => f.position[0]),
   col('north', 'North', 'coordinate', (f) => f.position[1]),
   col('level', 'Pipe level', 'level', (f) => f.position[2]),
+  col('invert', 'Invert level', 'level', (f, c) => setOut(f, c).invert),
+  col('ground', 'Ground level', 'level', (f) => f.groundLevel),
+  col('blockEast', 'Block centre east', 'coordinate', (f, c) => setOut(f, c).block?.east ?? null),
+  col('blockNorth', 'Block centre north', 'coordinate', (f, c) => setOut(f, c).block?.north ?? null),
+  col('blockTop', 'Block top below ground', 'built', (f, c) => setOut(f, c).block?.topDepth ?? null),
+  col('blockBase', 'Depth to block base', 'built', (f, c) => setOut(f, c).block?.baseDepth ?? null),
   col('pressure', 'Design pressure', 'pressure', (f) => f.designPressure),
   col('case', 'Governing case', 'text', (f, c) => caseName(c, f.governingCase)),
   col('thrust', 'Thrust', 'force', (f) => norm(f.thrust)),
@@ -66,12 +82,18 @@ export const SCHEDULE_COLUMNS: readonly ScheduleColumn[] = [
   col('oppositeHeight', 'Opposite face height', 'built', (f) => f.restraint.reverseBlock?.faceHeight ?? null),
   col('oppositeConcrete', 'Opposite block concrete', 'volume', (f) => f.restraint.reverseBlock?.concreteVolume ?? null),
   col('anchorSide', 'Anchor side', 'built', (f) => f.restraint.anchor?.side ?? null),
+  col('anchorLength', 'Anchor length', 'built', (f, c) => setOut(f, c).anchor?.length ?? null),
+  col('anchorWidth', 'Anchor width', 'built', (f, c) => setOut(f, c).anchor?.width ?? null),
+  col('anchorHeight', 'Anchor height', 'built', (f, c) => setOut(f, c).anchor?.height ?? null),
+  col('anchorBase', 'Depth to anchor base', 'built', (f, c) => setOut(f, c).anchor?.baseDepth ?? null),
   col('anchorConcrete', 'Anchor concrete', 'volume', (f) => f.restraint.anchor?.concreteVolume ?? null),
   col('padArea', 'Trench-bottom area', 'area', (f) => f.restraint.trenchBottom?.bearingArea ?? null),
   col('padLength', 'Trench-bottom pad length', 'built', (f) => f.restraint.trenchBottom?.length ?? null),
+  col('padWidth', 'Trench-bottom pad width', 'built', (f) => f.restraint.trenchBottom?.width ?? null),
+  col('padThickness', 'Trench-bottom pad thickness', 'built', (f, c) => setOut(f, c).pad?.thickness ?? null),
   col('restrained', 'Restrained length', 'restrained', (f) => f.restraint.restrainedLength),
   col('restrainedLegs', 'Restrained legs', 'text', (f, c) => restrainedText(f, c.units) || null),
-  col('restraint', 'Restraint', 'text', (f, c) => restraintSummary(f, c.units)),
+  col('restraint', 'Restraint', 'text', (f, c) => restraintSummary(f, c.units, c.project.design.dimensionStep)),
   col('concrete', 'Concrete', 'volume', (f) => {
     const v = restraintConcrete(f.restraint);
     return v > 0 ? v : null;

@@ -4,7 +4,7 @@ import type { ScheduleView } from './scheduleView.js';
  * RFC 4180 field: quoted when it holds a comma, quote or line break. Text that a spreadsheet would
  * run as a formula (= + - @ first) is prefixed with an apostrophe; numbers are left as they are.
  */
-function csvField(text: string, isNumber: boolean): string {
+export function csvField(text: string, isNumber: boolean): string {
   const safe = !isNumber && /^[=+\-@\t\r]/.test(text) ? `'${text}` : text;
   return /[",\r\n]/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
 }

@@ -76,6 +76,8 @@ function fitting(f: ScheduleFitting, echo: boolean) {
     branchAngle: rn(f.branchAngle, 'angle'),
     chainage: r(f.chainage, 'length'),
     position: vec(f.position, 'length'),
+    cover: r(f.cover, 'length'),
+    groundLevel: r(f.groundLevel, 'elevation'),
     pipes: f.pipes.map((p) => ({
       ...p,
       outsideDiameter: r(p.outsideDiameter, 'diameter'),

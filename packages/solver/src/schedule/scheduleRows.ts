@@ -28,6 +28,10 @@ export interface ScheduleFitting {
   /** m along the run from its start */
   chainage: number;
   position: Vec3;
+  /** m, ground surface to top of the largest pipe at the fitting */
+  cover: number;
+  /** m, ground level over the fitting: centreline + largest OD/2 + cover */
+  groundLevel: number;
   pipes: { id: string; outsideDiameter: number; insideDiameter: number; material: string; toward: string | null }[];
   soil: string;
   cases: {
@@ -130,6 +134,8 @@ function row(a: Analysis, f: FittingAnalysis, words: (d: Diagnostic) => string):
     branchAngle: g.branchAngle,
     chainage: f.chainage,
     position: [f.node.x, f.node.y, f.node.elevation],
+    cover: f.node.cover,
+    groundLevel: f.node.elevation + Math.max(0, ...f.legs.map((l) => l.pipe.outsideDiameter)) / 2 + f.node.cover,
     pipes: f.legs.map((l) => ({
       id: l.pipe.id,
       outsideDiameter: l.pipe.outsideDiameter,

@@ -5,8 +5,14 @@ import { pickColumns, type ScheduleView } from './scheduleView.js';
 const SEVERITY_MARK = { error: '!! NOT ADEQUATE', warning: '!', info: '·' } as const;
 
 /** The schedule as a readable fixed-width table for a terminal: the view's compact columns, notes once, cautions. */
-export function scheduleTable(view: ScheduleView, project: string): string {
-  const columns = pickColumns(view, TABLE_COLUMNS);
+export function scheduleTable(
+  view: ScheduleView,
+  project: string,
+  positions: readonly string[] = ['chainage'],
+): string {
+  // The position along the run in the project's style (chainage, stations or both) where the chainage stands.
+  const ids = TABLE_COLUMNS.flatMap((id) => (id === 'chainage' ? positions : [id]));
+  const columns = pickColumns(view, ids);
   const head = columns.map((c) => c.heading);
   const rows = view.rows.map((r) => columns.map((c) => r.cells[c.id]!));
   const widths = head.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i]!.length)));

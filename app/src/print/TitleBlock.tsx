@@ -1,0 +1,57 @@
+import { sheetSchema, type Project, type UnitSystem } from '@mainbrace/solver';
+
+/**
+ * The title block of every crew page: what the sheet is and which part of the route, then the
+ * project's drawing fields (empty boxes to fill by hand where the project has none), units and scale.
+ */
+export function TitleBlock({
+  project,
+  units,
+  subtitle,
+  sheet,
+  note,
+}: {
+  project: Project;
+  units: UnitSystem;
+  subtitle: string;
+  sheet: string;
+  /** one line under the subtitle: the page's concrete */
+  note?: string;
+}) {
+  const s = sheetSchema.parse(project.sheet ?? {});
+  const box = (label: string, value: string, id: string) => (
+    <div className="tb-box" data-field={id}>
+      <span className="tb-label">{label}</span>
+      <span className="tb-value">{value || '\u00a0'}</span>
+    </div>
+  );
+  return (
+    <header className="title-block">
+      <div className="tb-main">
+        <div className="sheet-kicker">Restraint schedule — crew sheet</div>
+        <h1>{project.name}</h1>
+        <div className="tb-sub">
+          {subtitle} · {sheet}
+        </div>
+        {note && (
+          <div className="tb-sub" data-testid="page-concrete">
+            {note}
+          </div>
+        )}
+      </div>
+      <div className="tb-grid">
+        {box('Drawing no.', s.drawingNumber, 'drawingNumber')}
+        {box('Rev.', s.revision, 'revision')}
+        {box('Date', s.date, 'date')}
+        {box('Drawn', s.drawnBy, 'drawnBy')}
+        {box('Checked', s.checkedBy, 'checkedBy')}
+        {box('Approved', s.approvedBy, 'approvedBy')}
+        {box('Units', units === 'si' ? 'm, mm, m³' : 'ft-in, in, yd³', 'units')}
+        <div className="tb-box tb-scale" data-field="scale">
+          <span className="tb-label">Scale</span>
+          <span className="tb-value">Sketches not to scale: build to the figured dimensions</span>
+        </div>
+      </div>
+    </header>
+  );
+}

@@ -1,0 +1,122 @@
+import { test, expect } from '@playwright/test';
+import { execFileSync } from 'node:child_process';
+import { mkdirSync, writeFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { MainbracePage } from '../pages/mainbrace.js';
+
+const root = fileURLToPath(new URL('../..', import.meta.url));
+const demo = `${root}public/demo/larkspur-rise.json`;
+
+test.beforeAll(() => {
+  execFileSync('corepack', ['pnpm', '--filter', '@mainbrace/solver', 'build'], { cwd: root, stdio: 'ignore' });
+});
+
+/** The text of a PDF's pages as pdftotext reads them (poppler-utils), one string per page. */
+function pdfPages(path: string): string[] {
+  // Content order (-raw) keeps each sketch's words together; runs of white space read as one space.
+  return execFileSync('pdftotext', ['-raw', path, '-'], { encoding: 'utf8' })
+    .split('\f')
+    .slice(0, -1)
+    .map((p) => p.replace(/\s+/g, ' '));
+}
+
+test('the crew sheet of the demo prints in chainage order, six fittings a page, with dimensions and notes', async ({
+  page,
+}) => {
+  const app = new MainbracePage(page);
+  await app.gotoFresh();
+  const schedule = await app.schedule();
+  const marks = schedule.fittings.map((f) => f.mark);
+  // The command line's table lists the same fittings in the same order.
+  const table = execFileSync(process.execPath, [`${root}packages/solver/bin/mainbrace.mjs`, 'schedule', demo], {
+    encoding: 'utf8',
+  });
+  const cliMarks = table
+    .split('\n')
+    .map((l) => /^([A-Z]+\d+)\s/.exec(l)?.[1])
+    .filter(Boolean);
+  expect(cliMarks).toEqual(marks);
+
+  // Title-block fields are project fields, typed in the sheet tab.
+  await app.drawerTab('sheet');
+  await page.getByTestId('sheet-drawingNumber').fill('QA-W-104');
+  await page.getByTestId('sheet-revision').fill('B');
+  await page.getByTestId('sheet-drawnBy').fill('R. Okafor');
+  await expect
+    .poll(async () => ((await app.project()) as { sheet?: { drawingNumber: string } }).sheet?.drawingNumber)
+    .toBe('QA-W-104');
+  await expect(page.getByTestId('takeoff')).toContainText('Total to order');
+  await app.shot('sheet-and-quantities');
+  // The details panel shows the selected fitting's sketch.
+  const a4 = schedule.fittings.find((f) => f.mark === 'A4')!;
+  await app.selectNode(a4.node);
+  await expect(page.getByTestId('sketch-A4')).toBeVisible();
+  await page.getByTestId('sketch-A4').screenshot({ path: 'artifacts/details-sketch-A4.png' });
+
+  await page.getByRole('button', { name: 'Export ▾' }).click();
+  await page.getByRole('menuitem', { name: 'Print the schedule…' }).click();
+  const sheet = page.getByTestId('print-sheet');
+  await expect(sheet.locator('.crew-sheet')).toHaveAttribute('data-ready', 'yes');
+  const sheets = Math.ceil(marks.length / 6);
+  await expect(page.getByTestId('crew-page')).toHaveCount(sheets);
+  await expect(page.getByTestId('appendix')).toHaveCount(0);
+
+  mkdirSync('artifacts', { recursive: true });
+  await page.emulateMedia({ media: 'print' });
+  await page.pdf({ format: 'A4', landscape: true, printBackground: true, path: 'artifacts/crew-sheet.pdf' });
+  // Nothing a crew needs is cut off: notes, sketches' words and the take-off end inside their page.
+  const clipped = await page.evaluate(() =>
+    Array.from(document.querySelectorAll('.sheet-page')).flatMap((pageBox, i) => {
+      const bottom = pageBox.querySelector('.sheet-foot')!.getBoundingClientRect().top + 1;
+      return Array.from(pageBox.querySelectorAll('.sheet-notes li, .sketch-lines li, .takeoff tr, .crew-table tr'))
+        .filter((el) => {
+          const r = el.getBoundingClientRect();
+          const box = el.closest('.sketch, .sheet-side');
+          const limit = box ? Math.min(bottom, box.getBoundingClientRect().bottom + 1) : bottom;
+          return r.bottom > limit;
+        })
+        .map((el) => `sheet ${i + 1}: ${el.textContent!.slice(0, 60)}`);
+    }),
+  );
+  expect(clipped).toEqual([]);
+
+  const pages = pdfPages('artifacts/crew-sheet.pdf');
+  // At most one A4 landscape page per six fittings, the take-off included.
+  expect(pages.length).toBe(sheets);
+  writeFileSync('artifacts/crew-sheet.txt', pages.join('\n\f\n'));
+  const all = pages.join('\n');
+  // Order: each mark's first appearance follows the one before it.
+  let at = -1;
+  for (const m of marks) {
+    const i = all.search(new RegExp(`(^|\\s)${m}\\s`));
+    expect(i, `${m} is printed`).toBeGreaterThan(at);
+    at = i;
+  }
+  // No internal pipe or node id on the crew part.
+  expect(all).not.toMatch(/\b[pn]\d+\b/);
+  // Every block has three dimensions; anchors and pads likewise.
+  for (const f of schedule.fittings) {
+    if (f.restraint.block) expect(all).toMatch(/\d\.\d\d m w × \d\.\d\d m h × \d\.\d\d m t/);
+    if ((f.restraint as { anchor?: unknown }).anchor) expect(all).toMatch(/\d\.\d\d m L × \d\.\d\d m W × \d\.\d\d m H/);
+  }
+  expect(all).toMatch(/bears [NESW]{1,2} against undisturbed soil on the outside of the bend/);
+  expect(all).toMatch(/toward A1[24] \(2 joints\)/);
+  // Notes printed by number, and the rows refer to them.
+  expect(all).toMatch(/passive resistance/);
+  expect(all).toMatch(/Total to order/);
+  for (const [i, p] of pages.entries()) {
+    expect(p).toContain(`Sheet ${i + 1} of ${sheets}`);
+    expect(p).toContain('QA-W-104');
+    expect(p).toMatch(/licensed professional engineer/);
+    expect(p).toMatch(/undisturbed soil/);
+    expect(p).toMatch(/cure before pressure testing/);
+  }
+
+  // The appendix is optional: asked for, it follows the crew part.
+  await page.emulateMedia({ media: 'screen' });
+  await page.getByTestId('print-appendix').check();
+  await expect(page.getByTestId('appendix')).toBeVisible();
+  await page.emulateMedia({ media: 'print' });
+  await page.pdf({ format: 'A4', landscape: true, printBackground: true, path: 'artifacts/crew-sheet-appendix.pdf' });
+  expect(pdfPages('artifacts/crew-sheet-appendix.pdf').length).toBeGreaterThan(sheets);
+});

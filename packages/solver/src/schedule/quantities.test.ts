@@ -1,0 +1,67 @@
+import { describe, it, expect } from 'vitest';
+import { readFileSync } from 'node:fs';
+import { parseProjectText } from '../model/parseProject.js';
+import { analyse } from '../analysis/analyse.js';
+import { scheduleOf } from './scheduleRows.js';
+import { takeOff, takeOffRows } from './quantities.js';
+import { takeOffCsv } from './quantitiesText.js';
+import { anchorBox, padThickness } from './settingOut.js';
+
+const demoText = readFileSync(new URL('../../../../public/demo/larkspur-rise.json', import.meta.url), 'utf8');
+const parsed = parseProjectText(demoText);
+if (!parsed.ok) throw new Error('demo does not parse');
+const project = parsed.project;
+const fittings = scheduleOf(analyse(project)).fittings;
+
+describe('quantities take-off', () => {
+  const t = takeOff(fittings, project, 'si');
+
+  it('sums each element from the rows it comes from (invariant: the take-off adds what the schedule sizes)', () => {
+    const blocks = fittings.reduce((v, f) => v + (f.restraint.block?.concreteVolume ?? 0), 0);
+    expect(t.concrete.find((l) => l.element === 'block')!.volume).toBeCloseTo(blocks, 12);
+    const anchors = fittings.reduce((v, f) => {
+      if (!f.restraint.anchor) return v;
+      const b = anchorBox(f.restraint.anchor);
+      return v + b.length * b.width * b.height;
+    }, 0);
+    expect(t.concrete.find((l) => l.element === 'anchor')?.volume ?? 0).toBeCloseTo(anchors, 12);
+    const pads = fittings.reduce(
+      (v, f) => v + (f.restraint.trenchBottom ? f.restraint.trenchBottom.width * f.restraint.trenchBottom.length : 0),
+      0,
+    );
+    expect(t.concrete.find((l) => l.element === 'pad')?.volume ?? 0).toBeCloseTo(pads * padThickness(0.05), 12);
+    expect(t.concreteNet).toBeCloseTo(
+      t.concrete.reduce((v, l) => v + l.volume, 0),
+      12,
+    );
+  });
+
+  it('adds the waste allowance: 10 % by default, the project’s own when it states one', () => {
+    expect(t.waste).toBe(0.1);
+    expect(t.concreteOrdered).toBeCloseTo(t.concreteNet * 1.1, 12);
+    const five = takeOff(fittings, { ...project, design: { ...project.design, concreteWaste: 0.05 } }, 'si');
+    expect(five.concreteOrdered).toBeCloseTo(t.concreteNet * 1.05, 12);
+  });
+
+  it('counts every fitting once, by kind, angle and size', () => {
+    expect(t.fittings.reduce((n, l) => n + l.count, 0)).toBe(fittings.length);
+    expect(new Set(t.fittings.flatMap((l) => l.marks)).size).toBe(fittings.length);
+  });
+
+  it('counts restrained joints by size: the sum of every leg’s joints', () => {
+    const legs = fittings.flatMap((f) => f.restraint.restrainedLegs);
+    expect(t.joints.reduce((n, l) => n + l.joints, 0)).toBe(legs.reduce((n, l) => n + l.joints, 0));
+    expect(legs.length).toBeGreaterThan(0);
+    expect(t.joints[0]!.size).toMatch(/^DN\d+$/); // named by the project's nominal size
+  });
+
+  it('writes one CSV line per take-off line, the unit in its own column', () => {
+    const rows = takeOffRows(t, 'si');
+    const csv = takeOffCsv(rows).trimEnd().split('\r\n');
+    expect(csv[0]).toBe('Section,Item,Size,Count,Quantity,Unit,Fittings');
+    expect(csv).toHaveLength(rows.length + 1);
+    expect(rows.find((r) => r.item === 'Total to order')!.quantity).toBe(
+      (Math.ceil(t.concreteOrdered * 100 - 1e-9) / 100).toFixed(2),
+    );
+  });
+});
