@@ -1,6 +1,5 @@
 import type { UnitSystem } from '../units/conversions.js';
 import { planBearing } from '../geometry/vector.js';
-import { formatDimension } from '../units/format.js';
 import { quantityText } from './columnUnits.js';
 import {
   anchorForceText,
