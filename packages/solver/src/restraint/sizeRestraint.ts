@@ -4,7 +4,8 @@ import type { Leg } from '../network/legs.js';
 import type { FittingGeometry } from '../network/fittingKind.js';
 import type { Project, ProjectNode } from '../model/projectSchema.js';
 import type { ThrustEnvelope } from '../thrust/fittingThrust.js';
-import { sameDiagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
+import { diagnostic, sameDiagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
+import { reachAlong } from './routeReach.js';
 import type { BearingBlock } from './bearingBlock.js';
 import type { GravityAnchor } from './gravityAnchor.js';
 import type { TrenchBottomBearing } from './trenchBottom.js';
@@ -88,6 +89,18 @@ export function sizeRestraint(
       for (const leg of r.legs) if ((longest.get(leg.pipe)?.length ?? 0) < leg.length) longest.set(leg.pipe, leg);
       out.steps.push(...r.steps);
       for (const d of r.diagnostics) if (!out.diagnostics.some((o) => sameDiagnostic(o, d))) out.diagnostics.push(d);
+    }
+    // No zone can run along more pipe than the route has: cap it there and say so.
+    for (const [pipe, leg] of longest) {
+      const own = legs.find((l) => l.pipe.id === pipe)?.length ?? 0;
+      if (leg.length <= own) continue;
+      const reach = reachAlong(project, node.id, pipe);
+      if (leg.length > reach) {
+        out.diagnostics.push(
+          diagnostic('joints.longer-than-route', { node: node.id, pipe }, { length: leg.length, reach }),
+        );
+        longest.set(pipe, { ...leg, length: reach });
+      }
     }
     out.restrainedLegs = [...longest.values()];
     out.restrainedLength = out.restrainedLegs.length ? Math.max(...out.restrainedLegs.map((l) => l.length)) : null;
