@@ -23,6 +23,7 @@ const capital = (t: string) => t.charAt(0).toUpperCase() + t.slice(1);
 type Words = (v: Shown, s: Subject, c: WordingContext) => string;
 
 const soil = (s: Subject, c: WordingContext) => (s.soil ? c.soilName(s.soil) : 'the soil');
+const pipe = (s: Subject, c: WordingContext) => (s.pipe ? c.pipeName(s.pipe) : 'the pipe');
 const leg = (s: Subject, c: WordingContext) => (s.pipe ? c.legName(s.node, s.pipe) : 'the pipe');
 /** Where an input value sits, in the reader's words. */
 function place(s: Subject, c: WordingContext): string {
@@ -81,7 +82,20 @@ const WORDS: Record<DiagnosticCode, Words> = {
   'joints.fused-pe': (_v, s, c) =>
     `${capital(leg(s, c))} is fused PE, which is end-load bearing: restrain the transitions to gasketed pipe and allow for thermal and Poisson loads.`,
   'joints.material-basis': (_v, s, c) =>
-    `${capital(leg(s, c))} is ${s.pipe ? c.material(s.pipe) : 'not ductile iron'}: the restrained-length method is the ductile-iron manual’s; use friction values for this material from the restrained-joint maker.`,
+    `${capital(leg(s, c))} is ${s.pipe ? c.material(s.pipe) : 'not ductile iron'}: its restrained length uses the ductile-iron manual’s method with the friction ratios given for ${soil(s, c)}; confirm them for this material with the restrained-joint maker.`,
+  'joints.no-material-basis': (v, s, c) => {
+    const missing = [
+      ...(v.frictionMissing === '1' ? ['pipe friction ratio f_φ'] : []),
+      ...(v.adhesionMissing === '1' ? ['adhesion ratio f_c'] : []),
+    ].join(' and ');
+    return `Not adequate: restrained joints along ${leg(s, c)} (${s.pipe ? c.material(s.pipe) : 'not ductile iron'}) are not sized — there is no published ${missing} for this material to default to. Give ${soil(s, c)} its ${missing} for this pipe (restrained-joint maker or geotechnical engineer), or hold the fitting with concrete.`;
+  },
+  'pipe.over-working-rating': (v, s, c) =>
+    `Not adequate: ${pipe(s, c)} carries ${v.pressure}${inCase(s, c)}, more than its rated working pressure ${v.limit}; choose a higher class of pipe or lower the working pressure.`,
+  'pipe.over-surge-rating': (v, s, c) =>
+    `Not adequate: ${pipe(s, c)} carries ${v.pressure}${inCase(s, c)}, more than the ${v.limit} its rating allows with surge; choose a higher class of pipe or limit the surge.`,
+  'pipe.over-test-rating': (v, s, c) =>
+    `The field test would overload ${pipe(s, c)}: ${v.pressure}${inCase(s, c)} against a test limit of ${v.limit}; lower the test pressure, test shorter sections, or choose a higher class.`,
   'input.pressure-unusual': outside('the pressure'),
   'input.cover-unusual': outside('the cover'),
   'input.velocity-unusual': outside('the flow velocity'),

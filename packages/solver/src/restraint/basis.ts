@@ -18,8 +18,10 @@ export function restraintBasis(r: Omit<Restraint, 'basis'>, legs: readonly Leg[]
     if (forms.has('bend')) ids.push('joints.bend-equation', 'joints.trench-coefficient', 'joints.bearing-pressure');
     if (forms.has('uplift')) ids.push('joints.uplift-equation');
     if (forms.has('axial')) ids.push('joints.axial-equation');
-    if (soil.pipeFrictionRatio === undefined) ids.push('joints.friction-ratio');
-    if (soil.pipeAdhesionRatio === undefined && soil.cohesion > 0) ids.push('joints.adhesion-ratio');
+    const ironDefaults = restrained.some((l) => l.pipe.material === 'ductile-iron');
+    if (ironDefaults && soil.pipeFrictionRatio === undefined) ids.push('joints.friction-ratio');
+    if (ironDefaults && soil.pipeAdhesionRatio === undefined && soil.cohesion > 0) ids.push('joints.adhesion-ratio');
+    if (restrained.some((l) => l.pipe.material !== 'ductile-iron')) ids.push('joints.material-basis');
     if (restrained.some((l) => l.pipe.encasement === 'polyethylene')) ids.push('joints.encasement-factor');
     if (restrained.some((l) => l.pipe.trenchType === undefined)) ids.push('joints.default-trench-type');
     if (restrained.some((l) => l.pipe.weightPerLength === undefined)) ids.push('material.density');

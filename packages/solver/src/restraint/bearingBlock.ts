@@ -78,7 +78,7 @@ export interface BlockResult {
 
 const DIPRA_AREA = 'A_b = T·S_f/S_b (DIPRA, Thrust Restraint Design for Ductile Iron Pipe; AWWA M23 Example 1)';
 const FACE_RULE =
-  'Face height at least the pipe OD and at most half the depth to the block bottom; width at most twice the height, wider only at the tallest face the cover allows (Mainbrace face rule)';
+  'Face height at least the pipe OD and at most half the depth to the block bottom; width at most twice the height, wider only at the tallest face the cover allows (Mainbrace’s own rule: no published source states it)';
 
 interface Face {
   width: number;

@@ -177,7 +177,12 @@ function row(a: Analysis, f: FittingAnalysis, words: (d: Diagnostic) => string):
         joints: restrainedJointCount(l.length, a.project.design.layingLength),
       })),
     },
-    warnings: f.diagnostics.map(words),
+    // Worded when first read: the table, the print and the JSON read them; a pressure change does not.
+    get warnings() {
+      const list = f.diagnostics.length ? f.diagnostics.map(words) : [];
+      Object.defineProperty(this, 'warnings', { value: list, enumerable: true });
+      return list;
+    },
     diagnostics: f.diagnostics,
     unverified: unverified(f.basis),
   };
@@ -189,6 +194,7 @@ const schedules = new WeakMap<Analysis, Schedule>();
  * The schedule of project-format.md from an analysis: one row per fitting that needs restraint, in
  * the analysis' run-and-chainage order. Memoised by the analysis, as `analyse` is by the document: the
  * table, the print and the exports share one schedule of one document. Callers must not change it.
+ * The rows, and each row's words, are built when first read.
  */
 export function scheduleOf(a: Analysis): Schedule {
   let s = schedules.get(a);
@@ -200,7 +206,12 @@ export function scheduleOf(a: Analysis): Schedule {
       units: 'SI',
       warnings: a.diagnostics.map(words),
       diagnostics: a.diagnostics,
-      fittings: a.fittings.map((f) => row(a, f, words)),
+      // Built when first read, and kept.
+      get fittings() {
+        const rows = a.fittings.map((f) => row(a, f, words));
+        Object.defineProperty(this, 'fittings', { value: rows, enumerable: true });
+        return rows;
+      },
       cautions: CAUTIONS,
     };
     schedules.set(a, s);
