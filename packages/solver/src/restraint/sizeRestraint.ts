@@ -31,6 +31,11 @@ export interface Restraint {
   diagnostics: Diagnostic[];
   /** the register entries the sizing relied on */
   basis: ProvenanceId[];
+  /**
+   * a restrained length ran past the fitting's own pipes, so the result depends on the line beyond
+   * its neighbours (routeReach): an incremental analysis must size this fitting again after any edit
+   */
+  dependsOnRoute: boolean;
 }
 
 /**
@@ -58,6 +63,7 @@ export function sizeRestraint(
     steps: [],
     diagnostics: [],
     basis: [],
+    dependsOnRoute: false,
   };
   let needJoints = node.restraint === 'joints';
   if (node.restraint === 'block') {
@@ -94,6 +100,7 @@ export function sizeRestraint(
     for (const [pipe, leg] of longest) {
       const own = legs.find((l) => l.pipe.id === pipe)?.length ?? 0;
       if (leg.length <= own) continue;
+      out.dependsOnRoute = true;
       const reach = reachAlong(project, node.id, pipe);
       if (leg.length > reach) {
         out.diagnostics.push(
