@@ -206,7 +206,8 @@ function assemble(
     const oldIndex = reuse === 'none' ? undefined : prev!.kept.index.get(id);
     if (old && oldIndex !== undefined) copySums(prev!.kept.sums, oldIndex, sums, f);
     else writeSums(sums, f, l, node.elevation, node.valve && g.kind === 'valve');
-    if (reuse === 'all' && old) {
+    // A restrained length capped by the line beyond the neighbours is sized again after any edit.
+    if (reuse === 'all' && old && !old.restraint.dependsOnRoute) {
       const moved = old.mark !== place.mark || old.run !== place.run || old.chainage !== place.chainage;
       const reworded = !sameList(
         old.diagnostics.filter((d) => d.subject.node === id && d.subject.field),

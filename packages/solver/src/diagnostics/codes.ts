@@ -150,6 +150,13 @@ export const DIAGNOSTIC_CODES = {
     meaning: 'The restrained length runs past the next fitting: the restrained zones of neighbouring fittings overlap.',
     action: 'Design the neighbouring restrained zones together.',
   },
+  'joints.longer-than-route': {
+    severity: 'error',
+    values: { length: 'length', reach: 'length' },
+    meaning:
+      'The restrained length computed along a leg is longer than the line it runs along (to the next branch or end): it is cut to the line, which cannot hold the thrust by itself. The restraint is not adequate.',
+    action: 'Add a block or anchor at the fitting, restrain the whole line and its end, or change the layout.',
+  },
   'joints.fused-pe': {
     severity: 'info',
     values: {},

@@ -77,6 +77,8 @@ const WORDS: Record<DiagnosticCode, Words> = {
     `Not adequate: the soil along ${leg(s, c)} (φ = ${v.frictionAngle}, c = ${v.cohesion}) gives no friction or bearing, so restrained joints cannot hold; use a block, piles or soil replacement.`,
   'joints.encroach': (v, s, c) =>
     `The restrained length ${v.length} along ${leg(s, c)} runs past the next fitting (${v.legLength} away): the restrained zones of neighbouring fittings overlap and must be designed together.`,
+  'joints.longer-than-route': (v, s, c) =>
+    `Not adequate: the restrained length needed along ${leg(s, c)}, ${v.length}, is longer than the ${v.reach} of line there (to the next branch or end); it is cut to ${v.reach}, which cannot hold the thrust alone. Add a block or anchor, restrain the whole line and its end, or change the layout.`,
   'joints.fused-pe': (_v, s, c) =>
     `${capital(leg(s, c))} is fused PE, which is end-load bearing: restrain the transitions to gasketed pipe and allow for thermal and Poisson loads.`,
   'joints.material-basis': (_v, s, c) =>

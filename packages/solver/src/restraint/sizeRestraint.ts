@@ -4,7 +4,8 @@ import type { Leg } from '../network/legs.js';
 import type { FittingGeometry } from '../network/fittingKind.js';
 import type { Project, ProjectNode } from '../model/projectSchema.js';
 import type { ThrustEnvelope } from '../thrust/fittingThrust.js';
-import { sameDiagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
+import { diagnostic, sameDiagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
+import { reachAlong } from './routeReach.js';
 import type { BearingBlock } from './bearingBlock.js';
 import type { GravityAnchor } from './gravityAnchor.js';
 import type { TrenchBottomBearing } from './trenchBottom.js';
@@ -30,6 +31,11 @@ export interface Restraint {
   diagnostics: Diagnostic[];
   /** the register entries the sizing relied on */
   basis: ProvenanceId[];
+  /**
+   * a restrained length ran past the fitting's own pipes, so the result depends on the line beyond
+   * its neighbours (routeReach): an incremental analysis must size this fitting again after any edit
+   */
+  dependsOnRoute: boolean;
 }
 
 /**
@@ -57,6 +63,7 @@ export function sizeRestraint(
     steps: [],
     diagnostics: [],
     basis: [],
+    dependsOnRoute: false,
   };
   let needJoints = node.restraint === 'joints';
   if (node.restraint === 'block') {
@@ -88,6 +95,19 @@ export function sizeRestraint(
       for (const leg of r.legs) if ((longest.get(leg.pipe)?.length ?? 0) < leg.length) longest.set(leg.pipe, leg);
       out.steps.push(...r.steps);
       for (const d of r.diagnostics) if (!out.diagnostics.some((o) => sameDiagnostic(o, d))) out.diagnostics.push(d);
+    }
+    // No zone can run along more pipe than the route has: cap it there and say so.
+    for (const [pipe, leg] of longest) {
+      const own = legs.find((l) => l.pipe.id === pipe)?.length ?? 0;
+      if (leg.length <= own) continue;
+      out.dependsOnRoute = true;
+      const reach = reachAlong(project, node.id, pipe);
+      if (leg.length > reach) {
+        out.diagnostics.push(
+          diagnostic('joints.longer-than-route', { node: node.id, pipe }, { length: leg.length, reach }),
+        );
+        longest.set(pipe, { ...leg, length: reach });
+      }
     }
     out.restrainedLegs = [...longest.values()];
     out.restrainedLength = out.restrainedLegs.length ? Math.max(...out.restrainedLegs.map((l) => l.length)) : null;

@@ -1,0 +1,56 @@
+import type { Project } from '../model/projectSchema.js';
+
+interface Link {
+  pipe: string;
+  far: string;
+  /** m, 3-D length of the pipe */
+  length: number;
+}
+
+const adjacency = new WeakMap<Project, Map<string, Link[]>>();
+const tieIns = new WeakMap<Project, Set<string>>();
+
+/** Each node's pipes with the node at the far end, built once per project document. */
+function linksOf(project: Project): Map<string, Link[]> {
+  let links = adjacency.get(project);
+  if (links) return links;
+  links = new Map();
+  const at = new Map(project.nodes.map((n) => [n.id, n]));
+  for (const p of project.pipes) {
+    const a = at.get(p.from);
+    const b = at.get(p.to);
+    if (!a || !b) continue;
+    const length = Math.hypot(b.x - a.x, b.y - a.y, b.elevation - a.elevation);
+    (links.get(a.id) ?? links.set(a.id, []).get(a.id)!).push({ pipe: p.id, far: b.id, length });
+    (links.get(b.id) ?? links.set(b.id, []).get(b.id)!).push({ pipe: p.id, far: a.id, length });
+  }
+  adjacency.set(project, links);
+  tieIns.set(project, new Set(project.nodes.filter((n) => n.end === 'tie-in').map((n) => n.id)));
+  return links;
+}
+
+/**
+ * m, the length of line a restrained zone can run along from `node` out along `pipe`: through every
+ * node where the line simply continues (two pipes: straight joints and the fittings the zone may run
+ * through), up to the first node where it branches or ends. Pipe–soil friction acts only on pipe that
+ * exists, so no restrained length can exceed this (issue 17 item 4). At a tie-in the line runs on into
+ * the existing main, whose length the project does not know: no limit there (Infinity).
+ */
+export function reachAlong(project: Project, node: string, pipe: string): number {
+  const links = linksOf(project);
+  let here = node;
+  let via = pipe;
+  let total = 0;
+  const seen = new Set<string>([node]);
+  for (;;) {
+    const link = links.get(here)?.find((l) => l.pipe === via);
+    if (!link) return total;
+    total += link.length;
+    const next = links.get(link.far) ?? [];
+    if (next.length === 1 && tieIns.get(project)!.has(link.far)) return Infinity;
+    if (next.length !== 2 || seen.has(link.far)) return total;
+    seen.add(link.far);
+    here = link.far;
+    via = next[0]!.pipe === via ? next[1]!.pipe : next[0]!.pipe;
+  }
+}
