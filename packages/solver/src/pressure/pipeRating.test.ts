@@ -83,6 +83,19 @@ describe('pipes checked against their pressure rating', () => {
     expect(pipeRatingChecks(custom)).toEqual([]);
   });
 
+  it('follows an edit of a pipe’s series or a node’s level: nothing kept goes stale', () => {
+    const p = pvcRoute([{ id: 'w', kind: 'working', pressure: 1.5e6, datumElevation: 120 }]);
+    expect(pipeRatingChecks(p)).toHaveLength(1); // p2's low end, 20 m down
+    const dr14 = findSize('pvc-c900-dr14', '8')!;
+    const stronger = {
+      ...p,
+      pipes: p.pipes.map((x) => ({ ...x, series: 'pvc-c900-dr14', insideDiameter: dr14.insideDiameter })),
+    };
+    expect(pipeRatingChecks(stronger)).toEqual([]); // DR 14: 305 psi = 2,103 kPa
+    const raised = { ...p, nodes: p.nodes.map((n) => ({ ...n, elevation: 120 })) };
+    expect(pipeRatingChecks(raised)).toEqual([]); // all at the datum: 1,500 kPa < 1,620 kPa
+  });
+
   it('carries the finding into the analysis, so the schedule, the CLI and the app show it', () => {
     const a = analyse(pvcRoute([{ id: 'c', kind: 'working', pressure: 3.5e6 }]));
     expect(a.diagnostics.filter((d) => d.code === 'pipe.over-working-rating')).toHaveLength(2);
