@@ -81,8 +81,9 @@ const settle = (page: Page) =>
   );
 
 /** Navigation to the demo drawn, each time in a fresh browser profile (no cache, no service worker). */
-async function firstVisit(browser: Browser): Promise<number[]> {
+async function firstVisit(browser: Browser): Promise<{ times: number[]; scripts: string[] }> {
   const t: number[] = [];
+  let scripts: string[] = [];
   for (let i = 0; i < 5; i++) {
     const context = await browser.newContext({ viewport: { width: 1440, height: 900 } });
     const page = await context.newPage();
@@ -91,10 +92,21 @@ async function firstVisit(browser: Browser): Promise<number[]> {
       timeout: 20_000,
     });
     t.push(await page.evaluate(() => performance.getEntriesByName('mainbrace-plan-drawn')[0]!.startTime));
+    scripts = await page.evaluate(() => {
+      const drawn = performance.getEntriesByName('mainbrace-plan-drawn')[0]!.startTime;
+      return performance
+        .getEntriesByType('resource')
+        .filter((e) => e.name.endsWith('.js') && e.startTime < drawn)
+        .map((e) => e.name.split('/').pop()!);
+    });
     await context.close();
   }
-  return t;
+  return { times: t, scripts };
 }
+
+/** gzipped bytes of the named built assets */
+const gzOf = (names: string[]) =>
+  names.reduce((sum, a) => sum + gzipSync(readFileSync(join(DIST, 'assets', a))).length, 0);
 
 function routeFile(pipes: number): string {
   const dir = mkdtempSync(join(tmpdir(), 'mainbrace-bench-'));
@@ -280,13 +292,16 @@ try {
     );
   }
   if (wanted('first')) {
-    const t = await firstVisit(browser);
+    const { times: t, scripts } = await firstVisit(browser);
     report(
       'first visit: navigation to the demo drawn',
       median(t),
       BUDGET.demoDrawnMs,
       'ms',
       `median of ${t.length} fresh profiles, ${t.map((x) => x.toFixed(0)).join(' ')}`,
+    );
+    console.log(
+      `app     info first visit: ${(gzOf(scripts) / 1024).toFixed(1)} kB gzipped of JavaScript fetched before the demo was drawn (${scripts.join(', ')})`,
     );
   }
   if (wanted('1000') || wanted('pressure') || wanted('drag') || wanted('slider')) {

@@ -1,4 +1,4 @@
-import { lazy, Suspense } from 'react';
+import { lazy, Suspense, useLayoutEffect, useRef } from 'react';
 import { useActions, useApp } from '../state/StoreContext.js';
 import type { DrawerTab } from '../state/store.js';
 import { ScheduleTable } from './ScheduleTable.js';
@@ -23,6 +23,13 @@ export function Drawer() {
   const actions = useActions();
   const heights = ['closed', 'low', 'high', 'full'] as const;
   const i = heights.indexOf(drawer.height);
+  // Each tab keeps its own scroll position: the schedule stays where it was after a look at the cases.
+  const body = useRef<HTMLDivElement>(null);
+  const scrolls = useRef(new Map<DrawerTab, number>());
+  useLayoutEffect(() => {
+    const el = body.current;
+    if (el) el.scrollTop = scrolls.current.get(drawer.tab) ?? 0;
+  }, [drawer.tab, drawer.height]);
   return (
     <section className={`drawer drawer-${drawer.height}`} aria-label="Route views">
       <div className="drawer-tabs" role="tablist">
@@ -60,7 +67,15 @@ export function Drawer() {
         </button>
       </div>
       {drawer.height !== 'closed' && (
-        <div className="drawer-body" id="drawer-body" role="tabpanel" aria-labelledby={`tab-${drawer.tab}`}>
+        <div
+          className="drawer-body"
+          id="drawer-body"
+          role="tabpanel"
+          aria-labelledby={`tab-${drawer.tab}`}
+          ref={body}
+          onScroll={(e) => scrolls.current.set(drawer.tab, e.currentTarget.scrollTop)}
+          data-testid="drawer-body"
+        >
           {drawer.tab === 'schedule' && <ScheduleTable />}
           {drawer.tab === 'profile' && (
             <Suspense fallback={<p className="muted">Loading the profile…</p>}>

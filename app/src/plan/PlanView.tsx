@@ -4,7 +4,7 @@ import { useCallback, useEffect, useMemo, useRef, useState, type PointerEvent as
 import { Layer, Shape, Stage } from 'react-konva/lib/ReactKonvaCore.js';
 import type { Context } from 'konva/lib/Context';
 import type { Shape as KonvaShape } from 'konva/lib/Shape';
-import { FOOT } from '@mainbrace/solver';
+import { analyse, FOOT } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp, useAppStore } from '../state/StoreContext.js';
 import { toPlan, type ScreenPoint } from '../state/viewport.js';
 import { dragScene, planScene } from './planScene.js';
@@ -14,6 +14,9 @@ import { drawRestrainedZones } from './drawZones.js';
 import { drawGrid } from './drawGrid.js';
 import { drawHover, drawOverlay } from './drawOverlay.js';
 import { PlanOverlays } from './PlanOverlays.js';
+import { liveChanges } from './liveChange.js';
+import { drawLiveChange } from './drawLiveChange.js';
+import { EMPTY_SELECTION } from '../state/slices.js';
 import { sendPlanEvent } from '../tools/planBridge.js';
 import type { PlanEvent, PointerKind } from '../tools/planInput.js';
 import { runCommand } from '../chrome/appCommands.js';
@@ -59,6 +62,22 @@ export function PlanView() {
   // The drawn document: the store's in every result input (positions, pipes, restraint), and the same
   // object after an edit of the name or the units, so such an edit redraws nothing.
   const drawn = analysis.project;
+  const liveBase = useApp((s) => s.liveBase);
+  // While the test pressure is dragged: the scene before the drag, for its arrow scale and block ghosts.
+  const before = useMemo(
+    () =>
+      liveBase
+        ? (() => {
+            const baseAnalysis = analyse(liveBase);
+            return {
+              scene: planScene(liveBase, baseAnalysis, caseView, EMPTY_SELECTION, null),
+              analysis: baseAnalysis,
+            };
+          })()
+        : null,
+    [liveBase, caseView],
+  );
+  const changes = useMemo(() => (before ? liveChanges(before.analysis, analysis) : []), [before, analysis]);
   const box = useRef<HTMLDivElement>(null);
   const coords = useRef<HTMLSpanElement>(null);
 
@@ -86,12 +105,17 @@ export function PlanView() {
   // their pipes out (and so is not redrawn), the interactive layer draws them where they are now.
   const movedKey = preview ? [...preview.keys()].sort().join('\u0000') : '';
   const [keep] = useState(sceneKeeper);
-  const scene = useMemo(
+  const current = useMemo(
     () =>
       keep(
         planScene(drawn, analysis, caseView, selection, null, movedKey ? new Set(movedKey.split('\u0000')) : undefined),
       ),
     [keep, drawn, analysis, caseView, selection, movedKey],
+  );
+  // One arrow scale held through the drag, so the arrows grow with the pressure instead of rescaling.
+  const scene = useMemo(
+    () => (before ? { ...current, largestForce: Math.max(before.scene.largestForce, 1e-9) } : current),
+    [current, before],
   );
   const moving = useMemo(
     () => (preview ? dragScene(drawn, analysis, selection, preview) : null),
@@ -181,6 +205,8 @@ export function PlanView() {
 
   const onWheel = useCallback(
     (e: WheelEvent) => {
+      // The legend scrolls its own content.
+      if (e.target instanceof Element && e.target.closest('.plan-legend')) return;
       e.preventDefault();
       const r = box.current!.getBoundingClientRect();
       send({ type: 'wheel', at: { sx: e.clientX - r.left, sy: e.clientY - r.top }, deltaY: e.deltaY });
@@ -247,6 +273,11 @@ export function PlanView() {
                   placeTags(ctx, viewport, moving, new LabelSpace(size.width, size.height)),
                 );
               }
+              if (before)
+                drawLiveChange(ctx, viewport, before.scene.polygons, changes, (id) => {
+                  const c = drawn.loadCases.find((x) => x.id === id);
+                  return c?.label ?? id;
+                });
               drawHover(ctx, viewport, drawn, hover, tool === 'draw');
               drawOverlay(ctx, viewport, draw, selectBox, units, snappedNow);
             }}

@@ -1,4 +1,4 @@
-import { parseProject, type LoadCase, type Pipe, type Project, type ProjectNode, type Soil } from '@mainbrace/solver';
+import { type LoadCase, type Pipe, type Project, type ProjectNode, type Soil } from '@mainbrace/solver';
 import type { AppState, AppStore, CaseView, DrawerTab, Selection, ToolName } from './store.js';
 import { EMPTY_SELECTION } from './store.js';
 import {
@@ -17,14 +17,20 @@ import type { DrawState } from '../tools/drawTool.js';
 import { fittedView, revealFitting as planCommandReveal, showFitting } from '../tools/planCommands.js';
 import { planInputOf } from '../tools/planBridge.js';
 import { editProblems } from './editCheck.js';
+import { checks } from './checks.js';
 
 /** Typing pauses shorter than this, ms, keep extending the same undo step. */
 const TYPING_WINDOW_MS = 1500;
 
-/** Keeps a selection to ids that still exist (after undo, delete or open). */
+/**
+ * Keeps a selection to ids that still exist (after undo, delete or open); the same object when every
+ * id still exists, so that an edit elsewhere (a keystroke in the name) does not look like a new selection.
+ */
 function prune(sel: Selection, p: Project): Selection {
+  if (sel.nodes.size === 0 && sel.pipes.size === 0) return sel;
   const nodes = new Set(p.nodes.map((n) => n.id));
   const pipes = new Set(p.pipes.map((x) => x.id));
+  if ([...sel.nodes].every((id) => nodes.has(id)) && [...sel.pipes].every((id) => pipes.has(id))) return sel;
   return {
     nodes: new Set([...sel.nodes].filter((id) => nodes.has(id))),
     pipes: new Set([...sel.pipes].filter((id) => pipes.has(id))),
@@ -64,7 +70,9 @@ export function createActions(store: AppStore) {
     const same = typing !== undefined && lastTyping?.key === typing && now - lastTyping.at < TYPING_WINDOW_MS;
     lastTyping = typing === undefined ? null : { key: typing, at: now };
     if (same) history().pause();
-    set({ project: after, selection: prune(get().selection, after) });
+    // A passing message ("Deleted 2 nodes — Ctrl+Z brings them back") is out of date after the next edit.
+    const stale = get().notice?.tone === 'info' ? { notice: null } : {};
+    set({ project: after, selection: prune(get().selection, after), ...stale });
     if (same) history().resume();
   };
   const history = () => store.temporal.getState();
@@ -174,6 +182,7 @@ export function createActions(store: AppStore) {
     beginLiveEdit: () => {
       if (liveStart) return; // a key held down repeats: the gesture began at the first press
       liveStart = get().project;
+      set({ liveBase: liveStart });
       history().pause();
     },
     endLiveEdit: () => {
@@ -182,6 +191,7 @@ export function createActions(store: AppStore) {
       set({ project: liveStart });
       history().resume();
       liveStart = null;
+      set({ liveBase: null });
       if (final !== get().project) set({ project: final });
     },
     /** A document change during a live edit (no undo step of its own). */
@@ -230,7 +240,7 @@ export type Actions = ReturnType<typeof createActions>;
 
 /** Checks a whole document before it replaces the current one (used by Open and restore). */
 export function validated(data: unknown): { ok: true; project: Project } | { ok: false; lines: string[] } {
-  const r = parseProject(data);
+  const r = checks().parseProject(data);
   return r.ok
     ? { ok: true, project: r.project }
     : { ok: false, lines: r.problems.map((p) => (p.path ? `${p.path}: ${p.message}` : p.message)) };

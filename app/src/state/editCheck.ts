@@ -1,4 +1,5 @@
-import { crossProblems, partProblems, problemText, type Problem, type Project } from '@mainbrace/solver';
+import { problemText, type Problem, type Project } from '@mainbrace/solver';
+import { checks } from './checks.js';
 
 const LISTS = ['nodes', 'pipes', 'loadCases', 'soils'] as const;
 type List = (typeof LISTS)[number];
@@ -36,7 +37,7 @@ export function editProblems(before: Project, after: Project): string[] {
   for (const key of new Set([...Object.keys(b), ...Object.keys(a)])) {
     if (b[key] === a[key]) continue;
     if (!isList(key) || !Array.isArray(a[key])) {
-      out.push(...partProblems(key, a[key]));
+      out.push(...checks().partProblems(key, a[key]));
       if (key === 'defaultSoil') cross = true;
       continue;
     }
@@ -48,10 +49,10 @@ export function editProblems(before: Project, after: Project): string[] {
       const item = now[i]!;
       const old = was[i];
       if (item === old) continue;
-      out.push(...partProblems(key, item, i));
+      out.push(...checks().partProblems(key, item, i));
       if (!cross && (old === undefined || crossKey(key, old) !== crossKey(key, item))) cross = true;
     }
   }
-  if (cross && out.length === 0) out.push(...crossProblems(after));
+  if (cross && out.length === 0) out.push(...checks().crossProblems(after));
   return out.map(problemText);
 }

@@ -52,6 +52,8 @@ export interface ViewSlice {
   notice: Notice | null;
   /** the document as last saved to or opened from a file, or as the demo opened; null when unknown */
   fileBaseline: Project | null;
+  /** the document when a live edit (the test-pressure slider) began: the plan holds its arrow scale and shows growth against it */
+  liveBase: Project | null;
 }
 
 /** The active tool and its transient state. */
@@ -88,6 +90,7 @@ export const viewSlice = (units: UnitSystem): ViewSlice => ({
   drawer: { tab: 'schedule', height: 'low' },
   notice: null,
   fileBaseline: null,
+  liveBase: null,
 });
 
 export const toolSlice = (pipeSpec: PipeSpec): ToolSlice => ({

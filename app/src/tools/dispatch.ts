@@ -10,6 +10,7 @@ import {
   DRAG_PX,
   HIT_PX,
   IDLE_GESTURE,
+  LEGEND_MIN_CANVAS_PX,
   type PlanDerived,
   type PlanEvent,
   type PlanInput,
@@ -47,7 +48,12 @@ export function dispatch(s: PlanInput, e: PlanEvent, derived: PlanDerived = NO_D
   switch (e.type) {
     case 'resize': {
       const first = s.canvas.width === 0 || s.canvas.height === 0;
-      const next = { ...s, canvas: { width: e.width, height: e.height } };
+      const next = {
+        ...s,
+        canvas: { width: e.width, height: e.height },
+        // A narrow plan starts with the legend closed (one tap opens it).
+        legendOpen: first ? s.legendOpen && e.width >= LEGEND_MIN_CANVAS_PX : s.legendOpen,
+      };
       // The first size the plan learns is when it can first show the whole route.
       return done(first ? { ...next, viewport: fittedView(next) } : next);
     }

@@ -57,8 +57,8 @@ export interface PlanInput {
   units: UnitSystem;
   viewport: Viewport;
   canvas: { width: number; height: number };
-  /** px kept clear of the route on the right when fitting (the open legend) */
-  fitInsetRight: number;
+  /** whether the plan's legend is open: Fit keeps the route out from under it */
+  legendOpen: boolean;
   gesture: Gesture;
   /** touch pointers down, by pointer id */
   touches: Readonly<Record<number, ScreenPoint>>;
@@ -96,6 +96,15 @@ export const HIT_PX = { mouse: 9, touch: 22 } as const;
 /** While drawing, a click this close to a node or pipe joins it (a click 12 px off a pipe should join it). */
 export const ATTACH_PX = { mouse: 16, touch: 26 } as const;
 export const DRAG_PX = { mouse: 4, touch: 10 } as const;
+/** Legend width kept clear by Fit while the legend is open, px (its CSS width, 230, and margins). */
+export const LEGEND_INSET_PX = 250;
+/** Below this canvas width the legend starts closed: open, it would leave the route too little room. */
+export const LEGEND_MIN_CANVAS_PX = 900;
+
+/** px kept clear of the route on the right (the open legend, when the canvas is wide enough to spare it). */
+export const fitInsetRight = (s: Pick<PlanInput, 'legendOpen' | 'canvas'>) =>
+  s.legendOpen && s.canvas.width - LEGEND_INSET_PX > 300 ? LEGEND_INSET_PX : 0;
+
 /** A key press pans by this much of the canvas, and zooms by this factor. */
 export const KEY_PAN_FRACTION = 0.1;
 export const KEY_ZOOM = 1.25;

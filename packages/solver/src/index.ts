@@ -48,7 +48,7 @@ export {
   type SoilTable,
 } from './restraint/soilLibrary.js';
 export { rankinePassiveCoefficient, passiveResistance } from './restraint/passiveResistance.js';
-export { scheduleOf, type Schedule, type ScheduleFitting } from './schedule/scheduleRows.js';
+export { fittingProfile, scheduleOf, type Schedule, type ScheduleFitting } from './schedule/scheduleRows.js';
 export { scheduleCsv } from './schedule/scheduleCsv.js';
 export { scheduleTable } from './schedule/scheduleTable.js';
 export { scheduleJson, diagnosticJson, JSON_DECIMALS } from './schedule/scheduleJson.js';

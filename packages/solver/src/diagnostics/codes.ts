@@ -70,6 +70,14 @@ export const DIAGNOSTIC_CODES = {
       'The gravity anchor stands in groundwater and is sized with the submerged unit weight of concrete (γc − γw).',
     action: 'Design for the highest groundwater level expected.',
   },
+  'anchor.no-weight': {
+    severity: 'error',
+    values: { concreteUnitWeight: 'unitWeight', waterUnitWeight: 'unitWeight', upward: 'force' },
+    meaning:
+      'The concrete weighs no more than the groundwater (γc − γw ≤ 0): no gravity anchor can hold the upward thrust. The restraint is not adequate; restrained joints are sized instead.',
+    action:
+      'Check the concrete unit weight and the water density; use restrained joints, tie-downs or heavier concrete.',
+  },
   'soil.no-bearing': {
     severity: 'warning',
     values: {},
@@ -108,18 +116,20 @@ export const DIAGNOSTIC_CODES = {
     meaning: 'The face is more than twice as wide as it is high because the cover limits its height.',
     action: 'Consider restrained joints or a deeper block.',
   },
-  'block.impractical': {
+  'block.not-adequate': {
     severity: 'error',
-    values: { faceWidth: 'length', faceHeight: 'length' },
+    values: {
+      thrust: 'force',
+      ratio: 'ratio',
+      safetyFactor: 'ratio',
+      bearingArea: 'area',
+      faceWidth: 'length',
+      faceHeight: 'length',
+    },
     meaning:
-      'No practical block: the face the bearing value and the cover allow is far too wide. The restraint is not adequate.',
-    action: 'Use restrained joints, deepen the main, or have the soil investigated.',
-  },
-  'block.passive-short': {
-    severity: 'warning',
-    values: { ratio: 'ratio', safetyFactor: 'ratio' },
-    meaning: 'The face’s passive resistance is less than the safety factor times the thrust.',
-    action: 'Confirm the soil’s bearing with the geotechnical engineer, or enlarge or deepen the block.',
+      'No bearing block within the cover and face limits meets both the bearing area and the passive resistance with the safety factor. No block is issued; the restraint is not adequate as designed and restrained joints are sized instead.',
+    action:
+      'Check the restrained joints sized instead, deepen the main for a taller face, improve the soil, or have the block designed by a geotechnical engineer.',
   },
   'pad.no-bearing': {
     severity: 'warning',

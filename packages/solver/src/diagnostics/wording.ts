@@ -55,6 +55,8 @@ const WORDS: Record<DiagnosticCode, Words> = {
   'thrust.none': () => 'No thrust at this fitting in any case.',
   'anchor.submerged': () =>
     'Gravity anchor below groundwater: sized with the submerged unit weight of concrete (γc − γw); design for the highest groundwater level.',
+  'anchor.no-weight': (v) =>
+    `Not adequate: concrete of ${v.concreteUnitWeight} weighs no more than the groundwater (${v.waterUnitWeight}), so no gravity anchor can hold the ${v.upward} upward thrust. Restrained joints are sized instead; check the concrete unit weight and water density, or use tie-downs or heavier concrete.`,
   'soil.no-bearing': (_v, s, c) =>
     `No bearing: ${soil(s, c)} has no allowable bearing (muck, peat or unprepared fill). A thrust block cannot be used: restrained joints are sized instead; piles or soil replacement are the other choices.`,
   'soil.below-min-cover': (v, s, c) =>
@@ -67,10 +69,8 @@ const WORDS: Record<DiagnosticCode, Words> = {
     `Block taller than the cover allows: a face ${v.faceHeight} high needs its bottom ${v.bottomDepth} or more below ground, but the pipe centre is only ${v.centreDepth} down. Deepen the cover, use restrained joints, or design the block for passive pressure.`,
   'block.wide-face': (v) =>
     `Face ${v.faceWidth} wide is more than twice its ${v.faceHeight} height: the cover limits the height. Consider restrained joints or a deeper block.`,
-  'block.impractical': (v) =>
-    `Not adequate: no practical block — a face ${v.faceWidth} wide and ${v.faceHeight} high is what the bearing value and the cover allow. Use restrained joints, deepen the main, or have the soil investigated.`,
-  'block.passive-short': (v) =>
-    `The face’s passive resistance is ${v.ratio} × the thrust, below the safety factor ${v.safetyFactor}: confirm the soil’s bearing with the geotechnical engineer, or enlarge or deepen the block.`,
+  'block.not-adequate': (v) =>
+    `Not adequate: no block within the cover and face limits holds ${v.thrust} with a safety factor of ${v.safetyFactor} (bearing area ${v.bearingArea} needed; the strongest face allowed, ${v.faceWidth} wide × ${v.faceHeight} high, resists ${v.ratio} × the thrust). Restrained joints are sized instead: check them, or deepen the main, improve the soil, or have the block designed by a geotechnical engineer.`,
   'pad.no-bearing': (_v, s, c) =>
     `No bearing under the fitting: ${soil(s, c)} cannot take the downward thrust; restrained joints are sized instead, or replace the soil.`,
   'joints.no-resistance': (v, s, c) =>

@@ -109,6 +109,35 @@ export const REGISTER = {
     source: 'Mainbrace face-proportion rule (no published source states it)',
     verified: true,
   },
+  'block.thickest': {
+    quantity:
+      'A bearing block may be thickened to hold an uplift by its weight up to this multiple of the design thickness (on its bare bearing area); beyond it a separate anchor is built',
+    value: 2,
+    unit: '—',
+    kind: 'own rule',
+    source: 'Mainbrace rule: a block much thicker than its face is an anchor in all but name',
+    verified: true,
+  },
+  'block.face-limits': {
+    quantity:
+      'Bearing-face proportions: width at most `wide` × the height; at the tallest height the cover allows, at most `widest` × the height and `widestMetres` m',
+    value: { wide: 2, widest: 8, widestMetres: 10 },
+    unit: '—',
+    kind: 'own rule',
+    source: 'Mainbrace rule: beyond these a face is not a practical block',
+    verified: true,
+  },
+  'passive.ovesen': {
+    quantity:
+      'Ovesen 3-D factor on the passive resistance of a single short block, M = 1 + (Kp − Ka)^⅔·[1.1E⁴ + 1.6B/(1 + 5b/h) + 0.4(Kp − Ka)E³B²/(1 + 0.05b/h)]',
+    value: null,
+    unit: '—',
+    kind: 'published',
+    source:
+      'Ovesen (1964), Anchor slabs, calculation methods and model tests, Danish Geotechnical Institute Bulletin No. 16; as restated in Duncan & Mokwa (2001), Passive earth pressures: theories and tests, J. Geotech. Geoenviron. Eng. 127(3):248–257',
+    clause: '3-D correction factor (equation recalled, not read)',
+    verified: false,
+  },
   'passive.rankine': {
     quantity: 'Rankine passive earth pressure with cohesion, Kp = tan²(45° + φ/2)',
     value: null,

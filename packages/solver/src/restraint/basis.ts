@@ -7,8 +7,10 @@ import type { Restraint } from './sizeRestraint.js';
 export function restraintBasis(r: Omit<Restraint, 'basis'>, legs: readonly Leg[], soil: Soil): ProvenanceId[] {
   const ids: ProvenanceId[] = [];
   if (r.block || r.reverseBlock || r.anchor || r.trenchBottom) ids.push('design.dimension-step');
-  if (r.block || r.reverseBlock) ids.push('block.bearing-area', 'block.face-rule', 'passive.rankine');
+  if (r.block || r.reverseBlock)
+    ids.push('block.bearing-area', 'block.face-rule', 'block.face-limits', 'passive.rankine', 'passive.ovesen');
   if (r.anchor) ids.push('anchor.weight-rule', 'anchor.base-friction');
+  if (r.block?.upwardThrust) ids.push('anchor.weight-rule', 'block.thickest');
   if (r.trenchBottom) ids.push('pad.bearing-area');
   if (r.restrainedLegs.length) {
     const restrained = legs.filter((l) => r.restrainedLegs.some((x) => x.pipe === l.pipe.id));
