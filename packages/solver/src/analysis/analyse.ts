@@ -261,7 +261,8 @@ function rescale(prev: Analysis, k: Kept, project: Project): Analysis {
     project,
     fittings,
     byNode: new Map(fittings.map((f) => [f.node.id, f])),
-    diagnostics: uniqueDiagnostics(inputs),
+    // a case edit changes the pressure on every pipe: its rating checks are made again
+    diagnostics: uniqueDiagnostics([...inputs, ...pipeRatingChecks(project)]),
   };
   kept.set(analysis, k);
   return analysis;

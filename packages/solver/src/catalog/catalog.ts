@@ -21,10 +21,14 @@ export const CATALOG: readonly PipeSeries[] = [
   PE100_SDR17,
 ];
 
-export const findSeries = (id: string): PipeSeries | undefined => CATALOG.find((s) => s.id === id);
+const BY_ID = new Map(CATALOG.map((s) => [s.id, s]));
+/** Sizes by series and nominal, so a route of thousands of pipes looks each up in constant time. */
+const BY_SIZE = new Map(CATALOG.flatMap((s) => s.sizes.map((z) => [`${s.id} ${z.nominal}`, z] as const)));
+
+export const findSeries = (id: string): PipeSeries | undefined => BY_ID.get(id);
 
 export const findSize = (seriesId: string, nominal: string): PipeSize | undefined =>
-  findSeries(seriesId)?.sizes.find((s) => s.nominal === nominal);
+  BY_SIZE.get(`${seriesId} ${nominal}`);
 
 export const seriesForMaterial = (m: Material): PipeSeries[] => CATALOG.filter((s) => s.material === m);
 

@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import { route } from '../../test/projectBuilder.js';
-import { analyse } from '../analysis/analyse.js';
+import { analyse, analyseProject } from '../analysis/analyse.js';
 import { findSize } from '../catalog/catalog.js';
 import { PSI } from '../units/conversions.js';
 import { STANDARD_GRAVITY } from '../units/quantities.js';
@@ -81,6 +81,30 @@ describe('pipes checked against their pressure rating', () => {
     const p = pvcRoute([{ id: 'c', kind: 'working', pressure: 3.5e6 }]);
     const custom = { ...p, pipes: p.pipes.map((x) => ({ ...x, series: undefined, nominal: undefined })) };
     expect(pipeRatingChecks(custom)).toEqual([]);
+  });
+
+  it('follows an edit of a pipe’s series or a node’s level: nothing kept goes stale', () => {
+    const p = pvcRoute([{ id: 'w', kind: 'working', pressure: 1.5e6, datumElevation: 120 }]);
+    expect(pipeRatingChecks(p)).toHaveLength(1); // p2's low end, 20 m down
+    const dr14 = findSize('pvc-c900-dr14', '8')!;
+    const stronger = {
+      ...p,
+      pipes: p.pipes.map((x) => ({ ...x, series: 'pvc-c900-dr14', insideDiameter: dr14.insideDiameter })),
+    };
+    expect(pipeRatingChecks(stronger)).toEqual([]); // DR 14: 305 psi = 2,103 kPa
+    const raised = { ...p, nodes: p.nodes.map((n) => ({ ...n, elevation: 120 })) };
+    expect(pipeRatingChecks(raised)).toEqual([]); // all at the datum: 1,500 kPa < 1,620 kPa
+  });
+
+  it('reports the same findings after a case edit analysed incrementally as from scratch', () => {
+    const before = pvcRoute([{ id: 'w', kind: 'working', pressure: 1.0e6 }]);
+    const prev = analyse(before);
+    expect(prev.diagnostics.filter((d) => d.code.startsWith('pipe.'))).toEqual([]);
+    const after = { ...before, loadCases: [{ ...before.loadCases[0]!, pressure: 3.5e6 }] };
+    const next = analyse(after, prev);
+    const codes = (a: ReturnType<typeof analyse>) => a.diagnostics.filter((d) => d.code.startsWith('pipe.'));
+    expect(codes(next)).toHaveLength(2);
+    expect(codes(next)).toEqual(codes(analyseProject(after)));
   });
 
   it('carries the finding into the analysis, so the schedule, the CLI and the app show it', () => {

@@ -21,15 +21,16 @@ export function scheduleNotes(
 ): { notes: ScheduleNote[]; byMark: Map<string, number[]> } {
   // `seen` keeps the marks' membership test constant-time: a finding shared by 10,000 fittings made
   // the list search quadratic (issue 16, a 10,000-node route).
-  const groups = new Map<
-    DiagnosticCode,
-    { texts: Set<string>; marks: string[]; seen: Set<string>; first: Diagnostic }
-  >();
+  // A finding about the route as a whole (no mark: a pipe over its rating, an input out of range) is
+  // its own note, worded with what it names, rather than merged into its code's general meaning.
+  const groups = new Map<string, { texts: Set<string>; marks: string[]; seen: Set<string>; first: Diagnostic }>();
   for (const r of rows) {
     for (const d of r.diagnostics) {
-      let g = groups.get(d.code);
-      if (!g) groups.set(d.code, (g = { texts: new Set(), marks: [], seen: new Set(), first: d }));
-      g.texts.add(words(d));
+      const text = words(d);
+      const key = r.mark ? d.code : `${d.code}\u0000${text}`;
+      let g = groups.get(key);
+      if (!g) groups.set(key, (g = { texts: new Set(), marks: [], seen: new Set(), first: d }));
+      g.texts.add(text);
       if (r.mark && !g.seen.has(r.mark)) {
         g.seen.add(r.mark);
         g.marks.push(r.mark);

@@ -32,7 +32,9 @@ export function scheduleTable(
   if (view.notes.length) {
     out.push('', 'Notes');
     for (const n of view.notes)
-      out.push(`  ${n.number}. ${SEVERITY_MARK[n.severity]} ${n.text} (${n.marks.join(', ')})`);
+      out.push(
+        `  ${n.number}. ${SEVERITY_MARK[n.severity]} ${n.text}${n.marks.length ? ` (${n.marks.join(', ')})` : ''}`,
+      );
   }
   out.push('', ...CAUTIONS.map((c) => `! ${c}`));
   return out.join('\n') + '\n';
