@@ -1,8 +1,16 @@
-// The command line ships as one bundled ES module: one file to load keeps start-up close to bare Node.
+// The command line ships as one bundled ES module, so that start-up stays close to bare Node; the
+// schema library is a chunk of its own, loaded only to word the problems of a file that is not valid;
+// import and export load the CSV and projection libraries from chunks of their own, on demand.
 import { defineConfig } from 'rolldown';
 
 export default defineConfig({
-  input: 'src/cli/main.ts',
+  input: { mainbrace: 'src/cli/main.ts' },
   platform: 'node',
-  output: { file: 'dist/mainbrace.mjs', format: 'esm', minify: true },
+  output: {
+    dir: 'dist',
+    entryFileNames: 'mainbrace.mjs',
+    chunkFileNames: '[name]-[hash].mjs',
+    format: 'esm',
+    minify: true,
+  },
 });
