@@ -1,6 +1,7 @@
 import type { RefObject } from 'react';
 import { FOOT, formatSi, KIND_NAME, KIP, type Material } from '@mainbrace/solver';
-import { useActions, useApp } from '../state/StoreContext.js';
+import { useActions, useApp, useAppStore } from '../state/StoreContext.js';
+import { sendPlanEvent } from '../tools/planBridge.js';
 import { showColumnForce } from '../format/quantity.js';
 import { gridSpacing } from '../state/viewport.js';
 import { gridStep } from './drawGrid.js';
@@ -26,6 +27,7 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
   const tool = useApp((s) => s.tool);
   const legendOpen = useApp((s) => s.legendOpen);
   const actions = useActions();
+  const store = useAppStore();
   const caseView = useApp((s) => s.caseView);
   const cases = useApp((s) => s.project.loadCases);
   const shown =
@@ -165,6 +167,24 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
           warning
         </div>
       </div>
+      {drawing && (
+        // Touch has no Enter key and no double-click to rely on: a button finishes the run.
+        <div className="plan-finish">
+          <button
+            onPointerDown={(e) => e.stopPropagation()}
+            onClick={() => sendPlanEvent(store, actions, { type: 'command', name: 'finish' })}
+            data-testid="finish-run"
+          >
+            Finish run
+          </button>
+          <button
+            onPointerDown={(e) => e.stopPropagation()}
+            onClick={() => sendPlanEvent(store, actions, { type: 'command', name: 'cancel' })}
+          >
+            Cancel
+          </button>
+        </div>
+      )}
       {tool === 'draw' && (
         <div className="plan-hint" role="status">
           {drawing
