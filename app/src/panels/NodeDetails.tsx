@@ -1,12 +1,20 @@
-import type { Project, ProjectNode } from '@mainbrace/solver';
+import { nodeCover, type Project, type ProjectNode } from '@mainbrace/solver';
 import { useActions, useApp } from '../state/StoreContext.js';
 import { NumberField } from './NumberField.js';
+import { levelPatch, type LevelEdit } from './nodeLevels.js';
 
 /** The inputs of a node: label, position, elevation, cover, soil, end condition, valve, restraint method. */
 export function NodeDetails({ node, project, pipeCount }: { node: ProjectNode; project: Project; pipeCount: number }) {
   const actions = useActions();
   const u = useApp((s) => s.units);
   const set = (patch: Partial<ProjectNode>) => actions.updateNode(node.id, patch);
+  // The largest pipe at the node sets where its top is (model/groundLevel.ts).
+  const od = Math.max(
+    0,
+    ...project.pipes.filter((p) => p.from === node.id || p.to === node.id).map((p) => p.outsideDiameter),
+  );
+  const level = (e: LevelEdit) => set(levelPatch(node, od, e));
+  const grounded = node.groundLevel !== undefined;
   return (
     <section className="inputs" aria-label={`Node ${node.id}`}>
       <h3>
@@ -25,26 +33,55 @@ export function NodeDetails({ node, project, pipeCount }: { node: ProjectNode; p
         <NumberField label="East" value={node.x} dimension="length" units={u} onCommit={(x) => set({ x })} />
         <NumberField label="North" value={node.y} dimension="length" units={u} onCommit={(y) => set({ y })} />
       </div>
+      {grounded && (
+        <div className="field-row">
+          <NumberField
+            label="Ground level"
+            value={node.groundLevel!}
+            dimension="elevation"
+            units={u}
+            onCommit={(value) => level({ typed: 'ground', value })}
+            hint="Surveyed; the pipe keeps its cover"
+            testId="node-ground"
+          />
+          <button type="button" className="link-button" onClick={() => level({ typed: 'remove-ground' })}>
+            No ground level
+          </button>
+        </div>
+      )}
       <div className="field-row">
         <NumberField
           label="Pipe centreline elevation"
           value={node.elevation}
           dimension="elevation"
           units={u}
-          onCommit={(elevation) => set({ elevation })}
+          {...(grounded ? { max: node.groundLevel! - od / 2 } : {})}
+          onCommit={(value) => level({ typed: 'pipe', value })}
+          {...(grounded ? { hint: 'Type it and the cover follows' } : {})}
           testId="node-elevation"
         />
         <NumberField
           label="Cover to top of pipe"
-          value={node.cover}
+          value={nodeCover(node, od)}
           dimension="length"
           units={u}
           min={0}
           max={30}
-          onCommit={(cover) => set({ cover })}
+          onCommit={(value) => level({ typed: 'cover', value })}
+          {...(grounded ? { hint: 'Type it and the pipe level follows' } : {})}
           testId="node-cover"
         />
       </div>
+      {!grounded && (
+        <button
+          type="button"
+          className="link-button"
+          onClick={() => level({ typed: 'add-ground' })}
+          data-testid="node-add-ground"
+        >
+          Give a ground level
+        </button>
+      )}
       <div className="field">
         <label htmlFor="node-soil">Soil</label>
         <select id="node-soil" value={node.soil ?? ''} onChange={(e) => set({ soil: e.target.value || undefined })}>

@@ -88,7 +88,7 @@ export function ProfilePanel() {
         {data.points
           .filter((p) => p.mark)
           .map((p, i) => (
-            <g key={p.node} className="profile-fitting" onClick={() => actions.selectNode(p.node)}>
+            <g key={p.node} className="profile-fitting" onClick={() => actions.revealNode(p.node)}>
               <circle cx={sx(p.chainage)} cy={sz(p.pipe)} r="4" />
               <text x={sx(p.chainage)} y={sz(p.pipe) + (i % 2 ? 16 : -9)} textAnchor="middle" className="profile-mark">
                 {p.mark}

@@ -1,4 +1,4 @@
-import { pressureAt, STANDARD_GRAVITY, type Analysis, type Project } from '@mainbrace/solver';
+import { nodeGround, pressureAt, STANDARD_GRAVITY, type Analysis, type Project } from '@mainbrace/solver';
 
 export interface ProfilePoint {
   node: string;
@@ -6,7 +6,7 @@ export interface ProfilePoint {
   chainage: number;
   /** m, pipe centreline */
   pipe: number;
-  /** m, ground surface: centreline + OD/2 + cover */
+  /** m, ground surface: surveyed, or centreline + OD/2 + cover */
   ground: number;
   mark: string | null;
 }
@@ -51,7 +51,7 @@ export function profileData(project: Project, analysis: Analysis): ProfileData {
       node: id,
       chainage: chain.get(id)!,
       pipe: n.elevation,
-      ground: n.elevation + od / 2 + n.cover,
+      ground: nodeGround(n, od),
       mark: analysis.byNode.get(id)?.mark ?? null,
     };
   });

@@ -61,6 +61,10 @@ export function splitPipe(project: Project, pipeId: string, at: PlanPoint): { pr
     y: round(a.y + t * dy),
     elevation: round(a.elevation + t * (b.elevation - a.elevation)),
     cover: round(a.cover + t * (b.cover - a.cover)),
+    // The ground between two surveyed levels is taken as straight (the pipe is interpolated the same way).
+    ...(a.groundLevel !== undefined && b.groundLevel !== undefined
+      ? { groundLevel: round(a.groundLevel + t * (b.groundLevel - a.groundLevel)) }
+      : {}),
     end: 'cap',
     valve: false,
     restraint: 'block',

@@ -11,6 +11,7 @@ import { sameDiagnostic, uniqueDiagnostics, type Diagnostic } from '../diagnosti
 import type { ProvenanceId } from '../provenance/register.js';
 import type { CalcStep } from './calcRecord.js';
 import { implausibleInputs } from '../model/plausibility.js';
+import { pipeRatingChecks } from '../pressure/pipeRating.js';
 import { copySums, fillStates, readStates, thrustSums, writeSums, type ThrustSums } from './thrustSums.js';
 import { fittingDiagnostics } from './fittingDiagnostics.js';
 import { routeChange } from './routeChange.js';
@@ -53,7 +54,10 @@ export interface Analysis {
   chainage: Map<string, number>;
   /** marks of every fitting, tie-ins included */
   marks: Map<string, string>;
-  /** findings about the inputs of the whole project (values outside their usual range), most severe first */
+  /**
+   * findings about the project as a whole: inputs outside their usual range, and pipes loaded past
+   * their pressure rating; most severe first
+   */
   diagnostics: Diagnostic[];
 }
 
@@ -230,7 +234,7 @@ function assemble(
     runOf: layout.runOf,
     chainage: layout.chainage,
     marks,
-    diagnostics: uniqueDiagnostics(inputs),
+    diagnostics: uniqueDiagnostics([...inputs, ...pipeRatingChecks(project)]),
   };
   kept.set(analysis, { sums, index, geometry });
   return analysis;

@@ -1,15 +1,21 @@
 import { resolve } from 'node:path';
 import { runCli } from './run.js';
 import { readLimited } from './readLimited.js';
+import { runExchange } from './exchange.js';
 
 // pnpm runs scripts from the package root; INIT_CWD is where the user typed the command.
 const base = process.env.INIT_CWD ?? process.cwd();
 
-void runCli(process.argv.slice(2), {
+const argv = process.argv.slice(2);
+const io = {
   interactive: process.stdout.isTTY === true,
-  readFile: (path, maxBytes) => readLimited(resolve(base, path), maxBytes),
-  out: (text) => process.stdout.write(text),
-  err: (text) => process.stderr.write(text),
-}).then((status) => {
+  readFile: (path: string, maxBytes: number) => readLimited(resolve(base, path), maxBytes),
+  out: (text: string) => void process.stdout.write(text),
+  err: (text: string) => void process.stderr.write(text),
+};
+// Import and export load the CSV and projection libraries; the rest may load the schema library.
+const run =
+  (argv[0] === 'import' || argv[0] === 'export') && !argv.includes('--help') ? runExchange(argv, io) : runCli(argv, io);
+void run.then((status) => {
   process.exitCode = status;
 });

@@ -114,7 +114,7 @@ export async function runCli(argv: readonly string[], rawIo: CliIo): Promise<num
     }
     if (!['schedule', 'validate', 'explain'].includes(args.command)) {
       throw new UsageError(
-        `unknown command "${escapeControls(args.command)}": expected schedule, explain, validate or schema`,
+        `unknown command "${escapeControls(args.command)}": expected schedule, explain, validate, schema, import or export`,
       );
     }
     const loaded = await load(io, args.positional[0], maxBytesOption(args.options.get('max-size')));

@@ -2,6 +2,7 @@ import type { z } from 'zod';
 import type { Project } from './projectSchema.js';
 import { norm } from '../geometry/vector.js';
 import { pathText, type Problem } from './problems.js';
+import { nodeCover, nodeOutsideDiameters } from './groundLevel.js';
 
 type Ctx = z.core.$RefinementCtx<Project>;
 
@@ -96,6 +97,22 @@ export function overlappingPipes(p: Project, add: Add) {
   });
 }
 
+/** A node with a ground level must have its pipe below it: the derived cover is not negative. */
+function pipeBelowGround(p: Project, add: Add) {
+  if (!p.nodes.some((n) => n.groundLevel !== undefined)) return;
+  const od = nodeOutsideDiameters(p);
+  p.nodes.forEach((n, i) => {
+    if (n.groundLevel === undefined) return;
+    const d = od.get(n.id) ?? 0;
+    const cover = nodeCover(n, d);
+    if (cover < 0)
+      add(
+        ['nodes', i, 'groundLevel'],
+        `must be at or above the top of the pipe (elevation ${n.elevation} m + OD/2 ${d / 2} m): the pipe would stand ${Math.round(-cover * 1000) / 1000} m out of the ground`,
+      );
+  });
+}
+
 /** Checks that span several fields: unique ids, references that resolve, sane pipes. */
 export function crossCheck(p: Project, ctx: Ctx): void {
   referenceChecks(p, ctx);
@@ -163,6 +180,7 @@ export function referenceChecks(p: Project, ctx: Pick<Ctx, 'addIssue'>): void {
     }
   });
   const add: Add = (path, message) => ctx.addIssue({ code: 'custom', path, message });
+  pipeBelowGround(p, add);
   coincidentNodes(p, add);
   overlappingPipes(p, add);
 }

@@ -2,6 +2,7 @@ import type { Diagnostic, DiagnosticCode, Subject } from '../diagnostics/diagnos
 import { diagnostic } from '../diagnostics/diagnostic.js';
 import { LIMITS, unusual, type Limit, type LimitId } from './limits.js';
 import type { Project } from './projectSchema.js';
+import { nodeCover, nodeOutsideDiameters } from './groundLevel.js';
 
 const CODE: Partial<Record<LimitId, DiagnosticCode>> = {
   pressure: 'input.pressure-unusual',
@@ -47,7 +48,13 @@ export function implausibleInputs(p: Project): Diagnostic[] {
     check('frictionAngle', s.frictionAngle, at('frictionAngle'));
     check('cohesion', s.cohesion, at('cohesion'));
   });
-  p.nodes.forEach((n, i) => check('cover', n.cover, { node: n.id, field: `nodes[${i}].cover` }));
+  const od = nodeOutsideDiameters(p);
+  p.nodes.forEach((n, i) =>
+    check('cover', nodeCover(n, od.get(n.id) ?? 0), {
+      node: n.id,
+      field: `nodes[${i}].${n.groundLevel === undefined ? 'cover' : 'groundLevel'}`,
+    }),
+  );
   const factor = Math.max(...p.loadCases.map((c) => Math.abs(c.flowFactor)));
   p.pipes.forEach((pipe, i) => {
     check('outsideDiameter', pipe.outsideDiameter, { pipe: pipe.id, field: `pipes[${i}].outsideDiameter` });

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { REGISTER } from '../provenance/register.js';
 import type { Dimension } from '../units/conversions.js';
 import { LIMITS, type Limit, type LimitId } from './limits.js';
+import { CASE_KINDS, ENCASEMENTS, END_CONDITIONS, MATERIALS, RESTRAINT_METHODS } from './choices.js';
 
 /**
  * The project file (shared design: project-format.md, v1). Stored quantities are SI base units;
@@ -41,11 +42,8 @@ function limited(id: LimitId) {
 const SF = REGISTER['design.safety-factor'].value;
 const safetyFactor = () => limited('safetyFactor');
 
-export const MATERIALS = ['ductile-iron', 'pvc', 'hdpe', 'steel', 'other'] as const;
-export const END_CONDITIONS = ['cap', 'tie-in'] as const;
-export const CASE_KINDS = ['working', 'surge', 'test', 'other'] as const;
-export const RESTRAINT_METHODS = ['block', 'joints'] as const;
-export const ENCASEMENTS = ['none', 'polyethylene'] as const;
+// The choice lists live in a module without zod, so that a screen offering them loads no schema code.
+export { CASE_KINDS, ENCASEMENTS, END_CONDITIONS, MATERIALS, RESTRAINT_METHODS };
 
 export const waterSchema = z.strictObject({
   /** kg/m³; water at 20 °C (register: water.density) */
@@ -126,8 +124,13 @@ export const nodeSchema = z.strictObject({
   y: limited('coordinate'),
   /** m, pipe centreline elevation */
   elevation: limited('elevation'),
-  /** m, ground surface to top of pipe */
+  /** m, ground surface to top of pipe; derived from groundLevel when the node has one */
   cover: limited('cover').default(1.2),
+  /**
+   * m, ground surface elevation (a survey level), optional. With it the pipe centreline stays where
+   * `elevation` puts it and the cover is groundLevel − elevation − OD/2 (model/groundLevel.ts).
+   */
+  groundLevel: limited('elevation').optional(),
   soil: id.optional(),
   end: z.enum(END_CONDITIONS).default('cap'),
   valve: z.boolean().default(false),
@@ -176,6 +179,16 @@ export const projectShape = z.strictObject({
   defaultSoil: id.optional(),
   nodes: z.array(nodeSchema).default([]),
   pipes: z.array(pipeSchema).default([]),
+  /**
+   * where the plan lies on the earth, optional: x and y are metres in this projection of WGS 84, so the
+   * design can be exported as GeoJSON longitude/latitude (project-format.md, "Georeference")
+   */
+  georeference: z
+    .strictObject({
+      /** a proj4 definition, such as the local transverse Mercator an import made */
+      proj4: z.string().min(1, { error: 'must be a proj4 definition' }).max(400),
+    })
+    .optional(),
 });
 
 export type Project = z.output<typeof projectShape>;

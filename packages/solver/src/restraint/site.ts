@@ -2,6 +2,7 @@ import { STANDARD_GRAVITY } from '../units/quantities.js';
 import type { Leg } from '../network/legs.js';
 import type { Project, ProjectNode, Soil } from '../model/projectSchema.js';
 import { REGISTER } from '../provenance/register.js';
+import { nodeCover, nodeGround } from '../model/groundLevel.js';
 
 /** Clear width each side of the pipe assumed for the trench when the design gives none, m (common practice). */
 export const TRENCH_CLEARANCE = REGISTER['trench.clearance'].value;
@@ -39,12 +40,12 @@ export function fittingSite(project: Project, node: ProjectNode, legs: readonly 
   for (const l of legs) od = Math.max(od, l.pipe.outsideDiameter);
   const soil = nodeSoil(project, node);
   const gw = project.design.groundwaterElevation;
-  const ground = node.elevation + od / 2 + node.cover;
+  const ground = nodeGround(node, od);
   return {
     soil,
     soilName: soil.label ?? soil.id,
     od,
-    cover: node.cover,
+    cover: nodeCover(node, od),
     invert: node.elevation - od / 2,
     groundwater: gw,
     waterDepth: gw === null ? null : Math.max(0, ground - gw),

@@ -46,6 +46,10 @@ function block(b: ScheduleBlock | null): ScheduleBlock | null {
       direction: vec(b.direction, 'unit'),
       passiveResistance: r(b.passiveResistance, 'force'),
       passiveRatio: r(b.passiveRatio, 'ratio'),
+      shapeFactor: r(b.shapeFactor, 'ratio'),
+      governs: b.governs,
+      thrust: r(b.thrust, 'force'),
+      upwardThrust: r(b.upwardThrust, 'force'),
     }
   );
 }
@@ -96,8 +100,13 @@ function fitting(f: ScheduleFitting, echo: boolean) {
       reverseBlock: block(x.reverseBlock),
       anchor: x.anchor && {
         concreteVolume: up(x.anchor.concreteVolume, 'volume'),
+        length: up(x.anchor.length, 'length'),
+        width: up(x.anchor.width, 'length'),
+        height: up(x.anchor.height, 'length'),
         side: up(x.anchor.side, 'length'),
         submerged: x.anchor.submerged,
+        upwardThrust: r(x.anchor.upwardThrust, 'force'),
+        horizontalThrust: r(x.anchor.horizontalThrust, 'force'),
       },
       trenchBottom: x.trenchBottom && {
         bearingArea: r(x.trenchBottom.bearingArea, 'area'),

@@ -1,0 +1,107 @@
+import { describe, it, expect } from 'vitest';
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { Geodesic } from 'geographiclib-geodesic';
+import { runExchange } from './exchange.js';
+import { readLimited } from './readLimited.js';
+import { parseProjectText } from '../model/parseProject.js';
+import { analyse } from '../analysis/analyse.js';
+
+const fixture = fileURLToPath(new URL('../../../../e2e/fixtures/quarry-hill-road.geojson', import.meta.url));
+const dir = mkdtempSync(join(tmpdir(), 'mainbrace-exchange-'));
+
+async function cli(...argv: string[]) {
+  let stdout = '';
+  let stderr = '';
+  const status = await runExchange(argv, {
+    readFile: readLimited,
+    out: (t) => (stdout += t),
+    err: (t) => (stderr += t),
+  });
+  return { status, stdout, stderr };
+}
+
+describe('mainbrace import and export', () => {
+  it('imports a GeoJSON route into a valid project whose bends are the geodesic bends (0.1°)', async () => {
+    const r = await cli('import', fixture);
+    expect(r.status).toBe(0);
+    const parsed = parseProjectText(r.stdout);
+    if (!parsed.ok) throw new Error('not a valid project');
+    expect(parsed.project.name).toBe('quarry-hill-road');
+    // The fixture's second vertex: GeographicLib (Karney 2013) azimuths arriving and leaving.
+    const arrive = Geodesic.WGS84.Inverse(47.4, 8.5, 47.4012, 8.5031).azi2!;
+    const leave = Geodesic.WGS84.Inverse(47.4012, 8.5031, 47.4015, 8.5072).azi1!;
+    const bend = analyse(parsed.project).byNode.get('n2')!;
+    expect(Math.abs(bend.geometry.horizontalDeflection! - Math.abs(leave - arrive))).toBeLessThan(0.1);
+    expect(parsed.project.pipes[0]).toMatchObject({ series: 'di-en545', nominal: 'DN250' });
+  });
+
+  it('imports a CSV survey with the columns named on the command line, in feet', async () => {
+    const csv = join(dir, 'survey.csv');
+    writeFileSync(csv, 'Station,Eastings,Northings,Grade\nA,0,0,200\nB,300,0,198\nC,300,200,197\n');
+    const r = await cli(
+      'import',
+      csv,
+      '--easting',
+      'Eastings',
+      '--northing',
+      'Northings',
+      '--level',
+      'Grade',
+      '--unit',
+      'ft',
+      '--cover',
+      '4',
+    );
+    expect(r.status).toBe(0);
+    const parsed = parseProjectText(r.stdout);
+    if (!parsed.ok) throw new Error('not a valid project');
+    // 200 ft = 60.96 m ground; 4 ft = 1.2192 m cover; AWWA 8 in OD 9.05 in = 0.22987 m (default US pipe).
+    const n1 = parsed.project.nodes[0]!;
+    expect(n1.groundLevel).toBeCloseTo(60.96, 9);
+    expect(n1.elevation).toBeCloseTo(60.96 - 1.2192 - 0.22987 / 2, 6);
+  });
+
+  it('names the feature and the coordinate of a bad file, with exit status 2', async () => {
+    const bad = join(dir, 'bad.geojson');
+    writeFileSync(
+      bad,
+      JSON.stringify({
+        type: 'Feature',
+        properties: { name: 'Elm Lane' },
+        geometry: {
+          type: 'LineString',
+          coordinates: [
+            [8.5, 47.4],
+            [8.5, 'north'],
+          ],
+        },
+      }),
+    );
+    const r = await cli('import', bad);
+    expect(r.status).toBe(2);
+    expect(r.stdout).toBe('');
+    expect(r.stderr).toContain(
+      'error: the feature "Elm Lane", coordinates[1] [8.5, "north"]: latitude must be a number',
+    );
+  });
+
+  it('exports an imported project as GeoJSON, and refuses one without a georeference', async () => {
+    const imported = await cli('import', fixture);
+    const file = join(dir, 'qh.json');
+    writeFileSync(file, imported.stdout);
+    const r = await cli('export', file);
+    expect(r.status).toBe(0);
+    const fc = JSON.parse(r.stdout) as { features: { properties: { layer: string } }[] };
+    const layers = new Set(fc.features.map((f) => f.properties.layer));
+    expect([...layers].sort()).toEqual(['fitting', 'pipe', 'thrust-block']);
+    const plain = JSON.parse(imported.stdout) as Record<string, unknown>;
+    delete plain.georeference;
+    writeFileSync(file, JSON.stringify(plain));
+    const e = await cli('export', file);
+    expect(e.status).toBe(2);
+    expect(e.stderr).toMatch(/no georeference/);
+  });
+});

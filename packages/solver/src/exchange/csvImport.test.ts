@@ -1,0 +1,69 @@
+import { describe, it, expect } from 'vitest';
+import { importCsv } from './routeProject.js';
+import { guessMapping, readCsvTable } from './csvSurvey.js';
+import { noteText } from './importNotes.js';
+import { nodeCover } from '../model/groundLevel.js';
+import { analyse } from '../analysis/analyse.js';
+
+// An invented survey along "Tanner's Row": chainage points with ground levels (reduced levels, m).
+const SURVEY = `Pt,East (m),North (m),RL ground
+1,1000.000,5000.000,52.40
+2,1060.000,5000.000,52.10
+3,1060.000,5045.000,51.35
+4,1110.000,5095.000,50.90
+`;
+const MAPPING = { easting: 'East (m)', northing: 'North (m)', level: 'RL ground' };
+
+describe('a CSV survey', () => {
+  it('gives nodes at the surveyed ground levels with the pipe at the stated cover', () => {
+    const r = importCsv(SURVEY, MAPPING, 'm', { cover: 1.2 });
+    if (!r.ok) throw new Error(r.notes.map(noteText).join('\n'));
+    const grounds = [52.4, 52.1, 51.35, 50.9];
+    // Default pipe DN200 EN 545, OD 0.222 m: centreline = ground − 1.2 − 0.111 (hand calculation).
+    r.project.nodes.forEach((n, i) => {
+      expect(n.groundLevel).toBe(grounds[i]);
+      expect(n.elevation).toBeCloseTo(grounds[i]! - 1.311, 9);
+      expect(nodeCover(n, 0.222)).toBeCloseTo(1.2, 9);
+    });
+    // The survey's own coordinates are kept: a right-angle bend at point 2, a 45° bend at point 3.
+    expect(r.project.nodes[1]).toMatchObject({ x: 1060, y: 5000 });
+    const a = analyse(r.project);
+    expect(a.byNode.get('n2')!.geometry.horizontalDeflection).toBeCloseTo(90, 6);
+    expect(a.byNode.get('n3')!.geometry.horizontalDeflection).toBeCloseTo(45, 6);
+  });
+
+  it('reads feet and pipe levels: 100 ft = 30.48 m exactly (international foot)', () => {
+    const ft = 'E;N;IL\n0;0;100\n100;0;99\n';
+    const r = importCsv(ft, { easting: 'E', northing: 'N', level: 'IL' }, 'ft', { levels: 'pipe' });
+    if (!r.ok) throw new Error(r.notes.map(noteText).join('\n'));
+    expect(r.project.nodes[0]).toMatchObject({ elevation: 30.48, cover: 1.2 });
+    expect(r.project.nodes[1]!.x).toBeCloseTo(30.48, 9);
+    expect(r.project.nodes[0]!.groundLevel).toBeUndefined();
+    expect(r.project.units).toBe('us');
+  });
+
+  it('guesses usual header names for the dialog to start from', () => {
+    const t = readCsvTable(SURVEY);
+    if (!t.ok) throw new Error('not read');
+    expect(guessMapping(t.table.header)).toEqual({ easting: 'East (m)', northing: 'North (m)', level: 'RL ground' });
+    expect(guessMapping(['x', 'y', 'z', 'line'])).toEqual({ easting: 'x', northing: 'y', level: 'z', run: 'line' });
+  });
+
+  it('splits runs by a run column and joins a run starting on another as a tee', () => {
+    const csv = 'run,e,n\nmain,0,0\nmain,100,0\nmain,200,0\nspur,100,0\nspur,100,60\n';
+    const r = importCsv(csv, { easting: 'e', northing: 'n', run: 'run' }, 'm');
+    if (!r.ok) throw new Error(r.notes.map(noteText).join('\n'));
+    expect(r.project.nodes).toHaveLength(4);
+    expect(analyse(r.project).byNode.get('n2')!.geometry.kind).toBe('tee');
+  });
+
+  it('names the row and the column of a bad number, and a column the header lacks', () => {
+    const bad = SURVEY.replace('1060.000,5045.000', '1060.000,50x45');
+    const r = importCsv(bad, MAPPING, 'm');
+    expect(r.ok).toBe(false);
+    expect(r.notes.map(noteText)).toContain('error: row 4, column "North (m)": expected a number, got "50x45"');
+    const c = importCsv(SURVEY, { ...MAPPING, level: 'Height' }, 'm');
+    expect(c.ok).toBe(false);
+    expect(c.notes.map(noteText).join('\n')).toMatch(/no column "Height" for the level/);
+  });
+});
