@@ -260,7 +260,7 @@ function rescale(prev: Analysis, k: Kept, project: Project): Analysis {
     project,
     fittings,
     byNode: new Map(fittings.map((f) => [f.node.id, f])),
-    diagnostics: uniqueDiagnostics(inputs),
+    diagnostics: uniqueDiagnostics([...inputs, ...pipeRatingChecks(project)]),
   };
   kept.set(analysis, k);
   return analysis;
