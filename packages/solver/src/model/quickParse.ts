@@ -72,6 +72,7 @@ export const QUICK_FIELDS = {
     'nodes',
     'pipes',
     'georeference',
+    'underlay',
   ],
   georeference: ['proj4'],
   water: ['density'],
@@ -278,6 +279,8 @@ export function quickParse(data: unknown): Project | null {
     const o = data;
     only(o, QUICK_FIELDS.project);
     if (o.format !== 'mainbrace-project' || o.version !== 1) return null;
+    // A site-plan underlay (images, calibration) is the schema's to check: the solver never reads it.
+    if (o.underlay !== undefined) return null;
     const out: Rec = {
       format: 'mainbrace-project',
       version: 1,
