@@ -13,11 +13,31 @@ import type { Leg } from '../network/legs.js';
 export type RouteChange =
   { kind: 'same' } | { kind: 'cases' } | { kind: 'route'; dirty: Set<string>; cases: boolean } | { kind: 'all' };
 
+/** Fields compared one by one below, and those no result reads (the name, the display units). */
+const READ_APART: ReadonlySet<string> = new Set([
+  'format',
+  'version',
+  'name',
+  'units',
+  'water',
+  'design',
+  'soils',
+  'defaultSoil',
+  'loadCases',
+  'nodes',
+  'pipes',
+]);
+
 export function routeChange(
   before: Project,
   after: Project,
   legsBefore: ReadonlyMap<string, readonly Leg[]>,
 ): RouteChange {
+  // Any other field, including one added to the format later, may feed a result: recompute it all.
+  const a = before as unknown as Record<string, unknown>;
+  const b = after as unknown as Record<string, unknown>;
+  for (const k in a) if (!READ_APART.has(k) && a[k] !== b[k]) return { kind: 'all' };
+  for (const k in b) if (!READ_APART.has(k) && !(k in a) && b[k] !== undefined) return { kind: 'all' };
   if (before.water !== after.water || before.design !== after.design) return { kind: 'all' };
   if (before.soils !== after.soils || before.defaultSoil !== after.defaultSoil) return { kind: 'all' };
   const cases = before.loadCases !== after.loadCases;

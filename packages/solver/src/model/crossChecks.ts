@@ -98,7 +98,7 @@ export function overlappingPipes(p: Project, add: Add) {
 }
 
 /** A node with a ground level must have its pipe below it: the derived cover is not negative. */
-function pipeBelowGround(p: Project, add: Add) {
+export function pipeBelowGround(p: Project, add: Add) {
   if (!p.nodes.some((n) => n.groundLevel !== undefined)) return;
   const od = nodeOutsideDiameters(p);
   p.nodes.forEach((n, i) => {
@@ -116,6 +116,10 @@ function pipeBelowGround(p: Project, add: Add) {
 /** Checks that span several fields: unique ids, references that resolve, sane pipes. */
 export function crossCheck(p: Project, ctx: Ctx): void {
   referenceChecks(p, ctx);
+  const add: Add = (path, message) => ctx.addIssue({ code: 'custom', path, message });
+  pipeBelowGround(p, add);
+  coincidentNodes(p, add);
+  overlappingPipes(p, add);
 }
 
 /** Unique ids, references that resolve, pipes joining two distinct points with ID below OD. */
@@ -179,10 +183,6 @@ export function referenceChecks(p: Project, ctx: Pick<Ctx, 'addIssue'>): void {
       });
     }
   });
-  const add: Add = (path, message) => ctx.addIssue({ code: 'custom', path, message });
-  pipeBelowGround(p, add);
-  coincidentNodes(p, add);
-  overlappingPipes(p, add);
 }
 
 /**

@@ -187,5 +187,7 @@ describe('the hand check of a project file agrees with the schema (fixtures and 
     expect([...QUICK_FIELDS.soil].sort()).toEqual(keys(soilSchema));
     expect([...QUICK_FIELDS.node].sort()).toEqual(keys(nodeSchema));
     expect([...QUICK_FIELDS.pipe].sort()).toEqual(keys(pipeSchema));
+    const georeference = projectShape.shape.georeference.unwrap();
+    expect([...QUICK_FIELDS.georeference].sort()).toEqual(keys(georeference));
   });
 });

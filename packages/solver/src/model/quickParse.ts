@@ -1,7 +1,7 @@
 import { REGISTER } from '../provenance/register.js';
 import { LIMITS, type LimitId } from './limits.js';
 import type { Project } from './projectSchema.js';
-import { MIN_PIPE_LENGTH, overlappingPipes, referenceChecks } from './crossChecks.js';
+import { MIN_PIPE_LENGTH, overlappingPipes, pipeBelowGround, referenceChecks } from './crossChecks.js';
 import { SMALLEST_VALUE } from './tinyNumbers.js';
 
 /**
@@ -71,7 +71,10 @@ export const QUICK_FIELDS = {
     'defaultSoil',
     'nodes',
     'pipes',
+    'georeference',
+    'underlay',
   ],
+  georeference: ['proj4'],
   water: ['density'],
   design: [
     'thrustArea',
@@ -100,7 +103,7 @@ export const QUICK_FIELDS = {
     'pipeAdhesionRatio',
     'source',
   ],
-  node: ['id', 'x', 'y', 'elevation', 'cover', 'soil', 'end', 'valve', 'restraint', 'label'],
+  node: ['id', 'x', 'y', 'elevation', 'cover', 'groundLevel', 'soil', 'end', 'valve', 'restraint', 'label'],
   pipe: [
     'id',
     'from',
@@ -207,6 +210,7 @@ function node(v: unknown): Project['nodes'][number] {
     elevation: num(o.elevation, 'elevation'),
     cover: o.cover === undefined ? 1.2 : num(o.cover, 'cover'),
   };
+  opt(out, o, 'groundLevel', (x) => num(x, 'elevation'));
   opt(out, o, 'soil', id);
   out.end = o.end === undefined ? 'cap' : oneOf(o.end, ['cap', 'tie-in'] as const);
   out.valve = o.valve === undefined ? false : typeof o.valve === 'boolean' ? o.valve : no();
@@ -275,6 +279,8 @@ export function quickParse(data: unknown): Project | null {
     const o = data;
     only(o, QUICK_FIELDS.project);
     if (o.format !== 'mainbrace-project' || o.version !== 1) return null;
+    // A site-plan underlay (images, calibration) is the schema's to check: the solver never reads it.
+    if (o.underlay !== undefined) return null;
     const out: Rec = {
       format: 'mainbrace-project',
       version: 1,
@@ -288,12 +294,18 @@ export function quickParse(data: unknown): Project | null {
     opt(out, o, 'defaultSoil', id);
     out.nodes = o.nodes === undefined ? [] : list(o.nodes, 0, node);
     out.pipes = o.pipes === undefined ? [] : list(o.pipes, 0, pipe);
+    opt(out, o, 'georeference', (x) => {
+      if (!isObject(x)) no();
+      only(x as Rec, QUICK_FIELDS.georeference);
+      return { proj4: str((x as Rec).proj4, 1, 400) };
+    });
     const project = out as Project;
     let problem = false;
     const flag = () => {
       problem = true;
     };
     referenceChecks(project, { addIssue: flag });
+    if (!problem) pipeBelowGround(project, flag);
     if (!problem && mayCoincide(project)) return null;
     if (!problem) overlappingPipes(project, flag);
     return problem ? null : project;

@@ -473,6 +473,17 @@ export const provenance = (id: ProvenanceId): ProvenanceEntry => REGISTER[id];
 
 /** The entries among `ids` that were not read in their source, in register order. */
 export function unverified(ids: Iterable<ProvenanceId>): ProvenanceId[] {
-  const wanted = new Set(ids);
-  return (Object.keys(REGISTER) as ProvenanceId[]).filter((id) => wanted.has(id) && !REGISTER[id].verified);
+  const list = [...ids];
+  if (list.length === 0) return [];
+  // A schedule asks this for every fitting, and fittings share a handful of bases: remember each.
+  const key = list.join('\u0000');
+  let found = unverifiedOf.get(key);
+  if (!found) {
+    const wanted = new Set(list);
+    found = (Object.keys(REGISTER) as ProvenanceId[]).filter((id) => wanted.has(id) && !REGISTER[id].verified);
+    unverifiedOf.set(key, found);
+  }
+  return found.slice();
 }
+
+const unverifiedOf = new Map<string, ProvenanceId[]>();

@@ -18,6 +18,7 @@ import { diagnostic, uniqueDiagnostics, type Diagnostic } from '../../src/diagno
 import type { ProvenanceId } from '../../src/provenance/register.js';
 import type { CalcStep } from '../../src/analysis/calcRecord.js';
 import { implausibleInputs } from '../../src/model/plausibility.js';
+import { pipeRatingChecks } from '../../src/pressure/pipeRating.js';
 
 /** Everything computed for one fitting; the schedule, the plan and the record all read this. */
 export interface FittingAnalysis {
@@ -155,7 +156,7 @@ export function analyseProject(project: Project): Analysis {
     runOf: layout.runOf,
     chainage: layout.chainage,
     marks,
-    diagnostics: uniqueDiagnostics(inputs),
+    diagnostics: uniqueDiagnostics([...inputs, ...pipeRatingChecks(project)]),
   };
 }
 
