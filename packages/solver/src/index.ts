@@ -48,7 +48,7 @@ export {
   type SoilTable,
 } from './restraint/soilLibrary.js';
 export { rankinePassiveCoefficient, passiveResistance } from './restraint/passiveResistance.js';
-export { scheduleOf, type Schedule, type ScheduleFitting } from './schedule/scheduleRows.js';
+export { fittingProfile, scheduleOf, type Schedule, type ScheduleFitting } from './schedule/scheduleRows.js';
 export { scheduleCsv } from './schedule/scheduleCsv.js';
 export { scheduleTable } from './schedule/scheduleTable.js';
 export { scheduleJson, diagnosticJson, JSON_DECIMALS } from './schedule/scheduleJson.js';
@@ -104,5 +104,16 @@ export {
   findBedding,
   type Bedding,
 } from './catalog/layingConditions.js';
-export type { PipeSeries, PipeSize } from './catalog/pipeSeries.js';
+export type { PipeSeries, PipeSize, PressureRating } from './catalog/pipeSeries.js';
+export { pipeRating, pipeRatingChecks, caseLimit } from './pressure/pipeRating.js';
+export {
+  surgeEstimate,
+  waveSpeed,
+  pipeWaveSpeed,
+  joukowsky,
+  supportFactor,
+  PIPE_ELASTICITY,
+  type SurgeEstimate,
+  type PipeSurge,
+} from './pressure/surge.js';
 export { proposeTestPressure, type TestProposal, type TestRule, type TestCriterion } from './pressure/testPressure.js';
