@@ -7,19 +7,19 @@ import { DetailsPanel } from './panels/DetailsPanel.js';
 import { Drawer } from './panels/Drawer.js';
 import { PrintSheet } from './print/PrintSheet.js';
 import { KeptCopiesDialog } from './chrome/KeptCopiesDialog.js';
-import { useActions } from './state/StoreContext.js';
-import { openProjectFile } from './files/projectFile.js';
+import { useFileOpening } from './files/useFileOpening.js';
+import { ImportDialog } from './chrome/ImportDialog.js';
 
 /** One window: top bar, tool strip, plan, details panel, and the drawer of route-wide views. */
 export function App() {
-  const actions = useActions();
+  const opening = useFileOpening();
   const [dropping, setDropping] = useState(false);
   const [printing, setPrinting] = useState(false);
   const onDrop = async (e: React.DragEvent) => {
     e.preventDefault();
     setDropping(false);
     const file = e.dataTransfer.files[0];
-    if (file) await openProjectFile(file, actions);
+    if (file) await opening.open(file);
   };
   return (
     <div
@@ -33,7 +33,7 @@ export function App() {
       onDragLeave={() => setDropping(false)}
       onDrop={onDrop}
     >
-      <TopBar onPrint={() => setPrinting(true)} />
+      <TopBar onPrint={() => setPrinting(true)} onOpen={opening.open} />
       <NoticeBar />
       <main className="workspace">
         <ToolStrip />
@@ -43,6 +43,9 @@ export function App() {
       <Drawer />
       {printing && <PrintSheet onClose={() => setPrinting(false)} />}
       <KeptCopiesDialog />
+      {opening.pending && (
+        <ImportDialog pending={opening.pending} onImport={opening.confirm} onCancel={opening.cancel} />
+      )}
     </div>
   );
 }

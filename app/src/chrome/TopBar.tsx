@@ -1,7 +1,6 @@
 import { useEffect, useRef, useState } from 'react';
 import { useStore } from 'zustand';
 import { useActions, useApp, useAppStore } from '../state/StoreContext.js';
-import { openProjectFile } from '../files/projectFile.js';
 import { ACTIONS, titleOf, type ActionName } from './actionTable.js';
 import { registerCommandUi, runCommand } from './appCommands.js';
 import { ExportMenu } from './ExportMenu.js';
@@ -12,7 +11,7 @@ import { KeptCopiesButton } from './KeptCopiesDialog.js';
 const FILE_WORD: Partial<Record<ActionName, string>> = { new: 'New', open: 'Open…', save: 'Save' };
 
 /** Product name, project name, file actions, units, the case shown, and the caution. */
-export function TopBar({ onPrint }: { onPrint: () => void }) {
+export function TopBar({ onPrint, onOpen }: { onPrint: () => void; onOpen: (file: File) => Promise<void> }) {
   const store = useAppStore();
   const actions = useActions();
   const name = useApp((s) => s.project.name);
@@ -25,7 +24,7 @@ export function TopBar({ onPrint }: { onPrint: () => void }) {
   const fileInput = useRef<HTMLInputElement>(null);
 
   const open = async (file: File | undefined) => {
-    if (file) await openProjectFile(file, actions);
+    if (file) await onOpen(file);
   };
   useEffect(() => registerCommandUi({ pickFile: () => fileInput.current?.click(), print: onPrint }), [onPrint]);
   const command = (name: ActionName) => runCommand(name, store, actions);
@@ -63,7 +62,7 @@ export function TopBar({ onPrint }: { onPrint: () => void }) {
         <input
           ref={fileInput}
           type="file"
-          accept=".json,application/json"
+          accept=".json,application/json,.geojson,application/geo+json,.csv,text/csv,.txt"
           hidden
           data-testid="open-file"
           onChange={(e) => {

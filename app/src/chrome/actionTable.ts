@@ -28,6 +28,7 @@ export type ActionName =
   | 'save'
   | 'exportCsv'
   | 'exportJson'
+  | 'exportGeoJson'
   | 'print'
   | 'undo'
   | 'redo'
@@ -54,6 +55,14 @@ export const ACTIONS: readonly ActionSpec[] = [
   { name: 'save', label: 'Save the project file', keys: ['Mod+S'], undo: 'none', scope: 'window', menu: 'file' },
   { name: 'exportCsv', label: 'Schedule as CSV', keys: [], undo: 'none', scope: 'window', menu: 'export' },
   { name: 'exportJson', label: 'Schedule as JSON', keys: [], undo: 'none', scope: 'window', menu: 'export' },
+  {
+    name: 'exportGeoJson',
+    label: 'Design as GeoJSON (for a GIS)',
+    keys: [],
+    undo: 'none',
+    scope: 'window',
+    menu: 'export',
+  },
   { name: 'print', label: 'Print the schedule…', keys: [], undo: 'none', scope: 'window', menu: 'export' },
   { name: 'undo', label: 'Undo', keys: ['Mod+Z'], undo: 'none', scope: 'window' },
   { name: 'redo', label: 'Redo', keys: ['Mod+Shift+Z', 'Mod+Y'], undo: 'none', scope: 'window' },

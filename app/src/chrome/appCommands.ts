@@ -1,3 +1,4 @@
+import { loadExchange } from '../files/routeImport.js';
 import { savedDocument } from '../state/savedDocument.js';
 import type { AppStore } from '../state/store.js';
 import type { Actions } from '../state/actions.js';
@@ -51,6 +52,15 @@ function startNew(store: AppStore, actions: Actions) {
   });
 }
 
+/** The design as GeoJSON for a GIS, with the projection library loaded only now. */
+async function exportGeoJson(store: AppStore, actions: Actions) {
+  const project = store.getState().project;
+  const ex = await loadExchange();
+  const r = ex.designGeoJson(project);
+  if (r.ok) download(`${fileStem(project)}.geojson`, r.text, 'application/geo+json');
+  else actions.notify({ tone: 'error', title: 'The design was not exported as GeoJSON', lines: [r.message] });
+}
+
 /** Carries out a window command (the plan's own commands are the dispatcher's). */
 export function runCommand(name: ActionName, store: AppStore, actions: Actions) {
   const project = () => store.getState().project;
@@ -76,6 +86,8 @@ export function runCommand(name: ActionName, store: AppStore, actions: Actions) 
       );
     case 'exportJson':
       return download(`${fileStem(project())}-schedule.json`, scheduleJsonText(project()), 'application/json');
+    case 'exportGeoJson':
+      return void exportGeoJson(store, actions);
     case 'print':
       return ui.print?.();
     default:
