@@ -1,12 +1,4 @@
-import {
-  parseProject,
-  type LoadCase,
-  type Pipe,
-  type Project,
-  type ProjectNode,
-  type Soil,
-  type Underlay,
-} from '@mainbrace/solver';
+import { type LoadCase, type Pipe, type Project, type ProjectNode, type Soil, type Underlay } from '@mainbrace/solver';
 import type { AppState, AppStore, CaseView, DrawerTab, Selection, ToolName } from './store.js';
 import { EMPTY_SELECTION } from './store.js';
 import {
