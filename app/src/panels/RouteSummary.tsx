@@ -1,3 +1,4 @@
+import { useMemo } from 'react';
 import { norm, restraintConcrete } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
 import { show } from '../format/quantity.js';
@@ -8,16 +9,23 @@ import { largestThrusts, networkLength } from './routeFigures.js';
 
 /** With nothing selected: the route in numbers, the largest thrusts, and how to begin. */
 export function RouteSummary() {
-  const project = useApp((s) => s.project);
   const analysis = useAnalysis();
+  // The analysed document: the same object after an edit of the name, so a keystroke there on a
+  // 10,000-node route recomputes none of the figures below.
+  const project = analysis.project;
   const actions = useActions();
   const u = useApp((s) => s.units);
-  const length = networkLength(analysis);
-  const concrete = analysis.fittings.reduce((v, f) => v + restraintConcrete(f.restraint), 0);
-  const ranked = largestThrusts(analysis, 6);
+  const { length, concrete, ranked, pieces, warned } = useMemo(
+    () => ({
+      length: networkLength(analysis),
+      concrete: analysis.fittings.reduce((v, f) => v + restraintConcrete(f.restraint), 0),
+      ranked: largestThrusts(analysis, 6),
+      pieces: routePieces(analysis.project).length,
+      warned: analysis.fittings.filter((f) => f.diagnostics.some((d) => d.severity !== 'info')).length,
+    }),
+    [analysis],
+  );
   const words = useDiagnosticWords();
-  const pieces = routePieces(project).length;
-  const warned = analysis.fittings.filter((f) => f.diagnostics.some((d) => d.severity !== 'info')).length;
   return (
     <section className="inputs">
       <h3>Route</h3>

@@ -13,7 +13,8 @@ const BUCKET = 64;
  * stays inside the canvas, so crowded places show fewer labels instead of unreadable ones.
  */
 export class LabelSpace {
-  private readonly buckets = new Map<string, Rect[]>();
+  /** rectangles by bucket, keyed i·65536 + j (numbers, not strings: 10,000 marks probe this) */
+  private readonly buckets = new Map<number, Rect[]>();
 
   constructor(
     readonly width: number,
@@ -27,10 +28,11 @@ export class LabelSpace {
     return c;
   }
 
-  private keys(r: Rect): string[] {
-    const out: string[] = [];
+  /** Bucket keys of a rectangle inside the canvas (fits() refuses anything outside before asking). */
+  private keys(r: Rect): number[] {
+    const out: number[] = [];
     for (let i = Math.floor(r.x / BUCKET); i <= Math.floor((r.x + r.w) / BUCKET); i++) {
-      for (let j = Math.floor(r.y / BUCKET); j <= Math.floor((r.y + r.h) / BUCKET); j++) out.push(`${i},${j}`);
+      for (let j = Math.floor(r.y / BUCKET); j <= Math.floor((r.y + r.h) / BUCKET); j++) out.push(i * 65536 + j);
     }
     return out;
   }

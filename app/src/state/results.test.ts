@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { analyseProject, nearestSize } from '@mainbrace/solver';
 import { resultsOf, sameResultInputs } from './results.js';
 import { project } from '../testFixtures.js';
 
@@ -35,5 +36,33 @@ describe('results from the result inputs only', () => {
     const ratio = Math.hypot(...bend(b)) / Math.hypot(...bend(a));
     expect(ratio).toBeGreaterThan(1.9);
     expect(sameResultInputs(p, { ...p, design: { ...p.design } })).toBe(false);
+  });
+
+  // Invariant: the results after any edit equal a whole analysis of the edited document (here a pipe
+  // pressed past its rating by a load-case edit must be reported).
+  it('reports what a whole analysis reports after a pipe edit and then a pressure edit', () => {
+    const p = doc();
+    resultsOf(p);
+    const size = nearestSize('pvcu-iso1452-pn10', p.pipes[0]!.outsideDiameter);
+    const pvc = {
+      ...p,
+      pipes: p.pipes.map((x, i) =>
+        i === 0 && size
+          ? {
+              ...x,
+              material: 'pvc' as const,
+              series: 'pvcu-iso1452-pn10',
+              nominal: size.nominal,
+              outsideDiameter: size.outsideDiameter,
+              insideDiameter: size.insideDiameter,
+            }
+          : x,
+      ),
+    };
+    resultsOf(pvc);
+    const pressed = { ...pvc, loadCases: pvc.loadCases.map((c) => ({ ...c, pressure: 1.4e6 })) };
+    const codes = (a: { diagnostics: { code: string }[] }) => a.diagnostics.map((d) => d.code).sort();
+    expect(codes(analyseProject(pressed)).some((c) => c.startsWith('pipe.over-'))).toBe(true);
+    expect(codes(resultsOf(pressed))).toEqual(codes(analyseProject(pressed)));
   });
 });
