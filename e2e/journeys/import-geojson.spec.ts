@@ -64,7 +64,10 @@ test('a GeoJSON route opened in the app becomes a connected project whose bends 
 
   // Back out to a GIS: the design as GeoJSON, the first point where the file had it.
   await page.getByRole('button', { name: 'Export ▾' }).click();
-  const [download] = await Promise.all([page.waitForEvent('download'), page.getByTestId('export-geojson').click()]);
+  const [download] = await Promise.all([
+    page.waitForEvent('download'),
+    page.getByRole('menuitem', { name: 'Design as GeoJSON (for a GIS)' }).click(),
+  ]);
   const out = JSON.parse(readFileSync((await download.path())!, 'utf8')) as {
     features: { geometry: { coordinates: number[][] }; properties: { layer: string } }[];
   };

@@ -1,39 +1,33 @@
-import { fitView } from '../state/viewport.js';
 import { useActions, useApp, useAppStore } from '../state/StoreContext.js';
 import type { ToolName } from '../state/store.js';
+import { actionSpec, titleOf, type ActionName } from './actionTable.js';
+import { sendPlanEvent } from '../tools/planBridge.js';
 
-const TOOLS: { tool: ToolName; label: string; key: string; icon: string }[] = [
+const TOOLS: { tool: ToolName; action: ActionName; icon: string }[] = [
   {
     tool: 'select',
-    label: 'Select and move — drag empty ground to pan, Shift-drag to box-select',
-    key: 'V',
+    action: 'toolSelect',
     icon: 'M5 3 L5 19 L9.5 14.5 L12.5 21 L15 20 L12 13.5 L18 13.5 Z',
   },
   {
     tool: 'draw',
-    label: 'Draw main',
-    key: 'D',
+    action: 'toolDraw',
     icon: 'M3 19 L9 19 L15 9 L21 9 M9 19 m-2 0 a2 2 0 1 0 4 0 a2 2 0 1 0 -4 0 M15 9 m-2 0 a2 2 0 1 0 4 0 a2 2 0 1 0 -4 0',
   },
   {
     tool: 'pan',
-    label: 'Pan',
-    key: 'H',
+    action: 'toolPan',
     icon: 'M12 2 L12 22 M2 12 L22 12 M12 2 l-3 3 M12 2 l3 3 M12 22 l-3 -3 M12 22 l3 -3 M2 12 l3 -3 M2 12 l3 3 M22 12 l-3 -3 M22 12 l-3 3',
   },
 ];
 
-/** The tools along the plan's edge; each tooltip names its shortcut. */
+/** The tools along the plan's edge, from the action table; each tooltip names its shortcut. */
 export function ToolStrip() {
   const tool = useApp((s) => s.tool);
   const snapping = useApp((s) => s.snapping);
   const actions = useActions();
   const store = useAppStore();
-  const fit = () => {
-    const el = document.querySelector('[data-testid="plan"]');
-    const s = store.getState();
-    actions.setViewport(fitView(s.project.nodes, el?.clientWidth ?? 800, el?.clientHeight ?? 500));
-  };
+  const give = (name: ActionName) => sendPlanEvent(store, actions, { type: 'command', name });
   return (
     <div className="toolstrip" role="toolbar" aria-label="Tools" aria-orientation="vertical">
       {TOOLS.map((t) => (
@@ -41,9 +35,9 @@ export function ToolStrip() {
           key={t.tool}
           className={tool === t.tool ? 'on' : ''}
           aria-pressed={tool === t.tool}
-          title={`${t.label} (${t.key})`}
-          aria-label={t.label}
-          onClick={() => actions.setTool(t.tool)}
+          title={titleOf(t.action)}
+          aria-label={actionSpec(t.action).label}
+          onClick={() => give(t.action)}
           data-testid={`tool-${t.tool}`}
         >
           <svg width="22" height="22" viewBox="0 0 24 24" aria-hidden="true">
@@ -59,7 +53,7 @@ export function ToolStrip() {
         </button>
       ))}
       <hr />
-      <button title="Fit the route to the view (F)" aria-label="Fit to view" onClick={fit} data-testid="tool-fit">
+      <button title={titleOf('fit')} aria-label="Fit to view" onClick={() => give('fit')} data-testid="tool-fit">
         <svg width="22" height="22" viewBox="0 0 24 24" aria-hidden="true">
           <path
             d="M3 8 V3 H8 M16 3 H21 V8 M21 16 V21 H16 M8 21 H3 V16"
@@ -72,9 +66,9 @@ export function ToolStrip() {
       <button
         className={snapping ? 'on' : ''}
         aria-pressed={snapping}
-        title="Snap to standard bends and whole lengths (S)"
+        title={titleOf('toggleSnapping')}
         aria-label="Snapping"
-        onClick={actions.toggleSnapping}
+        onClick={() => give('toggleSnapping')}
         data-testid="tool-snap"
       >
         <svg width="22" height="22" viewBox="0 0 24 24" aria-hidden="true">

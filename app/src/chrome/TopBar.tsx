@@ -1,12 +1,14 @@
-import { savedDocument } from '../state/savedDocument.js';
-import { useRef, useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { useStore } from 'zustand';
 import { useActions, useApp, useAppStore } from '../state/StoreContext.js';
-import { download, fileStem, projectText, scheduleCsvText, scheduleJsonText } from '../files/projectFile.js';
-import { newProject } from '../files/newProject.js';
-import { loadExchange } from '../files/routeImport.js';
+import { ACTIONS, titleOf, type ActionName } from './actionTable.js';
+import { registerCommandUi, runCommand } from './appCommands.js';
+import { ExportMenu } from './ExportMenu.js';
 import { CautionDialog } from './CautionDialog.js';
 import { KeptCopiesButton } from './KeptCopiesDialog.js';
+
+/** Short words for the file buttons; the table's labels are their tooltips. */
+const FILE_WORD: Partial<Record<ActionName, string>> = { new: 'New', open: 'Open…', save: 'Save' };
 
 /** Product name, project name, file actions, units, the case shown, and the caution. */
 export function TopBar({ onPrint, onOpen }: { onPrint: () => void; onOpen: (file: File) => Promise<void> }) {
@@ -19,19 +21,13 @@ export function TopBar({ onPrint, onOpen }: { onPrint: () => void; onOpen: (file
   const canUndo = useStore(store.temporal, (t) => t.pastStates.length > 0);
   const canRedo = useStore(store.temporal, (t) => t.futureStates.length > 0);
   const [cautionOpen, setCautionOpen] = useState(false);
-  const [exportOpen, setExportOpen] = useState(false);
   const fileInput = useRef<HTMLInputElement>(null);
 
   const open = async (file: File | undefined) => {
     if (file) await onOpen(file);
   };
-  const exportGeoJson = async () => {
-    const ex = await loadExchange();
-    const r = ex.designGeoJson(project());
-    if (r.ok) download(`${fileStem(project())}.geojson`, r.text, 'application/geo+json');
-    else actions.notify({ tone: 'error', title: 'The design was not exported as GeoJSON', lines: [r.message] });
-  };
-  const project = () => store.getState().project;
+  useEffect(() => registerCommandUi({ pickFile: () => fileInput.current?.click(), print: onPrint }), [onPrint]);
+  const command = (name: ActionName) => runCommand(name, store, actions);
   const caseValue = caseView.kind === 'envelope' ? '__envelope' : caseView.id;
 
   return (
@@ -58,18 +54,11 @@ export function TopBar({ onPrint, onOpen }: { onPrint: () => void; onOpen: (file
         onChange={(e) => actions.renameProject(e.target.value)}
       />
       <nav className="file-actions" aria-label="File">
-        <button
-          onClick={() => actions.replaceProject(newProject(project()))}
-          title="New project (keeps soils, cases and design settings)"
-        >
-          New
-        </button>
-        <button
-          onClick={() => fileInput.current?.click()}
-          title="Open a project file, or import a route: a CSV survey or a GeoJSON file (or drop one on the window)"
-        >
-          Open…
-        </button>
+        {ACTIONS.filter((x) => x.menu === 'file').map((x) => (
+          <button key={x.name} onClick={() => command(x.name)} title={titleOf(x.name)}>
+            {FILE_WORD[x.name] ?? x.label}
+          </button>
+        ))}
         <input
           ref={fileInput}
           type="file"
@@ -81,62 +70,14 @@ export function TopBar({ onPrint, onOpen }: { onPrint: () => void; onOpen: (file
             e.target.value = '';
           }}
         />
-        <button
-          onClick={() =>
-            download(`${fileStem(project())}.json`, projectText(savedDocument(store.getState())), 'application/json')
-          }
-          title="Save the project file (Ctrl+S)"
-        >
-          Save
-        </button>
-        <div className="menu">
-          <button aria-haspopup="menu" aria-expanded={exportOpen} onClick={() => setExportOpen(!exportOpen)}>
-            Export ▾
-          </button>
-          {exportOpen && (
-            <div className="menu-list" role="menu" onClick={() => setExportOpen(false)}>
-              <button
-                role="menuitem"
-                onClick={() =>
-                  download(
-                    `${fileStem(project())}-schedule.csv`,
-                    scheduleCsvText(project(), store.getState().units),
-                    'text/csv',
-                  )
-                }
-              >
-                Schedule as CSV
-              </button>
-              <button
-                role="menuitem"
-                onClick={() =>
-                  download(`${fileStem(project())}-schedule.json`, scheduleJsonText(project()), 'application/json')
-                }
-              >
-                Schedule as JSON
-              </button>
-              <button role="menuitem" onClick={() => void exportGeoJson()} data-testid="export-geojson">
-                Design as GeoJSON (for a GIS)
-              </button>
-              <button role="menuitem" onClick={onPrint}>
-                Print the schedule…
-              </button>
-            </div>
-          )}
-        </div>
+        <ExportMenu run={command} />
         <KeptCopiesButton />
       </nav>
       <div className="history" role="group" aria-label="History">
-        <button onClick={actions.undo} disabled={!canUndo} title="Undo (Ctrl+Z)" aria-label="Undo" data-testid="undo">
+        <button onClick={actions.undo} disabled={!canUndo} title={titleOf('undo')} aria-label="Undo" data-testid="undo">
           ↶
         </button>
-        <button
-          onClick={actions.redo}
-          disabled={!canRedo}
-          title="Redo (Ctrl+Shift+Z or Ctrl+Y)"
-          aria-label="Redo"
-          data-testid="redo"
-        >
+        <button onClick={actions.redo} disabled={!canRedo} title={titleOf('redo')} aria-label="Redo" data-testid="redo">
           ↷
         </button>
       </div>

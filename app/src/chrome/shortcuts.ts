@@ -1,9 +1,8 @@
-import { savedDocument } from '../state/savedDocument.js';
 import type { AppStore } from '../state/store.js';
 import type { Actions } from '../state/actions.js';
-import { drawStep } from '../tools/drawTool.js';
-import { fitView } from '../state/viewport.js';
-import { download, fileStem, projectText } from '../files/projectFile.js';
+import { sendPlanEvent } from '../tools/planBridge.js';
+import { runCommand } from './appCommands.js';
+import { actionForKey } from './actionTable.js';
 
 /** A field the user types into (a slider, box or button is not one: its undo is the app's). */
 const typing = (t: EventTarget | null) =>
@@ -11,76 +10,59 @@ const typing = (t: EventTarget | null) =>
   t instanceof HTMLTextAreaElement ||
   t instanceof HTMLSelectElement;
 
-/** Keyboard shortcuts of the whole window; keys typed into a field are left to the field. */
+/** Keys that act on a focused button or link (press it) and must be left to it. */
+const pressesControl = (e: KeyboardEvent) =>
+  (e.key === 'Enter' || e.key === ' ') &&
+  (e.target instanceof HTMLButtonElement ||
+    e.target instanceof HTMLAnchorElement ||
+    (e.target as HTMLElement)?.getAttribute?.('role') === 'row');
+
+/** Moves the keyboard to the details panel (Enter on a selected fitting). */
+export function focusDetails() {
+  const first = document.querySelector<HTMLElement>(
+    '[data-testid="details"] input, [data-testid="details"] select, [data-testid="details"] button',
+  );
+  (first ?? document.querySelector<HTMLElement>('[data-testid="details"]'))?.focus();
+}
+
+/**
+ * The window's keys, from the action table, through the plan's dispatcher. Keys typed into a field are
+ * left to the field, except Save.
+ */
 export function installShortcuts(store: AppStore, actions: Actions): () => void {
+  const handlers = {
+    command: (name: Parameters<typeof runCommand>[0]) => runCommand(name, store, actions),
+    openDetails: focusDetails,
+  };
   const onKey = (e: KeyboardEvent) => {
-    const mod = e.ctrlKey || e.metaKey;
-    if (mod && e.key.toLowerCase() === 'z' && !typing(e.target)) {
-      e.preventDefault();
-      if (e.shiftKey) actions.redo();
-      else actions.undo();
-      return;
-    }
-    if (mod && e.key.toLowerCase() === 'y' && !typing(e.target)) {
-      e.preventDefault();
-      actions.redo();
-      return;
-    }
-    if (mod && e.key.toLowerCase() === 's') {
-      e.preventDefault();
-      const p = savedDocument(store.getState());
-      download(`${fileStem(p)}.json`, projectText(p), 'application/json');
-      return;
-    }
-    if (mod || e.altKey || typing(e.target)) return;
-    const s = store.getState();
-    const drawing = s.tool === 'draw' && s.draw.phase === 'drawing';
-    const finishDraw = (type: 'finish' | 'cancel' | 'removeVertex') => {
-      const out = drawStep(s.draw, { type }, { snapping: s.snapping, lengthStep: 1, samePoint: 0 });
-      actions.setDraw(out.state);
-      if (out.commit) actions.addRun(out.commit.start, out.commit.vertices, out.commit.end);
-    };
-    switch (e.key) {
-      case 'Enter':
-        if (drawing) finishDraw('finish');
-        break;
-      case 'Escape':
-        if (drawing) finishDraw('cancel');
-        else actions.clearSelection();
-        break;
-      case 'Backspace':
-        if (drawing) {
-          e.preventDefault();
-          finishDraw('removeVertex');
-        } else actions.deleteSelection();
-        break;
-      case 'Delete':
-        actions.deleteSelection();
-        break;
-      case 'v':
-      case 'V':
-        actions.setTool('select');
-        break;
-      case 'd':
-      case 'D':
-        actions.setTool('draw');
-        break;
-      case 'h':
-      case 'H':
-        actions.setTool('pan');
-        break;
-      case 's':
-      case 'S':
-        actions.toggleSnapping();
-        break;
-      case 'f':
-      case 'F': {
-        const el = document.querySelector('[data-testid="plan"]');
-        actions.setViewport(fitView(s.project.nodes, el?.clientWidth ?? 800, el?.clientHeight ?? 500));
-        break;
-      }
-    }
+    const action = actionForKey({ key: e.key, shift: e.shiftKey, ctrl: e.ctrlKey, meta: e.metaKey, alt: e.altKey });
+    if (typing(e.target) && action?.name !== 'save') return;
+    if (pressesControl(e)) return;
+    const plan = document.querySelector('[data-testid="plan"]');
+    const out = sendPlanEvent(
+      store,
+      actions,
+      {
+        type: 'key',
+        key: e.key,
+        shift: e.shiftKey,
+        ctrl: e.ctrlKey,
+        meta: e.metaKey,
+        alt: e.altKey,
+        planFocused: plan !== null && document.activeElement === plan,
+      },
+      handlers,
+    );
+    if (out.handled && e.key !== ' ') e.preventDefault();
+    if (out.handled && e.key === ' ' && document.activeElement === plan) e.preventDefault();
+  };
+  const onKeyUp = (e: KeyboardEvent) => {
+    if (e.key === ' ') sendPlanEvent(store, actions, { type: 'keyUp', key: ' ' });
   };
   window.addEventListener('keydown', onKey);
-  return () => window.removeEventListener('keydown', onKey);
+  window.addEventListener('keyup', onKeyUp);
+  return () => {
+    window.removeEventListener('keydown', onKey);
+    window.removeEventListener('keyup', onKeyUp);
+  };
 }

@@ -2,7 +2,6 @@ import type { Project } from '@mainbrace/solver';
 import type { ColumnMapping, ImportResult, SurveyUnit } from '@mainbrace/solver/exchange';
 import { importOrReload } from '../chrome/loadChunk.js';
 import { MAX_FILE_BYTES } from './projectFile.js';
-import { newProject } from './newProject.js';
 
 /**
  * Routes from other programs: CSV surveys and GeoJSON routes (docs/routes.md). The CSV and projection
@@ -103,8 +102,7 @@ export async function prepareImport(
 /** Runs the import on the current project's cases, soils and design; the route is replaced. */
 export async function runImport(p: PendingImport, c: ImportChoices, current: Project): Promise<ImportResult> {
   const ex = await loadExchange();
-  const base = newProject(current);
-  const { nodes: _n, pipes: _p, georeference: _g, ...rest } = base;
+  const { nodes: _n, pipes: _p, georeference: _g, ...rest } = current;
   const options = {
     tolerance: c.tolerance,
     levels: c.levels,

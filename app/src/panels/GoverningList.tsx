@@ -31,7 +31,7 @@ export function GoverningList() {
       <ol>
         {largest.map((f) => (
           <li key={f.node.id}>
-            <button className="link" onClick={() => actions.selectNode(f.node.id)}>
+            <button className="link" onClick={() => actions.revealNode(f.node.id)}>
               {f.mark}
             </button>{' '}
             {show(norm(f.envelope.governing.total), 'force', u)}
@@ -42,7 +42,7 @@ export function GoverningList() {
       <ol>
         {tight.map((f) => (
           <li key={f.node.id}>
-            <button className="link" onClick={() => actions.selectNode(f.node.id)}>
+            <button className="link" onClick={() => actions.revealNode(f.node.id)}>
               {f.mark}
             </button>{' '}
             {f.restraint.block!.passiveRatio.toFixed(2)} × thrust

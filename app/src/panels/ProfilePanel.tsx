@@ -81,7 +81,7 @@ export function ProfilePanel() {
           Print the long section…
         </button>
       </div>
-      <LongSection data={data} analysis={analysis} units={u} onSelect={actions.selectNode} />
+      <LongSection data={data} analysis={analysis} units={u} onSelect={actions.revealNode} />
       <svg viewBox={`0 0 ${W} ${H2}`} role="img" aria-label="Pressure of every case along the main line">
         {ticks(p0, p1, pStep).map((p) => (
           <g key={`p${p}`}>

@@ -3,6 +3,7 @@ import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
 import { show } from '../format/quantity.js';
 import { KIND_NAME } from '../format/fittingNames.js';
 import { useDiagnosticWords } from '../format/words.js';
+import { routePieces } from '../state/connectivity.js';
 import { largestThrusts, networkLength } from './routeFigures.js';
 
 /** With nothing selected: the route in numbers, the largest thrusts, and how to begin. */
@@ -15,6 +16,7 @@ export function RouteSummary() {
   const concrete = analysis.fittings.reduce((v, f) => v + restraintConcrete(f.restraint), 0);
   const ranked = largestThrusts(analysis, 6);
   const words = useDiagnosticWords();
+  const pieces = routePieces(project).length;
   const warned = analysis.fittings.filter((f) => f.diagnostics.some((d) => d.severity !== 'info')).length;
   return (
     <section className="inputs">
@@ -36,6 +38,15 @@ export function RouteSummary() {
             <dt>Fittings with warnings</dt>
             <dd>{warned}</dd>
           </dl>
+          {pieces > 1 && (
+            <p className="warn-line" role="note" data-testid="pieces-warning">
+              <span className="legend-warn" aria-hidden="true">
+                !
+              </span>{' '}
+              The route is in {pieces} separate pieces, not one connected main: each is sized on its own, with a
+              dead-end block at every free end. Join them by drawing a run from one to the other.
+            </p>
+          )}
           {analysis.diagnostics.length > 0 && (
             <>
               <h4>Checks on the inputs</h4>
@@ -55,7 +66,7 @@ export function RouteSummary() {
           <ol className="ranked">
             {ranked.map((f) => (
               <li key={f.node.id}>
-                <button className="link" onClick={() => actions.selectNode(f.node.id)}>
+                <button className="link" onClick={() => actions.revealNode(f.node.id)}>
                   {f.mark}
                 </button>{' '}
                 {KIND_NAME[f.geometry.kind].toLowerCase()} — {show(norm(f.envelope.governing.total), 'force', u)}

@@ -1,29 +1,48 @@
 import { useCallback, useEffect, useMemo, useRef, useState, type PointerEvent as ReactPointerEvent } from 'react';
-import { Layer, Shape, Stage } from 'react-konva';
+// Konva's core entry and react-konva's core build: the plan draws with 2-D calls inside its own
+// shapes, so none of Konva's ready-made shapes, filters or animations are loaded (issue 16).
+import { Layer, Shape, Stage } from 'react-konva/lib/ReactKonvaCore.js';
 import type { Context } from 'konva/lib/Context';
+import type { Shape as KonvaShape } from 'konva/lib/Shape';
 import { FOOT } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp, useAppStore } from '../state/StoreContext.js';
-import { centreOn, fitView, panBy, toPlan, toScreen, zoomAt, type ScreenPoint } from '../state/viewport.js';
-import type { PlanPoint } from '../state/documentEdits.js';
+import { toPlan, type ScreenPoint } from '../state/viewport.js';
 import { dragScene, planScene } from './planScene.js';
-import { hitTest, inBox } from './hitTest.js';
 import { drawArrows, drawFittings, drawPipes, drawRestraints, placeTags } from './drawRoute.js';
 import { LabelSpace } from './labelSpace.js';
 import { drawRestrainedZones } from './drawZones.js';
 import { drawGrid } from './drawGrid.js';
-import { drawOverlay } from './drawOverlay.js';
-import { drawStep, type DrawContext } from '../tools/drawTool.js';
-import { selectStep, type SelectState } from '../tools/selectTool.js';
+import { drawHover, drawOverlay } from './drawOverlay.js';
 import { PlanOverlays } from './PlanOverlays.js';
+import { sendPlanEvent } from '../tools/planBridge.js';
+import type { PlanEvent, PointerKind } from '../tools/planInput.js';
+import { runCommand } from '../chrome/appCommands.js';
+import { focusDetails } from '../chrome/shortcuts.js';
+import { reuseEqualParts } from './sceneReuse.js';
+import type { Scene } from './planScene.js';
 
-const HIT_PX = 9;
-const native = (c: Context) => (c as unknown as { _context: CanvasRenderingContext2D })._context;
+/**
+ * The 2-D context a shape draws into, through Konva's public API: its layer's canvas element. Konva has
+ * already applied the pixel ratio and the shape's transform to that same context.
+ */
+const native = (shape: KonvaShape): CanvasRenderingContext2D =>
+  shape.getLayer()!.getNativeCanvasElement().getContext('2d')!;
 
-/** The plan: the route to scale on a grid, thrusts, restraints, and the drawing and selecting tools. */
+/** A scene builder that keeps the parts equal to the last scene's (see `reuseEqualParts`). */
+function sceneKeeper() {
+  let last: Scene | null = null;
+  return (next: Scene) => (last = reuseEqualParts(last, next));
+}
+
+const kindOf = (t: string): PointerKind => (t === 'touch' ? 'touch' : t === 'pen' ? 'pen' : 'mouse');
+
+/**
+ * The plan: the route to scale on a grid, thrusts and restraints. It only turns DOM events into plan
+ * events for the dispatcher (app/src/tools/dispatch.ts) and draws what the store holds.
+ */
 export function PlanView() {
   const store = useAppStore();
   const actions = useActions();
-  const project = useApp((s) => s.project);
   const units = useApp((s) => s.units);
   const viewport = useApp((s) => s.viewport);
   const caseView = useApp((s) => s.caseView);
@@ -32,240 +51,141 @@ export function PlanView() {
   const draw = useApp((s) => s.draw);
   const tool = useApp((s) => s.tool);
   const snapping = useApp((s) => s.snapping);
+  const size = useApp((s) => s.canvas);
+  const hover = useApp((s) => s.hover);
+  const selectBox = useApp((s) => s.selectBox);
+  const gesture = useApp((s) => s.gesture.kind);
   const analysis = useAnalysis();
+  // The drawn document: the store's in every result input (positions, pipes, restraint), and the same
+  // object after an edit of the name or the units, so such an edit redraws nothing.
+  const drawn = analysis.project;
   const box = useRef<HTMLDivElement>(null);
   const coords = useRef<HTMLSpanElement>(null);
-  const [size, setSize] = useState({ width: 800, height: 500 });
-  const [selectBox, setSelectBox] = useState<{ from: PlanPoint; to: PlanPoint } | null>(null);
-  const selectState = useRef<SelectState>({ phase: 'idle' });
-  const panning = useRef<{ last: ScreenPoint; start: ScreenPoint; clearOnClick: boolean } | null>(null);
-  const spaceDown = useRef(false);
-  const fitted = useRef(false);
+
+  const send = useCallback(
+    (e: PlanEvent) =>
+      sendPlanEvent(store, actions, e, {
+        command: (name) => runCommand(name, store, actions),
+        openDetails: focusDetails,
+      }),
+    [store, actions],
+  );
 
   useEffect(() => {
     const el = box.current;
     if (!el) return;
-    const ro = new ResizeObserver(() =>
-      setSize({ width: Math.max(50, el.clientWidth), height: Math.max(50, el.clientHeight) }),
-    );
+    const measure = () =>
+      send({ type: 'resize', width: Math.max(50, el.clientWidth), height: Math.max(50, el.clientHeight) });
+    const ro = new ResizeObserver(measure);
     ro.observe(el);
-    setSize({ width: Math.max(50, el.clientWidth), height: Math.max(50, el.clientHeight) });
+    measure();
     return () => ro.disconnect();
-  }, []);
-
-  useEffect(() => {
-    if (fitted.current || size.width <= 50) return;
-    fitted.current = true;
-    actions.setViewport(fitView(project.nodes, size.width, size.height));
-  }, [size, project.nodes, actions]);
-
-  useEffect(() => {
-    const down = (e: KeyboardEvent) => {
-      if (e.code === 'Space' && !(e.target instanceof HTMLInputElement)) spaceDown.current = true;
-    };
-    const up = (e: KeyboardEvent) => {
-      if (e.code === 'Space') spaceDown.current = false;
-    };
-    window.addEventListener('keydown', down);
-    window.addEventListener('keyup', up);
-    return () => {
-      window.removeEventListener('keydown', down);
-      window.removeEventListener('keyup', up);
-    };
-  }, []);
+  }, [send]);
 
   // While nodes are dragged the document is unchanged: the static layer leaves the dragged nodes and
   // their pipes out (and so is not redrawn), the interactive layer draws them where they are now.
   const movedKey = preview ? [...preview.keys()].sort().join('\u0000') : '';
+  const [keep] = useState(sceneKeeper);
   const scene = useMemo(
     () =>
-      planScene(project, analysis, caseView, selection, null, movedKey ? new Set(movedKey.split('\u0000')) : undefined),
-    [project, analysis, caseView, selection, movedKey],
+      keep(
+        planScene(drawn, analysis, caseView, selection, null, movedKey ? new Set(movedKey.split('\u0000')) : undefined),
+      ),
+    [keep, drawn, analysis, caseView, selection, movedKey],
   );
   const moving = useMemo(
-    () => (preview ? dragScene(project, analysis, selection, preview) : null),
-    [project, analysis, selection, preview],
-  );
-  const drawStatic = useCallback(
-    (c: Context) => {
-      const ctx = native(c);
-      drawGrid(ctx, viewport, size.width, size.height, units);
-      drawRestraints(ctx, viewport, scene);
-      drawPipes(ctx, viewport, scene);
-      const space = new LabelSpace(size.width, size.height);
-      const tags = placeTags(ctx, viewport, scene, space);
-      drawRestrainedZones(ctx, viewport, scene, units, space);
-      drawArrows(ctx, viewport, scene, units, space);
-      drawFittings(ctx, viewport, scene, tags);
-    },
-    [viewport, size, scene, units],
+    () => (preview ? dragScene(drawn, analysis, selection, preview) : null),
+    [drawn, analysis, selection, preview],
   );
 
-  // A fitting picked in the schedule or a list may be off screen: bring it to the middle.
-  useEffect(() => {
-    if (selection.nodes.size !== 1 || selection.pipes.size !== 0) return;
-    const id = [...selection.nodes][0]!;
-    const n = store.getState().project.nodes.find((x) => x.id === id);
-    const v = store.getState().viewport;
-    if (!n) return;
-    const s = toScreen(v, n);
-    if (s.sx < 20 || s.sy < 20 || s.sx > size.width - 20 || s.sy > size.height - 20) {
-      actions.setViewport(centreOn(v, n, size.width, size.height));
-    }
-  }, [selection, size, store, actions]);
+  // Layers for what changes at different rates. A test-pressure change redraws the two layers of
+  // results (blocks with the grid under them; thrust arrows and restrained zones); the pipes, and the
+  // symbols with their marks, are the same objects (`reuseEqualParts`) and are not drawn again.
+  // The marks get their room first; the thrust labels take what is left.
+  const { width, height } = size;
+  const [measure] = useState(() => document.createElement('canvas').getContext('2d'));
+  const { fittings, plainNodes, pipes, polygons, zones, arrows, largestForce } = scene;
+  const marks = useMemo(() => {
+    const space = new LabelSpace(width, height);
+    const tags = measure ? placeTags(measure, viewport, { fittings, plainNodes }, space) : new Map();
+    return { space, tags };
+  }, [measure, viewport, width, height, fittings, plainNodes]);
+  const drawGround = useCallback(
+    (_: Context, shape: KonvaShape) => {
+      const ctx = native(shape);
+      drawGrid(ctx, viewport, width, height, units);
+      drawRestraints(ctx, viewport, { polygons }, width, height);
+    },
+    [viewport, width, height, units, polygons],
+  );
+  const drawRoute = useCallback(
+    (_: Context, shape: KonvaShape) => drawPipes(native(shape), viewport, { pipes }, width, height),
+    [viewport, width, height, pipes],
+  );
+  const drawThrust = useCallback(
+    (_: Context, shape: KonvaShape) => {
+      const ctx = native(shape);
+      const space = marks.space.clone();
+      drawRestrainedZones(ctx, viewport, { zones }, units, space);
+      drawArrows(ctx, viewport, { arrows, largestForce }, units, space);
+      performance.mark('mainbrace-results-drawn');
+    },
+    [viewport, units, zones, arrows, largestForce, marks],
+  );
+  const drawMarks = useCallback(
+    (_: Context, shape: KonvaShape) =>
+      drawFittings(native(shape), viewport, { fittings, plainNodes }, marks.tags, width, height),
+    [viewport, width, height, fittings, plainNodes, marks],
+  );
 
   const markedDrawn = useRef(false);
   useEffect(() => {
     // A mark for the start-up benchmark: the first time the route is on screen.
-    if (!markedDrawn.current && scene.pipes.length > 0 && fitted.current) {
+    if (!markedDrawn.current && scene.pipes.length > 0 && size.width > 0) {
       markedDrawn.current = true;
       requestAnimationFrame(() => performance.mark('mainbrace-plan-drawn'));
     }
-  }, [scene]);
+  }, [scene, size]);
 
   const local = (e: { clientX: number; clientY: number }): ScreenPoint => {
     const r = box.current!.getBoundingClientRect();
     return { sx: e.clientX - r.left, sy: e.clientY - r.top };
   };
-  const planAt = (e: { clientX: number; clientY: number }) => toPlan(store.getState().viewport, local(e));
-  const tolerance = () => HIT_PX / store.getState().viewport.scale;
-  const drawCtx = (free = false): DrawContext => {
-    const s = store.getState();
-    return {
-      snapping: s.snapping && !free,
-      lengthStep: s.units === 'us' ? 5 * FOOT : 1,
-      samePoint: 3 / s.viewport.scale,
-    };
-  };
 
   const onPointerDown = (e: ReactPointerEvent<HTMLDivElement>) => {
     box.current?.focus();
-    const s = store.getState();
-    if (e.button === 1 || s.tool === 'pan' || spaceDown.current) {
-      panning.current = { last: local(e), start: local(e), clearOnClick: false };
-      e.currentTarget.setPointerCapture(e.pointerId);
-      return;
-    }
-    if (e.button !== 0) return;
-    const at = planAt(e);
-    const hit = hitTest(s.project, at, tolerance());
-    if (s.tool === 'draw') {
-      const out = drawStep(s.draw, { type: 'click', at, hit }, drawCtx(e.altKey));
-      actions.setDraw(out.state);
-      if (out.commit) actions.addRun(out.commit.start, out.commit.vertices, out.commit.end);
-      return;
-    }
-    e.currentTarget.setPointerCapture(e.pointerId);
-    if (hit.kind === 'none' && !e.shiftKey) {
-      // Dragging empty ground pans the plan; a click there clears the selection. Shift-drag draws a box.
-      panning.current = { last: local(e), start: local(e), clearOnClick: true };
-      return;
-    }
-    selectState.current = selectStep(
-      selectState.current,
-      { type: 'down', at, hit, additive: e.shiftKey },
-      selectCtx(),
-    ).state;
+    const out = send({
+      type: 'pointerDown',
+      id: e.pointerId,
+      pointer: kindOf(e.pointerType),
+      button: e.button,
+      at: local(e),
+      shift: e.shiftKey,
+      alt: e.altKey,
+    });
+    if (store.getState().gesture.kind !== 'idle' && out.handled) e.currentTarget.setPointerCapture(e.pointerId);
   };
-
-  const selectCtx = () => {
-    const s = store.getState();
-    return {
-      dragThreshold: 4 / s.viewport.scale,
-      selectedNodes: s.selection.nodes,
-      nodeAt: (id: string) => {
-        const n = s.project.nodes.find((x) => x.id === id);
-        return n ? { x: n.x, y: n.y } : undefined;
-      },
-    };
-  };
-
   const onPointerMove = (e: ReactPointerEvent<HTMLDivElement>) => {
-    const s = store.getState();
-    const at = planAt(e);
+    const at = local(e);
     if (coords.current) {
-      const u = s.units === 'us' ? FOOT : 1;
-      const sym = s.units === 'us' ? 'ft' : 'm';
-      coords.current.textContent = `E ${(at.x / u).toFixed(1)} ${sym}   N ${(at.y / u).toFixed(1)} ${sym}`;
+      const p = toPlan(store.getState().viewport, at);
+      const us = store.getState().units === 'us';
+      const u = us ? FOOT : 1;
+      const sym = us ? 'ft' : 'm';
+      coords.current.textContent = `E ${(p.x / u).toFixed(1)} ${sym}   N ${(p.y / u).toFixed(1)} ${sym}`;
     }
-    if (panning.current) {
-      const p = local(e);
-      actions.setViewport(panBy(s.viewport, p.sx - panning.current.last.sx, p.sy - panning.current.last.sy));
-      panning.current.last = p;
-      return;
-    }
-    if (s.tool === 'draw') {
-      if (s.draw.phase === 'drawing')
-        actions.setDraw(
-          drawStep(s.draw, { type: 'move', at, hit: hitTest(s.project, at, tolerance()) }, drawCtx(e.altKey)).state,
-        );
-      return;
-    }
-    const out = selectStep(selectState.current, { type: 'move', at }, selectCtx());
-    selectState.current = out.state;
-    if (out.effect?.kind === 'preview') actions.setDragPreview(out.effect.positions);
-    if (out.state.phase === 'boxing') setSelectBox({ from: out.state.origin, to: out.state.current });
+    send({ type: 'pointerMove', id: e.pointerId, pointer: kindOf(e.pointerType), at, alt: e.altKey });
   };
-
-  const onPointerUp = (e: ReactPointerEvent<HTMLDivElement>) => {
-    if (panning.current) {
-      const p = local(e);
-      const { start, clearOnClick } = panning.current;
-      panning.current = null;
-      if (clearOnClick && Math.hypot(p.sx - start.sx, p.sy - start.sy) < 4) actions.clearSelection();
-      return;
-    }
-    const s = store.getState();
-    if (s.tool === 'draw') return;
-    const out = selectStep(selectState.current, { type: 'up', at: planAt(e) }, selectCtx());
-    selectState.current = out.state;
-    setSelectBox(null);
-    const effect = out.effect;
-    if (!effect) return;
-    if (effect.kind === 'move') actions.moveNodes(effect.positions);
-    else if (effect.kind === 'box') {
-      const found = inBox(s.project, effect.from, effect.to);
-      const base = effect.additive ? s.selection : { nodes: new Set<string>(), pipes: new Set<string>() };
-      actions.select({
-        nodes: new Set([...base.nodes, ...found.nodes]),
-        pipes: new Set([...base.pipes, ...found.pipes]),
-      });
-    } else if (effect.kind === 'select') {
-      const h = effect.hit;
-      if (h.kind === 'none') {
-        if (!effect.additive) actions.clearSelection();
-        return;
-      }
-      const key = h.kind === 'node' ? 'nodes' : 'pipes';
-      if (effect.additive) {
-        const next = new Set(s.selection[key]);
-        if (next.has(h.id)) next.delete(h.id);
-        else next.add(h.id);
-        actions.select({ ...s.selection, [key]: next });
-      } else
-        actions.select({
-          nodes: new Set(key === 'nodes' ? [h.id] : []),
-          pipes: new Set(key === 'pipes' ? [h.id] : []),
-        });
-    }
-  };
-
-  const onDoubleClick = () => {
-    const s = store.getState();
-    if (s.tool !== 'draw') return;
-    const out = drawStep(s.draw, { type: 'finish' }, drawCtx());
-    actions.setDraw(out.state);
-    if (out.commit) actions.addRun(out.commit.start, out.commit.vertices, out.commit.end);
-  };
+  const onPointerUp = (e: ReactPointerEvent<HTMLDivElement>) =>
+    send({ type: 'pointerUp', id: e.pointerId, pointer: kindOf(e.pointerType), at: local(e) });
 
   const onWheel = useCallback(
     (e: WheelEvent) => {
       e.preventDefault();
       const r = box.current!.getBoundingClientRect();
-      const factor = Math.exp(-e.deltaY * 0.0015);
-      actions.setViewport(zoomAt(store.getState().viewport, { sx: e.clientX - r.left, sy: e.clientY - r.top }, factor));
+      send({ type: 'wheel', at: { sx: e.clientX - r.left, sy: e.clientY - r.top }, deltaY: e.deltaY });
     },
-    [actions, store],
+    [send],
   );
   useEffect(() => {
     const el = box.current;
@@ -273,7 +193,16 @@ export function PlanView() {
     return () => el?.removeEventListener('wheel', onWheel);
   }, [onWheel]);
 
-  const cursor = tool === 'draw' ? 'crosshair' : tool === 'pan' ? 'grab' : 'default';
+  const cursor =
+    gesture === 'pan'
+      ? 'grabbing'
+      : tool === 'draw'
+        ? 'crosshair'
+        : tool === 'pan'
+          ? 'grab'
+          : hover.kind !== 'none'
+            ? 'pointer'
+            : 'default';
   const snappedNow = snapping && draw.phase === 'drawing';
   return (
     <div
@@ -281,23 +210,34 @@ export function PlanView() {
       ref={box}
       tabIndex={0}
       role="application"
-      aria-label="Plan of the main: the schedule below lists the same fittings as text"
+      aria-label="Plan of the main: arrows pan, + and − zoom, Tab walks the fittings, Enter opens the details; the schedule below lists the same fittings as text"
       data-testid="plan"
       style={{ cursor }}
       onPointerDown={onPointerDown}
       onPointerMove={onPointerMove}
       onPointerUp={onPointerUp}
-      onDoubleClick={onDoubleClick}
+      onPointerCancel={(e) => send({ type: 'pointerCancel', id: e.pointerId })}
+      onPointerLeave={() => send({ type: 'pointerLeave' })}
+      onDoubleClick={(e) => send({ type: 'doubleClick', at: local(e) })}
       onContextMenu={(e) => e.preventDefault()}
     >
-      <Stage width={size.width} height={size.height} listening={false}>
+      <Stage width={size.width || 50} height={size.height || 50} listening={false}>
         <Layer listening={false}>
-          <Shape sceneFunc={drawStatic} />
+          <Shape sceneFunc={drawGround} />
+        </Layer>
+        <Layer listening={false}>
+          <Shape sceneFunc={drawRoute} />
+        </Layer>
+        <Layer listening={false}>
+          <Shape sceneFunc={drawThrust} />
+        </Layer>
+        <Layer listening={false}>
+          <Shape sceneFunc={drawMarks} />
         </Layer>
         <Layer listening={false}>
           <Shape
-            sceneFunc={(c) => {
-              const ctx = native(c);
+            sceneFunc={(_, shape) => {
+              const ctx = native(shape);
               if (moving) {
                 drawPipes(ctx, viewport, moving);
                 drawFittings(
@@ -307,6 +247,7 @@ export function PlanView() {
                   placeTags(ctx, viewport, moving, new LabelSpace(size.width, size.height)),
                 );
               }
+              drawHover(ctx, viewport, drawn, hover, tool === 'draw');
               drawOverlay(ctx, viewport, draw, selectBox, units, snappedNow);
             }}
           />

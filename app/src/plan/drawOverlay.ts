@@ -1,4 +1,5 @@
-import { formatSi, type UnitSystem } from '@mainbrace/solver';
+import { formatSi, type Project, type UnitSystem } from '@mainbrace/solver';
+import type { Hit } from '../tools/hit.js';
 import { rubberBand, type DrawState } from '../tools/drawTool.js';
 import type { PlanPoint } from '../state/documentEdits.js';
 import { toScreen, type Viewport } from '../state/viewport.js';
@@ -59,4 +60,65 @@ export function drawOverlay(
     ctx.strokeRect(Math.min(a.sx, b.sx), Math.min(a.sy, b.sy), Math.abs(b.sx - a.sx), Math.abs(b.sy - a.sy));
     ctx.setLineDash([]);
   }
+}
+
+/**
+ * What a click at the pointer would select or join: a ring on the node, or the pipe traced with a dot
+ * where a tee would go. Shape and colour both mark it (a thicker halo, never colour alone).
+ */
+export function drawHover(
+  ctx: CanvasRenderingContext2D,
+  v: Viewport,
+  project: Project,
+  hover: Hit,
+  attaching: boolean,
+) {
+  if (hover.kind === 'none') return;
+  ctx.save();
+  ctx.strokeStyle = PALETTE.selection;
+  ctx.fillStyle = PALETTE.selection;
+  if (hover.kind === 'node') {
+    const p = toScreen(v, hover.at);
+    ctx.lineWidth = 2.5;
+    ctx.beginPath();
+    ctx.arc(p.sx, p.sy, 11, 0, Math.PI * 2);
+    ctx.stroke();
+  } else {
+    const pipe = project.pipes.find((x) => x.id === hover.id);
+    const a = pipe && project.nodes.find((n) => n.id === pipe.from);
+    const b = pipe && project.nodes.find((n) => n.id === pipe.to);
+    if (a && b) {
+      const pa = toScreen(v, a);
+      const pb = toScreen(v, b);
+      ctx.globalAlpha = 0.35;
+      ctx.lineWidth = 10;
+      ctx.lineCap = 'round';
+      ctx.beginPath();
+      ctx.moveTo(pa.sx, pa.sy);
+      ctx.lineTo(pb.sx, pb.sy);
+      ctx.stroke();
+      ctx.globalAlpha = 1;
+    }
+    if (attaching) {
+      const p = toScreen(v, hover.at);
+      ctx.lineWidth = 2;
+      ctx.beginPath();
+      ctx.arc(p.sx, p.sy, 6, 0, Math.PI * 2);
+      ctx.stroke();
+      ctx.beginPath();
+      ctx.arc(p.sx, p.sy, 2.5, 0, Math.PI * 2);
+      ctx.fill();
+    }
+  }
+  if (attaching) {
+    const p = toScreen(v, hover.at);
+    label(
+      ctx,
+      hover.kind === 'node' ? 'joins this node' : 'joins the pipe (tee)',
+      p.sx + 12,
+      p.sy - 10,
+      PALETTE.selection,
+    );
+  }
+  ctx.restore();
 }

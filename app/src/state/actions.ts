@@ -1,4 +1,4 @@
-import { parseProject, type LoadCase, type Pipe, type Project, type ProjectNode, type Soil } from '@mainbrace/solver';
+import { type LoadCase, type Pipe, type Project, type ProjectNode, type Soil } from '@mainbrace/solver';
 import type { AppState, AppStore, CaseView, DrawerTab, Selection, ToolName } from './store.js';
 import { EMPTY_SELECTION } from './store.js';
 import {
@@ -12,15 +12,25 @@ import {
   type RouteEnd,
 } from './documentEdits.js';
 import type { Viewport } from './viewport.js';
+import { routePieces } from './connectivity.js';
 import type { DrawState } from '../tools/drawTool.js';
+import { fittedView, revealFitting as planCommandReveal, showFitting } from '../tools/planCommands.js';
+import { planInputOf } from '../tools/planBridge.js';
+import { editProblems } from './editCheck.js';
+import { checks } from './checks.js';
 
 /** Typing pauses shorter than this, ms, keep extending the same undo step. */
 const TYPING_WINDOW_MS = 1500;
 
-/** Keeps a selection to ids that still exist (after undo, delete or open). */
+/**
+ * Keeps a selection to ids that still exist (after undo, delete or open); the same object when every
+ * id still exists, so that an edit elsewhere (a keystroke in the name) does not look like a new selection.
+ */
 function prune(sel: Selection, p: Project): Selection {
+  if (sel.nodes.size === 0 && sel.pipes.size === 0) return sel;
   const nodes = new Set(p.nodes.map((n) => n.id));
   const pipes = new Set(p.pipes.map((x) => x.id));
+  if ([...sel.nodes].every((id) => nodes.has(id)) && [...sel.pipes].every((id) => pipes.has(id))) return sel;
   return {
     nodes: new Set([...sel.nodes].filter((id) => nodes.has(id))),
     pipes: new Set([...sel.pipes].filter((id) => pipes.has(id))),
@@ -37,18 +47,20 @@ export function createActions(store: AppStore) {
   /**
    * An undoable edit: a new document from the old one. A change that would leave the document
    * invalid (two nodes on one point, an ID above the OD) is refused with a message, never stored.
+   * Only the parts the edit replaced are checked (`editProblems`); a whole document that was checked
+   * already (opened, restored) comes `checked` and is not checked again.
    */
-  const edit = (change: (p: Project) => Project, typing?: string) => {
+  const edit = (change: (p: Project) => Project, typing?: string, checked = false) => {
     const before = get().project;
     const after = change(before);
     if (after === before) return;
-    const check = validated(after);
-    if (!check.ok) {
+    const lines = checked ? [] : editProblems(before, after);
+    if (lines.length) {
       set({
         notice: {
           tone: 'error',
           title: 'That change was not made: it would leave the project invalid',
-          lines: check.lines,
+          lines,
         },
       });
       return;
@@ -67,8 +79,23 @@ export function createActions(store: AppStore) {
 
   return {
     // ——— document edits (undoable)
-    addRun: (start: RouteEnd, vertices: PlanPoint[], end: RouteEnd | null) =>
-      edit((p) => addRoute(p, start, vertices, end, get().pipeSpec)),
+    addRun: (start: RouteEnd, vertices: PlanPoint[], end: RouteEnd | null) => {
+      const before = routePieces(get().project).length;
+      edit((p) => addRoute(p, start, vertices, end, get().pipeSpec));
+      const after = routePieces(get().project).length;
+      // A run not joined to the main is sized alone, with dead-end blocks at both ends: say so at once.
+      if (after > before && after > 1)
+        set({
+          notice: {
+            tone: 'warning',
+            title: `That run is not connected to the rest of the main (the route is now ${after} separate pieces)`,
+            lines: [
+              'Each piece is sized on its own, with a dead-end block at every free end.',
+              'To join it, undo (Ctrl+Z) and draw it again starting or ending on a node or pipe: the plan rings what a click would join.',
+            ],
+          },
+        });
+    },
     moveNodes: (moves: ReadonlyMap<string, PlanPoint>) => {
       set({ dragPreview: null });
       edit((p) => moveNodes(p, moves));
@@ -133,11 +160,18 @@ export function createActions(store: AppStore) {
         };
       }),
     setDefaultSoil: (id: string) => edit((p) => ({ ...p, defaultSoil: id })),
-    /** Replaces the whole document (open, new); it is one undoable step like any edit. */
+    /**
+     * Replaces the whole document (open, new, another tab's copy); it is one undoable step like any
+     * edit. Every caller hands a document that passed the whole-file check (`validated`, the file reader).
+     */
     replaceProject: (project: Project) => {
-      edit(() => project);
+      edit(() => project, undefined, true);
       set({ units: project.units, selection: EMPTY_SELECTION, draw: { phase: 'idle' }, dragPreview: null });
+      // A route opened into the old view may lie wholly off screen: show all of it.
+      if (get().canvas.width > 0) set({ viewport: fittedView(planInputOf(get())) });
     },
+    /** The document as last saved to or opened from a file: New asks before discarding anything else. */
+    markSaved: (project: Project) => set({ fileBaseline: project }),
 
     /**
      * A live edit (a slider being dragged): changes show at once but leave no undo steps until it
@@ -179,6 +213,17 @@ export function createActions(store: AppStore) {
     setDragPreview: (dragPreview: ReadonlyMap<string, PlanPoint> | null) => set({ dragPreview }),
     select: (selection: Selection) => set({ selection }),
     selectNode: (id: string) => set({ selection: { nodes: new Set([id]), pipes: new Set() } }),
+    /** Selects a fitting and brings it to the middle of the plan, close enough to read (schedule, details). */
+    zoomToFitting: (id: string) => {
+      const next = showFitting(planInputOf(get()), id);
+      set({ selection: next.selection, viewport: next.viewport });
+    },
+    /** Selects a fitting and, when it is off screen, brings it to the middle at the same scale. */
+    revealNode: (id: string) => {
+      const next = planCommandReveal(planInputOf(get()), id);
+      set({ selection: next.selection, viewport: next.viewport });
+    },
+    setLegendOpen: (legendOpen: boolean) => set({ legendOpen }),
     clearSelection: () => set({ selection: EMPTY_SELECTION }),
     setDrawer: (tab: DrawerTab, height?: AppState['drawer']['height']) =>
       set({ drawer: { tab, height: height ?? (get().drawer.height === 'closed' ? 'low' : get().drawer.height) } }),
@@ -191,7 +236,7 @@ export type Actions = ReturnType<typeof createActions>;
 
 /** Checks a whole document before it replaces the current one (used by Open and restore). */
 export function validated(data: unknown): { ok: true; project: Project } | { ok: false; lines: string[] } {
-  const r = parseProject(data);
+  const r = checks().parseProject(data);
   return r.ok
     ? { ok: true, project: r.project }
     : { ok: false, lines: r.problems.map((p) => (p.path ? `${p.path}: ${p.message}` : p.message)) };

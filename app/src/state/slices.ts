@@ -2,6 +2,9 @@ import type { Project, UnitSystem } from '@mainbrace/solver';
 import type { PipeSpec, PlanPoint } from './documentEdits.js';
 import type { Viewport } from './viewport.js';
 import type { DrawState } from '../tools/drawTool.js';
+import type { Gesture } from '../tools/planInput.js';
+import type { Hit } from '../tools/hit.js';
+import type { ScreenPoint } from './viewport.js';
 
 export type ToolName = 'select' | 'draw' | 'pan';
 /** Which thrusts the plan shows: one load case or the envelope of all. */
@@ -39,10 +42,16 @@ export interface ViewSlice {
   /** display units: a view setting, saved into the file but never an undo step of the design */
   units: UnitSystem;
   viewport: Viewport;
+  /** the plan canvas's size, CSS px (0 × 0 until the plan is laid out) */
+  canvas: { width: number; height: number };
+  /** whether the plan's legend is open; while open, Fit keeps the route out from under it */
+  legendOpen: boolean;
   caseView: CaseView;
   drawer: { tab: DrawerTab; height: 'low' | 'high' | 'full' | 'closed' };
   /** a message the chrome shows until dismissed (storage failure, a refused file) */
   notice: Notice | null;
+  /** the document as last saved to or opened from a file, or as the demo opened; null when unknown */
+  fileBaseline: Project | null;
 }
 
 /** The active tool and its transient state. */
@@ -53,6 +62,15 @@ export interface ToolSlice {
   draw: DrawState;
   /** nodes being dragged and where they are now; the document changes once, on drop */
   dragPreview: ReadonlyMap<string, PlanPoint> | null;
+  /** the pointer gesture in progress on the plan */
+  gesture: Gesture;
+  /** touch points down on the plan, by pointer id */
+  touches: Readonly<Record<number, ScreenPoint>>;
+  /** what a click at the pointer would select or join */
+  hover: Hit;
+  selectBox: { from: PlanPoint; to: PlanPoint } | null;
+  /** Space held: any drag pans */
+  spaceHeld: boolean;
 }
 
 export interface SelectionSlice {
@@ -64,9 +82,12 @@ export const projectSlice = (project: Project): ProjectSlice => ({ project });
 export const viewSlice = (units: UnitSystem): ViewSlice => ({
   units,
   viewport: { scale: 1, left: 0, top: 0 },
+  canvas: { width: 0, height: 0 },
+  legendOpen: true,
   caseView: { kind: 'envelope' },
   drawer: { tab: 'schedule', height: 'low' },
   notice: null,
+  fileBaseline: null,
 });
 
 export const toolSlice = (pipeSpec: PipeSpec): ToolSlice => ({
@@ -75,6 +96,11 @@ export const toolSlice = (pipeSpec: PipeSpec): ToolSlice => ({
   pipeSpec,
   draw: { phase: 'idle' },
   dragPreview: null,
+  gesture: { kind: 'idle' },
+  touches: {},
+  hover: { kind: 'none' },
+  selectBox: null,
+  spaceHeld: false,
 });
 
 export const selectionSlice = (): SelectionSlice => ({ selection: EMPTY_SELECTION });

@@ -1,23 +1,20 @@
-import { norm } from '../geometry/vector.js';
+import type { Vec3 } from '../geometry/vector.js';
 import type { Project, ProjectNode } from '../model/projectSchema.js';
-import { legsByNode, type Leg } from '../network/legs.js';
+import { legsByNode, pipeLegs, type Leg } from '../network/legs.js';
 import { fittingGeometry, needsRestraint, type FittingGeometry } from '../network/fittingKind.js';
-import { fittingMarks, runLayout, type Run } from '../network/runs.js';
-import {
-  fittingThrust,
-  thrustEnvelope,
-  worstPerCase,
-  type CaseThrust,
-  type ThrustEnvelope,
-} from '../thrust/fittingThrust.js';
-import { VACUUM_GAUGE_PRESSURE } from '../pressure/nodePressure.js';
+import { fittingMarks, runLayout, type Run, type RunLayout } from '../network/runs.js';
+import type { CaseThrust, ThrustEnvelope } from '../thrust/fittingThrust.js';
 import { waterWeightInFitting } from '../thrust/waterWeight.js';
 import { sizeRestraint, type Restraint } from '../restraint/sizeRestraint.js';
 import { thrustSteps } from './thrustSteps.js';
-import { diagnostic, uniqueDiagnostics, type Diagnostic } from '../diagnostics/diagnostic.js';
+import { sameDiagnostic, uniqueDiagnostics, type Diagnostic } from '../diagnostics/diagnostic.js';
 import type { ProvenanceId } from '../provenance/register.js';
 import type { CalcStep } from './calcRecord.js';
 import { implausibleInputs } from '../model/plausibility.js';
+import { pipeRatingChecks } from '../pressure/pipeRating.js';
+import { copySums, fillStates, readStates, thrustSums, writeSums, type ThrustSums } from './thrustSums.js';
+import { fittingDiagnostics } from './fittingDiagnostics.js';
+import { routeChange } from './routeChange.js';
 
 /** Everything computed for one fitting; the schedule, the plan and the record all read this. */
 export interface FittingAnalysis {
@@ -57,56 +54,52 @@ export interface Analysis {
   chainage: Map<string, number>;
   /** marks of every fitting, tie-ins included */
   marks: Map<string, string>;
-  /** findings about the inputs of the whole project (values outside their usual range), most severe first */
+  /**
+   * findings about the project as a whole: inputs outside their usual range, and pipes loaded past
+   * their pressure rating; most severe first
+   */
   diagnostics: Diagnostic[];
 }
 
-function negativePressure(node: string, cases: readonly CaseThrust[]): Diagnostic[] {
-  const out: Diagnostic[] = [];
-  for (const c of cases) {
-    if (c.pressure >= 0) continue;
-    const code = c.pressure <= VACUUM_GAUGE_PRESSURE + 1e-6 ? 'pressure.vapour-floor' : 'pressure.below-zero';
-    out.push(diagnostic(code, { node, case: c.caseId }, { pressure: c.pressure }));
-  }
-  return out;
+/** What an analysis keeps for the next one (analyseNext): the sums and geometry of every fitting. */
+interface Kept {
+  sums: ThrustSums;
+  /** fitting index by node id */
+  index: Map<string, number>;
+  geometry: Map<string, FittingGeometry>;
 }
 
-/**
- * Water in equals water out at a joint (continuity): a node whose pipes' flows do not balance, or a
- * cap with flow into it, has a flow typed wrong somewhere. Tie-ins and free ends pass water on.
- */
-function flowImbalance(node: string, legs: readonly Leg[], geometry: FittingGeometry): Diagnostic | null {
-  if (geometry.kind === 'tie-in' || legs.length === 0) return null;
-  let net = 0;
-  let largest = 0;
-  for (const l of legs) {
-    net += l.outflow;
-    largest = Math.max(largest, Math.abs(l.outflow));
-  }
-  if (Math.abs(net) <= 1e-6 + 0.01 * largest) return null;
-  return geometry.kind === 'dead-end'
-    ? diagnostic('flow.into-cap', { node }, { flow: Math.abs(net) })
-    : diagnostic('flow.unbalanced', { node }, { net });
+const kept = new WeakMap<Analysis, Kept>();
+
+/** Where a fitting stands on the route. */
+interface Place {
+  mark: string;
+  run: string;
+  chainage: number;
 }
 
-function analyseFitting(
+/** Thrust, envelope, restraint and findings of fitting `f` from its sums in `sums`. */
+function solveFitting(
   project: Project,
   node: ProjectNode,
   legs: Leg[],
   geometry: FittingGeometry,
-  place: { mark: string; run: string; chainage: number },
+  place: Place,
   inputs: readonly Diagnostic[],
+  sums: ThrustSums,
+  f: number,
+  before: FittingAnalysis | undefined,
 ): FittingAnalysis {
-  const states = fittingThrust(node, geometry.kind, legs, project.loadCases, project.water.density);
-  const cases = worstPerCase(states);
-  const envelope = thrustEnvelope(states);
-  const restraint = sizeRestraint(project, node, legs, geometry, envelope);
-  const found = [...inputs, ...negativePressure(node.id, cases), ...restraint.diagnostics];
-  const unbalanced = flowImbalance(node.id, legs, geometry);
-  if (unbalanced) found.push(unbalanced);
-  if (node.valve && geometry.kind === 'valve') found.push(diagnostic('valve.both-ways', { node: node.id }));
-  else if (node.valve) found.push(diagnostic('valve.flag-ignored', { node: node.id }));
-  if (norm(envelope.governing.total) === 0) found.push(diagnostic('thrust.none', { node: node.id }));
+  const { states, cases, envelope } = readStates(
+    fillStates(sums, f, project.loadCases, project.water.density),
+    project.loadCases,
+    legs,
+  );
+  // The restraint reads the project's design and soils, the node, its legs and the envelope only.
+  const restraint =
+    before && sameEnvelope(before.envelope, envelope)
+      ? before.restraint
+      : sizeRestraint(project, node, legs, geometry, envelope);
   return {
     node,
     ...place,
@@ -115,38 +108,124 @@ function analyseFitting(
     cases,
     states,
     envelope,
-    waterWeight: waterWeightInFitting(legs, project.water.density),
+    waterWeight: before ? before.waterWeight : waterWeightInFitting(legs, project.water.density),
     restraint,
-    diagnostics: uniqueDiagnostics(found),
+    diagnostics: fittingDiagnostics(node, legs, geometry, cases, envelope, restraint, inputs),
     basis: restraint.basis,
   };
 }
 
-/** The whole route's fittings, thrusts and restraints: a pure function of the project document. */
-export function analyseProject(project: Project): Analysis {
-  const legs = legsByNode(project);
-  const layout = runLayout(project, legs);
-  const geometry = new Map<string, FittingGeometry>();
-  for (const node of project.nodes) geometry.set(node.id, fittingGeometry(node, legs.get(node.id) ?? []));
-  const marks = fittingMarks(layout, (id) => {
+const sameVec = (a: Vec3, b: Vec3) => a[0] === b[0] && a[1] === b[1] && a[2] === b[2];
+const sameState = (a: CaseThrust, b: CaseThrust) =>
+  a.caseId === b.caseId &&
+  a.pressure === b.pressure &&
+  a.closedAgainst === b.closedAgainst &&
+  sameVec(a.total, b.total);
+
+/** Two envelopes with the same numbers: the restraint sized for one holds for the other. */
+function sameEnvelope(a: ThrustEnvelope, b: ThrustEnvelope): boolean {
+  return (
+    sameState(a.governing, b.governing) &&
+    a.horizontal.force === b.horizontal.force &&
+    a.horizontal.caseId === b.horizontal.caseId &&
+    sameVec(a.horizontal.direction, b.horizontal.direction) &&
+    a.upward.force === b.upward.force &&
+    a.upward.caseId === b.upward.caseId &&
+    a.downward.force === b.downward.force &&
+    a.downward.caseId === b.downward.caseId &&
+    a.pressure === b.pressure &&
+    (a.reverse === null
+      ? b.reverse === null
+      : b.reverse !== null &&
+        a.reverse.force === b.reverse.force &&
+        a.reverse.caseId === b.reverse.caseId &&
+        sameVec(a.reverse.direction, b.reverse.direction) &&
+        sameState(a.reverse.state, b.reverse.state))
+  );
+}
+
+function byNode(list: readonly Diagnostic[]): Map<string, Diagnostic[]> {
+  const out = new Map<string, Diagnostic[]>();
+  for (const d of list) {
+    const id = d.subject.node;
+    if (id === undefined) continue;
+    const at = out.get(id);
+    if (at) at.push(d);
+    else out.set(id, [d]);
+  }
+  return out;
+}
+
+const NONE: readonly Diagnostic[] = [];
+
+function sameList(a: readonly Diagnostic[], b: readonly Diagnostic[]): boolean {
+  return a.length === b.length && a.every((d, i) => sameDiagnostic(d, b[i]!));
+}
+
+/**
+ * The analysis of `project` from its legs and geometry, reusing what `prev` computed where `reuse`
+ * says a fitting did not change (`'all'`: its thrust and restraint; `'sums'`: its sums only).
+ */
+function assemble(
+  project: Project,
+  legs: Map<string, Leg[]>,
+  geometry: Map<string, FittingGeometry>,
+  prev: { analysis: Analysis; kept: Kept; reuse: (id: string) => 'all' | 'sums' | 'none' } | null,
+  layout: RunLayout = runLayout(project, legs),
+  marks: Map<string, string> = fittingMarks(layout, (id) => {
     const kind = geometry.get(id)!.kind;
     return kind !== 'straight' && kind !== 'none';
-  });
+  }),
+): Analysis {
   const inputs = implausibleInputs(project);
-  const atNode = (id: string) => inputs.filter((d) => d.subject.node === id);
-  const fittings: FittingAnalysis[] = [];
-  const nodeById = new Map(project.nodes.map((n) => [n.id, n]));
+  const atNode = byNode(inputs);
+  const nodeById = new Map<string, ProjectNode>();
+  for (const n of project.nodes) nodeById.set(n.id, n);
+  const order: string[] = [];
   const done = new Set<string>();
   for (const run of layout.runs) {
     for (const { id } of run.nodes) {
-      const g = geometry.get(id)!;
-      if (layout.runOf.get(id) !== run.letter || !needsRestraint(g.kind) || done.has(id)) continue;
+      if (layout.runOf.get(id) !== run.letter || !needsRestraint(geometry.get(id)!.kind) || done.has(id)) continue;
       done.add(id);
-      const place = { mark: marks.get(id)!, run: run.letter, chainage: layout.chainage.get(id)! };
-      fittings.push(analyseFitting(project, nodeById.get(id)!, legs.get(id) ?? [], g, place, atNode(id)));
+      order.push(id);
     }
   }
-  return {
+  const sums = thrustSums(order.length);
+  const index = new Map<string, number>();
+  const fittings: FittingAnalysis[] = new Array<FittingAnalysis>(order.length);
+  for (let f = 0; f < order.length; f++) {
+    const id = order[f]!;
+    index.set(id, f);
+    const node = nodeById.get(id)!;
+    const g = geometry.get(id)!;
+    const l = legs.get(id) ?? [];
+    const place: Place = { mark: marks.get(id)!, run: layout.runOf.get(id)!, chainage: layout.chainage.get(id)! };
+    const here = atNode.get(id) ?? NONE;
+    const reuse = prev ? prev.reuse(id) : 'none';
+    const old = reuse === 'none' ? undefined : prev!.analysis.byNode.get(id);
+    const oldIndex = reuse === 'none' ? undefined : prev!.kept.index.get(id);
+    if (old && oldIndex !== undefined) copySums(prev!.kept.sums, oldIndex, sums, f);
+    else writeSums(sums, f, l, node.elevation, node.valve && g.kind === 'valve');
+    if (reuse === 'all' && old) {
+      const moved = old.mark !== place.mark || old.run !== place.run || old.chainage !== place.chainage;
+      const reworded = !sameList(
+        old.diagnostics.filter((d) => d.subject.node === id && d.subject.field),
+        here,
+      );
+      if (!moved && !reworded) fittings[f] = old;
+      else
+        fittings[f] = {
+          ...old,
+          ...place,
+          diagnostics: reworded
+            ? fittingDiagnostics(node, l, g, old.cases, old.envelope, old.restraint, here)
+            : old.diagnostics,
+        };
+    } else {
+      fittings[f] = solveFitting(project, node, l, g, place, here, sums, f, reuse === 'sums' ? old : undefined);
+    }
+  }
+  const analysis: Analysis = {
     project,
     fittings,
     byNode: new Map(fittings.map((f) => [f.node.id, f])),
@@ -155,17 +234,111 @@ export function analyseProject(project: Project): Analysis {
     runOf: layout.runOf,
     chainage: layout.chainage,
     marks,
+    diagnostics: uniqueDiagnostics([...inputs, ...pipeRatingChecks(project)]),
+  };
+  kept.set(analysis, { sums, index, geometry });
+  return analysis;
+}
+
+/**
+ * A load-case edit: the same fittings in the same order with the same sums; each is rescaled, and its
+ * restraint kept where its envelope did not change.
+ */
+function rescale(prev: Analysis, k: Kept, project: Project): Analysis {
+  const inputs = implausibleInputs(project);
+  const atNode = byNode(inputs);
+  const n = prev.fittings.length;
+  const fittings = new Array<FittingAnalysis>(n);
+  for (let f = 0; f < n; f++) {
+    const old = prev.fittings[f]!;
+    const place: Place = { mark: old.mark, run: old.run, chainage: old.chainage };
+    const here = atNode.get(old.node.id) ?? NONE;
+    fittings[f] = solveFitting(project, old.node, old.legs, old.geometry, place, here, k.sums, f, old);
+  }
+  const analysis: Analysis = {
+    ...prev,
+    project,
+    fittings,
+    byNode: new Map(fittings.map((f) => [f.node.id, f])),
     diagnostics: uniqueDiagnostics(inputs),
   };
+  kept.set(analysis, k);
+  return analysis;
+}
+
+function geometryOf(project: Project, legs: ReadonlyMap<string, Leg[]>): Map<string, FittingGeometry> {
+  const geometry = new Map<string, FittingGeometry>();
+  for (const node of project.nodes) geometry.set(node.id, fittingGeometry(node, legs.get(node.id) ?? []));
+  return geometry;
+}
+
+/** The whole route's fittings, thrusts and restraints: a pure function of the project document. */
+export function analyseProject(project: Project): Analysis {
+  const legs = legsByNode(project);
+  return assemble(project, legs, geometryOf(project, legs), null);
+}
+
+/**
+ * The analysis of `project`, an edit of the document `prev` analysed, computing only what the edit can
+ * change (the result equals analyseProject(project)):
+ * - load cases only (a pressure, a flow factor): the route, its marks and every fitting's geometric sums
+ *   are kept; each fitting's thrust is rescaled, and its restraint sized again only where its envelope
+ *   of thrusts changed;
+ * - nodes or pipes: the fittings at and next to what moved get their legs, geometry and sums again;
+ *   the others keep their results (and take their new mark and chainage); the runs are walked again;
+ * - anything else (water, design, soils): the whole analysis.
+ */
+export function analyseNext(prev: Analysis | null | undefined, project: Project): Analysis {
+  if (!prev) return analyseProject(project);
+  if (prev.project === project) return prev;
+  const k = kept.get(prev);
+  if (!k) return analyseProject(project);
+  const change = routeChange(prev.project, project, prev.legs);
+  if (change.kind === 'all') return analyseProject(project);
+  if (change.kind === 'same') {
+    const same: Analysis = { ...prev, project };
+    kept.set(same, k);
+    return same;
+  }
+  if (change.kind === 'cases') return rescale(prev, k, project);
+  const { dirty } = change;
+  const useOutside = project.design.thrustArea === 'outside';
+  const nodeById = new Map<string, ProjectNode>();
+  for (const n of project.nodes) nodeById.set(n.id, n);
+  const legs = new Map<string, Leg[]>();
+  for (const n of project.nodes) legs.set(n.id, dirty.has(n.id) ? [] : prev.legs.get(n.id)!);
+  for (const pipe of project.pipes) {
+    if (!dirty.has(pipe.from) && !dirty.has(pipe.to)) continue;
+    const a = nodeById.get(pipe.from);
+    const b = nodeById.get(pipe.to);
+    if (!a || !b) continue;
+    const [fromA, fromB] = pipeLegs(pipe, a, b, useOutside);
+    if (dirty.has(a.id)) legs.get(a.id)!.push(fromA);
+    if (dirty.has(b.id)) legs.get(b.id)!.push(fromB);
+  }
+  const geometry = new Map<string, FittingGeometry>();
+  for (const n of project.nodes) {
+    const g = dirty.has(n.id) ? undefined : k.geometry.get(n.id);
+    geometry.set(n.id, g ?? fittingGeometry(n, legs.get(n.id)!));
+  }
+  const clean = change.cases ? 'sums' : 'all';
+  return assemble(project, legs, geometry, {
+    analysis: prev,
+    kept: k,
+    reuse: (id) => (dirty.has(id) ? 'none' : clean),
+  });
 }
 
 const cache = new WeakMap<Project, Analysis>();
 
-/** `analyseProject`, memoised by document identity: an unchanged document is never recomputed. */
-export function analyse(project: Project): Analysis {
+/**
+ * `analyseProject`, memoised by document identity: an unchanged document is never recomputed. Given
+ * the analysis of the document before an edit, only what the edit changed is computed (analyseNext).
+ */
+export function analyse(project: Project, prev?: Analysis | null): Analysis {
   let result = cache.get(project);
   if (!result) {
-    result = analyseProject(project);
+    result = analyseNext(prev, project);
     cache.set(project, result);
   }
   return result;

@@ -19,6 +19,26 @@ export interface Leg {
   outflow: number;
 }
 
+/**
+ * The two legs of one pipe: seen from `a` (its from-node) and from `b` (its to-node).
+ * @param useOutside the pressure acts on the outside diameter (design.thrustArea = 'outside')
+ */
+export function pipeLegs(pipe: Pipe, a: ProjectNode, b: ProjectNode, useOutside: boolean): [Leg, Leg] {
+  const dx = b.x - a.x;
+  const dy = b.y - a.y;
+  const dz = b.elevation - a.elevation;
+  const length = Math.sqrt(dx * dx + dy * dy + dz * dz);
+  const thrustArea = circleArea(meters(useOutside ? pipe.outsideDiameter : pipe.insideDiameter));
+  const flowArea = circleArea(meters(pipe.insideDiameter));
+  const ux = dx / length;
+  const uy = dy / length;
+  const uz = dz / length;
+  return [
+    { pipe, far: b, direction: [ux, uy, uz], length, thrustArea, flowArea, outflow: pipe.flow },
+    { pipe, far: a, direction: [-ux, -uy, -uz], length, thrustArea, flowArea, outflow: -pipe.flow },
+  ];
+}
+
 /** Every node's legs, in pipe order. Assumes a validated project (references resolve). */
 export function legsByNode(project: Project): Map<string, Leg[]> {
   const nodes = new Map<string, ProjectNode>();
@@ -32,19 +52,9 @@ export function legsByNode(project: Project): Map<string, Leg[]> {
     const a = nodes.get(pipe.from);
     const b = nodes.get(pipe.to);
     if (!a || !b) continue;
-    const dx = b.x - a.x;
-    const dy = b.y - a.y;
-    const dz = b.elevation - a.elevation;
-    const length = Math.sqrt(dx * dx + dy * dy + dz * dz);
-    const thrustArea = circleArea(meters(useOutside ? pipe.outsideDiameter : pipe.insideDiameter));
-    const flowArea = circleArea(meters(pipe.insideDiameter));
-    const ux = dx / length;
-    const uy = dy / length;
-    const uz = dz / length;
-    legs.get(a.id)!.push({ pipe, far: b, direction: [ux, uy, uz], length, thrustArea, flowArea, outflow: pipe.flow });
-    legs
-      .get(b.id)!
-      .push({ pipe, far: a, direction: [-ux, -uy, -uz], length, thrustArea, flowArea, outflow: -pipe.flow });
+    const [fromA, fromB] = pipeLegs(pipe, a, b, useOutside);
+    legs.get(a.id)!.push(fromA);
+    legs.get(b.id)!.push(fromB);
   }
   return legs;
 }

@@ -88,12 +88,17 @@ export function runLayout(project: Project, legs: ReadonlyMap<string, readonly L
     return run;
   };
 
+  // Once every pipe is walked no start is left: stop instead of trying the rest (a long route has
+  // three candidate starts per node).
+  let pipeEnds = 0;
+  for (const l of legs.values()) pipeEnds += l.length;
   for (const start of starts) {
+    if (2 * walked.size >= pipeEnds) break;
     const first = (legs.get(start.id) ?? []).find((l) => !walked.has(l.pipe.id));
     if (!first) continue;
     const queue: Pending[] = [{ start: start.id, leg: first, parent: null }];
-    while (queue.length) {
-      const p = queue.shift()!;
+    for (let q = 0; q < queue.length; q++) {
+      const p = queue[q]!;
       if (walked.has(p.leg.pipe.id)) continue;
       const run = walk(p);
       // Branches leave this run's nodes in chainage order, each pipe not yet walked.

@@ -1,0 +1,96 @@
+import { savedDocument } from '../state/savedDocument.js';
+import type { AppStore } from '../state/store.js';
+import type { Actions } from '../state/actions.js';
+import { download, fileStem, projectText, scheduleCsvText, scheduleJsonText } from '../files/projectFile.js';
+import { blankProject } from '../files/blankProject.js';
+import type { ActionName } from './actionTable.js';
+import { loadExchange } from '../files/routeImport.js';
+
+/** Parts of the window a command needs: the file picker and the print view. */
+export interface CommandUi {
+  pickFile: () => void;
+  print: () => void;
+}
+
+const ui: Partial<CommandUi> = {};
+
+/** The top bar and the app register the file picker and the print view here when they mount. */
+export function registerCommandUi(part: Partial<CommandUi>) {
+  Object.assign(ui, part);
+}
+
+/** Whether the design holds work not in a file: anything drawn since it was last saved or opened. */
+export function hasUnsavedWork(store: AppStore): boolean {
+  const s = store.getState();
+  return s.project.nodes.length > 0 && s.project !== s.fileBaseline;
+}
+
+/** New: a blank project from the documented defaults, in the units in use; asks first when work would be lost. */
+function startNew(store: AppStore, actions: Actions) {
+  const go = () => {
+    const blank = { ...blankProject(), units: store.getState().units };
+    actions.replaceProject(blank);
+    actions.markSaved(blank);
+    actions.notify(null);
+  };
+  if (!hasUnsavedWork(store)) return go();
+  actions.notify({
+    tone: 'warning',
+    title: 'Start a new project? This one has changes not saved to a file.',
+    lines: ['Save it first to keep a file, or discard it (Undo still brings it back in this session).'],
+    actions: [
+      {
+        label: 'Save, then start new',
+        run: () => {
+          runCommand('save', store, actions);
+          go();
+        },
+      },
+      { label: 'Discard and start new', run: go },
+      { label: 'Keep working', run: () => actions.notify(null) },
+    ],
+  });
+}
+
+/** The design as GeoJSON for a GIS; the exchange module loads only now (docs/routes.md). */
+async function exportGeoJson(store: AppStore, actions: Actions) {
+  const ex = await loadExchange();
+  const project = store.getState().project;
+  const r = ex.designGeoJson(project);
+  if (r.ok) download(`${fileStem(project)}.geojson`, r.text, 'application/geo+json');
+  else actions.notify({ tone: 'error', title: 'The design was not exported as GeoJSON', lines: [r.message] });
+}
+
+/** Carries out a window command (the plan's own commands are the dispatcher's). */
+export function runCommand(name: ActionName, store: AppStore, actions: Actions) {
+  const project = () => store.getState().project;
+  switch (name) {
+    case 'undo':
+      return actions.undo();
+    case 'redo':
+      return actions.redo();
+    case 'new':
+      return startNew(store, actions);
+    case 'open':
+      return ui.pickFile?.();
+    case 'save': {
+      const doc = savedDocument(store.getState());
+      download(`${fileStem(doc)}.json`, projectText(doc), 'application/json');
+      return actions.markSaved(project());
+    }
+    case 'exportCsv':
+      return download(
+        `${fileStem(project())}-schedule.csv`,
+        scheduleCsvText(project(), store.getState().units),
+        'text/csv',
+      );
+    case 'exportJson':
+      return download(`${fileStem(project())}-schedule.json`, scheduleJsonText(project()), 'application/json');
+    case 'exportGeoJson':
+      return void exportGeoJson(store, actions);
+    case 'print':
+      return ui.print?.();
+    default:
+      return;
+  }
+}

@@ -1,0 +1,55 @@
+import { norm } from '../geometry/vector.js';
+import type { ProjectNode } from '../model/projectSchema.js';
+import type { Leg } from '../network/legs.js';
+import type { FittingGeometry } from '../network/fittingKind.js';
+import type { CaseThrust, ThrustEnvelope } from '../thrust/fittingThrust.js';
+import type { Restraint } from '../restraint/sizeRestraint.js';
+import { VACUUM_GAUGE_PRESSURE } from '../pressure/nodePressure.js';
+import { diagnostic, uniqueDiagnostics, type Diagnostic } from '../diagnostics/diagnostic.js';
+
+function negativePressure(node: string, cases: readonly CaseThrust[], out: Diagnostic[]): void {
+  for (const c of cases) {
+    if (c.pressure >= 0) continue;
+    const code = c.pressure <= VACUUM_GAUGE_PRESSURE + 1e-6 ? 'pressure.vapour-floor' : 'pressure.below-zero';
+    out.push(diagnostic(code, { node, case: c.caseId }, { pressure: c.pressure }));
+  }
+}
+
+/**
+ * Water in equals water out at a joint (continuity): a node whose pipes' flows do not balance, or a
+ * cap with flow into it, has a flow typed wrong somewhere. Tie-ins and free ends pass water on.
+ */
+function flowImbalance(node: string, legs: readonly Leg[], geometry: FittingGeometry): Diagnostic | null {
+  if (geometry.kind === 'tie-in' || legs.length === 0) return null;
+  let net = 0;
+  let largest = 0;
+  for (const l of legs) {
+    net += l.outflow;
+    largest = Math.max(largest, Math.abs(l.outflow));
+  }
+  if (Math.abs(net) <= 1e-6 + 0.01 * largest) return null;
+  return geometry.kind === 'dead-end'
+    ? diagnostic('flow.into-cap', { node }, { flow: Math.abs(net) })
+    : diagnostic('flow.unbalanced', { node }, { net });
+}
+
+/** A fitting's findings, most severe first: its inputs, its pressures, its restraint, its flows, its valve. */
+export function fittingDiagnostics(
+  node: ProjectNode,
+  legs: readonly Leg[],
+  geometry: FittingGeometry,
+  cases: readonly CaseThrust[],
+  envelope: ThrustEnvelope,
+  restraint: Restraint,
+  inputs: readonly Diagnostic[],
+): Diagnostic[] {
+  const found: Diagnostic[] = [...inputs];
+  negativePressure(node.id, cases, found);
+  for (const d of restraint.diagnostics) found.push(d);
+  const unbalanced = flowImbalance(node.id, legs, geometry);
+  if (unbalanced) found.push(unbalanced);
+  if (node.valve && geometry.kind === 'valve') found.push(diagnostic('valve.both-ways', { node: node.id }));
+  else if (node.valve) found.push(diagnostic('valve.flag-ignored', { node: node.id }));
+  if (norm(envelope.governing.total) === 0) found.push(diagnostic('thrust.none', { node: node.id }));
+  return found.length ? uniqueDiagnostics(found) : found;
+}
