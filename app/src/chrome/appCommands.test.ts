@@ -64,12 +64,13 @@ describe('opening a route fits the view to it', () => {
       [{ from: 'a', to: 'b' }],
     );
     h.actions.replaceProject(far);
+    // inside the 800 × 500 canvas less Fit's margin of 0.14 × 500 = 70 px
     for (const n of far.nodes) {
       const p = toScreen(h.state().viewport, n);
-      expect(p.sx).toBeGreaterThanOrEqual(100 - 1e-9);
-      expect(p.sx).toBeLessThanOrEqual(700 + 1e-9);
-      expect(p.sy).toBeGreaterThanOrEqual(100 - 1e-9);
-      expect(p.sy).toBeLessThanOrEqual(400 + 1e-9);
+      expect(p.sx).toBeGreaterThanOrEqual(70 - 1e-9);
+      expect(p.sx).toBeLessThanOrEqual(730 + 1e-9);
+      expect(p.sy).toBeGreaterThanOrEqual(70 - 1e-9);
+      expect(p.sy).toBeLessThanOrEqual(430 + 1e-9);
     }
   });
 });

@@ -1,10 +1,10 @@
+import { loadExchange } from '../files/routeImport.js';
 import { savedDocument } from '../state/savedDocument.js';
 import type { AppStore } from '../state/store.js';
 import type { Actions } from '../state/actions.js';
 import { download, fileStem, projectText, scheduleCsvText, scheduleJsonText } from '../files/projectFile.js';
 import { blankProject } from '../files/blankProject.js';
 import type { ActionName } from './actionTable.js';
-import { loadExchange } from '../files/routeImport.js';
 
 /** Parts of the window a command needs: the file picker and the print view. */
 export interface CommandUi {

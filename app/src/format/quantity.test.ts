@@ -50,7 +50,19 @@ describe('editable and parseTyped round trip', () => {
     expect(editable(1e6, 'pressure', 'si')).toBe('1000');
   });
 
-  it('reads back what it shows, to its four decimals in display units, in both unit systems (invariant)', () => {
+  it('shows a value typed in US units as typed: 2000 psf, 4.5 ft and 90 psi, not their conversions back', () => {
+    expect(editable(si('2000', 'stress', 'us'), 'stress', 'us')).toBe('2000');
+    expect(editable(si('4.5', 'length', 'us'), 'length', 'us')).toBe('4.5');
+    expect(editable(si('90', 'pressure', 'us'), 'pressure', 'us')).toBe('90');
+  });
+
+  it('shows a value typed in SI to four significant figures in US units: 1.5 m is 4.921 ft, 620 kPa is 89.92 psi', () => {
+    // 1.5 / 0.3048 = 4.92126 ft; 620 000 / 6894.757 = 89.923 psi (exact factors above)
+    expect(editable(1.5, 'length', 'us')).toBe('4.921');
+    expect(editable(620e3, 'pressure', 'us')).toBe('89.92');
+  });
+
+  it('reads back what it shows, to four significant figures in display units, in both unit systems (invariant)', () => {
     const dims: Dimension[] = [
       'length',
       'elevation',
@@ -74,7 +86,8 @@ describe('editable and parseTyped round trip', () => {
         (dim, units, value) => {
           const factor = si('1', dim, units); // SI value of one display unit
           const back = si(editable(value, dim, units), dim, units);
-          expectClose(back, value, 0.5e-4 * factor * (1 + 1e-9) + 1e-12 * Math.abs(value));
+          // four significant figures: within 5 parts in 10⁴ of the value (and exact when it is short)
+          expectClose(back, value, 5e-4 * Math.abs(value) * (1 + 1e-9) + 1e-12 * factor);
         },
       ),
       { seed: 1234, numRuns: 400 },

@@ -17,13 +17,32 @@ export const show = (si: number, dim: Dimension, units: UnitSystem, significant 
 export const showColumnForce = (si: number, units: UnitSystem): string =>
   units === 'us' ? `${formatNumber(si / KIP)} kip` : formatSi(si, 'force', 'si');
 
+/** A force as a bare number in the column's one unit (kN, or kip in US units), the unit in the heading. */
+export const columnForce = (si: number, units: UnitSystem): string =>
+  formatNumber(units === 'us' ? si / KIP : si / 1000);
+
 /** The unit symbol of a dimension in the chosen system. */
 export const unitOf = (dim: Dimension, units: UnitSystem): string => unitSymbol(dim, units);
 
-/** A value in display units for an input field, with as many digits as the user is likely to have typed. */
+/** Same value to a part in 10⁹: what a typed number comes back as after conversion to SI and back. */
+const same = (a: number, b: number) => Math.abs(a - b) <= 1e-9 * Math.max(Math.abs(a), Math.abs(b), 1e-12);
+
+/**
+ * A value in display units for an input field: the shortest number (up to 6 significant digits) that
+ * is the stored value — so "2000" psf typed shows as 2000, not 2000.0000001 — else, for a value typed
+ * in the other system, four significant figures (never fewer than the whole number): 4.921 ft, 89.92 psi.
+ * Showing never changes what is stored: a field left unchanged is not written back (NumberField).
+ */
 export function editable(si: number, dim: Dimension, units: UnitSystem): string {
   const v = toDisplay(si, dim, units);
-  return String(Math.round(v * 10000) / 10000);
+  if (v === 0 || !Number.isFinite(v)) return String(v);
+  for (let digits = 1; digits <= 6; digits++) {
+    const shown = Number(v.toPrecision(digits));
+    if (same(fromDisplay(shown, dim, units), si)) return String(shown);
+  }
+  const whole = Math.floor(Math.log10(Math.abs(v))) + 1;
+  const decimals = Math.min(12, Math.max(0, 4 - whole));
+  return String(Number(v.toFixed(decimals)));
 }
 
 /** Feet and inches as a site engineer writes them: 4'6", 4' 6, 4 ft 6 in, 4 ft. */

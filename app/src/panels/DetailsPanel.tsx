@@ -1,3 +1,4 @@
+import { useLayoutEffect, useRef } from 'react';
 import { SHORT_CAUTION } from '@mainbrace/solver';
 import { useAnalysis, useApp } from '../state/StoreContext.js';
 import { NodeDetails } from './NodeDetails.js';
@@ -11,6 +12,12 @@ export function DetailsPanel() {
   const selection = useApp((s) => s.selection);
   const analysis = useAnalysis();
   const count = selection.nodes.size + selection.pipes.size;
+  // Another item chosen: its details start at the top, not at the last one's scroll position.
+  const panel = useRef<HTMLElement>(null);
+  const chosen = [...selection.nodes, '|', ...selection.pipes].join(' ');
+  useLayoutEffect(() => {
+    if (panel.current) panel.current.scrollTop = 0;
+  }, [chosen]);
   let body;
   if (count === 1 && selection.nodes.size === 1) {
     const id = [...selection.nodes][0]!;
@@ -34,7 +41,7 @@ export function DetailsPanel() {
     );
   } else body = <RouteSummary />;
   return (
-    <aside className="details" aria-label="Details" data-testid="details">
+    <aside className="details" aria-label="Details" data-testid="details" ref={panel} tabIndex={-1}>
       {body}
       <p className="caution-foot" role="note">
         {SHORT_CAUTION}

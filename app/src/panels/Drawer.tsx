@@ -1,9 +1,10 @@
-import { lazy, Suspense } from 'react';
+import { lazy, Suspense, useLayoutEffect, useRef } from 'react';
 import { useActions, useApp } from '../state/StoreContext.js';
 import type { DrawerTab } from '../state/store.js';
 import { ScheduleTable } from './ScheduleTable.js';
 import { CasesPanel } from './CasesPanel.js';
 import { SoilsPanel } from './SoilsPanel.js';
+import { UnderlayPanel } from './UnderlayPanel.js';
 import { importOrReload } from '../chrome/loadChunk.js';
 
 const ProfilePanel = lazy(() =>
@@ -15,6 +16,7 @@ const TABS: { tab: DrawerTab; label: string }[] = [
   { tab: 'profile', label: 'Profile' },
   { tab: 'cases', label: 'Pressure cases' },
   { tab: 'soils', label: 'Soils & design' },
+  { tab: 'underlay', label: 'Site plan' },
 ];
 
 /** The route-wide views under the plan; it can be raised to fill the window for the schedule. */
@@ -23,6 +25,13 @@ export function Drawer() {
   const actions = useActions();
   const heights = ['closed', 'low', 'high', 'full'] as const;
   const i = heights.indexOf(drawer.height);
+  // Each tab keeps its own scroll position: the schedule stays where it was after a look at the cases.
+  const body = useRef<HTMLDivElement>(null);
+  const scrolls = useRef(new Map<DrawerTab, number>());
+  useLayoutEffect(() => {
+    const el = body.current;
+    if (el) el.scrollTop = scrolls.current.get(drawer.tab) ?? 0;
+  }, [drawer.tab, drawer.height]);
   return (
     <section className={`drawer drawer-${drawer.height}`} aria-label="Route views">
       <div className="drawer-tabs" role="tablist">
@@ -60,7 +69,15 @@ export function Drawer() {
         </button>
       </div>
       {drawer.height !== 'closed' && (
-        <div className="drawer-body" id="drawer-body" role="tabpanel" aria-labelledby={`tab-${drawer.tab}`}>
+        <div
+          className="drawer-body"
+          id="drawer-body"
+          role="tabpanel"
+          aria-labelledby={`tab-${drawer.tab}`}
+          ref={body}
+          onScroll={(e) => scrolls.current.set(drawer.tab, e.currentTarget.scrollTop)}
+          data-testid="drawer-body"
+        >
           {drawer.tab === 'schedule' && <ScheduleTable />}
           {drawer.tab === 'profile' && (
             <Suspense fallback={<p className="muted">Loading the profile…</p>}>
@@ -69,6 +86,7 @@ export function Drawer() {
           )}
           {drawer.tab === 'cases' && <CasesPanel />}
           {drawer.tab === 'soils' && <SoilsPanel />}
+          {drawer.tab === 'underlay' && <UnderlayPanel />}
         </div>
       )}
     </section>

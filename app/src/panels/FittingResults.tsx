@@ -13,13 +13,15 @@ import {
   restrainedJointCount,
   REGISTER,
   unverified,
+  formatNumber,
+  toDisplay,
   type FittingAnalysis,
   type Project,
 } from '@mainbrace/solver';
-import { show, showColumnForce } from '../format/quantity.js';
+import { columnForce, show, unitOf } from '../format/quantity.js';
 import { bearingText, fittingTitle } from '../format/fittingNames.js';
 import { useDiagnosticWords } from '../format/words.js';
-import { useAnalysis, useApp } from '../state/StoreContext.js';
+import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
 import { CalcRecordView } from './CalcRecordView.js';
 
 /** The results of one fitting: thrust per case, the governing case, its restraint and warnings. */
@@ -32,16 +34,21 @@ const BLOCK_GOVERNS = {
 
 export function FittingResults({ fitting: f, project }: { fitting: FittingAnalysis; project: Project }) {
   const u = useApp((s) => s.units);
+  const actions = useActions();
   const analysis = useAnalysis();
   const words = useDiagnosticWords();
   const r = f.restraint;
   const e = f.envelope;
   const open = unverified(f.basis);
+  const forceUnit = u === 'us' ? 'kip' : 'kN';
   return (
     <section className="results" aria-label={`Results for ${f.mark}`} data-testid="fitting-results">
       <h3>
         <span className="mark">{f.mark}</span> {fittingTitle({ ...f.geometry, profile: fittingProfile(f) })}
       </h3>
+      <button className="link zoom-to" onClick={() => actions.zoomToFitting(f.node.id)} data-testid="zoom-to-fitting">
+        Zoom to {f.mark} on the plan
+      </button>
       <dl className="facts">
         <dt>Chainage</dt>
         <dd>{show(f.chainage, 'length', u, 4)}</dd>
@@ -72,31 +79,44 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
         </dd>
       </dl>
       <div className="table-scroll">
+        {/* One column per case (usually three), one row per quantity with its unit: it fits the panel,
+            where a row per case with seven columns was cut. */}
         <table className="cases-table">
           <thead>
             <tr>
               <th>Case</th>
-              <th>Pressure</th>
-              <th>Static</th>
-              <th>Dynamic</th>
-              <th>Total</th>
-              <th>Up (+)</th>
-              <th>Bears</th>
+              {f.cases.map((c) => (
+                <th key={c.caseId} className={c.caseId === e.governing.caseId ? 'governing' : ''}>
+                  {caseLabel(project, c.caseId)}
+                  {c.caseId === e.governing.caseId ? ' ◆' : ''}
+                </th>
+              ))}
             </tr>
           </thead>
           <tbody>
-            {f.cases.map((c) => (
-              <tr key={c.caseId} className={c.caseId === e.governing.caseId ? 'governing' : ''}>
-                <td>
-                  {caseLabel(project, c.caseId)}
-                  {c.caseId === e.governing.caseId ? ' ◆' : ''}
-                </td>
-                <td>{show(c.pressure, 'pressure', u)}</td>
-                <td>{showColumnForce(norm(c.static), u)}</td>
-                <td>{showColumnForce(norm(c.dynamic), u)}</td>
-                <td>{showColumnForce(norm(c.total), u)}</td>
-                <td>{showColumnForce(Math.abs(c.total[2]) < 1e-6 * norm(c.total) ? 0 : c.total[2], u)}</td>
-                <td>{bearingText(horizontalNorm(c.total) > 0 ? planBearing([c.total[0], c.total[1], 0]) : null)}</td>
+            {(
+              [
+                [`Pressure (${unitOf('pressure', u)})`, (c) => formatNumber(toDisplay(c.pressure, 'pressure', u))],
+                [`Static (${forceUnit})`, (c) => columnForce(norm(c.static), u)],
+                [`Dynamic (${forceUnit})`, (c) => columnForce(norm(c.dynamic), u)],
+                [`Total (${forceUnit})`, (c) => columnForce(norm(c.total), u)],
+                [
+                  `Up (+) (${forceUnit})`,
+                  (c) => columnForce(Math.abs(c.total[2]) < 1e-6 * norm(c.total) ? 0 : c.total[2], u),
+                ],
+                [
+                  'Bears',
+                  (c) => bearingText(horizontalNorm(c.total) > 0 ? planBearing([c.total[0], c.total[1], 0]) : null),
+                ],
+              ] as [string, (c: (typeof f.cases)[number]) => string][]
+            ).map(([label, cell]) => (
+              <tr key={label}>
+                <th scope="row">{label}</th>
+                {f.cases.map((c) => (
+                  <td key={c.caseId} className={c.caseId === e.governing.caseId ? 'governing' : ''}>
+                    {cell(c)}
+                  </td>
+                ))}
               </tr>
             ))}
           </tbody>

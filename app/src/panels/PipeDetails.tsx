@@ -15,7 +15,9 @@ import {
   type Pipe,
   type Project,
 } from '@mainbrace/solver';
+import { useState } from 'react';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
+import { planLength } from '../state/legLength.js';
 import { pipeLength } from './routeFigures.js';
 import { MATERIAL_NAME } from '../plan/palette.js';
 import { show } from '../format/quantity.js';
@@ -24,16 +26,19 @@ import { NumberField } from './NumberField.js';
 const CUSTOM = '__custom';
 
 /** The inputs of a pipe: material, catalogue size or custom diameters, flow, label, laying details. */
-export function PipeDetails({ pipe }: { pipe: Pipe; project: Project }) {
+export function PipeDetails({ pipe, project }: { pipe: Pipe; project: Project }) {
   const actions = useActions();
   const u = useApp((s) => s.units);
   const set = (patch: Partial<Pipe>) => actions.updatePipe(pipe.id, patch);
   const series = pipe.series ? findSeries(pipe.series) : undefined;
-  const project = useApp((s) => s.project);
   const choices = seriesChoices(pipe.material, project.units);
   const length = pipeLength(useAnalysis(), pipe);
   const bedding = findBedding(pipe.trenchType);
   const rating = pipe.series && pipe.nominal ? findSize(pipe.series, pipe.nominal)?.rating : undefined;
+  const plan = planLength(project, pipe.id);
+  const [moving, setMoving] = useState<'from' | 'to'>('to');
+  const movedId = moving === 'to' ? pipe.to : pipe.from;
+  const fixedId = moving === 'to' ? pipe.from : pipe.to;
 
   const pickSeries = (id: string) => {
     if (id === CUSTOM) return set({ series: undefined, nominal: undefined });
@@ -79,6 +84,26 @@ export function PipeDetails({ pipe }: { pipe: Pipe; project: Project }) {
           onChange={(e) => set({ label: e.target.value || undefined })}
         />
       </div>
+      <NumberField
+        label="Plan length"
+        value={plan}
+        dimension="length"
+        units={u}
+        min={0}
+        exclusiveMin
+        max={1e6}
+        onCommit={(length) => actions.setPipeLength(pipe.id, length, moving)}
+        testId="pipe-plan-length"
+        hint={`Typing a length moves ${movedId} along the pipe; ${fixedId} stays.`}
+      />
+      <button
+        type="button"
+        className="link small leg-swap"
+        onClick={() => setMoving(moving === 'to' ? 'from' : 'to')}
+        data-testid="pipe-length-swap"
+      >
+        Move {fixedId} instead
+      </button>
       <div className="field">
         <label htmlFor="pipe-material">Material</label>
         <select id="pipe-material" value={pipe.material} onChange={(e) => pickMaterial(e.target.value as Material)}>

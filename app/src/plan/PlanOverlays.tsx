@@ -1,6 +1,7 @@
 import type { RefObject } from 'react';
-import { FOOT, formatSi, KIND_NAME, POUND_FORCE, type Material } from '@mainbrace/solver';
-import { useApp } from '../state/StoreContext.js';
+import { FOOT, formatSi, KIND_NAME, KIP, type Material } from '@mainbrace/solver';
+import { useActions, useApp } from '../state/StoreContext.js';
+import { showColumnForce } from '../format/quantity.js';
 import { gridSpacing } from '../state/viewport.js';
 import { gridStep } from './drawGrid.js';
 import { ARROW_PX } from './drawRoute.js';
@@ -9,9 +10,9 @@ import { FittingGlyph } from './FittingGlyph.js';
 import { LEGEND_KINDS } from './symbols.js';
 import type { Scene } from './planScene.js';
 
-/** A round force below `f` for the arrow legend: 1, 2, 5 × 10ⁿ in kN or lbf. */
+/** A round force below `f` for the arrow legend: 1, 2, 5 × 10ⁿ in kN or kip (the plan's one force unit). */
 function roundForce(f: number, us: boolean): number {
-  const unit = us ? POUND_FORCE : 1000;
+  const unit = us ? KIP : 1000;
   const v = f / unit;
   const p = Math.pow(10, Math.floor(Math.log10(v)));
   const m = [5, 2, 1].find((k) => k * p <= v) ?? 1;
@@ -23,6 +24,8 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
   const viewport = useApp((s) => s.viewport);
   const units = useApp((s) => s.units);
   const tool = useApp((s) => s.tool);
+  const legendOpen = useApp((s) => s.legendOpen);
+  const actions = useActions();
   const caseView = useApp((s) => s.caseView);
   const cases = useApp((s) => s.project.loadCases);
   const shown =
@@ -65,8 +68,39 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
           <span ref={coordsRef}>pointer position: move over the plan</span>
         </div>
       </div>
-      <div className="plan-legend" aria-label="Legend">
-        <div className="legend-title">Thrust shown: {shown}</div>
+      {!legendOpen && (
+        <button
+          className="legend-toggle legend-closed"
+          aria-expanded={false}
+          aria-controls="plan-legend"
+          onClick={() => actions.setLegendOpen(true)}
+          onPointerDown={(e) => e.stopPropagation()}
+          data-testid="legend-toggle"
+        >
+          Legend ▴
+        </button>
+      )}
+      <div
+        className="plan-legend"
+        id="plan-legend"
+        aria-label="Legend"
+        hidden={!legendOpen}
+        data-testid="legend"
+        onPointerDown={(e) => e.stopPropagation()}
+      >
+        <div className="legend-title">
+          <span>Thrust shown: {shown}</span>
+          <button
+            className="legend-toggle"
+            aria-expanded={true}
+            aria-controls="plan-legend"
+            title="Hide the legend (Fit then uses the whole plan)"
+            onClick={() => actions.setLegendOpen(false)}
+            data-testid="legend-hide"
+          >
+            Hide ▾
+          </button>
+        </div>
         {materials.map((m) => (
           <div key={m} className="legend-row">
             <svg width="34" height="10" aria-hidden="true">
@@ -90,7 +124,7 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
               <line x1="2" y1="5" x2={refPx - 4} y2="5" stroke={PALETTE.thrust} strokeWidth="2.2" />
               <path d={`M${refPx + 2} 5 l-8 -4 v8 z`} fill={PALETTE.thrust} />
             </svg>
-            horizontal thrust {formatSi(ref, 'force', units)}
+            horizontal thrust {showColumnForce(ref, units)}
           </div>
         )}
         {kinds.length > 0 && (

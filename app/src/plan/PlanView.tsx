@@ -4,7 +4,7 @@ import { useCallback, useEffect, useMemo, useRef, useState, type PointerEvent as
 import { Layer, Shape, Stage } from 'react-konva/lib/ReactKonvaCore.js';
 import type { Context } from 'konva/lib/Context';
 import type { Shape as KonvaShape } from 'konva/lib/Shape';
-import { FOOT } from '@mainbrace/solver';
+import { analyse, FOOT, imageToPlan } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp, useAppStore } from '../state/StoreContext.js';
 import { toPlan, type ScreenPoint } from '../state/viewport.js';
 import { dragScene, planScene } from './planScene.js';
@@ -14,6 +14,13 @@ import { drawRestrainedZones } from './drawZones.js';
 import { drawGrid } from './drawGrid.js';
 import { drawHover, drawOverlay } from './drawOverlay.js';
 import { PlanOverlays } from './PlanOverlays.js';
+import { liveChanges } from './liveChange.js';
+import { drawLiveChange } from './drawLiveChange.js';
+import { EMPTY_SELECTION } from '../state/slices.js';
+import { drawPicks, drawUnderlay } from './drawUnderlay.js';
+import { useUnderlayImage } from '../state/underlayImage.js';
+import { UnderlayHint } from './UnderlayHint.js';
+import { TypedEntryBox } from './TypedEntryBox.js';
 import { sendPlanEvent } from '../tools/planBridge.js';
 import type { PlanEvent, PointerKind } from '../tools/planInput.js';
 import { runCommand } from '../chrome/appCommands.js';
@@ -55,10 +62,29 @@ export function PlanView() {
   const hover = useApp((s) => s.hover);
   const selectBox = useApp((s) => s.selectBox);
   const gesture = useApp((s) => s.gesture.kind);
+  const underlay = useApp((s) => s.project.underlay);
+  const underlayPick = useApp((s) => s.underlayPick);
+  const underlayImage = useUnderlayImage(underlay);
   const analysis = useAnalysis();
   // The drawn document: the store's in every result input (positions, pipes, restraint), and the same
   // object after an edit of the name or the units, so such an edit redraws nothing.
   const drawn = analysis.project;
+  const liveBase = useApp((s) => s.liveBase);
+  // While the test pressure is dragged: the scene before the drag, for its arrow scale and block ghosts.
+  const before = useMemo(
+    () =>
+      liveBase
+        ? (() => {
+            const baseAnalysis = analyse(liveBase);
+            return {
+              scene: planScene(liveBase, baseAnalysis, caseView, EMPTY_SELECTION, null),
+              analysis: baseAnalysis,
+            };
+          })()
+        : null,
+    [liveBase, caseView],
+  );
+  const changes = useMemo(() => (before ? liveChanges(before.analysis, analysis) : []), [before, analysis]);
   const box = useRef<HTMLDivElement>(null);
   const coords = useRef<HTMLSpanElement>(null);
 
@@ -86,12 +112,17 @@ export function PlanView() {
   // their pipes out (and so is not redrawn), the interactive layer draws them where they are now.
   const movedKey = preview ? [...preview.keys()].sort().join('\u0000') : '';
   const [keep] = useState(sceneKeeper);
-  const scene = useMemo(
+  const current = useMemo(
     () =>
       keep(
         planScene(drawn, analysis, caseView, selection, null, movedKey ? new Set(movedKey.split('\u0000')) : undefined),
       ),
     [keep, drawn, analysis, caseView, selection, movedKey],
+  );
+  // One arrow scale held through the drag, so the arrows grow with the pressure instead of rescaling.
+  const scene = useMemo(
+    () => (before ? { ...current, largestForce: Math.max(before.scene.largestForce, 1e-9) } : current),
+    [current, before],
   );
   const moving = useMemo(
     () => (preview ? dragScene(drawn, analysis, selection, preview) : null),
@@ -114,9 +145,10 @@ export function PlanView() {
     (_: Context, shape: KonvaShape) => {
       const ctx = native(shape);
       drawGrid(ctx, viewport, width, height, units);
+      if (underlay && underlayImage.status === 'ready') drawUnderlay(ctx, viewport, underlay, underlayImage.image);
       drawRestraints(ctx, viewport, { polygons }, width, height);
     },
-    [viewport, width, height, units, polygons],
+    [viewport, width, height, units, polygons, underlay, underlayImage],
   );
   const drawRoute = useCallback(
     (_: Context, shape: KonvaShape) => drawPipes(native(shape), viewport, { pipes }, width, height),
@@ -181,6 +213,8 @@ export function PlanView() {
 
   const onWheel = useCallback(
     (e: WheelEvent) => {
+      // The legend scrolls its own content.
+      if (e.target instanceof Element && e.target.closest('.plan-legend')) return;
       e.preventDefault();
       const r = box.current!.getBoundingClientRect();
       send({ type: 'wheel', at: { sx: e.clientX - r.left, sy: e.clientY - r.top }, deltaY: e.deltaY });
@@ -196,7 +230,7 @@ export function PlanView() {
   const cursor =
     gesture === 'pan'
       ? 'grabbing'
-      : tool === 'draw'
+      : tool === 'draw' || (underlayPick && underlayPick.length < 2)
         ? 'crosshair'
         : tool === 'pan'
           ? 'grab'
@@ -247,13 +281,26 @@ export function PlanView() {
                   placeTags(ctx, viewport, moving, new LabelSpace(size.width, size.height)),
                 );
               }
+              if (before)
+                drawLiveChange(ctx, viewport, before.scene.polygons, changes, (id) => {
+                  const c = drawn.loadCases.find((x) => x.id === id);
+                  return c?.label ?? id;
+                });
               drawHover(ctx, viewport, drawn, hover, tool === 'draw');
               drawOverlay(ctx, viewport, draw, selectBox, units, snappedNow);
+              if (underlayPick && underlay)
+                drawPicks(
+                  ctx,
+                  viewport,
+                  underlayPick.map((q) => imageToPlan(underlay, q)),
+                );
             }}
           />
         </Layer>
       </Stage>
       <PlanOverlays scene={scene} coordsRef={coords} />
+      <UnderlayHint />
+      <TypedEntryBox />
     </div>
   );
 }

@@ -1,4 +1,4 @@
-import { formatSi, type UnitSystem } from '@mainbrace/solver';
+import type { UnitSystem } from '@mainbrace/solver';
 import type { Scene } from './planScene.js';
 import { toScreen, type Viewport } from '../state/viewport.js';
 import { LINE, MATERIAL_DASH, PALETTE, TYPE, pipeWidth } from './palette.js';
@@ -13,6 +13,7 @@ import {
   segmentOnScreen,
   textWidth,
 } from './levelOfDetail.js';
+import { showColumnForce } from '../format/quantity.js';
 
 type Ctx = CanvasRenderingContext2D;
 
@@ -315,9 +316,10 @@ export function drawArrows(
     ];
     if (!room(24).some((r) => space.fits(r))) continue;
     const total = Math.hypot(a.horizontal, a.vertical);
-    let text = formatSi(a.horizontal, 'force', units);
+    // One force unit for the whole plan (kN, or kip in US units): a label never switches to lbf.
+    let text = showColumnForce(a.horizontal, units);
     if (Math.abs(a.vertical) > 0.02 * total)
-      text += `  ${a.vertical > 0 ? '↑' : '↓'} ${formatSi(Math.abs(a.vertical), 'force', units)}`;
+      text += `  ${a.vertical > 0 ? '↑' : '↓'} ${showColumnForce(Math.abs(a.vertical), units)}`;
     const w = textWidth(ctx, TYPE.force, text) + 4;
     const spot = space.place(room(w));
     if (spot) label(ctx, text, spot.x + 2, spot.y + h / 2, PALETTE.thrust, TYPE.force);

@@ -1,4 +1,4 @@
-import { type LoadCase, type Pipe, type Project, type ProjectNode, type Soil } from '@mainbrace/solver';
+import { type LoadCase, type Pipe, type Project, type ProjectNode, type Soil, type Underlay } from '@mainbrace/solver';
 import type { AppState, AppStore, CaseView, DrawerTab, Selection, ToolName } from './store.js';
 import { EMPTY_SELECTION } from './store.js';
 import {
@@ -12,6 +12,7 @@ import {
   type RouteEnd,
 } from './documentEdits.js';
 import type { Viewport } from './viewport.js';
+import { setPlanLength } from './legLength.js';
 import { routePieces } from './connectivity.js';
 import type { DrawState } from '../tools/drawTool.js';
 import { fittedView, revealFitting as planCommandReveal, showFitting } from '../tools/planCommands.js';
@@ -70,7 +71,9 @@ export function createActions(store: AppStore) {
     const same = typing !== undefined && lastTyping?.key === typing && now - lastTyping.at < TYPING_WINDOW_MS;
     lastTyping = typing === undefined ? null : { key: typing, at: now };
     if (same) history().pause();
-    set({ project: after, selection: prune(get().selection, after) });
+    // A passing message ("Deleted 2 nodes — Ctrl+Z brings them back") is out of date after the next edit.
+    const stale = get().notice?.tone === 'info' ? { notice: null } : {};
+    set({ project: after, selection: prune(get().selection, after), ...stale });
     if (same) history().resume();
   };
   const history = () => store.temporal.getState();
@@ -121,6 +124,9 @@ export function createActions(store: AppStore) {
       edit((p) => updateNode(p, id, patch), 'label' in patch ? `node-label-${id}` : undefined),
     updatePipe: (id: string, patch: Partial<Pipe>) =>
       edit((p) => updatePipe(p, id, patch), 'label' in patch ? `pipe-label-${id}` : undefined),
+    /** A pipe's plan length, moving one of its nodes along it (the other stays). */
+    setPipeLength: (id: string, length: number, moving: 'from' | 'to') =>
+      edit((p) => setPlanLength(p, id, length, moving)),
     /** Bedding and wrap for every pipe at once: one undo step. */
     setBeddingEverywhere: (patch: Pick<Partial<Pipe>, 'trenchType' | 'encasement'>) =>
       edit((p) =>
@@ -128,6 +134,18 @@ export function createActions(store: AppStore) {
           ? p
           : { ...p, pipes: p.pipes.map((x) => ({ ...x, ...patch })) },
       ),
+    /** Puts a site-plan image under the route, or takes it away (undefined). */
+    setUnderlay: (underlay: Underlay | undefined) => {
+      set({ underlayPick: null });
+      edit((p) => {
+        if (underlay) return { ...p, underlay };
+        const { underlay: _gone, ...rest } = p;
+        return rest;
+      });
+    },
+    /** Opacity, lock or placement of the underlay. */
+    updateUnderlay: (patch: Partial<Underlay>) =>
+      edit((p) => (p.underlay ? { ...p, underlay: { ...p.underlay, ...patch } } : p)),
     renameProject: (name: string) => edit((p) => ({ ...p, name }), 'project-name'),
     /** Display units are a view setting: no undo step, no change to any result. */
     setUnits: (units: Project['units']) => set({ units }),
@@ -166,7 +184,13 @@ export function createActions(store: AppStore) {
      */
     replaceProject: (project: Project) => {
       edit(() => project, undefined, true);
-      set({ units: project.units, selection: EMPTY_SELECTION, draw: { phase: 'idle' }, dragPreview: null });
+      set({
+        units: project.units,
+        selection: EMPTY_SELECTION,
+        draw: { phase: 'idle' },
+        dragPreview: null,
+        underlayPick: null,
+      });
       // A route opened into the old view may lie wholly off screen: show all of it.
       if (get().canvas.width > 0) set({ viewport: fittedView(planInputOf(get())) });
     },
@@ -180,6 +204,7 @@ export function createActions(store: AppStore) {
     beginLiveEdit: () => {
       if (liveStart) return; // a key held down repeats: the gesture began at the first press
       liveStart = get().project;
+      set({ liveBase: liveStart });
       history().pause();
     },
     endLiveEdit: () => {
@@ -188,6 +213,7 @@ export function createActions(store: AppStore) {
       set({ project: liveStart });
       history().resume();
       liveStart = null;
+      set({ liveBase: null });
       if (final !== get().project) set({ project: final });
     },
     /** A document change during a live edit (no undo step of its own). */
@@ -210,6 +236,9 @@ export function createActions(store: AppStore) {
     toggleSnapping: () => set({ snapping: !get().snapping }),
     setPipeSpec: (pipeSpec: PipeSpec) => set({ pipeSpec }),
     setDraw: (draw: DrawState) => set({ draw }),
+    /** Starts picking two points on the underlay to calibrate it. */
+    startUnderlayPick: () => set({ underlayPick: [] }),
+    cancelUnderlayPick: () => set({ underlayPick: null }),
     setDragPreview: (dragPreview: ReadonlyMap<string, PlanPoint> | null) => set({ dragPreview }),
     select: (selection: Selection) => set({ selection }),
     selectNode: (id: string) => set({ selection: { nodes: new Set([id]), pipes: new Set() } }),

@@ -1,4 +1,4 @@
-import type { Project, UnitSystem } from '@mainbrace/solver';
+import type { ImagePoint, Project, UnitSystem } from '@mainbrace/solver';
 import type { PipeSpec, PlanPoint } from './documentEdits.js';
 import type { Viewport } from './viewport.js';
 import type { DrawState } from '../tools/drawTool.js';
@@ -9,7 +9,7 @@ import type { ScreenPoint } from './viewport.js';
 export type ToolName = 'select' | 'draw' | 'pan';
 /** Which thrusts the plan shows: one load case or the envelope of all. */
 export type CaseView = { kind: 'case'; id: string } | { kind: 'envelope' };
-export type DrawerTab = 'schedule' | 'profile' | 'cases' | 'soils';
+export type DrawerTab = 'schedule' | 'profile' | 'cases' | 'soils' | 'underlay';
 
 export interface Selection {
   nodes: ReadonlySet<string>;
@@ -52,6 +52,8 @@ export interface ViewSlice {
   notice: Notice | null;
   /** the document as last saved to or opened from a file, or as the demo opened; null when unknown */
   fileBaseline: Project | null;
+  /** the document when a live edit (the test-pressure slider) began: the plan holds its arrow scale and shows growth against it */
+  liveBase: Project | null;
 }
 
 /** The active tool and its transient state. */
@@ -62,6 +64,12 @@ export interface ToolSlice {
   draw: DrawState;
   /** nodes being dragged and where they are now; the document changes once, on drop */
   dragPreview: ReadonlyMap<string, PlanPoint> | null;
+  /** image points picked on the plan to calibrate the underlay; null when not picking */
+  underlayPick: readonly ImagePoint[] | null;
+  /** the typed entry while drawing, '' when none */
+  typed: string;
+  /** why the last typed entry was not placed; null when it was */
+  typedError: string | null;
   /** the pointer gesture in progress on the plan */
   gesture: Gesture;
   /** touch points down on the plan, by pointer id */
@@ -88,6 +96,7 @@ export const viewSlice = (units: UnitSystem): ViewSlice => ({
   drawer: { tab: 'schedule', height: 'low' },
   notice: null,
   fileBaseline: null,
+  liveBase: null,
 });
 
 export const toolSlice = (pipeSpec: PipeSpec): ToolSlice => ({
@@ -96,6 +105,9 @@ export const toolSlice = (pipeSpec: PipeSpec): ToolSlice => ({
   pipeSpec,
   draw: { phase: 'idle' },
   dragPreview: null,
+  underlayPick: null,
+  typed: '',
+  typedError: null,
   gesture: { kind: 'idle' },
   touches: {},
   hover: { kind: 'none' },

@@ -6,26 +6,31 @@ import { ACTIONS, actionForKey, chordOf } from '../chrome/actionTable.js';
 
 /**
  * The plan's dispatcher driven headless with pointer, wheel, touch and key events, asserting on the
- * document and the selection. The canvas is 800 × 500 px with the legend closed, so Fit gives
- * the Harrow Bank dog-leg (0,0) → (30,0) → (30,40) a scale of min(600/30, 300/40) = 7.5 px/m
- * (fitView: 100 px margin each side), centred on (15, 20).
+ * document and the selection. The canvas is 800 × 500 px with the legend closed; Fit leaves a margin
+ * of 0.14 × 500 = 70 px a side, so the Harrow Bank dog-leg (0,0) → (30,0) → (30,40) gets a scale of
+ * min(660/30, 360/40) = 9 px/m, centred on (15, 20).
  */
 const dogLeg = () => chain([0, 0], [30, 0], [30, 40]);
-const SCALE = 7.5;
+const SCALE = 9;
 
 describe('opening the plan', () => {
-  it('fits the route when the canvas first gets its size: 7.5 px/m, centred on the route', () => {
+  it('fits the route when the canvas first gets its size: 9 px/m, centred on the route', () => {
     const h = planHarness(dogLeg());
     expectClose(h.state().viewport.scale, SCALE, 1e-12);
     const mid = toScreen(h.state().viewport, { x: 15, y: 20 });
     expectClose(mid.sx, 400, 1e-9);
     expectClose(mid.sy, 250, 1e-9);
   });
-  it('keeps the open legend’s 250 px strip out of the fitted area', () => {
-    const h = planHarness(dogLeg(), { legend: true });
-    // (800 − 250 − 200) / 30 = 11.67, (500 − 200) / 40 = 7.5: height still governs; centre moves left.
-    const mid = toScreen(h.state().viewport, { x: 15, y: 20 });
-    expectClose(mid.sx, (800 - 250) / 2, 1e-9);
+  it('keeps the open legend’s 250 px strip out of the fitted area on a wide plan', () => {
+    const h = planHarness(dogLeg(), { legend: true, width: 1200 });
+    // 1200 − 250 = 950 px wide: the route's middle sits at 475 px, clear of the legend.
+    expect(h.state().legendOpen).toBe(true);
+    expectClose(toScreen(h.state().viewport, { x: 15, y: 20 }).sx, 950 / 2, 1e-9);
+  });
+  it('starts with the legend closed on a plan narrower than 900 px, using the whole width', () => {
+    const h = planHarness(dogLeg(), { legend: true, width: 800 });
+    expect(h.state().legendOpen).toBe(false);
+    expectClose(toScreen(h.state().viewport, { x: 15, y: 20 }).sx, 400, 1e-9);
   });
 });
 
@@ -354,5 +359,16 @@ describe('runs not joined to the main', () => {
     h.click({ x: -20, y: 40 });
     h.key('Enter');
     expect(h.state().notice?.title).toMatch(/not connected to the rest of the main .*2 separate pieces/);
+  });
+});
+
+describe('the undo banner', () => {
+  it('shows after a delete and goes at the next edit, which makes it out of date', () => {
+    const h = planHarness(dogLeg());
+    h.click({ x: 30, y: 40 });
+    h.key('Delete');
+    expect(h.state().notice?.title).toMatch(/Ctrl\+Z brings them back/);
+    h.drag({ x: 30, y: 0 }, { x: 32, y: 0 });
+    expect(h.state().notice).toBeNull();
   });
 });

@@ -6,10 +6,13 @@ import { movePinch, startPinch } from './pinchGesture.js';
 import { fittedView, planCommand } from './planCommands.js';
 import { distancePx, hitAt, touchLike } from './planGeometry.js';
 import { selectDown, selectMove, selectUp } from './selectPointer.js';
+import { pickUnderlayPoint, picking } from './calibratePick.js';
+import { typedEnter, typedKey } from './typedTool.js';
 import {
   DRAG_PX,
   HIT_PX,
   IDLE_GESTURE,
+  LEGEND_MIN_CANVAS_PX,
   type PlanDerived,
   type PlanEvent,
   type PlanInput,
@@ -47,7 +50,12 @@ export function dispatch(s: PlanInput, e: PlanEvent, derived: PlanDerived = NO_D
   switch (e.type) {
     case 'resize': {
       const first = s.canvas.width === 0 || s.canvas.height === 0;
-      const next = { ...s, canvas: { width: e.width, height: e.height } };
+      const next = {
+        ...s,
+        canvas: { width: e.width, height: e.height },
+        // A narrow plan starts with the legend closed (one tap opens it).
+        legendOpen: first ? s.legendOpen && e.width >= LEGEND_MIN_CANVAS_PX : s.legendOpen,
+      };
       // The first size the plan learns is when it can first show the whole route.
       return done(first ? { ...next, viewport: fittedView(next) } : next);
     }
@@ -60,6 +68,8 @@ export function dispatch(s: PlanInput, e: PlanEvent, derived: PlanDerived = NO_D
       }
       if (e.button === 1 || t.tool === 'pan' || t.spaceHeld) return done(startPan(t, e.id, e.at, false));
       if (e.button !== 0) return { state: t, intents: [], handled: false };
+      // Calibrating the site plan: a click picks a point on the image, whatever the tool.
+      if (picking(t)) return done(pickUnderlayPoint(t, e.at));
       if (t.tool === 'draw') {
         if (touchLike(e.pointer))
           return done({
@@ -140,6 +150,9 @@ export function dispatch(s: PlanInput, e: PlanEvent, derived: PlanDerived = NO_D
       return done({ ...s, viewport: zoomAt(s.viewport, e.at, Math.exp(-e.deltaY * 0.0015)) });
     case 'key': {
       if (e.key === ' ' && !e.ctrl && !e.meta) return done({ ...s, spaceHeld: true });
+      if (e.key === 'Escape' && s.underlayPick) return done({ ...s, underlayPick: null });
+      const typing = typedKey(s, e.key, e.ctrl || e.meta || e.alt);
+      if (typing) return done(typing);
       const action = actionForKey(e);
       if (!action || (action.scope === 'plan' && !e.planFocused)) return { state: s, intents: [], handled: false };
       // Enter on a plan with nothing to finish or open is left to the page.
@@ -148,6 +161,12 @@ export function dispatch(s: PlanInput, e: PlanEvent, derived: PlanDerived = NO_D
     }
     case 'keyUp':
       return e.key === ' ' ? done({ ...s, spaceHeld: false }) : { state: s, intents: [], handled: false };
+    case 'typedText':
+      return done({ ...s, typed: e.text, typedError: null });
+    case 'typedEnter': {
+      const r = typedEnter(s);
+      return done(r.state, r.intents);
+    }
     case 'command': {
       const r = planCommand(s, e.name, derived);
       return done(r.state, r.intents);

@@ -4,9 +4,6 @@ import type { Actions } from '../state/actions.js';
 import { dispatch, type DispatchResult } from './dispatch.js';
 import type { PlanDerived, PlanEvent, PlanInput, PlanIntent } from './planInput.js';
 
-/** Legend width kept clear by Fit while the legend is open, px (the legend's CSS width plus its margin). */
-export const LEGEND_INSET_PX = 250;
-
 /** The dispatcher's view of the app state. */
 export function planInputOf(s: AppState): PlanInput {
   return {
@@ -17,7 +14,7 @@ export function planInputOf(s: AppState): PlanInput {
     units: s.units,
     viewport: s.viewport,
     canvas: s.canvas,
-    fitInsetRight: s.legendOpen ? LEGEND_INSET_PX : 0,
+    legendOpen: s.legendOpen,
     gesture: s.gesture,
     touches: s.touches,
     draw: s.draw,
@@ -25,6 +22,9 @@ export function planInputOf(s: AppState): PlanInput {
     dragPreview: s.dragPreview,
     selectBox: s.selectBox,
     spaceHeld: s.spaceHeld,
+    underlayPick: s.underlayPick,
+    typed: s.typed,
+    typedError: s.typedError,
   };
 }
 
@@ -41,6 +41,10 @@ const KEYS = [
   'dragPreview',
   'selectBox',
   'spaceHeld',
+  'legendOpen',
+  'underlayPick',
+  'typed',
+  'typedError',
 ] as const satisfies readonly (keyof PlanInput & keyof AppState)[];
 
 /** Fittings in chainage order: the schedule's row order (run letter, then number). */

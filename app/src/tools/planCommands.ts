@@ -1,8 +1,10 @@
+import { imageToPlan } from '@mainbrace/solver';
 import type { ActionName } from '../chrome/actionTable.js';
 import { centreOn, fitView, panBy, toScreen, zoomAt } from '../state/viewport.js';
 import { EMPTY_SELECTION, type ToolName } from '../state/slices.js';
 import { drawWith } from './drawPointer.js';
 import {
+  fitInsetRight,
   IDLE_GESTURE,
   KEY_PAN_FRACTION,
   KEY_ZOOM,
@@ -13,10 +15,23 @@ import {
 
 type Outcome = { state: PlanInput; intents: PlanIntent[] };
 
-/** The view that shows the whole route, leaving the legend's strip on the right clear. */
-export function fittedView(s: Pick<PlanInput, 'project' | 'canvas' | 'fitInsetRight'>) {
-  const inset = s.canvas.width - s.fitInsetRight > 300 ? s.fitInsetRight : 0;
-  return fitView(s.project.nodes, s.canvas.width - inset, s.canvas.height);
+/** The view that shows the whole route (or, with no route yet, the site plan), leaving the legend's strip clear. */
+export function fittedView(s: Pick<PlanInput, 'project' | 'canvas' | 'legendOpen'>) {
+  const width = s.canvas.width - fitInsetRight(s);
+  // A small plan cannot spare 100 px of margin a side: keep room for arrows in proportion.
+  const margin = Math.min(100, 0.14 * Math.min(width, s.canvas.height));
+  // With no route yet, a site plan to trace is what there is to see: fit its corners.
+  const u = s.project.underlay;
+  const points =
+    s.project.nodes.length === 0 && u
+      ? [
+          { u: 0, v: 0 },
+          { u: u.width, v: 0 },
+          { u: 0, v: u.height },
+          { u: u.width, v: u.height },
+        ].map((q) => imageToPlan(u, q))
+      : s.project.nodes;
+  return fitView(points, width, s.canvas.height, margin);
 }
 
 const setTool = (s: PlanInput, tool: ToolName): PlanInput => ({
@@ -36,9 +51,9 @@ function reveal(s: PlanInput, id: string): PlanInput {
   const inside =
     p.sx >= margin &&
     p.sy >= margin &&
-    p.sx <= s.canvas.width - s.fitInsetRight - margin &&
+    p.sx <= s.canvas.width - fitInsetRight(s) - margin &&
     p.sy <= s.canvas.height - margin;
-  return inside ? s : { ...s, viewport: centreOn(s.viewport, n, s.canvas.width - s.fitInsetRight, s.canvas.height) };
+  return inside ? s : { ...s, viewport: centreOn(s.viewport, n, s.canvas.width - fitInsetRight(s), s.canvas.height) };
 }
 
 /** Tab and Shift+Tab: the next or previous fitting in chainage order, selected and brought into view. */
@@ -55,7 +70,7 @@ function walk(s: PlanInput, step: 1 | -1, derived: PlanDerived): PlanInput {
 export function planCommand(s: PlanInput, name: ActionName, derived: PlanDerived): Outcome {
   const drawing = s.draw.phase === 'drawing';
   const only = (state: PlanInput): Outcome => ({ state, intents: [] });
-  const centre = { sx: (s.canvas.width - s.fitInsetRight) / 2, sy: s.canvas.height / 2 };
+  const centre = { sx: (s.canvas.width - fitInsetRight(s)) / 2, sy: s.canvas.height / 2 };
   const panStep = Math.min(s.canvas.width, s.canvas.height) * KEY_PAN_FRACTION;
   switch (name) {
     case 'toolSelect':
@@ -118,6 +133,6 @@ export function showFitting(s: PlanInput, id: string): PlanInput {
   return {
     ...s,
     selection: { nodes: new Set([id]), pipes: new Set() },
-    viewport: centreOn({ ...s.viewport, scale }, n, s.canvas.width - s.fitInsetRight, s.canvas.height),
+    viewport: centreOn({ ...s.viewport, scale }, n, s.canvas.width - fitInsetRight(s), s.canvas.height),
   };
 }

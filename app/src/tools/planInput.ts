@@ -1,4 +1,4 @@
-import type { Project, UnitSystem } from '@mainbrace/solver';
+import type { ImagePoint, Project, UnitSystem } from '@mainbrace/solver';
 import type { PlanPoint, RouteEnd } from '../state/documentEdits.js';
 import type { ScreenPoint, Viewport } from '../state/viewport.js';
 import type { Selection, ToolName } from '../state/slices.js';
@@ -29,7 +29,11 @@ export type PlanEvent =
   | { type: 'key'; key: string; shift: boolean; ctrl: boolean; meta: boolean; alt: boolean; planFocused: boolean }
   | { type: 'keyUp'; key: string }
   | { type: 'command'; name: ActionName }
-  | { type: 'resize'; width: number; height: number };
+  | { type: 'resize'; width: number; height: number }
+  /** the typed-entry box's text changed (typed input while drawing) */
+  | { type: 'typedText'; text: string }
+  /** Enter in the typed-entry box: place the node it describes, or finish the run when empty */
+  | { type: 'typedEnter' };
 
 /** The gesture in progress: what the pointers pressed on the plan are doing. */
 export type Gesture =
@@ -57,8 +61,8 @@ export interface PlanInput {
   units: UnitSystem;
   viewport: Viewport;
   canvas: { width: number; height: number };
-  /** px kept clear of the route on the right when fitting (the open legend) */
-  fitInsetRight: number;
+  /** whether the plan's legend is open: Fit keeps the route out from under it */
+  legendOpen: boolean;
   gesture: Gesture;
   /** touch pointers down, by pointer id */
   touches: Readonly<Record<number, ScreenPoint>>;
@@ -68,6 +72,12 @@ export interface PlanInput {
   dragPreview: ReadonlyMap<string, PlanPoint> | null;
   selectBox: { from: PlanPoint; to: PlanPoint } | null;
   spaceHeld: boolean;
+  /** image points picked to calibrate the site-plan underlay; null when not picking */
+  underlayPick: readonly ImagePoint[] | null;
+  /** the typed entry while drawing (a length, turn, bearing or coordinates), '' when none */
+  typed: string;
+  /** why the last typed entry was not placed, in words; null when it was */
+  typedError: string | null;
 }
 
 /** What the dispatcher asks of the rest of the app: design edits and commands outside the plan. */
@@ -96,6 +106,15 @@ export const HIT_PX = { mouse: 9, touch: 22 } as const;
 /** While drawing, a click this close to a node or pipe joins it (a click 12 px off a pipe should join it). */
 export const ATTACH_PX = { mouse: 16, touch: 26 } as const;
 export const DRAG_PX = { mouse: 4, touch: 10 } as const;
+/** Legend width kept clear by Fit while the legend is open, px (its CSS width, 230, and margins). */
+export const LEGEND_INSET_PX = 250;
+/** Below this canvas width the legend starts closed: open, it would leave the route too little room. */
+export const LEGEND_MIN_CANVAS_PX = 900;
+
+/** px kept clear of the route on the right (the open legend, when the canvas is wide enough to spare it). */
+export const fitInsetRight = (s: Pick<PlanInput, 'legendOpen' | 'canvas'>) =>
+  s.legendOpen && s.canvas.width - LEGEND_INSET_PX > 300 ? LEGEND_INSET_PX : 0;
+
 /** A key press pans by this much of the canvas, and zooms by this factor. */
 export const KEY_PAN_FRACTION = 0.1;
 export const KEY_ZOOM = 1.25;

@@ -117,3 +117,4 @@ export {
   type PipeSurge,
 } from './pressure/surge.js';
 export { proposeTestPressure, type TestProposal, type TestRule, type TestCriterion } from './pressure/testPressure.js';
+export * from './geometry/similarity.js';

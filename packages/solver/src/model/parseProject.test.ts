@@ -132,3 +132,47 @@ describe('files written before soil classes and laying length', () => {
     expect(r.project.design.layingLength).toBe(6); // the documented default
   });
 });
+
+describe('the site-plan underlay (project-format.md, optional)', () => {
+  // A 1×1 PNG, base64 of a real file: enough for the pattern check.
+  const PNG =
+    'data:image/png;base64,iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8DwHwAFBQIAX8jx0gAAAABJRU5ErkJggg==';
+  const underlay = {
+    name: 'site.png',
+    mediaType: 'image/png',
+    width: 800,
+    height: 600,
+    x: 10,
+    y: 20,
+    metresPerPixel: 0.05,
+  };
+
+  it('is optional: a file without it reads with no underlay', () => {
+    const r = parseProject(good());
+    expect(r.ok && r.project.underlay).toBe(undefined);
+  });
+
+  it('reads an inline image with its placement and fills opacity, rotation and lock', () => {
+    const r = parseProject({ ...good(), underlay: { ...underlay, dataUrl: PNG } });
+    expect(r.ok).toBe(true);
+    if (!r.ok) return;
+    expect(r.project.underlay).toMatchObject({ ...underlay, dataUrl: PNG, rotation: 0, opacity: 0.5, locked: false });
+  });
+
+  it('reads an image kept in browser storage by its key', () => {
+    const r = parseProject({ ...good(), underlay: { ...underlay, storageKey: 'mainbrace.underlay.1' } });
+    expect(r.ok).toBe(true);
+  });
+
+  it('needs exactly one of the image or its storage key, and only PNG or JPEG data', () => {
+    expect(problems({ ...good(), underlay })).toEqual([
+      'underlay.dataUrl: give exactly one of dataUrl (the image in the file) or storageKey (the image in browser storage)',
+    ]);
+    expect(problems({ ...good(), underlay: { ...underlay, dataUrl: 'data:image/gif;base64,R0lGOD' } })).toEqual([
+      'underlay.dataUrl: must be a data URL of a PNG or JPEG image (data:image/png;base64,...)',
+    ]);
+    expect(problems({ ...good(), underlay: { ...underlay, dataUrl: PNG, metresPerPixel: 0 } })).toEqual([
+      'underlay.metresPerPixel: must be more than 0',
+    ]);
+  });
+});

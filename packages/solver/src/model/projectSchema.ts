@@ -167,6 +167,66 @@ export const pipeSchema = z.strictObject({
   label: z.string().max(80).optional(),
 });
 
+export const UNDERLAY_MEDIA_TYPES = ['image/png', 'image/jpeg'] as const;
+
+/** Two points picked on the image, px from its top-left corner (u right, v down). */
+const imagePoint = z.strictObject({ u: finite(), v: finite() });
+
+/**
+ * A site-plan image under the route, placed on the plan by a similarity transform (scale, rotation,
+ * position) so that the route can be traced over it. The solver ignores it.
+ */
+export const underlaySchema = z
+  .strictObject({
+    /** the file name the image came from */
+    name: z.string().max(200),
+    mediaType: z.enum(UNDERLAY_MEDIA_TYPES),
+    /** px */
+    width: z.number().int({ error: 'must be a whole number of pixels' }).gte(1).lte(50000),
+    height: z.number().int({ error: 'must be a whole number of pixels' }).gte(1).lte(50000),
+    /** the image itself, base64 (a small image is kept in the file) */
+    dataUrl: z
+      .string()
+      .regex(/^data:image\/(png|jpeg);base64,[A-Za-z0-9+/=]+$/, {
+        error: 'must be a data URL of a PNG or JPEG image (data:image/png;base64,...)',
+      })
+      .optional(),
+    /** key of the image in the browser's storage beside the project (a large image is not in the file) */
+    storageKey: z.string().min(1).max(100).optional(),
+    /** m, plan position (east, north) of the image's top-left corner */
+    x: limited('coordinate'),
+    y: limited('coordinate'),
+    /** m on the plan per image pixel */
+    metresPerPixel: finite().gt(0, { error: 'must be more than 0' }).lte(1000, { error: 'must be at most 1000' }),
+    /** degrees counterclockwise from plan east to the image's rows */
+    rotation: finite().gte(-360).lte(360).default(0),
+    /** 0 (invisible) to 1 (opaque) */
+    opacity: finite().gte(0, { error: 'must be 0 to 1' }).lte(1, { error: 'must be 0 to 1' }).default(0.5),
+    /** a locked underlay cannot be moved or calibrated until unlocked */
+    locked: z.boolean().default(false),
+    /** how the placement was found, so that it can be shown and checked */
+    calibration: z
+      .strictObject({
+        method: z.enum(['distance', 'coordinates']),
+        points: z.tuple([imagePoint, imagePoint]),
+        /** m, the known distance between the two points (method "distance") */
+        distance: finite().gt(0).optional(),
+        /** m, the known plan coordinates of the two points (method "coordinates") */
+        coordinates: z
+          .tuple([z.strictObject({ x: finite(), y: finite() }), z.strictObject({ x: finite(), y: finite() })])
+          .optional(),
+      })
+      .optional(),
+  })
+  .superRefine((u, ctx) => {
+    if ((u.dataUrl === undefined) === (u.storageKey === undefined))
+      ctx.addIssue({
+        code: 'custom',
+        path: ['dataUrl'],
+        message: 'give exactly one of dataUrl (the image in the file) or storageKey (the image in browser storage)',
+      });
+  });
+
 export const projectShape = z.strictObject({
   format: z.literal('mainbrace-project', { error: 'must be exactly "mainbrace-project"' }),
   version: z.literal(1, { error: 'must be 1 (the only version this program reads)' }),
@@ -179,6 +239,8 @@ export const projectShape = z.strictObject({
   defaultSoil: id.optional(),
   nodes: z.array(nodeSchema).default([]),
   pipes: z.array(pipeSchema).default([]),
+  /** a site-plan image to trace the route over (optional) */
+  underlay: underlaySchema.optional(),
   /**
    * where the plan lies on the earth, optional: x and y are metres in this projection of WGS 84, so the
    * design can be exported as GeoJSON longitude/latitude (project-format.md, "Georeference")
@@ -199,4 +261,5 @@ export type ProjectNode = Project['nodes'][number];
 export type Pipe = Project['pipes'][number];
 export type Design = Project['design'];
 export type Material = (typeof MATERIALS)[number];
+export type Underlay = NonNullable<Project['underlay']>;
 export type RestraintMethod = (typeof RESTRAINT_METHODS)[number];

@@ -72,6 +72,7 @@ export const QUICK_FIELDS = {
     'nodes',
     'pipes',
     'georeference',
+    'underlay',
   ],
   georeference: ['proj4'],
   water: ['density'],
@@ -291,6 +292,8 @@ export function quickParse(data: unknown): Project | null {
     opt(out, o, 'defaultSoil', id);
     out.nodes = o.nodes === undefined ? [] : list(o.nodes, 0, node);
     out.pipes = o.pipes === undefined ? [] : list(o.pipes, 0, pipe);
+    // An underlay (image and calibration) is left to the schema to check.
+    if (o.underlay !== undefined) return null;
     opt(out, o, 'georeference', (g) => {
       if (!isObject(g)) no();
       only(g as Rec, QUICK_FIELDS.georeference);

@@ -1,0 +1,35 @@
+import { restraintConcrete, type Analysis } from '@mainbrace/solver';
+import type { PlanPoint } from '../state/documentEdits.js';
+
+/** How one fitting's restraint and governing case moved during a live edit (the test-pressure slider). */
+export interface LiveChange {
+  node: string;
+  mark: string;
+  at: PlanPoint;
+  /** concrete now over concrete before, − 1 (0.25 = a quarter more); null when there was none before */
+  growth: number | null;
+  /** the governing case before and now, when it changed */
+  governing: { from: string; to: string } | null;
+}
+
+/**
+ * Each fitting's change against the analysis from before the gesture began: the growth of its block or
+ * anchor (by concrete volume) and whether another case now governs it. Fittings that did not change
+ * are left out.
+ */
+export function liveChanges(before: Analysis, now: Analysis): LiveChange[] {
+  const out: LiveChange[] = [];
+  for (const f of now.fittings) {
+    const b = before.byNode.get(f.node.id);
+    if (!b) continue;
+    const was = restraintConcrete(b.restraint);
+    const is = restraintConcrete(f.restraint);
+    const growth = was > 0 ? is / was - 1 : null;
+    const from = b.envelope.governing.caseId;
+    const to = f.envelope.governing.caseId;
+    const governing = from !== to ? { from, to } : null;
+    if ((growth === null || Math.abs(growth) < 0.005) && !governing) continue;
+    out.push({ node: f.node.id, mark: f.mark, at: { x: f.node.x, y: f.node.y }, growth, governing });
+  }
+  return out;
+}
