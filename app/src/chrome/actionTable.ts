@@ -52,7 +52,14 @@ export type ActionName =
 
 export const ACTIONS: readonly ActionSpec[] = [
   { name: 'new', label: 'New project', keys: [], undo: 'step', scope: 'window', menu: 'file' },
-  { name: 'open', label: 'Open a project file', keys: ['Mod+O'], undo: 'step', scope: 'window', menu: 'file' },
+  {
+    name: 'open',
+    label: 'Open a project file, or import a route (a CSV survey or a GeoJSON file)',
+    keys: ['Mod+O'],
+    undo: 'step',
+    scope: 'window',
+    menu: 'file',
+  },
   { name: 'save', label: 'Save the project file', keys: ['Mod+S'], undo: 'none', scope: 'window', menu: 'file' },
   { name: 'exportCsv', label: 'Schedule as CSV', keys: [], undo: 'none', scope: 'window', menu: 'export' },
   { name: 'exportJson', label: 'Schedule as JSON', keys: [], undo: 'none', scope: 'window', menu: 'export' },

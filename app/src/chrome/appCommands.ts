@@ -59,10 +59,10 @@ function startNew(store: AppStore, actions: Actions) {
   });
 }
 
-/** The design as GeoJSON for a GIS, with the projection library loaded only now. */
+/** The design as GeoJSON for a GIS; the exchange module loads only now (docs/routes.md). */
 async function exportGeoJson(store: AppStore, actions: Actions) {
-  const project = store.getState().project;
   const ex = await loadExchange();
+  const project = store.getState().project;
   const r = ex.designGeoJson(project);
   if (r.ok) download(`${fileStem(project)}.geojson`, r.text, 'application/geo+json');
   else actions.notify({ tone: 'error', title: 'The design was not exported as GeoJSON', lines: [r.message] });

@@ -77,3 +77,43 @@ describe('profileData levels', () => {
     expect(points[1]!.mark).toBe(a.byNode.get('n2')!.mark);
   });
 });
+
+describe('profileData long section', () => {
+  it('marks a crest where the grade turns down and a sag where it turns up (hand calculation)', () => {
+    // Up 2 m over 50 m, down 2 m over 50 m, down 1 m over 40 m, up 3 m over 60 m: slopes +2.29°, −2.29°,
+    // −1.43°, +2.86°; turns −4.58° (crest), +0.86° (sag, above the 0.5° straight-joint tolerance), +4.29° (sag).
+    const doc = project(
+      [
+        { id: 'a', x: 0, y: 0, z: 100 },
+        { id: 'b', x: 50, y: 0, z: 102 },
+        { id: 'c', x: 100, y: 0, z: 100 },
+        { id: 'd', x: 140, y: 0, z: 99 },
+        { id: 'e', x: 200, y: 0, z: 102 },
+      ],
+      [
+        { from: 'a', to: 'b' },
+        { from: 'b', to: 'c' },
+        { from: 'c', to: 'd' },
+        { from: 'd', to: 'e' },
+      ],
+    );
+    const { points } = profileData(doc, analyse(doc));
+    expect(points.map((p) => p.bend)).toEqual([null, 'crest', 'sag', 'sag', null]);
+  });
+
+  it('draws a branch from its tee, its chainage going on from the tee’s', () => {
+    const doc = withBranch();
+    const { points, branches } = profileData(doc, analyse(doc));
+    expect(branches).toHaveLength(1);
+    const b = branches[0]!;
+    expect(b.from).toBe('n2');
+    expect(b.points.map((p) => p.node)).toEqual(['n2', 'n5']);
+    expectClose(b.points[0]!.chainage, points[1]!.chainage, 1e-12);
+    expectClose(b.points[1]!.chainage, points[1]!.chainage + Math.hypot(25, 0.5), 1e-9);
+  });
+
+  it('carries the design groundwater level', () => {
+    const doc = { ...withBranch(), design: { ...withBranch().design, groundwaterElevation: 97.8 } };
+    expect(profileData(doc, analyse(doc)).groundwater).toBe(97.8);
+  });
+});

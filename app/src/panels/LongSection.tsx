@@ -1,0 +1,177 @@
+import { FOOT, type Analysis, type UnitSystem } from '@mainbrace/solver';
+import { show } from '../format/quantity.js';
+import { gridSpacing } from '../state/viewport.js';
+import type { ProfileData, ProfilePoint } from './profileData.js';
+import { sectionWindow } from './sectionScale.js';
+
+export const SECTION_W = 980;
+export const SECTION_M = { left: 70, right: 190, top: 14, bottom: 22 };
+const H = 240;
+
+/** Chainage from the main's start to the farthest point of the main or any branch, m. */
+export function sectionExtent(data: ProfileData): [number, number] {
+  const x0 = data.points[0]!.chainage;
+  let x1 = data.points[data.points.length - 1]!.chainage;
+  for (const b of data.branches) for (const p of b.points) x1 = Math.max(x1, p.chainage);
+  return [x0, x1];
+}
+
+export const ticks = (a: number, b: number, step: number) => {
+  const out: number[] = [];
+  for (let v = Math.ceil(a / step) * step; v <= b + 1e-9; v += step) out.push(v);
+  return out;
+};
+
+/**
+ * The long section: ground and pipe of the main line with every fitting marked, crests and sags named,
+ * each branch unfolded from its tee, the groundwater level, at a stated round vertical exaggeration.
+ */
+export function LongSection({
+  data,
+  analysis,
+  units: u,
+  onSelect,
+}: {
+  data: ProfileData;
+  analysis: Analysis;
+  units: UnitSystem;
+  onSelect?: (node: string) => void;
+}) {
+  const W = SECTION_W;
+  const M = SECTION_M;
+  const [x0, x1] = sectionExtent(data);
+  const plotW = W - M.left - M.right;
+  const plotH = H - M.top - M.bottom;
+  const hScale = plotW / (x1 - x0 || 1);
+  const sx = (c: number) => M.left + (c - x0) * hScale;
+  const all = [data.points, ...data.branches.map((b) => b.points)].flat();
+  const levels = all.flatMap((p) => [p.pipe, p.ground]);
+  const lo = Math.min(...levels);
+  const hi = Math.max(...levels);
+  // Groundwater is drawn where it lies near the section; far below or above, it is stated instead.
+  const gw = data.groundwater;
+  const gwDrawn = gw !== null && gw >= lo - (hi - lo + 1) && gw <= hi + (hi - lo + 1);
+  const { exaggeration, z0, z1 } = sectionWindow(gwDrawn ? [...levels, gw] : levels, plotH, hScale);
+  const sz = (z: number) => M.top + ((z1 - z) / (z1 - z0)) * plotH;
+  const lengthUnit = u === 'us' ? FOOT : 1;
+  const xStep = gridSpacing(hScale * lengthUnit, 90) * lengthUnit;
+  const zStep = gridSpacing((plotH / (z1 - z0)) * lengthUnit, 30) * lengthUnit;
+  const path = (pts: ProfilePoint[], key: 'pipe' | 'ground') =>
+    pts.map((p, i) => `${i ? 'L' : 'M'}${sx(p.chainage).toFixed(1)} ${sz(p[key]).toFixed(1)}`).join(' ');
+  const exText = exaggeration >= 1 ? `${exaggeration}` : exaggeration.toString();
+
+  const marks = (pts: ProfilePoint[], branch: boolean) =>
+    pts
+      .filter((p, i) => p.mark && !(branch && i === 0))
+      .map((p, i) => (
+        <g key={p.node} className="profile-fitting" onClick={() => onSelect?.(p.node)}>
+          <circle cx={sx(p.chainage)} cy={sz(p.pipe)} r="4" />
+          <text x={sx(p.chainage)} y={sz(p.pipe) + (i % 2 ? 17 : -9)} textAnchor="middle" className="profile-mark">
+            {p.mark}
+          </text>
+          <title>{`${p.mark}: pipe at ${show(p.pipe, 'elevation', u, 4)}, ground ${show(p.ground, 'elevation', u, 4)}, design pressure ${show(analysis.byNode.get(p.node)!.envelope.pressure, 'pressure', u)}`}</title>
+        </g>
+      ));
+  const bends = (pts: ProfilePoint[]) =>
+    pts
+      .filter((p) => p.bend)
+      .map((p) => (
+        <g key={`bend-${p.node}`} className={`profile-bend profile-${p.bend}`} data-testid={`section-${p.bend}`}>
+          <path
+            d={
+              p.bend === 'crest'
+                ? `M${sx(p.chainage) - 5} ${sz(p.ground) - 10} L${sx(p.chainage)} ${sz(p.ground) - 16} L${sx(p.chainage) + 5} ${sz(p.ground) - 10}`
+                : `M${sx(p.chainage) - 5} ${sz(p.ground) - 16} L${sx(p.chainage)} ${sz(p.ground) - 10} L${sx(p.chainage) + 5} ${sz(p.ground) - 16}`
+            }
+          />
+          <text x={sx(p.chainage)} y={sz(p.ground) - 19} textAnchor="middle" className="profile-bend-label">
+            {p.bend}
+          </text>
+        </g>
+      ));
+  const legend = (y: number, cls: string, text: string) => (
+    <g>
+      <line x1={W - M.right + 8} x2={W - M.right + 28} y1={y} y2={y} className={cls} />
+      <text x={W - M.right + 32} y={y + 3} className="profile-label">
+        {text}
+      </text>
+    </g>
+  );
+  return (
+    <svg
+      viewBox={`0 0 ${W} ${H}`}
+      role="img"
+      aria-label={`Long section: ground, pipe and groundwater against chainage, fittings marked, vertical scale ${exText} times the horizontal`}
+      data-testid="long-section"
+    >
+      {ticks(z0, z1, zStep).map((z) => (
+        <g key={`z${z}`}>
+          <line x1={M.left} x2={W - M.right} y1={sz(z)} y2={sz(z)} className="profile-grid" />
+          <text x={M.left - 6} y={sz(z) + 3} textAnchor="end" className="profile-axis">
+            {show(z, 'elevation', u, 4)}
+          </text>
+        </g>
+      ))}
+      {ticks(x0, x1, xStep).map((c) => (
+        <g key={`x${c}`}>
+          <line x1={sx(c)} x2={sx(c)} y1={M.top} y2={H - M.bottom} className="profile-grid" />
+          <text x={sx(c)} y={H - M.bottom + 13} textAnchor="middle" className="profile-axis">
+            {show(c, 'length', u, 4)}
+          </text>
+        </g>
+      ))}
+      {gwDrawn && <line x1={M.left} x2={W - M.right} y1={sz(gw)} y2={sz(gw)} className="profile-water" />}
+      {data.branches.map((b) => (
+        <g key={b.letter} className="profile-branch" data-testid={`section-branch-${b.letter}`}>
+          <path d={path(b.points, 'ground')} className="profile-ground profile-branch-ground" />
+          <path d={path(b.points, 'pipe')} className="profile-pipe profile-branch-pipe" />
+          <text
+            x={sx(b.points[b.points.length - 1]!.chainage) + 4}
+            y={sz(b.points[b.points.length - 1]!.pipe) + 3}
+            className="profile-label"
+          >
+            {`run ${b.letter} from ${analysis.marks.get(b.from) ?? b.from}`}
+          </text>
+          {marks(b.points, true)}
+          {bends(b.points)}
+        </g>
+      ))}
+      <path d={path(data.points, 'ground')} className="profile-ground" />
+      <path d={path(data.points, 'pipe')} className="profile-pipe" />
+      {marks(data.points, false)}
+      {bends(data.points)}
+      <text x={W - M.right + 8} y={M.top + 8} className="profile-label profile-label-strong">
+        Long section
+      </text>
+      {legend(M.top + 24, 'profile-ground', 'ground')}
+      {legend(M.top + 39, 'profile-pipe', 'pipe centreline')}
+      {data.branches.length > 0 && legend(M.top + 54, 'profile-pipe profile-branch-pipe', 'branch, from its tee')}
+      {legend(
+        M.top + 69,
+        'profile-water',
+        gw === null ? 'groundwater: none given' : `groundwater ${show(gw, 'elevation', u, 5)}`,
+      )}
+      {gw !== null && !gwDrawn && (
+        <text x={W - M.right + 32} y={M.top + 84} className="profile-label">
+          {gw < lo ? '(below the section)' : '(above the section)'}
+        </text>
+      )}
+      <text x={W - M.right + 8} y={M.top + 102} className="profile-label">
+        ▲ crest ▼ sag: vertical bends
+      </text>
+      <text
+        x={W - M.right + 8}
+        y={M.top + 118}
+        className="profile-label profile-label-strong"
+        data-testid="section-exaggeration"
+      >
+        {`Vertical scale ${exText} × horizontal`}
+      </text>
+      {data.grades.map((g, i) => (
+        <text key={g.caseId} x={W - M.right + 8} y={M.top + 136 + i * 13} className="profile-label">
+          {g.label} grade {show(g.elevation, 'elevation', u, 5)}
+        </text>
+      ))}
+    </svg>
+  );
+}
