@@ -18,7 +18,11 @@ import { installShortcuts } from './chrome/shortcuts.js';
 import { ErrorBoundary } from './chrome/ErrorBoundary.js';
 import { blankProject } from './files/blankProject.js';
 import type { PipeSpec } from './state/documentEdits.js';
+import { loadChecks } from './state/checks.js';
 import './styles.css';
+
+// The schema checks load beside this module, not inside it; nothing is opened before they are here.
+const checksLoaded = loadChecks();
 
 const DEMO_URL = `${import.meta.env.BASE_URL}demo/larkspur-rise.json`;
 
@@ -78,6 +82,7 @@ function keptNotice(kept: Restored): Notice | null {
 }
 
 async function start() {
+  await checksLoaded;
   const kv = browserStore;
   const channel = openTabChannel();
   bindKeptCopies(kv, channel);
@@ -114,6 +119,15 @@ async function start() {
           pipes: [...store.getState().selection.pipes],
         }),
         viewport: () => ({ ...store.getState().viewport }),
+        // cheap reads for the benchmarks, which must not clone a 10,000-node document to count it
+        counts: () => {
+          const p = store.getState().project;
+          return { nodes: p.nodes.length, pipes: p.pipes.length, fittings: analyse(p).fittings.length };
+        },
+        nodeAt: (i: number) => {
+          const n = store.getState().project.nodes[i];
+          return n ? { x: n.x, y: n.y } : null;
+        },
         canUndo: () => store.temporal.getState().pastStates.length > 0,
       }),
     });

@@ -1,5 +1,6 @@
-// The command line ships as a bundled ES module: one file to load keeps start-up close to bare Node.
-// Import and export load the CSV and projection libraries from a chunk of their own, on demand.
+// The command line ships as one bundled ES module, so that start-up stays close to bare Node; the
+// schema library is a chunk of its own, loaded only to word the problems of a file that is not valid;
+// import and export load the CSV and projection libraries from chunks of their own, on demand.
 import { defineConfig } from 'rolldown';
 
 export default defineConfig({
@@ -7,9 +8,9 @@ export default defineConfig({
   platform: 'node',
   output: {
     dir: 'dist',
+    entryFileNames: 'mainbrace.mjs',
+    chunkFileNames: '[name]-[hash].mjs',
     format: 'esm',
     minify: true,
-    entryFileNames: '[name].mjs',
-    chunkFileNames: '[name]-[hash].mjs',
   },
 });

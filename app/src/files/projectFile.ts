@@ -1,7 +1,7 @@
+import { checkProjectText } from '../state/projectCheck.js';
+import { prepareResults } from '../state/results.js';
 import {
   analyse,
-  parseProjectText,
-  problemText,
   scheduleCsv,
   scheduleJson,
   scheduleOf,
@@ -29,8 +29,8 @@ export async function readProjectFile(file: File): Promise<OpenResult> {
   } catch (e) {
     return { ok: false, lines: [`${file.name}: the file could not be read (${(e as Error).message})`] };
   }
-  const r = parseProjectText(text);
-  return r.ok ? { ok: true, project: r.project } : { ok: false, lines: r.problems.map(problemText) };
+  // A long file is checked in a worker (a 10,000-node route: over a second of JSON.parse and schema).
+  return checkProjectText(text, 'file');
 }
 
 /** Offers text to the user as a download. */
@@ -72,6 +72,7 @@ export async function openProjectFile(
 ): Promise<void> {
   const r = await readProjectFile(file);
   if (r.ok) {
+    await prepareResults(r.project, r.project.units);
     actions.replaceProject(r.project);
     actions.markSaved?.(r.project);
     actions.notify({ tone: 'info', title: `Opened ${file.name}`, lines: [] });

@@ -4,6 +4,7 @@ import { nextId } from '../state/documentEdits.js';
 import { NumberField } from './NumberField.js';
 import { TestPressureControl } from './TestPressureControl.js';
 import { GoverningList } from './GoverningList.js';
+import { SurgeSuggestion } from './SurgeSuggestion.js';
 
 const KIND_LABEL: Record<(typeof CASE_KINDS)[number], string> = {
   working: 'Working',
@@ -134,6 +135,7 @@ export function CasesPanel() {
             Pressure is gauge pressure at the datum elevation; each node sees it corrected by ρ·g·(datum − node
             elevation). A flow factor of 0 means no flow, as in a field test.
           </p>
+          <SurgeSuggestion />
         </div>
         <TestPressureControl />
         <GoverningList />

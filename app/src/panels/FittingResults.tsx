@@ -1,6 +1,7 @@
 import {
   caseLabel,
   elementName,
+  fittingProfile,
   formatDimension,
   horizontalNorm,
   jointsText,
@@ -22,6 +23,13 @@ import { useAnalysis, useApp } from '../state/StoreContext.js';
 import { CalcRecordView } from './CalcRecordView.js';
 
 /** The results of one fitting: thrust per case, the governing case, its restraint and warnings. */
+/** What set a block's face, in words. */
+const BLOCK_GOVERNS = {
+  bearing: 'the bearing area',
+  passive: 'the passive resistance',
+  minimum: 'the least face, one OD each way',
+} as const;
+
 export function FittingResults({ fitting: f, project }: { fitting: FittingAnalysis; project: Project }) {
   const u = useApp((s) => s.units);
   const analysis = useAnalysis();
@@ -32,7 +40,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
   return (
     <section className="results" aria-label={`Results for ${f.mark}`} data-testid="fitting-results">
       <h3>
-        <span className="mark">{f.mark}</span> {fittingTitle(f.geometry)}
+        <span className="mark">{f.mark}</span> {fittingTitle({ ...f.geometry, profile: fittingProfile(f) })}
       </h3>
       <dl className="facts">
         <dt>Chainage</dt>
@@ -43,8 +51,24 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
         <dd>{caseLabel(project, e.governing.caseId)}</dd>
         <dt>Thrust</dt>
         <dd data-testid="governing-thrust">
-          <strong>{show(norm(e.governing.total), 'force', u)}</strong>, bears toward{' '}
-          {bearingText(e.horizontal.force > 0 ? planBearing(e.horizontal.direction) : null)} (from north)
+          {e.horizontal.force > 0 && (
+            <>
+              horizontal <strong>{show(e.horizontal.force, 'force', u)}</strong>, bears toward{' '}
+              {bearingText(planBearing(e.horizontal.direction))} (from north)
+            </>
+          )}
+          {e.upward.force > 0 && (
+            <>
+              {e.horizontal.force > 0 ? '; ' : ''}upward <strong>{show(e.upward.force, 'force', u)}</strong>
+            </>
+          )}
+          {e.downward.force > 0 && (
+            <>
+              {e.horizontal.force > 0 || e.upward.force > 0 ? '; ' : ''}downward{' '}
+              <strong>{show(e.downward.force, 'force', u)}</strong>
+            </>
+          )}{' '}
+          (total {show(norm(e.governing.total), 'force', u)})
         </dd>
       </dl>
       <div className="table-scroll">
@@ -86,14 +110,19 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
       <ul className="restraint">
         {r.block && (
           <li data-testid="block">
-            <span className="element">{elementName(f.mark, 'block')}</span> Bearing block{' '}
+            <span className="element">{elementName(f.mark, 'block')}</span> Bearing block, bears{' '}
+            {bearingText(planBearing(r.block.direction))} for {show(r.block.thrust, 'force', u)} horizontal
+            {r.block.upwardThrust > 0
+              ? ` and holds ${show(r.block.upwardThrust, 'force', u)} up by its weight`
+              : ''}:{' '}
             <strong>
               {formatDimension(r.block.faceWidth, u)} wide × {formatDimension(r.block.faceHeight, u)} high
             </strong>
             , {formatDimension(r.block.depth, u)} from the fitting to the bearing face; bearing area{' '}
             {show(r.block.bearingArea, 'area', u)} needed, {show(r.block.faceWidth * r.block.faceHeight, 'area', u)}{' '}
             given; concrete {show(r.block.concreteVolume, 'volume', u)}. Passive resistance{' '}
-            {r.block.passiveRatio.toFixed(2)} × the thrust.
+            {r.block.passiveRatio.toFixed(2)} × the thrust (3-D factor {r.block.shapeFactor.toFixed(2)}); the face is
+            set by {BLOCK_GOVERNS[r.block.governs]}.
           </li>
         )}
         {r.reverseBlock && (
@@ -108,16 +137,22 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
         )}
         {r.anchor && (
           <li data-testid="anchor">
-            <span className="element">{elementName(f.mark, 'anchor')}</span> Gravity anchor{' '}
-            <strong>{show(r.anchor.concreteVolume, 'volume', u)}</strong> of concrete (a{' '}
-            {formatDimension(r.anchor.side, u)} cube){r.anchor.submerged ? ', submerged weight' : ''}.
+            <span className="element">{elementName(f.mark, 'anchor')}</span> Gravity anchor, holds{' '}
+            {show(r.anchor.upwardThrust, 'force', u)} up:{' '}
+            <strong>
+              {formatDimension(r.anchor.length, u)} long × {formatDimension(r.anchor.width, u)} wide ×{' '}
+              {formatDimension(r.anchor.height, u)} high
+            </strong>
+            , {show(r.anchor.concreteVolume, 'volume', u)} of concrete{r.anchor.submerged ? ', submerged weight' : ''}
+            {r.anchor.horizontalThrust > 0 ? '; its base friction also holds the horizontal thrust' : ''}.
           </li>
         )}
         {r.trenchBottom && (
           <li data-testid="pad">
-            <span className="element">{elementName(f.mark, 'trenchBottom')}</span> Trench-bottom bearing{' '}
-            {show(r.trenchBottom.bearingArea, 'area', u)}: pad {formatDimension(r.trenchBottom.width, u)} across ×{' '}
-            {formatDimension(r.trenchBottom.length, u)} along the pipe.
+            <span className="element">{elementName(f.mark, 'trenchBottom')}</span> Trench-bottom bearing, bears{' '}
+            {show(e.downward.force, 'force', u)} down: {show(r.trenchBottom.bearingArea, 'area', u)}: pad{' '}
+            {formatDimension(r.trenchBottom.width, u)} across × {formatDimension(r.trenchBottom.length, u)} along the
+            pipe.
           </li>
         )}
         {r.restrainedLegs.map((l) => {

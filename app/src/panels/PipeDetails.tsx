@@ -1,6 +1,5 @@
 import {
   BEDDINGS,
-  CATALOG,
   DEFAULT_BEDDING,
   WRAP_WORDS,
   beddingReference,
@@ -9,6 +8,9 @@ import {
   findSize,
   MATERIALS,
   nearestSize,
+  seriesChoices,
+  notVerifiedText,
+  REGISTER,
   type Material,
   type Pipe,
   type Project,
@@ -24,18 +26,20 @@ import { NumberField } from './NumberField.js';
 const CUSTOM = '__custom';
 
 /** The inputs of a pipe: material, catalogue size or custom diameters, flow, label, laying details. */
-export function PipeDetails({ pipe, project }: { pipe: Pipe; project: Project }) {
+export function PipeDetails({ pipe }: { pipe: Pipe; project: Project }) {
   const actions = useActions();
   const u = useApp((s) => s.units);
   const set = (patch: Partial<Pipe>) => actions.updatePipe(pipe.id, patch);
   const series = pipe.series ? findSeries(pipe.series) : undefined;
-  const seriesChoices = CATALOG.filter((s) => s.material === pipe.material);
+  const project = useApp((s) => s.project);
+  const choices = seriesChoices(pipe.material, project.units);
   const length = pipeLength(useAnalysis(), pipe);
   const bedding = findBedding(pipe.trenchType);
   const plan = planLength(project, pipe.id);
   const [moving, setMoving] = useState<'from' | 'to'>('to');
   const movedId = moving === 'to' ? pipe.to : pipe.from;
   const fixedId = moving === 'to' ? pipe.from : pipe.to;
+  const rating = pipe.series && pipe.nominal ? findSize(pipe.series, pipe.nominal)?.rating : undefined;
 
   const pickSeries = (id: string) => {
     if (id === CUSTOM) return set({ series: undefined, nominal: undefined });
@@ -52,7 +56,7 @@ export function PipeDetails({ pipe, project }: { pipe: Pipe; project: Project })
     if (size) set({ nominal, outsideDiameter: size.outsideDiameter, insideDiameter: size.insideDiameter });
   };
   const pickMaterial = (m: Material) => {
-    const first = CATALOG.find((s) => s.material === m);
+    const first = seriesChoices(m, project.units)[0];
     if (!first) return set({ material: m, series: undefined, nominal: undefined });
     const size = nearestSize(first.id, pipe.outsideDiameter)!;
     set({
@@ -119,7 +123,7 @@ export function PipeDetails({ pipe, project }: { pipe: Pipe; project: Project })
           onChange={(e) => pickSeries(e.target.value)}
           data-testid="pipe-series"
         >
-          {seriesChoices.map((s) => (
+          {choices.map((s) => (
             <option key={s.id} value={s.id}>
               {s.label}
             </option>
@@ -150,6 +154,14 @@ export function PipeDetails({ pipe, project }: { pipe: Pipe; project: Project })
           <div className="field-hint">
             OD {show(pipe.outsideDiameter, 'diameter', u, 4)}, ID {show(pipe.insideDiameter, 'diameter', u, 4)}
           </div>
+          {rating && (
+            <div className="field-hint" data-testid="pipe-rating">
+              Rated {rating.label}: working {show(rating.working, 'pressure', u, 4)}, with surge{' '}
+              {show(rating.withSurge, 'pressure', u, 4)}, field test {show(rating.test, 'pressure', u, 4)}
+              {REGISTER[rating.basis].verified ? '' : ` (${notVerifiedText(REGISTER[rating.basis])})`}. Each case is
+              checked against its limit.
+            </div>
+          )}
         </div>
       ) : (
         <div className="field-row">

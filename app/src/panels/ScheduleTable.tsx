@@ -1,6 +1,46 @@
-import { useState } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import { APP_COLUMNS, columnNumber, pickColumns, scheduleView, SHORT_CAUTION, type ViewRow } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
+
+/** A table longer than this renders only the rows in view (and a margin), with spacers for the rest. */
+const WINDOW_FROM = 300;
+/** Rows rendered beyond the visible ones, above and below, so a scroll never shows a gap. */
+const OVERSCAN = 30;
+
+/**
+ * The rows of a long table that are in view of its scrolling ancestor: a 10,000-fitting schedule is
+ * 140,000 cells, more than a browser lays out in a frame, while a screenful is a few hundred.
+ * Rows are taken as one height (measured from a rendered row).
+ */
+function useRowWindow(total: number, table: React.RefObject<HTMLTableElement | null>) {
+  const [win, setWin] = useState({ first: 0, count: 2 * OVERSCAN + 40, rowPx: 24 });
+  const windowed = total > WINDOW_FROM;
+  useEffect(() => {
+    const el = table.current;
+    const scroller = el?.closest('.drawer-body') ?? el?.parentElement;
+    if (!windowed || !el || !scroller) return;
+    const update = () => {
+      const row = el.tBodies[0]?.rows[1];
+      const rowPx = row && row.offsetHeight > 0 ? row.offsetHeight : 24;
+      const top = scroller.scrollTop - el.offsetTop;
+      const first = Math.max(0, Math.floor(top / rowPx) - OVERSCAN);
+      const count = Math.ceil(scroller.clientHeight / rowPx) + 2 * OVERSCAN;
+      setWin((w) => (w.first === first && w.count === count && w.rowPx === rowPx ? w : { first, count, rowPx }));
+    };
+    update();
+    scroller.addEventListener('scroll', update, { passive: true });
+    const ro = new ResizeObserver(update);
+    ro.observe(scroller);
+    return () => {
+      scroller.removeEventListener('scroll', update);
+      ro.disconnect();
+    };
+  }, [windowed, table]);
+  if (!windowed) return { first: 0, last: total, above: 0, below: 0 };
+  const first = Math.min(win.first, Math.max(0, total - win.count));
+  const last = Math.min(total, first + win.count);
+  return { first, last, above: first * win.rowPx, below: (total - last) * win.rowPx };
+}
 
 /** Columns the table can sort by the number behind the cell; text columns sort by their text. */
 function compare(id: string) {
@@ -22,15 +62,19 @@ export function ScheduleTable() {
   const analysis = useAnalysis();
   const actions = useActions();
   const [sort, setSort] = useState<{ id: string; up: boolean } | null>(null);
-  const view = scheduleView(analysis, units);
+  const view = useMemo(() => scheduleView(analysis, units), [analysis, units]);
   const columns = pickColumns(view, APP_COLUMNS);
-  const sorted = sort ? [...view.rows].sort(compare(sort.id)) : view.rows;
-  const rows = sort && !sort.up ? sorted.reverse() : sorted;
+  const rows = useMemo(() => {
+    const sorted = sort ? [...view.rows].sort(compare(sort.id)) : view.rows;
+    return sort && !sort.up ? sorted.reverse() : sorted;
+  }, [view, sort]);
   const total = view.rows.reduce((t, r) => t + (r.values.concrete ?? 0), 0);
   const totalColumn = columns.findIndex((c) => c.id === 'concrete');
+  const table = useRef<HTMLTableElement>(null);
+  const shown = useRowWindow(rows.length, table);
   return (
     <div className="schedule">
-      <table className="schedule-table" data-testid="schedule-table">
+      <table className="schedule-table" data-testid="schedule-table" ref={table}>
         <thead>
           <tr>
             {columns.map((c) => (
@@ -47,7 +91,8 @@ export function ScheduleTable() {
           </tr>
         </thead>
         <tbody>
-          {rows.map((r) => {
+          {shown.above > 0 && <tr aria-hidden="true" className="spacer-row" style={{ height: shown.above }} />}
+          {rows.slice(shown.first, shown.last).map((r) => {
             const node = r.fitting.node;
             const worst = r.fitting.diagnostics[0]?.severity;
             return (
@@ -71,6 +116,7 @@ export function ScheduleTable() {
               </tr>
             );
           })}
+          {shown.below > 0 && <tr aria-hidden="true" className="spacer-row" style={{ height: shown.below }} />}
         </tbody>
         <tfoot>
           <tr>

@@ -1,6 +1,9 @@
-import { useCallback, useEffect, useMemo, useRef, type PointerEvent as ReactPointerEvent } from 'react';
-import { Layer, Shape, Stage } from 'react-konva';
+import { useCallback, useEffect, useMemo, useRef, useState, type PointerEvent as ReactPointerEvent } from 'react';
+// Konva's core entry and react-konva's core build: the plan draws with 2-D calls inside its own
+// shapes, so none of Konva's ready-made shapes, filters or animations are loaded (issue 16).
+import { Layer, Shape, Stage } from 'react-konva/lib/ReactKonvaCore.js';
 import type { Context } from 'konva/lib/Context';
+import type { Shape as KonvaShape } from 'konva/lib/Shape';
 import { FOOT, imageToPlan } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp, useAppStore } from '../state/StoreContext.js';
 import { toPlan, type ScreenPoint } from '../state/viewport.js';
@@ -19,8 +22,21 @@ import { sendPlanEvent } from '../tools/planBridge.js';
 import type { PlanEvent, PointerKind } from '../tools/planInput.js';
 import { runCommand } from '../chrome/appCommands.js';
 import { focusDetails } from '../chrome/shortcuts.js';
+import { reuseEqualParts } from './sceneReuse.js';
+import type { Scene } from './planScene.js';
 
-const native = (c: Context) => (c as unknown as { _context: CanvasRenderingContext2D })._context;
+/**
+ * The 2-D context a shape draws into, through Konva's public API: its layer's canvas element. Konva has
+ * already applied the pixel ratio and the shape's transform to that same context.
+ */
+const native = (shape: KonvaShape): CanvasRenderingContext2D =>
+  shape.getLayer()!.getNativeCanvasElement().getContext('2d')!;
+
+/** A scene builder that keeps the parts equal to the last scene's (see `reuseEqualParts`). */
+function sceneKeeper() {
+  let last: Scene | null = null;
+  return (next: Scene) => (last = reuseEqualParts(last, next));
+}
 
 const kindOf = (t: string): PointerKind => (t === 'touch' ? 'touch' : t === 'pen' ? 'pen' : 'mouse');
 
@@ -31,7 +47,6 @@ const kindOf = (t: string): PointerKind => (t === 'touch' ? 'touch' : t === 'pen
 export function PlanView() {
   const store = useAppStore();
   const actions = useActions();
-  const project = useApp((s) => s.project);
   const units = useApp((s) => s.units);
   const viewport = useApp((s) => s.viewport);
   const caseView = useApp((s) => s.caseView);
@@ -48,6 +63,9 @@ export function PlanView() {
   const underlayPick = useApp((s) => s.underlayPick);
   const underlayImage = useUnderlayImage(underlay);
   const analysis = useAnalysis();
+  // The drawn document: the store's in every result input (positions, pipes, restraint), and the same
+  // object after an edit of the name or the units, so such an edit redraws nothing.
+  const drawn = analysis.project;
   const box = useRef<HTMLDivElement>(null);
   const coords = useRef<HTMLSpanElement>(null);
 
@@ -74,30 +92,59 @@ export function PlanView() {
   // While nodes are dragged the document is unchanged: the static layer leaves the dragged nodes and
   // their pipes out (and so is not redrawn), the interactive layer draws them where they are now.
   const movedKey = preview ? [...preview.keys()].sort().join('\u0000') : '';
+  const [keep] = useState(sceneKeeper);
   const scene = useMemo(
     () =>
-      planScene(project, analysis, caseView, selection, null, movedKey ? new Set(movedKey.split('\u0000')) : undefined),
-    [project, analysis, caseView, selection, movedKey],
+      keep(
+        planScene(drawn, analysis, caseView, selection, null, movedKey ? new Set(movedKey.split('\u0000')) : undefined),
+      ),
+    [keep, drawn, analysis, caseView, selection, movedKey],
   );
   const moving = useMemo(
-    () => (preview ? dragScene(project, analysis, selection, preview) : null),
-    [project, analysis, selection, preview],
+    () => (preview ? dragScene(drawn, analysis, selection, preview) : null),
+    [drawn, analysis, selection, preview],
   );
 
-  const drawStatic = useCallback(
-    (c: Context) => {
-      const ctx = native(c);
-      drawGrid(ctx, viewport, size.width, size.height, units);
+  // Layers for what changes at different rates. A test-pressure change redraws the two layers of
+  // results (blocks with the grid under them; thrust arrows and restrained zones); the pipes, and the
+  // symbols with their marks, are the same objects (`reuseEqualParts`) and are not drawn again.
+  // The marks get their room first; the thrust labels take what is left.
+  const { width, height } = size;
+  const [measure] = useState(() => document.createElement('canvas').getContext('2d'));
+  const { fittings, plainNodes, pipes, polygons, zones, arrows, largestForce } = scene;
+  const marks = useMemo(() => {
+    const space = new LabelSpace(width, height);
+    const tags = measure ? placeTags(measure, viewport, { fittings, plainNodes }, space) : new Map();
+    return { space, tags };
+  }, [measure, viewport, width, height, fittings, plainNodes]);
+  const drawGround = useCallback(
+    (_: Context, shape: KonvaShape) => {
+      const ctx = native(shape);
+      drawGrid(ctx, viewport, width, height, units);
+      // The site plan lies over the grid and under everything of the design.
       if (underlay && underlayImage.status === 'ready') drawUnderlay(ctx, viewport, underlay, underlayImage.image);
-      drawRestraints(ctx, viewport, scene);
-      drawPipes(ctx, viewport, scene);
-      const space = new LabelSpace(size.width, size.height);
-      const tags = placeTags(ctx, viewport, scene, space);
-      drawRestrainedZones(ctx, viewport, scene, units, space);
-      drawArrows(ctx, viewport, scene, units, space);
-      drawFittings(ctx, viewport, scene, tags);
+      drawRestraints(ctx, viewport, { polygons }, width, height);
     },
-    [viewport, size, scene, units, underlay, underlayImage],
+    [viewport, width, height, units, polygons, underlay, underlayImage],
+  );
+  const drawRoute = useCallback(
+    (_: Context, shape: KonvaShape) => drawPipes(native(shape), viewport, { pipes }, width, height),
+    [viewport, width, height, pipes],
+  );
+  const drawThrust = useCallback(
+    (_: Context, shape: KonvaShape) => {
+      const ctx = native(shape);
+      const space = marks.space.clone();
+      drawRestrainedZones(ctx, viewport, { zones }, units, space);
+      drawArrows(ctx, viewport, { arrows, largestForce }, units, space);
+      performance.mark('mainbrace-results-drawn');
+    },
+    [viewport, units, zones, arrows, largestForce, marks],
+  );
+  const drawMarks = useCallback(
+    (_: Context, shape: KonvaShape) =>
+      drawFittings(native(shape), viewport, { fittings, plainNodes }, marks.tags, width, height),
+    [viewport, width, height, fittings, plainNodes, marks],
   );
 
   const markedDrawn = useRef(false);
@@ -185,12 +232,21 @@ export function PlanView() {
     >
       <Stage width={size.width || 50} height={size.height || 50} listening={false}>
         <Layer listening={false}>
-          <Shape sceneFunc={drawStatic} />
+          <Shape sceneFunc={drawGround} />
+        </Layer>
+        <Layer listening={false}>
+          <Shape sceneFunc={drawRoute} />
+        </Layer>
+        <Layer listening={false}>
+          <Shape sceneFunc={drawThrust} />
+        </Layer>
+        <Layer listening={false}>
+          <Shape sceneFunc={drawMarks} />
         </Layer>
         <Layer listening={false}>
           <Shape
-            sceneFunc={(c) => {
-              const ctx = native(c);
+            sceneFunc={(_, shape) => {
+              const ctx = native(shape);
               if (moving) {
                 drawPipes(ctx, viewport, moving);
                 drawFittings(
@@ -200,7 +256,7 @@ export function PlanView() {
                   placeTags(ctx, viewport, moving, new LabelSpace(size.width, size.height)),
                 );
               }
-              drawHover(ctx, viewport, project, hover, tool === 'draw');
+              drawHover(ctx, viewport, drawn, hover, tool === 'draw');
               drawOverlay(ctx, viewport, draw, selectBox, units, snappedNow);
               if (underlayPick && underlay)
                 drawPicks(

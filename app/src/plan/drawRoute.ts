@@ -4,6 +4,15 @@ import { toScreen, type Viewport } from '../state/viewport.js';
 import { LINE, MATERIAL_DASH, PALETTE, TYPE, pipeWidth } from './palette.js';
 import type { LabelSpace } from './labelSpace.js';
 import { symbol } from './fittingSymbol.js';
+import {
+  MIN_HATCH_PX,
+  MIN_POLYGON_PX,
+  Occupancy,
+  SYMBOL_CELL_PX,
+  onScreen,
+  segmentOnScreen,
+  textWidth,
+} from './levelOfDetail.js';
 
 type Ctx = CanvasRenderingContext2D;
 
@@ -43,13 +52,35 @@ function hatch(ctx: Ctx, v: Viewport, pts: readonly { x: number; y: number }[], 
   ctx.restore();
 }
 
-/** Blocks (hatched), anchors (crossed) and trench pads (dashed), under the pipes. */
-export function drawRestraints(ctx: Ctx, v: Viewport, scene: Scene) {
+/**
+ * Blocks (hatched), anchors (crossed) and trench pads (dashed), under the pipes. A polygon smaller
+ * than MIN_POLYGON_PX on screen, or off it, is not drawn; hatching needs MIN_HATCH_PX across.
+ */
+export function drawRestraints(
+  ctx: Ctx,
+  v: Viewport,
+  scene: Pick<Scene, 'polygons'>,
+  width = Infinity,
+  height = Infinity,
+) {
   for (const poly of scene.polygons) {
+    let x0 = Infinity,
+      x1 = -Infinity,
+      y0 = Infinity,
+      y1 = -Infinity;
+    for (const p of poly.points) {
+      const s = toScreen(v, p);
+      x0 = Math.min(x0, s.sx);
+      x1 = Math.max(x1, s.sx);
+      y0 = Math.min(y0, s.sy);
+      y1 = Math.max(y1, s.sy);
+    }
+    if (Math.max(x1 - x0, y1 - y0) < MIN_POLYGON_PX) continue;
+    if (!segmentOnScreen(x0, y0, x1, y1, width, height)) continue;
     path(ctx, v, poly.points);
     ctx.fillStyle = PALETTE.blockFill;
     ctx.fill();
-    if (poly.kind === 'block') hatch(ctx, v, poly.points, PALETTE.block);
+    if (poly.kind === 'block' && Math.min(x1 - x0, y1 - y0) >= MIN_HATCH_PX) hatch(ctx, v, poly.points, PALETTE.block);
     path(ctx, v, poly.points);
     ctx.setLineDash(poly.kind === 'pad' ? [4, 3] : []);
     ctx.strokeStyle = poly.kind === 'anchor' ? PALETTE.anchor : poly.kind === 'pad' ? PALETTE.pad : PALETTE.block;
@@ -69,11 +100,12 @@ export function drawRestraints(ctx: Ctx, v: Viewport, scene: Scene) {
 }
 
 /** Pipes: blue, weighted by diameter, dashed by material; selected pipes darker with a halo. */
-export function drawPipes(ctx: Ctx, v: Viewport, scene: Scene) {
+export function drawPipes(ctx: Ctx, v: Viewport, scene: Pick<Scene, 'pipes'>, width = Infinity, height = Infinity) {
   ctx.lineCap = 'round';
   for (const p of scene.pipes) {
     const a = toScreen(v, p.a),
       b = toScreen(v, p.b);
+    if (!segmentOnScreen(a.sx, a.sy, b.sx, b.sy, width, height)) continue;
     const w = pipeWidth(p.outsideDiameter);
     if (p.selected) {
       ctx.strokeStyle = PALETTE.selection;
@@ -149,20 +181,22 @@ function warningMark(ctx: Ctx, wx: number, ty: number) {
 export function placeTags(
   ctx: Ctx,
   v: Viewport,
-  scene: Scene,
+  scene: Pick<Scene, 'fittings' | 'plainNodes'>,
   space: LabelSpace,
 ): Map<string, { x: number; y: number }> {
-  ctx.font = TYPE.mark;
   const out = new Map<string, { x: number; y: number }>();
   const marked = [
     ...scene.fittings.map((f) => ({ node: f.node, at: f.at, mark: f.mark, warned: f.warned, selected: f.selected })),
     ...scene.plainNodes.flatMap((n) => (n.mark ? [{ ...n, node: n.id, mark: n.mark, warned: false }] : [])),
   ];
   const ordered = marked.sort((a, b) => Number(b.selected) - Number(a.selected));
+  const h = 15;
   for (const f of ordered) {
     const s = toScreen(v, f.at);
-    const w = ctx.measureText(f.mark).width + (f.warned ? 18 : 0) + 4;
-    const h = 15;
+    // Off screen, or no room even for the narrowest label at any corner: not measured at all.
+    if (!f.selected && !onScreen(s.sx, s.sy, space.width, space.height, 0)) continue;
+    if (!f.selected && !fitsAnywhere(space, s.sx, s.sy, h)) continue;
+    const w = textWidth(ctx, TYPE.mark, f.mark) + (f.warned ? 18 : 0) + 4;
     const spot = space.place([
       { x: s.sx + 8, y: s.sy - 19, w, h },
       { x: s.sx - 8 - w, y: s.sy - 19, w, h },
@@ -175,6 +209,17 @@ export function placeTags(
   return out;
 }
 
+/** The narrowest label (one character) has room at one of the four corners of a symbol. */
+function fitsAnywhere(space: LabelSpace, sx: number, sy: number, h: number): boolean {
+  const w = 12;
+  return (
+    space.fits({ x: sx + 8, y: sy - 19, w, h }) ||
+    space.fits({ x: sx - 8 - w, y: sy - 19, w, h }) ||
+    space.fits({ x: sx + 8, y: sy + 5, w, h }) ||
+    space.fits({ x: sx - 8 - w, y: sy + 5, w, h })
+  );
+}
+
 /** The selection ring round a symbol: amber, and thicker than any symbol line. */
 function ring(ctx: Ctx, x: number, y: number) {
   ctx.beginPath();
@@ -185,9 +230,21 @@ function ring(ctx: Ctx, x: number, y: number) {
 }
 
 /** Fitting symbols with their placed marks and warning markers; plain nodes and tie-ins (with their marks). */
-export function drawFittings(ctx: Ctx, v: Viewport, scene: Scene, tags: ReadonlyMap<string, { x: number; y: number }>) {
+export function drawFittings(
+  ctx: Ctx,
+  v: Viewport,
+  scene: Pick<Scene, 'fittings' | 'plainNodes'>,
+  tags: ReadonlyMap<string, { x: number; y: number }>,
+  width = Infinity,
+  height = Infinity,
+) {
+  // Selected symbols first, so that a crowded cell shows the one the user picked.
+  const cells = new Occupancy(SYMBOL_CELL_PX);
+  const shows = (s: { sx: number; sy: number }, selected: boolean, tagged: boolean) =>
+    onScreen(s.sx, s.sy, width, height, 16) && (cells.take(s.sx, s.sy) || selected || tagged);
   for (const n of scene.plainNodes) {
     const s = toScreen(v, n.at);
+    if (!shows(s, n.selected, tags.has(n.id))) continue;
     if (n.tieIn) {
       // A tie-in hands its thrust to the existing main: the open diamond of the symbol set.
       if (n.selected) ring(ctx, s.sx, s.sy);
@@ -206,20 +263,29 @@ export function drawFittings(ctx: Ctx, v: Viewport, scene: Scene, tags: Readonly
   }
   for (const f of scene.fittings) {
     const s = toScreen(v, f.at);
+    const at = tags.get(f.node);
+    if (!shows(s, f.selected, at !== undefined)) continue;
     if (f.selected) ring(ctx, s.sx, s.sy);
     symbol(ctx, f, s.sx, s.sy);
-    const at = tags.get(f.node);
     if (!at) continue;
     label(ctx, f.mark, at.x, at.y, PALETTE.ink, TYPE.mark);
-    if (f.warned) warningMark(ctx, at.x + ctx.measureText(f.mark).width + 10, at.y);
+    if (f.warned) warningMark(ctx, at.x + textWidth(ctx, TYPE.mark, f.mark) + 10, at.y);
   }
 }
 
 /** Thrust arrows from each fitting in the direction the water pushes it, one force scale for the plan. */
-export function drawArrows(ctx: Ctx, v: Viewport, scene: Scene, units: UnitSystem, space: LabelSpace) {
+export function drawArrows(
+  ctx: Ctx,
+  v: Viewport,
+  scene: Pick<Scene, 'arrows' | 'largestForce'>,
+  units: UnitSystem,
+  space: LabelSpace,
+) {
   if (scene.largestForce <= 0) return;
+  const cells = new Occupancy(SYMBOL_CELL_PX);
   for (const a of scene.arrows) {
     const s = toScreen(v, a.at);
+    if (!onScreen(s.sx, s.sy, space.width, space.height) || !cells.take(s.sx, s.sy)) continue;
     const length = a.horizontal > 0 ? Math.max(10, (ARROW_PX * a.horizontal) / scene.largestForce) : 0;
     const ux = a.direction.x,
       uy = -a.direction.y;
@@ -240,18 +306,20 @@ export function drawArrows(ctx: Ctx, v: Viewport, scene: Scene, units: UnitSyste
       ctx.closePath();
       ctx.fill();
     }
+    // The label is formatted and measured only if the shortest force label ("9 kN", about 26 px) has room.
+    const h = 13;
+    const room = (w: number) => [
+      { x: ux >= 0 ? ex + 3 : ex - 3 - w, y: uy >= 0 ? ey + 2 : ey - 2 - h, w, h },
+      { x: ux >= 0 ? ex - 3 - w : ex + 3, y: uy >= 0 ? ey + 2 : ey - 2 - h, w, h },
+      { x: ex - w / 2, y: uy >= 0 ? ey + 4 : ey - 4 - h, w, h },
+    ];
+    if (!room(24).some((r) => space.fits(r))) continue;
     const total = Math.hypot(a.horizontal, a.vertical);
     let text = formatSi(a.horizontal, 'force', units);
     if (Math.abs(a.vertical) > 0.02 * total)
       text += `  ${a.vertical > 0 ? '↑' : '↓'} ${formatSi(Math.abs(a.vertical), 'force', units)}`;
-    ctx.font = TYPE.force;
-    const w = ctx.measureText(text).width + 4;
-    const h = 13;
-    const spot = space.place([
-      { x: ux >= 0 ? ex + 3 : ex - 3 - w, y: uy >= 0 ? ey + 2 : ey - 2 - h, w, h },
-      { x: ux >= 0 ? ex - 3 - w : ex + 3, y: uy >= 0 ? ey + 2 : ey - 2 - h, w, h },
-      { x: ex - w / 2, y: uy >= 0 ? ey + 4 : ey - 4 - h, w, h },
-    ]);
+    const w = textWidth(ctx, TYPE.force, text) + 4;
+    const spot = space.place(room(w));
     if (spot) label(ctx, text, spot.x + 2, spot.y + h / 2, PALETTE.thrust, TYPE.force);
   }
 }

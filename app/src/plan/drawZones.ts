@@ -4,6 +4,7 @@ import { toScreen, type Viewport } from '../state/viewport.js';
 import { PALETTE, LINE, TYPE } from './palette.js';
 import type { LabelSpace } from './labelSpace.js';
 import { label } from './drawRoute.js';
+import { segmentOnScreen, textWidth } from './levelOfDetail.js';
 
 type Ctx = CanvasRenderingContext2D;
 
@@ -18,7 +19,13 @@ const MIN_TICK_GAP_PX = 5;
  * line beside it from the fitting to the end of the zone, closed by oblique strokes (not arrowheads,
  * which are the thrust's), labelled with the length and the joint count. All in the restraint colour.
  */
-export function drawRestrainedZones(ctx: Ctx, v: Viewport, scene: Scene, units: UnitSystem, space: LabelSpace) {
+export function drawRestrainedZones(
+  ctx: Ctx,
+  v: Viewport,
+  scene: Pick<Scene, 'zones'>,
+  units: UnitSystem,
+  space: LabelSpace,
+) {
   for (const z of scene.zones) drawZone(ctx, v, z, units, space);
 }
 
@@ -31,6 +38,9 @@ function drawZone(ctx: Ctx, v: Viewport, z: SceneZone, units: UnitSystem, space:
     ny = -ux * z.side;
   const lengthPx = z.planLength * v.scale;
   const along = (d: number, off = 0) => ({ x: a.sx + ux * d + nx * off, y: a.sy + uy * d + ny * off });
+  const end = along(lengthPx);
+  if (lengthPx < 1.5) return; // too short to see: the schedule and the details panel give it
+  if (!segmentOnScreen(a.sx, a.sy, end.x, end.y, space.width, space.height, OFFSET_PX + 20)) return;
   ctx.save();
   ctx.strokeStyle = PALETTE.restraint;
   ctx.fillStyle = PALETTE.restraint;
@@ -76,24 +86,26 @@ function drawZone(ctx: Ctx, v: Viewport, z: SceneZone, units: UnitSystem, space:
   ctx.stroke();
   ctx.restore();
 
-  // The length as the schedule gives it (rounded up), so the plan and the sheet read the same.
-  const text = `${quantityText(z.length, 'restrained', units)} · ${jointsText(z.joints)}`;
-  ctx.font = TYPE.dimension;
-  const w = ctx.measureText(text).width + 4,
-    h = 13;
+  const h = 13;
   const mid = along(lengthPx / 2, OFFSET_PX + 9);
   // Beside the middle of the line on its outer side, else either end of it.
-  const box = (p: { x: number; y: number }) => ({
+  const box = (p: { x: number; y: number }, w: number) => ({
     x: nx >= 0 ? p.x : p.x - w,
     y: ny >= 0 ? p.y : p.y - h,
     w,
     h,
   });
-  const spot = space.place([
-    box(mid),
-    { ...box(mid), x: mid.x - w / 2 },
-    box(along(lengthPx * 0.8, OFFSET_PX + 9)),
-    box(along(lengthPx * 0.2, OFFSET_PX + 9)),
-  ]);
+  const spots = (w: number) => [
+    box(mid, w),
+    { ...box(mid, w), x: mid.x - w / 2 },
+    box(along(lengthPx * 0.8, OFFSET_PX + 9), w),
+    box(along(lengthPx * 0.2, OFFSET_PX + 9), w),
+  ];
+  // No room even for the shortest such label ("3 m · 1 joint" is wider than 40 px): not formatted at all.
+  if (!spots(40).some((r) => space.fits(r))) return;
+  // The length as the schedule gives it (rounded up), so the plan and the sheet read the same.
+  const text = `${quantityText(z.length, 'restrained', units)} · ${jointsText(z.joints)}`;
+  const w = textWidth(ctx, TYPE.dimension, text) + 4;
+  const spot = space.place(spots(w));
   if (spot) label(ctx, text, spot.x + 2, spot.y + h / 2, PALETTE.restraint, TYPE.dimension);
 }

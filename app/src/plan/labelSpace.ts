@@ -16,9 +16,16 @@ export class LabelSpace {
   private readonly buckets = new Map<string, Rect[]>();
 
   constructor(
-    private readonly width: number,
-    private readonly height: number,
+    readonly width: number,
+    readonly height: number,
   ) {}
+
+  /** A copy to place more labels in, leaving this one as it is (the marks' room, shared by the layers above). */
+  clone(): LabelSpace {
+    const c = new LabelSpace(this.width, this.height);
+    for (const [k, list] of this.buckets) c.buckets.set(k, [...list]);
+    return c;
+  }
 
   private keys(r: Rect): string[] {
     const out: string[] = [];

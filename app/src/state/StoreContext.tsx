@@ -1,6 +1,7 @@
 import { createContext, useContext, type ReactNode } from 'react';
 import { useStore } from 'zustand';
-import { analyse, type Analysis } from '@mainbrace/solver';
+import type { Analysis } from '@mainbrace/solver';
+import { resultsOf } from './results.js';
 import type { AppState, AppStore } from './store.js';
 import type { Actions } from './actions.js';
 
@@ -31,7 +32,10 @@ export const useActions = (): Actions => useCtx().actions;
 
 export const useAppStore = (): AppStore => useCtx().store;
 
-/** Results of the current document: `analyse` is memoised by document identity, so this is one lookup per render. */
+/**
+ * Results of the current document, from its result inputs only (`resultsOf`): one lookup per render,
+ * and the same object after an edit that cannot change a result (the name, the units, the sheet).
+ */
 export function useAnalysis(): Analysis {
-  return analyse(useApp((s) => s.project));
+  return useApp((s) => resultsOf(s.project));
 }

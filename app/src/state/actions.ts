@@ -1,12 +1,4 @@
-import {
-  parseProject,
-  type LoadCase,
-  type Pipe,
-  type Project,
-  type ProjectNode,
-  type Soil,
-  type Underlay,
-} from '@mainbrace/solver';
+import { type LoadCase, type Pipe, type Project, type ProjectNode, type Soil, type Underlay } from '@mainbrace/solver';
 import type { AppState, AppStore, CaseView, DrawerTab, Selection, ToolName } from './store.js';
 import { EMPTY_SELECTION } from './store.js';
 import {
@@ -25,14 +17,21 @@ import { routePieces } from './connectivity.js';
 import type { DrawState } from '../tools/drawTool.js';
 import { fittedView, revealFitting as planCommandReveal, showFitting } from '../tools/planCommands.js';
 import { planInputOf } from '../tools/planBridge.js';
+import { editProblems } from './editCheck.js';
+import { checks } from './checks.js';
 
 /** Typing pauses shorter than this, ms, keep extending the same undo step. */
 const TYPING_WINDOW_MS = 1500;
 
-/** Keeps a selection to ids that still exist (after undo, delete or open). */
+/**
+ * Keeps a selection to ids that still exist (after undo, delete or open); the same object when every
+ * id still exists, so that an edit elsewhere (a keystroke in the name) does not look like a new selection.
+ */
 function prune(sel: Selection, p: Project): Selection {
+  if (sel.nodes.size === 0 && sel.pipes.size === 0) return sel;
   const nodes = new Set(p.nodes.map((n) => n.id));
   const pipes = new Set(p.pipes.map((x) => x.id));
+  if ([...sel.nodes].every((id) => nodes.has(id)) && [...sel.pipes].every((id) => pipes.has(id))) return sel;
   return {
     nodes: new Set([...sel.nodes].filter((id) => nodes.has(id))),
     pipes: new Set([...sel.pipes].filter((id) => pipes.has(id))),
@@ -49,18 +48,20 @@ export function createActions(store: AppStore) {
   /**
    * An undoable edit: a new document from the old one. A change that would leave the document
    * invalid (two nodes on one point, an ID above the OD) is refused with a message, never stored.
+   * Only the parts the edit replaced are checked (`editProblems`); a whole document that was checked
+   * already (opened, restored) comes `checked` and is not checked again.
    */
-  const edit = (change: (p: Project) => Project, typing?: string) => {
+  const edit = (change: (p: Project) => Project, typing?: string, checked = false) => {
     const before = get().project;
     const after = change(before);
     if (after === before) return;
-    const check = validated(after);
-    if (!check.ok) {
+    const lines = checked ? [] : editProblems(before, after);
+    if (lines.length) {
       set({
         notice: {
           tone: 'error',
           title: 'That change was not made: it would leave the project invalid',
-          lines: check.lines,
+          lines,
         },
       });
       return;
@@ -175,9 +176,12 @@ export function createActions(store: AppStore) {
         };
       }),
     setDefaultSoil: (id: string) => edit((p) => ({ ...p, defaultSoil: id })),
-    /** Replaces the whole document (open, new); it is one undoable step like any edit. */
+    /**
+     * Replaces the whole document (open, new, another tab's copy); it is one undoable step like any
+     * edit. Every caller hands a document that passed the whole-file check (`validated`, the file reader).
+     */
     replaceProject: (project: Project) => {
-      edit(() => project);
+      edit(() => project, undefined, true);
       set({
         units: project.units,
         selection: EMPTY_SELECTION,
@@ -257,7 +261,7 @@ export type Actions = ReturnType<typeof createActions>;
 
 /** Checks a whole document before it replaces the current one (used by Open and restore). */
 export function validated(data: unknown): { ok: true; project: Project } | { ok: false; lines: string[] } {
-  const r = parseProject(data);
+  const r = checks().parseProject(data);
   return r.ok
     ? { ok: true, project: r.project }
     : { ok: false, lines: r.problems.map((p) => (p.path ? `${p.path}: ${p.message}` : p.message)) };

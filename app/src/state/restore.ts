@@ -4,6 +4,7 @@ import type { KeyValueStore } from './keyValue.js';
 import { readRecord, type StoredRecord } from './storedProject.js';
 import { keepCopyOnce, type KeptCopy } from './keptCopies.js';
 import { storageErrorDetail } from './storageError.js';
+import { checkProjectText } from './projectCheck.js';
 
 /** What was kept from the last visit, and the revision this tab's document grows from. */
 export type Restored =
@@ -37,7 +38,7 @@ export async function restoreProject(kv: KeyValueStore): Promise<Restored> {
   }
   if (!record) return { kind: 'none' };
   if (record.text.trim() === '') return { kind: 'empty', revision: record.revision };
-  const r = projectFromText(record.text);
+  const r = await checkProjectText(record.text, 'stored');
   if (r.ok) return { kind: 'project', project: r.project, revision: record.revision };
   const copy = await keepCopyOnce(kv, record.text, 'could not be read when Mainbrace started').catch(() => null);
   return { kind: 'unreadable', lines: r.lines, revision: record.revision, copy };

@@ -1,8 +1,8 @@
 // The solver's and the command line's speed, each figure beside a floor measured in the same run, as
-// medians of paired runs; exits 1 when a ratio budget is broken (docs/performance.md).
+// medians of paired runs of CPU time; exits 1 when a ratio budget is broken (docs/performance.md).
 // Usage: pnpm bench (from the repo root). Files go to .bench/ (ignored by git).
 import { execFileSync, spawnSync } from 'node:child_process';
-import { mkdirSync, readFileSync } from 'node:fs';
+import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { join } from 'node:path';
 import { build } from 'rolldown';
@@ -33,11 +33,22 @@ const median = (v) => {
   return s.length % 2 ? s[m] : (s[m - 1] + s[m]) / 2;
 };
 
+// Each child reports its own CPU time (user + system, all threads) on exit, through file descriptor 3.
+const preload = join(out, 'cpu-report.cjs');
+writeFileSync(
+  preload,
+  "process.on('exit', () => { const u = process.cpuUsage(); require('fs').writeSync(3, String((u.user + u.system) / 1000)); });\n",
+);
+
+/** Runs node with `args`; its CPU time and wall time, ms. */
 function run(args) {
   const start = process.hrtime.bigint();
-  const r = spawnSync(process.execPath, args, { stdio: ['ignore', 'ignore', 'inherit'] });
+  const r = spawnSync(process.execPath, ['--require', preload, ...args], {
+    stdio: ['ignore', 'ignore', 'inherit', 'pipe'],
+  });
+  const wall = Number(process.hrtime.bigint() - start) / 1e6;
   if (r.status !== 0) throw new Error(`${args.join(' ')} exited ${r.status}`);
-  return Number(process.hrtime.bigint() - start) / 1e6;
+  return { cpu: Number(r.output[3].toString()), wall };
 }
 
 /** A command beside its floor, each pair run back to back, alternating which goes first. */
@@ -45,6 +56,8 @@ function pairedProcesses(args, floorArgs, pairs = 11) {
   const f = [];
   const b = [];
   const r = [];
+  const wf = [];
+  const wb = [];
   run(args); // the first start of a file pays the disk cache
   for (let i = 0; i < pairs; i++) {
     let figure;
@@ -56,11 +69,13 @@ function pairedProcesses(args, floorArgs, pairs = 11) {
       figure = run(args);
       floor = run(floorArgs);
     }
-    f.push(figure);
-    b.push(floor);
-    r.push(figure / floor);
+    f.push(figure.cpu);
+    b.push(floor.cpu);
+    wf.push(figure.wall);
+    wb.push(floor.wall);
+    r.push(figure.cpu / floor.cpu);
   }
-  return { figure: median(f), floor: median(b), ratio: median(r) };
+  return { figure: median(f), floor: median(b), ratio: median(r), wallFigure: median(wf), wallFloor: median(wb) };
 }
 
 const cli = join(root, 'packages/solver/bin/mainbrace.mjs');
@@ -85,7 +100,8 @@ const LABEL = {
 };
 const ms = (v) => (v < 10 ? v.toFixed(2) : v.toFixed(0));
 let broken = 0;
-console.log('figure'.padEnd(56), 'median ms'.padStart(10), 'floor ms'.padStart(10), 'ratio'.padStart(7), '  budget');
+console.log('CPU time (user + system), medians of paired runs; wall-clock medians in brackets');
+console.log('figure'.padEnd(56), 'figure ms'.padStart(18), 'floor ms'.padStart(16), 'ratio'.padStart(8), '  budget');
 for (const [key, r] of Object.entries(results)) {
   const floorName = key.startsWith('cli-') ? 'read + JSON.parse' : 'typed-array floor';
   const budget = BUDGETS[key];
@@ -93,9 +109,9 @@ for (const [key, r] of Object.entries(results)) {
   if (!ok) broken++;
   console.log(
     (LABEL[key] ?? key).padEnd(56),
-    ms(r.figure).padStart(10),
-    ms(r.floor).padStart(10),
-    `${r.ratio.toFixed(2)}×`.padStart(7),
+    `${ms(r.figure)} (${ms(r.wallFigure)})`.padStart(18),
+    `${ms(r.floor)} (${ms(r.wallFloor)})`.padStart(16),
+    `${r.ratio.toFixed(2)}×`.padStart(8),
     budget === undefined ? `  (floor: ${floorName})` : `  ≤ ${budget}× ${ok ? 'ok' : 'BROKEN'} (floor: ${floorName})`,
   );
 }

@@ -7,6 +7,7 @@ export { implausibleInputs } from './model/plausibility.js';
 export { nodeCover, nodeGround, nodeOutsideDiameters, pipeLevelFor, coverFor } from './model/groundLevel.js';
 export { caseLabel } from './model/caseLabel.js';
 export { parseProject, parseProjectText, type ParseResult } from './model/parseProject.js';
+export { partProblems, crossProblems, type ProjectList } from './model/partCheck.js';
 export { problemText, type Problem } from './model/problems.js';
 export { projectJsonSchema } from './model/jsonSchema.js';
 export * from './geometry/vector.js';
@@ -47,7 +48,7 @@ export {
   type SoilTable,
 } from './restraint/soilLibrary.js';
 export { rankinePassiveCoefficient, passiveResistance } from './restraint/passiveResistance.js';
-export { scheduleOf, type Schedule, type ScheduleFitting } from './schedule/scheduleRows.js';
+export { fittingProfile, scheduleOf, type Schedule, type ScheduleFitting } from './schedule/scheduleRows.js';
 export { scheduleCsv } from './schedule/scheduleCsv.js';
 export { scheduleTable } from './schedule/scheduleTable.js';
 export { scheduleJson, diagnosticJson, JSON_DECIMALS } from './schedule/scheduleJson.js';
@@ -103,6 +104,17 @@ export {
   findBedding,
   type Bedding,
 } from './catalog/layingConditions.js';
-export type { PipeSeries, PipeSize } from './catalog/pipeSeries.js';
+export type { PipeSeries, PipeSize, PressureRating } from './catalog/pipeSeries.js';
+export { pipeRating, pipeRatingChecks, caseLimit } from './pressure/pipeRating.js';
+export {
+  surgeEstimate,
+  waveSpeed,
+  pipeWaveSpeed,
+  joukowsky,
+  supportFactor,
+  PIPE_ELASTICITY,
+  type SurgeEstimate,
+  type PipeSurge,
+} from './pressure/surge.js';
 export { proposeTestPressure, type TestProposal, type TestRule, type TestCriterion } from './pressure/testPressure.js';
 export * from './geometry/similarity.js';

@@ -109,14 +109,25 @@ describe('the command line', () => {
     expect(e.stdout).toContain('Required bearing area');
     expect(e.stdout).toContain('A = SF · T_h / σ_b');
     // The restraint elements are listed first, each named by the fitting's mark.
-    expect(e.stdout).toMatch(/^Restraint\n {2}A4 block {2}1\.00 m w × 1\.00 m h × 0\.60 m t, 0\.60 m³$/m);
+    expect(e.stdout).toMatch(
+      /^Restraint\n {2}A4 block {2}1\.10 m w × 0\.90 m h × 0\.60 m t, 0\.60 m³; bears 0° N, 63\.1 kN and holds 0\.2 kN up$/m,
+    );
     const valve = run('explain', demo, 'A10');
     expect(valve.stdout).toMatch(/^ {2}A10 block {11}\S/m);
     expect(valve.stdout).toMatch(/^ {2}A10 opposite block {2}\S/m);
-    expect(run('explain', demo, 'A6').stdout).toMatch(/^ {2}A6 anchor {2}1\.25 m cube, 1\.80 m³$/m);
+    expect(run('explain', demo, 'A6').stdout).toMatch(
+      /^ {2}A6 anchor {2}1\.25 m l × 1\.25 m w × 1\.25 m h, 1\.85 m³; holds 16\.5 kN up and 2\.5 kN sideways by base friction$/m,
+    );
     // 6.2 m restrained at the demo's default 6 m laying length: joints at 0 and 6 m, two of them.
     expect(run('explain', demo, 'A13').stdout).toMatch(/^ {2}A13 joints {2}6\.2 m toward A12 \(2 joints\)$/m);
     expect(t.stdout).toMatch(/^A13 .*restrain 6\.2 m toward A12 \(2 joints\), 6\.2 m toward A14 \(2 joints\)/m);
+  });
+  it('marks crest and sag bends and gives each element its own force and way of bearing', () => {
+    expect(run('explain', demo, 'A6').stdout).toMatch(/^A6 — Bend 16\.31° crest /m);
+    // A sag: the block bears sideways toward the outside of the bend, the pad takes the downward part.
+    const sag = run('explain', demo, 'A7').stdout;
+    expect(sag).toMatch(/^ {2}A7 block {6}.*; bears 293° NW, 2\.6 kN$/m);
+    expect(sag).toMatch(/^ {2}A7 bottom pad {2}.*; bears 17\.5 kN down$/m);
   });
 
   it('validates a good file and prints the JSON Schema', () => {

@@ -25,14 +25,19 @@ describe('the demo route, B2, worked by hand', () => {
     expectClose(f.envelope.governing.total[2], 90.35, 1e-3);
   });
 
-  it('gets a 0.70 m × 0.75 m face for 0.497 m² on 95.76 kPa sand', () => {
-    // A = 1.5 × 31,728.9 / 95,761 = 0.49700 m²; centre depth 1.5 + 0.163 = 1.663 m → h ≤ 1.109 m;
-    // √A = 0.705 → h = 0.75 m (50 mm steps); b = 0.497 / 0.75 = 0.663 → 0.70 m; concrete 0.70 × 0.75 × 0.6 = 0.315 m³.
+  it('gets a 1.00 m × 0.50 m face for 0.497 m² on 95.76 kPa sand: the least face of whole 50 mm steps', () => {
+    // A = 1.5 × 31,728.9 / 95,761 = 0.49700 m²; centre depth 1.5 + 0.163 = 1.663 m → h ≤ ⅔ × 1.663 = 1.109
+    // → 1.10 m; h ≥ OD → 0.35 m; b ≤ 2h below the tallest. Least b·h ≥ A over h = 0.35 … 1.10 m:
+    // h 0.35 → b ≤ 0.70, 0.245 m² short; 0.40 → 0.32 short; 0.45 → needs 1.15 > 0.90; 0.50 → b = 0.994
+    // → 1.00 m, 0.500 m²; 0.55 → 0.95, 0.5225; 0.60 → 0.85, 0.510; 0.65 → 0.80, 0.520; 0.70 → 0.75, 0.525;
+    // 0.75 → 0.70, 0.525; … 1.00 → 0.50, 0.500 (as square as 1.00 × 0.50; the lower face is kept).
+    // Concrete 1.00 × 0.50 × 0.6 = 0.300 m³.
     const b = f.restraint.block!;
     expectClose(b.bearingArea, 0.497001, 1e-5);
-    expectClose(b.faceHeight, 0.75, 1e-12);
-    expectClose(b.faceWidth, 0.7, 1e-12);
-    expectClose(b.concreteVolume, 0.315, 1e-12);
-    expect(f.restraint.anchor).toBeNull(); // its 0.315 m³ weighs 7.4 kN ≥ 1.5 × 90 N of uplift
+    expectClose(b.faceHeight, 0.5, 1e-12);
+    expectClose(b.faceWidth, 1.0, 1e-12);
+    expectClose(b.concreteVolume, 0.3, 1e-12);
+    expect(b.passiveRatio).toBeGreaterThanOrEqual(1.5);
+    expect(f.restraint.anchor).toBeNull(); // its 0.300 m³ weighs 7.1 kN ≥ 1.5 × 90 N of uplift
   });
 });

@@ -21,9 +21,9 @@ export interface RouteSpec {
   density?: number;
 }
 
-/** Builds and validates a project; throws with the problems if the fixture itself is wrong. */
-export function route(spec: RouteSpec): Project {
-  const input: ProjectInput = {
+/** The project file a spec describes, before validation. */
+export function routeInput(spec: RouteSpec): ProjectInput {
+  return {
     format: 'mainbrace-project',
     version: 1,
     name: 'Test route',
@@ -43,6 +43,11 @@ export function route(spec: RouteSpec): Project {
       ...rest,
     })),
   } as ProjectInput;
+}
+
+/** Builds and validates a project; throws with the problems if the fixture itself is wrong. */
+export function route(spec: RouteSpec): Project {
+  const input = routeInput(spec);
   const parsed = parseProject(input);
   if (!parsed.ok) throw new Error(parsed.problems.map((p) => `${p.path}: ${p.message}`).join('\n'));
   return parsed.project;

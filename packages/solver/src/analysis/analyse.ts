@@ -11,6 +11,7 @@ import { sameDiagnostic, uniqueDiagnostics, type Diagnostic } from '../diagnosti
 import type { ProvenanceId } from '../provenance/register.js';
 import type { CalcStep } from './calcRecord.js';
 import { implausibleInputs } from '../model/plausibility.js';
+import { pipeRatingChecks } from '../pressure/pipeRating.js';
 import { copySums, fillStates, readStates, thrustSums, writeSums, type ThrustSums } from './thrustSums.js';
 import { fittingDiagnostics } from './fittingDiagnostics.js';
 import { routeChange } from './routeChange.js';
@@ -53,7 +54,10 @@ export interface Analysis {
   chainage: Map<string, number>;
   /** marks of every fitting, tie-ins included */
   marks: Map<string, string>;
-  /** findings about the inputs of the whole project (values outside their usual range), most severe first */
+  /**
+   * findings about the project as a whole: inputs outside their usual range, and pipes loaded past
+   * their pressure rating; most severe first
+   */
   diagnostics: Diagnostic[];
 }
 
@@ -230,9 +234,35 @@ function assemble(
     runOf: layout.runOf,
     chainage: layout.chainage,
     marks,
-    diagnostics: uniqueDiagnostics(inputs),
+    diagnostics: uniqueDiagnostics([...inputs, ...pipeRatingChecks(project)]),
   };
   kept.set(analysis, { sums, index, geometry });
+  return analysis;
+}
+
+/**
+ * A load-case edit: the same fittings in the same order with the same sums; each is rescaled, and its
+ * restraint kept where its envelope did not change.
+ */
+function rescale(prev: Analysis, k: Kept, project: Project): Analysis {
+  const inputs = implausibleInputs(project);
+  const atNode = byNode(inputs);
+  const n = prev.fittings.length;
+  const fittings = new Array<FittingAnalysis>(n);
+  for (let f = 0; f < n; f++) {
+    const old = prev.fittings[f]!;
+    const place: Place = { mark: old.mark, run: old.run, chainage: old.chainage };
+    const here = atNode.get(old.node.id) ?? NONE;
+    fittings[f] = solveFitting(project, old.node, old.legs, old.geometry, place, here, k.sums, f, old);
+  }
+  const analysis: Analysis = {
+    ...prev,
+    project,
+    fittings,
+    byNode: new Map(fittings.map((f) => [f.node.id, f])),
+    diagnostics: uniqueDiagnostics(inputs),
+  };
+  kept.set(analysis, k);
   return analysis;
 }
 
@@ -265,18 +295,12 @@ export function analyseNext(prev: Analysis | null | undefined, project: Project)
   if (!k) return analyseProject(project);
   const change = routeChange(prev.project, project, prev.legs);
   if (change.kind === 'all') return analyseProject(project);
-  if (change.kind === 'same' || change.kind === 'cases') {
-    const layout: RunLayout = { runs: prev.runs, runOf: prev.runOf, chainage: prev.chainage };
-    const reuse = change.kind === 'same' ? 'all' : 'sums';
-    return assemble(
-      project,
-      prev.legs,
-      k.geometry,
-      { analysis: prev, kept: k, reuse: () => reuse },
-      layout,
-      prev.marks,
-    );
+  if (change.kind === 'same') {
+    const same: Analysis = { ...prev, project };
+    kept.set(same, k);
+    return same;
   }
+  if (change.kind === 'cases') return rescale(prev, k, project);
   const { dirty } = change;
   const useOutside = project.design.thrustArea === 'outside';
   const nodeById = new Map<string, ProjectNode>();

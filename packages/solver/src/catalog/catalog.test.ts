@@ -1,7 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import { expectClose } from '../../test/tolerance.js';
 import { INCH } from '../units/conversions.js';
-import { CATALOG, findSeries, findSize, nearestSize, seriesForMaterial } from './catalog.js';
+import { CATALOG, findSeries, findSize, nearestSize, seriesChoices, seriesForMaterial } from './catalog.js';
 import { EN545_CLASS } from './ductileIronEn545.js';
 import { pipeWeightPerLength } from './materialDensity.js';
 
@@ -64,18 +64,23 @@ describe('the pipe catalogue', () => {
   });
 
   it('makes AWWA C900 PVC to the ductile-iron outside diameter of the same nominal size', () => {
-    // AWWA C900 DI-OD series = C151 ODs, domain.md §7.2
-    for (const id of ['pvc-c900-dr18', 'pvc-c900-dr14']) {
-      const series = findSeries(id)!;
-      expect(series.sizes.map((s) => s.nominal)).toEqual(['4', '6', '8', '10', '12', '14', '16', '18', '20', '24']);
-      for (const s of series.sizes) expect(s.outsideDiameter).toBe(size('di-awwa-pc350', s.nominal).outsideDiameter);
+    // AWWA C900 DI-OD series = C151 ODs, docs/check-values.md CV-26 (domain reference §7.2)
+    const upTo24 = ['4', '6', '8', '10', '12', '14', '16', '18', '20', '24'];
+    expect(findSeries('pvc-c900-dr14')!.sizes.map((s) => s.nominal)).toEqual(upTo24);
+    // DR 18 and DR 25 go on above 24 in (C900-16 spans 4–60 in; the DR/size pairs above 24 in from memory)
+    for (const id of ['pvc-c900-dr18', 'pvc-c900-dr25'])
+      expect(findSeries(id)!.sizes.map((s) => s.nominal)).toEqual([...upTo24, '30', '36']);
+    for (const id of ['pvc-c900-dr18', 'pvc-c900-dr14', 'pvc-c900-dr25']) {
+      for (const s of findSeries(id)!.sizes)
+        expect(s.outsideDiameter).toBe(size('di-awwa-pc350', s.nominal).outsideDiameter);
     }
+    expectClose(odInches('pvc-c900-dr25', '36'), 38.3, 1e-12);
   });
 
   it('keeps the dimension-ratio rule t = OD/DR and ID = OD − 2t on every plastic series', () => {
     // prettier-ignore
     const dr: Record<string, number> = {
-      'pvc-c900-dr18': 18, 'pvc-c900-dr14': 14,
+      'pvc-c900-dr18': 18, 'pvc-c900-dr14': 14, 'pvc-c900-dr25': 25,
       'hdpe-dips-dr11': 11, 'hdpe-dips-dr17': 17, 'hdpe-ips-dr11': 11, 'hdpe-ips-dr17': 17,
     };
     for (const [id, ratio] of Object.entries(dr)) {
@@ -115,22 +120,39 @@ describe('the pipe catalogue', () => {
       'hdpe-dips-dr17',
       'hdpe-ips-dr11',
       'hdpe-ips-dr17',
+      'pe100-iso4427-sdr11',
+      'pe100-iso4427-sdr17',
       'pvc-c900-dr14',
       'pvc-c900-dr18',
+      'pvc-c900-dr25',
+      'pvcu-iso1452-pn10',
+      'pvcu-iso1452-pn16',
     ]);
     for (const series of CATALOG) {
       expect(new Set(series.sizes.map((s) => s.nominal)).size).toBe(series.sizes.length);
-      expect(series.standard).toMatch(/AWWA|EN 545/);
+      expect(series.standard).toMatch(/AWWA|EN 545|ISO 1452|ISO 4427/);
       expect(series.wallBasis).toMatch(/ID = OD − 2/);
       for (const s of series.sizes) {
         expect(s.insideDiameter).toBeGreaterThan(0);
         expect(s.insideDiameter).toBeLessThan(s.outsideDiameter);
+        // every catalogue size is rated, and the limits never fall below the working rating
+        expect(s.rating).toBeDefined();
+        expect(s.rating!.withSurge).toBeGreaterThanOrEqual(s.rating!.working);
+        expect(s.rating!.test).toBeGreaterThanOrEqual(s.rating!.working);
       }
     }
   });
 
   it('lists the series of a material and finds the nearest size by outside diameter', () => {
     expect(seriesForMaterial('ductile-iron').map((s) => s.id)).toEqual(['di-awwa-pc350', 'di-awwa-pc250', 'di-en545']);
+    // a metric project is offered metric pipe first, a US project inch pipe first
+    expect(seriesChoices('pvc', 'si')[0]!.id).toBe('pvcu-iso1452-pn10');
+    expect(seriesChoices('hdpe', 'si')[0]!.id).toBe('pe100-iso4427-sdr11');
+    expect(seriesChoices('pvc', 'us')[0]!.id).toBe('pvc-c900-dr18');
+    expect(seriesChoices('ductile-iron', 'si')[0]!.id).toBe('di-en545');
+    expect(seriesChoices('pvc', 'si')).toHaveLength(seriesForMaterial('pvc').length);
+    expect(seriesForMaterial('pvc').map((s) => s.id)).toContain('pvcu-iso1452-pn10');
+    expect(seriesForMaterial('hdpe').map((s) => s.id)).toContain('pe100-iso4427-sdr11');
     expect(seriesForMaterial('steel')).toEqual([]);
     expect(nearestSize('di-en545', 0.33)?.nominal).toBe('DN300'); // 326 mm is 4 mm away, 378 mm is 48
     expect(nearestSize('pvc-c900-dr18', 10 * INCH)?.nominal).toBe('8'); // 9.05 in is 0.95 away, 11.10 is 1.10

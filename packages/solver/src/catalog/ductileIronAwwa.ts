@@ -1,5 +1,6 @@
 import { INCH } from '../units/conversions.js';
 import { sizeFromWall, type PipeSeries } from './pipeSeries.js';
+import { awwaDuctileIronRating } from './pressureRatings.js';
 
 /**
  * Ductile-iron outside diameters, in, AWWA C151/A21.51; one OD for every pressure class
@@ -33,10 +34,10 @@ const PC250_WALL: Readonly<Record<string, number>> = {
   54: 0.65, 60: 0.68, 64: 0.72,
 };
 
-/** Sizes in ascending OD from a wall table in inches, stored in metres. */
-const sizesFrom = (walls: Readonly<Record<string, number>>) =>
+/** Sizes in ascending OD from a wall table in inches, stored in metres, rated at the pressure class (psi). */
+const sizesFrom = (walls: Readonly<Record<string, number>>, pressureClass: number) =>
   Object.keys(walls)
-    .map((n) => sizeFromWall(n, `${n} in`, C151_OD[n]! * INCH, walls[n]! * INCH))
+    .map((n) => sizeFromWall(n, `${n} in`, C151_OD[n]! * INCH, walls[n]! * INCH, awwaDuctileIronRating(pressureClass)))
     .sort((a, b) => a.outsideDiameter - b.outsideDiameter);
 
 const STANDARD = 'AWWA C151/A21.51 outside diameters; AWWA C150/A21.50 standard pressure-class wall table';
@@ -45,18 +46,20 @@ export const DI_AWWA_PC350: PipeSeries = {
   id: 'di-awwa-pc350',
   label: 'Ductile iron, AWWA C151, pressure class 350',
   material: 'ductile-iron',
+  sizing: 'inch',
   standard: STANDARD,
   wallBasis: 'ID = OD − 2 × t, t the pressure class 350 nominal wall of AWWA C150/C151 (cement lining not deducted)',
-  sizes: sizesFrom(PC350_WALL),
+  sizes: sizesFrom(PC350_WALL, 350),
 };
 
 export const DI_AWWA_PC250: PipeSeries = {
   id: 'di-awwa-pc250',
   label: 'Ductile iron, AWWA C151, pressure class 250',
   material: 'ductile-iron',
+  sizing: 'inch',
   standard: STANDARD,
   wallBasis:
     'ID = OD − 2 × t, t the pressure class 250 nominal wall of AWWA C150/C151 (cement lining not deducted); ' +
     'class 250 is not listed below 14 in',
-  sizes: sizesFrom(PC250_WALL),
+  sizes: sizesFrom(PC250_WALL, 250),
 };

@@ -1,4 +1,5 @@
 import { sizeFromWall, type PipeSeries } from './pipeSeries.js';
+import { en545Rating } from './pressureRatings.js';
 
 /** One EN 545 size: DN, external diameter (mm), minimum wall of its preferred class (mm), class. */
 type En545Row = readonly [dn: number, od: number, wall: number, pressureClass: 'C40' | 'C30' | 'C25'];
@@ -29,11 +30,14 @@ export const DI_EN545: PipeSeries = {
   id: 'di-en545',
   label: 'Ductile iron, EN 545 / ISO 2531, preferred classes',
   material: 'ductile-iron',
+  sizing: 'metric',
   standard: 'EN 545:2010 / ISO 2531 external diameters and pressure-class minimum walls',
   wallBasis:
     'ID = OD − 2 × t, t the EN 545:2010 minimum wall of the preferred class (C40 to DN300, C30 DN350–600, ' +
-    'C25 DN700–1200; DN450, 1100, 1200 from memory); nominal walls are thicker, cement lining not deducted',
-  sizes: EN545.map(([dn, od, wall]) => sizeFromWall(`DN${dn}`, `DN ${dn}`, od * MM, wall * MM)),
+    'C25 DN700–1200; DN450, 1100, 1200 not verified against EN 545:2010, wall table); nominal walls are thicker, cement lining not deducted',
+  sizes: EN545.map(([dn, od, wall, pressureClass]) =>
+    sizeFromWall(`DN${dn}`, `DN ${dn}`, od * MM, wall * MM, en545Rating(pressureClass)),
+  ),
 };
 
 /** The pressure class behind each EN 545 size's wall, keyed by nominal ('DN300' → 'C40'). */

@@ -1,5 +1,6 @@
 import { INCH } from '../units/conversions.js';
 import { sizeFromDr, type PipeSeries } from './pipeSeries.js';
+import { c906Rating } from './pressureRatings.js';
 
 /**
  * IPS outside diameters, in: the steel-pipe ODs of ASME B36.10 that AWWA C906 uses (domain
@@ -28,19 +29,20 @@ const DIPS_OD: readonly [string, number][] = [
  * Minimum wall t = OD/DR, ID = OD − 2t. The standard's table of which DR is made in which size was
  * not read: every size is listed at both DRs, and a producer may not make every pairing.
  */
-function c906Series(odSeries: 'ips' | 'dips', dr: number): PipeSeries {
+function c906Series(odSeries: 'ips' | 'dips', dr: 11 | 17): PipeSeries {
   const ods = odSeries === 'ips' ? IPS_OD : DIPS_OD;
   const name = odSeries === 'ips' ? 'IPS' : 'DIPS';
   return {
     id: `hdpe-${odSeries}-dr${dr}`,
-    label: `HDPE, AWWA C906, ${name}, DR ${dr}`,
+    label: `HDPE (PE 4710), AWWA C906, ${name}, DR ${dr} (${c906Rating(dr).label})`,
     material: 'hdpe',
+    sizing: 'inch',
     standard:
       odSeries === 'ips'
         ? 'AWWA C906, iron pipe size (IPS) outside diameters of ASME B36.10'
         : 'AWWA C906, ductile-iron pipe size (DIPS) outside diameters',
     wallBasis: `minimum wall t = OD/${dr}; ID = OD − 2t`,
-    sizes: ods.map(([n, od]) => sizeFromDr(n, `${n} in`, od * INCH, dr)),
+    sizes: ods.map(([n, od]) => sizeFromDr(n, `${n} in`, od * INCH, dr, c906Rating(dr))),
   };
 }
 

@@ -14,7 +14,7 @@ export function parseArgs(argv: readonly string[]): Args {
     if (a.startsWith('--')) {
       const eq = a.indexOf('=');
       if (eq > 0) options.set(a.slice(2, eq), a.slice(eq + 1));
-      else if (a === '--help' || a === '--pretty') options.set(a.slice(2), 'true');
+      else if (a === '--help' || a === '--pretty' || a === '--full') options.set(a.slice(2), 'true');
       else options.set(a.slice(2), argv[++i] ?? '');
     } else if (a === '-h') options.set('help', 'true');
     else positional.push(a);

@@ -19,14 +19,17 @@ const shown = (v: RecordValue, units: UnitSystem) => formatSi(v.value, v.dimensi
  * Each line is escaped on its own, so a label cannot add lines or act on the terminal.
  */
 export function explainText(a: Analysis, f: FittingAnalysis, units: UnitSystem): string {
-  const out = [`${f.mark} — ${fittingTitle(f.geometry)} (node ${f.node.id}, run ${f.run})`, ''];
   // What to build first, each element named by the fitting's mark; then how it was found.
   const row = scheduleOf(a).fittings.find((r) => r.node === f.node.id);
+  const title = fittingTitle({ ...f.geometry, profile: row?.profile ?? null });
+  const out = [`${f.mark} — ${title} (node ${f.node.id}, run ${f.run})`, ''];
   const elements = row ? restraintElements(row, units) : [];
   const width = Math.max(0, ...elements.map((e) => e.name.length));
   out.push(
     'Restraint',
-    ...(elements.length ? elements.map((e) => `  ${e.name.padEnd(width)}  ${e.text}`) : ['  none']),
+    ...(elements.length
+      ? elements.map((e) => `  ${e.name.padEnd(width)}  ${e.text}${e.forceText ? `; ${e.forceText}` : ''}`)
+      : ['  none']),
     '',
   );
   calculationRecord(a.project, f).forEach((step, i) => {

@@ -13,7 +13,9 @@ const io = {
   out: (text: string) => void process.stdout.write(text),
   err: (text: string) => void process.stderr.write(text),
 };
-// Import and export load the CSV and projection libraries, so they alone run asynchronously.
-if ((argv[0] === 'import' || argv[0] === 'export') && !argv.includes('--help'))
-  void runExchange(argv, io).then((status) => (process.exitCode = status));
-else process.exitCode = runCli(argv, io);
+// Import and export load the CSV and projection libraries; the rest may load the schema library.
+const run =
+  (argv[0] === 'import' || argv[0] === 'export') && !argv.includes('--help') ? runExchange(argv, io) : runCli(argv, io);
+void run.then((status) => {
+  process.exitCode = status;
+});

@@ -11,10 +11,10 @@ const demo = () => JSON.parse(readFileSync(demoPath, 'utf8'));
 const dir = mkdtempSync(join(tmpdir(), 'mainbrace-cli-'));
 
 /** Runs the command line in this process against real files, collecting what it writes. */
-function cli(...argv: string[]) {
+async function cli(...argv: string[]) {
   let stdout = '';
   let stderr = '';
-  const status = runCli(argv, {
+  const status = await runCli(argv, {
     readFile: readLimited,
     out: (t) => (stdout += t),
     err: (t) => (stderr += t),
@@ -33,34 +33,36 @@ function fileOf(name: string, content: string | Uint8Array): string {
 const TERMINAL_CONTROL = /[\u0000-\u0009\u000b-\u001f\u007f-\u009f]/;
 
 describe('the command line reads files with limits', () => {
-  it('refuses /dev/zero at the 20 MB limit instead of reading it forever', () => {
-    const r = cli('validate', '/dev/zero');
+  it('refuses /dev/zero at the 20 MB limit instead of reading it forever', async () => {
+    const r = await cli('validate', '/dev/zero');
     expect(r.status).toBe(2);
     expect(r.stderr).toMatch(/^\/dev\/zero: the file is larger than 20\.0 MB; project files over 20\.0 MB are refused/);
   });
 
-  it('applies the size limit to every command that reads a file, and --max-size changes it', () => {
+  it('applies the size limit to every command that reads a file, and --max-size changes it', async () => {
     const path = fileOf('demo.json', readFileSync(demoPath));
     for (const argv of [['validate'], ['schedule'], ['explain', '--format', 'json'], ['explain']]) {
       const [command, ...rest] = argv;
-      const r = cli(command!, path, ...(command === 'explain' ? ['n4'] : rest), '--max-size', '0.001');
+      const r = await cli(command!, path, ...(command === 'explain' ? ['n4'] : rest), '--max-size', '0.001');
       expect(r.status).toBe(2);
       expect(r.stderr).toMatch(/demo\.json: the file is 0\.0 MB; project files over 0\.0 MB are refused/);
     }
-    expect(cli('validate', path, '--max-size', '1').status).toBe(0);
-    expect(cli('validate', path, '--max-size', 'lots').stderr).toMatch(/--max-size: expected a size in megabytes/);
+    expect((await cli('validate', path, '--max-size', '1')).status).toBe(0);
+    expect((await cli('validate', path, '--max-size', 'lots')).stderr).toMatch(
+      /--max-size: expected a size in megabytes/,
+    );
   });
 
-  it('reads a file that starts with a UTF-8 byte-order mark, as the app does', () => {
+  it('reads a file that starts with a UTF-8 byte-order mark, as the app does', async () => {
     const bom = new Uint8Array([0xef, 0xbb, 0xbf, ...readFileSync(demoPath)]);
-    const r = cli('validate', fileOf('bom.json', bom));
+    const r = await cli('validate', fileOf('bom.json', bom));
     expect(r.stderr).toBe('');
     expect(r.stdout).toMatch(/valid — 19 nodes, 18 pipes/);
     expect(r.status).toBe(0);
   });
 
-  it('refuses bytes that are not UTF-8 with a message, not a garbled parse', () => {
-    const r = cli('validate', fileOf('latin1.json', new Uint8Array([0x7b, 0xe9, 0x7d])));
+  it('refuses bytes that are not UTF-8 with a message, not a garbled parse', async () => {
+    const r = await cli('validate', fileOf('latin1.json', new Uint8Array([0x7b, 0xe9, 0x7d])));
     expect(r.status).toBe(2);
     expect(r.stderr).toMatch(/latin1\.json: not UTF-8 text/);
   });
@@ -77,7 +79,7 @@ describe('the command line on numbers too small to be real', () => {
     ['a cohesion of 4.8e-305', (p) => (p.soils[1].cohesion = 4.8e-305), 'soils[1].cohesion'],
   ];
   for (const [what, change, field] of cases) {
-    it(`refuses ${what} with exit 2 naming ${field}, in the table and in explain`, () => {
+    it(`refuses ${what} with exit 2 naming ${field}, in the table and in explain`, async () => {
       const p = demo();
       change(p);
       const path = fileOf('tiny.json', JSON.stringify(p));
@@ -86,7 +88,7 @@ describe('the command line on numbers too small to be real', () => {
         ['schedule', path, '--format', 'table'],
         ['explain', path, 'n13'],
       ]) {
-        const r = cli(...argv);
+        const r = await cli(...argv);
         expect(r.status).toBe(2);
         expect(r.stderr).toMatch(
           // Below its hard range (water density) or a nonzero number too small to be real (the others).
@@ -109,8 +111,8 @@ describe('the command line never writes control characters from a file to the te
     return p;
   };
 
-  it('escapes names, labels and warnings in the table', () => {
-    const r = cli('schedule', fileOf('hostile.json', JSON.stringify(hostile())));
+  it('escapes names, labels and warnings in the table', async () => {
+    const r = await cli('schedule', fileOf('hostile.json', JSON.stringify(hostile())));
     expect(r.status).toBe(0);
     expect(r.stdout).not.toMatch(TERMINAL_CONTROL);
     expect(r.stdout).toContain('Fitting schedule — Main\\u001b[8m');
@@ -118,37 +120,56 @@ describe('the command line never writes control characters from a file to the te
     expect(r.stdout).toContain('Test\\u009b31m');
   });
 
-  it('escapes the calculation record of explain', () => {
-    const r = cli('explain', fileOf('hostile.json', JSON.stringify(hostile())), 'n7');
+  it('escapes the calculation record of explain', async () => {
+    const r = await cli('explain', fileOf('hostile.json', JSON.stringify(hostile())), 'n7');
     expect(r.status).toBe(0);
     expect(r.stdout).not.toMatch(TERMINAL_CONTROL);
     expect(r.stdout).toContain('Soft clay\\u000d\\u001b[1A');
   });
 
-  it('keeps CSV record ends but escapes a label that would add a line', () => {
-    const r = cli('schedule', fileOf('hostile.json', JSON.stringify(hostile())), '--format', 'csv');
+  it('keeps CSV record ends but escapes a label that would add a line', async () => {
+    const r = await cli('schedule', fileOf('hostile.json', JSON.stringify(hostile())), '--format', 'csv');
     expect(r.status).toBe(0);
     const records = r.stdout.split('\r\n');
     expect(records.every((line) => !TERMINAL_CONTROL.test(line) && !line.includes('\n'))).toBe(true);
     expect(r.stdout).toContain('Hydrant\\u000aB4: all clear');
   });
 
-  it('writes JSON whose strings mean exactly what the file said, with nothing a terminal acts on', () => {
-    const r = cli('schedule', fileOf('hostile.json', JSON.stringify(hostile())), '--format', 'json');
+  it('writes JSON whose strings mean exactly what the file said, with nothing a terminal acts on', async () => {
+    const r = await cli('schedule', fileOf('hostile.json', JSON.stringify(hostile())), '--format', 'json');
     expect(r.status).toBe(0);
     expect(r.stdout).not.toMatch(TERMINAL_CONTROL);
     expect(JSON.parse(r.stdout).project).toContain('Main\u001b[8m');
   });
 
-  it('escapes ids, field names and file names in error messages', () => {
+  it('escapes ids, field names and file names in error messages', async () => {
     const p = demo();
     p['evil\u001b[2Jkey'] = 1;
-    const bad = cli('validate', fileOf('bad\u001b]0;x\u0007.json', JSON.stringify(p)));
+    const bad = await cli('validate', fileOf('bad\u001b]0;x\u0007.json', JSON.stringify(p)));
     expect(bad.status).toBe(2);
     expect(bad.stderr).not.toMatch(TERMINAL_CONTROL);
     expect(bad.stderr).toContain('evil\\u001b[2Jkey');
-    const missing = cli('explain', fileOf('ok.json', JSON.stringify(demo())), 'n99\u001b[1A');
+    const missing = await cli('explain', fileOf('ok.json', JSON.stringify(demo())), 'n99\u001b[1A');
     expect(missing.status).toBe(2);
     expect(missing.stderr).toContain('no node "n99\\u001b[1A"');
+  });
+});
+
+describe('the JSON schedule of the command line', () => {
+  it('leaves out what the file already says, unless --full, and keeps every result', async () => {
+    const path = fileOf('demo.json', JSON.stringify(demo()));
+    const compact = JSON.parse((await cli('schedule', path, '--format', 'json')).stdout);
+    const full = JSON.parse((await cli('schedule', path, '--format', 'json', '--full')).stdout);
+    expect(compact.fittings.length).toBe(full.fittings.length);
+    compact.fittings.forEach((f: Record<string, unknown>, i: number) => {
+      const { position, label, soil, pipes, ...results } = full.fittings[i];
+      expect([position, soil]).not.toContain(undefined); // the full form does echo them
+      expect(label === undefined).toBe(false);
+      expect(f.position ?? f.label ?? f.soil).toBeUndefined();
+      expect(f.pipes).toEqual(
+        pipes.map((p: { id: string; toward: string | null }) => ({ id: p.id, toward: p.toward })),
+      );
+      expect({ ...f, pipes: undefined }).toEqual({ ...results, pipes: undefined });
+    });
   });
 });

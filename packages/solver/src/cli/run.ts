@@ -1,9 +1,8 @@
 import { parseArgs } from './args.js';
 import { USAGE } from './usage.js';
 import { explainText } from './explainText.js';
-import { parseProjectText } from '../model/parseProject.js';
 import { problemText } from '../model/problems.js';
-import { projectJsonSchema } from '../model/jsonSchema.js';
+import { quickParse } from '../model/quickParse.js';
 import type { Project } from '../model/projectSchema.js';
 import { analyse } from '../analysis/analyse.js';
 import { legsByNode } from '../network/legs.js';
@@ -53,7 +52,7 @@ function decode(bytes: Uint8Array): string | null {
   }
 }
 
-function load(io: CliIo, path: string | undefined, maxBytes: number): Project | string[] {
+async function load(io: CliIo, path: string | undefined, maxBytes: number): Promise<Project | string[]> {
   if (!path) throw new UsageError('missing FILE: give the path of a project file');
   const name = escapeControls(path);
   let bytes: Uint8Array;
@@ -72,6 +71,16 @@ function load(io: CliIo, path: string | undefined, maxBytes: number): Project | 
   }
   const text = decode(bytes);
   if (text === null) return [`${name}: not UTF-8 text; save the project file as UTF-8`];
+  let data: unknown;
+  try {
+    data = JSON.parse(text);
+  } catch {
+    data = undefined;
+  }
+  // A valid file is checked by hand; the schema (and zod with it) loads only to word what is wrong.
+  const quick = data === undefined ? null : quickParse(data);
+  if (quick) return quick;
+  const { parseProjectText } = await import('../model/parseProject.js');
   const result = parseProjectText(text);
   return result.ok ? result.project : result.problems.map((p) => escapeControls(problemText(p)));
 }
@@ -83,10 +92,10 @@ function unitsOption(value: string | undefined, project: Project): UnitSystem {
 }
 
 /**
- * Runs one command line; returns the exit status (0 done, 2 bad input, 1 a fault of ours). Never
+ * Runs one command line; resolves to the exit status (0 done, 2 bad input, 1 a fault of ours). Never
  * throws. Nothing from the file reaches the terminal as a control character.
  */
-export function runCli(argv: readonly string[], rawIo: CliIo): number {
+export async function runCli(argv: readonly string[], rawIo: CliIo): Promise<number> {
   const io: CliIo = {
     ...rawIo,
     out: (text) => rawIo.out(terminalSafe(text)),
@@ -99,6 +108,7 @@ export function runCli(argv: readonly string[], rawIo: CliIo): number {
       return args.command === undefined && !args.options.has('help') ? 2 : 0;
     }
     if (args.command === 'schema') {
+      const { projectJsonSchema } = await import('../model/jsonSchema.js');
       io.out(JSON.stringify(projectJsonSchema(), null, 2) + '\n');
       return 0;
     }
@@ -107,7 +117,7 @@ export function runCli(argv: readonly string[], rawIo: CliIo): number {
         `unknown command "${escapeControls(args.command)}": expected schedule, explain, validate, schema, import or export`,
       );
     }
-    const loaded = load(io, args.positional[0], maxBytesOption(args.options.get('max-size')));
+    const loaded = await load(io, args.positional[0], maxBytesOption(args.options.get('max-size')));
     if (Array.isArray(loaded)) {
       io.err(loaded.join('\n') + '\n');
       return 2;
@@ -146,7 +156,9 @@ export function runCli(argv: readonly string[], rawIo: CliIo): number {
     const format = args.options.get('format') ?? 'table';
     // Indented for a person at a terminal or with --pretty; compact into pipes and files.
     const pretty = io.interactive === true || args.options.has('pretty');
-    if (format === 'json') io.out(scheduleJson(scheduleOf(analysis), pretty));
+    // What the file already says (positions, labels, soils, pipe sizes) is left out unless --full.
+    const full = args.options.has('full');
+    if (format === 'json') io.out(scheduleJson(scheduleOf(analysis), { pretty, echo: full }));
     else if (format === 'csv') io.out(scheduleCsv(escapeStrings(scheduleView(analysis, units))));
     else if (format === 'table')
       io.out(scheduleTable(escapeStrings(scheduleView(analysis, units)), escapeControls(project.name)));

@@ -1,9 +1,10 @@
 export const USAGE = `mainbrace — thrust and restraint at every fitting of a buried water main
 
 Usage:
-  mainbrace schedule FILE [--format json|csv|table] [--units us|si] [--pretty]
+  mainbrace schedule FILE [--format json|csv|table] [--units us|si] [--pretty] [--full]
                                   the fitting schedule (default: table, the project's units;
-                                  JSON is indented at a terminal or with --pretty)
+                                  JSON is indented at a terminal or with --pretty, and repeats
+                                  positions, labels, soils and pipe sizes only with --full)
   mainbrace explain FILE MARK [--units us|si]
                                   the calculation record of one fitting (its mark, A4, or node id)
   mainbrace validate FILE         check a project file

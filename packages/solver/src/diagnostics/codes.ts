@@ -70,6 +70,14 @@ export const DIAGNOSTIC_CODES = {
       'The gravity anchor stands in groundwater and is sized with the submerged unit weight of concrete (γc − γw).',
     action: 'Design for the highest groundwater level expected.',
   },
+  'anchor.no-weight': {
+    severity: 'error',
+    values: { concreteUnitWeight: 'unitWeight', waterUnitWeight: 'unitWeight', upward: 'force' },
+    meaning:
+      'The concrete weighs no more than the groundwater (γc − γw ≤ 0): no gravity anchor can hold the upward thrust. The restraint is not adequate; restrained joints are sized instead.',
+    action:
+      'Check the concrete unit weight and the water density; use restrained joints, tie-downs or heavier concrete.',
+  },
   'soil.no-bearing': {
     severity: 'warning',
     values: {},
@@ -108,18 +116,20 @@ export const DIAGNOSTIC_CODES = {
     meaning: 'The face is more than twice as wide as it is high because the cover limits its height.',
     action: 'Consider restrained joints or a deeper block.',
   },
-  'block.impractical': {
+  'block.not-adequate': {
     severity: 'error',
-    values: { faceWidth: 'length', faceHeight: 'length' },
+    values: {
+      thrust: 'force',
+      ratio: 'ratio',
+      safetyFactor: 'ratio',
+      bearingArea: 'area',
+      faceWidth: 'length',
+      faceHeight: 'length',
+    },
     meaning:
-      'No practical block: the face the bearing value and the cover allow is far too wide. The restraint is not adequate.',
-    action: 'Use restrained joints, deepen the main, or have the soil investigated.',
-  },
-  'block.passive-short': {
-    severity: 'warning',
-    values: { ratio: 'ratio', safetyFactor: 'ratio' },
-    meaning: 'The face’s passive resistance is less than the safety factor times the thrust.',
-    action: 'Confirm the soil’s bearing with the geotechnical engineer, or enlarge or deepen the block.',
+      'No bearing block within the cover and face limits meets both the bearing area and the passive resistance with the safety factor. No block is issued; the restraint is not adequate as designed and restrained joints are sized instead.',
+    action:
+      'Check the restrained joints sized instead, deepen the main for a taller face, improve the soil, or have the block designed by a geotechnical engineer.',
   },
   'pad.no-bearing': {
     severity: 'warning',
@@ -151,14 +161,43 @@ export const DIAGNOSTIC_CODES = {
     severity: 'warning',
     values: {},
     meaning:
-      'The restrained-length method and its friction values are the ductile-iron manual’s; the pipe is of another material.',
-    action: 'Use friction values for the material from the restrained-joint maker.',
+      'The restrained-length method is the ductile-iron manual’s; the pipe is of another material and is sized with the pipe–soil friction (and adhesion) ratios the project gives the soil.',
+    action: 'Confirm those ratios for this material with the restrained-joint maker or a geotechnical engineer.',
+  },
+  'joints.no-material-basis': {
+    severity: 'error',
+    values: { frictionMissing: 'ratio', adhesionMissing: 'ratio' },
+    meaning:
+      'Restrained joints on a pipe that is not ductile iron need the pipe–soil friction ratio f_φ (and, in a soil with cohesion, the adhesion ratio f_c) for that material; the project gives none and no published default was found, so the joints are not sized. The restraint is not adequate.',
+    action:
+      'Give the soil the pipe friction (and adhesion) ratio for this material from the restrained-joint maker or a geotechnical engineer, or hold the fitting with concrete.',
   },
   'joints.sharp-bend': {
     severity: 'warning',
     values: { deflection: 'angle' },
     meaning: 'A bend sharper than 90°: restrained lengths grow quickly and the method is uncertain.',
     action: 'Consider a block or a different layout.',
+  },
+  'pipe.over-working-rating': {
+    severity: 'error',
+    values: { pressure: 'pressure', limit: 'pressure' },
+    meaning:
+      'A working case puts more pressure on the pipe than its rated working pressure (AWWA pressure class, EN PFA, PN). The pipe is not adequate.',
+    action: 'Choose a higher class of pipe, or lower the working pressure.',
+  },
+  'pipe.over-surge-rating': {
+    severity: 'error',
+    values: { pressure: 'pressure', limit: 'pressure' },
+    meaning:
+      'A surge case (or a case of no stated kind) puts more pressure on the pipe than its rating allows with surge (the class plus the standard’s surge allowance, EN PMA). The pipe is not adequate.',
+    action: 'Choose a higher class of pipe, or limit the surge (slower valve closing, surge protection).',
+  },
+  'pipe.over-test-rating': {
+    severity: 'error',
+    values: { pressure: 'pressure', limit: 'pressure' },
+    meaning:
+      'The field-test case puts more pressure on the pipe than the test limit for its class (EN PEA; AWWA: the pipe’s design pressure). The test would overload the pipe.',
+    action: 'Lower the test pressure, test in shorter sections, or choose a higher class of pipe.',
   },
   'input.pressure-unusual': {
     severity: 'warning',

@@ -23,6 +23,7 @@ const capital = (t: string) => t.charAt(0).toUpperCase() + t.slice(1);
 type Words = (v: Shown, s: Subject, c: WordingContext) => string;
 
 const soil = (s: Subject, c: WordingContext) => (s.soil ? c.soilName(s.soil) : 'the soil');
+const pipe = (s: Subject, c: WordingContext) => (s.pipe ? c.pipeName(s.pipe) : 'the pipe');
 const leg = (s: Subject, c: WordingContext) => (s.pipe ? c.legName(s.node, s.pipe) : 'the pipe');
 /** Where an input value sits, in the reader's words. */
 function place(s: Subject, c: WordingContext): string {
@@ -54,6 +55,8 @@ const WORDS: Record<DiagnosticCode, Words> = {
   'thrust.none': () => 'No thrust at this fitting in any case.',
   'anchor.submerged': () =>
     'Gravity anchor below groundwater: sized with the submerged unit weight of concrete (γc − γw); design for the highest groundwater level.',
+  'anchor.no-weight': (v) =>
+    `Not adequate: concrete of ${v.concreteUnitWeight} weighs no more than the groundwater (${v.waterUnitWeight}), so no gravity anchor can hold the ${v.upward} upward thrust. Restrained joints are sized instead; check the concrete unit weight and water density, or use tie-downs or heavier concrete.`,
   'soil.no-bearing': (_v, s, c) =>
     `No bearing: ${soil(s, c)} has no allowable bearing (muck, peat or unprepared fill). A thrust block cannot be used: restrained joints are sized instead; piles or soil replacement are the other choices.`,
   'soil.below-min-cover': (v, s, c) =>
@@ -66,10 +69,8 @@ const WORDS: Record<DiagnosticCode, Words> = {
     `Block taller than the cover allows: a face ${v.faceHeight} high needs its bottom ${v.bottomDepth} or more below ground, but the pipe centre is only ${v.centreDepth} down. Deepen the cover, use restrained joints, or design the block for passive pressure.`,
   'block.wide-face': (v) =>
     `Face ${v.faceWidth} wide is more than twice its ${v.faceHeight} height: the cover limits the height. Consider restrained joints or a deeper block.`,
-  'block.impractical': (v) =>
-    `Not adequate: no practical block — a face ${v.faceWidth} wide and ${v.faceHeight} high is what the bearing value and the cover allow. Use restrained joints, deepen the main, or have the soil investigated.`,
-  'block.passive-short': (v) =>
-    `The face’s passive resistance is ${v.ratio} × the thrust, below the safety factor ${v.safetyFactor}: confirm the soil’s bearing with the geotechnical engineer, or enlarge or deepen the block.`,
+  'block.not-adequate': (v) =>
+    `Not adequate: no block within the cover and face limits holds ${v.thrust} with a safety factor of ${v.safetyFactor} (bearing area ${v.bearingArea} needed; the strongest face allowed, ${v.faceWidth} wide × ${v.faceHeight} high, resists ${v.ratio} × the thrust). Restrained joints are sized instead: check them, or deepen the main, improve the soil, or have the block designed by a geotechnical engineer.`,
   'pad.no-bearing': (_v, s, c) =>
     `No bearing under the fitting: ${soil(s, c)} cannot take the downward thrust; restrained joints are sized instead, or replace the soil.`,
   'joints.no-resistance': (v, s, c) =>
@@ -79,7 +80,20 @@ const WORDS: Record<DiagnosticCode, Words> = {
   'joints.fused-pe': (_v, s, c) =>
     `${capital(leg(s, c))} is fused PE, which is end-load bearing: restrain the transitions to gasketed pipe and allow for thermal and Poisson loads.`,
   'joints.material-basis': (_v, s, c) =>
-    `${capital(leg(s, c))} is ${s.pipe ? c.material(s.pipe) : 'not ductile iron'}: the restrained-length method is the ductile-iron manual’s; use friction values for this material from the restrained-joint maker.`,
+    `${capital(leg(s, c))} is ${s.pipe ? c.material(s.pipe) : 'not ductile iron'}: its restrained length uses the ductile-iron manual’s method with the friction ratios given for ${soil(s, c)}; confirm them for this material with the restrained-joint maker.`,
+  'joints.no-material-basis': (v, s, c) => {
+    const missing = [
+      ...(v.frictionMissing === '1' ? ['pipe friction ratio f_φ'] : []),
+      ...(v.adhesionMissing === '1' ? ['adhesion ratio f_c'] : []),
+    ].join(' and ');
+    return `Not adequate: restrained joints along ${leg(s, c)} (${s.pipe ? c.material(s.pipe) : 'not ductile iron'}) are not sized — there is no published ${missing} for this material to default to. Give ${soil(s, c)} its ${missing} for this pipe (restrained-joint maker or geotechnical engineer), or hold the fitting with concrete.`;
+  },
+  'pipe.over-working-rating': (v, s, c) =>
+    `Not adequate: ${pipe(s, c)} carries ${v.pressure}${inCase(s, c)}, more than its rated working pressure ${v.limit}; choose a higher class of pipe or lower the working pressure.`,
+  'pipe.over-surge-rating': (v, s, c) =>
+    `Not adequate: ${pipe(s, c)} carries ${v.pressure}${inCase(s, c)}, more than the ${v.limit} its rating allows with surge; choose a higher class of pipe or limit the surge.`,
+  'pipe.over-test-rating': (v, s, c) =>
+    `The field test would overload ${pipe(s, c)}: ${v.pressure}${inCase(s, c)} against a test limit of ${v.limit}; lower the test pressure, test shorter sections, or choose a higher class.`,
   'input.pressure-unusual': outside('the pressure'),
   'input.cover-unusual': outside('the cover'),
   'input.velocity-unusual': outside('the flow velocity'),

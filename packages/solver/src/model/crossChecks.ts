@@ -6,7 +6,7 @@ import { nodeCover, nodeOutsideDiameters } from './groundLevel.js';
 
 type Ctx = z.core.$RefinementCtx<Project>;
 
-function uniqueIds(items: readonly { id: string }[], list: string, ctx: Ctx) {
+function uniqueIds(items: readonly { id: string }[], list: string, ctx: Pick<Ctx, 'addIssue'>) {
   const seen = new Map<string, number>();
   items.forEach((item, i) => {
     const first = seen.get(item.id);
@@ -23,7 +23,7 @@ function uniqueIds(items: readonly { id: string }[], list: string, ctx: Ctx) {
 /** Minimum distance between a pipe's two ends, m: below this the pipe has no direction. */
 export const MIN_PIPE_LENGTH = 0.001;
 
-type Add = (path: (string | number)[], message: string) => void;
+export type Add = (path: (string | number)[], message: string) => void;
 
 /** Two pipes leaving a node closer than this in direction lie on top of each other, degrees. */
 export const OVERLAP_ANGLE = 0.5;
@@ -55,7 +55,7 @@ function coincidentNodes(p: Project, add: Add) {
 }
 
 /** A second pipe between the same two nodes, and two pipes leaving a node along the same line. */
-function overlappingPipes(p: Project, add: Add) {
+export function overlappingPipes(p: Project, add: Add) {
   const nodes = new Map(p.nodes.map((n) => [n.id, n]));
   const pairs = new Map<string, number>();
   const leaving = new Map<string, { pipe: number; dir: [number, number, number] }[]>();
@@ -115,6 +115,11 @@ function pipeBelowGround(p: Project, add: Add) {
 
 /** Checks that span several fields: unique ids, references that resolve, sane pipes. */
 export function crossCheck(p: Project, ctx: Ctx): void {
+  referenceChecks(p, ctx);
+}
+
+/** Unique ids, references that resolve, pipes joining two distinct points with ID below OD. */
+export function referenceChecks(p: Project, ctx: Pick<Ctx, 'addIssue'>): void {
   uniqueIds(p.loadCases, 'loadCases', ctx);
   uniqueIds(p.soils, 'soils', ctx);
   uniqueIds(p.nodes, 'nodes', ctx);

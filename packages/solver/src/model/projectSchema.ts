@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { REGISTER } from '../provenance/register.js';
 import type { Dimension } from '../units/conversions.js';
 import { LIMITS, type Limit, type LimitId } from './limits.js';
+import { CASE_KINDS, ENCASEMENTS, END_CONDITIONS, MATERIALS, RESTRAINT_METHODS } from './choices.js';
 
 /**
  * The project file (shared design: project-format.md, v1). Stored quantities are SI base units;
@@ -41,11 +42,8 @@ function limited(id: LimitId) {
 const SF = REGISTER['design.safety-factor'].value;
 const safetyFactor = () => limited('safetyFactor');
 
-export const MATERIALS = ['ductile-iron', 'pvc', 'hdpe', 'steel', 'other'] as const;
-export const END_CONDITIONS = ['cap', 'tie-in'] as const;
-export const CASE_KINDS = ['working', 'surge', 'test', 'other'] as const;
-export const RESTRAINT_METHODS = ['block', 'joints'] as const;
-export const ENCASEMENTS = ['none', 'polyethylene'] as const;
+// The choice lists live in a module without zod, so that a screen offering them loads no schema code.
+export { CASE_KINDS, ENCASEMENTS, END_CONDITIONS, MATERIALS, RESTRAINT_METHODS };
 
 export const waterSchema = z.strictObject({
   /** kg/m³; water at 20 °C (register: water.density) */

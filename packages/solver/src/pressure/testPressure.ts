@@ -63,7 +63,11 @@ export function proposeTestPressure(
         ]
       : [
           criterion('AWWA C605: 1.5 × working pressure at the lowest point', 1.5, low),
-          criterion('AWWA C605: 1.25 × working pressure at the highest point (from memory)', 1.25, high),
+          criterion(
+            'AWWA C605: 1.25 × working pressure at the highest point (not verified against AWWA C605-13, hydrostatic testing)',
+            1.25,
+            high,
+          ),
         ];
   let governing = 0;
   criteria.forEach((c, i) => {

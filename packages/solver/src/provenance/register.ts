@@ -1,4 +1,5 @@
 import type { ProvenanceEntry } from './entry.js';
+import { PSI } from '../units/conversions.js';
 
 const DIPRA = 'DIPRA, Thrust Restraint Design for Ductile Iron Pipe, 7th ed. (2016)';
 
@@ -108,6 +109,35 @@ export const REGISTER = {
     source: 'Mainbrace face-proportion rule (no published source states it)',
     verified: true,
   },
+  'block.thickest': {
+    quantity:
+      'A bearing block may be thickened to hold an uplift by its weight up to this multiple of the design thickness (on its bare bearing area); beyond it a separate anchor is built',
+    value: 2,
+    unit: '—',
+    kind: 'own rule',
+    source: 'Mainbrace rule: a block much thicker than its face is an anchor in all but name',
+    verified: true,
+  },
+  'block.face-limits': {
+    quantity:
+      'Bearing-face proportions: width at most `wide` × the height; at the tallest height the cover allows, at most `widest` × the height and `widestMetres` m',
+    value: { wide: 2, widest: 8, widestMetres: 10 },
+    unit: '—',
+    kind: 'own rule',
+    source: 'Mainbrace rule: beyond these a face is not a practical block',
+    verified: true,
+  },
+  'passive.ovesen': {
+    quantity:
+      'Ovesen 3-D factor on the passive resistance of a single short block, M = 1 + (Kp − Ka)^⅔·[1.1E⁴ + 1.6B/(1 + 5b/h) + 0.4(Kp − Ka)E³B²/(1 + 0.05b/h)]',
+    value: null,
+    unit: '—',
+    kind: 'published',
+    source:
+      'Ovesen (1964), Anchor slabs, calculation methods and model tests, Danish Geotechnical Institute Bulletin No. 16; as restated in Duncan & Mokwa (2001), Passive earth pressures: theories and tests, J. Geotech. Geoenviron. Eng. 127(3):248–257',
+    clause: '3-D correction factor (equation recalled, not read)',
+    verified: false,
+  },
   'passive.rankine': {
     quantity: 'Rankine passive earth pressure with cohesion, Kp = tan²(45° + φ/2)',
     value: null,
@@ -158,7 +188,7 @@ export const REGISTER = {
     verified: true,
   },
   'joints.friction-ratio': {
-    quantity: 'Pipe–soil friction ratio f_φ in δ = f_φ·φ (default)',
+    quantity: 'Pipe–soil friction ratio f_φ in δ = f_φ·φ (default for ductile iron)',
     value: 0.5,
     unit: '—',
     kind: 'published',
@@ -167,13 +197,23 @@ export const REGISTER = {
     verified: false,
   },
   'joints.adhesion-ratio': {
-    quantity: 'Pipe–soil adhesion ratio f_c in C_p = f_c·c (default)',
+    quantity: 'Pipe–soil adhesion ratio f_c in C_p = f_c·c (default for ductile iron)',
     value: 0.5,
     unit: '—',
     kind: 'published',
     source: DIPRA,
     clause: 'soil-parameter table, f_c',
     verified: false,
+  },
+  'joints.material-basis': {
+    quantity:
+      'Restrained joints on PVC, PE, steel or other pipe: sized only with the project’s own f_φ (and f_c in cohesive soil), refused without them',
+    value: null,
+    unit: '—',
+    kind: 'own rule',
+    source:
+      'Mainbrace rule: no published pipe–soil friction table for these materials was read (restrained-joint makers publish them for PVC)',
+    verified: true,
   },
   'joints.encasement-factor': {
     quantity: 'Friction on polyethylene-encased pipe relative to bare pipe (adhesion neglected)',
@@ -226,6 +266,163 @@ export const REGISTER = {
     unit: 'kg/m³',
     kind: 'published',
     source: 'EN 545 (ductile iron); ASTM D1784 (PVC 12454); ASTM D3350 (PE4710); usual carbon-steel value',
+    verified: false,
+  },
+  'rating.di-awwa': {
+    quantity:
+      'Ductile iron AWWA C151 pressure classes 150–350 psi: working ≤ the class; working + surge and the field test ≤ the class + the 100 psi surge allowance of the thickness design',
+    value: { surgeAllowance: 100 * PSI },
+    unit: 'Pa',
+    kind: 'published',
+    // read second-hand: the C150 design basis in a consulting engineer's restatement, the C600 test criterion in a
+    // manufacturer's field-testing guideline
+    source: 'AWWA C150/A21.50 and AWWA C600',
+    clause: 'thickness design basis (working pressure plus 100 psi surge allowance); hydrostatic test pressure',
+    verified: false,
+  },
+  'rating.pvc-c900': {
+    quantity:
+      'PVC AWWA C900-16 pressure class by DR (DR 14: 305, DR 18: 235, DR 25: 165 psi); working + occasional surge ≤ 1.6 × the class; field test ≤ the same limit',
+    value: { dr14: 305 * PSI, dr18: 235 * PSI, dr25: 165 * PSI, occasionalSurgeFactor: 1.6 },
+    unit: 'Pa',
+    kind: 'published',
+    // DR 14 and DR 18 classes read in a producer's C900 specification; DR 25, the 1.6 factor and the C605 test
+    // limit recalled, not read
+    source: 'AWWA C900-16; AWWA C605-13',
+    clause: 'pressure class and short-term rating; hydrostatic test pressure',
+    verified: false,
+  },
+  'rating.pe-c906': {
+    quantity:
+      'PE 4710 AWWA C906 pressure class by DR (DR 11: 200, DR 17: 125 psi); working + occasional surge ≤ 2 × the class; field test ≤ 1.5 × the class',
+    value: { dr11: 200 * PSI, dr17: 125 * PSI, occasionalSurgeFactor: 2, testFactor: 1.5 },
+    unit: 'Pa',
+    kind: 'published',
+    // recalled, not read
+    source: 'AWWA C906-21; ASTM F2164',
+    clause: 'Sec. 4.6 and Table 9, pressure class and surge; field test pressure',
+    verified: false,
+  },
+  'rating.en545': {
+    quantity: 'Ductile iron EN 545 pressure class Cxx: PFA = xx bar, PMA = 1.2 × PFA, PEA = 1.2 × PFA + 5 bar',
+    value: { pmaFactor: 1.2, peaMargin: 5e5 },
+    unit: 'Pa',
+    kind: 'published',
+    // recalled, not read (the class walls were read in a producer's reproduction of the table)
+    source: 'EN 545:2010',
+    clause: 'definitions of PFA, PMA, PEA',
+    verified: false,
+  },
+  'rating.plastic-metric': {
+    quantity:
+      'Metric PVC-U and PE: PFA = PN (20 °C), PMA = 1.25 × PFA, PEA = 1.5 × PFA; PN = 20·σs/(SDR − 1) bar, σs = MRS/C',
+    value: { pmaFactor: 1.25, peaFactor: 1.5 },
+    unit: '—',
+    kind: 'published',
+    // recalled, not read
+    source: 'ISO 1452-2:2009 (PVC-U), ISO 4427-2:2019 / EN 12201-2:2011 (PE), EN 805:2000',
+    clause: 'PN, PFA, PMA, PEA',
+    verified: false,
+  },
+  'rating.pvc-iso1452-stress': {
+    quantity: 'PVC-U design stress σs = MRS/C: MRS 25 MPa, C 2.5 to 90 mm OD and 2.0 above (10 and 12.5 MPa)',
+    value: { upTo90mm: 10e6, above90mm: 12.5e6 },
+    unit: 'Pa',
+    kind: 'published',
+    // recalled, not read
+    source: 'ISO 1452-1:2009 / ISO 1452-2:2009',
+    clause: 'overall service (design) coefficient',
+    verified: false,
+  },
+  'rating.pe100-stress': {
+    quantity: 'PE 100 design stress σs = MRS/C: MRS 10 MPa, C 1.25 (8 MPa)',
+    value: 8e6,
+    unit: 'Pa',
+    kind: 'published',
+    // recalled, not read
+    source: 'ISO 4427-1:2019 / EN 12201-1:2011',
+    clause: 'MRS and design coefficient',
+    verified: false,
+  },
+  'rating.metric-wall-rounding': {
+    quantity: 'Minimum wall of a metric plastic pipe: OD/SDR rounded up to 0.1 mm',
+    value: 1e-4,
+    unit: 'm',
+    kind: 'common practice',
+    // recalled, not read; the standards' tables may differ by 0.1 mm, which changes only the inside area
+    source: 'ISO 4065',
+    clause: 'wall-thickness rounding',
+    verified: false,
+  },
+  'surge.joukowsky': {
+    quantity: 'Joukowsky pressure rise for an instantaneous velocity change ΔP = ρ·a·Δv',
+    value: null,
+    unit: '—',
+    kind: 'published',
+    source: 'Joukowsky (1900); Hicks, Civil Engineering Formulas (McGraw-Hill), ch. 12 Water hammer',
+    clause: 'water-hammer pressure rise',
+    verified: false,
+  },
+  'surge.korteweg': {
+    quantity: 'Korteweg wave speed a = √(K/ρ) / √(1 + c₁·K·D/(E·e)), D the inside diameter, e the wall',
+    value: null,
+    unit: '—',
+    kind: 'published',
+    source: 'Hicks, Civil Engineering Formulas (McGraw-Hill), ch. 12 (read in a copy of the book)',
+    clause: 'Eq. 12.63, velocity of a pressure wave along a pipe',
+    verified: true,
+  },
+  'surge.support-factor': {
+    quantity:
+      'Pipe support factor c₁: 1 for pipe free to move at its joints (gasketed ductile iron and PVC); 1 − ν² for pipe anchored throughout (fused PE, welded steel)',
+    value: null,
+    unit: '—',
+    kind: 'published',
+    // read as restated in two engineering references, not in the book itself
+    source: 'Wylie & Streeter, Fluid Transients in Systems (1993)',
+    clause: 'wave speed in thin-walled pipe, support cases',
+    verified: false,
+  },
+  'surge.water-bulk-modulus': {
+    quantity: 'Bulk modulus of water at about 20 °C',
+    value: 2.19e9,
+    unit: 'Pa',
+    kind: 'published',
+    // recalled, not read
+    source: 'Wylie & Streeter, Fluid Transients in Systems (1993)',
+    clause: 'bulk modulus of water',
+    verified: false,
+  },
+  'surge.pipe-elasticity': {
+    quantity:
+      'Short-term modulus of elasticity E and Poisson’s ratio ν of pipe materials for the wave speed (ductile iron, PVC, PE, steel)',
+    value: {
+      'ductile-iron.E': 165e9,
+      'ductile-iron.nu': 0.28,
+      'pvc.E': 2.76e9,
+      'pvc.nu': 0.38,
+      'hdpe.E': 0.79e9,
+      'hdpe.nu': 0.45,
+      'steel.E': 207e9,
+      'steel.nu': 0.3,
+    },
+    unit: 'Pa',
+    kind: 'published',
+    // E of PVC (400,000 psi) and HDPE (115,000 psi) read in a web copy of a thermoplastic surge note; ductile iron
+    // 24 × 10⁶ psi reproduces Moser's Table 4.1 wave speeds (read); steel 30 × 10⁶ psi usual; ν recalled, not read
+    source: 'Moser, Buried Pipe Design (McGraw-Hill); Uni-Bell, Handbook of PVC Pipe Design and Construction',
+    clause: 'material properties for water-hammer wave speed',
+    verified: false,
+  },
+  'check.thermoplastic-surge-table': {
+    quantity:
+      'Check value: surge per 1 ft/s of sudden velocity change, PVC DR 18 / DR 25 17.4 / 14.7 psi (E 400,000 psi), HDPE DR 11 / DR 17 12.7 / 9.9 psi (E 115,000 psi), from a = 4660/√(1 + K·(DR − 2)/E), K 300,000 psi',
+    value: { 'pvc.dr18': 17.4, 'pvc.dr25': 14.7, 'hdpe.dr11': 12.7, 'hdpe.dr17': 9.9 },
+    unit: 'psi',
+    kind: 'published',
+    // formula recalled; table values read in a web copy of a thermoplastic pipe design note
+    source: 'Uni-Bell, Handbook of PVC Pipe Design and Construction',
+    clause: 'surge pressure for a 1 ft/s velocity change',
     verified: false,
   },
   'fitting.straight-tolerance': {

@@ -7,8 +7,10 @@ import type { Restraint } from './sizeRestraint.js';
 export function restraintBasis(r: Omit<Restraint, 'basis'>, legs: readonly Leg[], soil: Soil): ProvenanceId[] {
   const ids: ProvenanceId[] = [];
   if (r.block || r.reverseBlock || r.anchor || r.trenchBottom) ids.push('design.dimension-step');
-  if (r.block || r.reverseBlock) ids.push('block.bearing-area', 'block.face-rule', 'passive.rankine');
+  if (r.block || r.reverseBlock)
+    ids.push('block.bearing-area', 'block.face-rule', 'block.face-limits', 'passive.rankine', 'passive.ovesen');
   if (r.anchor) ids.push('anchor.weight-rule', 'anchor.base-friction');
+  if (r.block?.upwardThrust) ids.push('anchor.weight-rule', 'block.thickest');
   if (r.trenchBottom) ids.push('pad.bearing-area');
   if (r.restrainedLegs.length) {
     const restrained = legs.filter((l) => r.restrainedLegs.some((x) => x.pipe === l.pipe.id));
@@ -16,8 +18,10 @@ export function restraintBasis(r: Omit<Restraint, 'basis'>, legs: readonly Leg[]
     if (forms.has('bend')) ids.push('joints.bend-equation', 'joints.trench-coefficient', 'joints.bearing-pressure');
     if (forms.has('uplift')) ids.push('joints.uplift-equation');
     if (forms.has('axial')) ids.push('joints.axial-equation');
-    if (soil.pipeFrictionRatio === undefined) ids.push('joints.friction-ratio');
-    if (soil.pipeAdhesionRatio === undefined && soil.cohesion > 0) ids.push('joints.adhesion-ratio');
+    const ironDefaults = restrained.some((l) => l.pipe.material === 'ductile-iron');
+    if (ironDefaults && soil.pipeFrictionRatio === undefined) ids.push('joints.friction-ratio');
+    if (ironDefaults && soil.pipeAdhesionRatio === undefined && soil.cohesion > 0) ids.push('joints.adhesion-ratio');
+    if (restrained.some((l) => l.pipe.material !== 'ductile-iron')) ids.push('joints.material-basis');
     if (restrained.some((l) => l.pipe.encasement === 'polyethylene')) ids.push('joints.encasement-factor');
     if (restrained.some((l) => l.pipe.trenchType === undefined)) ids.push('joints.default-trench-type');
     if (restrained.some((l) => l.pipe.weightPerLength === undefined)) ids.push('material.density');

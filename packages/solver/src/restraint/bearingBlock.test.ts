@@ -22,7 +22,7 @@ const base = (over: Partial<BearingBlockInput> = {}): BearingBlockInput => ({
 
 describe('bearing block area A = SF·T/σ (DIPRA form, domain reference §4.1)', () => {
   it('29,030 lb at SF 1.5 on 1,500 psf silt needs 29.03 ft² (CV-11)', () => {
-    expectClose(sizeBearingBlock(base()).block.bearingArea / FT2, 29.03, 1e-4);
+    expectClose(sizeBearingBlock(base()).block!.bearingArea / FT2, 29.03, 1e-4);
   });
 
   it.each([
@@ -30,22 +30,22 @@ describe('bearing block area A = SF·T/σ (DIPRA form, domain reference §4.1)',
     [4000, 10.89],
     [9000, 4.84],
   ])('on %i psf the same thrust needs %s ft² (CV-12: soft clay, sand, hard clay)', (psf, ft2) => {
-    expectClose(sizeBearingBlock(base({ allowableBearing: psf * PSF })).block.bearingArea / FT2, ft2, 1e-3);
+    expectClose(sizeBearingBlock(base({ allowableBearing: psf * PSF })).block!.bearingArea / FT2, ft2, 1e-3);
   });
 
   it('the AWWA M23 Example 1 bend (7,385 lb, 1,500 psf, SF 1.5) needs 7.385 ft² and gets a face at least that large (CV-7)', () => {
     const r = sizeBearingBlock(base({ thrust: 7385 * LBF, outsideDiameter: 9.05 * INCH, cover: 3 * FOOT }));
-    expectClose(r.block.bearingArea / FT2, 7.385, 1e-4);
-    expect(r.block.faceWidth * r.block.faceHeight).toBeGreaterThanOrEqual(r.block.bearingArea);
+    expectClose(r.block!.bearingArea / FT2, 7.385, 1e-4);
+    expect(r.block!.faceWidth * r.block!.faceHeight).toBeGreaterThanOrEqual(r.block!.bearingArea);
     // Hand check of the face rule: centre 3 ft + 9.05/24 ft = 3.377 ft down; h ≤ ⅔ × 3.377 = 2.251 ft → 26 in
     // (2-in steps); b = 7.385 ft² / 2.1667 ft = 3.408 ft → 42 in.
-    expectClose(r.block.faceHeight / INCH, 26, 1e-9);
-    expectClose(r.block.faceWidth / INCH, 42, 1e-9);
+    expectClose(r.block!.faceHeight / INCH, 26, 1e-9);
+    expectClose(r.block!.faceWidth / INCH, 42, 1e-9);
   });
 
   it('keeps the face at least one OD high, in whole steps, with width × height ≥ the area', () => {
-    for (const t of [1e3, 1e4, 5e4, 2e5, 8e5]) {
-      const b = sizeBearingBlock(base({ thrust: t })).block;
+    for (const t of [1e3, 1e4, 5e4, 2e5]) {
+      const b = sizeBearingBlock(base({ thrust: t })).block!;
       expect(b.faceHeight).toBeGreaterThanOrEqual(13.2 * INCH);
       expect(b.faceWidth * b.faceHeight).toBeGreaterThanOrEqual(b.bearingArea * (1 - 1e-12));
       expectClose(b.faceHeight / (2 * INCH), Math.round(b.faceHeight / (2 * INCH)), 0, 1e-9);
@@ -54,7 +54,7 @@ describe('bearing block area A = SF·T/σ (DIPRA form, domain reference §4.1)',
   });
 
   it('area grows with thrust and safety factor and falls with bearing (monotonic)', () => {
-    const a = (o: Partial<BearingBlockInput>) => sizeBearingBlock(base(o)).block.bearingArea;
+    const a = (o: Partial<BearingBlockInput>) => sizeBearingBlock(base(o)).bearingArea;
     expect(a({ thrust: 40_000 * LBF })).toBeGreaterThan(a({}));
     expect(a({ safetyFactor: 2 })).toBeGreaterThan(a({}));
     expect(a({ allowableBearing: 3000 * PSF })).toBeLessThan(a({}));
@@ -65,16 +65,73 @@ describe('bearing block area A = SF·T/σ (DIPRA form, domain reference §4.1)',
     expect(r.diagnostics.map((d) => d.code)).toContain('block.taller-than-cover');
   });
 
-  it('warns when the passive resistance of the face is below the safety factor', () => {
+  it('issues no block, but an error, where no face within the limits holds (no passive resistance: φ = 0, c = 0)', () => {
     const r = sizeBearingBlock(
       base({ soil: { unitWeight: 14000, frictionAngle: 0, cohesion: 0 }, allowableBearing: 9000 * PSF }),
     );
-    expect(r.block.passiveRatio).toBeLessThan(1.5);
-    expect(r.diagnostics.map((d) => d.code)).toContain('block.passive-short');
+    expect(r.block).toBeNull();
+    expect(r.diagnostics.map((d) => d.code)).toContain('block.not-adequate');
+    expect(r.diagnostics.find((d) => d.code === 'block.not-adequate')!.values.ratio).toBeLessThan(1.5);
+  });
+
+  it('reports the bearing area as governing for CV-7, and the passive resistance where it enlarged the face', () => {
+    expect(
+      sizeBearingBlock(base({ thrust: 7385 * LBF, outsideDiameter: 9.05 * INCH, cover: 3 * FOOT })).block!.governs,
+    ).toBe('bearing');
+    // Loose soil (γ 15 kN/m³, φ 22°) with a high presumed bearing: the bearing area alone gives a face
+    // whose passive resistance is short, so the face grows until R_p ≥ SF·T.
+    const loose = base({ soil: { unitWeight: 15000, frictionAngle: 22, cohesion: 0 }, allowableBearing: 6000 * PSF });
+    const b = sizeBearingBlock(loose).block!;
+    expect(b.governs).toBe('passive');
+    expect(b.faceWidth * b.faceHeight).toBeGreaterThan(b.bearingArea * 1.2);
+    expect(b.passiveRatio).toBeGreaterThanOrEqual(1.5);
+  });
+
+  it('gives the least face, one OD each way, where the thrust is small', () => {
+    const b = sizeBearingBlock(base({ thrust: 200 * LBF })).block!;
+    expect(b.governs).toBe('minimum');
+    expectClose(b.faceWidth / INCH, 14, 1e-9);
+    expectClose(b.faceHeight / INCH, 14, 1e-9);
+  });
+
+  it('issues only blocks that pass every check: area, passive resistance with SF, face limits (invariant)', () => {
+    const soils = [
+      { unitWeight: 18000, frictionAngle: 30, cohesion: 0 },
+      { unitWeight: 16000, frictionAngle: 20, cohesion: 10_000 },
+      { unitWeight: 17000, frictionAngle: 0, cohesion: 40_000 },
+      { unitWeight: 20000, frictionAngle: 38, cohesion: 0 },
+    ];
+    for (const soil of soils)
+      for (const t of [2e3, 1e4, 3e4, 8e4, 2e5, 5e5])
+        for (const cover of [0.6, 1.2, 2.5]) {
+          const r = sizeBearingBlock(base({ thrust: t, soil, cover, allowableBearing: 150e3, step: 0.05 }));
+          if (!r.block) {
+            expect(r.diagnostics.map((d) => d.code)).toContain('block.not-adequate');
+            continue;
+          }
+          const b = r.block;
+          expect(b.faceWidth * b.faceHeight).toBeGreaterThanOrEqual(b.bearingArea * (1 - 1e-12));
+          expect(b.passiveResistance).toBeGreaterThanOrEqual(1.5 * t * (1 - 1e-12));
+          expect(b.faceHeight).toBeGreaterThanOrEqual(13.2 * INCH);
+          expect(b.faceWidth).toBeLessThanOrEqual(Math.min(8 * b.faceHeight, 10) + 1e-9);
+        }
+  });
+
+  it('never gives a smaller face for a larger thrust (quantities grow with pressure)', () => {
+    const soil = { unitWeight: 17000, frictionAngle: 26, cohesion: 0 };
+    let last = 0;
+    for (let t = 5e3; t < 4e5; t *= 1.01) {
+      const b = sizeBearingBlock(base({ thrust: t, soil, allowableBearing: 120e3, step: 0.05 })).block;
+      if (!b) break;
+      const a = b.faceWidth * b.faceHeight;
+      expect(a).toBeGreaterThanOrEqual(last - 1e-12);
+      last = a;
+    }
+    expect(last).toBeGreaterThan(0);
   });
 
   it('estimates concrete as face × block depth', () => {
-    const b = sizeBearingBlock(base()).block;
+    const b = sizeBearingBlock(base()).block!;
     expectClose(b.concreteVolume, b.faceWidth * b.faceHeight * 0.6, 1e-12);
   });
 });

@@ -1,6 +1,7 @@
 import type { Vec3 } from '../geometry/vector.js';
 import { value, type CalcStep } from '../analysis/calcRecord.js';
-import { passiveResistance } from './passiveResistance.js';
+import { ovesenFactor, passiveResistance } from './passiveResistance.js';
+import { REGISTER } from '../provenance/register.js';
 import { roundDownTo, roundUpTo } from './rounding.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 
@@ -20,6 +21,11 @@ export interface BearingBlockInput {
   step: number;
   /** m, block thickness from the fitting to the bearing face */
   blockDepth: number;
+  /**
+   * m, the trench width where the face stands across the trench: below the tallest height the face
+   * stays within it (cutting beyond the trench wall by hand is left for a face the cover keeps low)
+   */
+  trenchWidth?: number;
   soil: { unitWeight: number; frictionAngle: number; cohesion: number };
   /** m below ground of the water table, or null */
   waterDepth: number | null;
@@ -42,65 +48,159 @@ export interface BearingBlock {
   depth: number;
   /** unit plan vector the block bears toward */
   direction: Vec3;
-  /** N, ultimate Rankine passive resistance of the chosen face */
+  /** N, ultimate passive resistance of the chosen face: Rankine 2-D × Ovesen's 3-D factor */
   passiveResistance: number;
+  /** Ovesen's 3-D factor M applied to the 2-D resistance */
+  shapeFactor: number;
   /** passive resistance over thrust */
   passiveRatio: number;
   /** m, depth below ground of the face's bottom */
   bottomDepth: number;
+  /** N, horizontal thrust the face bears */
+  thrust: number;
+  /** N, upward thrust the block's weight holds (0 unless it is thickened to stand in for an anchor) */
+  upwardThrust: number;
+  /**
+   * what set the face: the bearing area, the passive resistance (the face was deepened or widened
+   * beyond the bearing area), or the least face (one OD each way)
+   */
+  governs: 'bearing' | 'passive' | 'minimum';
 }
 
 export interface BlockResult {
-  block: BearingBlock;
+  /** the block, or null where none within the limits holds */
+  block: BearingBlock | null;
+  /** m², required bearing area SF·T/σ */
+  bearingArea: number;
   steps: CalcStep[];
   diagnostics: Diagnostic[];
 }
 
 const DIPRA_AREA = 'A_b = T·S_f/S_b (DIPRA, Thrust Restraint Design for Ductile Iron Pipe; AWWA M23 Example 1)';
 const FACE_RULE =
-  'Face height at least the pipe OD and at most half the depth to the block bottom; width 1–2 × height where possible (DIPRA / AWWA M23 rule of thumb, unverified)';
+  'Face height at least the pipe OD and at most half the depth to the block bottom; width at most twice the height, wider only at the tallest face the cover allows (Mainbrace’s own rule: no published source states it)';
+
+interface Face {
+  width: number;
+  height: number;
+}
 
 /**
- * Sizes a concrete bearing block against undisturbed soil (domain reference §4.1, §4.7): the area
- * from the bearing strength, a face centred on the pipe, dimensions rounded up to the step so that
- * width × height ≥ the area, and a Rankine passive check of the chosen face (§4.6).
+ * Sizes a concrete bearing block against undisturbed soil (domain reference §4.1, §4.6, §4.7). The face
+ * is centred on the pipe; every face the limits allow is a candidate — heights in whole steps from the
+ * OD to the face rule's tallest (⅔ of the centreline depth), widths in whole steps up to twice the
+ * height (and within the trench where the face stands across it), or up to the register's widest face at the tallest height, where the cover stops deepening.
+ * The block built is the candidate of least face area that meets both the bearing-area rule
+ * (b·h ≥ SF·T/σ) and the passive resistance (Rankine × Ovesen's 3-D factor ≥ SF·T), the squarer face on
+ * a tie. The candidates do not depend on the thrust, and a larger thrust only removes candidates, so the
+ * face never shrinks as the pressure rises. Where no candidate holds, no block is issued: an error.
  */
 export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
   const diagnostics: Diagnostic[] = [];
   const area = (i.safetyFactor * i.thrust) / i.allowableBearing;
   const centreDepth = i.cover + i.outsideDiameter / 2;
+  const limits = REGISTER['block.face-limits'].value;
   // Face centred on the pipe: h ≤ (centreDepth + h/2)/2 gives h ≤ 2/3 of the centreline depth.
-  const tallest = roundDownTo((2 * centreDepth) / 3, i.step);
+  const ruleTallest = roundDownTo((2 * centreDepth) / 3, i.step);
   const shortest = roundUpTo(i.outsideDiameter, i.step);
-  let height = Math.max(shortest, Math.min(roundUpTo(Math.sqrt(area), i.step), tallest));
-  if (tallest < shortest) {
-    height = shortest;
+  const tallest = Math.max(shortest, ruleTallest);
+  if (ruleTallest < shortest) {
     diagnostics.push(
-      diagnostic('block.taller-than-cover', {}, { faceHeight: height, bottomDepth: 2 * height, centreDepth }),
+      diagnostic('block.taller-than-cover', {}, { faceHeight: shortest, bottomDepth: 2 * shortest, centreDepth }),
     );
   }
-  const width = Math.max(roundUpTo(area / height, i.step), shortest);
-  if (width > 8 * height || width > 10) {
-    diagnostics.push(diagnostic('block.impractical', {}, { faceWidth: width, faceHeight: height }));
-  } else if (width > 2 * height + 1e-9) {
+  const widest = (h: number) =>
+    h >= tallest - 1e-9
+      ? roundDownTo(Math.min(limits.widest * h, limits.widestMetres), i.step)
+      : Math.min(limits.wide * h, i.trenchWidth ?? Infinity);
+  const faceDepths = (h: number) => ({ top: centreDepth - h / 2, bottom: centreDepth + h / 2 });
+  const resistance = (f: Face) => {
+    const { top, bottom } = faceDepths(f.height);
+    const twoD = passiveResistance({
+      width: f.width,
+      top,
+      bottom,
+      unitWeight: i.soil.unitWeight,
+      frictionAngle: i.soil.frictionAngle,
+      cohesion: i.soil.cohesion,
+      waterDepth: i.waterDepth,
+      waterUnitWeight: i.waterUnitWeight,
+    });
+    const shape = ovesenFactor({ frictionAngle: i.soil.frictionAngle, top, bottom, width: f.width });
+    return { twoD, shape, total: twoD * shape };
+  };
+  const needed = i.safetyFactor * i.thrust;
+  const better = (a: Face | null, b: Face) =>
+    a === null ||
+    b.width * b.height < a.width * a.height - 1e-12 ||
+    (Math.abs(b.width * b.height - a.width * a.height) <= 1e-12 &&
+      Math.abs(Math.log(b.width / b.height)) < Math.abs(Math.log(a.width / a.height)));
+  let byBearing: Face | null = null;
+  let chosen: Face | null = null;
+  const heights = Math.round((tallest - shortest) / i.step);
+  const heightAt = (k: number) => shortest + k * i.step;
+  for (let k = 0; k <= heights; k++) {
+    const height = heightAt(k);
+    const wMax = widest(height);
+    const wBearing = Math.max(shortest, roundUpTo(area / height, i.step));
+    if (wBearing > wMax + 1e-9) continue;
+    if (better(byBearing, { width: wBearing, height })) byBearing = { width: wBearing, height };
+    // No wider face at this height can beat the best found so far.
+    if (chosen && wBearing * height > chosen.width * chosen.height + 1e-12) continue;
+    // The passive resistance grows with the width: find the narrowest face that holds.
+    const steps = Math.floor((wMax - wBearing) / i.step + 1e-9);
+    const holds = (n: number) => resistance({ width: wBearing + n * i.step, height }).total >= needed;
+    let lo = 0;
+    if (!holds(0)) {
+      if (!holds(steps)) continue;
+      lo = 1;
+      let hi = steps;
+      while (lo < hi) {
+        const mid = (lo + hi) >> 1;
+        if (holds(mid)) hi = mid;
+        else lo = mid + 1;
+      }
+    }
+    const face = { width: wBearing + lo * i.step, height };
+    if (better(chosen, face)) chosen = face;
+  }
+  if (!chosen) {
+    // The strongest face within the limits, for the message.
+    let strongest = { face: { width: widest(shortest), height: shortest }, resistance: 0 };
+    for (let k = 0; k <= heights; k++) {
+      const face = { width: widest(heightAt(k)), height: heightAt(k) };
+      const r = resistance(face).total;
+      if (r > strongest.resistance) strongest = { face, resistance: r };
+    }
+    diagnostics.push(
+      diagnostic(
+        'block.not-adequate',
+        {},
+        {
+          thrust: i.thrust,
+          ratio: strongest.resistance / i.thrust,
+          safetyFactor: i.safetyFactor,
+          bearingArea: area,
+          faceWidth: strongest.face.width,
+          faceHeight: strongest.face.height,
+        },
+      ),
+    );
+    return { block: null, bearingArea: area, steps: [], diagnostics };
+  }
+  const { width, height } = chosen;
+  const governs =
+    byBearing && byBearing.width === width && byBearing.height === height
+      ? width === shortest && height === shortest && shortest * shortest > area
+        ? 'minimum'
+        : 'bearing'
+      : 'passive';
+  if (width > 2 * height + 1e-9) {
     diagnostics.push(diagnostic('block.wide-face', {}, { faceWidth: width, faceHeight: height }));
   }
-  const top = centreDepth - height / 2;
-  const bottom = centreDepth + height / 2;
-  const passive = passiveResistance({
-    width,
-    top,
-    bottom,
-    unitWeight: i.soil.unitWeight,
-    frictionAngle: i.soil.frictionAngle,
-    cohesion: i.soil.cohesion,
-    waterDepth: i.waterDepth,
-    waterUnitWeight: i.waterUnitWeight,
-  });
-  const passiveRatio = passive / i.thrust;
-  if (passiveRatio < i.safetyFactor) {
-    diagnostics.push(diagnostic('block.passive-short', {}, { ratio: passiveRatio, safetyFactor: i.safetyFactor }));
-  }
+  const { top, bottom } = faceDepths(height);
+  const passive = resistance(chosen);
+  const passiveRatio = passive.total / i.thrust;
   const concreteVolume = width * height * i.blockDepth;
   const steps: CalcStep[] = !i.record
     ? []
@@ -118,7 +218,8 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
         },
         {
           title: 'Bearing face',
-          formula: 'OD ≤ h ≤ ⅔·(H + OD/2);  h ≈ √A;  b = A/h, both rounded up to the step',
+          formula:
+            'least b·h with b·h ≥ A and R_p ≥ SF·T_h;  OD ≤ h ≤ ⅔·(H + OD/2);  b ≤ 2h (wider only at the tallest h); whole steps',
           inputs: [
             value('OD', 'largest outside diameter', i.outsideDiameter, 'diameter', 'pipes'),
             value('H', 'cover to top of pipe', i.cover, 'length', 'node'),
@@ -129,7 +230,11 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
             'face provided',
             width * height,
             'area',
-            'width × height, each rounded up to the step',
+            governs === 'passive'
+              ? 'enlarged beyond the bearing area for the passive resistance'
+              : governs === 'minimum'
+                ? 'the least face, one OD each way'
+                : 'set by the bearing area',
           ),
           reference: FACE_RULE,
         },
@@ -142,22 +247,25 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
         },
         {
           title: 'Passive resistance of the face',
-          formula: 'R_p = b·[½·γ·Kp·(z₂² − z₁²) + 2·c·√Kp·(z₂ − z₁)],  Kp = tan²(45° + φ/2)',
+          formula:
+            'R_p = M · b·[½·γ·Kp·(z₂² − z₁²) + 2·c·√Kp·(z₂ − z₁)];  M = 1 + (Kp − Ka)^⅔·[1.1E⁴ + 1.6/(1 + 5b/h) + 0.4(Kp − Ka)E³/(1 + 0.05b/h)], E = z₁/z₂',
           inputs: [
             value('z₁', 'depth of face top', top, 'length', 'computed'),
             value('z₂', 'depth of face bottom', bottom, 'length', 'computed'),
             value('γ', 'soil unit weight', i.soil.unitWeight, 'unitWeight', 'soil'),
             value('φ', 'soil friction angle', i.soil.frictionAngle, 'angle', 'soil'),
             value('c', 'soil cohesion', i.soil.cohesion, 'stress', 'soil'),
+            value('M', 'Ovesen 3-D factor', passive.shape, 'ratio', 'computed'),
           ],
           result: value(
             'R_p',
             'ultimate passive resistance',
-            passive,
+            passive.total,
             'force',
-            `${passiveRatio.toFixed(2)} × the thrust`,
+            `${passiveRatio.toFixed(2)} × the thrust (2-D ${passive.twoD.toFixed(0)} N × M)`,
           ),
-          reference: 'Rankine passive earth pressure with cohesion; submerged unit weight below the water table',
+          reference:
+            'Rankine passive earth pressure with cohesion, submerged unit weight below the water table; Ovesen (1964) 3-D factor as restated by Duncan & Mokwa (2001) — not verified against the paper',
         },
       ];
   return {
@@ -168,10 +276,15 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
       concreteVolume,
       depth: i.blockDepth,
       direction: i.direction,
-      passiveResistance: passive,
+      passiveResistance: passive.total,
+      shapeFactor: passive.shape,
       passiveRatio,
       bottomDepth: bottom,
+      thrust: i.thrust,
+      upwardThrust: 0,
+      governs,
     },
+    bearingArea: area,
     steps,
     diagnostics,
   };

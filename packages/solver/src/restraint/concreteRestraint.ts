@@ -6,7 +6,8 @@ import type { ThrustEnvelope } from '../thrust/fittingThrust.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { REGISTER } from '../provenance/register.js';
 import { sizeBearingBlock, type BearingBlock } from './bearingBlock.js';
-import { sizeGravityAnchor, type GravityAnchor } from './gravityAnchor.js';
+import { roundUpTo } from './rounding.js';
+import { sizeGravityAnchor, type AnchorResult, type GravityAnchor } from './gravityAnchor.js';
 import { sizeTrenchBottom, type TrenchBottomBearing } from './trenchBottom.js';
 import { concreteWeight, type FittingSite } from './site.js';
 
@@ -18,6 +19,11 @@ export interface ConcreteRestraint {
   trenchBottom: TrenchBottomBearing | null;
   /** the soil cannot bear: restrained joints must be sized instead */
   needsJoints: boolean;
+  /**
+   * how the horizontal and upward thrusts are held where both act: a block and a separate anchor, a
+   * block thickened until its weight holds the uplift, or an anchor whose base friction holds both
+   */
+  scheme: 'block and anchor' | 'heavy block' | 'anchor alone' | null;
   steps: CalcStep[];
   diagnostics: Diagnostic[];
 }
@@ -37,10 +43,16 @@ function acrossTrench(direction: Vec3, legs: readonly Leg[]): boolean {
 
 /**
  * Concrete restraint of one fitting (project-format.md: block from the largest horizontal thrust,
- * anchor from the largest upward thrust): a gravity anchor for upward thrust; a bearing block against
- * undisturbed soil for the horizontal thrust, and a second one where the thrust reverses; bearing on
- * the trench bottom for downward thrust. A block's own weight may hold a small uplift, and an anchor's
- * base friction a small horizontal thrust, so that one piece of concrete does both jobs.
+ * anchor from the largest upward thrust): a bearing block against undisturbed soil for the horizontal
+ * thrust, and a second one where the thrust reverses; a gravity anchor for upward thrust; bearing on the
+ * trench bottom for downward thrust.
+ *
+ * Where horizontal and upward thrust act together, three ways are weighed and the one with the least
+ * concrete is built: the block and a separate anchor; the block thickened (up to the register's limit)
+ * until its own weight holds the uplift; or one anchor alone, enlarged until the base friction on what
+ * the uplift leaves of its weight holds the horizontal thrust too. Each way's concrete grows with the
+ * thrust, and whether the thickened block is allowed does not depend on the pressure, so the least of
+ * them grows with the pressure too (issue 17: quantities never fall as the pressure rises).
  */
 export function concreteRestraint(
   project: Project,
@@ -59,117 +71,92 @@ export function concreteRestraint(
     anchor: null,
     trenchBottom: null,
     needsJoints: false,
+    scheme: null,
     steps: [],
     diagnostics: [],
   };
   const h = envelope.horizontal;
   const up = envelope.upward.force;
-
-  // The anchor's record and findings are kept apart until we know the anchor stays.
-  const anchor = present(up, total)
-    ? sizeGravityAnchor({
-        upward: up,
-        horizontal: h.force,
-        safetyFactor: design.upliftSafetyFactor,
-        concreteUnitWeight: design.concreteUnitWeight,
-        site,
-        record,
-      })
-    : null;
+  const hasHorizontal = present(h.force, total);
+  const hasUp = present(up, total);
   const horizontalNeeded = Math.max(h.force, envelope.reverse?.force ?? 0);
-  const frictionHolds = anchor !== null && anchor.anchor.baseFriction >= design.bearingSafetyFactor * horizontalNeeded;
-  const frictionStep: CalcStep[] =
-    present(h.force, total) && frictionHolds && record
-      ? [
-          {
-            title: 'Horizontal thrust held by the anchor’s base friction',
-            formula: 'F_f ≥ SF · T_h',
-            inputs: [
-              value('T_h', 'largest horizontal thrust', horizontalNeeded, 'force', 'momentum balance'),
-              value('SF', 'bearing safety factor', design.bearingSafetyFactor, 'ratio', 'project design'),
-            ],
-            result: value(
-              'F_f',
-              'base friction of the anchor',
-              anchor!.anchor.baseFriction,
-              'force',
-              'no bearing block needed',
-            ),
-            reference: 'Sliding resistance W′·tan(⅔φ) of a cast-in-place base (common practice)',
+  const atNode = (list: readonly Diagnostic[]) => list.map((d) => ({ ...d, subject: { ...d.subject, node } }));
+  const anchorFor = (horizontal: number): AnchorResult =>
+    sizeGravityAnchor({
+      upward: up,
+      horizontal,
+      safetyFactor: design.upliftSafetyFactor,
+      slidingSafetyFactor: design.bearingSafetyFactor,
+      concreteUnitWeight: design.concreteUnitWeight,
+      site,
+      record,
+    });
+
+  const blocks = hasHorizontal ? sizeBlocks(project, node, legs, envelope, site, record) : null;
+  if (!hasUp) {
+    if (blocks) useBlocks(out, blocks);
+  } else if (!blocks) {
+    const a = anchorFor(0);
+    out.steps.push(...a.steps);
+    out.diagnostics.push(...atNode(a.diagnostics));
+    out.anchor = a.anchor;
+    if (!a.anchor) out.needsJoints = true;
+  } else {
+    // Three ways to hold both thrusts; the least concrete that holds is built.
+    type Way = { scheme: NonNullable<ConcreteRestraint['scheme']>; concrete: number; apply: () => void };
+    const ways: Way[] = [];
+    const alone = anchorFor(horizontalNeeded);
+    if (alone.anchor) {
+      const anchor = alone.anchor;
+      ways.push({
+        scheme: 'anchor alone',
+        concrete: anchor.concreteVolume,
+        apply: () => {
+          out.anchor = anchor;
+          out.steps.push(...alone.steps);
+          out.diagnostics.push(...atNode(alone.diagnostics));
+        },
+      });
+    }
+    if (blocks.adequate) {
+      const blockConcrete = blocks.block!.concreteVolume + (blocks.reverse?.concreteVolume ?? 0);
+      const separate = anchorFor(0);
+      if (separate.anchor) {
+        const anchor = separate.anchor;
+        ways.push({
+          scheme: 'block and anchor',
+          concrete: blockConcrete + anchor.concreteVolume,
+          apply: () => {
+            useBlocks(out, blocks);
+            out.anchor = anchor;
+            out.steps.push(...separate.steps);
+            out.diagnostics.push(...atNode(separate.diagnostics));
           },
-        ]
-      : [];
-  let blockWeightHoldsUplift = false;
-  if (present(h.force, total) && !frictionHolds) {
-    const allowable = soil.bearing + (soil.bearingPerDepth ?? 0) * (site.cover + site.od / 2);
-    if (allowable <= 0) {
-      out.needsJoints = true;
-      out.diagnostics.push(diagnostic('soil.no-bearing', { node, soil: soil.id }));
-    } else {
-      const block = (force: number, direction: Vec3) => {
-        const r = sizeBearingBlock({
-          thrust: force,
-          direction,
-          allowableBearing: allowable,
-          safetyFactor: design.bearingSafetyFactor,
-          outsideDiameter: site.od,
-          cover: site.cover,
-          step: site.step,
-          blockDepth: design.blockDepth,
-          soil,
-          waterDepth: site.waterDepth,
-          waterUnitWeight: site.waterUnitWeight,
-          record,
         });
-        out.steps.push(...r.steps);
-        for (const d of r.diagnostics) out.diagnostics.push({ ...d, subject: { ...d.subject, node } });
-        if (acrossTrench(direction, legs) && r.block.faceWidth > site.trenchWidth + 1e-9) {
-          out.diagnostics.push(
-            diagnostic(
-              'block.wider-than-trench',
-              { node },
-              { faceWidth: r.block.faceWidth, trenchWidth: site.trenchWidth },
-            ),
-          );
-        }
-        return r.block;
-      };
-      out.block = block(h.force, h.direction);
-      if (envelope.reverse) {
-        out.reverseBlock = block(envelope.reverse.force, envelope.reverse.direction);
-        out.diagnostics.push(diagnostic('block.thrust-reverses', { node }, { force: envelope.reverse.force }));
       }
-      if (soil.minCover !== undefined && site.cover < soil.minCover) {
-        out.diagnostics.push(
-          diagnostic('soil.below-min-cover', { node, soil: soil.id }, { minCover: soil.minCover, cover: site.cover }),
-        );
-      }
-      // A block heavy enough to hold the uplift makes the anchor unnecessary.
-      const submerged = site.groundwater !== null && site.groundwater > site.invert - out.block.faceHeight;
-      const weight = concreteWeight(design.concreteUnitWeight, site, submerged) * out.block.concreteVolume;
-      if (anchor && weight >= design.upliftSafetyFactor * up) {
-        blockWeightHoldsUplift = true;
-        if (record) {
-          out.steps.push({
-            title: 'Upward thrust held by the bearing block’s weight',
-            formula: 'γ·V_block ≥ SF · T_up',
-            inputs: [
-              value('T_up', 'largest upward thrust', up, 'force', 'momentum balance'),
-              value('SF', 'uplift safety factor', design.upliftSafetyFactor, 'ratio', 'project design'),
-              value('V_block', 'bearing block concrete', out.block.concreteVolume, 'volume', 'computed'),
-            ],
-            result: value('W', 'weight of the block', weight, 'force', 'no separate anchor needed'),
-            reference: 'Weight ≥ SF × upward thrust (statics)',
-          });
-        }
+      const heavy = heavyBlock(blocks.block!, blocks.bearingArea, up, design, site, record);
+      if (heavy) {
+        ways.push({
+          scheme: 'heavy block',
+          concrete: heavy.block.concreteVolume + (blocks.reverse?.concreteVolume ?? 0),
+          apply: () => {
+            useBlocks(out, { ...blocks, block: heavy.block });
+            out.steps.push(...heavy.steps);
+          },
+        });
       }
     }
+    const best = ways.reduce<Way | null>((a, w) => (a === null || w.concrete < a.concrete ? w : a), null);
+    if (best) {
+      best.apply();
+      out.scheme = best.scheme;
+    } else {
+      // Neither an anchor (no submerged weight) nor a block holds: say why, and size joints instead.
+      out.diagnostics.push(...atNode(alone.diagnostics), ...blocks.diagnostics);
+      out.needsJoints = true;
+    }
   }
-  if (anchor && !blockWeightHoldsUplift) {
-    out.anchor = anchor.anchor;
-    out.steps.unshift(...anchor.steps, ...frictionStep);
-    for (const d of anchor.diagnostics) out.diagnostics.push({ ...d, subject: { ...d.subject, node } });
-  }
+
   if (present(envelope.downward.force, total)) {
     const vertical = soil.verticalBearing ?? soil.bearing;
     if (vertical > 0) {
@@ -196,4 +183,154 @@ export function concreteRestraint(
     }
   }
   return out;
+}
+
+interface SizedBlocks {
+  /** a block and, where the thrust reverses, its opposite both hold */
+  adequate: boolean;
+  block: BearingBlock | null;
+  reverse: BearingBlock | null;
+  /** m², the unrounded bearing area of the main block */
+  bearingArea: number;
+  steps: CalcStep[];
+  diagnostics: Diagnostic[];
+  /** joints must be sized instead (no bearing, or no block within the limits holds) */
+  needsJoints: boolean;
+}
+
+function useBlocks(out: ConcreteRestraint, b: SizedBlocks): void {
+  out.block = b.block;
+  out.reverseBlock = b.reverse;
+  out.steps.push(...b.steps);
+  out.diagnostics.push(...b.diagnostics);
+  out.needsJoints ||= b.needsJoints;
+}
+
+/** The bearing block for the horizontal thrust and, where it reverses, the opposite block. */
+function sizeBlocks(
+  project: Project,
+  node: string,
+  legs: readonly Leg[],
+  envelope: ThrustEnvelope,
+  site: FittingSite,
+  record: boolean,
+): SizedBlocks {
+  const { design } = project;
+  const { soil } = site;
+  const out: SizedBlocks = {
+    adequate: false,
+    block: null,
+    reverse: null,
+    bearingArea: 0,
+    steps: [],
+    diagnostics: [],
+    needsJoints: false,
+  };
+  const allowable = soil.bearing + (soil.bearingPerDepth ?? 0) * (site.cover + site.od / 2);
+  if (allowable <= 0) {
+    out.needsJoints = true;
+    out.diagnostics.push(diagnostic('soil.no-bearing', { node, soil: soil.id }));
+    return out;
+  }
+  const block = (force: number, direction: Vec3) => {
+    const across = acrossTrench(direction, legs);
+    const r = sizeBearingBlock({
+      ...(across ? { trenchWidth: site.trenchWidth } : {}),
+      thrust: force,
+      direction,
+      allowableBearing: allowable,
+      safetyFactor: design.bearingSafetyFactor,
+      outsideDiameter: site.od,
+      cover: site.cover,
+      step: site.step,
+      blockDepth: design.blockDepth,
+      soil,
+      waterDepth: site.waterDepth,
+      waterUnitWeight: site.waterUnitWeight,
+      record,
+    });
+    out.steps.push(...r.steps);
+    for (const d of r.diagnostics) out.diagnostics.push({ ...d, subject: { ...d.subject, node } });
+    if (r.block && across && r.block.faceWidth > site.trenchWidth + 1e-9) {
+      out.diagnostics.push(
+        diagnostic(
+          'block.wider-than-trench',
+          { node },
+          { faceWidth: r.block.faceWidth, trenchWidth: site.trenchWidth },
+        ),
+      );
+    }
+    return r;
+  };
+  const main = block(envelope.horizontal.force, envelope.horizontal.direction);
+  out.block = main.block;
+  out.bearingArea = main.bearingArea;
+  let adequate = main.block !== null;
+  if (envelope.reverse) {
+    const reverse = block(envelope.reverse.force, envelope.reverse.direction);
+    out.reverse = reverse.block;
+    adequate &&= reverse.block !== null;
+    out.diagnostics.push(diagnostic('block.thrust-reverses', { node }, { force: envelope.reverse.force }));
+  }
+  if (soil.minCover !== undefined && site.cover < soil.minCover) {
+    out.diagnostics.push(
+      diagnostic('soil.below-min-cover', { node, soil: soil.id }, { minCover: soil.minCover, cover: site.cover }),
+    );
+  }
+  out.adequate = adequate;
+  if (!adequate) {
+    // No block within the limits holds: none is issued; restrained joints are sized as the alternative.
+    out.block = null;
+    out.reverse = null;
+    out.needsJoints = true;
+  }
+  return out;
+}
+
+/**
+ * The bearing block thickened until its own weight holds the uplift: allowed while the thickness this
+ * needs on the bare bearing area stays within the register's limit. That test compares the uplift with
+ * the horizontal thrust (both scale with the pressure), so it gives the same answer at every pressure.
+ */
+function heavyBlock(
+  block: BearingBlock,
+  bearingArea: number,
+  upward: number,
+  design: Project['design'],
+  site: FittingSite,
+  record: boolean,
+): { block: BearingBlock; steps: CalcStep[] } | null {
+  const submerged = site.groundwater !== null && site.groundwater > site.invert - block.faceHeight;
+  const unitWeight = concreteWeight(design.concreteUnitWeight, site, submerged);
+  if (!(unitWeight > 0)) return null;
+  const volume = (design.upliftSafetyFactor * upward) / unitWeight;
+  const thickest = REGISTER['block.thickest'].value * design.blockDepth;
+  if (volume > bearingArea * thickest) return null;
+  const face = block.faceWidth * block.faceHeight;
+  const depth = Math.max(block.depth, roundUpTo(volume / face, site.step));
+  const concreteVolume = face * depth;
+  const heavy: BearingBlock = { ...block, depth, concreteVolume, upwardThrust: upward };
+  const steps: CalcStep[] = !record
+    ? []
+    : [
+        {
+          title: 'Upward thrust held by the bearing block’s weight',
+          formula: 'γ·b·h·t ≥ SF · T_up;  t = max(t₀, SF·T_up/(γ·b·h)) rounded up to the step',
+          inputs: [
+            value('T_up', 'largest upward thrust', upward, 'force', 'momentum balance'),
+            value('SF', 'uplift safety factor', design.upliftSafetyFactor, 'ratio', 'project design'),
+            value(
+              'γ',
+              submerged ? 'submerged unit weight of concrete' : 'unit weight of concrete',
+              unitWeight,
+              'unitWeight',
+              'project design',
+            ),
+            value('t₀', 'design block thickness', design.blockDepth, 'length', 'project design'),
+          ],
+          result: value('t', 'block thickness', depth, 'length', 'no separate anchor needed'),
+          reference: 'Weight ≥ SF × upward thrust (statics); thickness at most the register’s limit',
+        },
+      ];
+  return { block: heavy, steps };
 }

@@ -61,10 +61,11 @@ describe('gravity anchor at a crest bend (domain reference §5)', () => {
       upward: 14_515 * LBF,
       horizontal: 0,
       safetyFactor: 1.5,
+      slidingSafetyFactor: 1.5,
       concreteUnitWeight: 150 * PCF,
       site,
     });
-    expectClose(r.anchor.concreteVolume / FT3, 248.5, 5e-4);
+    expectClose(r.anchor!.concreteVolume / FT3, 248.5, 5e-4);
     expect(r.diagnostics.map((d) => d.code)).toEqual(['anchor.submerged']);
   });
 
@@ -99,14 +100,67 @@ describe('gravity anchor at a crest bend (domain reference §5)', () => {
     expect(analyse(dry).byNode.get('c')!.restraint.anchor!.submerged).toBe(false);
   });
 
-  it('needs no bearing block where the anchor’s base friction holds SF × the horizontal thrust', () => {
-    // CV-13 crest on sand φ = 36°: F_f = W·tan 24° = 21,772 lb × 0.4452 = 9,693 lb ≥ 1.5 × 6,012 = 9,018 lb
+  it('takes base friction on the weight less the uplift, W′ − T_up (statics; hand calculation)', () => {
+    // CV-13 crest on sand φ = 36°, 150 pcf concrete, SF 1.5 on uplift and on sliding; tan(⅔·36°) = tan 24°
+    // = 0.445229. Uplift alone: W = 1.5 × 14,515 = 21,772.5 lb, whose friction on the whole weight
+    // (21,772.5 × 0.445229 = 9,694 lb) would seem to hold 1.5 × 6,012 = 9,018 lb — but the base carries
+    // only W − T_up = 7,257.5 lb, friction 3,231 lb. For friction to hold: W = 14,515 + 9,018 / 0.445229
+    // = 14,515 + 20,254.8 = 34,769.8 lb, V = 34,769.8 / 150 = 231.80 ft³, friction then exactly 9,018 lb.
+    const sand = { id: 'sand', bearing: 95761, unitWeight: 19000, frictionAngle: 36, cohesion: 0 };
+    const site = {
+      soil: sand,
+      soilName: 'sand',
+      od: 0.335,
+      cover: 1.2,
+      invert: 99.8,
+      groundwater: null,
+      waterDepth: null,
+      trenchWidth: 1,
+      waterUnitWeight: 62.4 * PCF,
+      step: 0.05,
+    };
+    const anchor = (horizontal: number) =>
+      sizeGravityAnchor({
+        upward: 14_515 * LBF,
+        horizontal: horizontal * LBF,
+        safetyFactor: 1.5,
+        slidingSafetyFactor: 1.5,
+        concreteUnitWeight: 150 * PCF,
+        site,
+      }).anchor!;
+    const upliftOnly = anchor(0);
+    expectClose(upliftOnly.concreteVolume / FT3, 145.15, 1e-3);
+    expectClose(upliftOnly.baseFriction / LBF, 3_231.3, 1e-3);
+    expect(upliftOnly.governs).toBe('uplift');
+    const alone = anchor(6_012);
+    expectClose(alone.concreteVolume / FT3, 231.8, 5e-4);
+    expectClose(alone.baseFriction / LBF, 9_018, 1e-6);
+    expect(alone.governs).toBe('sliding');
+  });
+
+  it('builds a bearing block where friction under the uplift cannot hold the horizontal thrust', () => {
+    // The same crest through the analysis: anchor alone 231.8 ft³ against a block (≈ 4.5 ft² of face)
+    // plus the 145.1 ft³ uplift anchor: the block and anchor use less concrete and are built.
     const p = crestRoute({
       soils: [{ id: 'sand', bearing: 95761, unitWeight: 19000, frictionAngle: 36, cohesion: 0 }],
       design: { concreteUnitWeight: 150 * PCF },
     });
-    const r = analyse(p).byNode.get('c')!.restraint;
-    expectPrinted(r.anchor!.baseFriction / LBF, 9_693, 5);
-    expect(r.block).toBeNull();
+    const f = analyse(p).byNode.get('c')!;
+    const r = f.restraint;
+    expect(r.block).not.toBeNull();
+    expect(r.block!.thrust).toBe(f.envelope.horizontal.force);
+    expect(r.anchor!.horizontalThrust).toBe(0);
+    expectClose(r.anchor!.concreteVolume / FT3, 145.1, 5e-4);
+  });
+
+  it('refuses a gravity anchor where the submerged weight is not positive (issue 17: heavy water)', () => {
+    // The file schema now refuses such water; the solver still must not trust its caller: heavy water
+    // (2,400 kg/m³, γw = 23,536 N/m³) against 23,000 N/m³ concrete, groundwater above the pipe.
+    const p = crestRoute({ design: { groundwaterElevation: 105, concreteUnitWeight: 23_000 } });
+    const heavy = { ...p, water: { ...p.water, density: 2400 } };
+    const f = analyse(heavy).byNode.get('c')!;
+    expect(f.restraint.anchor).toBeNull();
+    expect(f.diagnostics.map((d) => d.code)).toContain('anchor.no-weight');
+    expect(f.restraint.restrainedLegs.length).toBeGreaterThan(0);
   });
 });

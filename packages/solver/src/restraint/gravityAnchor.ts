@@ -2,13 +2,20 @@ import { value, type CalcStep } from '../analysis/calcRecord.js';
 import { roundUpTo } from './rounding.js';
 import { concreteWeight, type FittingSite } from './site.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
+import { REGISTER } from '../provenance/register.js';
 
 export interface GravityAnchorInput {
   /** N, largest upward thrust over the states */
   upward: number;
-  /** N, largest horizontal thrust, which the anchor's base friction can also take */
+  /**
+   * N, horizontal thrust the anchor must also hold by base friction (0 when a bearing block takes it):
+   * the anchor is then enlarged until the friction on what is left of its weight holds SF × this.
+   */
   horizontal: number;
+  /** safety factor on the uplift */
   safetyFactor: number;
+  /** safety factor on sliding (the bearing safety factor) */
+  slidingSafetyFactor: number;
   /** N/m³, unit weight of the concrete */
   concreteUnitWeight: number;
   site: FittingSite;
@@ -17,73 +24,137 @@ export interface GravityAnchorInput {
 }
 
 export interface GravityAnchor {
-  /** m³, required concrete volume SF·T_up/γ */
+  /** m³, required concrete volume: the larger of the uplift and the sliding requirement */
   concreteVolume: number;
-  /** m, side of a cube of at least that volume, rounded up to the step (for drawing and ordering) */
+  /** m, built plan length (along the pipe), rounded up to the step */
+  length: number;
+  /** m, built plan width (across the pipe), rounded up to the step */
+  width: number;
+  /** m, built height, rounded up to the step */
+  height: number;
+  /** m, side of the cube the anchor is built as (length = width = height) */
   side: number;
   /** N/m³, unit weight used (submerged where groundwater reaches the block) */
   unitWeight: number;
   submerged: boolean;
-  /** N, horizontal thrust at the same fitting */
+  /** N, upward thrust the anchor holds by its weight */
+  upwardThrust: number;
+  /** N, horizontal thrust the anchor holds by base friction (0 when a bearing block holds it) */
   horizontalThrust: number;
-  /** N, base friction W′·tan(⅔φ) of the required volume */
+  /** N, base friction (W′ − T_up)·tan(⅔φ) of the required volume: the uplift lifts part of the weight */
   baseFriction: number;
+  /** which requirement set the volume */
+  governs: 'uplift' | 'sliding';
 }
 
+export type AnchorResult =
+  | { anchor: GravityAnchor; steps: CalcStep[]; diagnostics: Diagnostic[] }
+  | { anchor: null; steps: CalcStep[]; diagnostics: Diagnostic[] };
+
+/** tan δ of concrete cast on the soil, δ = ⅔·φ (register: anchor.base-friction). */
+export const baseFrictionCoefficient = (frictionAngle: number): number =>
+  Math.tan((REGISTER['anchor.base-friction'].value * frictionAngle * Math.PI) / 180);
+
 /**
- * Dead-weight anchor for an upward thrust (domain reference §5.2, DIPRA form V = S_f·T_v/W_m, from
- * memory). The block hangs below the pipe: it counts as submerged (γc − γw, §5.3) when the highest
- * groundwater stands above its bottom. Base friction uses tan(⅔φ) for concrete cast on soil (common
- * practice).
+ * Dead-weight anchor for an upward thrust (domain reference §5.2; the DIPRA form V = S_f·T_v/W_m is
+ * recalled, not read). Statics of the block: vertically W′ ≥ SF·T_up; horizontally, where base friction
+ * is to hold the horizontal thrust too, the normal force on the base is what the uplift leaves of the
+ * weight, N = W′ − T_up, so (W′ − T_up)·tan δ ≥ SF·T_h, i.e. W′ ≥ T_up + SF·T_h/tan δ. The block hangs
+ * below the pipe and counts as submerged (γc − γw, §5.3) when the highest groundwater stands above its
+ * bottom. Where the submerged weight is not positive, no dead weight can hold: an error, never a
+ * negative volume.
  */
-export function sizeGravityAnchor(i: GravityAnchorInput): {
-  anchor: GravityAnchor;
-  steps: CalcStep[];
-  diagnostics: Diagnostic[];
-} {
+export function sizeGravityAnchor(i: GravityAnchorInput): AnchorResult {
   const { site } = i;
-  const volumeAt = (unitWeight: number) => (i.safetyFactor * i.upward) / unitWeight;
-  const drySide = roundUpTo(Math.cbrt(volumeAt(i.concreteUnitWeight)), site.step);
+  const mu = baseFrictionCoefficient(site.soil.frictionAngle);
+  const sliding = i.horizontal > 0;
+  /** N, the weight the anchor needs: the uplift rule, and the sliding rule where friction is to hold */
+  const upliftWeight = i.safetyFactor * i.upward;
+  const slidingWeight = sliding ? (mu > 0 ? i.upward + (i.slidingSafetyFactor * i.horizontal) / mu : Infinity) : 0;
+  const weight = Math.max(upliftWeight, slidingWeight);
+  const governs = slidingWeight > upliftWeight ? 'sliding' : 'uplift';
+  if (!Number.isFinite(weight)) return { anchor: null, steps: [], diagnostics: [] };
+  const drySide = roundUpTo(Math.cbrt(weight / i.concreteUnitWeight), site.step);
   const submerged = site.groundwater !== null && site.groundwater > site.invert - drySide;
   const unitWeight = concreteWeight(i.concreteUnitWeight, site, submerged);
-  const concreteVolume = volumeAt(unitWeight);
+  if (!(unitWeight > 0)) {
+    return {
+      anchor: null,
+      steps: [],
+      diagnostics: [
+        diagnostic(
+          'anchor.no-weight',
+          {},
+          { concreteUnitWeight: i.concreteUnitWeight, waterUnitWeight: site.waterUnitWeight, upward: i.upward },
+        ),
+      ],
+    };
+  }
+  const concreteVolume = weight / unitWeight;
   const side = roundUpTo(Math.cbrt(concreteVolume), site.step);
-  const baseFriction = unitWeight * concreteVolume * Math.tan(((2 / 3) * site.soil.frictionAngle * Math.PI) / 180);
+  const baseFriction = Math.max(0, unitWeight * concreteVolume - i.upward) * mu;
   const diagnostics = submerged ? [diagnostic('anchor.submerged', {}, { unitWeight })] : [];
+  const gammaInput = value(
+    'γ',
+    submerged ? 'submerged unit weight of concrete' : 'unit weight of concrete',
+    unitWeight,
+    'unitWeight',
+    'project design',
+  );
   const steps: CalcStep[] = !i.record
     ? []
     : [
         {
-          title: 'Gravity anchor volume',
-          formula: submerged ? 'V = SF · T_up / (γc − γw)' : 'V = SF · T_up / γc',
+          title: 'Gravity anchor: weight against the uplift',
+          formula: submerged ? 'V_up = SF · T_up / (γc − γw)' : 'V_up = SF · T_up / γc',
           inputs: [
             value('T_up', 'largest upward thrust', i.upward, 'force', 'momentum balance'),
             value('SF', 'uplift safety factor', i.safetyFactor, 'ratio', 'project design'),
-            value(
-              'γ',
-              submerged ? 'submerged unit weight of concrete' : 'unit weight of concrete',
-              unitWeight,
-              'unitWeight',
-              'project design',
-            ),
+            gammaInput,
           ],
-          result: value('V', 'concrete volume', concreteVolume, 'volume', 'computed'),
+          result: value('V_up', 'concrete volume for the uplift', upliftWeight / unitWeight, 'volume', 'computed'),
           reference:
-            'Weight ≥ SF × upward thrust (DIPRA gravity block, unverified); submerged weight γc − γw below groundwater',
+            'Weight ≥ SF × upward thrust (vertical equilibrium; DIPRA gravity block, unverified); submerged weight γc − γw below groundwater',
         },
+        ...(sliding
+          ? [
+              {
+                title: 'Gravity anchor: base friction against the horizontal thrust',
+                formula: '(γ·V − T_up)·tan(⅔φ) ≥ SF · T_h  ⇒  V_sl = (T_up + SF·T_h / tan(⅔φ)) / γ',
+                inputs: [
+                  value('T_h', 'horizontal thrust held by friction', i.horizontal, 'force', 'momentum balance'),
+                  value('SF', 'sliding (bearing) safety factor', i.slidingSafetyFactor, 'ratio', 'project design'),
+                  value('φ', 'soil friction angle', site.soil.frictionAngle, 'angle', 'soil'),
+                  gammaInput,
+                ],
+                result: value('V_sl', 'concrete volume for sliding', slidingWeight / unitWeight, 'volume', 'computed'),
+                reference:
+                  'Horizontal equilibrium: the normal force on the base is the weight less the uplift, W′ − T_up (statics); δ = ⅔φ for concrete cast on soil (common practice)',
+              },
+            ]
+          : []),
         {
-          title: 'Horizontal thrust at the anchor',
-          formula: 'F_f = W′ · tan(⅔·φ)',
-          inputs: [
-            value('T_h', 'largest horizontal thrust', i.horizontal, 'force', 'momentum balance'),
-            value('φ', 'soil friction angle', site.soil.frictionAngle, 'angle', 'soil'),
-          ],
-          result: value('F_f', 'base friction of the anchor', baseFriction, 'force', 'computed'),
-          reference: 'Sliding resistance of a cast-in-place base (common practice)',
+          title: 'Gravity anchor built',
+          formula: 'V = max(V_up, V_sl);  side = ∛V rounded up to the step',
+          inputs: [value('step', 'construction step', site.step, 'length', 'project design')],
+          result: value('V', 'concrete volume', concreteVolume, 'volume', `${governs} governs`),
+          reference: 'A cube of at least the required volume (length × width × height)',
         },
       ];
   return {
-    anchor: { concreteVolume, side, unitWeight, submerged, horizontalThrust: i.horizontal, baseFriction },
+    anchor: {
+      concreteVolume,
+      length: side,
+      width: side,
+      height: side,
+      side,
+      unitWeight,
+      submerged,
+      upwardThrust: i.upward,
+      horizontalThrust: i.horizontal,
+      baseFriction,
+      governs,
+    },
     steps,
     diagnostics,
   };

@@ -1,5 +1,5 @@
-import { describe, it } from 'vitest';
-import { passiveResistance, rankinePassiveCoefficient } from './passiveResistance.js';
+import { describe, it, expect } from 'vitest';
+import { ovesenFactor, passiveResistance, rankinePassiveCoefficient } from './passiveResistance.js';
 
 /** Unit weight of water at 998.2 kg/m³ × 9.80665 m/s², N/m³. */
 const WATER_UNIT_WEIGHT = 998.2 * 9.80665;
@@ -70,5 +70,28 @@ describe('Rankine passive resistance (domain reference §4.6)', () => {
     const dry = 0.5 * 18000 * (1.4 ** 2 - 0.9 ** 2);
     const wet = 18000 * 1.4 * 0.5 + 0.5 * (18000 - WATER_UNIT_WEIGHT) * 0.5 ** 2;
     expectClose(split, 3 * (dry + wet), 1e-9);
+  });
+});
+
+describe('Ovesen 3-D factor for a short block (Ovesen 1964 via Duncan & Mokwa 2001; equation from memory)', () => {
+  it('is 2.209 for a 0.6 m square face from 0.9 to 1.5 m in φ = 30° sand (hand calculation, from memory)', () => {
+    // Kp = 3, Ka = 1/3, Kp − Ka = 2.6667, (Kp − Ka)^⅔ = 1.92299; E = 0.9/1.5 = 0.6, b/h = 1, B = 1:
+    // 1.1·0.6⁴ = 0.14256; 1.6/(1 + 5) = 0.26667; 0.4·2.6667·0.6³/(1 + 0.05) = 0.21943; sum 0.62866
+    // M = 1 + 1.92299 × 0.62866 = 2.2089
+    expectClose(ovesenFactor({ frictionAngle: 30, top: 0.9, bottom: 1.5, width: 0.6 }), 2.2089, 1e-4);
+  });
+
+  it('takes no 3-D gain in undrained clay, φ = 0 (Kp = Ka = 1)', () => {
+    expect(ovesenFactor({ frictionAngle: 0, top: 0.9, bottom: 1.5, width: 0.6 })).toBe(1);
+  });
+
+  it('falls toward the 2-D value as the face widens, and grows with depth (invariants)', () => {
+    const m = (width: number, top = 0.9) => ovesenFactor({ frictionAngle: 30, top, bottom: top + 0.6, width });
+    expect(m(0.3)).toBeGreaterThan(m(0.6));
+    expect(m(0.6)).toBeGreaterThan(m(3));
+    expect(m(3)).toBeGreaterThan(m(300));
+    expect(m(0.6, 2)).toBeGreaterThan(m(0.6, 0.9));
+    // A face reaching the ground surface (E = 0) and very wide: the 2-D wedge, M → 1.
+    expectClose(ovesenFactor({ frictionAngle: 30, top: 0, bottom: 1, width: 1e6 }), 1, 1e-4);
   });
 });

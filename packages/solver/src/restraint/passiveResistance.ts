@@ -72,3 +72,41 @@ export function passiveResistance(p: PassiveInput): number {
   const stress = effectiveStressIntegral(top, p.bottom, p.unitWeight, p.waterDepth, p.waterUnitWeight);
   return p.width * (kp * stress + 2 * p.cohesion * Math.sqrt(kp) * (p.bottom - top));
 }
+
+export interface OvesenInput {
+  /** degrees */
+  frictionAngle: number;
+  /** m, depth of the face's top below ground */
+  top: number;
+  /** m, depth of the face's bottom below ground */
+  bottom: number;
+  /** m, face width */
+  width: number;
+}
+
+/**
+ * Ovesen's three-dimensional factor for the passive resistance of a single short anchor block (Ovesen
+ * 1964, Danish Geotechnical Institute Bulletin No. 16, as restated by Duncan & Mokwa 2001, J. Geotech.
+ * Geoenviron. Eng. 127(3):248–257; the equation is recalled, from memory — register `passive.ovesen`):
+ *
+ *   M = 1 + (Kp − Ka)^(2/3) · [1.1·E⁴ + 1.6·B/(1 + 5·b/h) + 0.4·(Kp − Ka)·E³·B²/(1 + 0.05·b/h)]
+ *
+ * with E = 1 − h/(z + h) (z the depth to the face's top, so E = z_top/z_bottom), B = 1 − (b/s)² = 1 for a
+ * single block (no neighbour at spacing s), b the face width and h its height. It multiplies the 2-D
+ * resistance of the face; with the Rankine Kp (no wall friction) used here the product stays below the
+ * log-spiral value the factor was fitted to. For φ = 0, Kp = Ka = 1 and M = 1: no 3-D gain is taken in
+ * undrained clay.
+ */
+export function ovesenFactor(p: OvesenInput): number {
+  const kp = rankinePassiveCoefficient(p.frictionAngle);
+  const d = kp - 1 / kp;
+  const h = p.bottom - Math.max(0, p.top);
+  if (!(h > 0) || !(p.width > 0) || d <= 0) return 1;
+  const e = 1 - h / p.bottom;
+  const r = p.width / h;
+  const spacing = 1; // B = 1 − (b/s)² with no neighbouring block
+  return (
+    1 +
+    d ** (2 / 3) * (1.1 * e ** 4 + (1.6 * spacing) / (1 + 5 * r) + (0.4 * d * e ** 3 * spacing ** 2) / (1 + 0.05 * r))
+  );
+}

@@ -3,7 +3,7 @@ import { analyse } from '../analysis/analyse.js';
 import { route } from '../../test/projectBuilder.js';
 import { expectClose } from '../../test/tolerance.js';
 
-// Hand calculation of the restrained-joint method (domain reference §6.1, DIPRA form from memory):
+// Hand calculation of the restrained-joint method, docs/check-values.md CV-34 (DIPRA form, from memory):
 // 12-in DI, OD D = 0.33528 m, ID 0.3162 m, pipe weight W_p = 700 N/m (given), cover H = 1.2 m,
 // soil γ = 18 kN/m³, φ = 30°, c = 0, f_φ = 0.6, trench type 4 (K_n = 0.85), P = 1 MPa, S_f = 1.5.
 //   W_e = γ·H·D = 18000 × 1.2 × 0.33528 = 7,242.05 N/m
@@ -143,5 +143,57 @@ describe('restrained joint length (DIPRA method, domain reference §6.1)', () =>
     const r = analyse(p).byNode.get('c')!.restraint;
     expect(r.restrainedLegs).toHaveLength(2);
     for (const leg of r.restrainedLegs) expectClose(leg.length, 5.7508, 1e-4);
+  });
+});
+
+describe('restrained joints by pipe material', () => {
+  const bend = (material: string, soil: Record<string, unknown>) =>
+    route({
+      pressure: 1e6,
+      soils: [{ id: 's', bearing: 150e3, unitWeight: 18000, frictionAngle: 30, ...soil }],
+      nodes: [
+        { id: 'a', x: -30, y: 0, end: 'tie-in' },
+        { id: 'b', x: 0, y: 0, restraint: 'joints' },
+        { id: 'c', x: 0, y: 30, end: 'tie-in' },
+      ],
+      pipes: [
+        { from: 'a', to: 'b', ...pipe, material },
+        { from: 'b', to: 'c', ...pipe, material },
+      ],
+    });
+
+  it('refuses PVC, PE and steel joints without the project’s own friction ratio: an error naming f_φ', () => {
+    for (const material of ['pvc', 'hdpe', 'steel', 'other']) {
+      const f = analyse(bend(material, { cohesion: 0 })).byNode.get('b')!;
+      expect(f.restraint.restrainedLegs).toEqual([]);
+      const d = f.diagnostics.filter((x) => x.code === 'joints.no-material-basis');
+      expect(d).toHaveLength(2); // one for each leg
+      expect(d[0]!.severity).toBe('error');
+      expect(d[0]!.values).toEqual({ frictionMissing: 1, adhesionMissing: 0 });
+    }
+  });
+
+  it('asks for the adhesion ratio too in a soil with cohesion', () => {
+    const f = analyse(bend('pvc', { cohesion: 20e3, pipeFrictionRatio: 0.5 })).byNode.get('b')!;
+    expect(f.diagnostics.find((x) => x.code === 'joints.no-material-basis')!.values).toEqual({
+      frictionMissing: 0,
+      adhesionMissing: 1,
+    });
+  });
+
+  it('sizes PVC with the ratio the project gives, the same hand-worked 8.43 m as iron of equal weight, and warns', () => {
+    // with f_φ = 0.6 given and the pipe weight given, the material changes nothing in F_s or R_s
+    const f = analyse(bend('pvc', { cohesion: 0, pipeFrictionRatio: 0.6 })).byNode.get('b')!;
+    for (const leg of f.restraint.restrainedLegs) expectClose(leg.length, 8.4315, 1e-4);
+    expect(f.diagnostics.map((x) => x.code)).toContain('joints.material-basis');
+    expect(f.basis).toContain('joints.material-basis');
+    expect(f.basis).not.toContain('joints.friction-ratio');
+  });
+
+  it('keeps the ductile-iron defaults, recorded as not verified against the manual', () => {
+    const f = analyse(bend('ductile-iron', { cohesion: 0 })).byNode.get('b')!;
+    expect(f.restraint.restrainedLegs).toHaveLength(2);
+    expect(f.basis).toContain('joints.friction-ratio');
+    expect(f.diagnostics.some((x) => x.code === 'joints.no-material-basis')).toBe(false);
   });
 });

@@ -5,6 +5,9 @@ import type { FittingKind } from '../network/fittingKind.js';
 import type { Soil } from '../model/projectSchema.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { pipeSoilResistance } from './pipeSoilResistance.js';
+import { jointMaterialBasis } from './jointMaterial.js';
+import { REGISTER, type ProvenanceId } from '../provenance/register.js';
+import { notVerifiedText } from '../provenance/entry.js';
 import type { FittingSite } from './site.js';
 
 export interface RestrainedLeg {
@@ -31,12 +34,14 @@ export interface RestrainedLengthInput {
   record?: boolean;
 }
 
-const BEND_REFERENCE =
-  'L = S_f·P·A·tan(θ/2)/(F_s + ½·R_s), DIPRA "Thrust Restraint Design for Ductile Iron Pipe" (form not yet verified against the manual)';
-const AXIAL_REFERENCE =
-  'L = S_f·P·A/F_s for dead ends, tees, reducers and closed valves, DIPRA (form not yet verified against the manual)';
-const UPLIFT_REFERENCE =
-  'Upward-thrust bend: the bearing term replaced by the weight holding the pipe down (form derived here by analogy with the horizontal bend — verify against the manual)';
+/** "L = …, not verified against DIPRA …, horizontal bend equation": the equation with its standing. */
+const reference = (id: ProvenanceId): string => {
+  const e = REGISTER[id];
+  return e.verified ? `${e.quantity} (${e.source})` : `${e.quantity}, ${notVerifiedText(e)}`;
+};
+const BEND_REFERENCE = reference('joints.bend-equation');
+const AXIAL_REFERENCE = reference('joints.axial-equation');
+const UPLIFT_REFERENCE = reference('joints.uplift-equation');
 
 /**
  * Restrained joint length each side of a fitting (domain reference §6.1). Bends, written with the
@@ -58,6 +63,9 @@ export function restrainedLength(i: RestrainedLengthInput): {
   const upward = i.thrust[2] > horizontalNorm(i.thrust);
   const legsToRestrain = isBend ? i.legs : [mostOpposed(i.legs, i.thrust)];
   for (const leg of legsToRestrain) {
+    const material = jointMaterialBasis(leg.pipe, i.soil, i.node);
+    diagnostics.push(...material.diagnostics);
+    if (!material.usable) continue;
     const r = pipeSoilResistance(leg.pipe, i.soil, i.cover, i.site);
     let length: number;
     let formula: string;
@@ -101,11 +109,6 @@ export function restrainedLength(i: RestrainedLengthInput): {
       diagnostics.push(
         diagnostic('joints.encroach', { node: i.node, pipe: leg.pipe.id }, { length, legLength: leg.length }),
       );
-    }
-    if (leg.pipe.material === 'hdpe') {
-      diagnostics.push(diagnostic('joints.fused-pe', { node: i.node, pipe: leg.pipe.id }));
-    } else if (leg.pipe.material !== 'ductile-iron') {
-      diagnostics.push(diagnostic('joints.material-basis', { node: i.node, pipe: leg.pipe.id }));
     }
   }
   if (isBend && (i.deflection as number) > 90) {

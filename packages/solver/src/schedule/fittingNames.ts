@@ -27,10 +27,19 @@ export const bearingText = (deg: number | null): string =>
 /** Deflection as an engineer writes it: 22.5°, 11.25°, 90°. */
 export const angleText = (deg: number): string => `${Math.round(deg * 100) / 100}°`;
 
-/** "Bend 45°", "Tee, branch 90°", "Dead end": the fitting as a crew names it. */
-export function fittingTitle(g: { kind: FittingKind; deflection: number | null; branchAngle: number | null }): string {
+/**
+ * "Bend 45°", "Bend 16.31° crest", "Tee, branch 90°", "Dead end": the fitting as a crew names it; a bend
+ * with a vertical part says whether it is a crest (thrust up) or a sag (thrust down).
+ */
+export function fittingTitle(g: {
+  kind: FittingKind;
+  deflection: number | null;
+  branchAngle: number | null;
+  profile?: 'crest' | 'sag' | null;
+}): string {
   const name = KIND_NAME[g.kind];
-  if (g.deflection !== null && g.kind !== 'valve' && g.kind !== 'reducer') return `${name} ${angleText(g.deflection)}`;
+  if (g.deflection !== null && g.kind !== 'valve' && g.kind !== 'reducer')
+    return `${name} ${angleText(g.deflection)}${g.profile ? ` ${g.profile}` : ''}`;
   if (g.branchAngle !== null) return `${name}, branch at ${angleText(g.branchAngle)}`;
   return name;
 }

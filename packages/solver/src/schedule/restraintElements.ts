@@ -1,7 +1,15 @@
 import type { UnitSystem } from '../units/conversions.js';
+import { planBearing } from '../geometry/vector.js';
 import { formatDimension } from '../units/format.js';
 import { quantityText } from './columnUnits.js';
-import { blockText, restrainedLegText } from './restraintText.js';
+import {
+  anchorForceText,
+  anchorText,
+  blockForceText,
+  blockText,
+  padForceText,
+  restrainedLegText,
+} from './restraintText.js';
 import type { ScheduleFitting } from './scheduleRows.js';
 
 /** What a fitting is held by, one element each; a fitting may need several. */
@@ -29,6 +37,12 @@ export interface RestraintElement {
   name: string;
   /** what to build, in display units */
   text: string;
+  /** N, the force the element takes (the thrust part it holds; null for joints, which take the whole) */
+  force: number | null;
+  /** which way it bears: a plan bearing for a block, "up" for an anchor, "down" for a pad */
+  bears: 'up' | 'down' | number | null;
+  /** the force and its way, in words: "bears 113° SE, 2.48 kN", "holds 16.5 kN up" */
+  forceText: string;
 }
 
 /** The restraint of one schedule row as separate elements, each named by the fitting's mark. */
@@ -37,11 +51,45 @@ export function restraintElements(f: ScheduleFitting, units: UnitSystem): Restra
   const dim = (m: number) => formatDimension(m, units);
   const vol = (v: number) => quantityText(v, 'volume', units);
   const out: RestraintElement[] = [];
-  const add = (kind: RestraintElementKind, text: string) => out.push({ kind, name: elementName(f.mark, kind), text });
-  if (r.block) add('block', `${blockText(r.block, units)}, ${vol(r.block.concreteVolume)}`);
-  if (r.reverseBlock) add('reverseBlock', `${blockText(r.reverseBlock, units)}, ${vol(r.reverseBlock.concreteVolume)}`);
-  if (r.anchor) add('anchor', `${dim(r.anchor.side)} cube, ${vol(r.anchor.concreteVolume)}`);
-  if (r.trenchBottom) add('trenchBottom', `${dim(r.trenchBottom.width)} × ${dim(r.trenchBottom.length)}`);
-  for (const leg of r.restrainedLegs) add('joints', restrainedLegText(leg, units));
+  const add = (
+    kind: RestraintElementKind,
+    text: string,
+    force: number | null,
+    bears: RestraintElement['bears'],
+    forceText: string,
+  ) => out.push({ kind, name: elementName(f.mark, kind), text, force, bears, forceText });
+  if (r.block)
+    add(
+      'block',
+      `${blockText(r.block, units)}, ${vol(r.block.concreteVolume)}`,
+      r.block.thrust,
+      planBearing(r.block.direction),
+      blockForceText(r.block, units),
+    );
+  if (r.reverseBlock)
+    add(
+      'reverseBlock',
+      `${blockText(r.reverseBlock, units)}, ${vol(r.reverseBlock.concreteVolume)}`,
+      r.reverseBlock.thrust,
+      planBearing(r.reverseBlock.direction),
+      blockForceText(r.reverseBlock, units),
+    );
+  if (r.anchor)
+    add(
+      'anchor',
+      `${anchorText(r.anchor, units)}, ${vol(r.anchor.concreteVolume)}`,
+      r.anchor.upwardThrust,
+      'up',
+      anchorForceText(r.anchor, units),
+    );
+  if (r.trenchBottom)
+    add(
+      'trenchBottom',
+      `${dim(r.trenchBottom.width)} × ${dim(r.trenchBottom.length)}`,
+      f.downwardThrust,
+      'down',
+      padForceText(f.downwardThrust, units),
+    );
+  for (const leg of r.restrainedLegs) add('joints', restrainedLegText(leg, units), null, null, '');
   return out;
 }

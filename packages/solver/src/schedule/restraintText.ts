@@ -2,6 +2,8 @@ import type { UnitSystem } from '../units/conversions.js';
 import { formatDimension } from '../units/format.js';
 import { quantityText } from './columnUnits.js';
 import type { ScheduleFitting } from './scheduleRows.js';
+import { planBearing } from '../geometry/vector.js';
+import { bearingText } from './fittingNames.js';
 
 type Block = NonNullable<ScheduleFitting['restraint']['block']>;
 
@@ -10,6 +12,12 @@ const dim = (m: number, units: UnitSystem) => formatDimension(m, units);
 /** "0.80 w × 0.75 h × 0.60 t": face width, face height and thickness to the bearing face. */
 export const blockText = (b: Block, units: UnitSystem): string =>
   `${dim(b.faceWidth, units)} w × ${dim(b.faceHeight, units)} h × ${dim(b.depth, units)} t`;
+
+type Anchor = NonNullable<ScheduleFitting['restraint']['anchor']>;
+
+/** "1.25 l × 1.25 w × 1.25 h": plan length along the pipe, width across it, height. */
+export const anchorText = (a: Anchor, units: UnitSystem): string =>
+  `${dim(a.length, units)} l × ${dim(a.width, units)} w × ${dim(a.height, units)} h`;
 
 type RestrainedLeg = ScheduleFitting['restraint']['restrainedLegs'][number];
 
@@ -25,16 +33,42 @@ export function restrainedText(f: ScheduleFitting, units: UnitSystem): string {
   return f.restraint.restrainedLegs.map((l) => restrainedLegText(l, units)).join(', ');
 }
 
-/** What holds the fitting, in one line of display units: what a crew builds. */
+const force = (n: number, units: UnitSystem) => quantityText(n, 'force', units);
+
+/**
+ * What a block bears, and which way: "bears 113° SE, 2.48 kN" — horizontally, toward the outside of
+ * the bend (the way the thrust pushes), with "and holds 1.2 kN up" where its weight holds an uplift.
+ */
+export const blockForceText = (b: Block, units: UnitSystem): string =>
+  `bears ${bearingText(planBearing(b.direction))}, ${force(b.thrust, units)}` +
+  (b.upwardThrust > 0 ? ` and holds ${force(b.upwardThrust, units)} up` : '');
+
+/** What an anchor holds: "holds 16.5 kN up" and, where its base friction takes it, the horizontal thrust. */
+export const anchorForceText = (a: Anchor, units: UnitSystem): string =>
+  `holds ${force(a.upwardThrust, units)} up` +
+  (a.horizontalThrust > 0 ? ` and ${force(a.horizontalThrust, units)} sideways by base friction` : '');
+
+/** What a trench-bottom pad bears: "bears 2.1 kN down". */
+export const padForceText = (downward: number, units: UnitSystem): string => `bears ${force(downward, units)} down`;
+
+/**
+ * What holds the fitting, in one line of display units: what a crew builds, each element with its own
+ * force and the way it bears (block: horizontal, toward the outside of the bend; anchor: up; pad: down).
+ */
 export function restraintSummary(f: ScheduleFitting, units: UnitSystem): string {
   const r = f.restraint;
   const parts: string[] = [];
-  if (r.block) parts.push(`block ${blockText(r.block, units)}`);
-  if (r.reverseBlock) parts.push(`opposite block ${blockText(r.reverseBlock, units)}`);
+  if (r.block) parts.push(`block ${blockText(r.block, units)} ${blockForceText(r.block, units)}`);
+  if (r.reverseBlock)
+    parts.push(`opposite block ${blockText(r.reverseBlock, units)} ${blockForceText(r.reverseBlock, units)}`);
   if (r.anchor)
-    parts.push(`anchor ${dim(r.anchor.side, units)} cube, ${quantityText(r.anchor.concreteVolume, 'volume', units)}`);
+    parts.push(
+      `anchor ${anchorText(r.anchor, units)}, ${quantityText(r.anchor.concreteVolume, 'volume', units)}, ${anchorForceText(r.anchor, units)}`,
+    );
   if (r.trenchBottom)
-    parts.push(`bottom pad ${dim(r.trenchBottom.width, units)} × ${dim(r.trenchBottom.length, units)}`);
+    parts.push(
+      `bottom pad ${dim(r.trenchBottom.width, units)} × ${dim(r.trenchBottom.length, units)} ${padForceText(f.downwardThrust, units)}`,
+    );
   if (r.restrainedLegs.length) parts.push(`restrain ${restrainedText(f, units)}`);
   return parts.length ? parts.join('; ') : '—';
 }

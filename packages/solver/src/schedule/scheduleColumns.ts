@@ -24,6 +24,7 @@ export interface ScheduleColumn {
   cell: (f: ScheduleFitting, c: CellContext) => number | string | null;
 }
 
+const BLOCK_GOVERNS = { bearing: 'bearing area', passive: 'passive resistance', minimum: 'least face' } as const;
 const size = (f: ScheduleFitting) => Math.max(...f.pipes.map((p) => p.outsideDiameter));
 const caseName = (c: CellContext, id: string) => c.project.loadCases.find((x) => x.id === id)?.label ?? id;
 const soilName = (c: CellContext, id: string) => c.project.soils.find((x) => x.id === id)?.label ?? id;
@@ -48,13 +49,17 @@ export const SCHEDULE_COLUMNS: readonly ScheduleColumn[] = [
   col('case', 'Governing case', 'text', (f, c) => caseName(c, f.governingCase)),
   col('thrust', 'Thrust', 'force', (f) => norm(f.thrust)),
   col('horizontal', 'Horizontal thrust', 'force', (f) => f.horizontalThrust),
-  col('upward', 'Upward thrust', 'force', (f) => f.upwardThrust),
-  col('downward', 'Downward thrust', 'force', (f) => f.downwardThrust),
+  col('upward', 'Upward thrust', 'force', (f) => (f.upwardThrust > 0 ? f.upwardThrust : null)),
+  col('downward', 'Downward thrust', 'force', (f) => (f.downwardThrust > 0 ? f.downwardThrust : null)),
+  col('profile', 'Crest or sag', 'text', (f) => f.profile),
   col('bears', 'Block bears toward', 'text', (f) => (f.restraint.block ? bearingText(f.bearingDirection) : null)),
   col('soil', 'Soil', 'text', (f, c) => soilName(c, f.soil)),
   col('area', 'Bearing area required', 'area', (f) => f.restraint.block?.bearingArea ?? null),
   col('faceWidth', 'Face width', 'built', (f) => f.restraint.block?.faceWidth ?? null),
   col('faceHeight', 'Face height', 'built', (f) => f.restraint.block?.faceHeight ?? null),
+  col('blockGoverns', 'Block face set by', 'text', (f) =>
+    f.restraint.block ? BLOCK_GOVERNS[f.restraint.block.governs] : null,
+  ),
   col('thickness', 'Block thickness', 'built', (f) => f.restraint.block?.depth ?? null),
   col('blockConcrete', 'Block concrete', 'volume', (f) => f.restraint.block?.concreteVolume ?? null),
   col('oppositeWidth', 'Opposite face width', 'built', (f) => f.restraint.reverseBlock?.faceWidth ?? null),
@@ -76,7 +81,18 @@ export const SCHEDULE_COLUMNS: readonly ScheduleColumn[] = [
 ];
 
 /** The columns of the compact outputs, by id. */
-export const TABLE_COLUMNS = ['mark', 'chainage', 'fitting', 'pressure', 'case', 'thrust', 'restraint', 'notes'];
+export const TABLE_COLUMNS = [
+  'mark',
+  'chainage',
+  'fitting',
+  'pressure',
+  'case',
+  'horizontal',
+  'upward',
+  'downward',
+  'restraint',
+  'notes',
+];
 export const APP_COLUMNS = [
   'mark',
   'chainage',
@@ -84,8 +100,9 @@ export const APP_COLUMNS = [
   'od',
   'pressure',
   'case',
-  'thrust',
-  'bears',
+  'horizontal',
+  'upward',
+  'downward',
   'restraint',
   'concrete',
   'notes',

@@ -46,6 +46,10 @@ function block(b: ScheduleBlock | null): ScheduleBlock | null {
       direction: vec(b.direction, 'unit'),
       passiveResistance: r(b.passiveResistance, 'force'),
       passiveRatio: r(b.passiveRatio, 'ratio'),
+      shapeFactor: r(b.shapeFactor, 'ratio'),
+      governs: b.governs,
+      thrust: r(b.thrust, 'force'),
+      upwardThrust: r(b.upwardThrust, 'force'),
     }
   );
 }
@@ -61,9 +65,10 @@ export function diagnosticJson(d: Diagnostic) {
   return { code: d.code, severity: d.severity, subject: d.subject, values };
 }
 
-function fitting(f: ScheduleFitting) {
+/** A fitting at the stated precision; without `echo`, what the project file already says is left out. */
+function fitting(f: ScheduleFitting, echo: boolean) {
   const x = f.restraint;
-  return {
+  const row = {
     ...f,
     deflection: rn(f.deflection, 'angle'),
     horizontalDeflection: rn(f.horizontalDeflection, 'angle'),
@@ -95,8 +100,13 @@ function fitting(f: ScheduleFitting) {
       reverseBlock: block(x.reverseBlock),
       anchor: x.anchor && {
         concreteVolume: up(x.anchor.concreteVolume, 'volume'),
+        length: up(x.anchor.length, 'length'),
+        width: up(x.anchor.width, 'length'),
+        height: up(x.anchor.height, 'length'),
         side: up(x.anchor.side, 'length'),
         submerged: x.anchor.submerged,
+        upwardThrust: r(x.anchor.upwardThrust, 'force'),
+        horizontalThrust: r(x.anchor.horizontalThrust, 'force'),
       },
       trenchBottom: x.trenchBottom && {
         bearingArea: r(x.trenchBottom.bearingArea, 'area'),
@@ -108,19 +118,33 @@ function fitting(f: ScheduleFitting) {
     },
     diagnostics: f.diagnostics.map(diagnosticJson),
   };
+  if (echo) return row;
+  const { position: _position, label: _label, soil: _soil, pipes, ...rest } = row;
+  return { ...rest, pipes: pipes.map((p) => ({ id: p.id, toward: p.toward })) };
+}
+
+export interface ScheduleJsonOptions {
+  /** indent for reading (default false) */
+  pretty?: boolean;
+  /**
+   * repeat what the project file says — each fitting's position, label and soil, its pipes' diameters
+   * and material — beside the results (default true); the command line leaves it out unless --full
+   */
+  echo?: boolean;
 }
 
 /**
  * The schedule as JSON text at the stated precision (no 0.7000000000000001), the same whatever the
- * display units: what `schedule --format json` prints and the app exports.
+ * display units: what the app exports and, without the echoed input, what `schedule --format json` prints.
  */
-export function scheduleJson(s: Schedule, pretty = false): string {
+export function scheduleJson(s: Schedule, options: boolean | ScheduleJsonOptions = {}): string {
+  const { pretty = false, echo = true } = typeof options === 'boolean' ? { pretty: options } : options;
   const out = {
     project: s.project,
     units: s.units,
     warnings: s.warnings,
     diagnostics: s.diagnostics.map(diagnosticJson),
-    fittings: s.fittings.map(fitting),
+    fittings: s.fittings.map((f) => fitting(f, echo)),
     cautions: s.cautions,
   };
   return JSON.stringify(out, null, pretty ? 2 : undefined) + '\n';

@@ -19,13 +19,21 @@ export function scheduleNotes(
   rows: readonly { mark: string; diagnostics: readonly Diagnostic[] }[],
   words: (d: Diagnostic) => string,
 ): { notes: ScheduleNote[]; byMark: Map<string, number[]> } {
-  const groups = new Map<DiagnosticCode, { texts: Set<string>; marks: string[]; first: Diagnostic }>();
+  // `seen` keeps the marks' membership test constant-time: a finding shared by 10,000 fittings made
+  // the list search quadratic (issue 16, a 10,000-node route).
+  const groups = new Map<
+    DiagnosticCode,
+    { texts: Set<string>; marks: string[]; seen: Set<string>; first: Diagnostic }
+  >();
   for (const r of rows) {
     for (const d of r.diagnostics) {
       let g = groups.get(d.code);
-      if (!g) groups.set(d.code, (g = { texts: new Set(), marks: [], first: d }));
+      if (!g) groups.set(d.code, (g = { texts: new Set(), marks: [], seen: new Set(), first: d }));
       g.texts.add(words(d));
-      if (r.mark && !g.marks.includes(r.mark)) g.marks.push(r.mark);
+      if (r.mark && !g.seen.has(r.mark)) {
+        g.seen.add(r.mark);
+        g.marks.push(r.mark);
+      }
     }
   }
   const ordered = [...groups.values()].sort((a, b) => bySeverity(a.first, b.first));

@@ -46,12 +46,30 @@ export interface ScheduleFitting {
   downwardThrust: number;
   /** degrees clockwise from north of the horizontal thrust, or null */
   bearingDirection: number | null;
+  /**
+   * a bend with a vertical part: a crest (its thrust lifts: an anchor holds it) or a sag (its thrust
+   * bears down on the trench bottom); null for a plan bend or any other fitting
+   */
+  profile: 'crest' | 'sag' | null;
   waterWeight: number;
   restraint: {
     block: ScheduleBlock | null;
     /** a second block on the opposite side, where the thrust reverses between load states */
     reverseBlock: ScheduleBlock | null;
-    anchor: { concreteVolume: number; side: number; submerged: boolean } | null;
+    /**
+     * built as length × width × height (a cube: all three equal `side`); it holds the upward thrust by
+     * its weight and, where no block is built, the horizontal thrust by base friction
+     */
+    anchor: {
+      concreteVolume: number;
+      length: number;
+      width: number;
+      height: number;
+      side: number;
+      submerged: boolean;
+      upwardThrust: number;
+      horizontalThrust: number;
+    } | null;
     trenchBottom: { bearingArea: number; width: number; length: number } | null;
     restrainedLength: number | null;
     /**
@@ -76,6 +94,22 @@ export interface Schedule {
   /** by run (main first) and chainage along it: the order a crew walks the line */
   fittings: ScheduleFitting[];
   cautions: readonly string[];
+}
+
+/**
+ * A change of grade smaller than this is taken up along the line, not a vertical bend a crew marks,
+ * degrees (Mainbrace rule: the smallest standard fitting bend is 11.25°; joints deflect a few degrees).
+ */
+const VERTICAL_BEND = 1;
+
+/** Crest or sag of a bend with a vertical part, by the way its largest vertical thrust points. */
+export function fittingProfile(f: FittingAnalysis): ScheduleFitting['profile'] {
+  const g = f.geometry;
+  if (g.kind !== 'bend' && g.kind !== 'reducing-bend') return null;
+  if (g.verticalDeflection === null || Math.abs(g.verticalDeflection) < VERTICAL_BEND) return null;
+  const { upward, downward } = f.envelope;
+  if (upward.force <= 0 && downward.force <= 0) return null;
+  return upward.force >= downward.force ? 'crest' : 'sag';
 }
 
 function row(a: Analysis, f: FittingAnalysis, words: (d: Diagnostic) => string): ScheduleFitting {
@@ -119,14 +153,20 @@ function row(a: Analysis, f: FittingAnalysis, words: (d: Diagnostic) => string):
     upwardThrust: e.upward.force,
     downwardThrust: e.downward.force,
     bearingDirection: e.horizontal.force > 0 ? planBearing(e.horizontal.direction) : null,
+    profile: fittingProfile(f),
     waterWeight: f.waterWeight,
     restraint: {
       block: scheduled(r.block),
       reverseBlock: scheduled(r.reverseBlock),
       anchor: r.anchor && {
         concreteVolume: r.anchor.concreteVolume,
+        length: r.anchor.length,
+        width: r.anchor.width,
+        height: r.anchor.height,
         side: r.anchor.side,
         submerged: r.anchor.submerged,
+        upwardThrust: r.anchor.upwardThrust,
+        horizontalThrust: r.anchor.horizontalThrust,
       },
       trenchBottom: r.trenchBottom,
       restrainedLength: r.restrainedLength,
@@ -137,7 +177,12 @@ function row(a: Analysis, f: FittingAnalysis, words: (d: Diagnostic) => string):
         joints: restrainedJointCount(l.length, a.project.design.layingLength),
       })),
     },
-    warnings: f.diagnostics.map(words),
+    // Worded when first read: the table, the print and the JSON read them; a pressure change does not.
+    get warnings() {
+      const list = f.diagnostics.length ? f.diagnostics.map(words) : [];
+      Object.defineProperty(this, 'warnings', { value: list, enumerable: true });
+      return list;
+    },
     diagnostics: f.diagnostics,
     unverified: unverified(f.basis),
   };
@@ -149,6 +194,7 @@ const schedules = new WeakMap<Analysis, Schedule>();
  * The schedule of project-format.md from an analysis: one row per fitting that needs restraint, in
  * the analysis' run-and-chainage order. Memoised by the analysis, as `analyse` is by the document: the
  * table, the print and the exports share one schedule of one document. Callers must not change it.
+ * The rows, and each row's words, are built when first read.
  */
 export function scheduleOf(a: Analysis): Schedule {
   let s = schedules.get(a);
@@ -160,7 +206,12 @@ export function scheduleOf(a: Analysis): Schedule {
       units: 'SI',
       warnings: a.diagnostics.map(words),
       diagnostics: a.diagnostics,
-      fittings: a.fittings.map((f) => row(a, f, words)),
+      // Built when first read, and kept.
+      get fittings() {
+        const rows = a.fittings.map((f) => row(a, f, words));
+        Object.defineProperty(this, 'fittings', { value: rows, enumerable: true });
+        return rows;
+      },
       cautions: CAUTIONS,
     };
     schedules.set(a, s);
