@@ -51,7 +51,7 @@ describe('the four schedule outputs agree cell for cell (app table, print, CLI t
       // the first six of the view (crew order).
       const tables: [Element[], number][] = [
         [[container.querySelector('[data-testid="schedule-table"]')!], view.rows.length],
-        [[...container.querySelectorAll('.crew-table')], Math.min(view.rows.length, 6 * 3)],
+        [[...container.querySelectorAll('.crew-table')], Math.min(view.rows.length, 6)],
       ];
       for (const [group, count] of tables) {
         const heads = [...group[0]!.querySelectorAll('thead th')].map((th) => th.textContent!.replace(/ [▲▼]$/, ''));

@@ -17,6 +17,52 @@ const MARK = 12.5;
 /** More pipes than this are drawn as every n-th one joined up: a key plan shows the shape, not each joint. */
 const MOST_SEGMENTS = 1500;
 
+interface Frame {
+  sx: (x: number) => number;
+  sy: (y: number) => number;
+  scale: number;
+  /** the route as one path: one element however many pipes (a long route prints hundreds of key plans) */
+  route: string;
+  tieIns: Project['nodes'];
+}
+const frames = new WeakMap<Analysis, Frame>();
+
+/** The key plan's fit of the route, its path and tie-ins: made once per analysis, shared by every page. */
+function frameOf(project: Project, analysis: Analysis): Frame {
+  const cached = frames.get(analysis);
+  if (cached) return cached;
+  let x0 = Infinity,
+    x1 = -Infinity,
+    y0 = Infinity,
+    y1 = -Infinity;
+  for (const n of project.nodes) {
+    x0 = Math.min(x0, n.x);
+    x1 = Math.max(x1, n.x);
+    y0 = Math.min(y0, n.y);
+    y1 = Math.max(y1, n.y);
+  }
+  const scale = Math.min((W - 2 * PAD) / Math.max(x1 - x0, 1), (H - 2 * PAD) / Math.max(y1 - y0, 1));
+  const cx = (x0 + x1) / 2,
+    cy = (y0 + y1) / 2;
+  const sx = (x: number) => W / 2 + (x - cx) * scale;
+  const sy = (y: number) => H / 2 - (y - cy) * scale;
+  const at = new Map(project.nodes.map((n) => [n.id, n]));
+  const every = Math.max(1, Math.ceil(project.pipes.length / MOST_SEGMENTS));
+  const parts: string[] = [];
+  project.pipes.forEach((p, i) => {
+    if (i % every !== 0) return;
+    const a = at.get(p.from)!,
+      b = at.get(p.to)!;
+    parts.push(`M${sx(a.x).toFixed(1)} ${sy(a.y).toFixed(1)}L${sx(b.x).toFixed(1)} ${sy(b.y).toFixed(1)}`);
+  });
+  const tieIns = project.nodes.filter(
+    (n) => n.end === 'tie-in' && analysis.marks.has(n.id) && !analysis.byNode.has(n.id),
+  );
+  const frame = { sx, sy, scale, route: parts.join(''), tieIns };
+  frames.set(analysis, frame);
+  return frame;
+}
+
 /**
  * A small plan of the whole route with fitting marks, north and a scale: where each row is. With
  * `marks`, only those fittings (a page's) are labelled and drawn strong, the rest as dots.
@@ -32,44 +78,15 @@ export function KeyPlan({
 }) {
   const units = useApp((s) => s.units);
   if (project.nodes.length === 0) return null;
-  const xs = project.nodes.map((n) => n.x),
-    ys = project.nodes.map((n) => n.y);
-  const x0 = Math.min(...xs),
-    x1 = Math.max(...xs),
-    y0 = Math.min(...ys),
-    y1 = Math.max(...ys);
-  const scale = Math.min((W - 2 * PAD) / Math.max(x1 - x0, 1), (H - 2 * PAD) / Math.max(y1 - y0, 1));
-  const cx = (x0 + x1) / 2,
-    cy = (y0 + y1) / 2;
-  const sx = (x: number) => W / 2 + (x - cx) * scale;
-  const sy = (y: number) => H / 2 - (y - cy) * scale;
-  const at = new Map(project.nodes.map((n) => [n.id, n]));
+  const { sx, sy, scale, route, tieIns } = frameOf(project, analysis);
   const bar = gridSpacing(scale, 80);
-  const tieIns = project.nodes.filter(
-    (n) => n.end === 'tie-in' && analysis.marks.has(n.id) && !analysis.byNode.has(n.id),
-  );
+  // Other fittings as dots while they are few enough to read; on a long route the line alone.
+  const dots = !marks || analysis.fittings.length <= 200;
   return (
     <figure className="key-plan">
       <svg viewBox={`0 0 ${W} ${H}`} role="img" aria-label="Key plan of the route with fitting marks">
         <rect x="0.5" y="0.5" width={W - 1} height={H - 1} fill="none" stroke={PALETTE.gridMajor} />
-        {(project.pipes.length > MOST_SEGMENTS
-          ? project.pipes.filter((_, i) => i % Math.ceil(project.pipes.length / MOST_SEGMENTS) === 0)
-          : project.pipes
-        ).map((p) => {
-          const a = at.get(p.from)!,
-            b = at.get(p.to)!;
-          return (
-            <line
-              key={p.id}
-              x1={sx(a.x)}
-              y1={sy(a.y)}
-              x2={sx(b.x)}
-              y2={sy(b.y)}
-              stroke={PALETTE.pipe}
-              strokeWidth={1 + p.outsideDiameter * 4}
-            />
-          );
-        })}
+        <path d={route} fill="none" stroke={PALETTE.pipe} strokeWidth={1.6} strokeLinecap="round" />
         {tieIns.map((n) => (
           <g key={n.id}>
             <FittingGlyph kind="tie-in" x={sx(n.x)} y={sy(n.y)} scale={0.6} />
@@ -78,9 +95,9 @@ export function KeyPlan({
             </text>
           </g>
         ))}
-        {analysis.fittings.map((f, i) =>
+        {(marks && !dots ? analysis.fittings.filter((f) => marks.has(f.mark)) : analysis.fittings).map((f, i) =>
           marks && !marks.has(f.mark) ? (
-            marks.size < 60 || i % 20 === 0 ? (
+            dots ? (
               <circle key={f.node.id} cx={sx(f.node.x)} cy={sy(f.node.y)} r={1.6} fill={PALETTE.gridLabel} />
             ) : null
           ) : (

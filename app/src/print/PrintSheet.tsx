@@ -1,4 +1,4 @@
-import { useEffect, useMemo, useState } from 'react';
+import { memo, useEffect, useMemo, useState } from 'react';
 import {
   CAUTIONS,
   columnNumber,
@@ -25,7 +25,12 @@ import { PlanExportButtons } from './PlanExportButtons.js';
 /** Fittings per crew page: six sketches a page is the budget (crew-sheet.md). */
 export const PER_PAGE = 6;
 /** Pages made per step while the sheet is prepared: each step stays a short task on a long route. */
-const PAGES_PER_STEP = 3;
+const PAGES_PER_STEP = 1;
+/**
+ * Sheets in one print run: a long route is printed in runs of this many sheets (a browser holding
+ * 1,700 sheets at once takes minutes to lay them out), chosen in the print dialog.
+ */
+export const SHEETS_PER_RUN = 50;
 
 /** The schedule columns of the crew part: where each fitting is and what to build, no forces. */
 const crewColumns = (project: Project) => [
@@ -51,20 +56,21 @@ type Paper = 'a4' | 'letter';
  * Makes `total` items in steps of `step` (one step per macrotask), so that a 10,000-node route's
  * sheet is built without a long task: returns how many are ready.
  */
-function useSteps(total: number, step: number): number {
-  const [state, setState] = useState(() => ({ total, ready: Math.min(total, step) }));
-  // A new schedule starts over (adjusting state during render, not in an effect).
-  if (state.total !== total) setState({ total, ready: Math.min(total, step) });
-  const ready = state.total === total ? state.ready : Math.min(total, step);
+function useSteps(total: number, step: number, key: number): number {
+  const [state, setState] = useState(() => ({ total, key, ready: Math.min(total, step) }));
+  // A new schedule or run starts over (adjusting state during render, not in an effect).
+  const current = state.total === total && state.key === key;
+  if (!current) setState({ total, key, ready: Math.min(total, step) });
+  const ready = current ? state.ready : Math.min(total, step);
   useEffect(() => {
     if (ready >= total) return;
-    const id = setTimeout(() => setState((s) => ({ total: s.total, ready: Math.min(s.total, s.ready + step) })), 0);
+    const id = setTimeout(() => setState((s) => ({ ...s, ready: Math.min(s.total, s.ready + step) })), 0);
     return () => clearTimeout(id);
   }, [ready, total, step]);
   return ready;
 }
 
-function CrewPage({
+const CrewPage = memo(function CrewPage({
   rows,
   index,
   pages,
@@ -173,7 +179,7 @@ function CrewPage({
       </footer>
     </section>
   );
-}
+});
 
 /**
  * The printable sheet (crew-sheet.md): the crew part — pages of six fittings, each with the title
@@ -196,19 +202,27 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
   }, [view]);
   // The job's take-off fills the second row of sketches of a last page with three fittings or fewer.
   const fitsOnLast = (pages[pages.length - 1]?.length ?? PER_PAGE) <= PER_PAGE / 2;
-  const ready = useSteps(pages.length, PAGES_PER_STEP);
-  const done = ready >= pages.length;
+  const runs = Math.ceil(pages.length / SHEETS_PER_RUN);
+  const [run, setRun] = useState(0);
+  const first = Math.min(run, Math.max(0, runs - 1)) * SHEETS_PER_RUN;
+  const inRun = pages.slice(first, first + SHEETS_PER_RUN);
+  const lastRun = first + inRun.length >= pages.length;
+  const ready = useSteps(inRun.length, PAGES_PER_STEP, first);
+  const done = ready >= inRun.length;
+  // The route's take-off prints after the last sheet: made only for the last run.
   const job = useMemo(
     () =>
-      takeOffRows(
-        takeOff(
-          view.rows.map((r) => r.fitting),
-          project,
-          units,
-        ),
-        units,
-      ),
-    [view, project, units],
+      !lastRun
+        ? []
+        : takeOffRows(
+            takeOff(
+              view.rows.map((r) => r.fitting),
+              project,
+              units,
+            ),
+            units,
+          ),
+    [view, project, units, lastRun],
   );
   return (
     <div className={`print-preview paper-${paper}`} data-testid="print-sheet">
@@ -234,49 +248,69 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
           />{' '}
           Calculation appendix (for the reviewing engineer)
         </label>
+        {runs > 1 && (
+          <label>
+            Sheets{' '}
+            <select
+              value={run}
+              onChange={(e) => setRun(Number(e.target.value))}
+              aria-label="Sheets to print"
+              data-testid="print-run"
+            >
+              {Array.from({ length: runs }, (_, r) => (
+                <option key={r} value={r}>
+                  {r * SHEETS_PER_RUN + 1}–{Math.min(pages.length, (r + 1) * SHEETS_PER_RUN)} of {pages.length}
+                </option>
+              ))}
+            </select>
+          </label>
+        )}
         <PlanExportButtons />
         <span className="muted" role="status" aria-live="polite" data-testid="print-progress">
           {done
-            ? `${pages.length} sheet${pages.length === 1 ? '' : 's'} for ${view.rows.length} fittings${appendix ? ', then the appendix' : ''}`
-            : `Preparing sheet ${ready} of ${pages.length}…`}
+            ? `${runs > 1 ? `Sheets ${first + 1}–${first + inRun.length} of ` : ''}${pages.length} sheet${pages.length === 1 ? '' : 's'} for ${view.rows.length} fittings${appendix ? ', then the appendix' : ''}`
+            : `Preparing sheet ${first + ready} of ${first + inRun.length}…`}
         </span>
       </div>
       <article className="sheet crew-sheet" data-ready={done ? 'yes' : 'no'}>
-        {pages.slice(0, ready).map((rows, i) => (
-          <CrewPage
-            key={i}
-            rows={rows}
-            index={i}
-            pages={pages.length}
-            view={view}
-            analysis={analysis}
-            project={project}
-            units={units}
-            extra={
-              i === pages.length - 1 && fitsOnLast ? (
-                <section className="sheet-takeoff in-page" data-testid="job-takeoff">
-                  <h3>Quantities take-off — whole route</h3>
-                  <div className="takeoff-pair">
-                    <TakeOffTable rows={job.filter((l) => l.section === 'Concrete')} compact />
-                    <TakeOffTable
-                      rows={job.filter((l) => l.section === 'Restrained joints' || l.section === 'Anchors')}
-                      compact
-                    />
-                    <TakeOffTable rows={job.filter((l) => l.section === 'Fittings')} compact />
-                  </div>
-                </section>
-              ) : undefined
-            }
-          />
-        ))}
+        {inRun.slice(0, ready).map((rows, k) => {
+          const i = first + k;
+          return (
+            <CrewPage
+              key={i}
+              rows={rows}
+              index={i}
+              pages={pages.length}
+              view={view}
+              analysis={analysis}
+              project={project}
+              units={units}
+              extra={
+                i === pages.length - 1 && fitsOnLast ? (
+                  <section className="sheet-takeoff in-page" data-testid="job-takeoff">
+                    <h3>Quantities take-off — whole route</h3>
+                    <div className="takeoff-pair">
+                      <TakeOffTable rows={job.filter((l) => l.section === 'Concrete')} compact />
+                      <TakeOffTable
+                        rows={job.filter((l) => l.section === 'Restrained joints' || l.section === 'Anchors')}
+                        compact
+                      />
+                      <TakeOffTable rows={job.filter((l) => l.section === 'Fittings')} compact />
+                    </div>
+                  </section>
+                ) : undefined
+              }
+            />
+          );
+        })}
         {pages.length === 0 && <p className="muted">No fitting needs restraint yet: draw the route first.</p>}
-        {done && pages.length > 0 && !fitsOnLast && (
+        {done && lastRun && pages.length > 0 && !fitsOnLast && (
           <section className="sheet-takeoff" data-testid="job-takeoff">
             <h2>Quantities take-off — whole route</h2>
             <TakeOffTable rows={job} />
           </section>
         )}
-        {done && appendix && <Appendix project={project} analysis={analysis} units={units} />}
+        {done && lastRun && appendix && <Appendix project={project} analysis={analysis} units={units} />}
       </article>
     </div>
   );
