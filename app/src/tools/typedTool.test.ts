@@ -110,7 +110,7 @@ describe('calibration picks, through the dispatcher', () => {
 });
 
 describe('Fit with a site plan and no route yet', () => {
-  it('shows the whole image: its four corners inside the 800 × 500 canvas less the 100 px margin', () => {
+  it('shows the whole image: its four corners inside the 800 × 500 canvas less the 70 px margin (0.14 × the height)', () => {
     const doc: Project = {
       ...emptyProject(),
       underlay: {
@@ -136,10 +136,10 @@ describe('Fit with a site plan and no route yet', () => {
       { u: 2000, v: 1000 },
     ]) {
       const p = toScreen(h.state().viewport, imageToPlan(doc.underlay!, q));
-      expect(p.sx).toBeGreaterThanOrEqual(100 - 1e-6);
-      expect(p.sx).toBeLessThanOrEqual(700 + 1e-6);
-      expect(p.sy).toBeGreaterThanOrEqual(100 - 1e-6);
-      expect(p.sy).toBeLessThanOrEqual(400 + 1e-6);
+      expect(p.sx).toBeGreaterThanOrEqual(70 - 1e-6);
+      expect(p.sx).toBeLessThanOrEqual(730 + 1e-6);
+      expect(p.sy).toBeGreaterThanOrEqual(70 - 1e-6);
+      expect(p.sy).toBeLessThanOrEqual(430 + 1e-6);
     }
   });
 });

@@ -73,6 +73,7 @@ export const QUICK_FIELDS = {
     'pipes',
     'georeference',
     'underlay',
+    'sheet',
   ],
   georeference: ['proj4'],
   water: ['density'],
@@ -87,6 +88,7 @@ export const QUICK_FIELDS = {
     'trenchWidth',
     'dimensionStep',
     'layingLength',
+    'concreteWaste',
   ],
   loadCase: ['id', 'label', 'kind', 'pressure', 'datumElevation', 'flowFactor'],
   soil: [
@@ -153,6 +155,8 @@ function design(v: unknown): Project['design'] {
     trenchWidth: or('trenchWidth', nullable('trenchWidth'), null),
     dimensionStep: or('dimensionStep', (x) => num(x, 'dimensionStep'), REGISTER['design.dimension-step'].value),
     layingLength: or('layingLength', (x) => num(x, 'layingLength'), 6),
+    // absent stays absent, as the schema leaves it (the register's default applies)
+    ...(o.concreteWaste === undefined ? {} : { concreteWaste: num(o.concreteWaste, 'concreteWaste') }),
   };
 }
 
@@ -281,6 +285,8 @@ export function quickParse(data: unknown): Project | null {
     if (o.format !== 'mainbrace-project' || o.version !== 1) return null;
     // A site-plan underlay (images, calibration) is the schema's to check: the solver never reads it.
     if (o.underlay !== undefined) return null;
+    // So is the sheet's title block: the printed words, never read by the solver.
+    if (o.sheet !== undefined) return null;
     const out: Rec = {
       format: 'mainbrace-project',
       version: 1,
