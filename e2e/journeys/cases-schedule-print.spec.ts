@@ -18,9 +18,13 @@ test('the exported schedule JSON is the command line’s schedule of the same fi
   await app.gotoFresh();
   const exported = JSON.parse(await app.exportText('Schedule as JSON'));
   const cli = JSON.parse(
-    execFileSync(process.execPath, [`${root}packages/solver/bin/mainbrace.mjs`, 'schedule', demo, '--format', 'json'], {
-      encoding: 'utf8',
-    }),
+    execFileSync(
+      process.execPath,
+      [`${root}packages/solver/bin/mainbrace.mjs`, 'schedule', demo, '--format', 'json', '--full'],
+      {
+        encoding: 'utf8',
+      },
+    ),
   );
   // Same content: every field and text equal; numbers equal to 1e-12 (Chromium's and Node's Math.atan2
   // may differ in the last bit).

@@ -1,4 +1,4 @@
-import { sheetSchema, type Project, type UnitSystem } from '@mainbrace/solver';
+import { sheetOf, type Project, type UnitSystem } from '@mainbrace/solver';
 
 /**
  * The title block of every crew page: what the sheet is and which part of the route, then the
@@ -18,7 +18,7 @@ export function TitleBlock({
   /** one line under the subtitle: the page's concrete */
   note?: string;
 }) {
-  const s = sheetSchema.parse(project.sheet ?? {});
+  const s = sheetOf(project.sheet);
   const box = (label: string, value: string, id: string) => (
     <div className="tb-box" data-field={id}>
       <span className="tb-label">{label}</span>

@@ -1,5 +1,5 @@
 import {
-  sheetSchema,
+  sheetOf,
   type LoadCase,
   type Pipe,
   type Project,
@@ -161,10 +161,7 @@ export function createActions(store: AppStore) {
     updateDesign: (patch: Partial<Project['design']>) => edit((p) => ({ ...p, design: { ...p.design, ...patch } })),
     /** Title-block fields and the chainage style; typing in one field is one undo step. */
     updateSheet: (patch: Partial<Sheet>) =>
-      edit(
-        (p) => ({ ...p, sheet: { ...sheetSchema.parse(p.sheet ?? {}), ...patch } }),
-        `sheet-${Object.keys(patch).join('-')}`,
-      ),
+      edit((p) => ({ ...p, sheet: { ...sheetOf(p.sheet), ...patch } }), `sheet-${Object.keys(patch).join('-')}`),
     setWaterDensity: (density: number) => edit((p) => ({ ...p, water: { density } })),
     updateCase: (id: string, patch: Partial<LoadCase>) =>
       edit(

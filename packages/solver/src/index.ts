@@ -6,6 +6,7 @@ export { LIMITS, unusual, type Limit, type LimitId } from './model/limits.js';
 export { implausibleInputs } from './model/plausibility.js';
 export { nodeCover, nodeGround, nodeOutsideDiameters, pipeLevelFor, coverFor } from './model/groundLevel.js';
 export { caseLabel } from './model/caseLabel.js';
+export { blankSheet, sheetOf } from './model/sheet.js';
 export { parseProject, parseProjectText, type ParseResult } from './model/parseProject.js';
 export { partProblems, crossProblems, type ProjectList } from './model/partCheck.js';
 export { problemText, type Problem } from './model/problems.js';
