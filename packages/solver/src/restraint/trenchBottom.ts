@@ -4,7 +4,7 @@ import { roundUpTo } from './rounding.js';
 export interface TrenchBottomBearing {
   /** m², required bearing area under the fitting SF·T_down/σ_v */
   bearingArea: number;
-  /** m, across the trench */
+  /** m, across the trench: the trench width rounded up to the step (a built dimension) */
   width: number;
   /** m, along the pipe, rounded up to the step */
   length: number;
@@ -27,7 +27,7 @@ export function sizeTrenchBottom(
   const bearingArea = (safetyFactor * downward) / verticalBearing;
   const length = Math.max(roundUpTo(bearingArea / trenchWidth, step), roundUpTo(outsideDiameter, step));
   return {
-    bearing: { bearingArea, width: trenchWidth, length },
+    bearing: { bearingArea, width: roundUpTo(trenchWidth, step), length },
     steps: !record
       ? []
       : [
