@@ -402,7 +402,7 @@ export function sketchOf(f: ScheduleFitting, analysis: Analysis, units: UnitSyst
   // The block's size is in the table row and on the dimensions: the words say what they cannot.
   const blockLine = (b: NonNullable<typeof so.block>, what: string) =>
     `${what} bears ${compassPoint(b.bearing)} against undisturbed soil ${bearingSide(f)}, ` +
-    `face ${dim(b.thickness)} from the fitting centre; top ${depth(b.topDepth, 'down')}, base ${depth(b.baseDepth, 'up')} below ground.`;
+    `face ${dim(b.thickness)} from fitting centre; top ${depth(b.topDepth, 'down')}, base ${depth(b.baseDepth, 'up')} below ground.`;
   if (so.block) lines.push(blockLine(so.block, 'Block'));
   if (so.reverseBlock) {
     const same =
@@ -412,7 +412,7 @@ export function sketchOf(f: ScheduleFitting, analysis: Analysis, units: UnitSyst
       so.block.thickness === so.reverseBlock.thickness;
     lines.push(
       same
-        ? `Opposite block, same size, bears ${compassPoint(so.reverseBlock.bearing)} (the thrust reverses).`
+        ? `Opposite block: same size, bears ${compassPoint(so.reverseBlock.bearing)}.`
         : blockLine(so.reverseBlock, 'Opposite block'),
     );
   }
@@ -423,7 +423,7 @@ export function sketchOf(f: ScheduleFitting, analysis: Analysis, units: UnitSyst
     );
   if (so.pad)
     lines.push(
-      `Pad ${dim(so.pad.width)} w × ${dim(so.pad.length)} l × ${dim(so.pad.thickness)} t on undisturbed trench bottom.`,
+      `Pad ${dim(so.pad.width)} w × ${dim(so.pad.length)} l × ${dim(so.pad.thickness)} t, on the trench bottom.`,
     );
   if (r.restrainedLegs.length) {
     const legsText = r.restrainedLegs.map(
