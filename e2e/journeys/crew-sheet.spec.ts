@@ -102,7 +102,10 @@ test('the crew sheet of the demo prints in chainage order, six fittings a page, 
   expect(all).toMatch(/bears [NESW]{1,2} against undisturbed soil on the outside of the bend/);
   expect(all).toMatch(/toward A1[24] \(2 joints\)/);
   // Notes printed by number, and the rows refer to them.
-  expect(all).toMatch(/passive resistance/);
+  // The demo's anchors sit below groundwater (A6, A9) and its valve's thrust reverses (A10).
+  expect(all).toMatch(/Gravity anchor below groundwater.*\(A6, A9\)/);
+  expect(all).toMatch(/The thrust reverses between load states.*\(A10\)/);
+  expect(all).toMatch(/A10 535\.0 Valve .* 1, 3, 4 /);
   expect(all).toMatch(/Total to order/);
   for (const [i, p] of pages.entries()) {
     expect(p).toContain(`Sheet ${i + 1} of ${sheets}`);
