@@ -3,7 +3,7 @@ import {
   REGISTER,
   notVerifiedText,
   scheduleView,
-  sheetSchema,
+  sheetOf,
   takeOff,
   takeOffRows,
   type ChainageStyle,
@@ -32,7 +32,7 @@ export function SheetPanel() {
   const units = useApp((s) => s.units);
   const analysis = useAnalysis();
   const actions = useActions();
-  const sheet = sheetSchema.parse(project.sheet ?? {});
+  const sheet = sheetOf(project.sheet);
   const view = scheduleView(analysis, units);
   const t = takeOff(
     view.rows.map((r) => r.fitting),
