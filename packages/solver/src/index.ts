@@ -31,6 +31,7 @@ export {
   analyse,
   analyseNext,
   analyseProject,
+  analyseInSteps,
   calculationRecord,
   type Analysis,
   type FittingAnalysis,

@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
-import { analyseNext, analyseProject, type Analysis } from '../src/analysis/analyse.js';
+import { analyse, analyseInSteps, analyseNext, analyseProject, type Analysis } from '../src/analysis/analyse.js';
 import type { Project } from '../src/model/projectSchema.js';
 import { scheduleOf } from '../src/schedule/scheduleRows.js';
 import { scheduleJson } from '../src/schedule/scheduleJson.js';
@@ -246,4 +246,26 @@ describe('the incremental analysis (analyseNext) after an edit', () => {
       expect(f.cases[0]!.pressure).toBe(500e3);
     });
   });
+});
+
+describe('the analysis a step at a time (analyseInSteps), as the app opens a long route', () => {
+  it('equals the analysis in one call, and is the one analyse() then returns for the document', () => {
+    fc.assert(
+      fc.property(randomRoute({ flows: true }), extras, fc.integer({ min: 1, max: 5 }), (r, x, chunk) => {
+        const p = project(r, x);
+        const steps = analyseInSteps(p, chunk);
+        let yields = 0;
+        let s = steps.next();
+        while (!s.done) {
+          yields++;
+          s = steps.next();
+        }
+        // four phases, then one pause per whole chunk of fittings
+        expect(yields).toBe(4 + Math.floor(s.value.fittings.length / chunk));
+        expectSame(visible(s.value), visible(analyseProject(p)), '', 0);
+        expect(analyse(p)).toBe(s.value);
+      }),
+      { ...runs, numRuns: 60 },
+    );
+  }, 120_000);
 });

@@ -71,6 +71,9 @@ interface Kept {
 
 const kept = new WeakMap<Analysis, Kept>();
 
+/** `analyse`'s memo: one analysis per document. */
+const cache = new WeakMap<Project, Analysis>();
+
 /** Where a fitting stands on the route. */
 interface Place {
   mark: string;
@@ -162,23 +165,40 @@ function sameList(a: readonly Diagnostic[], b: readonly Diagnostic[]): boolean {
   return a.length === b.length && a.every((d, i) => sameDiagnostic(d, b[i]!));
 }
 
-/**
- * The analysis of `project` from its legs and geometry, reusing what `prev` computed where `reuse`
- * says a fitting did not change (`'all'`: its thrust and restraint; `'sums'`: its sums only).
- */
-function assemble(
+type Reuse = { analysis: Analysis; kept: Kept; reuse: (id: string) => 'all' | 'sums' | 'none' } | null;
+
+/** An analysis being put together: what every fitting reads, and the fittings solved so far. */
+interface Assembly {
+  project: Project;
+  legs: Map<string, Leg[]>;
+  geometry: Map<string, FittingGeometry>;
+  prev: Reuse;
+  layout: RunLayout;
+  marks: Map<string, string>;
+  inputs: Diagnostic[];
+  atNode: Map<string, Diagnostic[]>;
+  nodeById: Map<string, ProjectNode>;
+  /** node ids of the fittings, by run and chainage */
+  order: string[];
+  sums: ThrustSums;
+  index: Map<string, number>;
+  fittings: FittingAnalysis[];
+}
+
+const isFitting = (geometry: ReadonlyMap<string, FittingGeometry>) => (id: string) => {
+  const kind = geometry.get(id)!.kind;
+  return kind !== 'straight' && kind !== 'none';
+};
+
+function startAssembly(
   project: Project,
   legs: Map<string, Leg[]>,
   geometry: Map<string, FittingGeometry>,
-  prev: { analysis: Analysis; kept: Kept; reuse: (id: string) => 'all' | 'sums' | 'none' } | null,
-  layout: RunLayout = runLayout(project, legs),
-  marks: Map<string, string> = fittingMarks(layout, (id) => {
-    const kind = geometry.get(id)!.kind;
-    return kind !== 'straight' && kind !== 'none';
-  }),
-): Analysis {
+  prev: Reuse,
+  layout: RunLayout,
+  marks: Map<string, string>,
+): Assembly {
   const inputs = implausibleInputs(project);
-  const atNode = byNode(inputs);
   const nodeById = new Map<string, ProjectNode>();
   for (const n of project.nodes) nodeById.set(n.id, n);
   const order: string[] = [];
@@ -190,55 +210,90 @@ function assemble(
       order.push(id);
     }
   }
-  const sums = thrustSums(order.length);
-  const index = new Map<string, number>();
-  const fittings: FittingAnalysis[] = new Array<FittingAnalysis>(order.length);
-  for (let f = 0; f < order.length; f++) {
-    const id = order[f]!;
-    index.set(id, f);
-    const node = nodeById.get(id)!;
-    const g = geometry.get(id)!;
-    const l = legs.get(id) ?? [];
-    const place: Place = { mark: marks.get(id)!, run: layout.runOf.get(id)!, chainage: layout.chainage.get(id)! };
-    const here = atNode.get(id) ?? NONE;
-    const reuse = prev ? prev.reuse(id) : 'none';
-    const old = reuse === 'none' ? undefined : prev!.analysis.byNode.get(id);
-    const oldIndex = reuse === 'none' ? undefined : prev!.kept.index.get(id);
-    if (old && oldIndex !== undefined) copySums(prev!.kept.sums, oldIndex, sums, f);
-    else writeSums(sums, f, l, node.elevation, node.valve && g.kind === 'valve');
-    // A restrained length capped by the line beyond the neighbours is sized again after any edit.
-    if (reuse === 'all' && old && !old.restraint.dependsOnRoute) {
-      const moved = old.mark !== place.mark || old.run !== place.run || old.chainage !== place.chainage;
-      const reworded = !sameList(
-        old.diagnostics.filter((d) => d.subject.node === id && d.subject.field),
-        here,
-      );
-      if (!moved && !reworded) fittings[f] = old;
-      else
-        fittings[f] = {
-          ...old,
-          ...place,
-          diagnostics: reworded
-            ? fittingDiagnostics(node, l, g, old.cases, old.envelope, old.restraint, here)
-            : old.diagnostics,
-        };
-    } else {
-      fittings[f] = solveFitting(project, node, l, g, place, here, sums, f, reuse === 'sums' ? old : undefined);
-    }
+  return {
+    project,
+    legs,
+    geometry,
+    prev,
+    layout,
+    marks,
+    inputs,
+    atNode: byNode(inputs),
+    nodeById,
+    order,
+    sums: thrustSums(order.length),
+    index: new Map<string, number>(),
+    fittings: new Array<FittingAnalysis>(order.length),
+  };
+}
+
+/** Solves fitting `f` of the assembly, reusing what the analysis before computed where it may. */
+function solveAt(s: Assembly, f: number): void {
+  const { project, prev, sums, fittings } = s;
+  const id = s.order[f]!;
+  s.index.set(id, f);
+  const node = s.nodeById.get(id)!;
+  const g = s.geometry.get(id)!;
+  const l = s.legs.get(id) ?? [];
+  const place: Place = { mark: s.marks.get(id)!, run: s.layout.runOf.get(id)!, chainage: s.layout.chainage.get(id)! };
+  const here = s.atNode.get(id) ?? NONE;
+  const reuse = prev ? prev.reuse(id) : 'none';
+  const old = reuse === 'none' ? undefined : prev!.analysis.byNode.get(id);
+  const oldIndex = reuse === 'none' ? undefined : prev!.kept.index.get(id);
+  if (old && oldIndex !== undefined) copySums(prev!.kept.sums, oldIndex, sums, f);
+  else writeSums(sums, f, l, node.elevation, node.valve && g.kind === 'valve');
+  // A restrained length capped by the line beyond the neighbours is sized again after any edit.
+  if (reuse === 'all' && old && !old.restraint.dependsOnRoute) {
+    const moved = old.mark !== place.mark || old.run !== place.run || old.chainage !== place.chainage;
+    const reworded = !sameList(
+      old.diagnostics.filter((d) => d.subject.node === id && d.subject.field),
+      here,
+    );
+    if (!moved && !reworded) fittings[f] = old;
+    else
+      fittings[f] = {
+        ...old,
+        ...place,
+        diagnostics: reworded
+          ? fittingDiagnostics(node, l, g, old.cases, old.envelope, old.restraint, here)
+          : old.diagnostics,
+      };
+  } else {
+    fittings[f] = solveFitting(project, node, l, g, place, here, sums, f, reuse === 'sums' ? old : undefined);
   }
+}
+
+function finishAssembly(s: Assembly): Analysis {
+  const { project, fittings, layout } = s;
   const analysis: Analysis = {
     project,
     fittings,
     byNode: new Map(fittings.map((f) => [f.node.id, f])),
-    legs,
+    legs: s.legs,
     runs: layout.runs,
     runOf: layout.runOf,
     chainage: layout.chainage,
-    marks,
-    diagnostics: uniqueDiagnostics([...inputs, ...pipeRatingChecks(project)]),
+    marks: s.marks,
+    diagnostics: uniqueDiagnostics([...s.inputs, ...pipeRatingChecks(project)]),
   };
-  kept.set(analysis, { sums, index, geometry });
+  kept.set(analysis, { sums: s.sums, index: s.index, geometry: s.geometry });
   return analysis;
+}
+
+/**
+ * The analysis of `project` from its legs and geometry, reusing what `prev` computed where `reuse`
+ * says a fitting did not change (`'all'`: its thrust and restraint; `'sums'`: its sums only).
+ */
+function assemble(
+  project: Project,
+  legs: Map<string, Leg[]>,
+  geometry: Map<string, FittingGeometry>,
+  prev: Reuse,
+): Analysis {
+  const layout = runLayout(project, legs);
+  const s = startAssembly(project, legs, geometry, prev, layout, fittingMarks(layout, isFitting(geometry)));
+  for (let f = 0; f < s.order.length; f++) solveAt(s, f);
+  return finishAssembly(s);
 }
 
 /**
@@ -278,6 +333,31 @@ function geometryOf(project: Project, legs: ReadonlyMap<string, Leg[]>): Map<str
 export function analyseProject(project: Project): Analysis {
   const legs = legsByNode(project);
   return assemble(project, legs, geometryOf(project, legs), null);
+}
+
+/**
+ * `analyseProject` a step at a time, for a caller that must not hold the thread for long (the app
+ * opening a long route): it yields after each phase and after every `chunk` fittings, and returns the
+ * same analysis, which `analyse` then returns for this document without computing it again.
+ */
+export function* analyseInSteps(project: Project, chunk = 200): Generator<void, Analysis, void> {
+  const done = cache.get(project);
+  if (done) return done;
+  const legs = legsByNode(project);
+  yield;
+  const geometry = geometryOf(project, legs);
+  yield;
+  const layout = runLayout(project, legs);
+  yield;
+  const s = startAssembly(project, legs, geometry, null, layout, fittingMarks(layout, isFitting(geometry)));
+  yield;
+  for (let f = 0; f < s.order.length; f++) {
+    solveAt(s, f);
+    if ((f + 1) % chunk === 0) yield;
+  }
+  const analysis = finishAssembly(s);
+  cache.set(project, analysis);
+  return analysis;
 }
 
 /**
@@ -330,8 +410,6 @@ export function analyseNext(prev: Analysis | null | undefined, project: Project)
     reuse: (id) => (dirty.has(id) ? 'none' : clean),
   });
 }
-
-const cache = new WeakMap<Project, Analysis>();
 
 /**
  * `analyseProject`, memoised by document identity: an unchanged document is never recomputed. Given
