@@ -43,7 +43,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
   const e = f.envelope;
   const open = unverified(f.basis);
   const forceUnit = u === 'us' ? 'kip' : 'kN';
-  const row = scheduleView(analysis, u).rows.find((x) => x.fitting.node === f.node.id);
+  const row = scheduleView(analysis, u).rows[analysis.fittings.indexOf(f)];
   return (
     <section className="results" aria-label={`Results for ${f.mark}`} data-testid="fitting-results">
       <h3>

@@ -122,3 +122,21 @@ describe('one schedule view: the CLI table and the CSV show the same cell texts,
     });
   }
 });
+
+describe('the schedule view builds its rows when read', () => {
+  it('gives the same rows read in any order, and a concrete total equal to the sum of the concrete column (demo, SI and US)', () => {
+    for (const units of ['si', 'us'] as UnitSystem[]) {
+      const fresh = () => scheduleView(analyseProject(demo()), units);
+      const forward = fresh().rows.map((r) => ({ fitting: r.fitting, cells: r.cells, values: r.values }));
+      const backwardView = fresh();
+      const backward = [...backwardView.rows]
+        .reverse()
+        .map((r) => ({ fitting: r.fitting, cells: r.cells, values: r.values }))
+        .reverse();
+      expect(backward).toEqual(forward);
+      const sum = backwardView.rows.reduce((t, r) => t + (r.values.concrete ?? 0), 0);
+      expect(backwardView.concrete).toBeCloseTo(sum, 12);
+      expect(backwardView.concrete).toBeGreaterThan(0);
+    }
+  });
+});

@@ -195,6 +195,29 @@ function row(a: Analysis, f: FittingAnalysis, words: (d: Diagnostic) => string):
 }
 
 const schedules = new WeakMap<Analysis, Schedule>();
+const rowLists = new WeakMap<Analysis, ScheduleFitting[]>();
+
+const wordings = new WeakMap<Analysis, (d: Diagnostic) => string>();
+
+/** The SI wording of an analysis's findings, as the schedule's rows carry them. */
+function siWords(a: Analysis): (d: Diagnostic) => string {
+  let words = wordings.get(a);
+  if (!words) {
+    const context = wordingContext(a, 'si');
+    wordings.set(a, (words = (d: Diagnostic) => diagnosticText(d, context)));
+  }
+  return words;
+}
+
+/**
+ * The schedule row of `a.fittings[i]`, built when first asked for and kept: a reader of a few rows
+ * (a table showing those in view) never pays for the others.
+ */
+export function scheduleRowAt(a: Analysis, i: number): ScheduleFitting {
+  let list = rowLists.get(a);
+  if (!list) rowLists.set(a, (list = new Array<ScheduleFitting>(a.fittings.length)));
+  return (list[i] ??= row(a, a.fittings[i]!, siWords(a)));
+}
 
 /**
  * The schedule of project-format.md from an analysis: one row per fitting that needs restraint, in
@@ -205,8 +228,7 @@ const schedules = new WeakMap<Analysis, Schedule>();
 export function scheduleOf(a: Analysis): Schedule {
   let s = schedules.get(a);
   if (!s) {
-    const context = wordingContext(a, 'si');
-    const words = (d: Diagnostic) => diagnosticText(d, context);
+    const words = siWords(a);
     s = {
       project: a.project.name,
       units: 'SI',
@@ -214,7 +236,7 @@ export function scheduleOf(a: Analysis): Schedule {
       diagnostics: a.diagnostics,
       // Built when first read, and kept.
       get fittings() {
-        const rows = a.fittings.map((f) => row(a, f, words));
+        const rows = a.fittings.map((_, i) => scheduleRowAt(a, i));
         Object.defineProperty(this, 'fittings', { value: rows, enumerable: true });
         return rows;
       },

@@ -5,7 +5,8 @@ import type { UnitSystem } from '../units/conversions.js';
 import { columnNumber, columnUnit, type ColumnKind } from './columnUnits.js';
 import { SCHEDULE_COLUMNS, type CellContext } from './scheduleColumns.js';
 import { scheduleNotes, type ScheduleNote } from './scheduleNotes.js';
-import { scheduleOf, type ScheduleFitting } from './scheduleRows.js';
+import { scheduleRowAt, type ScheduleFitting } from './scheduleRows.js';
+import { restraintConcrete } from './concrete.js';
 
 export interface ViewColumn {
   id: string;
@@ -28,6 +29,8 @@ export interface ScheduleView {
   columns: ViewColumn[];
   rows: ViewRow[];
   notes: ScheduleNote[];
+  /** m³, the concrete of every row (the sum of the concrete column) */
+  concrete: number;
 }
 
 const headingOf = (heading: string, kind: ColumnKind, units: UnitSystem) =>
@@ -42,12 +45,11 @@ const views = new WeakMap<Analysis, Partial<Record<UnitSystem, ScheduleView>>>()
 export function scheduleView(a: Analysis, units: UnitSystem): ScheduleView {
   const cached = views.get(a)?.[units];
   if (cached) return cached;
-  const schedule = scheduleOf(a);
   const context = wordingContext(a, units);
   // Findings of the project as a whole come first, under no mark; a fitting's own follow.
   const rowsForNotes = [
-    { mark: '', diagnostics: schedule.diagnostics.filter((d) => !a.byNode.has(d.subject.node ?? '')) },
-    ...schedule.fittings,
+    { mark: '', diagnostics: a.diagnostics.filter((d) => !a.byNode.has(d.subject.node ?? '')) },
+    ...a.fittings,
   ];
   const { notes, byMark } = scheduleNotes(rowsForNotes, (d) => diagnosticText(d, context));
   const cellContext: CellContext = {
@@ -55,25 +57,53 @@ export function scheduleView(a: Analysis, units: UnitSystem): ScheduleView {
     units,
     notes: (f) => (byMark.get(f.mark) ?? []).join(', '),
   };
-  const rows = schedule.fittings.map((fitting): ViewRow => {
-    const cells: Record<string, string> = {};
-    const values: Record<string, number | null> = {};
-    for (const c of SCHEDULE_COLUMNS) {
-      const v = c.cell(fitting, cellContext);
-      values[c.id] = typeof v === 'number' ? v : null;
-      cells[c.id] =
-        v === null ? '' : typeof v === 'string' ? v : c.kind === 'text' ? String(v) : columnNumber(v, c.kind, units);
-    }
-    return { fitting, cells, values };
-  });
   const view: ScheduleView = {
     units,
     columns: SCHEDULE_COLUMNS.map((c) => ({ id: c.id, heading: headingOf(c.heading, c.kind, units), kind: c.kind })),
-    rows,
+    rows: a.fittings.map((_, i) => lazyRow(a, i, cellContext)),
     notes,
+    concrete: a.fittings.reduce((t, f) => t + restraintConcrete(f.restraint), 0),
   };
   views.set(a, { ...views.get(a), [units]: view });
   return view;
+}
+
+/**
+ * Row `i` of the view, its cells made when first read: a table that shows the rows in view (or a
+ * route opened at 10,000 fittings) does not word every cell of every row up front.
+ */
+function lazyRow(a: Analysis, i: number, context: CellContext): ViewRow {
+  let made: Pick<ViewRow, 'cells' | 'values'> | undefined;
+  const make = () => (made ??= rowCells(scheduleRowAt(a, i), context));
+  return {
+    get fitting() {
+      return scheduleRowAt(a, i);
+    },
+    get cells() {
+      return make().cells;
+    },
+    get values() {
+      return make().values;
+    },
+  };
+}
+
+function rowCells(fitting: ScheduleFitting, context: CellContext): Pick<ViewRow, 'cells' | 'values'> {
+  const cells: Record<string, string> = {};
+  const values: Record<string, number | null> = {};
+  for (const c of SCHEDULE_COLUMNS) {
+    const v = c.cell(fitting, context);
+    values[c.id] = typeof v === 'number' ? v : null;
+    cells[c.id] =
+      v === null
+        ? ''
+        : typeof v === 'string'
+          ? v
+          : c.kind === 'text'
+            ? String(v)
+            : columnNumber(v, c.kind, context.units);
+  }
+  return { cells, values };
 }
 
 /** The columns of a view with these ids, in the order given. */
