@@ -1,7 +1,7 @@
 import { norm } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
 import { show } from '../format/quantity.js';
-import { largestThrusts } from './routeFigures.js';
+import { largestThrusts } from '../state/routeFigures.js';
 
 /** Which case governs how many fittings, and the fittings with the largest thrust and tightest margins. */
 export function GoverningList() {

@@ -18,7 +18,7 @@ import {
 import { useState } from 'react';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
 import { planLength } from '../state/legLength.js';
-import { pipeLength } from './routeFigures.js';
+import { pipeLength } from '../state/routeFigures.js';
 import { MATERIAL_NAME } from '../plan/palette.js';
 import { show } from '../format/quantity.js';
 import { NumberField } from './NumberField.js';

@@ -1,11 +1,9 @@
-import { useMemo } from 'react';
-import { norm, restraintConcrete } from '@mainbrace/solver';
+import { norm } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
 import { show } from '../format/quantity.js';
 import { KIND_NAME } from '../format/fittingNames.js';
 import { useDiagnosticWords } from '../format/words.js';
-import { routePieces } from '../state/connectivity.js';
-import { largestThrusts, networkLength } from './routeFigures.js';
+import { routeSummary } from '../state/routeFigures.js';
 
 /** With nothing selected: the route in numbers, the largest thrusts, and how to begin. */
 export function RouteSummary() {
@@ -15,16 +13,7 @@ export function RouteSummary() {
   const project = analysis.project;
   const actions = useActions();
   const u = useApp((s) => s.units);
-  const { length, concrete, ranked, pieces, warned } = useMemo(
-    () => ({
-      length: networkLength(analysis),
-      concrete: analysis.fittings.reduce((v, f) => v + restraintConcrete(f.restraint), 0),
-      ranked: largestThrusts(analysis, 6),
-      pieces: routePieces(analysis.project).length,
-      warned: analysis.fittings.filter((f) => f.diagnostics.some((d) => d.severity !== 'info')).length,
-    }),
-    [analysis],
-  );
+  const { length, concrete, ranked, pieces, warned } = routeSummary(analysis);
   const words = useDiagnosticWords();
   return (
     <section className="inputs">

@@ -1,4 +1,4 @@
-import { useEffect, useMemo, useRef, useState } from 'react';
+import { startTransition, useEffect, useMemo, useRef, useState } from 'react';
 import { APP_COLUMNS, columnNumber, pickColumns, scheduleView, SHORT_CAUTION, type ViewRow } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
 
@@ -13,7 +13,8 @@ const OVERSCAN = 30;
  * Rows are taken as one height (measured from a rendered row).
  */
 function useRowWindow(total: number, table: React.RefObject<HTMLTableElement | null>) {
-  const [win, setWin] = useState({ first: 0, count: 2 * OVERSCAN + 40, rowPx: 24 });
+  // A first window of a few rows: the page's first layout after opening a long route stays small.
+  const [win, setWin] = useState({ first: 0, count: OVERSCAN + 10, rowPx: 24 });
   const windowed = total > WINDOW_FROM;
   useEffect(() => {
     const el = table.current;
@@ -25,9 +26,13 @@ function useRowWindow(total: number, table: React.RefObject<HTMLTableElement | n
       const top = scroller.scrollTop - el.offsetTop;
       const first = Math.max(0, Math.floor(top / rowPx) - OVERSCAN);
       const count = Math.ceil(scroller.clientHeight / rowPx) + 2 * OVERSCAN;
-      setWin((w) => (w.first === first && w.count === count && w.rowPx === rowPx ? w : { first, count, rowPx }));
+      // A transition: React renders the new rows in slices, so a 10,000-row table never holds the thread.
+      startTransition(() =>
+        setWin((w) => (w.first === first && w.count === count && w.rowPx === rowPx ? w : { first, count, rowPx })),
+      );
     };
-    update();
+    // No measuring here: reading a row's height now would lay out the page inside this task. The
+    // observer's first call comes after the browser's own layout, where the reads cost nothing.
     scroller.addEventListener('scroll', update, { passive: true });
     const ro = new ResizeObserver(update);
     ro.observe(scroller);
@@ -68,7 +73,6 @@ export function ScheduleTable() {
     const sorted = sort ? [...view.rows].sort(compare(sort.id)) : view.rows;
     return sort && !sort.up ? sorted.reverse() : sorted;
   }, [view, sort]);
-  const total = view.rows.reduce((t, r) => t + (r.values.concrete ?? 0), 0);
   const totalColumn = columns.findIndex((c) => c.id === 'concrete');
   const table = useRef<HTMLTableElement>(null);
   const shown = useRowWindow(rows.length, table);
@@ -121,7 +125,7 @@ export function ScheduleTable() {
         <tfoot>
           <tr>
             <td colSpan={totalColumn}>{view.rows.length} fittings · total concrete</td>
-            <td className="num strong">{columnNumber(total, 'volume', units)}</td>
+            <td className="num strong">{columnNumber(view.concrete, 'volume', units)}</td>
             <td colSpan={columns.length - totalColumn - 1} />
           </tr>
         </tfoot>

@@ -1,4 +1,5 @@
-import { analyse, scheduleView, type Analysis, type Project, type UnitSystem } from '@mainbrace/solver';
+import { routeSummary } from './routeFigures.js';
+import { analyse, analyseInSteps, scheduleView, type Analysis, type Project, type UnitSystem } from '@mainbrace/solver';
 
 /**
  * Fields of the document no result depends on: the file's identity, the project's name, the display
@@ -37,15 +38,32 @@ export function resultsOf(project: Project): Analysis {
 /** Lets the browser run its other tasks (input, paint) before the next step. */
 const nextTask = () => new Promise<void>((resolve) => setTimeout(resolve, 0));
 
+/** ms of work in one task before the browser gets the thread back (a long task is over 50 ms). */
+const SLICE_MS = 40;
+
 /**
- * Works out a document's results before it is shown, one step per task: the analysis, then the
- * schedule's cells (both memoised), so that the document's first render only reads them. Opening a
- * 10,000-node route otherwise ran parse, analysis, schedule and drawing as one task of seconds.
+ * Works out a document's results before it is shown, in tasks of about SLICE_MS: the analysis a step
+ * at a time, then the schedule's view (both memoised), so that the document's first render only reads
+ * them. Opening a 10,000-node route otherwise ran the analysis as one task of a third of a second.
  */
 export async function prepareResults(project: Project, units: UnitSystem): Promise<void> {
   await nextTask();
-  const a = resultsOf(project);
+  if (!(last && sameResultInputs(last.project, project))) {
+    const steps = analyseInSteps(project);
+    let start = performance.now();
+    let step = steps.next();
+    while (!step.done) {
+      if (performance.now() - start > SLICE_MS) {
+        await nextTask();
+        start = performance.now();
+      }
+      step = steps.next();
+    }
+    last = step.value;
+  }
   await nextTask();
-  scheduleView(a, units);
+  scheduleView(last, units);
+  await nextTask();
+  routeSummary(last);
   await nextTask();
 }

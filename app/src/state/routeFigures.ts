@@ -1,0 +1,61 @@
+import { norm, restraintConcrete, type Analysis, type FittingAnalysis } from '@mainbrace/solver';
+import { routePieces } from './connectivity.js';
+
+/** The fittings with the largest governing thrust, largest first. */
+export function largestThrusts(analysis: Analysis, count: number): FittingAnalysis[] {
+  // One pass keeping the `count` largest (a 10,000-fitting route is not sorted for six of them).
+  const top: { f: FittingAnalysis; force: number }[] = [];
+  if (count <= 0) return [];
+  for (const f of analysis.fittings) {
+    const force = norm(f.envelope.governing.total);
+    if (top.length === count && force <= top[count - 1]!.force) continue;
+    let i = top.length;
+    while (i > 0 && top[i - 1]!.force < force) i--;
+    top.splice(i, 0, { f, force });
+    if (top.length > count) top.pop();
+  }
+  return top.map((t) => t.f);
+}
+
+/** Length of one pipe, m, node to node in 3-D, as the analysis measured it. */
+export const pipeLength = (analysis: Analysis, pipe: { id: string; from: string }): number =>
+  analysis.legs.get(pipe.from)?.find((l) => l.pipe.id === pipe.id)?.length ?? 0;
+
+/** Length of the whole network, m: every pipe once (each appears as two legs). */
+export function networkLength(analysis: Analysis): number {
+  let sum = 0;
+  for (const legs of analysis.legs.values()) for (const l of legs) sum += l.length;
+  return sum / 2;
+}
+
+/** The route in numbers, as the summary panel shows it with nothing selected. */
+export interface RouteSummaryFigures {
+  /** m, every pipe once */
+  length: number;
+  /** m³, every block and anchor */
+  concrete: number;
+  /** the six fittings with the largest governing thrust, largest first */
+  ranked: FittingAnalysis[];
+  /** pieces of the network that are not joined to each other */
+  pieces: number;
+  /** fittings with a finding above information */
+  warned: number;
+}
+
+const summaries = new WeakMap<Analysis, RouteSummaryFigures>();
+
+/** The summary figures of an analysis, worked out once (opening a long route does it before the first render). */
+export function routeSummary(analysis: Analysis): RouteSummaryFigures {
+  let s = summaries.get(analysis);
+  if (!s) {
+    s = {
+      length: networkLength(analysis),
+      concrete: analysis.fittings.reduce((v, f) => v + restraintConcrete(f.restraint), 0),
+      ranked: largestThrusts(analysis, 6),
+      pieces: routePieces(analysis.project).length,
+      warned: analysis.fittings.filter((f) => f.diagnostics.some((d) => d.severity !== 'info')).length,
+    };
+    summaries.set(analysis, s);
+  }
+  return s;
+}
