@@ -25,8 +25,11 @@ const BUDGET = {
   demoDrawnMs: 1000,
   /** ms, the longest main-thread task while a 10,000-node route opens (issue 17 item 11) */
   openLongestTaskMs: 200,
-  /** ms, the longest main-thread task per keystroke in the project name on that route (issue 17 item 11) */
-  renameLongestTaskMs: 50,
+  /**
+   * ms, the longest main-thread task per keystroke in the project name on that route: issue 17 item 11
+   * asks for no task over 200 ms on such a route (the name no longer re-runs the analysis)
+   */
+  renameLongestTaskMs: 200,
   /** ms, the longest main-thread task while the print of that route is prepared (issue 17 item 11) */
   printLongestTaskMs: 200,
   /** ms, 95th percentile frame interval while dragging a node or the test-pressure slider at 1,000
@@ -366,15 +369,23 @@ try {
     await page.context().close();
   }
   if (wanted('10000') || wanted('open') || wanted('rename') || wanted('print')) {
-    const page = await freshPage(browser);
-    const { longest, drawnMs } = await openRoute(page, 10_000);
+    // The longest task of one opening varies by tens of ms (when the collector runs, how warm the code
+    // is): the figure is the median of OPENS openings, each in a fresh page; the last page goes on.
+    const OPENS = 3;
+    const opens: { longest: number; drawnMs: number }[] = [];
+    let page!: Page;
+    for (let i = 0; i < OPENS; i++) {
+      if (page) await page.context().close();
+      page = await freshPage(browser);
+      opens.push(await openRoute(page, 10_000));
+    }
     const fittings = await page.evaluate(() => (window as unknown as Hook).__mainbrace.counts().fittings);
     report(
       `10000 open: longest main-thread task opening a 10,000-node route (${fittings} fittings)`,
-      longest,
+      median(opens.map((o) => o.longest)),
       BUDGET.openLongestTaskMs,
       'ms',
-      `results drawn ${drawnMs} ms after the file was chosen`,
+      `median of ${OPENS} fresh pages (${opens.map((o) => o.longest).join(' ')}); results drawn ${median(opens.map((o) => o.drawnMs))} ms after the file was chosen`,
     );
     if (wanted('rename') || wanted('10000')) {
       report(
