@@ -1,5 +1,13 @@
 import { startTransition, useEffect, useMemo, useRef, useState } from 'react';
-import { APP_COLUMNS, columnNumber, pickColumns, scheduleView, SHORT_CAUTION, type ViewRow } from '@mainbrace/solver';
+import {
+  APP_COLUMNS,
+  columnNumber,
+  pickColumns,
+  positionColumns,
+  scheduleView,
+  SHORT_CAUTION,
+  type ViewRow,
+} from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
 
 /** A table longer than this renders only the rows in view (and a margin), with spacers for the rest. */
@@ -68,7 +76,12 @@ export function ScheduleTable() {
   const actions = useActions();
   const [sort, setSort] = useState<{ id: string; up: boolean } | null>(null);
   const view = useMemo(() => scheduleView(analysis, units), [analysis, units]);
-  const columns = pickColumns(view, APP_COLUMNS);
+  // Chainage, stations or both, as the project's sheet setting says (the print and the CLI table do the same).
+  const style = useApp((s) => s.project.sheet?.chainageStyle);
+  const columns = pickColumns(
+    view,
+    APP_COLUMNS.flatMap((id) => (id === 'chainage' ? positionColumns(style) : [id])),
+  );
   const rows = useMemo(() => {
     const sorted = sort ? [...view.rows].sort(compare(sort.id)) : view.rows;
     return sort && !sort.up ? sorted.reverse() : sorted;

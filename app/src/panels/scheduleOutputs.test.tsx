@@ -72,3 +72,26 @@ describe('the four schedule outputs agree cell for cell (app table, print, CLI t
     });
   }
 });
+
+describe('positions along the route follow the sheet setting in the app table as on the print', () => {
+  it('shows stations (100 ft a station in US units) in place of chainage, and both when asked', () => {
+    for (const [style, expected] of [
+      ['stations', ['Station']],
+      ['both', ['Chainage (ft)', 'Station']],
+    ] as const) {
+      const project: Project = { ...demo(), units: 'us', sheet: { ...demo().sheet!, chainageStyle: style } };
+      const store = createAppStore(project, DN300);
+      const { container } = render(
+        <StoreProvider store={store} actions={createActions(store)}>
+          <ScheduleTable />
+        </StoreProvider>,
+      );
+      const heads = [...container.querySelectorAll('thead th')].map((th) => th.textContent!.replace(/ [▲▼]$/, ''));
+      expect(heads.slice(1, 1 + expected.length)).toEqual(expected);
+      // The demo's A2 stands 120.0 m along run A: 393.7 ft, station 3+93.7 (hand conversion, 1 ft = 0.3048 m).
+      const a2 = [...container.querySelectorAll('tbody tr')].find((tr) => tr.textContent!.startsWith('A2'))!;
+      expect(a2.textContent).toContain('3+93.7');
+      cleanup();
+    }
+  });
+});
