@@ -66,4 +66,25 @@ describe('a CSV survey', () => {
     expect(c.ok).toBe(false);
     expect(c.notes.map(noteText).join('\n')).toMatch(/no column "Height" for the level/);
   });
+
+  it('refuses coordinates and levels outside the project limits, naming the row and the column', () => {
+    // limits.md: a plan coordinate within ±20,000 km, an elevation within ±10,000 m. A survey value
+    // past them is a slip (a column in millimetres, an exponent typo), refused where the file has it
+    // rather than as a field of the project the import would have made.
+    const far = SURVEY.replace('1060.000,5045.000,51.35', '30000000,5045.000,51.35');
+    const r = importCsv(far, MAPPING, 'm');
+    expect(r.ok).toBe(false);
+    const text = r.notes.map(noteText).join('\n');
+    expect(text).toMatch(/^error: row 4, column "East \(m\)": 30000000 m is outside .*plan coordinate/m);
+    expect(text).not.toMatch(/nodes\[/);
+    const high = SURVEY.replace('51.35', '1e308');
+    const h = importCsv(high, MAPPING, 'm');
+    expect(h.ok).toBe(false);
+    const hText = h.notes.map(noteText).join('\n');
+    expect(hText).toMatch(/^error: row 4, column "RL ground": 1e\+308 m is outside .*elevation/m);
+    expect(hText).not.toMatch(/loadCases|Infinity/);
+    // in feet the limit is on the metres: 70,000,000 ft = 21,336 km
+    const ft = importCsv('E,N\n0,0\n70000000,0\n', { easting: 'E', northing: 'N' }, 'ft');
+    expect(ft.ok).toBe(false);
+  });
 });
