@@ -87,4 +87,25 @@ describe('a CSV survey', () => {
     const ft = importCsv('E,N\n0,0\n70000000,0\n', { easting: 'E', northing: 'N' }, 'ft');
     expect(ft.ok).toBe(false);
   });
+
+  it('joins a tee and reports a crossing in the middle of a 42 km diagonal leg', () => {
+    // Hand geometry: run A goes (0,0) → (30000,30000), on the line y = x; run B starts at
+    // (15000,15000), on that line, so it is a tee there; run C from (20000,20100) to (20100,20000)
+    // lies on x + y = 40100 and crosses A at (20050,20050) without a point of its own.
+    const csv = [
+      'E,N,run',
+      '0,0,A',
+      '30000,30000,A',
+      '30000,30100,A',
+      '15000,15000,B',
+      '15000,14900,B',
+      '20000,20100,C',
+      '20100,20000,C',
+    ].join('\n');
+    const r = importCsv(csv, { easting: 'E', northing: 'N', run: 'run' }, 'm');
+    if (!r.ok) throw new Error(r.notes.map(noteText).join('\n'));
+    const tee = r.project.nodes.find((n) => n.x === 15000 && n.y === 15000)!;
+    expect(r.project.pipes.filter((p) => p.from === tee.id || p.to === tee.id)).toHaveLength(3);
+    expect(r.notes.map(noteText).join('\n')).toMatch(/cross at \(20050(\.0+)?, 20050(\.0+)?\)/);
+  });
 });
