@@ -129,7 +129,10 @@ export function surveyLines(
     if (x === null || y === null) return;
     const run = ir === null ? '' : (row[ir] ?? '').trim();
     const where = `row ${rowNo} (${(x / scale).toString()}, ${(y / scale).toString()})`;
-    runs.set(run, [...(runs.get(run) ?? []), { x, y, level, where }]);
+    // pushed, not copied: a copy per row made a long survey quadratic
+    const list = runs.get(run);
+    if (list) list.push({ x, y, level, where });
+    else runs.set(run, [{ x, y, level, where }]);
   });
   if (notes.length) return { ok: false, notes };
   if (il !== null) {

@@ -328,17 +328,25 @@ function apartNotes(
   vertices: Vertex[],
 ): ImportNote[] {
   const parent = new Map(nodes.map((n) => [n.id, n.id]));
+  // Union–find with the whole path compressed (Tarjan 1975): compressing only the first node left a
+  // route's chain of parents for every later find to walk, and a long route quadratic.
   const find = (a: string): string => {
     let r = a;
     while (parent.get(r) !== r) r = parent.get(r)!;
-    parent.set(a, r);
+    for (let x = a; x !== r;) {
+      const next = parent.get(x)!;
+      parent.set(x, r);
+      x = next;
+    }
     return r;
   };
   for (const p of pipes) parent.set(find(p.from), find(p.to));
   const groups = new Map<string, string[]>();
   for (const n of nodes) {
     const r = find(n.id);
-    groups.set(r, [...(groups.get(r) ?? []), n.id]);
+    const list = groups.get(r);
+    if (list) list.push(n.id);
+    else groups.set(r, [n.id]);
   }
   if (groups.size < 2) return [];
   const sorted = [...groups.values()].sort((a, b) => b.length - a.length);
