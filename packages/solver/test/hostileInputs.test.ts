@@ -150,3 +150,17 @@ describe('within the hard limits every result is a finite number (fast-check, fi
     );
   });
 });
+
+describe('file-sized lists never overflow the call stack', () => {
+  it('schedules a file with 150,000 load cases (about 6 MB, under the 20 MB limit)', () => {
+    // Invariant: a valid file gives a schedule or a diagnostic, never an exception. Spreading a
+    // list this long into one call (Math.max(...list)) throws RangeError in V8.
+    const f = file();
+    f.loadCases = Array.from({ length: 150_000 }, (_, i) => ({ id: `c${i}`, pressure: 1e6, flowFactor: 1 }));
+    const r = parseProject(f);
+    expect(r.ok).toBe(true);
+    if (!r.ok) return;
+    const s = scheduleOf(analyseProject(r.project));
+    expect(s.fittings).toHaveLength(3);
+  }, 60_000);
+});

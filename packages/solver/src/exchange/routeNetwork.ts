@@ -284,9 +284,12 @@ export function buildNetwork(lines: readonly RouteLine[], options: NetworkOption
     p.to = nodeId.get(Number(p.to.slice(1)))!;
   }
 
-  notes.push(...apartNotes(nodes, pipes, chains, nodeId, vertices));
-  notes.push(...crossingNotes(chains, segmentGrid(chains, vertices, tol), vertices, tol));
-  return { nodes, pipes, notes };
+  // concatenated, not spread into push: a hostile file can hold more notes than a call takes arguments
+  const all = notes.concat(
+    apartNotes(nodes, pipes, chains, nodeId, vertices),
+    crossingNotes(chains, segmentGrid(chains, vertices, tol), vertices, tol),
+  );
+  return { nodes, pipes, notes: all };
 }
 
 interface SegmentGrid {

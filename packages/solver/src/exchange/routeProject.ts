@@ -73,7 +73,7 @@ function assemble(
   georeference: Project['georeference'],
 ): ImportResult {
   const net = buildNetwork(lines, networkOptions(o));
-  notes.push(...net.notes);
+  for (const n of net.notes) notes.push(n); // no spread: a long survey has more notes than a call takes
   if (net.pipes.length === 0) {
     notes.push({
       level: 'error',
@@ -85,7 +85,7 @@ function assemble(
   const { georeference: _g, ...rest } = base;
   let loadCases = rest.loadCases;
   if ((o.caseDatum ?? 'high-point') === 'high-point') {
-    const high = Math.max(...net.nodes.map((n) => n.elevation));
+    const high = net.nodes.reduce((h, n) => Math.max(h, n.elevation), -Infinity);
     loadCases = loadCases.map((c) => (c.datumElevation === undefined ? c : { ...c, datumElevation: high }));
     notes.push({
       level: 'note',
