@@ -176,4 +176,17 @@ describe('the command line', () => {
     expect(run('draw').status).toBe(2);
     expect(run('schedule', demo, '--format', 'pdf').stderr).toMatch(/--format: expected json, csv or table/);
   });
+
+  it('ends quietly with its own status when the reader closes the pipe early (`| head -1`)', async () => {
+    // POSIX write(2): writing to a pipe with no reader fails with EPIPE; that is the reader's choice,
+    // not a fault of ours, so no stack trace and not exit 1.
+    const { spawn } = await import('node:child_process');
+    const child = spawn(process.execPath, [bin, 'schedule', demo, '--format', 'json', '--full', '--pretty']);
+    child.stdout.destroy();
+    let stderr = '';
+    child.stderr.on('data', (d: Buffer) => (stderr += d.toString()));
+    const status = await new Promise<number | null>((done) => child.on('close', (code) => done(code)));
+    expect(stderr).toBe('');
+    expect(status).toBe(0);
+  });
 });

@@ -7,10 +7,17 @@ import { runExchange } from './exchange.js';
 const base = process.env.INIT_CWD ?? process.cwd();
 
 const argv = process.argv.slice(2);
+// A reader that closes early (`mainbrace schedule f | head -1`) makes writes fail with EPIPE: stop
+// writing and end with the command's own status, without a stack trace.
+let readerGone = false;
+process.stdout.on('error', (e: NodeJS.ErrnoException) => {
+  if (e.code !== 'EPIPE') throw e;
+  readerGone = true;
+});
 const io = {
   interactive: process.stdout.isTTY === true,
   readFile: (path: string, maxBytes: number) => readLimited(resolve(base, path), maxBytes),
-  out: (text: string) => void process.stdout.write(text),
+  out: (text: string) => void (readerGone || process.stdout.write(text)),
   err: (text: string) => void process.stderr.write(text),
 };
 // Import and export load the CSV and projection libraries; the rest may load the schema library.
