@@ -123,4 +123,18 @@ describe('mainbrace import and export', () => {
     if (!parsed.ok) throw new Error('not a valid project');
     expect(parsed.project.pipes[0]!.label).toBe('run "\u202eB\u009b2K"');
   });
+
+  it('takes --max-size as the other commands do, for import and export alike', async () => {
+    // usage.ts: "Options for every command reading FILE: --max-size MB".
+    const csv = join(dir, 'small.csv');
+    writeFileSync(csv, 'E,N\n0,0\n40,0\n40,30\n');
+    const tight = await cli('import', csv, '--max-size', '0.00001');
+    expect(tight.status).toBe(2);
+    expect(tight.stderr).toMatch(/larger than 0\.0 MB; raise the limit with --max-size/);
+    expect((await cli('export', csv, '--max-size', '0.00001')).status).toBe(2);
+    const bad = await cli('import', csv, '--max-size', 'lots');
+    expect(bad.status).toBe(2);
+    expect(bad.stderr).toMatch(/^--max-size: expected a size in megabytes/);
+    expect((await cli('import', csv, '--max-size', '1')).status).toBe(0);
+  });
 });

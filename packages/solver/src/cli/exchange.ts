@@ -1,7 +1,6 @@
 import { parseArgs } from './args.js';
 import { USAGE } from './usage.js';
-import type { CliIo } from './run.js';
-import { DEFAULT_MAX_BYTES } from './readLimited.js';
+import { maxBytesOption, type CliIo } from './run.js';
 import { escapeControls, terminalSafe } from './terminalText.js';
 import { parseProjectText } from '../model/parseProject.js';
 import { problemText } from '../model/problems.js';
@@ -9,18 +8,18 @@ import { problemText } from '../model/problems.js';
 class UsageError extends Error {}
 
 /** Reads a file as UTF-8 text, or says why it cannot (the same limits as the other commands). */
-function readText(io: CliIo, path: string | undefined): string {
+function readText(io: CliIo, path: string | undefined, maxBytes: number): string {
   if (!path) throw new UsageError('missing FILE: give the path of the file');
   let bytes: Uint8Array;
   try {
-    bytes = io.readFile(path, DEFAULT_MAX_BYTES);
+    bytes = io.readFile(path, maxBytes);
   } catch (e) {
     const { code } = e as { code?: string };
     const why =
       code === 'ENOENT'
         ? 'no such file'
         : code === 'ETOOLARGE'
-          ? 'larger than 20 MB'
+          ? `larger than ${(maxBytes / 1048576).toFixed(1)} MB; raise the limit with --max-size MB`
           : code === 'EISDIR'
             ? 'it is a folder'
             : (e as Error).message;
@@ -75,9 +74,15 @@ export async function runExchange(argv: readonly string[], rawIo: CliIo): Promis
     const path = args.positional[0];
     const o = args.options;
     const pretty = io.interactive === true || o.has('pretty');
+    let maxBytes: number;
+    try {
+      maxBytes = maxBytesOption(o.get('max-size'));
+    } catch (e) {
+      throw new UsageError((e as Error).message);
+    }
     if (args.command === 'export') {
       const format = oneOf(o, 'format', ['geojson'] as const) ?? 'geojson';
-      const parsed = parseProjectText(readText(io, path));
+      const parsed = parseProjectText(readText(io, path, maxBytes));
       if (!parsed.ok) {
         io.err(parsed.problems.map((p) => escapeControls(problemText(p))).join('\n') + '\n');
         return 2;
@@ -90,7 +95,7 @@ export async function runExchange(argv: readonly string[], rawIo: CliIo): Promis
       io.out(e.text);
       return 0;
     }
-    const text = readText(io, path);
+    const text = readText(io, path, maxBytes);
     const byName = /\.csv$|\.txt$/i.test(path!) ? 'csv' : 'geojson';
     const format = oneOf(o, 'format', ['geojson', 'csv'] as const) ?? byName;
     const unit = oneOf(o, 'unit', ['m', 'ft', 'us-ft'] as const) ?? 'm';

@@ -43,7 +43,7 @@ const escapeRow = (r: TakeOffRow): TakeOffRow => ({
 });
 
 /** `--max-size 50` (megabytes, as the app counts them) → bytes; the app's 20 MB when not given. */
-function maxBytesOption(value: string | undefined): number {
+export function maxBytesOption(value: string | undefined): number {
   if (value === undefined) return DEFAULT_MAX_BYTES;
   const m = /^\s*(\d+(?:\.\d+)?)\s*(?:MB)?\s*$/i.exec(value);
   const mb = m ? Number(m[1]) : NaN;
