@@ -41,7 +41,7 @@ describe('the command line reads files with limits', () => {
 
   it('applies the size limit to every command that reads a file, and --max-size changes it', async () => {
     const path = fileOf('demo.json', readFileSync(demoPath));
-    for (const argv of [['validate'], ['schedule'], ['explain', '--format', 'json'], ['explain']]) {
+    for (const argv of [['validate'], ['schedule'], ['quantities', '--format', 'json'], ['explain']]) {
       const [command, ...rest] = argv;
       const r = await cli(command!, path, ...(command === 'explain' ? ['n4'] : rest), '--max-size', '0.001');
       expect(r.status).toBe(2);
@@ -195,5 +195,24 @@ describe('the command line quantities and stations', () => {
     expect(r.stdout).not.toMatch(/Chainage \(ft\)/);
     // A2 lies 393.7 ft along the main (the schedule's chainage): station 3+93.7.
     expect(r.stdout).toMatch(/A2\s+3\+93\.7/);
+  });
+
+  it('refuses an option the command does not take, or an argument too many, with exit 2', async () => {
+    // usage.ts lists each command's options: a mistyped `--unit us` must not give SI figures silently.
+    const path = fileOf('demo.json', readFileSync(demoPath));
+    for (const argv of [
+      ['schedule', path, '--unit', 'us'],
+      ['quantities', path, '--full'],
+      ['explain', path, 'n4', '--format', 'json'],
+      ['validate', path, '--units', 'si'],
+      ['schedule', path, 'other.json'],
+      ['explain', path, 'n4', 'n5'],
+    ]) {
+      const r = await cli(...argv);
+      expect(r.status).toBe(2);
+      expect(r.stdout).toBe('');
+      expect(r.stderr).toMatch(/^(--\S+: not an option of \w+|unexpected argument ")/);
+    }
+    expect((await cli('schedule', path, '--units', 'us', '--format', 'json', '--full', '--pretty')).status).toBe(0);
   });
 });

@@ -96,6 +96,31 @@ async function load(io: CliIo, path: string | undefined, maxBytes: number): Prom
   return result.ok ? result.project : result.problems.map((p) => escapeControls(problemText(p)));
 }
 
+/** The options and the number of arguments each command takes (usage.ts). */
+const ACCEPTS: Record<string, { options: readonly string[]; positional: number }> = {
+  schedule: { options: ['format', 'units', 'pretty', 'full', 'max-size'], positional: 1 },
+  quantities: { options: ['format', 'units', 'pretty', 'max-size'], positional: 1 },
+  explain: { options: ['units', 'max-size'], positional: 2 },
+  validate: { options: ['max-size'], positional: 1 },
+};
+
+/**
+ * An option a command does not take, or an argument too many, is refused rather than ignored: a
+ * mistyped `--unit us` would otherwise give SI figures without a word.
+ */
+function checkArguments(command: string, options: Map<string, string>, positional: readonly string[]): void {
+  const accepts = ACCEPTS[command]!;
+  for (const name of options.keys())
+    if (!accepts.options.includes(name))
+      throw new UsageError(
+        `--${escapeControls(name)}: not an option of ${command} (it takes ${accepts.options.map((o) => `--${o}`).join(', ')})`,
+      );
+  if (positional.length > accepts.positional)
+    throw new UsageError(
+      `unexpected argument "${escapeControls(positional[accepts.positional]!)}" after the ${command} command's ${accepts.positional === 1 ? 'FILE' : 'FILE and MARK'}`,
+    );
+}
+
 function unitsOption(value: string | undefined, project: Project): UnitSystem {
   if (value === undefined) return project.units;
   if (value === 'us' || value === 'si') return value;
@@ -128,6 +153,7 @@ export async function runCli(argv: readonly string[], rawIo: CliIo): Promise<num
         `unknown command "${escapeControls(args.command)}": expected schedule, quantities, explain, validate, schema, import or export`,
       );
     }
+    checkArguments(args.command, args.options, args.positional);
     const loaded = await load(io, args.positional[0], maxBytesOption(args.options.get('max-size')));
     if (Array.isArray(loaded)) {
       io.err(loaded.join('\n') + '\n');
