@@ -91,6 +91,29 @@ describe('unit slips and impossible values are refused naming the field, or warn
   });
 });
 
+describe('groundwater far above the ground', () => {
+  // Hand figures: file() puts every pipe at 100 m with the default 1.2 m cover on a 0.326 m OD, so the
+  // ground stands at 100 + 0.163 + 1.2 = 101.363 m at every node.
+  const withGroundwater = (gw: number) => {
+    const f = file();
+    f.design = { groundwaterElevation: gw };
+    const r = parseProject(f);
+    if (!r.ok) throw new Error('refused');
+    return scheduleOf(analyseProject(r.project));
+  };
+  it('warns, naming the field, of groundwater 9,900 m above the whole route (a level in another unit)', () => {
+    const s = withGroundwater(10000);
+    const d = s.diagnostics.find((x) => x.code === 'input.groundwater-above-ground');
+    expect(d?.subject.field).toBe('design.groundwaterElevation');
+    expect(d?.values.highestGround).toBeCloseTo(101.363, 9);
+    expect(s.warnings.join(' ')).toMatch(/groundwater level 10,?000(\.0+)? m is above the ground/);
+  });
+  it('says nothing of groundwater at or below the highest ground', () => {
+    for (const gw of [101.363, 100.5, 90])
+      expect(withGroundwater(gw).diagnostics.some((x) => x.code === 'input.groundwater-above-ground')).toBe(false);
+  });
+});
+
 describe('degenerate geometry is refused rather than given results that depend on file order', () => {
   it('refuses a pipe folded back over the one before it', () => {
     const f = file();

@@ -220,6 +220,13 @@ export const DIAGNOSTIC_CODES = {
       'A depth of cover lies outside the usual range (0.3 m to 6 m): often a unit slip, such as millimetres typed as metres.',
     action: 'Check the cover and its unit.',
   },
+  'input.groundwater-above-ground': {
+    severity: 'warning',
+    values: { groundwater: 'elevation', highestGround: 'elevation' },
+    meaning:
+      'The groundwater level stands above the ground at every node of the route: possible on a flooded or river site, but more often a unit slip or a level on another datum.',
+    action: 'Check the groundwater level, its unit and its datum.',
+  },
   'input.velocity-unusual': {
     severity: 'warning',
     values: { value: 'velocity', low: 'velocity', high: 'velocity' },

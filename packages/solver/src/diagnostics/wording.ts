@@ -99,6 +99,8 @@ const WORDS: Record<DiagnosticCode, Words> = {
   'input.pressure-unusual': outside('the pressure'),
   'input.cover-unusual': outside('the cover'),
   'input.velocity-unusual': outside('the flow velocity'),
+  'input.groundwater-above-ground': (v) =>
+    `The design settings: the groundwater level ${v.groundwater} is above the ground at every node (the highest ground is ${v.highestGround}); check the value, its unit and its datum (a unit slip?).`,
   'input.diameter-unusual': outside('the outside diameter'),
   'input.density-unusual': outside('the density'),
   'input.unit-weight-unusual': outside('the unit weight'),

@@ -2,7 +2,7 @@ import type { Diagnostic, DiagnosticCode, Subject } from '../diagnostics/diagnos
 import { diagnostic } from '../diagnostics/diagnostic.js';
 import { LIMITS, unusual, type Limit, type LimitId } from './limits.js';
 import type { Project } from './projectSchema.js';
-import { nodeCover, nodeOutsideDiameters } from './groundLevel.js';
+import { nodeCover, nodeGround, nodeOutsideDiameters } from './groundLevel.js';
 
 const CODE: Partial<Record<LimitId, DiagnosticCode>> = {
   pressure: 'input.pressure-unusual',
@@ -55,6 +55,20 @@ export function implausibleInputs(p: Project): Diagnostic[] {
       field: `nodes[${i}].${n.groundLevel === undefined ? 'cover' : 'groundLevel'}`,
     }),
   );
+  // Groundwater above the ground everywhere: no usual range fits every site, but above the whole
+  // route it is more often an elevation typed in another unit or datum than a flooded site.
+  if (d.groundwaterElevation !== null && p.nodes.length > 0) {
+    let highestGround = -Infinity;
+    for (const n of p.nodes) highestGround = Math.max(highestGround, nodeGround(n, od.get(n.id) ?? 0));
+    if (d.groundwaterElevation > highestGround)
+      out.push(
+        diagnostic(
+          'input.groundwater-above-ground',
+          { field: 'design.groundwaterElevation' },
+          { groundwater: d.groundwaterElevation, highestGround },
+        ),
+      );
+  }
   // a loop, not Math.max(...cases): spread into a call, some 125,000 cases overflow the stack
   let factor = 0;
   for (const c of p.loadCases) factor = Math.max(factor, Math.abs(c.flowFactor));
