@@ -215,4 +215,32 @@ describe('the command line quantities and stations', () => {
     }
     expect((await cli('schedule', path, '--units', 'us', '--format', 'json', '--full', '--pretty')).status).toBe(0);
   });
+
+  it('refuses to explain an id that is one fitting’s mark and another’s node id', async () => {
+    // Invariant: explain never shows a fitting other than the one named without saying so. Node ids
+    // are free text; marks run A1, A2, ... along the run, so node "A1" here is marked A2.
+    const p = {
+      format: 'mainbrace-project',
+      version: 1,
+      loadCases: [{ id: 'w', pressure: 1e6 }],
+      soils: [{ id: 's', bearing: 150e3 }],
+      nodes: [
+        { id: 'start', x: 0, y: 0, elevation: 100 },
+        { id: 'A1', x: 30, y: 0, elevation: 100 },
+        { id: 'end', x: 30, y: 30, elevation: 100 },
+      ],
+      pipes: [
+        { id: 'p1', from: 'start', to: 'A1', outsideDiameter: 0.326, insideDiameter: 0.3 },
+        { id: 'p2', from: 'A1', to: 'end', outsideDiameter: 0.326, insideDiameter: 0.3 },
+      ],
+    };
+    const path = fileOf('marks.json', JSON.stringify(p));
+    const r = await cli('explain', path, 'A1');
+    expect(r.status).toBe(2);
+    expect(r.stdout).toBe('');
+    expect(r.stderr).toMatch(
+      /"A1" is both the mark of one fitting \(node "start"\) and the id of another node \(marked A2\)/,
+    );
+    expect((await cli('explain', path, 'A2')).stdout).toMatch(/^A2 — Bend 90° \(node A1, run A\)/);
+  });
 });

@@ -177,7 +177,16 @@ export async function runCli(argv: readonly string[], rawIo: CliIo): Promise<num
     if (args.command === 'explain') {
       const id = args.positional[1];
       if (!id) throw new UsageError('missing MARK: give the fitting’s mark (A4) or its node id');
-      const fitting = analysis.fittings.find((f) => f.mark === id) ?? analysis.byNode.get(id);
+      const byMark = analysis.fittings.find((f) => f.mark === id);
+      const byNode = analysis.byNode.get(id);
+      if (byMark && byNode && byMark !== byNode) {
+        // Node ids are free text, so "A2" may be one fitting's mark and another's node id.
+        io.err(
+          `"${escapeControls(id)}" is both the mark of one fitting (node "${escapeControls(byMark.node.id)}") and the id of another node (marked ${escapeControls(byNode.mark)}): rename that node so that no node id reads as a mark\n`,
+        );
+        return 2;
+      }
+      const fitting = byMark ?? byNode;
       if (!fitting) {
         const known = project.nodes.some((n) => n.id === id) || [...analysis.marks.values()].includes(id);
         io.err(
