@@ -3,6 +3,7 @@ import { show } from '../format/quantity.js';
 import { gridSpacing } from '../state/viewport.js';
 import type { ProfileData, ProfilePoint } from './profileData.js';
 import { sectionWindow } from './sectionScale.js';
+import { extentOf } from '../format/extent.js';
 
 export const SECTION_W = 980;
 export const SECTION_M = { left: 70, right: 190, top: 14, bottom: 22 };
@@ -46,8 +47,7 @@ export function LongSection({
   const sx = (c: number) => M.left + (c - x0) * hScale;
   const all = [data.points, ...data.branches.map((b) => b.points)].flat();
   const levels = all.flatMap((p) => [p.pipe, p.ground]);
-  const lo = Math.min(...levels);
-  const hi = Math.max(...levels);
+  const [lo, hi] = extentOf(levels);
   // Groundwater is drawn where it lies near the section; far below or above, it is stated instead.
   const gw = data.groundwater;
   const gwDrawn = gw !== null && gw >= lo - (hi - lo + 1) && gw <= hi + (hi - lo + 1);

@@ -6,6 +6,7 @@ import { show } from '../format/quantity.js';
 import { gridSpacing } from '../state/viewport.js';
 import { profileData } from './profileData.js';
 import { LongSection, SECTION_M as M, SECTION_W as W, sectionExtent, ticks } from './LongSection.js';
+import { extentOf } from '../format/extent.js';
 
 const CASE_STYLES = [
   { stroke: '#1d6fb8', dash: '' },
@@ -50,8 +51,9 @@ export function ProfilePanel() {
   // Pressure along the line, every case.
   const H2 = 150;
   const all = data.pressures.flatMap((c) => c.values);
-  const p0 = Math.min(0, ...all),
-    p1 = Math.max(...all) * 1.08 || 1;
+  const [low, high] = extentOf(all);
+  const p0 = Math.min(0, low),
+    p1 = high * 1.08 || 1;
   const sp = (p: number) => H2 - M.bottom - ((p - p0) / (p1 - p0)) * (H2 - M.top - M.bottom);
   const pressureUnit = u === 'us' ? PSI : 1000;
   const pStep = gridSpacing((H2 - M.top - M.bottom) / ((p1 - p0) / pressureUnit), 28) * pressureUnit;

@@ -19,4 +19,13 @@ describe('the long section’s vertical exaggeration', () => {
     const vScale = 150 / (w.z1 - w.z0);
     expect(vScale / 0.8).toBeCloseTo(10, 9);
   });
+
+  it('fits the levels of a run of 100,000 nodes (200,000 levels) without overflowing the stack', () => {
+    // Invariant: the window holds every level. Math.min(...levels) threw RangeError past ~125,000.
+    const zs = Array.from({ length: 200_000 }, (_, i) => 90 + (i % 1000) / 50);
+    zs[123_456] = 80;
+    const w = sectionWindow(zs, 150, 0.01);
+    expect(w.z0).toBeLessThanOrEqual(80);
+    expect(w.z1).toBeGreaterThanOrEqual(109.98);
+  });
 });

@@ -1,3 +1,5 @@
+import { extentOf } from '../format/extent.js';
+
 /**
  * Vertical exaggerations a long section is drawn at: round numbers, so the sheet can state one
  * ("vertical scale 20 × horizontal") and a reader can scale off it.
@@ -22,8 +24,7 @@ export function sectionWindow(
   plotHeight: number,
   hScale: number,
 ): { exaggeration: number; z0: number; z1: number } {
-  const lo = Math.min(...zs);
-  const hi = Math.max(...zs);
+  const [lo, hi] = extentOf(zs);
   const span = Math.max(hi - lo, 0.5) * 1.3;
   const exaggeration = niceExaggeration(plotHeight / span / hScale);
   const window = plotHeight / (exaggeration * hScale);

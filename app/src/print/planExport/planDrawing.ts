@@ -8,6 +8,7 @@ import {
   type ScheduleFitting,
   type UnitSystem,
 } from '@mainbrace/solver';
+import { extentOf } from '../../format/extent.js';
 
 /** A drawing scale a drawing set uses: metric ratios, or inches on paper to feet on the ground. */
 export interface PlanScale {
@@ -63,9 +64,8 @@ export function planDrawing(
   title: string,
 ): Drawing {
   const { project } = analysis;
-  const xs = project.nodes.map((n) => n.x),
-    ys = project.nodes.map((n) => n.y);
-  const [x0, x1, y0, y1] = [Math.min(...xs), Math.max(...xs), Math.min(...ys), Math.max(...ys)];
+  const [x0, x1] = extentOf(project.nodes.map((n) => n.x));
+  const [y0, y1] = extentOf(project.nodes.map((n) => n.y));
   const k = scale.mmPerMetre;
   const width = Math.max(297, (x1 - x0) * k + 2 * MARGIN);
   const height = Math.max(210, (y1 - y0) * k + 2 * MARGIN + 30);
