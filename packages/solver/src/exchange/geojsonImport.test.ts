@@ -55,6 +55,28 @@ describe('a GeoJSON route', () => {
     expect(project.georeference?.proj4).toMatch(/^\+proj=tmerc /);
   });
 
+  it('imports a route across the 180th meridian with its geodesic lengths and bend', () => {
+    // An invented main on an equatorial atoll straddling ±180°: three points within 60 m. Expected
+    // lengths and bend from GeographicLib geodesics (Karney 2013), which knows no antimeridian.
+    const ATOLL = [
+      [179.9997, 0.0002],
+      [-179.9998, 0.0002],
+      [-179.9998, 0.0006],
+    ];
+    const r = importGeoJson(collection(line(ATOLL, { name: 'Reef Road' })));
+    if (!r.ok) throw new Error(r.notes.map(noteText).join('\n'));
+    const [a, b, c] = r.project.nodes;
+    const planLength = Math.hypot(b!.x - a!.x, b!.y - a!.y);
+    const geodesic = Geodesic.WGS84.Inverse(0.0002, 179.9997, 0.0002, -179.9998).s12!;
+    expect(Math.abs(planLength - geodesic)).toBeLessThan(0.01);
+    expect(Math.hypot(c!.x - b!.x, c!.y - b!.y)).toBeCloseTo(
+      Geodesic.WGS84.Inverse(0.0002, -179.9998, 0.0006, -179.9998).s12!,
+      2,
+    );
+    const f = analyse(r.project).byNode.get('n2')!;
+    expect(Math.abs(f.geometry.deflection! - geodesicBend(ATOLL[0]!, ATOLL[1]!, ATOLL[2]!))).toBeLessThan(0.1);
+  });
+
   it('keeps the plan bend with z as the ground level, the pipe at the cover below it', () => {
     const withZ = QUARRY_HILL.map(([lon, lat], i) => [lon!, lat!, 410 + i * 1.5]);
     const r = importGeoJson(collection(line(withZ)), { cover: 1.5 });

@@ -40,17 +40,30 @@ export function projectionOf(definition: string): PlanProjection {
   };
 }
 
-/** The middle of the routes' extent, [lon, lat]: where the local plane is centred. */
+/**
+ * The middle of the routes' extent, [lon, lat]: where the local plane is centred. A route spanning
+ * more than 180° of longitude is taken to cross the 180th meridian (no water main goes half round
+ * the earth): its longitudes are read east of 0 to 360, else its middle would lie on the far side of
+ * the earth, where the plane is useless.
+ */
 export function extentMiddle(points: Iterable<readonly [number, number]>): [number, number] {
   let minLon = Infinity;
   let maxLon = -Infinity;
+  let minEast = Infinity;
+  let maxEast = -Infinity;
   let minLat = Infinity;
   let maxLat = -Infinity;
   for (const [lon, lat] of points) {
     minLon = Math.min(minLon, lon);
     maxLon = Math.max(maxLon, lon);
+    const east = lon < 0 ? lon + 360 : lon;
+    minEast = Math.min(minEast, east);
+    maxEast = Math.max(maxEast, east);
     minLat = Math.min(minLat, lat);
     maxLat = Math.max(maxLat, lat);
   }
-  return [(minLon + maxLon) / 2, (minLat + maxLat) / 2];
+  const lat = (minLat + maxLat) / 2;
+  if (maxLon - minLon <= 180) return [(minLon + maxLon) / 2, lat];
+  const mid = (minEast + maxEast) / 2;
+  return [mid > 180 ? mid - 360 : mid, lat];
 }
