@@ -104,4 +104,23 @@ describe('mainbrace import and export', () => {
     expect(e.status).toBe(2);
     expect(e.stderr).toMatch(/no georeference/);
   });
+
+  it('writes no bidi override or terminal control from a run name, raw, to stdout or stderr', async () => {
+    // terminalText.ts's set (Unicode Standard Annex #9 §2, ECMA-48 C1): the same guard as the other commands.
+    const csv = join(dir, 'runs.csv');
+    writeFileSync(
+      csv,
+      'E,N,RL,run\n0,0,100,\u202eB\u009b2K\n40,0,100,\u202eB\u009b2K\n0,90,100,\u001b[8mC\n40,90,100,\u001b[8mC\n',
+    );
+    const r = await cli('import', csv, '--run', 'run');
+    expect(r.status).toBe(0);
+    // eslint-disable-next-line no-control-regex -- looking for control characters is the point
+    const raw = /[\u001b\u009b\u202e]/;
+    expect(raw.test(r.stdout)).toBe(false);
+    expect(raw.test(r.stderr)).toBe(false);
+    // still the same project: JSON reads `\u202e` back as the character
+    const parsed = parseProjectText(r.stdout);
+    if (!parsed.ok) throw new Error('not a valid project');
+    expect(parsed.project.pipes[0]!.label).toBe('run "\u202eB\u009b2K"');
+  });
 });

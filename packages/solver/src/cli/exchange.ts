@@ -2,7 +2,7 @@ import { parseArgs } from './args.js';
 import { USAGE } from './usage.js';
 import type { CliIo } from './run.js';
 import { DEFAULT_MAX_BYTES } from './readLimited.js';
-import { escapeControls } from './terminalText.js';
+import { escapeControls, terminalSafe } from './terminalText.js';
 import { parseProjectText } from '../model/parseProject.js';
 import { problemText } from '../model/problems.js';
 
@@ -61,7 +61,14 @@ const stem = (path: string) => path.replace(/^.*[\\/]/, '').replace(/\.[^.]*$/, 
  * stdout). The CSV and projection libraries are loaded only here, so the other commands start as fast.
  * Exit status as the other commands: 0 done, 2 bad input, 1 a fault of ours.
  */
-export async function runExchange(argv: readonly string[], io: CliIo): Promise<number> {
+export async function runExchange(argv: readonly string[], rawIo: CliIo): Promise<number> {
+  // The same last guard as runCli: run and feature names reach stdout inside the JSON, where
+  // JSON.stringify leaves C1 controls and bidi overrides raw.
+  const io: CliIo = {
+    ...rawIo,
+    out: (text) => rawIo.out(terminalSafe(text)),
+    err: (text) => rawIo.err(terminalSafe(text)),
+  };
   try {
     const args = parseArgs(argv);
     const ex = await import('../exchange/index.js');

@@ -66,4 +66,46 @@ describe('a CSV survey', () => {
     expect(c.ok).toBe(false);
     expect(c.notes.map(noteText).join('\n')).toMatch(/no column "Height" for the level/);
   });
+
+  it('refuses coordinates and levels outside the project limits, naming the row and the column', () => {
+    // limits.md: a plan coordinate within ±20,000 km, an elevation within ±10,000 m. A survey value
+    // past them is a slip (a column in millimetres, an exponent typo), refused where the file has it
+    // rather than as a field of the project the import would have made.
+    const far = SURVEY.replace('1060.000,5045.000,51.35', '30000000,5045.000,51.35');
+    const r = importCsv(far, MAPPING, 'm');
+    expect(r.ok).toBe(false);
+    const text = r.notes.map(noteText).join('\n');
+    expect(text).toMatch(/^error: row 4, column "East \(m\)": 30000000 m is outside .*plan coordinate/m);
+    expect(text).not.toMatch(/nodes\[/);
+    const high = SURVEY.replace('51.35', '1e308');
+    const h = importCsv(high, MAPPING, 'm');
+    expect(h.ok).toBe(false);
+    const hText = h.notes.map(noteText).join('\n');
+    expect(hText).toMatch(/^error: row 4, column "RL ground": 1e\+308 m is outside .*elevation/m);
+    expect(hText).not.toMatch(/loadCases|Infinity/);
+    // in feet the limit is on the metres: 70,000,000 ft = 21,336 km
+    const ft = importCsv('E,N\n0,0\n70000000,0\n', { easting: 'E', northing: 'N' }, 'ft');
+    expect(ft.ok).toBe(false);
+  });
+
+  it('joins a tee and reports a crossing in the middle of a 42 km diagonal leg', () => {
+    // Hand geometry: run A goes (0,0) → (30000,30000), on the line y = x; run B starts at
+    // (15000,15000), on that line, so it is a tee there; run C from (20000,20100) to (20100,20000)
+    // lies on x + y = 40100 and crosses A at (20050,20050) without a point of its own.
+    const csv = [
+      'E,N,run',
+      '0,0,A',
+      '30000,30000,A',
+      '30000,30100,A',
+      '15000,15000,B',
+      '15000,14900,B',
+      '20000,20100,C',
+      '20100,20000,C',
+    ].join('\n');
+    const r = importCsv(csv, { easting: 'E', northing: 'N', run: 'run' }, 'm');
+    if (!r.ok) throw new Error(r.notes.map(noteText).join('\n'));
+    const tee = r.project.nodes.find((n) => n.x === 15000 && n.y === 15000)!;
+    expect(r.project.pipes.filter((p) => p.from === tee.id || p.to === tee.id)).toHaveLength(3);
+    expect(r.notes.map(noteText).join('\n')).toMatch(/cross at \(20050(\.0+)?, 20050(\.0+)?\)/);
+  });
 });

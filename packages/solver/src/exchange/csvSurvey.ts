@@ -2,6 +2,7 @@ import Papa from 'papaparse';
 import type { PipeChoice } from './pipeChoice.js';
 import type { RouteLine, RoutePoint } from './routeNetwork.js';
 import type { ImportNote } from './importNotes.js';
+import { LIMITS } from '../model/limits.js';
 
 /** Length units a survey may be in, with their size in metres. */
 export const SURVEY_UNITS = {
@@ -96,7 +97,7 @@ export function surveyLines(
   const runs = new Map<string, RoutePoint[]>();
   table.rows.forEach((row, r) => {
     const rowNo = r + 2;
-    const num = (i: number | null, optional: boolean): number | null => {
+    const num = (i: number | null, optional: boolean, limit: 'coordinate' | 'elevation'): number | null => {
       if (i === null) return null;
       const raw = (row[i] ?? '').trim();
       if (raw === '' && optional) return null;
@@ -109,15 +110,29 @@ export function surveyLines(
         });
         return null;
       }
+      // The project's own limits (limits.md), checked here so that the message names the row and
+      // column, and so that no point lies so far off that joining the network cannot finish.
+      const { hard, name } = LIMITS[limit];
+      if (!(v * scale >= hard.min && v * scale <= hard.max)) {
+        notes.push({
+          level: 'error',
+          where: `row ${rowNo}, column "${table.header[i]}"`,
+          message: `${v * scale} m is outside the range of a ${name} (${hard.min} to ${hard.max} m): check the unit and the column`,
+        });
+        return null;
+      }
       return v * scale;
     };
-    const x = num(ie, false);
-    const y = num(inn, false);
-    const level = num(il, true);
+    const x = num(ie, false, 'coordinate');
+    const y = num(inn, false, 'coordinate');
+    const level = num(il, true, 'elevation');
     if (x === null || y === null) return;
     const run = ir === null ? '' : (row[ir] ?? '').trim();
     const where = `row ${rowNo} (${(x / scale).toString()}, ${(y / scale).toString()})`;
-    runs.set(run, [...(runs.get(run) ?? []), { x, y, level, where }]);
+    // pushed, not copied: a copy per row made a long survey quadratic
+    const list = runs.get(run);
+    if (list) list.push({ x, y, level, where });
+    else runs.set(run, [{ x, y, level, where }]);
   });
   if (notes.length) return { ok: false, notes };
   if (il !== null) {

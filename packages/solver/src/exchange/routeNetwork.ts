@@ -74,6 +74,34 @@ class Grid<T> {
   at(x: number, y: number): T[] {
     return this.cells.get(this.key(Math.floor(x / this.size), Math.floor(y / this.size))) ?? [];
   }
+  /**
+   * Adds `item` to every cell within `grow` of the segment a–b, walking along it, and returns those
+   * cells. A segment's bounding box would do for short ones, but a long diagonal one (a survey leg of
+   * 30 km) covers millions of cells that it never comes near.
+   */
+  addSegment(ax: number, ay: number, bx: number, by: number, grow: number, item: T): string[] {
+    const s = this.size;
+    const step = s / 2;
+    const n = Math.max(1, Math.ceil(Math.hypot(bx - ax, by - ay) / step));
+    // a point within `grow` of the segment is within grow + step/2 of one of the samples
+    const r = grow + step / 2;
+    const keys = new Set<string>();
+    for (let q = 0; q <= n; q++) {
+      const x = ax + ((bx - ax) * q) / n;
+      const y = ay + ((by - ay) * q) / n;
+      for (let i = Math.floor((x - r) / s); i <= Math.floor((x + r) / s); i++)
+        for (let j = Math.floor((y - r) / s); j <= Math.floor((y + r) / s); j++) keys.add(this.key(i, j));
+    }
+    for (const k of keys) {
+      const list = this.cells.get(k);
+      if (list) list.push(item);
+      else this.cells.set(k, [item]);
+    }
+    return [...keys];
+  }
+  inCell(key: string): T[] {
+    return this.cells.get(key) ?? [];
+  }
 }
 
 /**
@@ -143,7 +171,7 @@ export function buildNetwork(lines: readonly RouteLine[], options: NetworkOption
   }
 
   // Tees: a vertex lying on another segment, away from its ends, splits that segment.
-  const segGrid = segmentGrid(chains, vertices, tol);
+  const segGrid = segmentGrid(chains, vertices, tol).grid;
   const inserts = new Map<string, { t: number; v: number }[]>();
   vertices.forEach((p, vi) => {
     for (const [ci, k] of segGrid.at(p.x, p.y)) {
@@ -257,27 +285,36 @@ export function buildNetwork(lines: readonly RouteLine[], options: NetworkOption
   }
 
   notes.push(...apartNotes(nodes, pipes, chains, nodeId, vertices));
-  notes.push(...crossingNotes(chains, vertices, segmentGrid(chains, vertices, tol), tol));
+  notes.push(...crossingNotes(chains, segmentGrid(chains, vertices, tol), vertices, tol));
   return { nodes, pipes, notes };
 }
 
-/** Every segment of every chain in a grid, by its box grown by the tolerance. */
-function segmentGrid(chains: { ids: number[] }[], vertices: Vertex[], tol: number): Grid<[number, number]> {
-  const grid = new Grid<[number, number]>(Math.max(tol * 4, 5));
-  chains.forEach((c, ci) => {
+interface SegmentGrid {
+  grid: Grid<[number, number]>;
+  /** the cells each segment lies in, by chain and segment */
+  cells: string[][][];
+}
+
+/**
+ * Every segment of every chain in a grid, in the cells within the tolerance of it. The cell is at
+ * least 4 × the tolerance and 5 m, and grows with the total length of the route so that walking the
+ * segments visits about a million cells at most, however long a leg the file holds.
+ */
+function segmentGrid(chains: { ids: number[] }[], vertices: Vertex[], tol: number): SegmentGrid {
+  let total = 0;
+  for (const c of chains)
+    for (let k = 0; k + 1 < c.ids.length; k++) total += dist(vertices[c.ids[k]!]!, vertices[c.ids[k + 1]!]!);
+  const grid = new Grid<[number, number]>(Math.max(tol * 4, 5, total / 1e6));
+  const cells = chains.map((c, ci) => {
+    const out: string[][] = [];
     for (let k = 0; k + 1 < c.ids.length; k++) {
       const a = vertices[c.ids[k]!]!;
       const b = vertices[c.ids[k + 1]!]!;
-      grid.addBox(
-        Math.min(a.x, b.x) - tol,
-        Math.min(a.y, b.y) - tol,
-        Math.max(a.x, b.x) + tol,
-        Math.max(a.y, b.y) + tol,
-        [ci, k],
-      );
+      out.push(grid.addSegment(a.x, a.y, b.x, b.y, tol, [ci, k]));
     }
+    return out;
   });
-  return grid;
+  return { grid, cells };
 }
 
 const round = (v: number) => Math.round(v * 1e6) / 1e6;
@@ -291,17 +328,25 @@ function apartNotes(
   vertices: Vertex[],
 ): ImportNote[] {
   const parent = new Map(nodes.map((n) => [n.id, n.id]));
+  // Union–find with the whole path compressed (Tarjan 1975): compressing only the first node left a
+  // route's chain of parents for every later find to walk, and a long route quadratic.
   const find = (a: string): string => {
     let r = a;
     while (parent.get(r) !== r) r = parent.get(r)!;
-    parent.set(a, r);
+    for (let x = a; x !== r;) {
+      const next = parent.get(x)!;
+      parent.set(x, r);
+      x = next;
+    }
     return r;
   };
   for (const p of pipes) parent.set(find(p.from), find(p.to));
   const groups = new Map<string, string[]>();
   for (const n of nodes) {
     const r = find(n.id);
-    groups.set(r, [...(groups.get(r) ?? []), n.id]);
+    const list = groups.get(r);
+    if (list) list.push(n.id);
+    else groups.set(r, [n.id]);
   }
   if (groups.size < 2) return [];
   const sorted = [...groups.values()].sort((a, b) => b.length - a.length);
@@ -339,8 +384,8 @@ function apartNotes(
 /** Two pipes crossing in plan without a shared point: not a fitting, reported so the user decides. */
 function crossingNotes(
   chains: { line: RouteLine; ids: number[] }[],
+  segGrid: SegmentGrid,
   vertices: Vertex[],
-  segGrid: Grid<[number, number]>,
   tol: number,
 ): ImportNote[] {
   const out: ImportNote[] = [];
@@ -349,13 +394,11 @@ function crossingNotes(
     for (let k = 0; k + 1 < c.ids.length; k++) {
       const a = vertices[c.ids[k]!]!;
       const b = vertices[c.ids[k + 1]!]!;
+      // Two segments that cross share the cell of the crossing point.
       const cands = new Set<string>();
-      const steps = Math.max(1, Math.ceil(dist(a, b) / 2));
-      for (let s = 0; s <= steps; s++) {
-        const x = a.x + ((b.x - a.x) * s) / steps;
-        const y = a.y + ((b.y - a.y) * s) / steps;
-        for (const [cj, kj] of segGrid.near(x, y)) if (cj > ci || (cj === ci && kj > k + 1)) cands.add(`${cj}:${kj}`);
-      }
+      for (const cell of segGrid.cells[ci]![k]!)
+        for (const [cj, kj] of segGrid.grid.inCell(cell))
+          if (cj > ci || (cj === ci && kj > k + 1)) cands.add(`${cj}:${kj}`);
       for (const key of cands) {
         const [cj, kj] = key.split(':').map(Number) as [number, number];
         const ids = chains[cj]!.ids;
