@@ -1,6 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import { analyse } from '../analysis/analyse.js';
 import { scheduleView } from './scheduleView.js';
+import { scheduleTable } from './scheduleTable.js';
 import { route } from '../../test/projectBuilder.js';
 import { PSI } from '../units/conversions.js';
 
@@ -48,5 +49,14 @@ describe('pipe rating notes', () => {
     expect(notes).toHaveLength(1);
     expect(notes[0]!.text).toContain('Working');
     for (const span of ['A1 to A2', 'A2 to A3', 'A3 to A4', 'A4 to A5']) expect(notes[0]!.text).toContain(span);
+  });
+});
+
+describe('an error note under its heading', () => {
+  it('says "not adequate" once in the terminal table', () => {
+    const table = scheduleTable(scheduleView(analyse(main()), 'us'), 'Test route');
+    const line = table.split('\n').find((l) => l.includes('rated working pressure'))!;
+    expect(line).toContain('!! NOT ADEQUATE');
+    expect(line.toLowerCase().split('not adequate').length - 1).toBe(1);
   });
 });

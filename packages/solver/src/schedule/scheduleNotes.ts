@@ -11,6 +11,13 @@ export interface ScheduleNote {
 }
 
 /**
+ * A note's text after a heading that already says "NOT ADEQUATE" (the terminal table, the print):
+ * the sentence's own leading "Not adequate:" is dropped so that the words are not said twice.
+ */
+export const noteAfterHeading = (n: Pick<ScheduleNote, 'severity' | 'text'>): string =>
+  n.severity === 'error' ? n.text.replace(/^Not adequate:\s*/, '') : n.text;
+
+/**
  * Each distinct finding once (crew-sheet.md: notes, not repeats): diagnostics grouped by code, most
  * severe first. Where every fitting's finding of a code reads alike the note is that sentence; where
  * the numbers differ it is the code's meaning and action, and the calculation record keeps the numbers.
