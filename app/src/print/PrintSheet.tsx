@@ -3,6 +3,7 @@ import {
   CAUTIONS,
   columnNumber,
   columnUnit,
+  noteAfterHeading,
   pickColumns,
   positionColumns,
   scheduleView,
@@ -170,7 +171,7 @@ const CrewPage = memo(function CrewPage({
               {notes.map((n) => (
                 <li key={n.number} value={n.number} className={`note-${n.severity}`}>
                   {n.severity === 'error' ? <strong>NOT ADEQUATE. </strong> : null}
-                  {n.text} ({n.marks.join(', ') || 'whole route'})
+                  {noteAfterHeading(n)} ({n.marks.join(', ') || 'whole route'})
                 </li>
               ))}
             </ol>
