@@ -104,6 +104,20 @@ for (const size of SIZES) {
       });
       expect(table).toEqual({ inside: true, fits: true });
 
+      // Drawing: the tool's hint (wrapped on a narrow plan) and the typed-entry box do not cover each other.
+      await app.tool('draw');
+      const plan2 = (await page.getByTestId('plan').boundingBox())!;
+      await page.mouse.click(plan2.x + plan2.width / 2, plan2.y + plan2.height - 60);
+      await expect(page.getByTestId('typed-entry')).toBeVisible();
+      // (the hint lets pointer events through, so it is checked by its box, not by what is under a point)
+      expect(await uncovered(page, ['.plan-typed label', '[data-testid="typed-entry"]'])).toEqual([]);
+      const hint = (await page.locator('.plan-hint').boundingBox())!;
+      const typed = (await page.locator('.plan-typed').boundingBox())!;
+      expect(typed.y, 'typed-entry box below the hint').toBeGreaterThanOrEqual(hint.y + hint.height);
+      await app.shot(`layout-${size.width}x${size.height}-drawing`);
+      await page.keyboard.press('Escape');
+      await app.tool('select');
+
       // The drawer raised for the schedule: its table is readable.
       await app.drawerTab('schedule');
       await page.getByTestId('drawer-raise').click();

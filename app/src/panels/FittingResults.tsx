@@ -19,7 +19,7 @@ import {
   type FittingAnalysis,
   type Project,
 } from '@mainbrace/solver';
-import { columnForce, show, unitOf } from '../format/quantity.js';
+import { columnForce, show, showColumnForce, unitOf } from '../format/quantity.js';
 import { bearingText, fittingTitle } from '../format/fittingNames.js';
 import { useDiagnosticWords } from '../format/words.js';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
@@ -63,22 +63,22 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
         <dd data-testid="governing-thrust">
           {e.horizontal.force > 0 && (
             <>
-              horizontal <strong>{show(e.horizontal.force, 'force', u)}</strong>, bears toward{' '}
+              horizontal <strong>{showColumnForce(e.horizontal.force, u)}</strong>, bears toward{' '}
               {bearingText(planBearing(e.horizontal.direction))} (from north)
             </>
           )}
           {e.upward.force > 0 && (
             <>
-              {e.horizontal.force > 0 ? '; ' : ''}upward <strong>{show(e.upward.force, 'force', u)}</strong>
+              {e.horizontal.force > 0 ? '; ' : ''}upward <strong>{showColumnForce(e.upward.force, u)}</strong>
             </>
           )}
           {e.downward.force > 0 && (
             <>
               {e.horizontal.force > 0 || e.upward.force > 0 ? '; ' : ''}downward{' '}
-              <strong>{show(e.downward.force, 'force', u)}</strong>
+              <strong>{showColumnForce(e.downward.force, u)}</strong>
             </>
           )}{' '}
-          (total {show(norm(e.governing.total), 'force', u)})
+          (total {showColumnForce(norm(e.governing.total), u)})
         </dd>
       </dl>
       <div className="table-scroll">
@@ -126,17 +126,17 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
         </table>
       </div>
       <p className="muted small">
-        ◆ governing case. Horizontal part {show(horizontalNorm(e.governing.total), 'force', u)}; water in the fitting
-        weighs {show(f.waterWeight, 'force', u)} (not counted).
+        ◆ governing case. Horizontal part {showColumnForce(horizontalNorm(e.governing.total), u)}; water in the fitting
+        weighs {showColumnForce(f.waterWeight, u)} (not counted).
       </p>
       <h4>Restraint</h4>
       <ul className="restraint">
         {r.block && (
           <li data-testid="block">
             <span className="element">{elementName(f.mark, 'block')}</span> Bearing block, bears{' '}
-            {bearingText(planBearing(r.block.direction))} for {show(r.block.thrust, 'force', u)} horizontal
+            {bearingText(planBearing(r.block.direction))} for {showColumnForce(r.block.thrust, u)} horizontal
             {r.block.upwardThrust > 0
-              ? ` and holds ${show(r.block.upwardThrust, 'force', u)} up by its weight`
+              ? ` and holds ${showColumnForce(r.block.upwardThrust, u)} up by its weight`
               : ''}:{' '}
             <strong>
               {formatDimension(r.block.faceWidth, u)} wide × {formatDimension(r.block.faceHeight, u)} high
@@ -161,7 +161,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
         {r.anchor && (
           <li data-testid="anchor">
             <span className="element">{elementName(f.mark, 'anchor')}</span> Gravity anchor, holds{' '}
-            {show(r.anchor.upwardThrust, 'force', u)} up:{' '}
+            {showColumnForce(r.anchor.upwardThrust, u)} up:{' '}
             <strong>
               {formatDimension(r.anchor.length, u)} long × {formatDimension(r.anchor.width, u)} wide ×{' '}
               {formatDimension(r.anchor.height, u)} high
@@ -173,7 +173,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
         {r.trenchBottom && (
           <li data-testid="pad">
             <span className="element">{elementName(f.mark, 'trenchBottom')}</span> Trench-bottom bearing, bears{' '}
-            {show(e.downward.force, 'force', u)} down: {show(r.trenchBottom.bearingArea, 'area', u)}: pad{' '}
+            {showColumnForce(e.downward.force, u)} down: {show(r.trenchBottom.bearingArea, 'area', u)}: pad{' '}
             {formatDimension(r.trenchBottom.width, u)} across × {formatDimension(r.trenchBottom.length, u)} along the
             pipe.
           </li>

@@ -1,6 +1,6 @@
 import { norm } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
-import { show } from '../format/quantity.js';
+import { showColumnForce } from '../format/quantity.js';
 import { largestThrusts } from '../state/routeFigures.js';
 
 /** Which case governs how many fittings, and the fittings with the largest thrust and tightest margins. */
@@ -34,7 +34,7 @@ export function GoverningList() {
             <button className="link" onClick={() => actions.revealNode(f.node.id)}>
               {f.mark}
             </button>{' '}
-            {show(norm(f.envelope.governing.total), 'force', u)}
+            {showColumnForce(norm(f.envelope.governing.total), u)}
           </li>
         ))}
       </ol>

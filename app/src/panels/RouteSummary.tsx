@@ -1,6 +1,6 @@
 import { norm } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
-import { show } from '../format/quantity.js';
+import { show, showColumnForce } from '../format/quantity.js';
 import { KIND_NAME } from '../format/fittingNames.js';
 import { useDiagnosticWords } from '../format/words.js';
 import { routeSummary } from '../state/routeFigures.js';
@@ -66,7 +66,7 @@ export function RouteSummary() {
                 <button className="link" onClick={() => actions.revealNode(f.node.id)}>
                   {f.mark}
                 </button>{' '}
-                {KIND_NAME[f.geometry.kind].toLowerCase()} — {show(norm(f.envelope.governing.total), 'force', u)}
+                {KIND_NAME[f.geometry.kind].toLowerCase()} — {showColumnForce(norm(f.envelope.governing.total), u)}
               </li>
             ))}
           </ol>

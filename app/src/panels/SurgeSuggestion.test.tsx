@@ -60,6 +60,17 @@ describe('the surge suggestion in the cases panel', () => {
     expect(cases[1]!.pressure).toBeGreaterThan(700e3);
   });
 
+  it('words the per-pipe list when it is opened: one line per pipe, named by its ends', () => {
+    mount(flowing([{ id: 'working', kind: 'working', pressure: 600e3 }]));
+    const details = screen.getByText('Every pipe').closest('details')!;
+    expect(details.querySelectorAll('li')).toHaveLength(0);
+    details.open = true;
+    fireEvent(details, new Event('toggle'));
+    const lines = [...details.querySelectorAll('li')].map((li) => li.textContent);
+    expect(lines).toHaveLength(2);
+    expect(lines[0]).toMatch(/^the pipe from .+ to .+: a /);
+  });
+
   it('says what is missing when no pipe carries flow', () => {
     const p = flowing();
     mount({ ...p, pipes: p.pipes.map((x) => ({ ...x, flow: 0 })) });

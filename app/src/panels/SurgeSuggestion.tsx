@@ -20,6 +20,8 @@ export function SurgeSuggestion() {
   const actions = useActions();
   const [mode, setMode] = useState<'flow' | 'change'>('flow');
   const [change, setChange] = useState(DEFAULT_CHANGE);
+  // The per-pipe list is worded only while it is open: on a long route it is thousands of lines.
+  const [listOpen, setListOpen] = useState(false);
   const estimate = useMemo(
     () => surgeEstimate(project, mode === 'change' ? change : undefined),
     [project, mode, change],
@@ -89,16 +91,18 @@ export function SurgeSuggestion() {
           <button onClick={accept} data-testid="surge-accept">
             {surge ? `Set “${words.caseName(surge.id)}” to this` : 'Add as a surge case'}
           </button>
-          <details>
+          <details onToggle={(e) => setListOpen(e.currentTarget.open)}>
             <summary>Every pipe</summary>
-            <ul>
-              {estimate.pipes.map((p) => (
-                <li key={p.pipe}>
-                  {words.pipeName(p.pipe)}: a {show(p.waveSpeed, 'velocity', u, 4)}, Δv{' '}
-                  {show(p.velocityChange, 'velocity', u, 3)}, ΔP {show(p.rise, 'pressure', u)}
-                </li>
-              ))}
-            </ul>
+            {listOpen && (
+              <ul>
+                {estimate.pipes.map((p) => (
+                  <li key={p.pipe}>
+                    {words.pipeName(p.pipe)}: a {show(p.waveSpeed, 'velocity', u, 4)}, Δv{' '}
+                    {show(p.velocityChange, 'velocity', u, 3)}, ΔP {show(p.rise, 'pressure', u)}
+                  </li>
+                ))}
+              </ul>
+            )}
           </details>
           {estimate.unknownMaterial.length > 0 && (
             <p className="muted small">

@@ -24,7 +24,6 @@ function roundForce(f: number, us: boolean): number {
 export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: RefObject<HTMLSpanElement | null> }) {
   const viewport = useApp((s) => s.viewport);
   const units = useApp((s) => s.units);
-  const tool = useApp((s) => s.tool);
   const legendOpen = useApp((s) => s.legendOpen);
   const actions = useActions();
   const store = useAppStore();
@@ -35,8 +34,6 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
       ? 'worst of all cases'
       : (cases.find((c) => c.id === caseView.id)?.label ?? caseView.id);
   const drawing = useApp((s) => s.draw.phase === 'drawing');
-  const hoverKind = useApp((s) => s.hover.kind);
-  const hasRoute = useApp((s) => s.project.nodes.length > 0);
   const us = units === 'us';
   const barLength = us ? gridSpacing(viewport.scale * FOOT, 110) * FOOT : gridSpacing(viewport.scale, 110);
   const barPx = barLength * viewport.scale;
@@ -183,15 +180,6 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
           >
             Cancel
           </button>
-        </div>
-      )}
-      {tool === 'draw' && (
-        <div className="plan-hint" role="status">
-          {drawing
-            ? 'Click to add a bend · click a node or pipe to join it · Enter or double-click to finish · Backspace removes the last point · Esc cancels · hold Alt to place off the snap'
-            : hasRoute && hoverKind === 'none'
-              ? 'A click here starts a separate run, not joined to the main — move onto a node or pipe (it is ringed) to branch from it'
-              : 'Click to start a run — on a node to branch from it, on a pipe to split it into a tee'}
         </div>
       )}
     </>

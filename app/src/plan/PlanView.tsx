@@ -21,6 +21,7 @@ import { drawPicks, drawUnderlay } from './drawUnderlay.js';
 import { useUnderlayImage } from '../state/underlayImage.js';
 import { UnderlayHint } from './UnderlayHint.js';
 import { TypedEntryBox } from './TypedEntryBox.js';
+import { DrawHint } from './DrawHint.js';
 import { sendPlanEvent } from '../tools/planBridge.js';
 import type { PlanEvent, PointerKind } from '../tools/planInput.js';
 import { runCommand } from '../chrome/appCommands.js';
@@ -299,8 +300,13 @@ export function PlanView() {
         </Layer>
       </Stage>
       <PlanOverlays scene={scene} coordsRef={coords} />
-      <UnderlayHint />
-      <TypedEntryBox />
+      {/* Hints and the typed-entry box stack down from the top: a hint that wraps on a narrow plan pushes
+          the box down instead of covering it. */}
+      <div className="plan-top">
+        <DrawHint />
+        <UnderlayHint />
+        <TypedEntryBox />
+      </div>
     </div>
   );
 }

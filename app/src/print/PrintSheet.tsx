@@ -1,8 +1,9 @@
-import { memo, useEffect, useMemo, useState } from 'react';
+import { memo, useEffect, useLayoutEffect, useMemo, useRef, useState } from 'react';
 import {
   CAUTIONS,
   columnNumber,
   columnUnit,
+  noteAfterHeading,
   pickColumns,
   positionColumns,
   scheduleView,
@@ -17,7 +18,7 @@ import {
 import { useAnalysis, useApp } from '../state/StoreContext.js';
 import { KeyPlan } from './KeyPlan.js';
 import { RestraintSketch } from './RestraintSketch.js';
-import { TakeOffTable } from './TakeOffTable.js';
+import { TakeOffDigest, TakeOffTable } from './TakeOffTable.js';
 import { TitleBlock } from './TitleBlock.js';
 import { Appendix } from './Appendix.js';
 import { PlanExportButtons } from './PlanExportButtons.js';
@@ -79,6 +80,8 @@ const CrewPage = memo(function CrewPage({
   project,
   units,
   extra,
+  side,
+  onSideOverflow,
 }: {
   rows: ViewRow[];
   index: number;
@@ -89,7 +92,16 @@ const CrewPage = memo(function CrewPage({
   units: UnitSystem;
   /** what fills the free half of a short last page: the job's take-off */
   extra?: React.ReactNode;
+  /** what follows the notes in the side column of a full last page: the job's take-off */
+  side?: React.ReactNode;
+  /** the side column could not hold `side`: it must go on a page of its own */
+  onSideOverflow?: () => void;
 }) {
+  const aside = useRef<HTMLElement>(null);
+  useLayoutEffect(() => {
+    const el = aside.current;
+    if (side && onSideOverflow && el && el.scrollHeight > el.clientHeight + 1) onSideOverflow();
+  }, [side, onSideOverflow]);
   const columns = pickColumns(view, crewColumns(project));
   const marks = new Set(rows.map((r) => r.fitting.mark));
   const notes = view.notes.filter((n) => n.marks.some((m) => marks.has(m)) || (index === 0 && n.marks.length === 0));
@@ -152,18 +164,19 @@ const CrewPage = memo(function CrewPage({
             />
           ))}
         </div>
-        <aside className="sheet-side">
+        <aside className="sheet-side" ref={aside}>
           <KeyPlan project={project} analysis={analysis} marks={marks} />
           {notes.length > 0 && (
             <ol className="sheet-notes">
               {notes.map((n) => (
                 <li key={n.number} value={n.number} className={`note-${n.severity}`}>
                   {n.severity === 'error' ? <strong>NOT ADEQUATE. </strong> : null}
-                  {n.text} ({n.marks.join(', ') || 'whole route'})
+                  {noteAfterHeading(n)} ({n.marks.join(', ') || 'whole route'})
                 </li>
               ))}
             </ol>
           )}
+          {side}
         </aside>
         {extra}
       </div>
@@ -200,8 +213,13 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
     for (let i = 0; i < view.rows.length; i += PER_PAGE) out.push(view.rows.slice(i, i + PER_PAGE));
     return out;
   }, [view]);
-  // The job's take-off fills the second row of sketches of a last page with three fittings or fewer.
+  // The job's take-off fills the second row of sketches of a last page with three fittings or fewer;
+  // on a fuller last page it follows the notes in the side column, and only where it does not fit
+  // there does it take a page of its own (the crew part keeps to one page per six fittings).
   const fitsOnLast = (pages[pages.length - 1]?.length ?? PER_PAGE) <= PER_PAGE / 2;
+  const [sideOverflow, setSideOverflow] = useState<readonly ViewRow[][] | null>(null);
+  const inSide = !fitsOnLast && sideOverflow !== pages;
+  const markSideOverflow = useMemo(() => () => setSideOverflow(pages), [pages]);
   const runs = Math.ceil(pages.length / SHEETS_PER_RUN);
   const [run, setRun] = useState(0);
   const first = Math.min(run, Math.max(0, runs - 1)) * SHEETS_PER_RUN;
@@ -300,11 +318,20 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
                   </section>
                 ) : undefined
               }
+              side={
+                i === pages.length - 1 && inSide ? (
+                  <section className="sheet-takeoff in-side" data-testid="job-takeoff">
+                    <h3>Quantities take-off — whole route</h3>
+                    <TakeOffDigest rows={job} />
+                  </section>
+                ) : undefined
+              }
+              onSideOverflow={i === pages.length - 1 && inSide ? markSideOverflow : undefined}
             />
           );
         })}
         {pages.length === 0 && <p className="muted">No fitting needs restraint yet: draw the route first.</p>}
-        {done && lastRun && pages.length > 0 && !fitsOnLast && (
+        {done && lastRun && pages.length > 0 && !fitsOnLast && !inSide && (
           <section className="sheet-takeoff" data-testid="job-takeoff">
             <h2>Quantities take-off — whole route</h2>
             <TakeOffTable rows={job} />

@@ -42,3 +42,40 @@ export function TakeOffTable({ rows, compact = false }: { rows: readonly TakeOff
     </table>
   );
 }
+
+/**
+ * The same take-off in the least height, for the side column of a full last sheet: the concrete as a
+ * small table, the other sections as running lines ("Bend 45° 12 ×2; Tee 12 × 8 ×1").
+ */
+export function TakeOffDigest({ rows }: { rows: readonly TakeOffRow[] }) {
+  const concrete = rows.filter((r) => r.section === 'Concrete');
+  const line = (r: TakeOffRow) =>
+    [r.item, r.size, r.count ? `×${r.count}` : '', r.quantity ? `(${r.quantity} ${r.unit})` : '']
+      .filter(Boolean)
+      .join(' ');
+  return (
+    <div className="takeoff-digest" data-testid="takeoff">
+      {concrete.length > 0 && (
+        <table className="takeoff takeoff-compact">
+          <tbody>
+            {concrete.map((r, i) => (
+              <tr key={i} className={r.total ? 'takeoff-total' : ''}>
+                <td>{r.item}</td>
+                <td className="num">{r.quantity}</td>
+                <td>{r.unit}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      )}
+      {(['Restrained joints', 'Fittings', 'Anchors'] as const).map((section) => {
+        const lines = rows.filter((r) => r.section === section);
+        return lines.length ? (
+          <p key={section}>
+            <strong>{section}:</strong> {lines.map(line).join('; ')}
+          </p>
+        ) : null;
+      })}
+    </div>
+  );
+}

@@ -116,7 +116,8 @@ describe('the command line', () => {
     expect(valve.stdout).toMatch(/^ {2}A10 block {11}\S/m);
     expect(valve.stdout).toMatch(/^ {2}A10 opposite block {2}\S/m);
     expect(run('explain', demo, 'A6').stdout).toMatch(
-      /^ {2}A6 anchor {2}1\.25 m l × 1\.25 m w × 1\.25 m h, 1\.85 m³; holds 16\.5 kN up and 2\.5 kN sideways by base friction$/m,
+      // the cube built: 1.25³ = 1.953 m³, printed rounded up
+      /^ {2}A6 anchor {2}1\.25 m l × 1\.25 m w × 1\.25 m h, 1\.96 m³; holds 16\.5 kN up and 2\.5 kN sideways by base friction$/m,
     );
     // 6.2 m restrained at the demo's default 6 m laying length: joints at 0 and 6 m, two of them.
     expect(run('explain', demo, 'A13').stdout).toMatch(/^ {2}A13 joints {2}6\.2 m toward A12 \(2 joints\)$/m);

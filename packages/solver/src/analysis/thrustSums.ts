@@ -3,6 +3,7 @@ import type { Leg } from '../network/legs.js';
 import type { LoadCase } from '../model/projectSchema.js';
 import { pressureAt } from '../pressure/nodePressure.js';
 import type { CaseThrust, Extreme, ThrustEnvelope } from '../thrust/fittingThrust.js';
+import { cancelled } from '../thrust/momentumBalance.js';
 
 /**
  * The momentum balance of every fitting, structure of arrays (thrust/momentumBalance.ts has the
@@ -42,7 +43,9 @@ export function writeSums(s: ThrustSums, f: number, legs: readonly Leg[], elevat
     az = 0,
     fx = 0,
     fy = 0,
-    fz = 0;
+    fz = 0,
+    areas = 0,
+    fluxes = 0;
   for (let i = 0; i < legs.length; i++) {
     const leg = legs[i]!;
     const n = leg.direction;
@@ -55,15 +58,17 @@ export function writeSums(s: ThrustSums, f: number, legs: readonly Leg[], elevat
     fx -= k * n[0];
     fy -= k * n[1];
     fz -= k * n[2];
+    areas += a;
+    fluxes += k;
   }
   const j = 3 * f;
   s.elevation[f] = elevation;
-  s.area[j] = ax;
-  s.area[j + 1] = ay;
-  s.area[j + 2] = az;
-  s.flux[j] = fx;
-  s.flux[j + 1] = fy;
-  s.flux[j + 2] = fz;
+  s.area[j] = cancelled(ax, areas);
+  s.area[j + 1] = cancelled(ay, areas);
+  s.area[j + 2] = cancelled(az, areas);
+  s.flux[j] = cancelled(fx, fluxes);
+  s.flux[j + 1] = cancelled(fy, fluxes);
+  s.flux[j + 2] = cancelled(fz, fluxes);
   const closable = valve && legs.length === 2;
   s.valve[f] = closable ? 1 : 0;
   if (closable) {

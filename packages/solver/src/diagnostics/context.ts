@@ -1,6 +1,7 @@
 import type { Analysis } from '../analysis/analyse.js';
 import { planBearing } from '../geometry/vector.js';
 import type { UnitSystem } from '../units/conversions.js';
+import type { Project } from '../model/projectSchema.js';
 import { compassPoint } from '../schedule/fittingNames.js';
 import { formatSi } from '../units/format.js';
 import type { WordingContext } from './wording.js';
@@ -35,11 +36,29 @@ export function legName(a: Analysis, node: string | undefined, pipe: string): st
   return leg ? `the leg running ${compassPoint(planBearing(leg.direction))}` : 'the pipe';
 }
 
+interface ById {
+  nodes: Map<string, Project['nodes'][number]>;
+  pipes: Map<string, Project['pipes'][number]>;
+}
+
+const byIdOf = new WeakMap<Project, ById>();
+
+/** The project's nodes and pipes by id, made once per document: wording a list of findings or pipes
+ * looked each one up by a search of the whole route (quadratic on a long one). */
+function byId(project: Project): ById {
+  let b = byIdOf.get(project);
+  if (!b) {
+    b = { nodes: new Map(project.nodes.map((n) => [n.id, n])), pipes: new Map(project.pipes.map((p) => [p.id, p])) };
+    byIdOf.set(project, b);
+  }
+  return b;
+}
+
 /** A node by its mark, else its label, else where it stands ("the point at 120 m E, 35.0 m N"). */
 export function nodeName(a: Analysis, id: string, units: UnitSystem): string {
   const mark = a.marks.get(id);
   if (mark) return mark;
-  const n = a.project.nodes.find((x) => x.id === id);
+  const n = byId(a.project).nodes.get(id);
   if (!n) return 'a point';
   if (n.label) return `“${n.label}”`;
   return `the point at ${formatSi(n.x, 'length', units, 4)} E, ${formatSi(n.y, 'length', units, 4)} N`;
@@ -58,10 +77,10 @@ export function wordingContext(a: Analysis, units: UnitSystem): WordingContext {
     legName: (node, pipe) => legName(a, node, pipe),
     nodeName: (id) => nodeName(a, id, units),
     pipeName: (id) => {
-      const pipe = project.pipes.find((p) => p.id === id);
+      const pipe = byId(project).pipes.get(id);
       return pipe ? `the pipe from ${nodeName(a, pipe.from, units)} to ${nodeName(a, pipe.to, units)}` : 'a pipe';
     },
-    material: (pipe) => MATERIAL_NAME[project.pipes.find((p) => p.id === pipe)?.material ?? 'other'] ?? 'other',
+    material: (pipe) => MATERIAL_NAME[byId(project).pipes.get(pipe)?.material ?? 'other'] ?? 'other',
   };
 }
 

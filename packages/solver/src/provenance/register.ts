@@ -101,7 +101,8 @@ export const REGISTER = {
     verified: true,
   },
   'block.across-trench': {
-    quantity: 'A bearing face within this plan angle of a pipe’s axis stands across that pipe’s trench',
+    quantity:
+      'A bearing face stands across a pipe’s trench when that pipe leaves the fitting within this plan angle of the bearing direction, or every pipe lies within it of the bearing line (the trench ends there)',
     value: 30,
     unit: '°',
     kind: 'own rule',

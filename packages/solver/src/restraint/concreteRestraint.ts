@@ -31,14 +31,22 @@ export interface ConcreteRestraint {
 /** A component counts as present above floating-point noise of the vector sum. */
 export const present = (force: number, total: number) => force > 1e-7 * total && force > 0;
 
-/** True when the bearing direction runs within the across-trench angle of a pipe's plan axis. */
+/**
+ * True when the bearing face stands across a trench, so the trench width limits it: the block sits in
+ * the trench of a pipe that leaves the fitting within the across-trench angle of the bearing direction
+ * (a reducer's or valve's block around the pipe), or every pipe lies within that angle of the bearing
+ * line, so the trench ends at the fitting and the block bears on its end wall (a dead end, a hairpin
+ * bend). A block behind a tee or wye bears on the side wall of the run's trench instead: its face runs
+ * along that trench and is not limited by its width.
+ */
 function acrossTrench(direction: Vec3, legs: readonly Leg[]): boolean {
-  return legs.some((l) => {
+  const limit = REGISTER['block.across-trench'].value;
+  const angles = legs.flatMap((l) => {
     const plan = horizontal(l.direction);
-    if (horizontalNorm(plan) < 1e-9) return false;
-    const a = angleBetween(direction, plan);
-    return Math.min(a, 180 - a) < REGISTER['block.across-trench'].value;
+    return horizontalNorm(plan) < 1e-9 ? [] : [angleBetween(direction, plan)];
   });
+  if (angles.length === 0) return false;
+  return angles.some((a) => a < limit) || angles.every((a) => Math.min(a, 180 - a) < limit);
 }
 
 /**

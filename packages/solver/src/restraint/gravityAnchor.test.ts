@@ -4,6 +4,8 @@ import { sizeGravityAnchor } from './gravityAnchor.js';
 import { CUBIC_YARD, FOOT, INCH, POUND_PER_CUBIC_FOOT_WEIGHT } from '../units/conversions.js';
 import { LBF, psi, route } from '../../test/projectBuilder.js';
 import { expectClose, expectPrinted } from '../../test/tolerance.js';
+import { scheduleOf } from '../schedule/scheduleRows.js';
+import { restraintSummary } from '../schedule/restraintText.js';
 
 const FT3 = FOOT ** 3;
 const PCF = POUND_PER_CUBIC_FOOT_WEIGHT;
@@ -38,7 +40,7 @@ describe('gravity anchor at a crest bend (domain reference §5)', () => {
   });
 
   it('needs 145.1 ft³ (5.38 yd³) of 150 pcf concrete at SF 1.5 (CV-13)', () => {
-    const v = f.restraint.anchor!.concreteVolume;
+    const v = f.restraint.anchor!.requiredVolume;
     expectClose(v / FT3, 145.1, 5e-4);
     expectClose(v / CUBIC_YARD, 5.38, 1e-3);
   });
@@ -65,7 +67,7 @@ describe('gravity anchor at a crest bend (domain reference §5)', () => {
       concreteUnitWeight: 150 * PCF,
       site,
     });
-    expectClose(r.anchor!.concreteVolume / FT3, 248.5, 5e-4);
+    expectClose(r.anchor!.requiredVolume / FT3, 248.5, 5e-4);
     expect(r.diagnostics.map((d) => d.code)).toEqual(['anchor.submerged']);
   });
 
@@ -129,11 +131,11 @@ describe('gravity anchor at a crest bend (domain reference §5)', () => {
         site,
       }).anchor!;
     const upliftOnly = anchor(0);
-    expectClose(upliftOnly.concreteVolume / FT3, 145.15, 1e-3);
+    expectClose(upliftOnly.requiredVolume / FT3, 145.15, 1e-3);
     expectClose(upliftOnly.baseFriction / LBF, 3_231.3, 1e-3);
     expect(upliftOnly.governs).toBe('uplift');
     const alone = anchor(6_012);
-    expectClose(alone.concreteVolume / FT3, 231.8, 5e-4);
+    expectClose(alone.requiredVolume / FT3, 231.8, 5e-4);
     expectClose(alone.baseFriction / LBF, 9_018, 1e-6);
     expect(alone.governs).toBe('sliding');
   });
@@ -150,7 +152,7 @@ describe('gravity anchor at a crest bend (domain reference §5)', () => {
     expect(r.block).not.toBeNull();
     expect(r.block!.thrust).toBe(f.envelope.horizontal.force);
     expect(r.anchor!.horizontalThrust).toBe(0);
-    expectClose(r.anchor!.concreteVolume / FT3, 145.1, 5e-4);
+    expectClose(r.anchor!.requiredVolume / FT3, 145.1, 5e-4);
   });
 
   it('refuses a gravity anchor where the submerged weight is not positive (issue 17: heavy water)', () => {
@@ -162,5 +164,26 @@ describe('gravity anchor at a crest bend (domain reference §5)', () => {
     expect(f.restraint.anchor).toBeNull();
     expect(f.diagnostics.map((d) => d.code)).toContain('anchor.no-weight');
     expect(f.restraint.restrainedLegs.length).toBeGreaterThan(0);
+  });
+});
+
+describe('the gravity anchor as built', () => {
+  // CV-13 crest (145.1 ft³ required) on a 2-in step: ∛(145.15 ft³) = 5.253 ft = 1.6011 m, rounded up
+  // to 32 × 0.0508 m = 1.6256 m (5 ft 4 in), so the cube built holds 1.6256³ = 4.2958 m³ (151.7 ft³).
+  const p = crestRoute({ design: { concreteUnitWeight: 150 * PCF, dimensionStep: 2 * INCH } });
+  const a = analyse(p);
+  const anchor = a.byNode.get('c')!.restraint.anchor!;
+
+  it('has the volume of the cube that is poured, not the smaller volume required', () => {
+    expectClose(anchor.side, 1.6256, 1e-9);
+    expectClose(anchor.requiredVolume / FT3, 145.1, 5e-4);
+    expectClose(anchor.concreteVolume, 1.6256 ** 3, 1e-9);
+    expect(anchor.concreteVolume).toBeGreaterThanOrEqual(anchor.requiredVolume);
+  });
+
+  it('prints on the schedule the volume of the dimensions it prints (5 ft 4 in cube: 5.62 yd³)', () => {
+    const f = scheduleOf(a).fittings.find((x) => x.node === 'c')!;
+    const text = restraintSummary(f, 'us', 2 * INCH);
+    expect(text).toContain('anchor 5 ft 4 in l × 5 ft 4 in w × 5 ft 4 in h, 5.62 yd³');
   });
 });

@@ -24,8 +24,10 @@ export interface GravityAnchorInput {
 }
 
 export interface GravityAnchor {
-  /** m³, required concrete volume: the larger of the uplift and the sliding requirement */
+  /** m³, concrete as built, length × width × height: at least the required volume */
   concreteVolume: number;
+  /** m³, required concrete volume: the larger of the uplift and the sliding requirement */
+  requiredVolume: number;
   /** m, built plan length (along the pipe), rounded up to the step */
   length: number;
   /** m, built plan width (across the pipe), rounded up to the step */
@@ -90,9 +92,10 @@ export function sizeGravityAnchor(i: GravityAnchorInput): AnchorResult {
       ],
     };
   }
-  const concreteVolume = weight / unitWeight;
-  const side = roundUpTo(Math.cbrt(concreteVolume), site.step);
-  const baseFriction = Math.max(0, unitWeight * concreteVolume - i.upward) * mu;
+  const requiredVolume = weight / unitWeight;
+  const side = roundUpTo(Math.cbrt(requiredVolume), site.step);
+  const concreteVolume = side ** 3;
+  const baseFriction = Math.max(0, unitWeight * requiredVolume - i.upward) * mu;
   const diagnostics = submerged ? [diagnostic('anchor.submerged', {}, { unitWeight })] : [];
   const gammaInput = value(
     'γ',
@@ -135,15 +138,20 @@ export function sizeGravityAnchor(i: GravityAnchorInput): AnchorResult {
           : []),
         {
           title: 'Gravity anchor built',
-          formula: 'V = max(V_up, V_sl);  side = ∛V rounded up to the step',
-          inputs: [value('step', 'construction step', site.step, 'length', 'project design')],
-          result: value('V', 'concrete volume', concreteVolume, 'volume', `${governs} governs`),
+          formula: 'V_req = max(V_up, V_sl);  side = ∛V_req rounded up to the step;  V = side³',
+          inputs: [
+            value('V_req', 'concrete volume required', requiredVolume, 'volume', `${governs} governs`),
+            value('step', 'construction step', site.step, 'length', 'project design'),
+            value('side', 'side of the cube', side, 'length', 'computed'),
+          ],
+          result: value('V', 'concrete volume built', concreteVolume, 'volume', 'computed'),
           reference: 'A cube of at least the required volume (length × width × height)',
         },
       ];
   return {
     anchor: {
       concreteVolume,
+      requiredVolume,
       length: side,
       width: side,
       height: side,

@@ -1,6 +1,7 @@
 import { CAUTIONS } from './cautions.js';
 import { TABLE_COLUMNS } from './scheduleColumns.js';
 import { pickColumns, type ScheduleView } from './scheduleView.js';
+import { noteAfterHeading } from './scheduleNotes.js';
 
 const SEVERITY_MARK = { error: '!! NOT ADEQUATE', warning: '!', info: '·' } as const;
 
@@ -33,7 +34,7 @@ export function scheduleTable(
     out.push('', 'Notes');
     for (const n of view.notes)
       out.push(
-        `  ${n.number}. ${SEVERITY_MARK[n.severity]} ${n.text}${n.marks.length ? ` (${n.marks.join(', ')})` : ''}`,
+        `  ${n.number}. ${SEVERITY_MARK[n.severity]} ${noteAfterHeading(n)}${n.marks.length ? ` (${n.marks.join(', ')})` : ''}`,
       );
   }
   out.push('', ...CAUTIONS.map((c) => `! ${c}`));

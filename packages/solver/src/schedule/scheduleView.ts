@@ -51,7 +51,10 @@ export function scheduleView(a: Analysis, units: UnitSystem): ScheduleView {
     { mark: '', diagnostics: a.diagnostics.filter((d) => !a.byNode.has(d.subject.node ?? '')) },
     ...a.fittings,
   ];
-  const { notes, byMark } = scheduleNotes(rowsForNotes, (d) => diagnosticText(d, context));
+  const { notes, byMark } = scheduleNotes(rowsForNotes, (d) => diagnosticText(d, context), {
+    pipe: context.pipeName,
+    caseName: context.caseName,
+  });
   const cellContext: CellContext = {
     project: a.project,
     units,

@@ -25,6 +25,16 @@ export interface ThrustParts {
  * @param density water density, kg/m³
  * @param flowFactor multiplies every leg's outflow (0 = no flow)
  */
+/**
+ * A sum of vectors that cancel (the opposite branches of a cross, a straight joint) keeps rounding
+ * crumbs of about 1e-16 × the magnitudes added; a component below 1e-12 × them is that rounding, not
+ * a thrust, and is taken as 0, so that a balanced fitting is given nothing to hold.
+ *
+ * @param scale the sum of the magnitudes added
+ */
+export const cancelled = (component: number, scale: number): number =>
+  Math.abs(component) <= 1e-12 * scale ? 0 : component;
+
 export function momentumBalance(
   legs: readonly Leg[],
   pressure: number,
@@ -38,6 +48,8 @@ export function momentumBalance(
   let dx = 0,
     dy = 0,
     dz = 0;
+  let pressureScale = 0,
+    fluxScale = 0;
   for (let i = 0; i < legs.length; i++) {
     if (pressurised && !pressurised[i]) continue;
     const leg = legs[i]!;
@@ -51,6 +63,10 @@ export function momentumBalance(
     dx -= momentumFlux * n[0];
     dy -= momentumFlux * n[1];
     dz -= momentumFlux * n[2];
+    pressureScale += Math.abs(pressureForce);
+    fluxScale += momentumFlux;
   }
-  return { static: [sx, sy, sz], dynamic: [dx, dy, dz], total: [sx + dx, sy + dy, sz + dz] };
+  const st: Vec3 = [cancelled(sx, pressureScale), cancelled(sy, pressureScale), cancelled(sz, pressureScale)];
+  const dyn: Vec3 = [cancelled(dx, fluxScale), cancelled(dy, fluxScale), cancelled(dz, fluxScale)];
+  return { static: st, dynamic: dyn, total: [st[0] + dyn[0], st[1] + dyn[1], st[2] + dyn[2]] };
 }

@@ -1,0 +1,82 @@
+import { test, expect } from '@playwright/test';
+import { execFileSync } from 'node:child_process';
+import { mkdirSync, readFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { MainbracePage } from '../pages/mainbrace.js';
+
+const root = fileURLToPath(new URL('../..', import.meta.url));
+
+test.beforeAll(() => {
+  execFileSync('corepack', ['pnpm', '--filter', '@mainbrace/solver', 'build'], { cwd: root, stdio: 'ignore' });
+});
+
+/** The text of a PDF's pages as pdftotext reads them (poppler-utils), one string per page. */
+function pdfPages(path: string): string[] {
+  return execFileSync('pdftotext', ['-raw', path, '-'], { encoding: 'utf8' })
+    .split('\f')
+    .slice(0, -1)
+    .map((p) => p.replace(/\s+/g, ' '));
+}
+
+/**
+ * Two routes of our own (invented streets), printed as a crew would get them: an SI main of nine
+ * fittings and a US main of twelve, whose last sheet is full, so the job's take-off has no free row of
+ * sketches to sit in. Issue 12: at most one page per six fittings, the take-off included.
+ */
+for (const [name, paper] of [
+  ['probe-si', 'A4'],
+  ['probe-us', 'Letter'],
+  ['probe-us', 'A4'],
+  ['probe-si', 'Letter'],
+] as const) {
+  test(`the crew sheet of ${name} on ${paper} keeps to one ${paper} page per six fittings, take-off included`, async ({
+    page,
+  }) => {
+    const file = `${root}e2e/fixtures/${name}.json`;
+    const app = new MainbracePage(page);
+    await app.gotoFresh();
+    await app.openFile(file);
+    await expect.poll(async () => (await app.project()).name).toContain('probe');
+    const marks = (await app.schedule()).fittings.map((f) => f.mark);
+    const sheets = Math.ceil(marks.length / 6);
+    await page.getByRole('button', { name: 'Export ▾' }).click();
+    await page.getByRole('menuitem', { name: 'Print the schedule…' }).click();
+    const sheet = page.getByTestId('print-sheet');
+    if (paper === 'Letter') await page.getByLabel('Paper size').selectOption('letter');
+    await expect(sheet.locator('.crew-sheet')).toHaveAttribute('data-ready', 'yes');
+    await expect(page.getByTestId('crew-page')).toHaveCount(sheets);
+    await expect(page.getByTestId('job-takeoff')).toHaveCount(1);
+    mkdirSync('artifacts', { recursive: true });
+    await page.emulateMedia({ media: 'print' });
+    const clipped = await page.evaluate(() =>
+      Array.from(document.querySelectorAll('.sheet-page')).flatMap((pageBox, i) => {
+        const bottom = pageBox.querySelector('.sheet-foot')!.getBoundingClientRect().top + 1;
+        return Array.from(pageBox.querySelectorAll('.sheet-notes li, .sketch-lines li, .takeoff tr, .crew-table tr'))
+          .filter((el) => {
+            const r = el.getBoundingClientRect();
+            const box = el.closest('.sketch, .sheet-side');
+            const limit = box ? Math.min(bottom, box.getBoundingClientRect().bottom + 1) : bottom;
+            return r.bottom > limit;
+          })
+          .map((el) => `sheet ${i + 1}: ${el.textContent!.slice(0, 60)}`);
+      }),
+    );
+    expect(clipped).toEqual([]);
+    const pdf = `artifacts/${name}-${paper}.pdf`;
+    await page.pdf({ format: paper, landscape: true, printBackground: true, path: pdf });
+    const pages = pdfPages(pdf);
+    expect(pages.length).toBe(sheets);
+    const all = pages.join('\n');
+    expect(all).toMatch(/Total to order/);
+    // Chainage order: each mark's first appearance follows the one before it.
+    let at = -1;
+    for (const m of marks) {
+      const i = all.search(new RegExp(`(^|\\s)${m}\\s`));
+      expect(i, `${m} is printed`).toBeGreaterThan(at);
+      at = i;
+    }
+    // No id of the file's nodes or pipes on the crew part.
+    const project = JSON.parse(readFileSync(file, 'utf8')) as { nodes: { id: string }[]; pipes: { id: string }[] };
+    for (const { id } of [...project.nodes, ...project.pipes]) expect(all).not.toMatch(new RegExp(`\\b${id}\\b`));
+  });
+}
