@@ -25,7 +25,7 @@ export interface PipeFixture {
   label?: string;
 }
 
-/** DN300 EN 545 ductile iron, OD 326 mm (domain reference CV-9); the bore is an assumed 0.9 × OD. */
+/** DN300 EN 545 ductile iron, OD 326 mm (EN 545:2010; docs/check-values.md CV-9); the bore is an assumed 0.9 × OD. */
 export const DN300: PipeSpec = { outsideDiameter: 0.326, insideDiameter: 0.2934, material: 'ductile-iron' };
 
 /** Builds a project through the solver's own parser, so it is valid and carries every default. */

@@ -1,7 +1,7 @@
 import { test, expect } from '@playwright/test';
 import { MainbracePage, magnitude, pressureAt } from '../pages/mainbrace.js';
 
-// EN 545 / ISO 2531 external diameters (domain reference §7.4): DN200 222 mm, DN100 118 mm.
+// EN 545 / ISO 2531 external diameters, as in packages/solver/src/catalog/ductileIronEn545.ts: DN200 222 mm, DN100 118 mm.
 const OD_DN200 = 0.222;
 const OD_DN100 = 0.118;
 

@@ -33,7 +33,7 @@ const dot = (a: PlanPoint, b: PlanPoint) => a.x * b.x + a.y * b.y;
 const dist = (a: PlanPoint, b: PlanPoint) => Math.hypot(a.x - b.x, a.y - b.y);
 
 describe('planScene arrows', () => {
-  it('points the bend arrow to the outside of the bend, (1, −1)/√2, as the thrust from analyse (domain reference CV-24)', () => {
+  it('points the bend arrow to the outside of the bend, (1, −1)/√2, as the thrust from analyse (docs/check-values.md CV-24)', () => {
     const doc = bend('tie-in');
     const analysis = analyse(doc);
     const scene = planScene(doc, analysis, ENVELOPE, EMPTY_SELECTION, null);
