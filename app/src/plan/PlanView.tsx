@@ -171,6 +171,18 @@ export function PlanView() {
     [viewport, width, height, fittings, plainNodes, marks],
   );
 
+  // While the test pressure is dragged, on a layer of its own: the hover and the overlay above redraw
+  // with every pointer move, this only when the changes or the view do.
+  const cases = drawn.loadCases;
+  const drawLive = useCallback(
+    (_: Context, shape: KonvaShape) => {
+      if (!before) return;
+      const caseName = (id: string) => cases.find((x) => x.id === id)?.label ?? id;
+      drawLiveChange(native(shape), viewport, before.scene.polygons, changes, caseName, marks.space.clone());
+    },
+    [before, viewport, changes, cases, marks],
+  );
+
   const markedDrawn = useRef(false);
   useEffect(() => {
     // A mark for the start-up benchmark: the first time the route is on screen.
@@ -269,6 +281,11 @@ export function PlanView() {
         <Layer listening={false}>
           <Shape sceneFunc={drawMarks} />
         </Layer>
+        {before && (
+          <Layer listening={false}>
+            <Shape sceneFunc={drawLive} />
+          </Layer>
+        )}
         <Layer listening={false}>
           <Shape
             sceneFunc={(_, shape) => {
@@ -282,11 +299,6 @@ export function PlanView() {
                   placeTags(ctx, viewport, moving, new LabelSpace(size.width, size.height)),
                 );
               }
-              if (before)
-                drawLiveChange(ctx, viewport, before.scene.polygons, changes, (id) => {
-                  const c = drawn.loadCases.find((x) => x.id === id);
-                  return c?.label ?? id;
-                });
               drawHover(ctx, viewport, drawn, hover, tool === 'draw');
               drawOverlay(ctx, viewport, draw, selectBox, units, snappedNow);
               if (underlayPick && underlay)
