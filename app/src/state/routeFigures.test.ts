@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { analyseProject, norm, type Analysis, type FittingAnalysis } from '@mainbrace/solver';
-import { largestThrusts, networkLength, routeSummary } from './routeFigures.js';
+import { largestThrusts, networkLength, routeSummary, tightestMargins } from './routeFigures.js';
 import { project } from '../testFixtures.js';
 
 /** A stand-in analysis whose fittings carry only a governing thrust (all largestThrusts reads). */
@@ -21,6 +21,31 @@ describe('the largest thrusts of a route', () => {
       const a = withThrusts(Array.from({ length: trial % 23 }, next));
       for (const n of [0, 1, 5, 6, 30])
         expect(largestThrusts(a, n).map((f) => f.mark)).toEqual(bySort(a, n).map((f) => f.mark));
+    }
+  });
+});
+
+/** A stand-in analysis whose fittings carry only a block's passive margin, or no block (null). */
+const withMargins = (ratios: (number | null)[]): Analysis =>
+  ({
+    fittings: ratios.map((r, i) => ({
+      mark: `A${i + 1}`,
+      restraint: { block: r === null ? null : { passiveRatio: r } },
+    })),
+  }) as unknown as Analysis;
+
+describe('the tightest passive margins of a route', () => {
+  it('are the first of a stable sort of the blocked fittings, ties in route order (pseudo-random margins)', () => {
+    let seed = 11;
+    const next = () => ((seed = (seed * 16807) % 2147483647) % 9) / 4;
+    for (let trial = 0; trial < 200; trial++) {
+      const ratios = Array.from({ length: trial % 19 }, () => (next() > 1.5 ? null : next()));
+      const a = withMargins(ratios);
+      const bySortedMargin = a.fittings
+        .filter((f) => f.restraint.block)
+        .sort((x, y) => x.restraint.block!.passiveRatio - y.restraint.block!.passiveRatio);
+      for (const n of [0, 1, 5, 30])
+        expect(tightestMargins(a, n).map((f) => f.mark)).toEqual(bySortedMargin.slice(0, n).map((f) => f.mark));
     }
   });
 });

@@ -17,6 +17,26 @@ export function largestThrusts(analysis: Analysis, count: number): FittingAnalys
   return top.map((t) => t.f);
 }
 
+/**
+ * The fittings with a bearing block whose passive margin (resistance over thrust) is least, least
+ * first; ties in route order, as a stable sort would give them. One pass, as `largestThrusts`.
+ */
+export function tightestMargins(analysis: Analysis, count: number): FittingAnalysis[] {
+  const top: { f: FittingAnalysis; ratio: number }[] = [];
+  if (count <= 0) return [];
+  for (const f of analysis.fittings) {
+    const block = f.restraint.block;
+    if (!block) continue;
+    const ratio = block.passiveRatio;
+    if (top.length === count && ratio >= top[count - 1]!.ratio) continue;
+    let i = top.length;
+    while (i > 0 && top[i - 1]!.ratio > ratio) i--;
+    top.splice(i, 0, { f, ratio });
+    if (top.length > count) top.pop();
+  }
+  return top.map((t) => t.f);
+}
+
 /** Length of one pipe, m, node to node in 3-D, as the analysis measured it. */
 export const pipeLength = (analysis: Analysis, pipe: { id: string; from: string }): number =>
   analysis.legs.get(pipe.from)?.find((l) => l.pipe.id === pipe.id)?.length ?? 0;
