@@ -155,32 +155,27 @@ export function PlanView() {
     (_: Context, shape: KonvaShape) => drawPipes(native(shape), viewport, { pipes }, width, height),
     [viewport, width, height, pipes],
   );
+  // While the test pressure is dragged, the changes since it began go on this layer too: they change
+  // with the results, and the layer of the hover and the overlay redraws with every pointer move.
+  const cases = drawn.loadCases;
   const drawThrust = useCallback(
     (_: Context, shape: KonvaShape) => {
       const ctx = native(shape);
       const space = marks.space.clone();
       drawRestrainedZones(ctx, viewport, { zones }, units, space);
       drawArrows(ctx, viewport, { arrows, largestForce }, units, space);
+      if (before) {
+        const caseName = (id: string) => cases.find((x) => x.id === id)?.label ?? id;
+        drawLiveChange(ctx, viewport, before.scene.polygons, changes, caseName, space);
+      }
       performance.mark('mainbrace-results-drawn');
     },
-    [viewport, units, zones, arrows, largestForce, marks],
+    [viewport, units, zones, arrows, largestForce, marks, before, changes, cases],
   );
   const drawMarks = useCallback(
     (_: Context, shape: KonvaShape) =>
       drawFittings(native(shape), viewport, { fittings, plainNodes }, marks.tags, width, height),
     [viewport, width, height, fittings, plainNodes, marks],
-  );
-
-  // While the test pressure is dragged, on a layer of its own: the hover and the overlay above redraw
-  // with every pointer move, this only when the changes or the view do.
-  const cases = drawn.loadCases;
-  const drawLive = useCallback(
-    (_: Context, shape: KonvaShape) => {
-      if (!before) return;
-      const caseName = (id: string) => cases.find((x) => x.id === id)?.label ?? id;
-      drawLiveChange(native(shape), viewport, before.scene.polygons, changes, caseName, marks.space.clone());
-    },
-    [before, viewport, changes, cases, marks],
   );
 
   const markedDrawn = useRef(false);
@@ -281,11 +276,6 @@ export function PlanView() {
         <Layer listening={false}>
           <Shape sceneFunc={drawMarks} />
         </Layer>
-        {before && (
-          <Layer listening={false}>
-            <Shape sceneFunc={drawLive} />
-          </Layer>
-        )}
         <Layer listening={false}>
           <Shape
             sceneFunc={(_, shape) => {
