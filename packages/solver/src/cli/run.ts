@@ -8,7 +8,7 @@ import { analyse } from '../analysis/analyse.js';
 import { legsByNode } from '../network/legs.js';
 import { fittingGeometry, needsRestraint } from '../network/fittingKind.js';
 import { scheduleOf } from '../schedule/scheduleRows.js';
-import { scheduleJson } from '../schedule/scheduleJson.js';
+import { writeScheduleJson } from '../schedule/scheduleJson.js';
 import { scheduleView } from '../schedule/scheduleView.js';
 import { scheduleCsv } from '../schedule/scheduleCsv.js';
 import { scheduleTable } from '../schedule/scheduleTable.js';
@@ -17,7 +17,7 @@ import { takeOffCsv, takeOffTable } from '../schedule/quantitiesText.js';
 import { positionColumns } from '../schedule/stations.js';
 import type { UnitSystem } from '../units/conversions.js';
 import { DEFAULT_MAX_BYTES } from './readLimited.js';
-import { escapeControls, escapeStrings, terminalSafe } from './terminalText.js';
+import { escapeControls, escapeStrings, terminalJsonString, terminalSafe } from './terminalText.js';
 
 /** What the command line needs from the outside world, so that it runs in tests without a process. */
 export interface CliIo {
@@ -214,7 +214,10 @@ export async function runCli(argv: readonly string[], rawIo: CliIo): Promise<num
     const pretty = io.interactive === true || args.options.has('pretty');
     // What the file already says (positions, labels, soils, pipe sizes) is left out unless --full.
     const full = args.options.has('full');
-    if (format === 'json') io.out(scheduleJson(scheduleOf(analysis), { pretty, echo: full }));
+    if (format === 'json')
+      // Streamed in pieces, each string quoted safe for a terminal as it is written: the same text as
+      // terminalSafe over the whole, without holding or scanning some 13 MB at 10,000 fittings.
+      writeScheduleJson(scheduleOf(analysis), rawIo.out, { pretty, echo: full, quote: terminalJsonString });
     else if (format === 'csv') io.out(scheduleCsv(escapeStrings(scheduleView(analysis, units))));
     else if (format === 'table')
       io.out(

@@ -33,3 +33,12 @@ export function escapeStrings<T>(value: T): T {
  * a terminal would act on.
  */
 export const terminalSafe = (text: string): string => text.replace(CONTROL_BUT_LINE_ENDS, escaped);
+
+/**
+ * A string as a JSON literal with nothing a terminal acts on: JSON.stringify already writes every C0
+ * control as an escape, so what is left (DEL, C1, the separators and bidirectional marks) is escaped
+ * as JSON writes it too. The streamed JSON schedule quotes every string this way, which makes the
+ * whole text what `terminalSafe` would make of it without a scan of all of it (numbers, keys and
+ * punctuation are the writer's own).
+ */
+export const terminalJsonString = (text: string): string => escapeControls(JSON.stringify(text));
