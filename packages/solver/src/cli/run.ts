@@ -17,7 +17,7 @@ import { takeOffCsv, takeOffTable } from '../schedule/quantitiesText.js';
 import { positionColumns } from '../schedule/stations.js';
 import type { UnitSystem } from '../units/conversions.js';
 import { DEFAULT_MAX_BYTES } from './readLimited.js';
-import { escapeControls, escapeStrings, terminalJsonString, terminalSafe } from './terminalText.js';
+import { escapeControls, escapeStrings, terminalSafe } from './terminalText.js';
 
 /** What the command line needs from the outside world, so that it runs in tests without a process. */
 export interface CliIo {
@@ -215,9 +215,9 @@ export async function runCli(argv: readonly string[], rawIo: CliIo): Promise<num
     // What the file already says (positions, labels, soils, pipe sizes) is left out unless --full.
     const full = args.options.has('full');
     if (format === 'json')
-      // Streamed in pieces, each string quoted safe for a terminal as it is written: the same text as
-      // terminalSafe over the whole, without holding or scanning some 13 MB at 10,000 fittings.
-      writeScheduleJson(scheduleOf(analysis), rawIo.out, { pretty, echo: full, quote: terminalJsonString });
+      // Streamed in pieces (some 13 MB at 10,000 fittings), each through the terminal guard: the same
+      // text as guarding the whole, since JSON has no raw CR or other C0 control for a cut to split.
+      writeScheduleJson(scheduleOf(analysis), io.out, { pretty, echo: full });
     else if (format === 'csv') io.out(scheduleCsv(escapeStrings(scheduleView(analysis, units))));
     else if (format === 'table')
       io.out(

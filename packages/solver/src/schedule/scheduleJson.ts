@@ -56,11 +56,6 @@ export interface ScheduleJsonOptions {
 }
 
 export interface ScheduleJsonWriting extends ScheduleJsonOptions {
-  /**
-   * a string value as a JSON literal (default JSON.stringify); the command line also escapes what a
-   * terminal would act on. Keys, numbers and punctuation are the writer's own and never pass here.
-   */
-  quote?: (text: string) => string;
   /** characters gathered before each call of `write` (default 64 Ki) */
   chunk?: number;
 }
@@ -76,17 +71,18 @@ const roundOrNull = (v: number | null, decimals: number) => (v === null ? 'null'
 const vec = (v: Vec3, decimals: number) =>
   `[${round(v[0], decimals)},${round(v[1], decimals)},${round(v[2], decimals)}]`;
 
-type Quote = (text: string) => string;
+/** A string value as a JSON literal. */
+const q = (text: string): string => JSON.stringify(text);
 
-const orNull = (text: string | null, q: Quote) => (text === null ? 'null' : q(text));
+const orNull = (text: string | null) => (text === null ? 'null' : q(text));
 
-function list(items: readonly string[], q: Quote): string {
+function list(items: readonly string[]): string {
   let out = '';
   for (let i = 0; i < items.length; i++) out += (i ? ',' : '') + q(items[i]!);
   return `[${out}]`;
 }
 
-function block(b: ScheduleBlock | null, q: Quote): string {
+function block(b: ScheduleBlock | null): string {
   if (!b) return 'null';
   return (
     `{"bearingArea":${round(b.bearingArea, D.area)},"faceWidth":${up(b.faceWidth, D.length)}` +
@@ -99,7 +95,7 @@ function block(b: ScheduleBlock | null, q: Quote): string {
 }
 
 /** What `diagnosticJson` gives, as text: the subject's fields in their order, each value with its kind. */
-function diagnosticText(d: Diagnostic, q: Quote): string {
+function diagnosticText(d: Diagnostic): string {
   const kinds = DIAGNOSTIC_CODES[d.code].values as Record<string, Dimension>;
   let subject = '';
   const s = d.subject as Record<string, unknown>;
@@ -116,13 +112,13 @@ function diagnosticText(d: Diagnostic, q: Quote): string {
   return `{"code":${q(d.code)},"severity":${q(d.severity)},"subject":{${subject}},"values":{${values}}}`;
 }
 
-function diagnosticList(list: readonly Diagnostic[], q: Quote): string {
+function diagnosticList(list: readonly Diagnostic[]): string {
   let out = '';
-  for (let i = 0; i < list.length; i++) out += (i ? ',' : '') + diagnosticText(list[i]!, q);
+  for (let i = 0; i < list.length; i++) out += (i ? ',' : '') + diagnosticText(list[i]!);
   return `[${out}]`;
 }
 
-function restraintText(x: ScheduleFitting['restraint'], q: Quote): string {
+function restraintText(x: ScheduleFitting['restraint']): string {
   const a = x.anchor;
   const anchor = a
     ? `{"concreteVolume":${up(a.concreteVolume, D.volume)},"length":${up(a.length, D.length)}` +
@@ -139,10 +135,10 @@ function restraintText(x: ScheduleFitting['restraint'], q: Quote): string {
     const l = x.restrainedLegs[i]!;
     legs +=
       `${i ? ',' : ''}{"pipe":${q(l.pipe)},"length":${up(l.length, D.length)}` +
-      `,"toward":${orNull(l.toward, q)},"joints":${num(l.joints)}}`;
+      `,"toward":${orNull(l.toward)},"joints":${num(l.joints)}}`;
   }
   return (
-    `{"block":${block(x.block, q)},"reverseBlock":${block(x.reverseBlock, q)},"anchor":${anchor}` +
+    `{"block":${block(x.block)},"reverseBlock":${block(x.reverseBlock)},"anchor":${anchor}` +
     `,"trenchBottom":${trench},"restrainedLength":${x.restrainedLength === null ? 'null' : up(x.restrainedLength, D.length)}` +
     `,"restrainedLegs":[${legs}]}`
   );
@@ -153,14 +149,14 @@ function restraintText(x: ScheduleFitting['restraint'], q: Quote): string {
  * what the project file already says (position, label, soil, the pipes' sizes) is left out and the
  * pipes, as id and toward, come last.
  */
-function fittingText(f: ScheduleFitting, echo: boolean, q: Quote): string {
+function fittingText(f: ScheduleFitting, echo: boolean): string {
   let pipes = '';
   for (let i = 0; i < f.pipes.length; i++) {
     const p = f.pipes[i]!;
     pipes += echo
       ? `${i ? ',' : ''}{"id":${q(p.id)},"outsideDiameter":${round(p.outsideDiameter, D.diameter)}` +
-        `,"insideDiameter":${round(p.insideDiameter, D.diameter)},"material":${q(p.material)},"toward":${orNull(p.toward, q)}}`
-      : `${i ? ',' : ''}{"id":${q(p.id)},"toward":${orNull(p.toward, q)}}`;
+        `,"insideDiameter":${round(p.insideDiameter, D.diameter)},"material":${q(p.material)},"toward":${orNull(p.toward)}}`
+      : `${i ? ',' : ''}{"id":${q(p.id)},"toward":${orNull(p.toward)}}`;
   }
   let cases = '';
   for (let i = 0; i < f.cases.length; i++) {
@@ -168,11 +164,11 @@ function fittingText(f: ScheduleFitting, echo: boolean, q: Quote): string {
     cases +=
       `${i ? ',' : ''}{"case":${q(c.case)},"pressure":${round(c.pressure, D.pressure)}` +
       `,"static":${vec(c.static, D.force)},"dynamic":${vec(c.dynamic, D.force)},"total":${vec(c.total, D.force)}` +
-      `,"closedAgainst":${orNull(c.closedAgainst, q)}}`;
+      `,"closedAgainst":${orNull(c.closedAgainst)}}`;
   }
   return (
     `{"node":${q(f.node)},"mark":${q(f.mark)},"run":${q(f.run)}` +
-    (echo ? `,"label":${orNull(f.label, q)}` : '') +
+    (echo ? `,"label":${orNull(f.label)}` : '') +
     `,"kind":${q(f.kind)},"deflection":${roundOrNull(f.deflection, D.angle)}` +
     `,"horizontalDeflection":${roundOrNull(f.horizontalDeflection, D.angle)}` +
     `,"verticalDeflection":${roundOrNull(f.verticalDeflection, D.angle)}` +
@@ -184,10 +180,10 @@ function fittingText(f: ScheduleFitting, echo: boolean, q: Quote): string {
     `,"designPressure":${round(f.designPressure, D.pressure)},"thrust":${vec(f.thrust, D.force)}` +
     `,"horizontalThrust":${round(f.horizontalThrust, D.force)},"upwardThrust":${round(f.upwardThrust, D.force)}` +
     `,"downwardThrust":${round(f.downwardThrust, D.force)}` +
-    `,"bearingDirection":${roundOrNull(f.bearingDirection, D.angle)},"profile":${orNull(f.profile, q)}` +
-    `,"waterWeight":${round(f.waterWeight, D.force)},"restraint":${restraintText(f.restraint, q)}` +
-    `,"warnings":${list(f.warnings, q)},"diagnostics":${diagnosticList(f.diagnostics, q)}` +
-    `,"unverified":${list(f.unverified, q)}` +
+    `,"bearingDirection":${roundOrNull(f.bearingDirection, D.angle)},"profile":${orNull(f.profile)}` +
+    `,"waterWeight":${round(f.waterWeight, D.force)},"restraint":${restraintText(f.restraint)}` +
+    `,"warnings":${list(f.warnings)},"diagnostics":${diagnosticList(f.diagnostics)}` +
+    `,"unverified":${list(f.unverified)}` +
     (echo ? '}' : `,"pipes":[${pipes}]}`)
   );
 }
@@ -200,7 +196,7 @@ function fittingText(f: ScheduleFitting, echo: boolean, q: Quote): string {
  * schedule's fields in the row's order — held so, byte for byte, by a test against that serialiser.
  */
 export function writeScheduleJson(s: Schedule, write: (text: string) => void, options: ScheduleJsonWriting = {}): void {
-  const { pretty = false, echo = true, quote: q = JSON.stringify, chunk = 1 << 16 } = options;
+  const { pretty = false, echo = true, chunk = 1 << 16 } = options;
   const indent = pretty ? new JsonIndenter() : null;
   let pending = '';
   const put = (text: string) => {
@@ -211,12 +207,12 @@ export function writeScheduleJson(s: Schedule, write: (text: string) => void, op
     }
   };
   put(
-    `{"project":${q(s.project)},"units":${q(s.units)},"warnings":${list(s.warnings, q)}` +
-      `,"diagnostics":${diagnosticList(s.diagnostics, q)},"fittings":[`,
+    `{"project":${q(s.project)},"units":${q(s.units)},"warnings":${list(s.warnings)}` +
+      `,"diagnostics":${diagnosticList(s.diagnostics)},"fittings":[`,
   );
   const fittings = s.fittings;
-  for (let i = 0; i < fittings.length; i++) put((i ? ',' : '') + fittingText(fittings[i]!, echo, q));
-  put(`],"cautions":${list(s.cautions, q)}}`);
+  for (let i = 0; i < fittings.length; i++) put((i ? ',' : '') + fittingText(fittings[i]!, echo));
+  put(`],"cautions":${list(s.cautions)}}`);
   write((indent ? indent.feed(pending) : pending) + '\n');
 }
 
