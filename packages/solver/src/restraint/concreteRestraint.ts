@@ -242,8 +242,9 @@ function sizeBlocks(
   }
   const block = (force: number, direction: Vec3) => {
     const across = acrossTrench(direction, legs);
+    // One shape of input for every block (no conditional spread): sized at every fitting on every edit.
     const r = sizeBearingBlock({
-      ...(across ? { trenchWidth: site.trenchWidth } : {}),
+      trenchWidth: across ? site.trenchWidth : undefined,
       thrust: force,
       direction,
       allowableBearing: allowable,
@@ -257,7 +258,7 @@ function sizeBlocks(
       waterUnitWeight: site.waterUnitWeight,
       record,
     });
-    out.steps.push(...r.steps);
+    for (const step of r.steps) out.steps.push(step);
     for (const d of r.diagnostics) out.diagnostics.push({ ...d, subject: { ...d.subject, node } });
     if (r.block && across && r.block.faceWidth > site.trenchWidth + 1e-9) {
       out.diagnostics.push(
