@@ -116,12 +116,34 @@ export function fittingProfile(f: FittingAnalysis): ScheduleFitting['profile'] {
   return upward.force >= downward.force ? 'crest' : 'sag';
 }
 
+/**
+ * The schedule keeps every block field but the depth of the face bottom, an intermediate value (field
+ * by field, in the block's order: a rest pattern copies through a slow path, once per row).
+ */
+function scheduled(b: BearingBlock | null): ScheduleBlock | null {
+  return (
+    b && {
+      bearingArea: b.bearingArea,
+      faceWidth: b.faceWidth,
+      faceHeight: b.faceHeight,
+      concreteVolume: b.concreteVolume,
+      depth: b.depth,
+      direction: b.direction,
+      passiveResistance: b.passiveResistance,
+      shapeFactor: b.shapeFactor,
+      passiveRatio: b.passiveRatio,
+      thrust: b.thrust,
+      upwardThrust: b.upwardThrust,
+      governs: b.governs,
+    }
+  );
+}
+
 function row(a: Analysis, f: FittingAnalysis, words: (d: Diagnostic) => string): ScheduleFitting {
   const { restraint: r, envelope: e, geometry: g } = f;
-  // The schedule keeps every block field but the depth of the face bottom, an intermediate value.
-  const scheduled = (b: BearingBlock | null): ScheduleBlock | null =>
-    b && (({ bottomDepth: _bottom, ...rest }) => rest)(b);
   const toward = (pipe: string) => legTarget(a, f.node.id, pipe);
+  let od = 0;
+  for (const l of f.legs) od = Math.max(od, l.pipe.outsideDiameter);
   return {
     node: f.node.id,
     mark: f.mark,
@@ -135,7 +157,7 @@ function row(a: Analysis, f: FittingAnalysis, words: (d: Diagnostic) => string):
     chainage: f.chainage,
     position: [f.node.x, f.node.y, f.node.elevation],
     cover: f.node.cover,
-    groundLevel: f.node.elevation + Math.max(0, ...f.legs.map((l) => l.pipe.outsideDiameter)) / 2 + f.node.cover,
+    groundLevel: f.node.elevation + od / 2 + f.node.cover,
     pipes: f.legs.map((l) => ({
       id: l.pipe.id,
       outsideDiameter: l.pipe.outsideDiameter,
