@@ -2,7 +2,8 @@ import type { Vec3 } from '../geometry/vector.js';
 import { value, type CalcStep } from '../analysis/calcRecord.js';
 import {
   ovesenAt,
-  ovesenDepthTerms,
+  ovesenDepthTerm,
+  ovesenDepthTerm3,
   ovesenFactor,
   passivePerWidth,
   passiveResistance,
@@ -181,11 +182,13 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
     );
     const h = bottom - Math.max(0, top);
     const flat = !(h > 0) || d <= 0;
-    const terms = flat ? null : ovesenDepthTerms(d, 1 - h / bottom);
+    const e = 1 - h / bottom;
+    const term4 = flat ? 0 : ovesenDepthTerm(e);
+    const term3 = flat ? 0 : ovesenDepthTerm3(d, e);
     const steps = Math.floor((wMax - wBearing) / i.step + 1e-9);
     const holds = (n: number) => {
       const width = wBearing + n * i.step;
-      const shape = terms === null || !(width > 0) ? 1 : ovesenAt(d23, terms, h, width);
+      const shape = flat || !(width > 0) ? 1 : ovesenAt(d23, term4, term3, h, width);
       return width * perWidth * shape >= needed;
     };
     let lo = 0;

@@ -123,22 +123,21 @@ export function ovesenFactor(p: OvesenInput): number {
   const h = p.bottom - Math.max(0, p.top);
   if (!(h > 0) || !(p.width > 0) || d <= 0) return 1;
   const e = 1 - h / p.bottom;
-  return ovesenAt(d ** (2 / 3), ovesenDepthTerms(d, e), h, p.width);
+  return ovesenAt(d ** (2 / 3), ovesenDepthTerm(e), ovesenDepthTerm3(d, e), h, p.width);
 }
 
 const SPACING = 1; // B = 1 − (b/s)² with no neighbouring block
 
 /**
- * The parts of Ovesen's factor that do not depend on the width, for a face of depth ratio E:
- * [1.1·E⁴, 0.4·(Kp − Ka)·E³·B²]. `ovesenAt` finishes the factor for a width; a search over widths at
- * one height works these out once (the same arithmetic, so the same numbers as `ovesenFactor`).
+ * The parts of Ovesen's factor that do not depend on the width, for a face of depth ratio E: 1.1·E⁴
+ * and 0.4·(Kp − Ka)·E³·B². `ovesenAt` finishes the factor for a width; a search over widths at one
+ * height works these out once (the same arithmetic, so the same numbers as `ovesenFactor`).
  */
-export function ovesenDepthTerms(d: number, e: number): [number, number] {
-  return [1.1 * e ** 4, 0.4 * d * e ** 3 * SPACING ** 2];
-}
+export const ovesenDepthTerm = (e: number): number => 1.1 * e ** 4;
+export const ovesenDepthTerm3 = (d: number, e: number): number => 0.4 * d * e ** 3 * SPACING ** 2;
 
-/** Ovesen's factor from (Kp − Ka)^⅔, the depth terms, the face height h > 0 and width b > 0. */
-export function ovesenAt(d23: number, terms: readonly [number, number], h: number, width: number): number {
+/** Ovesen's factor from (Kp − Ka)^⅔, the two depth terms, the face height h > 0 and width b > 0. */
+export function ovesenAt(d23: number, term4: number, term3: number, h: number, width: number): number {
   const r = width / h;
-  return 1 + d23 * (terms[0] + (1.6 * SPACING) / (1 + 5 * r) + terms[1] / (1 + 0.05 * r));
+  return 1 + d23 * (term4 + (1.6 * SPACING) / (1 + 5 * r) + term3 / (1 + 0.05 * r));
 }
