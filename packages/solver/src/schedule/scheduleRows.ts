@@ -144,7 +144,7 @@ function row(a: Analysis, f: FittingAnalysis, words: (d: Diagnostic) => string):
   const toward = (pipe: string) => legTarget(a, f.node.id, pipe);
   let od = 0;
   for (const l of f.legs) od = Math.max(od, l.pipe.outsideDiameter);
-  return {
+  const out: Omit<ScheduleFitting, 'warnings' | 'diagnostics' | 'unverified'> = {
     node: f.node.id,
     mark: f.mark,
     run: f.run,
@@ -205,15 +205,27 @@ function row(a: Analysis, f: FittingAnalysis, words: (d: Diagnostic) => string):
         joints: restrainedJointCount(l.length, a.project.design.layingLength),
       })),
     },
-    // Worded when first read: the table, the print and the JSON read them; a pressure change does not.
-    get warnings() {
-      const list = f.diagnostics.length ? f.diagnostics.map(words) : [];
-      Object.defineProperty(this, 'warnings', { value: list, enumerable: true });
-      return list;
-    },
-    diagnostics: f.diagnostics,
-    unverified: unverified(f.basis),
   };
+  // Worded when first read: the table, the print and the JSON read them; a pressure change does not.
+  // One getter shared by every row (a getter made per row puts each row in dictionary mode, twice
+  // the memory), defined here to keep the fields in their order.
+  rowWords.set(out, words);
+  Object.defineProperty(out, 'warnings', { get: wordWarnings, enumerable: true, configurable: true });
+  const row = out as Omit<ScheduleFitting, 'warnings'> as ScheduleFitting;
+  row.diagnostics = f.diagnostics;
+  row.unverified = unverified(f.basis);
+  return row;
+}
+
+/** The wording of each row's findings, until its warnings are read. */
+const rowWords = new WeakMap<object, (d: Diagnostic) => string>();
+
+function wordWarnings(this: ScheduleFitting): string[] {
+  const words = rowWords.get(this)!;
+  const list = this.diagnostics.length ? this.diagnostics.map(words) : [];
+  Object.defineProperty(this, 'warnings', { value: list, enumerable: true });
+  rowWords.delete(this);
+  return list;
 }
 
 const schedules = new WeakMap<Analysis, Schedule>();
