@@ -3,7 +3,7 @@ import { createRoot } from 'react-dom/client';
 import { analyse, findSize, scheduleOf, type Project } from '@mainbrace/solver';
 import { App } from './App.js';
 import { createAppStore } from './state/store.js';
-import { createActions, validated } from './state/actions.js';
+import { createActions } from './state/actions.js';
 import { StoreProvider } from './state/StoreContext.js';
 import { restoreProject, startAutosave, type Restored } from './state/autosave.js';
 import { browserStore } from './state/keyValue.js';
@@ -18,11 +18,9 @@ import { installShortcuts } from './chrome/shortcuts.js';
 import { ErrorBoundary } from './chrome/ErrorBoundary.js';
 import { blankProject } from './files/blankProject.js';
 import type { PipeSpec } from './state/documentEdits.js';
-import { loadChecks } from './state/checks.js';
+import { loadChecks, validated } from './state/checks.js';
+import { afterFirstDraw } from './chrome/warmUp.js';
 import './styles.css';
-
-// The schema checks load beside this module, not inside it; nothing is opened before they are here.
-const checksLoaded = loadChecks();
 
 const DEMO_URL = `${import.meta.env.BASE_URL}demo/larkspur-rise.json`;
 
@@ -30,7 +28,7 @@ const DEMO_URL = `${import.meta.env.BASE_URL}demo/larkspur-rise.json`;
 async function firstProject(kept: Restored): Promise<Project> {
   if (kept.kind === 'project') return kept.project;
   try {
-    const r = validated(await (await fetch(DEMO_URL)).json());
+    const r = await validated(await (await fetch(DEMO_URL)).json());
     if (r.ok) return r.project;
   } catch {
     // offline and not cached: start blank
@@ -82,7 +80,6 @@ function keptNotice(kept: Restored): Notice | null {
 }
 
 async function start() {
-  await checksLoaded;
   const kv = browserStore;
   const channel = openTabChannel();
   bindKeptCopies(kv, channel);
@@ -145,3 +142,5 @@ async function start() {
 
 void start();
 registerServiceWorker();
+// The schema checks (zod) word refusals and check edits: a valid project opens without them.
+afterFirstDraw(() => void loadChecks().catch(() => undefined));

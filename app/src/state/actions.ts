@@ -1,4 +1,5 @@
 import {
+  quickParse,
   sheetOf,
   type LoadCase,
   type Pipe,
@@ -27,7 +28,7 @@ import type { DrawState } from '../tools/drawTool.js';
 import { fittedView, revealFitting as planCommandReveal, showFitting } from '../tools/planCommands.js';
 import { planInputOf } from '../tools/planBridge.js';
 import { editProblems } from './editCheck.js';
-import { checks } from './checks.js';
+import { checksReady, loadChecks } from './checks.js';
 
 /** Typing pauses shorter than this, ms, keep extending the same undo step. */
 const TYPING_WINDOW_MS = 1500;
@@ -54,6 +55,23 @@ function prune(sel: Selection, p: Project): Selection {
 export function createActions(store: AppStore) {
   const get = store.getState;
   const set = (patch: Partial<AppState>) => store.setState(patch);
+  /** Edits waiting for the schema checks, in the order they were made; null when none waits. */
+  let waiting: Promise<void> | null = null;
+  const later = (run: () => void) => {
+    const next = (waiting ?? loadChecks()).then(run, () =>
+      set({
+        notice: {
+          tone: 'error',
+          title: 'That change was not made: the project checks could not be loaded',
+          lines: ['Reload the page (your project is kept) and make the change again.'],
+        },
+      }),
+    );
+    waiting = next;
+    void next.finally(() => {
+      if (waiting === next) waiting = null;
+    });
+  };
   /**
    * An undoable edit: a new document from the old one. A change that would leave the document
    * invalid (two nodes on one point, an ID above the OD) is refused with a message, never stored.
@@ -61,10 +79,18 @@ export function createActions(store: AppStore) {
    * already (opened, restored) comes `checked` and is not checked again.
    */
   const edit = (change: (p: Project) => Project, typing?: string, checked = false) => {
+    if (waiting) later(() => apply(change, typing, checked));
+    else apply(change, typing, checked);
+  };
+  const apply = (change: (p: Project) => Project, typing: string | undefined, checked: boolean) => {
     const before = get().project;
     const after = change(before);
     if (after === before) return;
-    const lines = checked ? [] : editProblems(before, after);
+    let lines: string[] = [];
+    if (!checked && checksReady()) lines = editProblems(before, after);
+    // The schema checks load after the first screen: until then an edit the check by hand passes
+    // as a whole document is made at once; any other waits for them, and so do the edits after it.
+    else if (!checked && !quickParse(after)) return later(() => apply(change, typing, checked));
     if (lines.length) {
       set({
         notice: {
@@ -274,11 +300,3 @@ export function createActions(store: AppStore) {
 }
 
 export type Actions = ReturnType<typeof createActions>;
-
-/** Checks a whole document before it replaces the current one (used by Open and restore). */
-export function validated(data: unknown): { ok: true; project: Project } | { ok: false; lines: string[] } {
-  const r = checks().parseProject(data);
-  return r.ok
-    ? { ok: true, project: r.project }
-    : { ok: false, lines: r.problems.map((p) => (p.path ? `${p.path}: ${p.message}` : p.message)) };
-}

@@ -128,7 +128,7 @@ export function startAutosave(store: AppStore, o: AutosaveOptions) {
 
   async function takeTheirs() {
     const theirs = await readRecord(kv);
-    const r = theirs ? projectFromText(theirs.text) : null;
+    const r = theirs ? await projectFromText(theirs.text) : null;
     if (!theirs || !r?.ok) {
       o.notify({
         tone: 'error',
@@ -158,8 +158,9 @@ export function startAutosave(store: AppStore, o: AutosaveOptions) {
     if (conflict || timer || current() !== saved || revision <= base) return;
     const theirs = await readRecord(kv);
     if (!theirs || theirs.revision <= base) return;
-    const r = projectFromText(theirs.text);
+    const r = await projectFromText(theirs.text);
     if (!r.ok) return; // the next save finds the newer copy and asks
+    if (conflict || timer || current() !== saved) return; // an edit came in while it was checked
     accept(theirs.revision, r.project, false);
     o.adopt(r.project);
     o.notify({ tone: 'info', title: 'Updated with the changes saved in another tab', lines: [] });

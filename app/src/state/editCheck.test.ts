@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { Project } from '@mainbrace/solver';
 import { editProblems } from './editCheck.js';
-import { validated } from './actions.js';
+import { validated } from './checks.js';
 import { project } from '../testFixtures.js';
 
 /** An L-shaped main of three nodes (invented: Quillon Street). */
@@ -55,7 +55,7 @@ describe('checking only what an edit changed', () => {
 
   // Invariant: for an edit of a valid document, the part check refuses exactly what the whole-file
   // check refuses (the whole-file check is the reference; both words come from the same schema).
-  it('refuses exactly what checking the whole document refuses', () => {
+  it('refuses exactly what checking the whole document refuses', async () => {
     const p = doc();
     const edits: Project[] = [
       withNode(p, 0, { elevation: Number.NaN }),
@@ -75,7 +75,7 @@ describe('checking only what an edit changed', () => {
       { ...p, units: 'us' },
     ];
     for (const after of edits) {
-      const whole = validated(after);
+      const whole = await validated(after);
       expect(editProblems(p, after).length > 0).toBe(!whole.ok);
       if (!whole.ok) expect(editProblems(p, after)[0]).toBe(whole.lines[0]);
     }

@@ -30,6 +30,6 @@ describe('checking a project text on or off the page', () => {
     const file = await checkProjectText(broken, 'file');
     const reference = parseProjectText(broken);
     expect(file).toEqual({ ok: false, lines: reference.ok ? [] : reference.problems.map(problemText) });
-    expect(await checkProjectText(broken, 'stored')).toEqual(projectFromText(broken));
+    expect(await checkProjectText(broken, 'stored')).toEqual(await projectFromText(broken));
   });
 });

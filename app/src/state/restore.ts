@@ -1,5 +1,5 @@
 import type { Project } from '@mainbrace/solver';
-import { validated } from './actions.js';
+import { validated, type Validated } from './checks.js';
 import type { KeyValueStore } from './keyValue.js';
 import { readRecord, type StoredRecord } from './storedProject.js';
 import { keepCopyOnce, type KeptCopy } from './keptCopies.js';
@@ -17,12 +17,14 @@ export type Restored =
   | { kind: 'storage-failed'; detail: string };
 
 /** A stored project text as a project, or the reasons it is not one. */
-export function projectFromText(text: string): { ok: true; project: Project } | { ok: false; lines: string[] } {
+export async function projectFromText(text: string): Promise<Validated> {
+  let data: unknown;
   try {
-    return validated(JSON.parse(text));
+    data = JSON.parse(text);
   } catch (e) {
     return { ok: false, lines: [`not valid JSON: ${(e as Error).message}`] };
   }
+  return validated(data);
 }
 
 /**

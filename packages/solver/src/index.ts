@@ -8,6 +8,7 @@ export { nodeCover, nodeGround, nodeOutsideDiameters, pipeLevelFor, coverFor } f
 export { caseLabel } from './model/caseLabel.js';
 export { blankSheet, sheetOf } from './model/sheet.js';
 export { parseProject, parseProjectText, type ParseResult } from './model/parseProject.js';
+export { quickParse } from './model/quickParse.js';
 export { partProblems, crossProblems, type ProjectList } from './model/partCheck.js';
 export { problemText, type Problem } from './model/problems.js';
 export { projectJsonSchema } from './model/jsonSchema.js';

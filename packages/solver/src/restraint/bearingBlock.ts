@@ -94,7 +94,8 @@ interface Face {
 }
 
 /**
- * Sizes a concrete bearing block against undisturbed soil (domain reference §4.1, §4.6, §4.7). The face
+ * Sizes a concrete bearing block against undisturbed soil (DIPRA bearing method, Rankine
+ * passive resistance, DIPRA/AWWA M23 face proportions). The face
  * is centred on the pipe; every face the limits allow is a candidate — heights in whole steps from the
  * OD to the face rule's tallest (⅔ of the centreline depth), widths in whole steps up to twice the
  * height (and within the trench where the face stands across it), or up to the register's widest face at the tallest height, where the cover stops deepening.

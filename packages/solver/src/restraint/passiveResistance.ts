@@ -62,8 +62,8 @@ export interface PassiveInput {
 }
 
 /**
- * Ultimate passive resistance of a vertical block face, N (domain reference §4.6, Rankine with
- * cohesion): R_p = b·∫[Kp·σ'v(z) + 2c·√Kp] dz, which is b·[½γKp(z2² − z1²) + 2c√Kp(z2 − z1)] in dry
+ * Ultimate passive resistance of a vertical block face, N (Rankine earth pressure with
+ * cohesion, as AWWA M23 and utility details apply it): R_p = b·∫[Kp·σ'v(z) + 2c·√Kp] dz, which is b·[½γKp(z2² − z1²) + 2c√Kp(z2 − z1)] in dry
  * soil. Water pressure acts on both faces of the block and cancels.
  */
 export function passiveResistance(p: PassiveInput): number {

@@ -1,0 +1,74 @@
+import { describe, expect, it, vi } from 'vitest';
+import { readFileSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { parseProject, problemText } from '@mainbrace/solver';
+import { DN300, project } from '../testFixtures.js';
+
+const demo = JSON.parse(
+  readFileSync(resolve(import.meta.dirname, '../../../public/demo/larkspur-rise.json'), 'utf8'),
+) as unknown;
+
+/** Fresh copies of the checks and the actions, with the schema checks not loaded yet (as at start). */
+async function fresh() {
+  vi.resetModules();
+  const checks = await import('./checks.js');
+  const { createActions } = await import('./actions.js');
+  const { createAppStore } = await import('./store.js');
+  return { checks, createActions, createAppStore };
+}
+
+describe('opening a project without the schema library', () => {
+  it('opens the demo checked by hand, the same document as the schema gives, without loading the schema', async () => {
+    const { checks } = await fresh();
+    const r = await checks.validated(demo);
+    expect(checks.checksReady()).toBe(false);
+    const schema = parseProject(demo);
+    expect(r.ok && schema.ok).toBe(true);
+    // the same text as saved: same fields in the same order (the schema's output is the reference)
+    expect(r.ok && JSON.stringify(r.project)).toBe(schema.ok && JSON.stringify(schema.project));
+  });
+
+  it('loads the schema to word a refusal, with the whole-file check’s words', async () => {
+    const { checks } = await fresh();
+    const bad = structuredClone(demo) as { nodes: { elevation: unknown }[] };
+    bad.nodes[1]!.elevation = 'high';
+    const r = await checks.validated(bad);
+    expect(checks.checksReady()).toBe(true);
+    const schema = parseProject(bad);
+    expect(r).toEqual({ ok: false, lines: schema.ok ? [] : schema.problems.map(problemText) });
+    expect(r.ok ? '' : r.lines[0]).toBe('nodes[1].elevation: expected a number, got the text "high"');
+  });
+});
+
+describe('edits made before the schema checks are loaded', () => {
+  const doc = () =>
+    project(
+      [
+        { id: 'n1', x: 0, y: 0 },
+        { id: 'n2', x: 25, y: 0 },
+      ],
+      [{ from: 'n1', to: 'n2' }],
+    );
+
+  it('makes an edit the check by hand passes at once', async () => {
+    const { checks, createActions, createAppStore } = await fresh();
+    const store = createAppStore(doc(), DN300);
+    createActions(store).updateNode('n2', { cover: 2.1 });
+    expect(checks.checksReady()).toBe(false);
+    expect(store.getState().project.nodes[1]!.cover).toBe(2.1);
+  });
+
+  it('refuses a bad edit with the schema’s words once they load, and keeps later edits in order', async () => {
+    const { checks, createActions, createAppStore } = await fresh();
+    const store = createAppStore(doc(), DN300);
+    const actions = createActions(store);
+    actions.updateNode('n2', { cover: Number.NaN }); // waits for the schema checks
+    actions.updateNode('n2', { cover: 1.7 }); // would pass by hand, but waits its turn
+    expect(store.getState().project.nodes[1]!.cover).not.toBe(1.7);
+    await checks.loadChecks();
+    await vi.waitFor(() => expect(store.getState().project.nodes[1]!.cover).toBe(1.7));
+    expect(store.getState().notice?.title).toBe('That change was not made: it would leave the project invalid');
+    expect(store.getState().notice?.lines[0]).toMatch(/^nodes\[1\]\.cover: /);
+    expect(store.temporal.getState().pastStates.length).toBe(1);
+  });
+});
