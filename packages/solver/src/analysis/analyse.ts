@@ -105,7 +105,10 @@ function solveFitting(
       : sizeRestraint(project, node, legs, geometry, envelope);
   return {
     node,
-    ...place,
+    // field by field, not a spread: one literal shape for every fitting
+    mark: place.mark,
+    run: place.run,
+    chainage: place.chainage,
     legs,
     geometry,
     cases,

@@ -187,6 +187,7 @@ const size = (t: Float64Array, k: number) => {
 };
 const planSize = (t: Float64Array, k: number) => Math.sqrt(t[3 * k]! * t[3 * k]! + t[3 * k + 1]! * t[3 * k + 1]!);
 const vec = (a: Float64Array, k: number): Vec3 => [a[3 * k]!, a[3 * k + 1]!, a[3 * k + 2]!];
+const NO_THRUST: Vec3 = Object.freeze([0, 0, 0] as const);
 
 /** What one fitting's states come to: every state as data, one per case, and the envelope. */
 export interface FittingStates {
@@ -209,12 +210,18 @@ export function readStates(
   const t = b.total;
   const states: CaseThrust[] = new Array<CaseThrust>(b.count);
   for (let k = 0; k < b.count; k++) {
+    const statics = vec(b.statics, k);
+    const d = b.dynamic;
+    // No flow (a test case, a closed valve): the dynamic thrust is +0 (fillStates adds 0) and the
+    // total is the static thrust, number for number — one shared zero and the same vector, not two
+    // more arrays kept per state.
+    const still = d[3 * k] === 0 && d[3 * k + 1] === 0 && d[3 * k + 2] === 0;
     states[k] = {
       caseId: cases[b.caseIndex[k]!]!.id,
       pressure: b.pressure[k]!,
-      static: vec(b.statics, k),
-      dynamic: vec(b.dynamic, k),
-      total: vec(t, k),
+      static: statics,
+      dynamic: still ? NO_THRUST : vec(d, k),
+      total: still ? statics : vec(t, k),
       closedAgainst: b.side[k]! < 0 ? null : closedAgainst(b.side[k]!),
     };
   }

@@ -11,8 +11,11 @@ import type { Project, ProjectNode } from './projectSchema.js';
 export function nodeOutsideDiameters(project: Project): Map<string, number> {
   const od = new Map<string, number>();
   for (const n of project.nodes) od.set(n.id, 0);
-  for (const p of project.pipes)
-    for (const id of [p.from, p.to]) od.set(id, Math.max(od.get(id) ?? 0, p.outsideDiameter));
+  // both ends by hand: a two-element list per pipe was garbage on every analysis
+  for (const p of project.pipes) {
+    od.set(p.from, Math.max(od.get(p.from) ?? 0, p.outsideDiameter));
+    od.set(p.to, Math.max(od.get(p.to) ?? 0, p.outsideDiameter));
+  }
   return od;
 }
 

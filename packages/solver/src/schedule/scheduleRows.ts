@@ -139,12 +139,110 @@ function scheduled(b: BearingBlock | null): ScheduleBlock | null {
   );
 }
 
+/** What a row's parts are built from, until each is read. */
+interface RowSource {
+  a: Analysis;
+  f: FittingAnalysis;
+  words: (d: Diagnostic) => string;
+}
+
+const sources = new WeakMap<object, RowSource>();
+
+/**
+ * A row's part built when first read, then kept as a plain field: the table reads the rows in view,
+ * the print and the exports read every part, and a pressure change reads none. One getter and setter
+ * per field, shared by every row (a function made per row would put each row in dictionary mode).
+ */
+function lazyField<K extends keyof ScheduleFitting>(
+  key: K,
+  make: (s: RowSource) => ScheduleFitting[K],
+): PropertyDescriptor {
+  const keep = (row: object, value: ScheduleFitting[K]) =>
+    Object.defineProperty(row, key, { value, enumerable: true, writable: true, configurable: true });
+  return {
+    get(this: ScheduleFitting) {
+      const value = make(sources.get(this)!);
+      keep(this, value);
+      return value;
+    },
+    set(this: ScheduleFitting, value: ScheduleFitting[K]) {
+      keep(this, value);
+    },
+    enumerable: true,
+    configurable: true,
+  };
+}
+
+const PIPES = lazyField('pipes', ({ a, f }) =>
+  f.legs.map((l) => ({
+    id: l.pipe.id,
+    outsideDiameter: l.pipe.outsideDiameter,
+    insideDiameter: l.pipe.insideDiameter,
+    material: l.pipe.material,
+    toward: legTarget(a, f.node.id, l.pipe.id),
+  })),
+);
+
+const CASES = lazyField('cases', ({ f }) =>
+  f.cases.map((c) => ({
+    case: c.caseId,
+    pressure: c.pressure,
+    static: c.static,
+    dynamic: c.dynamic,
+    total: c.total,
+    closedAgainst: c.closedAgainst,
+  })),
+);
+
+const RESTRAINT = lazyField('restraint', ({ a, f }) => {
+  const r = f.restraint;
+  return {
+    block: scheduled(r.block),
+    reverseBlock: scheduled(r.reverseBlock),
+    anchor: r.anchor && {
+      concreteVolume: r.anchor.concreteVolume,
+      length: r.anchor.length,
+      width: r.anchor.width,
+      height: r.anchor.height,
+      side: r.anchor.side,
+      submerged: r.anchor.submerged,
+      upwardThrust: r.anchor.upwardThrust,
+      horizontalThrust: r.anchor.horizontalThrust,
+    },
+    trenchBottom: r.trenchBottom,
+    restrainedLength: r.restrainedLength,
+    restrainedLegs: r.restrainedLegs.map((l) => ({
+      pipe: l.pipe,
+      length: l.length,
+      toward: legTarget(a, f.node.id, l.pipe),
+      joints: restrainedJointCount(l.length, a.project.design.layingLength),
+    })),
+  };
+});
+
+const UNVERIFIED = lazyField('unverified', ({ f }) => unverified(f.basis));
+
+/** The diagnostics worded in SI: kept as read, as before the rows were built lazily. */
+const WARNINGS: PropertyDescriptor = {
+  get(this: ScheduleFitting) {
+    const { words } = sources.get(this)!;
+    const list = this.diagnostics.length ? this.diagnostics.map(words) : [];
+    Object.defineProperty(this, 'warnings', { value: list, enumerable: true });
+    return list;
+  },
+  enumerable: true,
+  configurable: true,
+};
+
+/**
+ * One schedule row: its numbers copied from the analysis, its lists and nested parts (pipes, cases,
+ * restraint, words, unverified entries) built when first read. The fields keep their order.
+ */
 function row(a: Analysis, f: FittingAnalysis, words: (d: Diagnostic) => string): ScheduleFitting {
-  const { restraint: r, envelope: e, geometry: g } = f;
-  const toward = (pipe: string) => legTarget(a, f.node.id, pipe);
+  const { envelope: e, geometry: g } = f;
   let od = 0;
   for (const l of f.legs) od = Math.max(od, l.pipe.outsideDiameter);
-  const out: Omit<ScheduleFitting, 'warnings' | 'diagnostics' | 'unverified'> = {
+  const out = {
     node: f.node.id,
     mark: f.mark,
     run: f.run,
@@ -155,77 +253,28 @@ function row(a: Analysis, f: FittingAnalysis, words: (d: Diagnostic) => string):
     verticalDeflection: g.verticalDeflection,
     branchAngle: g.branchAngle,
     chainage: f.chainage,
-    position: [f.node.x, f.node.y, f.node.elevation],
+    position: [f.node.x, f.node.y, f.node.elevation] as const,
     cover: f.node.cover,
     groundLevel: f.node.elevation + od / 2 + f.node.cover,
-    pipes: f.legs.map((l) => ({
-      id: l.pipe.id,
-      outsideDiameter: l.pipe.outsideDiameter,
-      insideDiameter: l.pipe.insideDiameter,
-      material: l.pipe.material,
-      toward: toward(l.pipe.id),
-    })),
-    soil: nodeSoil(a.project, f.node).id,
-    cases: f.cases.map((c) => ({
-      case: c.caseId,
-      pressure: c.pressure,
-      static: c.static,
-      dynamic: c.dynamic,
-      total: c.total,
-      closedAgainst: c.closedAgainst,
-    })),
-    governingCase: e.governing.caseId,
-    designPressure: e.pressure,
-    thrust: e.governing.total,
-    horizontalThrust: e.horizontal.force,
-    upwardThrust: e.upward.force,
-    downwardThrust: e.downward.force,
-    bearingDirection: e.horizontal.force > 0 ? planBearing(e.horizontal.direction) : null,
-    profile: fittingProfile(f),
-    waterWeight: f.waterWeight,
-    restraint: {
-      block: scheduled(r.block),
-      reverseBlock: scheduled(r.reverseBlock),
-      anchor: r.anchor && {
-        concreteVolume: r.anchor.concreteVolume,
-        length: r.anchor.length,
-        width: r.anchor.width,
-        height: r.anchor.height,
-        side: r.anchor.side,
-        submerged: r.anchor.submerged,
-        upwardThrust: r.anchor.upwardThrust,
-        horizontalThrust: r.anchor.horizontalThrust,
-      },
-      trenchBottom: r.trenchBottom,
-      restrainedLength: r.restrainedLength,
-      restrainedLegs: r.restrainedLegs.map((l) => ({
-        pipe: l.pipe,
-        length: l.length,
-        toward: toward(l.pipe),
-        joints: restrainedJointCount(l.length, a.project.design.layingLength),
-      })),
-    },
-  };
-  // Worded when first read: the table, the print and the JSON read them; a pressure change does not.
-  // One getter shared by every row (a getter made per row puts each row in dictionary mode, twice
-  // the memory), defined here to keep the fields in their order.
-  rowWords.set(out, words);
-  Object.defineProperty(out, 'warnings', { get: wordWarnings, enumerable: true, configurable: true });
-  const row = out as Omit<ScheduleFitting, 'warnings'> as ScheduleFitting;
-  row.diagnostics = f.diagnostics;
-  row.unverified = unverified(f.basis);
-  return row;
-}
-
-/** The wording of each row's findings, until its warnings are read. */
-const rowWords = new WeakMap<object, (d: Diagnostic) => string>();
-
-function wordWarnings(this: ScheduleFitting): string[] {
-  const words = rowWords.get(this)!;
-  const list = this.diagnostics.length ? this.diagnostics.map(words) : [];
-  Object.defineProperty(this, 'warnings', { value: list, enumerable: true });
-  rowWords.delete(this);
-  return list;
+  } as ScheduleFitting;
+  sources.set(out, { a, f, words });
+  Object.defineProperty(out, 'pipes', PIPES);
+  out.soil = nodeSoil(a.project, f.node).id;
+  Object.defineProperty(out, 'cases', CASES);
+  out.governingCase = e.governing.caseId;
+  out.designPressure = e.pressure;
+  out.thrust = e.governing.total;
+  out.horizontalThrust = e.horizontal.force;
+  out.upwardThrust = e.upward.force;
+  out.downwardThrust = e.downward.force;
+  out.bearingDirection = e.horizontal.force > 0 ? planBearing(e.horizontal.direction) : null;
+  out.profile = fittingProfile(f);
+  out.waterWeight = f.waterWeight;
+  Object.defineProperty(out, 'restraint', RESTRAINT);
+  Object.defineProperty(out, 'warnings', WARNINGS);
+  out.diagnostics = f.diagnostics;
+  Object.defineProperty(out, 'unverified', UNVERIFIED);
+  return out;
 }
 
 const schedules = new WeakMap<Analysis, Schedule>();
