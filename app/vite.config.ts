@@ -10,7 +10,19 @@ export default defineConfig({
   plugins: [react(), offline(publicDir, htmlTemplate)],
   publicDir,
   base: './',
-  build: { target: 'es2022', sourcemap: false },
+  build: {
+    target: 'es2022',
+    sourcemap: false,
+    // Every browser the app runs in (ES2022, module workers) preloads modules itself.
+    modulePreload: { polyfill: false },
+    rolldownOptions: {
+      output: {
+        // What the first screen needs in one file: shared pieces split out for the lazy parts would
+        // each be a request of its own and compress apart (issue 16: 6 kB gzipped more).
+        codeSplitting: { groups: [{ name: 'start', tags: ['$initial'] }] },
+      },
+    },
+  },
   test: {
     name: 'app',
     environment: 'happy-dom',

@@ -20,6 +20,7 @@ import { blankProject } from './files/blankProject.js';
 import type { PipeSpec } from './state/documentEdits.js';
 import { loadChecks, validated } from './state/checks.js';
 import { afterFirstDraw } from './chrome/warmUp.js';
+import { warmParts } from './chrome/lazyPart.js';
 import './styles.css';
 
 const DEMO_URL = `${import.meta.env.BASE_URL}demo/larkspur-rise.json`;
@@ -142,5 +143,10 @@ async function start() {
 
 void start();
 registerServiceWorker();
-// The schema checks (zod) word refusals and check edits: a valid project opens without them.
-afterFirstDraw(() => void loadChecks().catch(() => undefined));
+// The schema checks (zod) word refusals and check edits: a valid project opens without them. The
+// parts off the first screen follow, one at a time while the page is idle.
+afterFirstDraw(() => {
+  void loadChecks()
+    .catch(() => undefined)
+    .then(warmParts);
+});
