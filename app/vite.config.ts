@@ -5,11 +5,14 @@ import { offline } from './build/offline.js';
 
 const publicDir = fileURLToPath(new URL('../public', import.meta.url));
 const htmlTemplate = fileURLToPath(new URL('./index.html', import.meta.url));
+const konvaCore = fileURLToPath(new URL('./src/plan/konvaCore.ts', import.meta.url));
 
 export default defineConfig({
   plugins: [react(), offline(publicDir, htmlTemplate)],
   publicDir,
   base: './',
+  // Konva's core without the parts the plan never uses (src/plan/konvaCore.ts).
+  resolve: { alias: [{ find: /^konva\/lib\/Core(\.js)?$/, replacement: konvaCore }] },
   build: {
     target: 'es2022',
     sourcemap: false,

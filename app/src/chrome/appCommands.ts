@@ -2,16 +2,13 @@ import { loadExchange } from '../files/routeImport.js';
 import { savedDocument } from '../state/savedDocument.js';
 import type { AppStore } from '../state/store.js';
 import type { Actions } from '../state/actions.js';
-import {
-  download,
-  fileStem,
-  projectText,
-  quantitiesCsvText,
-  scheduleCsvText,
-  scheduleJsonText,
-} from '../files/projectFile.js';
+import { download, fileStem, projectText } from '../files/projectFile.js';
 import { blankProject } from '../files/blankProject.js';
 import type { ActionName } from './actionTable.js';
+import { lazyModule } from './lazyPart.js';
+
+/** The schedule and quantities files: their writers load when first chosen (or after the first draw). */
+const exportTexts = lazyModule(() => import('../files/exportTexts.js'));
 
 /** Parts of the window a command needs: the file picker and the print view. */
 export interface CommandUi {
@@ -86,19 +83,25 @@ export function runCommand(name: ActionName, store: AppStore, actions: Actions) 
       return actions.markSaved(project());
     }
     case 'exportCsv':
-      return download(
-        `${fileStem(project())}-schedule.csv`,
-        scheduleCsvText(project(), store.getState().units),
-        'text/csv',
+      return void exportTexts().then((t) =>
+        download(
+          `${fileStem(project())}-schedule.csv`,
+          t.scheduleCsvText(project(), store.getState().units),
+          'text/csv',
+        ),
       );
     case 'exportQuantities':
-      return download(
-        `${fileStem(project())}-quantities.csv`,
-        quantitiesCsvText(project(), store.getState().units),
-        'text/csv',
+      return void exportTexts().then((t) =>
+        download(
+          `${fileStem(project())}-quantities.csv`,
+          t.quantitiesCsvText(project(), store.getState().units),
+          'text/csv',
+        ),
       );
     case 'exportJson':
-      return download(`${fileStem(project())}-schedule.json`, scheduleJsonText(project()), 'application/json');
+      return void exportTexts().then((t) =>
+        download(`${fileStem(project())}-schedule.json`, t.scheduleJsonText(project()), 'application/json'),
+      );
     case 'exportGeoJson':
       return void exportGeoJson(store, actions);
     case 'print':

@@ -34,6 +34,15 @@ export function lazyPart<P extends object>(
   return Part;
 }
 
+/**
+ * A module off the first screen that is not drawn (an export's writer): loaded on first use or by the
+ * warm-up, whichever comes first.
+ */
+export function lazyModule<T>(load: () => Promise<T>): () => Promise<T> {
+  loaders.push(load);
+  return () => importOrReload(load);
+}
+
 const idle = () =>
   new Promise<void>((resolve) => {
     if (typeof requestIdleCallback === 'function') requestIdleCallback(() => resolve(), { timeout: 500 });
