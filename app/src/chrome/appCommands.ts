@@ -3,12 +3,13 @@ import { savedDocument } from '../state/savedDocument.js';
 import type { AppStore } from '../state/store.js';
 import type { Actions } from '../state/actions.js';
 import { download, fileStem, projectText } from '../files/projectFile.js';
-import { blankProject } from '../files/blankProject.js';
 import type { ActionName } from './actionTable.js';
 import { lazyModule } from './lazyPart.js';
 
 /** The schedule and quantities files: their writers load when first chosen (or after the first draw). */
 const exportTexts = lazyModule(() => import('../files/exportTexts.js'));
+/** The blank project (it reads the soil library): loaded when New is first chosen, or after the first draw. */
+const blankProjects = lazyModule(() => import('../files/blankProject.js'));
 
 /** Parts of the window a command needs: the file picker and the print view. */
 export interface CommandUi {
@@ -31,12 +32,13 @@ export function hasUnsavedWork(store: AppStore): boolean {
 
 /** New: a blank project from the documented defaults, in the units in use; asks first when work would be lost. */
 function startNew(store: AppStore, actions: Actions) {
-  const go = () => {
-    const blank = { ...blankProject(), units: store.getState().units };
-    actions.replaceProject(blank);
-    actions.markSaved(blank);
-    actions.notify(null);
-  };
+  const go = () =>
+    void blankProjects().then(({ blankProject }) => {
+      const blank = { ...blankProject(), units: store.getState().units };
+      actions.replaceProject(blank);
+      actions.markSaved(blank);
+      actions.notify(null);
+    });
   if (!hasUnsavedWork(store)) return go();
   actions.notify({
     tone: 'warning',
