@@ -46,7 +46,7 @@ test('raising the field-test pressure grows every block’s bearing area with it
   await field.press('Enter');
   await expect.poll(async () => (await app.project()).loadCases.find((c) => c.id === 'test')!.pressure).toBe(1_500_000);
   const after = await app.schedule();
-  // A = SF·T_h/σ (domain reference §4.1): with σ and SF unchanged, area scales exactly as the thrust.
+  // A = SF·T_h/σ (DIPRA bearing method; docs/check-values.md CV-11): with σ and SF unchanged, area scales exactly as the thrust.
   let checked = 0;
   for (const f of after.fittings) {
     const old = before.fittings.find((x) => x.node === f.node)!;

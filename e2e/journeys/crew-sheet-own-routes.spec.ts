@@ -3,20 +3,13 @@ import { execFileSync } from 'node:child_process';
 import { mkdirSync, readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { MainbracePage } from '../pages/mainbrace.js';
+import { clippedOnSheet, pdfPages } from '../pages/crewSheet.js';
 
 const root = fileURLToPath(new URL('../..', import.meta.url));
 
 test.beforeAll(() => {
   execFileSync('corepack', ['pnpm', '--filter', '@mainbrace/solver', 'build'], { cwd: root, stdio: 'ignore' });
 });
-
-/** The text of a PDF's pages as pdftotext reads them (poppler-utils), one string per page. */
-function pdfPages(path: string): string[] {
-  return execFileSync('pdftotext', ['-raw', path, '-'], { encoding: 'utf8' })
-    .split('\f')
-    .slice(0, -1)
-    .map((p) => p.replace(/\s+/g, ' '));
-}
 
 /**
  * Two routes of our own (invented streets), printed as a crew would get them: an SI main of nine
@@ -48,19 +41,7 @@ for (const [name, paper] of [
     await expect(page.getByTestId('job-takeoff')).toHaveCount(1);
     mkdirSync('artifacts', { recursive: true });
     await page.emulateMedia({ media: 'print' });
-    const clipped = await page.evaluate(() =>
-      Array.from(document.querySelectorAll('.sheet-page')).flatMap((pageBox, i) => {
-        const bottom = pageBox.querySelector('.sheet-foot')!.getBoundingClientRect().top + 1;
-        return Array.from(pageBox.querySelectorAll('.sheet-notes li, .sketch-lines li, .takeoff tr, .crew-table tr'))
-          .filter((el) => {
-            const r = el.getBoundingClientRect();
-            const box = el.closest('.sketch, .sheet-side');
-            const limit = box ? Math.min(bottom, box.getBoundingClientRect().bottom + 1) : bottom;
-            return r.bottom > limit;
-          })
-          .map((el) => `sheet ${i + 1}: ${el.textContent!.slice(0, 60)}`);
-      }),
-    );
+    const clipped = await clippedOnSheet(page);
     expect(clipped).toEqual([]);
     const pdf = `artifacts/${name}-${paper}.pdf`;
     await page.pdf({ format: paper, landscape: true, printBackground: true, path: pdf });

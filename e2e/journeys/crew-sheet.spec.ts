@@ -3,6 +3,7 @@ import { execFileSync } from 'node:child_process';
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { MainbracePage } from '../pages/mainbrace.js';
+import { clippedOnSheet, pdfPages } from '../pages/crewSheet.js';
 
 const root = fileURLToPath(new URL('../..', import.meta.url));
 const demo = `${root}public/demo/larkspur-rise.json`;
@@ -10,15 +11,6 @@ const demo = `${root}public/demo/larkspur-rise.json`;
 test.beforeAll(() => {
   execFileSync('corepack', ['pnpm', '--filter', '@mainbrace/solver', 'build'], { cwd: root, stdio: 'ignore' });
 });
-
-/** The text of a PDF's pages as pdftotext reads them (poppler-utils), one string per page. */
-function pdfPages(path: string): string[] {
-  // Content order (-raw) keeps each sketch's words together; runs of white space read as one space.
-  return execFileSync('pdftotext', ['-raw', path, '-'], { encoding: 'utf8' })
-    .split('\f')
-    .slice(0, -1)
-    .map((p) => p.replace(/\s+/g, ' '));
-}
 
 test('the crew sheet of the demo prints in chainage order, six fittings a page, with dimensions and notes', async ({
   page,
@@ -65,19 +57,7 @@ test('the crew sheet of the demo prints in chainage order, six fittings a page, 
   await page.emulateMedia({ media: 'print' });
   await page.pdf({ format: 'A4', landscape: true, printBackground: true, path: 'artifacts/crew-sheet.pdf' });
   // Nothing a crew needs is cut off: notes, sketches' words and the take-off end inside their page.
-  const clipped = await page.evaluate(() =>
-    Array.from(document.querySelectorAll('.sheet-page')).flatMap((pageBox, i) => {
-      const bottom = pageBox.querySelector('.sheet-foot')!.getBoundingClientRect().top + 1;
-      return Array.from(pageBox.querySelectorAll('.sheet-notes li, .sketch-lines li, .takeoff tr, .crew-table tr'))
-        .filter((el) => {
-          const r = el.getBoundingClientRect();
-          const box = el.closest('.sketch, .sheet-side');
-          const limit = box ? Math.min(bottom, box.getBoundingClientRect().bottom + 1) : bottom;
-          return r.bottom > limit;
-        })
-        .map((el) => `sheet ${i + 1}: ${el.textContent!.slice(0, 60)}`);
-    }),
-  );
+  const clipped = await clippedOnSheet(page);
   expect(clipped).toEqual([]);
 
   const pages = pdfPages('artifacts/crew-sheet.pdf');

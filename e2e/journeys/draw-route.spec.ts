@@ -18,7 +18,7 @@ test('drawing a three-leg route by clicks gives two bends and two dead ends with
   const fittings = (await app.schedule()).fittings;
   expect(fittings.map((f) => f.kind).sort()).toEqual(['bend', 'bend', 'dead-end', 'dead-end']);
 
-  // Hand formula (domain reference §1.2): T = 2·p·A·sin(Δ/2), A = π/4·OD², with the drawn pipe's OD and the
+  // Hand formula (DIPRA; AWWA M23, M41; docs/check-values.md CV-1): T = 2·p·A·sin(Δ/2), A = π/4·OD², with the drawn pipe's OD and the
   // governing case's pressure at the node; here the turns are 90°.
   for (const f of fittings.filter((x) => x.kind === 'bend')) {
     const node = doc.nodes.find((n) => n.id === f.node)!;

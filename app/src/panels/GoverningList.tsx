@@ -1,7 +1,8 @@
+import { useMemo } from 'react';
 import { norm } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
 import { showColumnForce } from '../format/quantity.js';
-import { largestThrusts } from '../state/routeFigures.js';
+import { largestThrusts, tightestMargins } from '../state/routeFigures.js';
 
 /** Which case governs how many fittings, and the fittings with the largest thrust and tightest margins. */
 export function GoverningList() {
@@ -9,14 +10,13 @@ export function GoverningList() {
   const analysis = useAnalysis();
   const actions = useActions();
   const u = useApp((s) => s.units);
-  const counts = new Map<string, number>();
-  for (const f of analysis.fittings)
-    counts.set(f.envelope.governing.caseId, (counts.get(f.envelope.governing.caseId) ?? 0) + 1);
-  const largest = largestThrusts(analysis, 5);
-  const tight = analysis.fittings
-    .filter((f) => f.restraint.block)
-    .sort((a, b) => a.restraint.block!.passiveRatio - b.restraint.block!.passiveRatio)
-    .slice(0, 5);
+  // Worked out once per analysis, in one pass each (no sort of every fitting for five of them).
+  const { counts, largest, tight } = useMemo(() => {
+    const counts = new Map<string, number>();
+    for (const f of analysis.fittings)
+      counts.set(f.envelope.governing.caseId, (counts.get(f.envelope.governing.caseId) ?? 0) + 1);
+    return { counts, largest: largestThrusts(analysis, 5), tight: tightestMargins(analysis, 5) };
+  }, [analysis]);
   return (
     <div className="governing" data-testid="governing">
       <h4>Governing case</h4>

@@ -8,6 +8,10 @@ import { NumberField } from './NumberField.js';
 /** 2 ft/s, the sudden stop the older AWWA C900 classes allowed for: a starting value the user changes. */
 const DEFAULT_CHANGE = 0.6096;
 
+/** The case `surgeEstimate` adds the rise to, by its own rule: the working case, else the first that is neither a test nor a surge. */
+const surgeWorkingCase = (cases: readonly LoadCase[]): LoadCase =>
+  cases.find((c) => c.kind === 'working') ?? cases.find((c) => c.kind !== 'test' && c.kind !== 'surge') ?? cases[0]!;
+
 /**
  * A surge case suggested from a velocity change (Joukowsky ΔP = ρ·a·Δv, a by Korteweg for each pipe's
  * material, wall and diameter), the largest rise over the route added to the working case. The user
@@ -22,17 +26,29 @@ export function SurgeSuggestion() {
   const [change, setChange] = useState(DEFAULT_CHANGE);
   // The per-pipe list is worded only while it is open: on a long route it is thousands of lines.
   const [listOpen, setListOpen] = useState(false);
+  // The estimate reads the pipes, the water and the working case only: a test-pressure change (the
+  // slider) keeps all three, so the estimate and the largest pipe's name are not worked out again.
+  const working = surgeWorkingCase(project.loadCases);
+  const { pipes, water } = project;
   const estimate = useMemo(
-    () => surgeEstimate(project, mode === 'change' ? change : undefined),
-    [project, mode, change],
+    () => surgeEstimate({ ...project, pipes, water, loadCases: [working] }, mode === 'change' ? change : undefined),
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- the estimate reads only these parts of the project
+    [pipes, water, working, mode, change],
   );
   const surge = project.loadCases.find((c) => c.kind === 'surge');
   const words = wordingContext(analysis, u);
+  // Naming a pipe indexes the whole route once per document (the name reads marks and positions only).
+  const { marks } = analysis;
+  const largestPipe = estimate?.largest.pipe;
+  const largestName = useMemo(
+    () => (largestPipe === undefined ? '' : words.pipeName(largestPipe)),
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- the name reads the marks, nodes and pipes only
+    [largestPipe, marks, project.nodes, pipes, u],
+  );
   const caveats = unverified(['surge.water-bulk-modulus', 'surge.pipe-elasticity', 'surge.support-factor']);
 
   const accept = () => {
     if (!estimate) return;
-    const working = project.loadCases.find((c) => c.id === estimate.workingCase)!;
     const datum = working.datumElevation !== undefined ? { datumElevation: working.datumElevation } : {};
     if (surge) {
       actions.updateCase(surge.id, { pressure: estimate.suggestedPressure, ...datum });
@@ -78,7 +94,7 @@ export function SurgeSuggestion() {
       {estimate ? (
         <>
           <p>
-            Largest rise on {words.pipeName(estimate.largest.pipe)}: ΔP = ρ·a·Δv ={' '}
+            Largest rise on {largestName}: ΔP = ρ·a·Δv ={' '}
             <strong data-testid="surge-rise">{show(estimate.largest.rise, 'pressure', u)}</strong> (wave speed a ={' '}
             {show(estimate.largest.waveSpeed, 'velocity', u, 4)} by Korteweg, Δv ={' '}
             {show(estimate.largest.velocityChange, 'velocity', u, 3)}).

@@ -1,5 +1,5 @@
-import type { RefObject } from 'react';
-import { FOOT, formatSi, KIND_NAME, KIP, type Material } from '@mainbrace/solver';
+import { memo, useMemo, type RefObject } from 'react';
+import { FOOT, formatSi, KIND_NAME, KIP, type FittingKind, type Material } from '@mainbrace/solver';
 import { useActions, useApp, useAppStore } from '../state/StoreContext.js';
 import { sendPlanEvent } from '../tools/planBridge.js';
 import { showColumnForce } from '../format/quantity.js';
@@ -20,6 +20,20 @@ function roundForce(f: number, us: boolean): number {
   return m * p * unit;
 }
 
+/** The fitting symbols of the legend, those on the plan only; rendered again only when that list changes. */
+const LegendGlyphs = memo(function LegendGlyphs({ kinds }: { kinds: readonly FittingKind[] }) {
+  if (kinds.length === 0) return null;
+  return (
+    <div className="legend-row legend-glyphs">
+      {kinds.map((k) => (
+        <span key={k} className="legend-glyph">
+          <FittingGlyph kind={k} /> {KIND_NAME[k].toLowerCase()}
+        </span>
+      ))}
+    </div>
+  );
+});
+
 /** Scale bar, north arrow, grid spacing, pointer coordinates and the legend, over the plan canvas. */
 export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: RefObject<HTMLSpanElement | null> }) {
   const viewport = useApp((s) => s.viewport);
@@ -39,12 +53,17 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
   const barPx = barLength * viewport.scale;
   const ref = scene.largestForce > 0 ? roundForce(scene.largestForce, us) : 0;
   const refPx = ref > 0 ? (ARROW_PX * ref) / scene.largestForce : 0;
-  const materials = [...new Set(scene.pipes.map((p) => p.material))] as Material[];
-  const present = new Set<string>([
-    ...scene.fittings.map((f) => f.kind),
-    ...scene.plainNodes.filter((n) => n.tieIn).map(() => 'tie-in'),
-  ]);
-  const kinds = LEGEND_KINDS.filter((k) => present.has(k));
+  // What the legend lists changes with the route only: a pressure change keeps the scene's pipes,
+  // symbols and marks (the same objects), so the legend's rows are neither worked out nor rendered again.
+  const { pipes, fittings, plainNodes } = scene;
+  const materials = useMemo(() => [...new Set(pipes.map((p) => p.material))] as Material[], [pipes]);
+  const kinds = useMemo(() => {
+    const present = new Set<string>([
+      ...fittings.map((f) => f.kind),
+      ...plainNodes.filter((n) => n.tieIn).map(() => 'tie-in'),
+    ]);
+    return LEGEND_KINDS.filter((k) => present.has(k));
+  }, [fittings, plainNodes]);
   return (
     <>
       <div className="plan-north" aria-label="North is up">
@@ -126,15 +145,7 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
             horizontal thrust {showColumnForce(ref, units)}
           </div>
         )}
-        {kinds.length > 0 && (
-          <div className="legend-row legend-glyphs">
-            {kinds.map((k) => (
-              <span key={k} className="legend-glyph">
-                <FittingGlyph kind={k} /> {KIND_NAME[k].toLowerCase()}
-              </span>
-            ))}
-          </div>
-        )}
+        <LegendGlyphs kinds={kinds} />
         <div className="legend-row">
           <span className="legend-swatch legend-block" /> bearing block
         </div>

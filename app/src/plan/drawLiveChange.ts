@@ -1,12 +1,22 @@
 import { toScreen, type Viewport } from '../state/viewport.js';
 import { label } from './drawRoute.js';
-import { PALETTE } from './palette.js';
+import { PALETTE, TYPE } from './palette.js';
 import type { ScenePolygon } from './planScene.js';
 import type { LiveChange } from './liveChange.js';
+import type { LabelSpace } from './labelSpace.js';
+import { MIN_POLYGON_PX, Occupancy, SYMBOL_CELL_PX, onScreen, segmentOnScreen, textWidth } from './levelOfDetail.js';
+
+/** Height of a change label, px (12.5 px type with its halo). */
+const LABEL_H = 15;
+/** The narrowest change label ("A1 +1%"), px: a label is formatted only where this much has room. */
+const NARROWEST_PX = 40;
 
 /**
  * While the test pressure is dragged: each block's footprint from before the drag as a dashed ghost,
  * its growth as a percentage, and a mark where another case now governs (words, not colour alone).
+ * By the plan's level of detail (levelOfDetail.ts): a ghost under MIN_POLYGON_PX or off screen is not
+ * drawn, one change is marked per symbol cell, and a label is drawn only where it has room in `space`
+ * (tested at its narrowest before it is worded and measured), as the thrust labels are.
  */
 export function drawLiveChange(
   ctx: CanvasRenderingContext2D,
@@ -14,28 +24,37 @@ export function drawLiveChange(
   ghosts: readonly ScenePolygon[],
   changes: readonly LiveChange[],
   caseName: (id: string) => string,
+  space: LabelSpace,
 ) {
+  const { width, height } = space;
   ctx.save();
   ctx.strokeStyle = PALETTE.ink;
   ctx.lineWidth = 1.2;
   ctx.setLineDash([4, 3]);
   for (const g of ghosts) {
     if (g.kind === 'pad') continue;
+    let x0 = Infinity,
+      x1 = -Infinity,
+      y0 = Infinity,
+      y1 = -Infinity;
+    const s = g.points.map((p) => toScreen(v, p));
+    for (const p of s) {
+      x0 = Math.min(x0, p.sx);
+      x1 = Math.max(x1, p.sx);
+      y0 = Math.min(y0, p.sy);
+      y1 = Math.max(y1, p.sy);
+    }
+    if (Math.max(x1 - x0, y1 - y0) < MIN_POLYGON_PX || !segmentOnScreen(x0, y0, x1, y1, width, height)) continue;
     ctx.beginPath();
-    g.points.forEach((p, i) => {
-      const s = toScreen(v, p);
-      if (i === 0) ctx.moveTo(s.sx, s.sy);
-      else ctx.lineTo(s.sx, s.sy);
-    });
+    s.forEach((p, i) => (i === 0 ? ctx.moveTo(p.sx, p.sy) : ctx.lineTo(p.sx, p.sy)));
     ctx.closePath();
     ctx.stroke();
   }
   ctx.setLineDash([]);
+  const cells = new Occupancy(SYMBOL_CELL_PX);
   for (const c of changes) {
     const s = toScreen(v, c.at);
-    const parts: string[] = [];
-    if (c.growth !== null) parts.push(`${c.growth >= 0 ? '+' : '−'}${Math.abs(Math.round(c.growth * 100))}%`);
-    if (c.governing) parts.push(`now ${caseName(c.governing.to)}`);
+    if (!onScreen(s.sx, s.sy, width, height) || !cells.take(s.sx, s.sy)) continue;
     if (c.governing) {
       // a ring with a diamond: the governing case changed here
       ctx.strokeStyle = PALETTE.thrust;
@@ -48,7 +67,15 @@ export function drawLiveChange(
       ctx.closePath();
       ctx.stroke();
     }
-    label(ctx, `${c.mark} ${parts.join(' · ')}`, s.sx + 14, s.sy + 22, PALETTE.ink);
+    const x = s.sx + 14,
+      y = s.sy + 22;
+    const room = (w: number) => ({ x: x - 2, y: y - LABEL_H / 2, w, h: LABEL_H });
+    if (!space.fits(room(NARROWEST_PX))) continue;
+    const parts: string[] = [];
+    if (c.growth !== null) parts.push(`${c.growth >= 0 ? '+' : '−'}${Math.abs(Math.round(c.growth * 100))}%`);
+    if (c.governing) parts.push(`now ${caseName(c.governing.to)}`);
+    const text = `${c.mark} ${parts.join(' · ')}`;
+    if (space.place([room(textWidth(ctx, TYPE.mark, text) + 4)])) label(ctx, text, x, y, PALETTE.ink);
   }
   ctx.restore();
 }

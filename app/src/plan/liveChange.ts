@@ -1,4 +1,4 @@
-import { restraintConcrete, type Analysis } from '@mainbrace/solver';
+import { restraintConcrete, type Analysis, type Restraint } from '@mainbrace/solver';
 import type { PlanPoint } from '../state/documentEdits.js';
 
 /** How one fitting's restraint and governing case moved during a live edit (the test-pressure slider). */
@@ -12,6 +12,18 @@ export interface LiveChange {
   governing: { from: string; to: string } | null;
 }
 
+const concrete = new WeakMap<Restraint, number>();
+
+/** m³ of a restraint, worked out once per restraint object: the gesture's start is read at every step. */
+function concreteOf(r: Restraint): number {
+  let v = concrete.get(r);
+  if (v === undefined) {
+    v = restraintConcrete(r);
+    concrete.set(r, v);
+  }
+  return v;
+}
+
 /**
  * Each fitting's change against the analysis from before the gesture began: the growth of its block or
  * anchor (by concrete volume) and whether another case now governs it. Fittings that did not change
@@ -22,7 +34,7 @@ export function liveChanges(before: Analysis, now: Analysis): LiveChange[] {
   for (const f of now.fittings) {
     const b = before.byNode.get(f.node.id);
     if (!b) continue;
-    const was = restraintConcrete(b.restraint);
+    const was = concreteOf(b.restraint);
     const is = restraintConcrete(f.restraint);
     const growth = was > 0 ? is / was - 1 : null;
     const from = b.envelope.governing.caseId;

@@ -181,3 +181,36 @@ describe('planScene while nodes are dragged', () => {
     ]);
   });
 });
+
+describe('planScene parts kept from the last scene of the same route', () => {
+  // Invariant: a scene made after edits (its unchanged parts taken from the caches) equals the scene of
+  // a deep copy of the same document, which shares no array with it and so is made from scratch.
+  it('equals a scene made from scratch after a pressure edit, a move, a selection and a drag', () => {
+    const doc = bend('cap');
+    planScene(doc, analyse(doc), ENVELOPE, EMPTY_SELECTION, null);
+    const pressed = { ...doc, loadCases: doc.loadCases.map((c) => ({ ...c, pressure: c.pressure * 1.7 })) };
+    const moved = { ...pressed, nodes: pressed.nodes.map((n) => (n.id === 'n3' ? { ...n, x: 5 } : n)) };
+    const picked = { nodes: new Set(['n2']), pipes: new Set([doc.pipes[0]!.id]) };
+    const drag = new Map([['n3', { x: 9, y: 31 }]]);
+    for (const [d, sel, preview] of [
+      [pressed, EMPTY_SELECTION, null],
+      [moved, EMPTY_SELECTION, null],
+      [moved, picked, null],
+      [moved, picked, drag],
+    ] as const) {
+      const kept = planScene(d, analyse(d), ENVELOPE, sel, preview);
+      const copy = structuredClone(d);
+      expect(kept).toEqual(planScene(copy, analyse(copy), ENVELOPE, sel, preview));
+    }
+  });
+
+  it('hands back the very same pipes and plain nodes after a pressure edit', () => {
+    const doc = bend('tie-in');
+    const a = planScene(doc, analyse(doc), ENVELOPE, EMPTY_SELECTION, null);
+    const pressed = { ...doc, loadCases: doc.loadCases.map((c) => ({ ...c, pressure: c.pressure / 2 })) };
+    const b = planScene(pressed, analyse(pressed, analyse(doc)), ENVELOPE, EMPTY_SELECTION, null);
+    expect(b.pipes).toBe(a.pipes);
+    expect(b.plainNodes).toBe(a.plainNodes);
+    expect(b.arrows).not.toEqual(a.arrows);
+  });
+});

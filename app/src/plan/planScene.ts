@@ -7,7 +7,9 @@ import {
   type Analysis,
   type FittingKind,
   type Material,
+  type Pipe,
   type Project,
+  type ProjectNode,
   type Vec3,
 } from '@mainbrace/solver';
 import type { PlanPoint } from '../state/documentEdits.js';
@@ -157,36 +159,25 @@ export function planScene(
   preview: ReadonlyMap<string, PlanPoint> | null,
   hidden?: ReadonlySet<string>,
 ): Scene {
-  const where = new Map<string, PlanPoint>(project.nodes.map((n) => [n.id, preview?.get(n.id) ?? { x: n.x, y: n.y }]));
-  const shownPipes = hidden?.size
-    ? project.pipes.filter((p) => !hidden.has(p.from) && !hidden.has(p.to))
-    : project.pipes;
-  const pipes: ScenePipe[] = shownPipes.map((p) => ({
-    id: p.id,
-    a: where.get(p.from)!,
-    b: where.get(p.to)!,
-    outsideDiameter: p.outsideDiameter,
-    material: p.material,
-    selected: selection.pipes.has(p.id),
-  }));
+  const where = positions(project.nodes, preview);
+  const pipes = scenePipes(project.pipes, where, selection.pipes, hidden);
   const fittings: SceneFitting[] = [];
   const arrows: SceneArrow[] = [];
   const polygons: ScenePolygon[] = [];
   const zones: SceneZone[] = [];
   let largestForce = 0;
-  const withFitting = new Set<string>();
   for (const f of analysis?.fittings ?? []) {
     const id = f.node.id;
-    withFitting.add(id);
-    if (hidden?.has(id) || !where.has(id)) continue;
-    const at = where.get(id)!;
-    const axis = f.legs[0] ? plan(f.legs[0].direction) : { x: 1, y: 0 };
+    if (hidden?.has(id)) continue;
+    const at = where.get(id);
+    if (!at) continue;
+    const leg0 = f.legs[0];
     fittings.push({
       node: id,
       mark: f.mark,
       kind: f.geometry.kind,
       at,
-      axis,
+      axis: leg0 ? plan(leg0.direction) : { x: 1, y: 0 },
       warned: f.diagnostics.some((d) => d.severity !== 'info'),
       selected: selection.nodes.has(id),
     });
@@ -201,15 +192,17 @@ export function planScene(
         horizontal: h,
         vertical: t[2],
       });
-      largestForce = Math.max(largestForce, h);
+      if (h > largestForce) largestForce = h;
     }
     const r = f.restraint;
-    const od = Math.max(...f.legs.map((l) => l.pipe.outsideDiameter));
+    let od = -Infinity;
+    for (const l of f.legs) if (l.pipe.outsideDiameter > od) od = l.pipe.outsideDiameter;
     for (const block of [r.block, r.reverseBlock]) {
       if (!block) continue;
-      const d = plan(block.direction);
-      const p = { x: at.x + (d.x * od) / 2, y: at.y + (d.y * od) / 2 };
-      const q = { x: p.x + d.x * block.depth, y: p.y + d.y * block.depth };
+      const dx = block.direction[0],
+        dy = block.direction[1];
+      const p = { x: at.x + (dx * od) / 2, y: at.y + (dy * od) / 2 };
+      const q = { x: p.x + dx * block.depth, y: p.y + dy * block.depth };
       polygons.push({ node: id, kind: 'block', points: strip(p, q, block.faceWidth) });
     }
     if (r.anchor) {
@@ -225,8 +218,8 @@ export function planScene(
         ],
       });
     }
-    if (r.trenchBottom && f.legs[0]) {
-      const d = plan(f.legs[0].direction);
+    if (r.trenchBottom && leg0) {
+      const d = plan(leg0.direction);
       const half = r.trenchBottom.length / 2;
       polygons.push({
         node: id,
@@ -244,17 +237,105 @@ export function planScene(
       if (z) zones.push(z);
     }
   }
-  const plainNodes = project.nodes
+  const plainNodes = scenePlainNodes(project.nodes, where, analysis, selection.nodes, hidden);
+  return { pipes, fittings, arrows, polygons, zones, largestForce, plainNodes };
+}
+
+// The parts of a scene that no result changes (where the nodes are, the pipes, the plain nodes) are
+// kept from the last scene made of the same route: a test-pressure change, the slider's every step,
+// rebuilds only the arrows, blocks and zones. Each cache is keyed by the document's own arrays, which
+// every edit of the route replaces, and holds only what the key reaches.
+
+const placed = new WeakMap<readonly ProjectNode[], Map<string, PlanPoint>>();
+
+/** Plan position of every node: where it is dragged to, else where it stands. */
+function positions(
+  nodes: readonly ProjectNode[],
+  preview: ReadonlyMap<string, PlanPoint> | null,
+): ReadonlyMap<string, PlanPoint> {
+  if (preview) return new Map(nodes.map((n) => [n.id, preview.get(n.id) ?? { x: n.x, y: n.y }]));
+  let where = placed.get(nodes);
+  if (!where) {
+    where = new Map(nodes.map((n) => [n.id, { x: n.x, y: n.y }]));
+    placed.set(nodes, where);
+  }
+  return where;
+}
+
+const pipeParts = new WeakMap<
+  readonly Pipe[],
+  {
+    where: ReadonlyMap<string, PlanPoint>;
+    selected: ReadonlySet<string>;
+    hidden?: ReadonlySet<string>;
+    out: ScenePipe[];
+  }
+>();
+
+function scenePipes(
+  all: readonly Pipe[],
+  where: ReadonlyMap<string, PlanPoint>,
+  selected: ReadonlySet<string>,
+  hidden?: ReadonlySet<string>,
+): ScenePipe[] {
+  const known = pipeParts.get(all);
+  if (known && known.where === where && known.selected === selected && known.hidden === hidden) return known.out;
+  const shown = hidden?.size ? all.filter((p) => !hidden.has(p.from) && !hidden.has(p.to)) : all;
+  const out = shown.map((p) => ({
+    id: p.id,
+    a: where.get(p.from)!,
+    b: where.get(p.to)!,
+    outsideDiameter: p.outsideDiameter,
+    material: p.material,
+    selected: selected.has(p.id),
+  }));
+  pipeParts.set(all, { where, selected, ...(hidden ? { hidden } : {}), out });
+  return out;
+}
+
+type Plain = Scene['plainNodes'][number];
+
+const plainParts = new WeakMap<
+  ReadonlyMap<string, PlanPoint>,
+  {
+    legs: Analysis['legs'] | null;
+    marks: Analysis['marks'] | null;
+    selected: ReadonlySet<string>;
+    hidden?: ReadonlySet<string>;
+    out: Plain[];
+  }
+>();
+
+/**
+ * Free nodes and tie-ins (no fitting). Which nodes are fittings follows from the nodes and their legs,
+ * so the list is kept while the node positions, the analysis's legs and marks and the selection are.
+ */
+function scenePlainNodes(
+  nodes: readonly ProjectNode[],
+  where: ReadonlyMap<string, PlanPoint>,
+  analysis: Analysis | null,
+  selected: ReadonlySet<string>,
+  hidden?: ReadonlySet<string>,
+): Plain[] {
+  const legs = analysis?.legs ?? null;
+  const marks = analysis?.marks ?? null;
+  const known = plainParts.get(where);
+  if (known && known.legs === legs && known.marks === marks && known.selected === selected && known.hidden === hidden)
+    return known.out;
+  const withFitting = new Set<string>();
+  for (const f of analysis?.fittings ?? []) withFitting.add(f.node.id);
+  const out = nodes
     .filter((n) => !withFitting.has(n.id) && !hidden?.has(n.id))
     .map((n) => ({
       id: n.id,
       at: where.get(n.id)!,
       tieIn: n.end === 'tie-in',
       // A tie-in is numbered along its run (restrained legs run "toward A1"), so the plan shows its mark.
-      mark: analysis?.marks.get(n.id) ?? null,
-      selected: selection.nodes.has(n.id),
+      mark: marks?.get(n.id) ?? null,
+      selected: selected.has(n.id),
     }));
-  return { pipes, fittings, arrows, polygons, zones, largestForce, plainNodes };
+  plainParts.set(where, { legs, marks, selected, ...(hidden ? { hidden } : {}), out });
+  return out;
 }
 
 /**

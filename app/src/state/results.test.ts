@@ -65,4 +65,27 @@ describe('results from the result inputs only', () => {
     expect(codes(analyseProject(pressed)).some((c) => c.startsWith('pipe.over-'))).toBe(true);
     expect(codes(resultsOf(pressed))).toEqual(codes(analyseProject(pressed)));
   });
+
+  // Invariant: the store's results (the solver's incremental path from the analysis before) equal a
+  // whole analysis of the same document after every edit of a chain, fitting by fitting.
+  it('equals a whole analysis after a chain of pressure, move and flow edits', () => {
+    let p = doc();
+    resultsOf(p);
+    const edits: ((q: typeof p) => typeof p)[] = [
+      (q) => ({ ...q, loadCases: q.loadCases.map((c) => ({ ...c, pressure: c.pressure * 1.3 })) }),
+      (q) => ({ ...q, nodes: q.nodes.map((n) => (n.id === 'n3' ? { ...n, x: n.x + 12 } : n)) }),
+      (q) => ({ ...q, loadCases: q.loadCases.map((c, i) => (i === 0 ? { ...c, pressure: c.pressure / 2 } : c)) }),
+      (q) => ({ ...q, loadCases: q.loadCases.map((c) => ({ ...c, flowFactor: 0 })) }),
+      (q) => ({ ...q, loadCases: q.loadCases.map((c) => ({ ...c, pressure: c.pressure * 2.5 })) }),
+    ];
+    const seen = (a: ReturnType<typeof resultsOf>) => ({
+      fittings: a.fittings,
+      diagnostics: a.diagnostics,
+      marks: a.marks,
+    });
+    for (const change of edits) {
+      p = change(p);
+      expect(seen(resultsOf(p))).toEqual(seen(analyseProject(p)));
+    }
+  });
 });

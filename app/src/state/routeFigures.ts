@@ -1,4 +1,4 @@
-import { norm, restraintConcrete, type Analysis, type FittingAnalysis } from '@mainbrace/solver';
+import { norm, restraintConcrete, type Analysis, type FittingAnalysis, type Project } from '@mainbrace/solver';
 import { routePieces } from './connectivity.js';
 
 /** The fittings with the largest governing thrust, largest first. */
@@ -17,15 +17,56 @@ export function largestThrusts(analysis: Analysis, count: number): FittingAnalys
   return top.map((t) => t.f);
 }
 
+/**
+ * The fittings with a bearing block whose passive margin (resistance over thrust) is least, least
+ * first; ties in route order, as a stable sort would give them. One pass, as `largestThrusts`.
+ */
+export function tightestMargins(analysis: Analysis, count: number): FittingAnalysis[] {
+  const top: { f: FittingAnalysis; ratio: number }[] = [];
+  if (count <= 0) return [];
+  for (const f of analysis.fittings) {
+    const block = f.restraint.block;
+    if (!block) continue;
+    const ratio = block.passiveRatio;
+    if (top.length === count && ratio >= top[count - 1]!.ratio) continue;
+    let i = top.length;
+    while (i > 0 && top[i - 1]!.ratio > ratio) i--;
+    top.splice(i, 0, { f, ratio });
+    if (top.length > count) top.pop();
+  }
+  return top.map((t) => t.f);
+}
+
 /** Length of one pipe, m, node to node in 3-D, as the analysis measured it. */
 export const pipeLength = (analysis: Analysis, pipe: { id: string; from: string }): number =>
   analysis.legs.get(pipe.from)?.find((l) => l.pipe.id === pipe.id)?.length ?? 0;
 
-/** Length of the whole network, m: every pipe once (each appears as two legs). */
+const lengths = new WeakMap<Analysis['legs'], number>();
+
+/**
+ * Length of the whole network, m: every pipe once (each appears as two legs). Worked out once per legs
+ * map: a load-case edit keeps the analysis's legs, so a pressure change does not add them up again.
+ */
 export function networkLength(analysis: Analysis): number {
-  let sum = 0;
-  for (const legs of analysis.legs.values()) for (const l of legs) sum += l.length;
-  return sum / 2;
+  let sum = lengths.get(analysis.legs);
+  if (sum === undefined) {
+    sum = 0;
+    for (const legs of analysis.legs.values()) for (const l of legs) sum += l.length;
+    sum /= 2;
+    lengths.set(analysis.legs, sum);
+  }
+  return sum;
+}
+
+const pieceCounts = new WeakMap<Project['pipes'], { nodes: Project['nodes']; pieces: number }>();
+
+/** How many separate pieces the route is in, worked out again only when its nodes or pipes change. */
+function pieceCount(project: Project): number {
+  const known = pieceCounts.get(project.pipes);
+  if (known && known.nodes === project.nodes) return known.pieces;
+  const pieces = routePieces(project).length;
+  pieceCounts.set(project.pipes, { nodes: project.nodes, pieces });
+  return pieces;
 }
 
 /** The route in numbers, as the summary panel shows it with nothing selected. */
@@ -52,7 +93,7 @@ export function routeSummary(analysis: Analysis): RouteSummaryFigures {
       length: networkLength(analysis),
       concrete: analysis.fittings.reduce((v, f) => v + restraintConcrete(f.restraint), 0),
       ranked: largestThrusts(analysis, 6),
-      pieces: routePieces(analysis.project).length,
+      pieces: pieceCount(analysis.project),
       warned: analysis.fittings.filter((f) => f.diagnostics.some((d) => d.severity !== 'info')).length,
     };
     summaries.set(analysis, s);

@@ -31,7 +31,7 @@ interface FilePipe {
 }
 
 /**
- * An independent oracle written here from brief.md, sharing no code with the solver:
+ * An independent oracle written here from the momentum balance, sharing no code with the solver:
  * F = −Σ (p·A_i + ρ·Q_i²/a_i)·n_i at each node, p = p_case + ρ·g·(datum − z), A on the OD.
  */
 function oracle(file: {

@@ -13,8 +13,8 @@ const size = (series: string, nominal: string) => {
 const odInches = (series: string, nominal: string) => size(series, nominal).outsideDiameter / INCH;
 
 describe('the pipe catalogue', () => {
-  it('gives every AWWA C151 ductile-iron outside diameter of domain reference §7.1', () => {
-    // AWWA C151 OD, in, domain.md §7.1 [read]
+  it('gives every AWWA C151 ductile-iron outside diameter (docs/check-values.md CV-35)', () => {
+    // AWWA C151 OD, in: docs/check-values.md CV-35, published
     // prettier-ignore
     const c151: [string, number][] = [
       ['3', 3.96], ['4', 4.8], ['6', 6.9], ['8', 9.05], ['10', 11.1], ['12', 13.2], ['14', 15.3], ['16', 17.4],
@@ -27,8 +27,8 @@ describe('the pipe catalogue', () => {
     for (const [n, od] of c151.slice(6)) expectClose(odInches('di-awwa-pc250', n), od, 1e-12);
   });
 
-  it('gives every EN 545 external diameter of domain reference §7.4', () => {
-    // EN 545:2010 / ISO 2531 DE, mm, domain.md §7.4 [read], except DN450, 1100, 1200 (from memory)
+  it('gives every EN 545 external diameter (docs/check-values.md CV-36)', () => {
+    // EN 545:2010 / ISO 2531 DE, mm: docs/check-values.md CV-36, published except DN450, 1100, 1200 (from memory)
     // prettier-ignore
     const en545: [number, number][] = [
       [80, 98], [100, 118], [125, 144], [150, 170], [200, 222], [250, 274], [300, 326], [350, 378], [400, 429],
@@ -39,15 +39,15 @@ describe('the pipe catalogue', () => {
     for (const [dn, mm] of en545) expectClose(size('di-en545', `DN${dn}`).outsideDiameter, mm / 1000, 1e-12);
   });
 
-  it('gives the IPS and DIPS outside diameters of AWWA C906 in domain reference §7.3', () => {
-    // IPS OD, in, domain.md §7.3 [read: PE producer's table]
+  it('gives the IPS and DIPS outside diameters of AWWA C906 (docs/check-values.md CV-37, CV-38)', () => {
+    // IPS OD, in: docs/check-values.md CV-37, published (a PE pipe producer's C906 table)
     // prettier-ignore
     const ips: [string, number][] = [
       ['4', 4.5], ['6', 6.625], ['8', 8.625], ['10', 10.75], ['12', 12.75], ['14', 14], ['16', 16], ['18', 18],
       ['20', 20], ['22', 22], ['24', 24], ['26', 26], ['28', 28], ['30', 30], ['32', 32], ['34', 34], ['36', 36],
       ['42', 42], ['48', 48], ['54', 54],
     ];
-    // DIPS OD, in, domain.md §7.3 [read: same table; 54 in is 57.10 there]
+    // DIPS OD, in: docs/check-values.md CV-38, published (same table; 54 in is 57.10 there)
     // prettier-ignore
     const dips: [string, number][] = [
       ['4', 4.8], ['6', 6.9], ['8', 9.05], ['10', 11.1], ['12', 13.2], ['14', 15.3], ['16', 17.4], ['18', 19.5],
@@ -64,7 +64,7 @@ describe('the pipe catalogue', () => {
   });
 
   it('makes AWWA C900 PVC to the ductile-iron outside diameter of the same nominal size', () => {
-    // AWWA C900 DI-OD series = C151 ODs, docs/check-values.md CV-26 (domain reference §7.2)
+    // AWWA C900 DI-OD series = C151 ODs, docs/check-values.md CV-39 (AWWA C900-16 scope)
     const upTo24 = ['4', '6', '8', '10', '12', '14', '16', '18', '20', '24'];
     expect(findSeries('pvc-c900-dr14')!.sizes.map((s) => s.nominal)).toEqual(upTo24);
     // DR 18 and DR 25 go on above 24 in (C900-16 spans 4–60 in; the DR/size pairs above 24 in from memory)

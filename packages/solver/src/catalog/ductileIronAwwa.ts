@@ -4,7 +4,8 @@ import { awwaDuctileIronRating } from './pressureRatings.js';
 
 /**
  * Ductile-iron outside diameters, in, AWWA C151/A21.51; one OD for every pressure class
- * (domain reference §7.1 [read]). Also the OD series of AWWA C900 PVC.
+ * (AWWA C151/A21.51 thickness tables [read: reproduced in a utility specification and a pipe
+ * producer's table]). Also the OD series of AWWA C900 PVC.
  */
 // prettier-ignore
 export const C151_OD: Readonly<Record<string, number>> = {

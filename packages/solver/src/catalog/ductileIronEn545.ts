@@ -6,7 +6,7 @@ type En545Row = readonly [dn: number, od: number, wall: number, pressureClass: '
 
 /**
  * EN 545:2010 / ISO 2531 ductile iron, DN80–DN1200.
- * External diameters: domain reference §7.4 [read], except DN450, DN1100, DN1200 (from memory).
+ * External diameters: EN 545:2010 dimension table [read: a pipe producer's reproduction], except DN450, DN1100, DN1200 (from memory).
  * Walls: the minimum wall thickness of EN 545:2010's pressure-class table [read: a pipe producer's
  * reproduction, DN80–DN1000 without DN450], taken in the preferred class: C40 to DN300 and C30 for
  * DN350–600 [read: a second producer's dimensions page], C25 for DN700 and up.

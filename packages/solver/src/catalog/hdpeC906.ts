@@ -3,8 +3,8 @@ import { sizeFromDr, type PipeSeries } from './pipeSeries.js';
 import { c906Rating } from './pressureRatings.js';
 
 /**
- * IPS outside diameters, in: the steel-pipe ODs of ASME B36.10 that AWWA C906 uses (domain
- * reference §7.3 [read: a PE pipe producer's table]). 3 in lies below C906's 4-in lower limit and
+ * IPS outside diameters, in: the steel-pipe ODs of ASME B36.10 that AWWA C906 uses (AWWA C906,
+ * dimension tables [read: a PE pipe producer's table]). 3 in lies below C906's 4-in lower limit and
  * 63/65 in are only from memory, so both are left out.
  */
 // prettier-ignore
@@ -15,8 +15,8 @@ const IPS_OD: readonly [string, number][] = [
 ];
 
 /**
- * DIPS outside diameters, in: the ductile-iron ODs as AWWA C906 PE pipe is made to them (domain
- * reference §7.3 [read: same producer's table]). 54 in is 57.10 there, the older DI value; current
+ * DIPS outside diameters, in: the ductile-iron ODs as AWWA C906 PE pipe is made to them (AWWA C906,
+ * dimension tables [read: same producer's table]). 54 in is 57.10 there, the older DI value; current
  * C151 gives 57.56, so a 54-in PE pipe may not fit a current DI fitting.
  */
 // prettier-ignore

@@ -4,8 +4,8 @@ import { sizeFromDr, type PipeSeries } from './pipeSeries.js';
 import { c900Rating } from './pressureRatings.js';
 
 /**
- * AWWA C900 PVC is made to the ductile-iron (CI/DI) outside diameters of AWWA C151 (domain
- * reference §7.2 [read for 4–12 in]). C900-16, which absorbed C905, spans 4–60 in [read: title].
+ * AWWA C900 PVC is made to the ductile-iron (CI/DI) outside diameters of AWWA C151 (AWWA C900-16,
+ * scope [read for 4–12 in: a pipe producer's note]). C900-16, which absorbed C905, spans 4–60 in [read: title].
  * DR 14 is kept to 4–24 in; DR 18 and DR 25 run on to 36 in (which DR is made in which size above
  * 24 in is from memory, and 42–60 in are left out until the standard's table is read).
  */

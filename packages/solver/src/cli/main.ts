@@ -1,7 +1,6 @@
 import { resolve } from 'node:path';
 import { runCli } from './run.js';
 import { readLimited } from './readLimited.js';
-import { runExchange } from './exchange.js';
 
 // pnpm runs scripts from the package root; INIT_CWD is where the user typed the command.
 const base = process.env.INIT_CWD ?? process.cwd();
@@ -20,9 +19,12 @@ const io = {
   out: (text: string) => void (readerGone || process.stdout.write(text)),
   err: (text: string) => void process.stderr.write(text),
 };
-// Import and export load the CSV and projection libraries; the rest may load the schema library.
+// Import and export (and the CSV, projection and schema libraries they read with) load only for those
+// commands: every other command starts with the solver alone, and loads the schema only to word a refusal.
 const run =
-  (argv[0] === 'import' || argv[0] === 'export') && !argv.includes('--help') ? runExchange(argv, io) : runCli(argv, io);
+  (argv[0] === 'import' || argv[0] === 'export') && !argv.includes('--help')
+    ? import('./exchange.js').then(({ runExchange }) => runExchange(argv, io))
+    : runCli(argv, io);
 void run.then((status) => {
   process.exitCode = status;
 });

@@ -8,7 +8,7 @@ import { analyse } from '../analysis/analyse.js';
 import { legsByNode } from '../network/legs.js';
 import { fittingGeometry, needsRestraint } from '../network/fittingKind.js';
 import { scheduleOf } from '../schedule/scheduleRows.js';
-import { scheduleJson } from '../schedule/scheduleJson.js';
+import { writeScheduleJson } from '../schedule/scheduleJson.js';
 import { scheduleView } from '../schedule/scheduleView.js';
 import { scheduleCsv } from '../schedule/scheduleCsv.js';
 import { scheduleTable } from '../schedule/scheduleTable.js';
@@ -214,7 +214,10 @@ export async function runCli(argv: readonly string[], rawIo: CliIo): Promise<num
     const pretty = io.interactive === true || args.options.has('pretty');
     // What the file already says (positions, labels, soils, pipe sizes) is left out unless --full.
     const full = args.options.has('full');
-    if (format === 'json') io.out(scheduleJson(scheduleOf(analysis), { pretty, echo: full }));
+    if (format === 'json')
+      // Streamed in pieces (some 13 MB at 10,000 fittings), each through the terminal guard: the same
+      // text as guarding the whole, since JSON has no raw CR or other C0 control for a cut to split.
+      writeScheduleJson(scheduleOf(analysis), io.out, { pretty, echo: full });
     else if (format === 'csv') io.out(scheduleCsv(escapeStrings(scheduleView(analysis, units))));
     else if (format === 'table')
       io.out(

@@ -12,6 +12,15 @@ const CONTROL_BUT_LINE_ENDS =
   // eslint-disable-next-line no-control-regex -- matching control characters is the point
   /\r(?!\n)|[\u0000-\u0009\u000b-\u000c\u000e-\u001f\u007f-\u009f\u061c\u200e\u200f\u2028\u2029\u202a-\u202e\u2066-\u2069]/g;
 
+/**
+ * Any character CONTROL_BUT_LINE_ENDS may match (every CR counts): a class without the look-ahead,
+ * which the regular-expression engine scans several times faster, so that text with nothing to escape
+ * (nearly all output, 13 MB for a 10,000-fitting JSON schedule) is passed over in one quick scan.
+ */
+// eslint-disable-next-line no-control-regex -- matching control characters is the point
+const MAY_NEED_ESCAPE =
+  /[\u0000-\u0009\u000b-\u001f\u007f-\u009f\u061c\u200e\u200f\u2028\u2029\u202a-\u202e\u2066-\u2069]/;
+
 /** As JSON writes it (`\u001b`): visible, and inside JSON output a string still means the same. */
 const escaped = (c: string) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`;
 
@@ -32,4 +41,5 @@ export function escapeStrings<T>(value: T): T {
  * The last guard before the terminal: whatever a command writes keeps its line ends and nothing else
  * a terminal would act on.
  */
-export const terminalSafe = (text: string): string => text.replace(CONTROL_BUT_LINE_ENDS, escaped);
+export const terminalSafe = (text: string): string =>
+  MAY_NEED_ESCAPE.test(text) ? text.replace(CONTROL_BUT_LINE_ENDS, escaped) : text;

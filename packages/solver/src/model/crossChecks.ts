@@ -54,47 +54,59 @@ function coincidentNodes(p: Project, add: Add) {
   });
 }
 
-/** A second pipe between the same two nodes, and two pipes leaving a node along the same line. */
+/**
+ * A second pipe between the same two nodes, and two pipes leaving a node along the same line. Plain
+ * loops over numbers (a 10,000-pipe file is checked on every command-line run and every edit): the
+ * directions leaving each node are kept as flat lists of pipe index and unit vector.
+ */
 export function overlappingPipes(p: Project, add: Add) {
-  const nodes = new Map(p.nodes.map((n) => [n.id, n]));
+  const nodes = new Map<string, Project['nodes'][number]>();
+  for (const n of p.nodes) nodes.set(n.id, n);
   const pairs = new Map<string, number>();
-  const leaving = new Map<string, { pipe: number; dir: [number, number, number] }[]>();
-  p.pipes.forEach((pipe, i) => {
-    const key = [pipe.from, pipe.to].sort().join('\u0000');
+  const leaving = new Map<string, number[]>();
+  const limit = Math.cos((OVERLAP_ANGLE * Math.PI) / 180);
+  const leave = (i: number, id: string, x: number, y: number, z: number) => {
+    let list = leaving.get(id);
+    if (!list) leaving.set(id, (list = []));
+    for (let k = 0; k < list.length; k += 4) {
+      const cos = list[k + 1]! * x + list[k + 2]! * y + list[k + 3]! * z;
+      if (cos > limit) {
+        const other = list[k]!;
+        add(
+          ['pipes', i],
+          `leaves node "${id}" along the same line as pipes[${other}] ("${p.pipes[other]!.id}"): the two lie on top of each other (is the route folded back on itself?)`,
+        );
+      }
+    }
+    list.push(i, x, y, z);
+  };
+  for (let i = 0; i < p.pipes.length; i++) {
+    const pipe = p.pipes[i]!;
+    // the two ids in code-unit order, as [from, to].sort() puts them
+    const key = pipe.from < pipe.to ? `${pipe.from}\u0000${pipe.to}` : `${pipe.to}\u0000${pipe.from}`;
     const first = pairs.get(key);
     if (first !== undefined) {
       add(
         ['pipes', i],
         `joins the same two nodes as pipes[${first}] ("${p.pipes[first]!.id}"): one pipe between two nodes`,
       );
-      return;
+      continue;
     }
     pairs.set(key, i);
     const a = nodes.get(pipe.from);
     const b = nodes.get(pipe.to);
-    if (!a || !b || pipe.from === pipe.to) return;
-    const d: [number, number, number] = [b.x - a.x, b.y - a.y, b.elevation - a.elevation];
-    const len = norm(d);
-    if (len < MIN_PIPE_LENGTH) return;
-    const u: [number, number, number] = [d[0] / len, d[1] / len, d[2] / len];
-    for (const [id, dir] of [
-      [a.id, u],
-      [b.id, [-u[0], -u[1], -u[2]] as [number, number, number]],
-    ] as const) {
-      const list = leaving.get(id) ?? [];
-      for (const other of list) {
-        const cos = other.dir[0] * dir[0] + other.dir[1] * dir[1] + other.dir[2] * dir[2];
-        if (cos > Math.cos((OVERLAP_ANGLE * Math.PI) / 180)) {
-          add(
-            ['pipes', i],
-            `leaves node "${id}" along the same line as pipes[${other.pipe}] ("${p.pipes[other.pipe]!.id}"): the two lie on top of each other (is the route folded back on itself?)`,
-          );
-        }
-      }
-      list.push({ pipe: i, dir });
-      leaving.set(id, list);
-    }
-  });
+    if (!a || !b || pipe.from === pipe.to) continue;
+    const dx = b.x - a.x;
+    const dy = b.y - a.y;
+    const dz = b.elevation - a.elevation;
+    const len = norm([dx, dy, dz]);
+    if (len < MIN_PIPE_LENGTH) continue;
+    const ux = dx / len;
+    const uy = dy / len;
+    const uz = dz / len;
+    leave(i, a.id, ux, uy, uz);
+    leave(i, b.id, -ux, -uy, -uz);
+  }
 }
 
 /** A node with a ground level must have its pipe below it: the derived cover is not negative. */

@@ -27,22 +27,25 @@ const CODE: Partial<Record<LimitId, DiagnosticCode>> = {
  */
 export function implausibleInputs(p: Project): Diagnostic[] {
   const out: Diagnostic[] = [];
-  const check = (id: LimitId, v: number, subject: Subject) => {
+  // The subject is made only for a value out of range: every node and pipe is checked on every analysis.
+  const check = (id: LimitId, v: number, subject: () => Subject) => {
     const l: Limit = LIMITS[id];
     const code = CODE[id];
     if (code && l.usual && unusual(l, v))
-      out.push(diagnostic(code, subject, { value: v, low: l.usual.min, high: l.usual.max }));
+      out.push(diagnostic(code, subject(), { value: v, low: l.usual.min, high: l.usual.max }));
   };
-  check('density', p.water.density, { field: 'water.density' });
+  check('density', p.water.density, () => ({ field: 'water.density' }));
   const d = p.design;
-  check('concreteUnitWeight', d.concreteUnitWeight, { field: 'design.concreteUnitWeight' });
-  check('blockDepth', d.blockDepth, { field: 'design.blockDepth' });
-  if (d.trenchWidth !== null) check('trenchWidth', d.trenchWidth, { field: 'design.trenchWidth' });
+  check('concreteUnitWeight', d.concreteUnitWeight, () => ({ field: 'design.concreteUnitWeight' }));
+  check('blockDepth', d.blockDepth, () => ({ field: 'design.blockDepth' }));
+  if (d.trenchWidth !== null) check('trenchWidth', d.trenchWidth, () => ({ field: 'design.trenchWidth' }));
   for (const k of ['bearingSafetyFactor', 'upliftSafetyFactor', 'restraintSafetyFactor'] as const)
-    check('safetyFactor', d[k], { field: `design.${k}` });
-  p.loadCases.forEach((c, i) => check('pressure', c.pressure, { case: c.id, field: `loadCases[${i}].pressure` }));
+    check('safetyFactor', d[k], () => ({ field: `design.${k}` }));
+  p.loadCases.forEach((c, i) =>
+    check('pressure', c.pressure, () => ({ case: c.id, field: `loadCases[${i}].pressure` })),
+  );
   p.soils.forEach((s, i) => {
-    const at = (f: string) => ({ soil: s.id, field: `soils[${i}].${f}` });
+    const at = (f: string) => () => ({ soil: s.id, field: `soils[${i}].${f}` });
     check('bearing', s.bearing, at('bearing'));
     check('soilUnitWeight', s.unitWeight, at('unitWeight'));
     check('frictionAngle', s.frictionAngle, at('frictionAngle'));
@@ -50,10 +53,10 @@ export function implausibleInputs(p: Project): Diagnostic[] {
   });
   const od = nodeOutsideDiameters(p);
   p.nodes.forEach((n, i) =>
-    check('cover', nodeCover(n, od.get(n.id) ?? 0), {
+    check('cover', nodeCover(n, od.get(n.id) ?? 0), () => ({
       node: n.id,
       field: `nodes[${i}].${n.groundLevel === undefined ? 'cover' : 'groundLevel'}`,
-    }),
+    })),
   );
   // Groundwater above the ground everywhere: no usual range fits every site, but above the whole
   // route it is more often an elevation typed in another unit or datum than a flooded site.
@@ -73,9 +76,9 @@ export function implausibleInputs(p: Project): Diagnostic[] {
   let factor = 0;
   for (const c of p.loadCases) factor = Math.max(factor, Math.abs(c.flowFactor));
   p.pipes.forEach((pipe, i) => {
-    check('outsideDiameter', pipe.outsideDiameter, { pipe: pipe.id, field: `pipes[${i}].outsideDiameter` });
+    check('outsideDiameter', pipe.outsideDiameter, () => ({ pipe: pipe.id, field: `pipes[${i}].outsideDiameter` }));
     const velocity = (Math.abs(pipe.flow) * factor) / ((Math.PI * pipe.insideDiameter ** 2) / 4);
-    check('velocity', velocity, { pipe: pipe.id, field: `pipes[${i}].flow` });
+    check('velocity', velocity, () => ({ pipe: pipe.id, field: `pipes[${i}].flow` }));
   });
   return out;
 }

@@ -45,11 +45,12 @@ export function runLetter(index: number): string {
  */
 export function runLayout(project: Project, legs: ReadonlyMap<string, readonly Leg[]>): RunLayout {
   const degree = (id: string) => legs.get(id)?.length ?? 0;
-  const starts = [
-    ...project.nodes.filter((n) => n.end === 'tie-in' && degree(n.id) === 1),
-    ...project.nodes.filter((n) => degree(n.id) === 1),
-    ...project.nodes.filter((n) => degree(n.id) > 0),
-  ];
+  // The candidate starts in order, made one at a time: the first usually walks the whole route.
+  function* starts() {
+    for (const n of project.nodes) if (n.end === 'tie-in' && degree(n.id) === 1) yield n;
+    for (const n of project.nodes) if (degree(n.id) === 1) yield n;
+    for (const n of project.nodes) if (degree(n.id) > 0) yield n;
+  }
   const walked = new Set<string>();
   const runOf = new Map<string, string>();
   const chainage = new Map<string, number>();
@@ -92,7 +93,7 @@ export function runLayout(project: Project, legs: ReadonlyMap<string, readonly L
   // three candidate starts per node).
   let pipeEnds = 0;
   for (const l of legs.values()) pipeEnds += l.length;
-  for (const start of starts) {
+  for (const start of starts()) {
     if (2 * walked.size >= pipeEnds) break;
     const first = (legs.get(start.id) ?? []).find((l) => !walked.has(l.pipe.id));
     if (!first) continue;

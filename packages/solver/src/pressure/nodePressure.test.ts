@@ -9,7 +9,7 @@ describe('pressure at a node from the case datum', () => {
     expectClose(p, 1.2937e6, 1e-4);
   });
 
-  it('water of 62.4 lb/ft³ adds 0.4333 psi per foot of depth (domain reference §3.3)', () => {
+  it('water of 62.4 lb/ft³ adds 0.4333 psi per foot of depth (hydrostatics ρ·g·h, computed: 62.4/144 = 0.4333)', () => {
     const density = (62.4 * 0.45359237) / FOOT ** 3; // lb/ft³ → kg/m³ (NIST SP 811)
     const p = pressureAt({ id: 't', pressure: 0, datumElevation: FOOT, flowFactor: 0 }, 0, density);
     expectClose(p / PSI, 0.4333, 2e-4);

@@ -31,8 +31,8 @@ export interface TestProposal {
 /**
  * Least field-test pressure for the route from its working case and its actual elevations:
  * AWWA C600 — at least 1.5 × the working pressure at the point of testing and at least 1.25 × the
- * working pressure at the highest point of the section (domain reference §3.2, read via a
- * manufacturer's restatement); AWWA C605 — at least 1.5 × the working pressure at the lowest point
+ * working pressure at the highest point of the section (AWWA C600, hydrostatic testing, read via a
+ * manufacturer's restatement; docs/check-values.md CV-22); AWWA C605 — at least 1.5 × the working pressure at the lowest point
  * (read) and 1.25 × at the highest point (from memory). Static head between points: ρ·g·Δz.
  */
 export function proposeTestPressure(

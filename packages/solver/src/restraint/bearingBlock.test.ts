@@ -20,7 +20,7 @@ const base = (over: Partial<BearingBlockInput> = {}): BearingBlockInput => ({
   ...over,
 });
 
-describe('bearing block area A = SF·T/σ (DIPRA form, domain reference §4.1)', () => {
+describe('bearing block area A = SF·T/σ (DIPRA form; docs/check-values.md CV-11, CV-12)', () => {
   it('29,030 lb at SF 1.5 on 1,500 psf silt needs 29.03 ft² (CV-11)', () => {
     expectClose(sizeBearingBlock(base()).block!.bearingArea / FT2, 29.03, 1e-4);
   });

@@ -1,6 +1,14 @@
 import type { Vec3 } from '../geometry/vector.js';
 import { value, type CalcStep } from '../analysis/calcRecord.js';
-import { ovesenFactor, passiveResistance } from './passiveResistance.js';
+import {
+  ovesenAt,
+  ovesenDepthTerm,
+  ovesenDepthTerm3,
+  ovesenFactor,
+  passivePerWidth,
+  passiveResistance,
+  rankinePassiveCoefficient,
+} from './passiveResistance.js';
 import { REGISTER } from '../provenance/register.js';
 import { roundDownTo, roundUpTo } from './rounding.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
@@ -86,7 +94,8 @@ interface Face {
 }
 
 /**
- * Sizes a concrete bearing block against undisturbed soil (domain reference §4.1, §4.6, §4.7). The face
+ * Sizes a concrete bearing block against undisturbed soil (DIPRA bearing method, Rankine
+ * passive resistance, DIPRA/AWWA M23 face proportions). The face
  * is centred on the pipe; every face the limits allow is a candidate — heights in whole steps from the
  * OD to the face rule's tallest (⅔ of the centreline depth), widths in whole steps up to twice the
  * height (and within the trench where the face stands across it), or up to the register's widest face at the tallest height, where the cover stops deepening.
@@ -130,13 +139,22 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
     return { twoD, shape, total: twoD * shape };
   };
   const needed = i.safetyFactor * i.thrust;
-  const better = (a: Face | null, b: Face) =>
-    a === null ||
-    b.width * b.height < a.width * a.height - 1e-12 ||
-    (Math.abs(b.width * b.height - a.width * a.height) <= 1e-12 &&
-      Math.abs(Math.log(b.width / b.height)) < Math.abs(Math.log(a.width / a.height)));
-  let byBearing: Face | null = null;
-  let chosen: Face | null = null;
+  // The search below weighs many faces of one soil and depth: Kp, √Kp and (Kp − Ka)^⅔ once per block,
+  // the depth terms once per height, then a few operations per width — the arithmetic of
+  // passiveResistance × ovesenFactor in the same order, so `resistance` gives the same numbers.
+  const kp = rankinePassiveCoefficient(i.soil.frictionAngle);
+  const sqrtKp = Math.sqrt(kp);
+  const d = kp - 1 / kp;
+  const d23 = d ** (2 / 3);
+  const better = (aw: number, ah: number, bw: number, bh: number) =>
+    aw < 0 ||
+    bw * bh < aw * ah - 1e-12 ||
+    (Math.abs(bw * bh - aw * ah) <= 1e-12 && Math.abs(Math.log(bw / bh)) < Math.abs(Math.log(aw / ah)));
+  // Faces as two numbers each (−1: none yet): a block is sized at every fitting on every edit.
+  let bearingW = -1;
+  let bearingH = -1;
+  let chosenW = -1;
+  let chosenH = -1;
   const heights = Math.round((tallest - shortest) / i.step);
   const heightAt = (k: number) => shortest + k * i.step;
   for (let k = 0; k <= heights; k++) {
@@ -144,12 +162,36 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
     const wMax = widest(height);
     const wBearing = Math.max(shortest, roundUpTo(area / height, i.step));
     if (wBearing > wMax + 1e-9) continue;
-    if (better(byBearing, { width: wBearing, height })) byBearing = { width: wBearing, height };
+    if (better(bearingW, bearingH, wBearing, height)) {
+      bearingW = wBearing;
+      bearingH = height;
+    }
     // No wider face at this height can beat the best found so far.
-    if (chosen && wBearing * height > chosen.width * chosen.height + 1e-12) continue;
+    if (chosenW >= 0 && wBearing * height > chosenW * chosenH + 1e-12) continue;
     // The passive resistance grows with the width: find the narrowest face that holds.
+    const top = centreDepth - height / 2;
+    const bottom = centreDepth + height / 2;
+    const perWidth = passivePerWidth(
+      kp,
+      sqrtKp,
+      top,
+      bottom,
+      i.soil.unitWeight,
+      i.soil.cohesion,
+      i.waterDepth,
+      i.waterUnitWeight,
+    );
+    const h = bottom - Math.max(0, top);
+    const flat = !(h > 0) || d <= 0;
+    const e = 1 - h / bottom;
+    const term4 = flat ? 0 : ovesenDepthTerm(e);
+    const term3 = flat ? 0 : ovesenDepthTerm3(d, e);
     const steps = Math.floor((wMax - wBearing) / i.step + 1e-9);
-    const holds = (n: number) => resistance({ width: wBearing + n * i.step, height }).total >= needed;
+    const holds = (n: number) => {
+      const width = wBearing + n * i.step;
+      const shape = flat || !(width > 0) ? 1 : ovesenAt(d23, term4, term3, h, width);
+      return width * perWidth * shape >= needed;
+    };
     let lo = 0;
     if (!holds(0)) {
       if (!holds(steps)) continue;
@@ -161,9 +203,14 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
         else lo = mid + 1;
       }
     }
-    const face = { width: wBearing + lo * i.step, height };
-    if (better(chosen, face)) chosen = face;
+    const width = wBearing + lo * i.step;
+    if (better(chosenW, chosenH, width, height)) {
+      chosenW = width;
+      chosenH = height;
+    }
   }
+  const byBearing: Face | null = bearingW < 0 ? null : { width: bearingW, height: bearingH };
+  const chosen: Face | null = chosenW < 0 ? null : { width: chosenW, height: chosenH };
   if (!chosen) {
     // The strongest face within the limits, for the message.
     let strongest = { face: { width: widest(shortest), height: shortest }, resistance: 0 };

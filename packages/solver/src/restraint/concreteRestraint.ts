@@ -41,12 +41,18 @@ export const present = (force: number, total: number) => force > 1e-7 * total &&
  */
 function acrossTrench(direction: Vec3, legs: readonly Leg[]): boolean {
   const limit = REGISTER['block.across-trench'].value;
-  const angles = legs.flatMap((l) => {
+  // One pass, no arrays: asked for every block of every fitting.
+  let planLegs = 0;
+  let allAlongLine = true;
+  for (const l of legs) {
     const plan = horizontal(l.direction);
-    return horizontalNorm(plan) < 1e-9 ? [] : [angleBetween(direction, plan)];
-  });
-  if (angles.length === 0) return false;
-  return angles.some((a) => a < limit) || angles.every((a) => Math.min(a, 180 - a) < limit);
+    if (horizontalNorm(plan) < 1e-9) continue;
+    const a = angleBetween(direction, plan);
+    if (a < limit) return true;
+    planLegs++;
+    if (!(Math.min(a, 180 - a) < limit)) allAlongLine = false;
+  }
+  return planLegs > 0 && allAlongLine;
 }
 
 /**
@@ -242,8 +248,9 @@ function sizeBlocks(
   }
   const block = (force: number, direction: Vec3) => {
     const across = acrossTrench(direction, legs);
+    // One shape of input for every block (no conditional spread): sized at every fitting on every edit.
     const r = sizeBearingBlock({
-      ...(across ? { trenchWidth: site.trenchWidth } : {}),
+      trenchWidth: across ? site.trenchWidth : undefined,
       thrust: force,
       direction,
       allowableBearing: allowable,
@@ -257,7 +264,7 @@ function sizeBlocks(
       waterUnitWeight: site.waterUnitWeight,
       record,
     });
-    out.steps.push(...r.steps);
+    for (const step of r.steps) out.steps.push(step);
     for (const d of r.diagnostics) out.diagnostics.push({ ...d, subject: { ...d.subject, node } });
     if (r.block && across && r.block.faceWidth > site.trenchWidth + 1e-9) {
       out.diagnostics.push(

@@ -29,7 +29,7 @@ const crestRoute = (extra: Partial<Parameters<typeof route>[0]> = {}) =>
     ...extra,
   });
 
-describe('gravity anchor at a crest bend (domain reference §5)', () => {
+describe('gravity anchor at a crest bend (DIPRA gravity block form; docs/check-values.md CV-13)', () => {
   const f = analyse(crestRoute({ design: { concreteUnitWeight: 150 * PCF, upliftSafetyFactor: 1.5 } })).byNode.get(
     'c',
   )!;

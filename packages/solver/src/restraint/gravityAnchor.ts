@@ -58,11 +58,11 @@ export const baseFrictionCoefficient = (frictionAngle: number): number =>
   Math.tan((REGISTER['anchor.base-friction'].value * frictionAngle * Math.PI) / 180);
 
 /**
- * Dead-weight anchor for an upward thrust (domain reference §5.2; the DIPRA form V = S_f·T_v/W_m is
+ * Dead-weight anchor for an upward thrust (DIPRA gravity thrust block; the form V = S_f·T_v/W_m is
  * recalled, not read). Statics of the block: vertically W′ ≥ SF·T_up; horizontally, where base friction
  * is to hold the horizontal thrust too, the normal force on the base is what the uplift leaves of the
  * weight, N = W′ − T_up, so (W′ − T_up)·tan δ ≥ SF·T_h, i.e. W′ ≥ T_up + SF·T_h/tan δ. The block hangs
- * below the pipe and counts as submerged (γc − γw, §5.3) when the highest groundwater stands above its
+ * below the pipe and counts as submerged (γc − γw) when the highest groundwater stands above its
  * bottom. Where the submerged weight is not positive, no dead weight can hold: an error, never a
  * negative volume.
  */

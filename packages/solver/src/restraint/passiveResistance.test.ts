@@ -5,7 +5,7 @@ import { ovesenFactor, passiveResistance, rankinePassiveCoefficient } from './pa
 const WATER_UNIT_WEIGHT = 998.2 * 9.80665;
 import { expectClose } from '../../test/tolerance.js';
 
-describe('Rankine passive resistance (domain reference §4.6)', () => {
+describe('Rankine passive resistance (Rankine earth pressure; docs/check-values.md CV-15 to CV-17)', () => {
   it.each([
     [25, 2.464],
     [30, 3.0],

@@ -62,15 +62,35 @@ export interface PassiveInput {
 }
 
 /**
- * Ultimate passive resistance of a vertical block face, N (domain reference §4.6, Rankine with
- * cohesion): R_p = b·∫[Kp·σ'v(z) + 2c·√Kp] dz, which is b·[½γKp(z2² − z1²) + 2c√Kp(z2 − z1)] in dry
+ * Ultimate passive resistance of a vertical block face, N (Rankine earth pressure with
+ * cohesion, as AWWA M23 and utility details apply it): R_p = b·∫[Kp·σ'v(z) + 2c·√Kp] dz, which is b·[½γKp(z2² − z1²) + 2c√Kp(z2 − z1)] in dry
  * soil. Water pressure acts on both faces of the block and cancels.
  */
 export function passiveResistance(p: PassiveInput): number {
   const kp = rankinePassiveCoefficient(p.frictionAngle);
-  const top = Math.max(0, p.top);
-  const stress = effectiveStressIntegral(top, p.bottom, p.unitWeight, p.waterDepth, p.waterUnitWeight);
-  return p.width * (kp * stress + 2 * p.cohesion * Math.sqrt(kp) * (p.bottom - top));
+  return (
+    p.width *
+    passivePerWidth(kp, Math.sqrt(kp), p.top, p.bottom, p.unitWeight, p.cohesion, p.waterDepth, p.waterUnitWeight)
+  );
+}
+
+/**
+ * `passiveResistance` per metre of face width, N/m, with Kp and √Kp given: a search over many faces of
+ * one soil works them out once. The same arithmetic in the same order, so the same numbers.
+ */
+export function passivePerWidth(
+  kp: number,
+  sqrtKp: number,
+  faceTop: number,
+  bottom: number,
+  unitWeight: number,
+  cohesion: number,
+  waterDepth: number | null,
+  waterUnitWeight: number,
+): number {
+  const top = Math.max(0, faceTop);
+  const stress = effectiveStressIntegral(top, bottom, unitWeight, waterDepth, waterUnitWeight);
+  return kp * stress + 2 * cohesion * sqrtKp * (bottom - top);
 }
 
 export interface OvesenInput {
@@ -103,10 +123,21 @@ export function ovesenFactor(p: OvesenInput): number {
   const h = p.bottom - Math.max(0, p.top);
   if (!(h > 0) || !(p.width > 0) || d <= 0) return 1;
   const e = 1 - h / p.bottom;
-  const r = p.width / h;
-  const spacing = 1; // B = 1 − (b/s)² with no neighbouring block
-  return (
-    1 +
-    d ** (2 / 3) * (1.1 * e ** 4 + (1.6 * spacing) / (1 + 5 * r) + (0.4 * d * e ** 3 * spacing ** 2) / (1 + 0.05 * r))
-  );
+  return ovesenAt(d ** (2 / 3), ovesenDepthTerm(e), ovesenDepthTerm3(d, e), h, p.width);
+}
+
+const SPACING = 1; // B = 1 − (b/s)² with no neighbouring block
+
+/**
+ * The parts of Ovesen's factor that do not depend on the width, for a face of depth ratio E: 1.1·E⁴
+ * and 0.4·(Kp − Ka)·E³·B². `ovesenAt` finishes the factor for a width; a search over widths at one
+ * height works these out once (the same arithmetic, so the same numbers as `ovesenFactor`).
+ */
+export const ovesenDepthTerm = (e: number): number => 1.1 * e ** 4;
+export const ovesenDepthTerm3 = (d: number, e: number): number => 0.4 * d * e ** 3 * SPACING ** 2;
+
+/** Ovesen's factor from (Kp − Ka)^⅔, the two depth terms, the face height h > 0 and width b > 0. */
+export function ovesenAt(d23: number, term4: number, term3: number, h: number, width: number): number {
+  const r = width / h;
+  return 1 + d23 * (term4 + (1.6 * SPACING) / (1 + 5 * r) + term3 / (1 + 0.05 * r));
 }

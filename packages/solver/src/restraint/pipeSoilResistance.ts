@@ -27,12 +27,13 @@ export interface PipeSoilResistance {
 }
 
 /**
- * Pipe–soil resistance per metre of restrained pipe (domain reference §6.1; DIPRA method,
+ * Pipe–soil resistance per metre of restrained pipe (DIPRA, "Thrust Restraint Design for Ductile
+ * Iron Pipe"; AWWA M41;
  * equation bodies from memory): F_s = A_p·C_p + W·tan δ with A_p = π·D, W = 2·W_e + W_p + W_w,
  * W_e = γ·H·D (the prism load, on top and bottom), C_p = f_c·c, δ = f_φ·φ; encased pipe 0.7·W·tan δ.
  * R_s = K_n·P_p·D, P_p = Rankine passive pressure at the pipe centreline σ'v(H_c)·Kp + 2c·√Kp.
- * Below the water table the soil weighs γ − γw and the pipe is buoyed by γw·π/4·D² (domain reference
- * §10.8: effective stresses under groundwater).
+ * Below the water table the soil weighs γ − γw and the pipe is buoyed by γw·π/4·D² (effective
+ * stresses under groundwater).
  *
  * @param cover m, ground to top of pipe
  */

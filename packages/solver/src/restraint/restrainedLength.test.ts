@@ -17,7 +17,7 @@ import { expectClose } from '../../test/tolerance.js';
 const soils = [{ id: 's', bearing: 150e3, unitWeight: 18000, frictionAngle: 30, cohesion: 0, pipeFrictionRatio: 0.6 }];
 const pipe = { od: 0.33528, id_: 0.3162, weightPerLength: 700, trenchType: 4 };
 
-describe('restrained joint length (DIPRA method, domain reference §6.1)', () => {
+describe('restrained joint length (DIPRA method; docs/check-values.md CV-34)', () => {
   it('a 90° bend needs 8.43 m each side, as worked by hand', () => {
     const p = route({
       pressure: 1e6,
@@ -106,7 +106,7 @@ describe('restrained joint length (DIPRA method, domain reference §6.1)', () =>
     expect([r.block, r.anchor, r.trenchBottom, r.restrainedLength]).toEqual([null, null, null, null]);
   });
 
-  it('is longer below groundwater: buoyancy and submerged soil, worked by hand (domain reference §10.8)', () => {
+  it('is longer below groundwater: buoyancy and submerged soil, worked by hand (effective stress below the water table)', () => {
     // Water table at the ground: W_e = (γ − γw)·H·D = (18000 − 9789.0) × 1.2 × 0.33528 = 3,303.58 N/m;
     // buoyancy B = γw·π/4·D² = 864.26 N/m; W = 2·W_e + W_p + W_w − B = 7,211.60 N/m; F_s = W·tan 18° = 2,343.19 N/m;
     // dead end L = S_f·p·A/F_s = 1.5 × 1e6 × 0.0882887 / 2,343.19 = 56.518 m (dry: 25.550 m).

@@ -44,7 +44,8 @@ const AXIAL_REFERENCE = reference('joints.axial-equation');
 const UPLIFT_REFERENCE = reference('joints.uplift-equation');
 
 /**
- * Restrained joint length each side of a fitting (domain reference §6.1). Bends, written with the
+ * Restrained joint length each side of a fitting (DIPRA method, as AWWA M41 adopts
+ * it; equation bodies from memory, register `joints.bend-equation`). Bends, written with the
  * resultant T = 2·P·A·sin(θ/2) so that reducing bends and dynamic thrust are covered:
  * L = S_f·T/(2·cos(θ/2)·(F_s + ½·R)), R = R_s, or the hold-down weight where the thrust is mainly
  * upward. Every other fitting: L = S_f·|T|/F_s along the pipe the thrust pulls on (the leg pointing

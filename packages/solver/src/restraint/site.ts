@@ -55,6 +55,6 @@ export function fittingSite(project: Project, node: ProjectNode, legs: readonly 
   };
 }
 
-/** Unit weight of concrete, N/m³, submerged (γc − γw, domain reference §5.3) where groundwater reaches it. */
+/** Unit weight of concrete, N/m³, submerged (γc − γw: Archimedes) where groundwater reaches it. */
 export const concreteWeight = (concreteUnitWeight: number, site: FittingSite, submerged: boolean) =>
   submerged ? concreteUnitWeight - site.waterUnitWeight : concreteUnitWeight;

@@ -11,7 +11,8 @@ export interface TrenchBottomBearing {
 }
 
 /**
- * Downward thrust at a sag bend bears on the trench bottom (brief.md; domain reference §1.6): the
+ * Downward thrust at a sag bend bears on the trench bottom (the vector sum of the pressure forces
+ * has a −z part): the
  * same bearing equation as a block, A = SF·T/σ_v, with the soil's vertical bearing value; the pad is
  * the trench's width and as long as the area needs (at least one OD).
  */

@@ -1,4 +1,8 @@
-/** The usual cautions (domain reference §10), carried by every result screen and printed schedule. */
+/**
+ * The usual cautions of utility specifications and the DIPRA manual (engineer's responsibility, undisturbed
+ * soil, curing before the test — the curing time is attributed to AWWA C600, clause not verified), carried by
+ * every result screen and printed schedule.
+ */
 export const SHORT_CAUTION =
   'Design aid only — every result must be checked by a licensed engineer; local codes and the utility’s standards govern.';
 

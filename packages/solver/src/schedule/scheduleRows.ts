@@ -116,13 +116,35 @@ export function fittingProfile(f: FittingAnalysis): ScheduleFitting['profile'] {
   return upward.force >= downward.force ? 'crest' : 'sag';
 }
 
+/**
+ * The schedule keeps every block field but the depth of the face bottom, an intermediate value (field
+ * by field, in the block's order: a rest pattern copies through a slow path, once per row).
+ */
+function scheduled(b: BearingBlock | null): ScheduleBlock | null {
+  return (
+    b && {
+      bearingArea: b.bearingArea,
+      faceWidth: b.faceWidth,
+      faceHeight: b.faceHeight,
+      concreteVolume: b.concreteVolume,
+      depth: b.depth,
+      direction: b.direction,
+      passiveResistance: b.passiveResistance,
+      shapeFactor: b.shapeFactor,
+      passiveRatio: b.passiveRatio,
+      thrust: b.thrust,
+      upwardThrust: b.upwardThrust,
+      governs: b.governs,
+    }
+  );
+}
+
 function row(a: Analysis, f: FittingAnalysis, words: (d: Diagnostic) => string): ScheduleFitting {
   const { restraint: r, envelope: e, geometry: g } = f;
-  // The schedule keeps every block field but the depth of the face bottom, an intermediate value.
-  const scheduled = (b: BearingBlock | null): ScheduleBlock | null =>
-    b && (({ bottomDepth: _bottom, ...rest }) => rest)(b);
   const toward = (pipe: string) => legTarget(a, f.node.id, pipe);
-  return {
+  let od = 0;
+  for (const l of f.legs) od = Math.max(od, l.pipe.outsideDiameter);
+  const out: Omit<ScheduleFitting, 'warnings' | 'diagnostics' | 'unverified'> = {
     node: f.node.id,
     mark: f.mark,
     run: f.run,
@@ -135,7 +157,7 @@ function row(a: Analysis, f: FittingAnalysis, words: (d: Diagnostic) => string):
     chainage: f.chainage,
     position: [f.node.x, f.node.y, f.node.elevation],
     cover: f.node.cover,
-    groundLevel: f.node.elevation + Math.max(0, ...f.legs.map((l) => l.pipe.outsideDiameter)) / 2 + f.node.cover,
+    groundLevel: f.node.elevation + od / 2 + f.node.cover,
     pipes: f.legs.map((l) => ({
       id: l.pipe.id,
       outsideDiameter: l.pipe.outsideDiameter,
@@ -183,15 +205,27 @@ function row(a: Analysis, f: FittingAnalysis, words: (d: Diagnostic) => string):
         joints: restrainedJointCount(l.length, a.project.design.layingLength),
       })),
     },
-    // Worded when first read: the table, the print and the JSON read them; a pressure change does not.
-    get warnings() {
-      const list = f.diagnostics.length ? f.diagnostics.map(words) : [];
-      Object.defineProperty(this, 'warnings', { value: list, enumerable: true });
-      return list;
-    },
-    diagnostics: f.diagnostics,
-    unverified: unverified(f.basis),
   };
+  // Worded when first read: the table, the print and the JSON read them; a pressure change does not.
+  // One getter shared by every row (a getter made per row puts each row in dictionary mode, twice
+  // the memory), defined here to keep the fields in their order.
+  rowWords.set(out, words);
+  Object.defineProperty(out, 'warnings', { get: wordWarnings, enumerable: true, configurable: true });
+  const row = out as Omit<ScheduleFitting, 'warnings'> as ScheduleFitting;
+  row.diagnostics = f.diagnostics;
+  row.unverified = unverified(f.basis);
+  return row;
+}
+
+/** The wording of each row's findings, until its warnings are read. */
+const rowWords = new WeakMap<object, (d: Diagnostic) => string>();
+
+function wordWarnings(this: ScheduleFitting): string[] {
+  const words = rowWords.get(this)!;
+  const list = this.diagnostics.length ? this.diagnostics.map(words) : [];
+  Object.defineProperty(this, 'warnings', { value: list, enumerable: true });
+  rowWords.delete(this);
+  return list;
 }
 
 const schedules = new WeakMap<Analysis, Schedule>();

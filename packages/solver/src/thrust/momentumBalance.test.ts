@@ -10,8 +10,8 @@ const thrustAt = (p: ReturnType<typeof route>, node: string) => {
 };
 const lbf = (v: readonly number[]) => Math.hypot(...v) / LBF;
 
-describe('bends: T = 2·P·A·sin(Δ/2) (domain reference §1.2) from the vector sum', () => {
-  // CV-2 and CV-3: 12-in ductile iron, OD 13.20 in (AWWA C151, domain reference §7.1), 150 psi.
+describe('bends: T = 2·P·A·sin(Δ/2) (DIPRA; AWWA M23, M41) from the vector sum', () => {
+  // CV-2 and CV-3: 12-in ductile iron, OD 13.20 in (AWWA C151, docs/check-values.md CV-35), 150 psi.
   it.each([
     [90, 29_030],
     [45, 15_711],

@@ -12,7 +12,7 @@ export interface ThrustParts {
 }
 
 /**
- * Steady momentum balance on a control volume around a fitting (brief.md; any fluid-mechanics text,
+ * Steady momentum balance on a control volume around a fitting (any fluid-mechanics text,
  * e.g. White, "Fluid Mechanics", ch. 3, linear momentum with gauge pressures):
  *
  *   F = − Σ_i ( p·A_i + ρ·Q_i²/a_i ) · n_i

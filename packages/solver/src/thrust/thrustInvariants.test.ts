@@ -45,7 +45,7 @@ describe('invariants of the static thrust', () => {
     }
   });
 
-  it('a 90° bend pushes "nearly twice" a 45° bend: 1.848 × (a manufacturer’s design bulletin, domain reference §1.2)', () => {
+  it('a 90° bend pushes "nearly twice" a 45° bend: 1.848 × (a pipe manufacturer’s design bulletin; 2·sin 45° / 2·sin 22.5°, docs/check-values.md CV-1)', () => {
     const od = inches(12.75);
     expectClose(thrust(bendRoute(90, od, psi(100)), 'n2') / thrust(bendRoute(45, od, psi(100)), 'n2'), 1.847759, 1e-6);
   });

@@ -4,7 +4,7 @@ import type { Leg } from '../network/legs.js';
 /**
  * Weight of the water in a fitting's body, N, estimated as one inside diameter of pipe per opening
  * (an estimate of the body's size; fitting weights are the maker's). It acts in −z, helps against
- * uplift, and designs usually neglect it (brief.md).
+ * uplift, and designs usually neglect it (common practice).
  *
  * @param density kg/m³
  */

@@ -1,0 +1,75 @@
+import { describe, expect, it } from 'vitest';
+import { drawLiveChange } from './drawLiveChange.js';
+import { LabelSpace } from './labelSpace.js';
+import type { ScenePolygon } from './planScene.js';
+import type { LiveChange } from './liveChange.js';
+
+/** A 2-D context that records the text drawn and counts the paths stroked (all drawLiveChange calls). */
+function recorder() {
+  const texts: string[] = [];
+  let strokes = 0;
+  const ctx = new Proxy(
+    {},
+    {
+      get: (_, key) => {
+        if (key === 'fillText') return (t: string) => texts.push(t);
+        if (key === 'stroke') return () => strokes++;
+        if (key === 'measureText') return (t: string) => ({ width: 7 * t.length });
+        return () => {};
+      },
+      set: () => true,
+    },
+  ) as unknown as CanvasRenderingContext2D;
+  return { ctx, texts, strokes: () => strokes };
+}
+
+const square = (x: number, y: number, side: number): ScenePolygon => ({
+  node: `b${x}`,
+  kind: 'block',
+  points: [
+    { x, y },
+    { x: x + side, y },
+    { x: x + side, y: y + side },
+    { x, y: y + side },
+  ],
+});
+
+const change = (node: string, x: number, y: number, growth: number): LiveChange => ({
+  node,
+  mark: node,
+  at: { x, y },
+  growth,
+  governing: null,
+});
+
+describe('the live change drawn while the test pressure is dragged (level of detail)', () => {
+  // 1 px per metre, plan origin at the top left: plan (x, y) is screen (x, −y).
+  const view = { scale: 1, left: 0, top: 0 };
+
+  it('draws a ghost of 2 px across but not one of 1 px (MIN_POLYGON_PX = 1.5), nor one off the canvas', () => {
+    const r = recorder();
+    drawLiveChange(
+      r.ctx,
+      view,
+      [square(50, -50, 2), square(80, -50, 1), square(5000, -50, 2)],
+      [],
+      (id) => id,
+      new LabelSpace(400, 300),
+    );
+    expect(r.strokes()).toBe(1);
+  });
+
+  it('labels every change that has room, and leaves out one whose label would overprint it', () => {
+    const r = recorder();
+    const changes = [
+      change('A1', 50, -50, 0.25),
+      change('A2', 50, -200, 0.1),
+      change('A3', 60, -52, 0.5),
+      change('A4', 51, -51, 0.3),
+    ];
+    drawLiveChange(r.ctx, view, [], changes, (id) => id, new LabelSpace(400, 300));
+    // A1 at (50, 50) and A2 at (50, 200) are far apart; A3, 10 px right of A1, would overprint A1's label
+    // (A1's spans x 62–115 at y 64.5–79.5, A3's would start at x 72, y 66.5); A4 shares A1's 6 px cell.
+    expect(r.texts).toEqual(['A1 +25%', 'A2 +10%']);
+  });
+});
