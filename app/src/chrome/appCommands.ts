@@ -1,4 +1,4 @@
-import { loadExchange } from '../files/routeImport.js';
+import { importOrReload } from './loadChunk.js';
 import { savedDocument } from '../state/savedDocument.js';
 import type { AppStore } from '../state/store.js';
 import type { Actions } from '../state/actions.js';
@@ -60,7 +60,7 @@ function startNew(store: AppStore, actions: Actions) {
 
 /** The design as GeoJSON for a GIS; the exchange module loads only now (docs/routes.md). */
 async function exportGeoJson(store: AppStore, actions: Actions) {
-  const ex = await loadExchange();
+  const ex = await importOrReload(() => import('@mainbrace/solver/exchange'));
   const project = store.getState().project;
   const r = ex.designGeoJson(project);
   if (r.ok) download(`${fileStem(project)}.geojson`, r.text, 'application/geo+json');
