@@ -17,7 +17,8 @@ import { takeOffCsv, takeOffTable } from '../schedule/quantitiesText.js';
 import { positionColumns } from '../schedule/stations.js';
 import type { UnitSystem } from '../units/conversions.js';
 import { DEFAULT_MAX_BYTES } from './readLimited.js';
-import { escapeControls, escapeStrings, terminalSafe } from './terminalText.js';
+import { escapeControls, terminalSafe } from './terminalText.js';
+import { escapedView } from './escapedView.js';
 
 /** What the command line needs from the outside world, so that it runs in tests without a process. */
 export interface CliIo {
@@ -218,11 +219,11 @@ export async function runCli(argv: readonly string[], rawIo: CliIo): Promise<num
       // Streamed in pieces (some 13 MB at 10,000 fittings), each through the terminal guard: the same
       // text as guarding the whole, since JSON has no raw CR or other C0 control for a cut to split.
       writeScheduleJson(scheduleOf(analysis), io.out, { pretty, echo: full });
-    else if (format === 'csv') io.out(scheduleCsv(escapeStrings(scheduleView(analysis, units))));
+    else if (format === 'csv') io.out(scheduleCsv(escapedView(scheduleView(analysis, units))));
     else if (format === 'table')
       io.out(
         scheduleTable(
-          escapeStrings(scheduleView(analysis, units)),
+          escapedView(scheduleView(analysis, units)),
           escapeControls(project.name),
           positionColumns(project.sheet?.chainageStyle),
         ),

@@ -17,8 +17,8 @@ const CONTROL_BUT_LINE_ENDS =
  * which the regular-expression engine scans several times faster, so that text with nothing to escape
  * (nearly all output, 13 MB for a 10,000-fitting JSON schedule) is passed over in one quick scan.
  */
-// eslint-disable-next-line no-control-regex -- matching control characters is the point
 const MAY_NEED_ESCAPE =
+  // eslint-disable-next-line no-control-regex -- matching control characters is the point
   /[\u0000-\u0009\u000b-\u001f\u007f-\u009f\u061c\u200e\u200f\u2028\u2029\u202a-\u202e\u2066-\u2069]/;
 
 /** As JSON writes it (`\u001b`): visible, and inside JSON output a string still means the same. */

@@ -95,7 +95,7 @@ function block(b: ScheduleBlock | null): string {
 }
 
 /** What `diagnosticJson` gives, as text: the subject's fields in their order, each value with its kind. */
-function diagnosticText(d: Diagnostic): string {
+function diagnosticJsonText(d: Diagnostic): string {
   const kinds = DIAGNOSTIC_CODES[d.code].values as Record<string, Dimension>;
   let subject = '';
   const s = d.subject as Record<string, unknown>;
@@ -114,7 +114,7 @@ function diagnosticText(d: Diagnostic): string {
 
 function diagnosticList(list: readonly Diagnostic[]): string {
   let out = '';
-  for (let i = 0; i < list.length; i++) out += (i ? ',' : '') + diagnosticText(list[i]!);
+  for (let i = 0; i < list.length; i++) out += (i ? ',' : '') + diagnosticJsonText(list[i]!);
   return `[${out}]`;
 }
 
