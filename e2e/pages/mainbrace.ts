@@ -147,6 +147,8 @@ export class MainbracePage {
 
   async drawerTab(tab: 'schedule' | 'profile' | 'cases' | 'soils' | 'sheet') {
     await this.page.getByTestId(`tab-${tab}`).click();
+    // the tabs after the schedule load in chunks of their own: wait until the chosen one is shown
+    await expect(this.page.getByTestId('drawer-body').getByText(/^Loading /)).toHaveCount(0);
   }
 
   /** Chooses an item of the Export menu and returns the downloaded file's text. */
