@@ -236,7 +236,8 @@ async function dragSlider(page: Page): Promise<number[]> {
 
 /**
  * Main-thread work of one committed test-pressure change, ms: task time from Enter until the results
- * are painted and the page is quiet, less the task time of an idle window of the same length after it.
+ * are painted and the page is quiet, less the task time of an idle window of the same length after it,
+ * driven the same way (polled, then settled).
  */
 async function pressureChanges(page: Page, cdp: CDPSession): Promise<{ work: number[]; wall: number[] }> {
   await page.click('[data-testid=tab-cases]');
@@ -251,10 +252,15 @@ async function pressureChanges(page: Page, cdp: CDPSession): Promise<{ work: num
     const w0 = Date.now();
     await field.press('Enter');
     await waitResultsAfter(page, before);
+    const polled = Date.now() - w0;
     await settle(page);
     const b = await taskMs(cdp);
     const window = Date.now() - w0;
-    await page.waitForTimeout(window);
+    // The idle window drives the page as the change did (a 16 ms poll as long as the change was polled,
+    // then the same settling frames), so the driver's own messages cancel out of the difference.
+    const until = Date.now() + polled;
+    await page.waitForFunction((t) => Date.now() >= t, until, { timeout: 30_000, polling: 16 });
+    await settle(page);
     const c = await taskMs(cdp);
     if (i > 0) {
       // the first change warms the code paths up
