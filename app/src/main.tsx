@@ -16,24 +16,25 @@ import { registerServiceWorker, watchForNewVersion } from './chrome/newVersion.j
 import { createRecovery } from './chrome/recoveryActions.js';
 import { installShortcuts } from './chrome/shortcuts.js';
 import { ErrorBoundary } from './chrome/ErrorBoundary.js';
-import { blankProject } from './files/blankProject.js';
 import type { PipeSpec } from './state/documentEdits.js';
 import { loadChecks, validated } from './state/checks.js';
 import { afterFirstDraw } from './chrome/warmUp.js';
+import { warmParts } from './chrome/lazyPart.js';
 import './styles.css';
 
 const DEMO_URL = `${import.meta.env.BASE_URL}demo/larkspur-rise.json`;
 
 /** The project to open: the one kept from the last visit, else the demo, else a blank one. */
-async function firstProject(kept: Restored): Promise<Project> {
+async function firstProject(kept: Restored, demo: Promise<unknown>): Promise<Project> {
   if (kept.kind === 'project') return kept.project;
   try {
-    const r = await validated(await (await fetch(DEMO_URL)).json());
+    const r = await validated(await demo);
     if (r.ok) return r.project;
   } catch {
     // offline and not cached: start blank
   }
-  return blankProject();
+  // (the blank project reads the soil library, which the first screen otherwise does without)
+  return (await import('./files/blankProject.js')).blankProject();
 }
 
 /** The pipe new runs are drawn with: DN 200 ductile iron in SI, 8-in class 350 in US units. */
@@ -83,8 +84,11 @@ async function start() {
   const kv = browserStore;
   const channel = openTabChannel();
   bindKeptCopies(kv, channel);
+  // The demo is fetched while the kept project is read (index.html preloads it), not after.
+  const demo = fetch(DEMO_URL).then((r) => r.json() as Promise<unknown>);
+  demo.catch(() => undefined); // a kept project opens without it
   const kept = await restoreProject(kv);
-  const project = await firstProject(kept);
+  const project = await firstProject(kept, demo);
   const store = createAppStore(project, defaultPipe(project));
   const actions = createActions(store);
   // The demo or a blank project is nobody's unsaved work: New replaces it without asking.
@@ -142,5 +146,10 @@ async function start() {
 
 void start();
 registerServiceWorker();
-// The schema checks (zod) word refusals and check edits: a valid project opens without them.
-afterFirstDraw(() => void loadChecks().catch(() => undefined));
+// The schema checks (zod) word refusals and check edits: a valid project opens without them. The
+// parts off the first screen follow, one at a time while the page is idle.
+afterFirstDraw(() => {
+  void loadChecks()
+    .catch(() => undefined)
+    .then(warmParts);
+});

@@ -86,7 +86,8 @@ describe('the recovery screen', () => {
       fireEvent.click(screen.getByRole('button', { name: 'New project' }));
       await new Promise((r) => setTimeout(r, 20));
     });
-    expect(screen.getByText('plan drawn')).toBeTruthy();
+    // the blank project's module loads when it is first needed
+    expect(await screen.findByText('plan drawn', {}, { timeout: 5000 })).toBeTruthy();
     expect(store.getState().project.nodes).toHaveLength(0);
     expect((await listKeptCopies(kv)).map((c) => c.name)).toEqual(['Kestrel Way main']);
   });

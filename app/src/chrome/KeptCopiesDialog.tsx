@@ -5,7 +5,6 @@ import {
   keptCopiesView,
   keptCopyText,
   removeKeptCopy,
-  showKeptCopies,
   type KeptCopySummary,
 } from '../state/keptCopiesView.js';
 import { download } from '../files/projectFile.js';
@@ -27,17 +26,6 @@ const fileNameOf = (c: KeptCopySummary) =>
       .replace(/^-|-$/g, '')
       .toLowerCase() || 'project'
   }-kept-${c.keptAt.slice(0, 10)}.json`;
-
-/** The top-bar entry to the kept copies; shown only while there are some. */
-export function KeptCopiesButton() {
-  const count = useStore(keptCopiesView, (s) => s.copies.length);
-  if (count === 0) return null;
-  return (
-    <button onClick={showKeptCopies} title="Projects set aside instead of being overwritten" data-testid="kept-copies">
-      Kept copies ({count})
-    </button>
-  );
-}
 
 /** The projects set aside in this browser (damaged, from another tab, from the error screen), each to download. */
 export function KeptCopiesDialog() {

@@ -5,7 +5,7 @@ import { ACTIONS, titleOf, type ActionName } from './actionTable.js';
 import { registerCommandUi, runCommand } from './appCommands.js';
 import { ExportMenu } from './ExportMenu.js';
 import { CautionDialog } from './CautionDialog.js';
-import { KeptCopiesButton } from './KeptCopiesDialog.js';
+import { KeptCopiesButton } from './KeptCopiesButton.js';
 
 /** Short words for the file buttons; the table's labels are their tooltips. */
 const FILE_WORD: Partial<Record<ActionName, string>> = { new: 'New', open: 'Open…', save: 'Save' };

@@ -1,4 +1,4 @@
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { planHarness } from '../tools/planHarness.js';
 import { runCommand } from './appCommands.js';
 import { blankProject } from '../files/blankProject.js';
@@ -18,10 +18,12 @@ function siteProject() {
 }
 
 describe('New', () => {
-  it('starts from the documented blank defaults, not from the open project’s site, when nothing is unsaved', () => {
+  it('starts from the documented blank defaults, not from the open project’s site, when nothing is unsaved', async () => {
     const h = planHarness(siteProject());
     h.actions.markSaved(h.doc());
     runCommand('new', h.store, h.actions);
+    // the blank project's module loads on first use
+    await vi.waitFor(() => expect(h.doc().nodes).toEqual([]));
     const doc = h.doc();
     const blank = blankProject();
     expect(doc.nodes).toEqual([]);
@@ -29,7 +31,7 @@ describe('New', () => {
     expect(doc.design.groundwaterElevation).toBeNull();
     expect(doc.loadCases).toEqual(blank.loadCases);
   });
-  it('asks before discarding work not saved to a file, and changes nothing until answered', () => {
+  it('asks before discarding work not saved to a file, and changes nothing until answered', async () => {
     const h = planHarness(siteProject());
     const before = h.doc();
     runCommand('new', h.store, h.actions);
@@ -47,7 +49,7 @@ describe('New', () => {
     h.state()
       .notice!.actions!.find((a) => a.label === 'Discard and start new')!
       .run();
-    expect(h.doc().nodes).toEqual([]);
+    await vi.waitFor(() => expect(h.doc().nodes).toEqual([]));
     h.actions.undo();
     expect(h.doc()).toBe(before);
   });

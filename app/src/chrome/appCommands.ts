@@ -1,17 +1,15 @@
-import { loadExchange } from '../files/routeImport.js';
+import { importOrReload } from './loadChunk.js';
 import { savedDocument } from '../state/savedDocument.js';
 import type { AppStore } from '../state/store.js';
 import type { Actions } from '../state/actions.js';
-import {
-  download,
-  fileStem,
-  projectText,
-  quantitiesCsvText,
-  scheduleCsvText,
-  scheduleJsonText,
-} from '../files/projectFile.js';
-import { blankProject } from '../files/blankProject.js';
+import { download, fileStem, projectText } from '../files/projectFile.js';
 import type { ActionName } from './actionTable.js';
+import { lazyModule } from './lazyPart.js';
+
+/** The schedule and quantities files: their writers load when first chosen (or after the first draw). */
+const exportTexts = lazyModule(() => import('../files/exportTexts.js'));
+/** The blank project (it reads the soil library): loaded when New is first chosen, or after the first draw. */
+const blankProjects = lazyModule(() => import('../files/blankProject.js'));
 
 /** Parts of the window a command needs: the file picker and the print view. */
 export interface CommandUi {
@@ -34,12 +32,13 @@ export function hasUnsavedWork(store: AppStore): boolean {
 
 /** New: a blank project from the documented defaults, in the units in use; asks first when work would be lost. */
 function startNew(store: AppStore, actions: Actions) {
-  const go = () => {
-    const blank = { ...blankProject(), units: store.getState().units };
-    actions.replaceProject(blank);
-    actions.markSaved(blank);
-    actions.notify(null);
-  };
+  const go = () =>
+    void blankProjects().then(({ blankProject }) => {
+      const blank = { ...blankProject(), units: store.getState().units };
+      actions.replaceProject(blank);
+      actions.markSaved(blank);
+      actions.notify(null);
+    });
   if (!hasUnsavedWork(store)) return go();
   actions.notify({
     tone: 'warning',
@@ -61,7 +60,7 @@ function startNew(store: AppStore, actions: Actions) {
 
 /** The design as GeoJSON for a GIS; the exchange module loads only now (docs/routes.md). */
 async function exportGeoJson(store: AppStore, actions: Actions) {
-  const ex = await loadExchange();
+  const ex = await importOrReload(() => import('@mainbrace/solver/exchange'));
   const project = store.getState().project;
   const r = ex.designGeoJson(project);
   if (r.ok) download(`${fileStem(project)}.geojson`, r.text, 'application/geo+json');
@@ -86,19 +85,25 @@ export function runCommand(name: ActionName, store: AppStore, actions: Actions) 
       return actions.markSaved(project());
     }
     case 'exportCsv':
-      return download(
-        `${fileStem(project())}-schedule.csv`,
-        scheduleCsvText(project(), store.getState().units),
-        'text/csv',
+      return void exportTexts().then((t) =>
+        download(
+          `${fileStem(project())}-schedule.csv`,
+          t.scheduleCsvText(project(), store.getState().units),
+          'text/csv',
+        ),
       );
     case 'exportQuantities':
-      return download(
-        `${fileStem(project())}-quantities.csv`,
-        quantitiesCsvText(project(), store.getState().units),
-        'text/csv',
+      return void exportTexts().then((t) =>
+        download(
+          `${fileStem(project())}-quantities.csv`,
+          t.quantitiesCsvText(project(), store.getState().units),
+          'text/csv',
+        ),
       );
     case 'exportJson':
-      return download(`${fileStem(project())}-schedule.json`, scheduleJsonText(project()), 'application/json');
+      return void exportTexts().then((t) =>
+        download(`${fileStem(project())}-schedule.json`, t.scheduleJsonText(project()), 'application/json'),
+      );
     case 'exportGeoJson':
       return void exportGeoJson(store, actions);
     case 'print':

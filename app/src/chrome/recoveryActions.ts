@@ -5,8 +5,8 @@ import type { Actions } from '../state/actions.js';
 import type { Autosave } from '../state/autosave.js';
 import { keepStoredProject, setAsideStoredProject, storedProjectText } from '../state/recovery.js';
 import { leaveNoticeForNextStart } from '../state/startNotice.js';
+import { importOrReload } from './loadChunk.js';
 import { download, fileStem, projectText, readProjectFile } from '../files/projectFile.js';
-import { blankProject } from '../files/blankProject.js';
 
 /** What the error screen can do: each way out keeps the project that failed as a kept copy. */
 export interface Recovery {
@@ -54,6 +54,7 @@ export function createRecovery(kv: KeyValueStore, store: AppStore, actions: Acti
       return null;
     },
     async startNew() {
+      const { blankProject } = await importOrReload(() => import('../files/blankProject.js'));
       await replaceWith(blankProject());
     },
   };

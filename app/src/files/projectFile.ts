@@ -1,17 +1,6 @@
 import { checkProjectText } from '../state/projectCheck.js';
 import { prepareResults } from '../state/results.js';
-import {
-  analyse,
-  scheduleCsv,
-  scheduleJson,
-  scheduleOf,
-  scheduleView,
-  takeOff,
-  takeOffCsv,
-  takeOffRows,
-  type Project,
-  type UnitSystem,
-} from '@mainbrace/solver';
+import type { Project } from '@mainbrace/solver';
 
 /** Largest project file the app opens, bytes: a route of 10,000 fittings is about 5 MB. */
 export const MAX_FILE_BYTES = 20 * 1024 * 1024;
@@ -57,16 +46,6 @@ export const fileStem = (p: Project) =>
 
 /** The project file as saved: the document itself, two-space JSON. */
 export const projectText = (p: Project) => JSON.stringify(p, null, 2) + '\n';
-
-/** The schedule JSON, the same content as the command line's `schedule --format json`. */
-export const scheduleJsonText = (p: Project) => scheduleJson(scheduleOf(analyse(p)), true);
-
-/** The schedule CSV in the chosen display units, the same as `schedule --format csv --units`. */
-export const scheduleCsvText = (p: Project, units: UnitSystem): string => scheduleCsv(scheduleView(analyse(p), units));
-
-/** The quantities take-off as CSV, the same lines as `mainbrace quantities --format csv`. */
-export const quantitiesCsvText = (p: Project, units: UnitSystem): string =>
-  takeOffCsv(takeOffRows(takeOff(scheduleOf(analyse(p)).fittings, p, units), units));
 
 /** Opens a dropped or chosen file: the project is replaced only if the file is valid, and the user is told. */
 export async function openProjectFile(

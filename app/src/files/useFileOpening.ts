@@ -3,7 +3,11 @@ import type { Project } from '@mainbrace/solver';
 import { useActions, useAppStore } from '../state/StoreContext.js';
 import { openProjectFile } from './projectFile.js';
 import { fitView } from '../state/viewport.js';
-import { readAnyFile, runImport, type ImportChoices, type PendingImport } from './routeImport.js';
+import type { ImportChoices, PendingImport } from './routeImport.js';
+import { lazyModule } from '../chrome/lazyPart.js';
+
+/** Reading a file of any kind and importing a route: loaded on the first Open or drop (or after the first draw). */
+const routes = lazyModule(() => import('./routeImport.js'));
 
 /** Notes worth showing after an import: warnings first, then at most a few notes. */
 function importLines(notes: { level: string; where: string; message: string }[]): string[] {
@@ -24,7 +28,7 @@ export function useFileOpening() {
   const [pending, setPending] = useState<PendingImport | null>(null);
 
   const open = async (file: File) => {
-    const r = await readAnyFile(file);
+    const r = await (await routes()).readAnyFile(file);
     if (r.kind === 'project') return openProjectFile(file, actions);
     if (r.kind === 'route') return setPending(r.pending);
     actions.notify({
@@ -39,7 +43,7 @@ export function useFileOpening() {
     if (!p) return;
     setPending(null);
     const current: Project = store.getState().project;
-    const r = await runImport(p, choices, current);
+    const r = await (await routes()).runImport(p, choices, current);
     if (r.ok) {
       actions.replaceProject(r.project);
       // A route from elsewhere lies wherever its coordinates put it: show all of it.

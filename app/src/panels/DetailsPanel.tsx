@@ -1,10 +1,13 @@
 import { useLayoutEffect, useRef } from 'react';
 import { SHORT_CAUTION } from '@mainbrace/solver';
 import { useAnalysis, useApp } from '../state/StoreContext.js';
-import { NodeDetails } from './NodeDetails.js';
-import { PipeDetails } from './PipeDetails.js';
-import { FittingResults } from './FittingResults.js';
 import { RouteSummary } from './RouteSummary.js';
+import { lazyPart } from '../chrome/lazyPart.js';
+
+const parts = () => import('./selectionParts.js');
+const FittingResults = lazyPart(() => parts().then((m) => m.FittingResults));
+const NodeDetails = lazyPart(() => parts().then((m) => m.NodeDetails));
+const PipeDetails = lazyPart(() => parts().then((m) => m.PipeDetails));
 
 /** What is selected — node, pipe or fitting — with its inputs and results; the route summary otherwise. */
 export function DetailsPanel() {

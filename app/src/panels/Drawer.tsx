@@ -1,16 +1,19 @@
-import { lazy, Suspense, useLayoutEffect, useRef } from 'react';
+import { useLayoutEffect, useRef } from 'react';
 import { useActions, useApp } from '../state/StoreContext.js';
 import type { DrawerTab } from '../state/store.js';
 import { ScheduleTable } from './ScheduleTable.js';
-import { CasesPanel } from './CasesPanel.js';
-import { SoilsPanel } from './SoilsPanel.js';
-import { UnderlayPanel } from './UnderlayPanel.js';
-import { SheetPanel } from './SheetPanel.js';
-import { importOrReload } from '../chrome/loadChunk.js';
+import { lazyPart } from '../chrome/lazyPart.js';
 
-const ProfilePanel = lazy(() =>
-  importOrReload(() => import('./ProfilePanel.js')).then((m) => ({ default: m.ProfilePanel })),
+// The tabs after the schedule load in chunks of their own (issue 16: the first screen shows the schedule).
+const loading = (what: string) => <p className="muted">Loading {what}…</p>;
+const ProfilePanel = lazyPart(() => import('./ProfilePanel.js').then((m) => m.ProfilePanel), loading('the profile'));
+const CasesPanel = lazyPart(() => import('./CasesPanel.js').then((m) => m.CasesPanel), loading('the pressure cases'));
+const SoilsPanel = lazyPart(() => import('./SoilsPanel.js').then((m) => m.SoilsPanel), loading('the soils'));
+const UnderlayPanel = lazyPart(
+  () => import('./UnderlayPanel.js').then((m) => m.UnderlayPanel),
+  loading('the site plan'),
 );
+const SheetPanel = lazyPart(() => import('./SheetPanel.js').then((m) => m.SheetPanel), loading('the sheet'));
 
 const TABS: { tab: DrawerTab; label: string }[] = [
   { tab: 'schedule', label: 'Schedule' },
@@ -81,11 +84,7 @@ export function Drawer() {
           data-testid="drawer-body"
         >
           {drawer.tab === 'schedule' && <ScheduleTable />}
-          {drawer.tab === 'profile' && (
-            <Suspense fallback={<p className="muted">Loading the profile…</p>}>
-              <ProfilePanel />
-            </Suspense>
-          )}
+          {drawer.tab === 'profile' && <ProfilePanel />}
           {drawer.tab === 'cases' && <CasesPanel />}
           {drawer.tab === 'soils' && <SoilsPanel />}
           {drawer.tab === 'underlay' && <UnderlayPanel />}

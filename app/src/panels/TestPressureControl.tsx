@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useMemo, useState } from 'react';
 import { fromDisplay, proposeTestPressure, toDisplay, type TestRule } from '@mainbrace/solver';
 import { useActions, useApp } from '../state/StoreContext.js';
 import { show, unitOf } from '../format/quantity.js';
@@ -8,7 +8,8 @@ import { NumberField } from './NumberField.js';
 export function TestPressureControl() {
   const project = useApp((s) => s.project);
   const actions = useActions();
-  const [rule, setRule] = useState<TestRule>(
+  // The rule's first choice is read from the pipes once, when the control first shows (not per render).
+  const [rule, setRule] = useState<TestRule>(() =>
     project.pipes.some((p) => p.material === 'pvc') ? 'awwa-c605' : 'awwa-c600',
   );
   const u = useApp((s) => s.units);
@@ -22,8 +23,16 @@ export function TestPressureControl() {
   const highest = Math.max(3.5e6, ...project.loadCases.map((c) => c.pressure * 1.2));
   const [range, setRange] = useState(highest);
   if (highest > range) setRange(highest);
+  // The proposal reads the node elevations, the water and the working case: a test-pressure step (the
+  // slider) changes none of them, so the route's nodes are not walked again at every step.
+  const { nodes, water } = project;
+  const datum = test?.datumElevation;
+  const proposal = useMemo(
+    () => proposeTestPressure({ ...project, nodes, water }, working, rule, datum),
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- the proposal reads only these parts of the project
+    [nodes, water, working, rule, datum],
+  );
   if (!test) return <p className="muted">Mark a case as “Field test” to get the live test-pressure control.</p>;
-  const proposal = proposeTestPressure(project, working, rule, test.datumElevation);
   const maxShown = Math.round(toDisplay(range, 'pressure', u));
   const step = u === 'us' ? 1 : 5;
   const setLive = (display: number) => {

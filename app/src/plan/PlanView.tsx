@@ -155,22 +155,15 @@ export function PlanView() {
     (_: Context, shape: KonvaShape) => drawPipes(native(shape), viewport, { pipes }, width, height),
     [viewport, width, height, pipes],
   );
-  // While the test pressure is dragged, the changes since it began go on this layer too: they change
-  // with the results, and the layer of the hover and the overlay redraws with every pointer move.
-  const cases = drawn.loadCases;
   const drawThrust = useCallback(
     (_: Context, shape: KonvaShape) => {
       const ctx = native(shape);
       const space = marks.space.clone();
       drawRestrainedZones(ctx, viewport, { zones }, units, space);
       drawArrows(ctx, viewport, { arrows, largestForce }, units, space);
-      if (before) {
-        const caseName = (id: string) => cases.find((x) => x.id === id)?.label ?? id;
-        drawLiveChange(ctx, viewport, before.scene.polygons, changes, caseName, space);
-      }
       performance.mark('mainbrace-results-drawn');
     },
-    [viewport, units, zones, arrows, largestForce, marks, before, changes, cases],
+    [viewport, units, zones, arrows, largestForce, marks],
   );
   const drawMarks = useCallback(
     (_: Context, shape: KonvaShape) =>
@@ -289,6 +282,16 @@ export function PlanView() {
                   placeTags(ctx, viewport, moving, new LabelSpace(size.width, size.height)),
                 );
               }
+              // The changes since the slider's gesture began, over the marks (their labels avoid each other).
+              if (before)
+                drawLiveChange(
+                  ctx,
+                  viewport,
+                  before.scene.polygons,
+                  changes,
+                  (id) => drawn.loadCases.find((x) => x.id === id)?.label ?? id,
+                  new LabelSpace(size.width, size.height),
+                );
               drawHover(ctx, viewport, drawn, hover, tool === 'draw');
               drawOverlay(ctx, viewport, draw, selectBox, units, snappedNow);
               if (underlayPick && underlay)

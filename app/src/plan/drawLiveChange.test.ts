@@ -7,12 +7,17 @@ import type { LiveChange } from './liveChange.js';
 /** A 2-D context that records the text drawn and counts the paths stroked (all drawLiveChange calls). */
 function recorder() {
   const texts: string[] = [];
+  const at: { x: number; y: number }[] = [];
   let strokes = 0;
   const ctx = new Proxy(
     {},
     {
       get: (_, key) => {
-        if (key === 'fillText') return (t: string) => texts.push(t);
+        if (key === 'fillText')
+          return (t: string, x: number, y: number) => {
+            texts.push(t);
+            at.push({ x, y });
+          };
         if (key === 'stroke') return () => strokes++;
         if (key === 'measureText') return (t: string) => ({ width: 7 * t.length });
         return () => {};
@@ -20,7 +25,7 @@ function recorder() {
       set: () => true,
     },
   ) as unknown as CanvasRenderingContext2D;
-  return { ctx, texts, strokes: () => strokes };
+  return { ctx, texts, at, strokes: () => strokes };
 }
 
 const square = (x: number, y: number, side: number): ScenePolygon => ({
@@ -59,7 +64,7 @@ describe('the live change drawn while the test pressure is dragged (level of det
     expect(r.strokes()).toBe(1);
   });
 
-  it('labels every change that has room, and leaves out one whose label would overprint it', () => {
+  it('labels every change, moving a label that would overprint another to a free corner; one per cell', () => {
     const r = recorder();
     const changes = [
       change('A1', 50, -50, 0.25),
@@ -68,8 +73,11 @@ describe('the live change drawn while the test pressure is dragged (level of det
       change('A4', 51, -51, 0.3),
     ];
     drawLiveChange(r.ctx, view, [], changes, (id) => id, new LabelSpace(400, 300));
-    // A1 at (50, 50) and A2 at (50, 200) are far apart; A3, 10 px right of A1, would overprint A1's label
-    // (A1's spans x 62–115 at y 64.5–79.5, A3's would start at x 72, y 66.5); A4 shares A1's 6 px cell.
-    expect(r.texts).toEqual(['A1 +25%', 'A2 +10%']);
+    // A1 at (50, 50) keeps the place below right: x 64, y 50 + 22. A3, 10 px right of A1, would overprint
+    // it there (A1's spans x 62–115, y 64.5–79.5) and cannot go left (x < 0): it goes above right,
+    // y 52 − 22 = 30. A4 shares A1's 6 px cell and is left to A1.
+    expect(r.texts).toEqual(['A1 +25%', 'A2 +10%', 'A3 +50%']);
+    expect(r.at[0]).toEqual({ x: 64, y: 72 });
+    expect(r.at[2]).toEqual({ x: 74, y: 30 });
   });
 });

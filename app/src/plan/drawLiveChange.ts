@@ -11,12 +11,25 @@ const LABEL_H = 15;
 /** The narrowest change label ("A1 +1%"), px: a label is formatted only where this much has room. */
 const NARROWEST_PX = 40;
 
+/** Where a change label may stand, px from its fitting: its left (right, for dx < 0) end and middle. */
+const SPOTS: readonly (readonly [number, number])[] = [
+  [12, 22],
+  [-12, 22],
+  [12, -22],
+  [-12, -22],
+  [12, 38],
+  [-12, 38],
+  [12, -38],
+  [-12, -38],
+];
+
 /**
  * While the test pressure is dragged: each block's footprint from before the drag as a dashed ghost,
  * its growth as a percentage, and a mark where another case now governs (words, not colour alone).
  * By the plan's level of detail (levelOfDetail.ts): a ghost under MIN_POLYGON_PX or off screen is not
- * drawn, one change is marked per symbol cell, and a label is drawn only where it has room in `space`
- * (tested at its narrowest before it is worded and measured), as the thrust labels are.
+ * drawn, one change is marked per symbol cell, and a label goes to the first corner of its fitting
+ * where it overprints no other change label (`space`; tested at its narrowest before it is worded
+ * and measured). Drawn over the marks, as the overlay it is.
  */
 export function drawLiveChange(
   ctx: CanvasRenderingContext2D,
@@ -67,15 +80,16 @@ export function drawLiveChange(
       ctx.closePath();
       ctx.stroke();
     }
-    const x = s.sx + 14,
-      y = s.sy + 22;
-    const room = (w: number) => ({ x: x - 2, y: y - LABEL_H / 2, w, h: LABEL_H });
-    if (!space.fits(room(NARROWEST_PX))) continue;
+    // Below right of the fitting (where it always stood), else the other corners, else further out.
+    const room = (w: number) =>
+      SPOTS.map(([dx, dy]) => ({ x: dx >= 0 ? s.sx + dx : s.sx + dx - w, y: s.sy + dy - LABEL_H / 2, w, h: LABEL_H }));
+    if (!room(NARROWEST_PX).some((r) => space.fits(r))) continue;
     const parts: string[] = [];
     if (c.growth !== null) parts.push(`${c.growth >= 0 ? '+' : '−'}${Math.abs(Math.round(c.growth * 100))}%`);
     if (c.governing) parts.push(`now ${caseName(c.governing.to)}`);
     const text = `${c.mark} ${parts.join(' · ')}`;
-    if (space.place([room(textWidth(ctx, TYPE.mark, text) + 4)])) label(ctx, text, x, y, PALETTE.ink);
+    const spot = space.place(room(textWidth(ctx, TYPE.mark, text) + 4));
+    if (spot) label(ctx, text, spot.x + 2, spot.y + LABEL_H / 2, PALETTE.ink);
   }
   ctx.restore();
 }
