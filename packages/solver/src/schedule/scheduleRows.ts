@@ -139,34 +139,35 @@ function scheduled(b: BearingBlock | null): ScheduleBlock | null {
   );
 }
 
-/** What a row's parts are built from, until each is read. */
+/** What a row's parts are built from, and each part once it has been read. */
 interface RowSource {
   a: Analysis;
   f: FittingAnalysis;
   words: (d: Diagnostic) => string;
+  /** the parts built so far (or set by a caller) */
+  kept: Partial<Pick<ScheduleFitting, 'pipes' | 'cases' | 'restraint' | 'unverified' | 'warnings'>>;
 }
 
 const sources = new WeakMap<object, RowSource>();
 
 /**
- * A row's part built when first read, then kept as a plain field: the table reads the rows in view,
- * the print and the exports read every part, and a pressure change reads none. One getter and setter
- * per field, shared by every row (a function made per row would put each row in dictionary mode).
+ * A row's part built when first read and kept: the table reads the rows in view, the print and the
+ * exports read every part, and a pressure change reads none. One getter and setter per field, shared by
+ * every row (a function made per row would put each row in dictionary mode), and the field stays an
+ * accessor once read: turning it into a data property would too, which a reader of every row (the
+ * command line's JSON) pays for.
  */
-function lazyField<K extends keyof ScheduleFitting>(
+function lazyField<K extends keyof RowSource['kept']>(
   key: K,
   make: (s: RowSource) => ScheduleFitting[K],
 ): PropertyDescriptor {
-  const keep = (row: object, value: ScheduleFitting[K]) =>
-    Object.defineProperty(row, key, { value, enumerable: true, writable: true, configurable: true });
   return {
     get(this: ScheduleFitting) {
-      const value = make(sources.get(this)!);
-      keep(this, value);
-      return value;
+      const s = sources.get(this)!;
+      return (s.kept[key] ??= make(s));
     },
     set(this: ScheduleFitting, value: ScheduleFitting[K]) {
-      keep(this, value);
+      sources.get(this)!.kept[key] = value;
     },
     enumerable: true,
     configurable: true,
@@ -222,17 +223,8 @@ const RESTRAINT = lazyField('restraint', ({ a, f }) => {
 
 const UNVERIFIED = lazyField('unverified', ({ f }) => unverified(f.basis));
 
-/** The diagnostics worded in SI: kept as read, as before the rows were built lazily. */
-const WARNINGS: PropertyDescriptor = {
-  get(this: ScheduleFitting) {
-    const { words } = sources.get(this)!;
-    const list = this.diagnostics.length ? this.diagnostics.map(words) : [];
-    Object.defineProperty(this, 'warnings', { value: list, enumerable: true });
-    return list;
-  },
-  enumerable: true,
-  configurable: true,
-};
+/** The diagnostics worded in SI, kept once read. */
+const WARNINGS = lazyField('warnings', ({ f, words }) => (f.diagnostics.length ? f.diagnostics.map(words) : []));
 
 /**
  * One schedule row: its numbers copied from the analysis, its lists and nested parts (pipes, cases,
@@ -257,7 +249,7 @@ function row(a: Analysis, f: FittingAnalysis, words: (d: Diagnostic) => string):
     cover: f.node.cover,
     groundLevel: f.node.elevation + od / 2 + f.node.cover,
   } as ScheduleFitting;
-  sources.set(out, { a, f, words });
+  sources.set(out, { a, f, words, kept: {} });
   Object.defineProperty(out, 'pipes', PIPES);
   out.soil = nodeSoil(a.project, f.node).id;
   Object.defineProperty(out, 'cases', CASES);
