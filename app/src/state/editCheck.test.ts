@@ -2,21 +2,10 @@ import { describe, expect, it } from 'vitest';
 import type { Project } from '@mainbrace/solver';
 import { editProblems } from './editCheck.js';
 import { validated } from './checks.js';
-import { project } from '../testFixtures.js';
+import { chain } from '../testFixtures.js';
 
 /** An L-shaped main of three nodes (invented: Quillon Street). */
-const doc = (): Project =>
-  project(
-    [
-      { id: 'n1', x: 0, y: 0 },
-      { id: 'n2', x: 30, y: 0 },
-      { id: 'n3', x: 30, y: 40 },
-    ],
-    [
-      { from: 'n1', to: 'n2' },
-      { from: 'n2', to: 'n3' },
-    ],
-  );
+const doc = (): Project => chain([0, 0], [30, 0], [30, 40]);
 
 const withNode = (p: Project, i: number, patch: Record<string, unknown>): Project => ({
   ...p,

@@ -1,20 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { analyseProject, nearestSize } from '@mainbrace/solver';
 import { resultsOf, sameResultInputs } from './results.js';
-import { project } from '../testFixtures.js';
+import { chain } from '../testFixtures.js';
 
-const doc = () =>
-  project(
-    [
-      { id: 'n1', x: 0, y: 0 },
-      { id: 'n2', x: 30, y: 0 },
-      { id: 'n3', x: 30, y: 40 },
-    ],
-    [
-      { from: 'n1', to: 'n2' },
-      { from: 'n2', to: 'n3' },
-    ],
-  );
+const doc = () => chain([0, 0], [30, 0], [30, 40]);
 
 describe('results from the result inputs only', () => {
   it('keeps the very same analysis when only the name or the units change', () => {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { analyseProject, norm, type Analysis, type FittingAnalysis } from '@mainbrace/solver';
 import { largestThrusts, networkLength, routeSummary, tightestMargins } from './routeFigures.js';
-import { project } from '../testFixtures.js';
+import { chain } from '../testFixtures.js';
 
 /** A stand-in analysis whose fittings carry only a governing thrust (all largestThrusts reads). */
 const withThrusts = (forces: number[]): Analysis =>
@@ -52,18 +52,7 @@ describe('the tightest passive margins of a route', () => {
 
 describe('the route summary, kept across edits that leave the route', () => {
   // Hand count: a 30 m leg east and a 40 m leg north (3-4-5 triangle) is 70 m of main in one piece.
-  const doc = () =>
-    project(
-      [
-        { id: 'n1', x: 0, y: 0 },
-        { id: 'n2', x: 30, y: 0 },
-        { id: 'n3', x: 30, y: 40 },
-      ],
-      [
-        { from: 'n1', to: 'n2' },
-        { from: 'n2', to: 'n3' },
-      ],
-    );
+  const doc = () => chain([0, 0], [30, 0], [30, 40]);
 
   it('gives the length and pieces of the route it was asked about, edit after edit', () => {
     const p = doc();
