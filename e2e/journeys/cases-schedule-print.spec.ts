@@ -69,6 +69,8 @@ test('the printed schedule is a multi-page landscape sheet that names every fitt
   await page.getByRole('menuitem', { name: 'Print the schedule…' }).click();
   const sheet = page.getByTestId('print-sheet');
   await expect(sheet).toBeVisible();
+  // Long schedules are prepared a few sheets at a time: read the sheet once every sheet is there.
+  await expect(sheet.locator('.crew-sheet')).toHaveAttribute('data-ready', 'yes');
   const text = await sheet.innerText();
   for (const mark of marks) expect(text).toContain(mark);
   expect(text).toMatch(/licensed professional engineer/);
