@@ -4,8 +4,7 @@ import { analyse, analyseInSteps, analyseNext, analyseProject, type Analysis } f
 import type { Project } from '../src/model/projectSchema.js';
 import { scheduleOf } from '../src/schedule/scheduleRows.js';
 import { scheduleJson } from '../src/schedule/scheduleJson.js';
-import { route } from './projectBuilder.js';
-import { randomRoute, type RandomRoute } from './randomRoutes.js';
+import { randomRoute, routeExtras as extras, routeWithExtras as project } from './randomRoutes.js';
 import { analyseProject as oracle } from './oracle/analyseOracle.js';
 
 const runs = { seed: 20261203, numRuns: 120 };
@@ -61,43 +60,6 @@ const visible = (a: Analysis) => ({
   marks: a.marks,
   diagnostics: a.diagnostics,
 });
-
-/** Flags, cases and soils drawn beside a random route, so that valves, joints and reversals occur. */
-const extras = fc.record({
-  valves: fc.array(fc.boolean(), { minLength: 14, maxLength: 14 }),
-  joints: fc.array(fc.boolean(), { minLength: 14, maxLength: 14 }),
-  caps: fc.array(fc.boolean(), { minLength: 14, maxLength: 14 }),
-  working: fc.integer({ min: 0, max: 2500 }).map((k) => k * 1e3),
-  test: fc.integer({ min: 0, max: 3000 }).map((k) => k * 1e3),
-  datum: fc.option(fc.integer({ min: 80, max: 120 }), { nil: undefined }),
-  bearing: fc.constantFrom(0, 50e3, 150e3),
-  groundwater: fc.option(fc.integer({ min: 80, max: 125 }), { nil: null }),
-  inside: fc.boolean(),
-});
-
-type Extras = typeof extras extends fc.Arbitrary<infer T> ? T : never;
-
-function project(r: RandomRoute, x: Extras): Project {
-  return route({
-    nodes: r.nodes.map((n, i) => ({
-      ...n,
-      ...(x.valves[i] ? { valve: true } : {}),
-      ...(x.joints[i] ? { restraint: 'joints' } : {}),
-      ...(x.caps[i] ? {} : { end: 'tie-in' }),
-    })),
-    pipes: r.pipes.map((p, i) => (i % 3 === 2 ? { ...p, material: 'pvc' } : p)),
-    cases: [
-      { id: 'working', pressure: x.working, ...(x.datum !== undefined ? { datumElevation: x.datum } : {}) },
-      { id: 'surge', pressure: x.working * 1.5 + 1e5, flowFactor: 0.5 },
-      { id: 'test', pressure: x.test, flowFactor: 0, datumElevation: 95 },
-    ],
-    soils: [
-      { id: 'clay', bearing: x.bearing, cohesion: 20e3, frictionAngle: 20 },
-      { id: 'sand', bearing: 120e3 },
-    ],
-    design: { groundwaterElevation: x.groundwater, thrustArea: x.inside ? 'inside' : 'outside' },
-  });
-}
 
 describe('the structure-of-arrays analysis against the object-per-state one it replaced (fast-check, fixed seed)', () => {
   it('gives the same fittings, thrusts, restraints and findings on random routes', () => {

@@ -1,5 +1,6 @@
 import fc from 'fast-check';
-import type { NodeSpec, PipeSpec } from './projectBuilder.js';
+import { route, type NodeSpec, type PipeSpec } from './projectBuilder.js';
+import type { Project } from '../src/model/projectSchema.js';
 import { OVERLAP_ANGLE } from '../src/model/crossChecks.js';
 
 /** Outside diameters drawn for random routes, m (EN 545:2010 external diameters, DN100–DN600). */
@@ -68,4 +69,42 @@ export function randomRoute(opts: { level?: boolean; flows?: boolean } = {}): fc
       }),
     }))
     .filter(noOverlap);
+}
+
+/** Flags, cases and soils drawn beside a random route, so that valves, joints and reversals occur. */
+export const routeExtras = fc.record({
+  valves: fc.array(fc.boolean(), { minLength: 14, maxLength: 14 }),
+  joints: fc.array(fc.boolean(), { minLength: 14, maxLength: 14 }),
+  caps: fc.array(fc.boolean(), { minLength: 14, maxLength: 14 }),
+  working: fc.integer({ min: 0, max: 2500 }).map((k) => k * 1e3),
+  test: fc.integer({ min: 0, max: 3000 }).map((k) => k * 1e3),
+  datum: fc.option(fc.integer({ min: 80, max: 120 }), { nil: undefined }),
+  bearing: fc.constantFrom(0, 50e3, 150e3),
+  groundwater: fc.option(fc.integer({ min: 80, max: 125 }), { nil: null }),
+  inside: fc.boolean(),
+});
+
+export type RouteExtras = typeof routeExtras extends fc.Arbitrary<infer T> ? T : never;
+
+/** A random route with the drawn flags, cases and soils applied. */
+export function routeWithExtras(r: RandomRoute, x: RouteExtras): Project {
+  return route({
+    nodes: r.nodes.map((n, i) => ({
+      ...n,
+      ...(x.valves[i] ? { valve: true } : {}),
+      ...(x.joints[i] ? { restraint: 'joints' } : {}),
+      ...(x.caps[i] ? {} : { end: 'tie-in' }),
+    })),
+    pipes: r.pipes.map((p, i) => (i % 3 === 2 ? { ...p, material: 'pvc' } : p)),
+    cases: [
+      { id: 'working', pressure: x.working, ...(x.datum !== undefined ? { datumElevation: x.datum } : {}) },
+      { id: 'surge', pressure: x.working * 1.5 + 1e5, flowFactor: 0.5 },
+      { id: 'test', pressure: x.test, flowFactor: 0, datumElevation: 95 },
+    ],
+    soils: [
+      { id: 'clay', bearing: x.bearing, cohesion: 20e3, frictionAngle: 20 },
+      { id: 'sand', bearing: 120e3 },
+    ],
+    design: { groundwaterElevation: x.groundwater, thrustArea: x.inside ? 'inside' : 'outside' },
+  });
 }

@@ -10,8 +10,7 @@ import { scheduleJson, writeScheduleJson, type ScheduleJsonWriting } from '../sr
 import { JsonIndenter } from '../src/schedule/jsonIndent.js';
 import { terminalSafe } from '../src/cli/terminalText.js';
 import { generateRoute } from '../bench/generateRoute.js';
-import { route } from './projectBuilder.js';
-import { randomRoute, type RandomRoute } from './randomRoutes.js';
+import { randomRoute, routeExtras as extras, routeWithExtras as project } from './randomRoutes.js';
 import { scheduleJsonOracle } from './oracle/scheduleJsonOracle.js';
 
 const demoPath = fileURLToPath(new URL('../../../public/demo/larkspur-rise.json', import.meta.url));
@@ -57,34 +56,6 @@ describe('the streamed JSON schedule is the text of the serialiser it replaced, 
     expectSameText(scheduleOf(analyseProject(parsed(generateRoute(50)))), [1, 997, 1 << 16]);
     expectSameText(scheduleOf(analyseProject(parsed(generateRoute(1000)))), [1 << 16]);
   }, 60_000);
-
-  /** Flags, cases and soils beside a random route, so that valves, joints, anchors and findings occur. */
-  const extras = fc.record({
-    valves: fc.array(fc.boolean(), { minLength: 14, maxLength: 14 }),
-    joints: fc.array(fc.boolean(), { minLength: 14, maxLength: 14 }),
-    caps: fc.array(fc.boolean(), { minLength: 14, maxLength: 14 }),
-    working: fc.integer({ min: 0, max: 2500 }).map((k) => k * 1e3),
-    bearing: fc.constantFrom(0, 50e3, 150e3),
-    groundwater: fc.option(fc.integer({ min: 80, max: 125 }), { nil: null }),
-  });
-  type Extras = typeof extras extends fc.Arbitrary<infer T> ? T : never;
-  const project = (r: RandomRoute, x: Extras) =>
-    route({
-      nodes: r.nodes.map((n, i) => ({
-        ...n,
-        ...(x.valves[i] ? { valve: true } : {}),
-        ...(x.joints[i] ? { restraint: 'joints' } : {}),
-        ...(x.caps[i] ? {} : { end: 'tie-in' }),
-      })),
-      pipes: r.pipes.map((p, i) => (i % 3 === 2 ? { ...p, material: 'pvc' } : p)),
-      cases: [
-        { id: 'working', pressure: x.working },
-        { id: 'surge', pressure: x.working * 1.5 + 1e5, flowFactor: 0.5 },
-        { id: 'test', pressure: x.working * 1.5, flowFactor: 0, datumElevation: 95 },
-      ],
-      soils: [{ id: 'clay', bearing: x.bearing, cohesion: 20e3, frictionAngle: 20 }],
-      design: { groundwaterElevation: x.groundwater },
-    });
 
   it('on random routes (fast-check, fixed seed)', () => {
     let findings = 0;
