@@ -143,7 +143,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
             </strong>
             , {formatDimension(r.block.depth, u)} from the fitting to the bearing face; bearing area{' '}
             {show(r.block.bearingArea, 'area', u)} needed, {show(r.block.faceWidth * r.block.faceHeight, 'area', u)}{' '}
-            given; concrete {show(r.block.concreteVolume, 'volume', u)}. Passive resistance{' '}
+            given; concrete {quantityText(r.block.concreteVolume, 'volume', u)}. Passive resistance{' '}
             {r.block.passiveRatio.toFixed(2)} × the thrust (3-D factor {r.block.shapeFactor.toFixed(2)}); the face is
             set by {BLOCK_GOVERNS[r.block.governs]}.
           </li>
@@ -155,7 +155,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
             <strong>
               {formatDimension(r.reverseBlock.faceWidth, u)} wide × {formatDimension(r.reverseBlock.faceHeight, u)} high
             </strong>
-            ; concrete {show(r.reverseBlock.concreteVolume, 'volume', u)}.
+            ; concrete {quantityText(r.reverseBlock.concreteVolume, 'volume', u)}.
           </li>
         )}
         {r.anchor && (
@@ -166,7 +166,8 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
               {formatDimension(r.anchor.length, u)} long × {formatDimension(r.anchor.width, u)} wide ×{' '}
               {formatDimension(r.anchor.height, u)} high
             </strong>
-            , {show(r.anchor.concreteVolume, 'volume', u)} of concrete{r.anchor.submerged ? ', submerged weight' : ''}
+            , {quantityText(r.anchor.concreteVolume, 'volume', u)} of concrete
+            {r.anchor.submerged ? ', submerged weight' : ''}
             {r.anchor.horizontalThrust > 0 ? '; its base friction also holds the horizontal thrust' : ''}.
           </li>
         )}

@@ -1,4 +1,4 @@
-import { norm } from '@mainbrace/solver';
+import { norm, quantityText } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
 import { show, showColumnForce } from '../format/quantity.js';
 import { KIND_NAME } from '../format/fittingNames.js';
@@ -31,7 +31,7 @@ export function RouteSummary() {
             <dt>Fittings to restrain</dt>
             <dd>{analysis.fittings.length}</dd>
             <dt>Concrete (blocks and anchors)</dt>
-            <dd>{show(concrete, 'volume', u)}</dd>
+            <dd>{quantityText(concrete, 'volume', u)}</dd>
             <dt>Fittings with warnings</dt>
             <dd>{warned}</dd>
           </dl>
