@@ -14,6 +14,7 @@ import {
 } from '@mainbrace/solver';
 import type { PlanPoint } from '../state/documentEdits.js';
 import type { CaseView, Selection } from '../state/store.js';
+import { keptPer } from '../state/keptPer.js';
 
 export interface ScenePipe {
   id: string;
@@ -262,15 +263,7 @@ function positions(
   return where;
 }
 
-const pipeParts = new WeakMap<
-  readonly Pipe[],
-  {
-    where: ReadonlyMap<string, PlanPoint>;
-    selected: ReadonlySet<string>;
-    hidden?: ReadonlySet<string>;
-    out: ScenePipe[];
-  }
->();
+const pipeParts = keptPer<readonly Pipe[], ScenePipe[]>();
 
 function scenePipes(
   all: readonly Pipe[],
@@ -278,33 +271,21 @@ function scenePipes(
   selected: ReadonlySet<string>,
   hidden?: ReadonlySet<string>,
 ): ScenePipe[] {
-  const known = pipeParts.get(all);
-  if (known && known.where === where && known.selected === selected && known.hidden === hidden) return known.out;
-  const shown = hidden?.size ? all.filter((p) => !hidden.has(p.from) && !hidden.has(p.to)) : all;
-  const out = shown.map((p) => ({
-    id: p.id,
-    a: where.get(p.from)!,
-    b: where.get(p.to)!,
-    outsideDiameter: p.outsideDiameter,
-    material: p.material,
-    selected: selected.has(p.id),
-  }));
-  pipeParts.set(all, { where, selected, ...(hidden ? { hidden } : {}), out });
-  return out;
+  return pipeParts(all, [where, selected, hidden], () =>
+    (hidden?.size ? all.filter((p) => !hidden.has(p.from) && !hidden.has(p.to)) : all).map((p) => ({
+      id: p.id,
+      a: where.get(p.from)!,
+      b: where.get(p.to)!,
+      outsideDiameter: p.outsideDiameter,
+      material: p.material,
+      selected: selected.has(p.id),
+    })),
+  );
 }
 
 type Plain = Scene['plainNodes'][number];
 
-const plainParts = new WeakMap<
-  ReadonlyMap<string, PlanPoint>,
-  {
-    legs: Analysis['legs'] | null;
-    marks: Analysis['marks'] | null;
-    selected: ReadonlySet<string>;
-    hidden?: ReadonlySet<string>;
-    out: Plain[];
-  }
->();
+const plainParts = keptPer<ReadonlyMap<string, PlanPoint>, Plain[]>();
 
 /**
  * Free nodes and tie-ins (no fitting). Which nodes are fittings follows from the nodes and their legs,
@@ -319,23 +300,20 @@ function scenePlainNodes(
 ): Plain[] {
   const legs = analysis?.legs ?? null;
   const marks = analysis?.marks ?? null;
-  const known = plainParts.get(where);
-  if (known && known.legs === legs && known.marks === marks && known.selected === selected && known.hidden === hidden)
-    return known.out;
-  const withFitting = new Set<string>();
-  for (const f of analysis?.fittings ?? []) withFitting.add(f.node.id);
-  const out = nodes
-    .filter((n) => !withFitting.has(n.id) && !hidden?.has(n.id))
-    .map((n) => ({
-      id: n.id,
-      at: where.get(n.id)!,
-      tieIn: n.end === 'tie-in',
-      // A tie-in is numbered along its run (restrained legs run "toward A1"), so the plan shows its mark.
-      mark: marks?.get(n.id) ?? null,
-      selected: selected.has(n.id),
-    }));
-  plainParts.set(where, { legs, marks, selected, ...(hidden ? { hidden } : {}), out });
-  return out;
+  return plainParts(where, [legs, marks, selected, hidden], () => {
+    const withFitting = new Set<string>();
+    for (const f of analysis?.fittings ?? []) withFitting.add(f.node.id);
+    return nodes
+      .filter((n) => !withFitting.has(n.id) && !hidden?.has(n.id))
+      .map((n) => ({
+        id: n.id,
+        at: where.get(n.id)!,
+        tieIn: n.end === 'tie-in',
+        // A tie-in is numbered along its run (restrained legs run "toward A1"), so the plan shows its mark.
+        mark: marks?.get(n.id) ?? null,
+        selected: selected.has(n.id),
+      }));
+  });
 }
 
 /**

@@ -1,5 +1,6 @@
 import { norm, restraintConcrete, type Analysis, type FittingAnalysis, type Project } from '@mainbrace/solver';
 import { routePieces } from './connectivity.js';
+import { keptPer } from './keptPer.js';
 
 /** The fittings with the largest governing thrust, largest first. */
 export function largestThrusts(analysis: Analysis, count: number): FittingAnalysis[] {
@@ -58,16 +59,11 @@ export function networkLength(analysis: Analysis): number {
   return sum;
 }
 
-const pieceCounts = new WeakMap<Project['pipes'], { nodes: Project['nodes']; pieces: number }>();
+const pieceCounts = keptPer<Project['pipes'], number>();
 
 /** How many separate pieces the route is in, worked out again only when its nodes or pipes change. */
-function pieceCount(project: Project): number {
-  const known = pieceCounts.get(project.pipes);
-  if (known && known.nodes === project.nodes) return known.pieces;
-  const pieces = routePieces(project).length;
-  pieceCounts.set(project.pipes, { nodes: project.nodes, pieces });
-  return pieces;
-}
+const pieceCount = (project: Project): number =>
+  pieceCounts(project.pipes, [project.nodes], () => routePieces(project).length);
 
 /** The route in numbers, as the summary panel shows it with nothing selected. */
 export interface RouteSummaryFigures {
