@@ -5,6 +5,7 @@ import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { runCli } from './run.js';
 import { readLimited } from './readLimited.js';
+import { routeInput } from '../../test/projectBuilder.js';
 
 const demoPath = fileURLToPath(new URL('../../../../public/demo/larkspur-rise.json', import.meta.url));
 const demo = () => JSON.parse(readFileSync(demoPath, 'utf8'));
@@ -219,21 +220,17 @@ describe('the command line quantities and stations', () => {
   it('refuses to explain an id that is one fitting’s mark and another’s node id', async () => {
     // Invariant: explain never shows a fitting other than the one named without saying so. Node ids
     // are free text; marks run A1, A2, ... along the run, so node "A1" here is marked A2.
-    const p = {
-      format: 'mainbrace-project',
-      version: 1,
-      loadCases: [{ id: 'w', pressure: 1e6 }],
-      soils: [{ id: 's', bearing: 150e3 }],
+    const p = routeInput({
       nodes: [
-        { id: 'start', x: 0, y: 0, elevation: 100 },
-        { id: 'A1', x: 30, y: 0, elevation: 100 },
-        { id: 'end', x: 30, y: 30, elevation: 100 },
+        { id: 'start', x: 0, y: 0 },
+        { id: 'A1', x: 30, y: 0 },
+        { id: 'end', x: 30, y: 30 },
       ],
       pipes: [
-        { id: 'p1', from: 'start', to: 'A1', outsideDiameter: 0.326, insideDiameter: 0.3 },
-        { id: 'p2', from: 'A1', to: 'end', outsideDiameter: 0.326, insideDiameter: 0.3 },
+        { from: 'start', to: 'A1', od: 0.326 },
+        { from: 'A1', to: 'end', od: 0.326 },
       ],
-    };
+    });
     const path = fileOf('marks.json', JSON.stringify(p));
     const r = await cli('explain', path, 'A1');
     expect(r.status).toBe(2);
