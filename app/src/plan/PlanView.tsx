@@ -20,7 +20,7 @@ import { EMPTY_SELECTION } from '../state/slices.js';
 import { drawPicks, drawUnderlay } from './drawUnderlay.js';
 import { useUnderlayImage } from '../state/underlayImage.js';
 import { UnderlayHint } from './UnderlayHint.js';
-import { TypedEntryBox } from './TypedEntryBox.js';
+import { TypedEntryBox } from './TypedEntryPart.js';
 import { DrawHint } from './DrawHint.js';
 import { sendPlanEvent } from '../tools/planBridge.js';
 import type { PlanEvent, PointerKind } from '../tools/planInput.js';
