@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useMemo, useRef, useState, type PointerEvent as ReactPointerEvent } from 'react';
+import { memo, useCallback, useEffect, useMemo, useRef, useState, type PointerEvent as ReactPointerEvent } from 'react';
 // Konva's core entry and react-konva's core build: the plan draws with 2-D calls inside its own
 // shapes, so none of Konva's ready-made shapes, filters or animations are loaded (issue 16).
 import { Layer, Shape, Stage } from 'react-konva/lib/ReactKonvaCore.js';
@@ -41,6 +41,21 @@ function sceneKeeper() {
   let last: Scene | null = null;
   return (next: Scene) => (last = reuseEqualParts(last, next));
 }
+
+/**
+ * Hints and the typed-entry box stack down from the top: a hint that wraps on a narrow plan pushes the
+ * box down instead of covering it. They read the store themselves, so a redraw of the plan (every
+ * test-pressure change) does not render them again.
+ */
+const PlanHints = memo(function PlanHints() {
+  return (
+    <div className="plan-top">
+      <DrawHint />
+      <UnderlayHint />
+      <TypedEntryBox />
+    </div>
+  );
+});
 
 const kindOf = (t: string): PointerKind => (t === 'touch' ? 'touch' : t === 'pen' ? 'pen' : 'mouse');
 
@@ -305,13 +320,7 @@ export function PlanView() {
         </Layer>
       </Stage>
       <PlanOverlays scene={scene} coordsRef={coords} />
-      {/* Hints and the typed-entry box stack down from the top: a hint that wraps on a narrow plan pushes
-          the box down instead of covering it. */}
-      <div className="plan-top">
-        <DrawHint />
-        <UnderlayHint />
-        <TypedEntryBox />
-      </div>
+      <PlanHints />
     </div>
   );
 }
