@@ -50,6 +50,7 @@ export function TopBar({ onPrint, onOpen }: { onPrint: () => void; onOpen: (file
       <input
         className="project-name"
         aria-label="Project name"
+        title={name}
         value={name}
         maxLength={200}
         onChange={(e) => actions.renameProject(e.target.value)}
