@@ -15,10 +15,15 @@ export function DetailsPanel() {
   const selection = useApp((s) => s.selection);
   const analysis = useAnalysis();
   const count = selection.nodes.size + selection.pipes.size;
-  // Another item chosen: its details start at the top, not at the last one's scroll position.
+  // Another item chosen: its details start at the top, not at the last one's scroll position. Not on
+  // mount: a new panel is at the top, and setting scrollTop there forces a layout of the whole page in
+  // the first draw.
   const panel = useRef<HTMLElement>(null);
   const chosen = [...selection.nodes, '|', ...selection.pipes].join(' ');
+  const shown = useRef(chosen);
   useLayoutEffect(() => {
+    if (shown.current === chosen) return;
+    shown.current = chosen;
     if (panel.current) panel.current.scrollTop = 0;
   }, [chosen]);
   let body;

@@ -33,9 +33,12 @@ export function Drawer() {
   // Each tab keeps its own scroll position: the schedule stays where it was after a look at the cases.
   const body = useRef<HTMLDivElement>(null);
   const scrolls = useRef(new Map<DrawerTab, number>());
+  // Not on mount, where the body is at the top already: setting scrollTop forces a layout in the first draw.
+  const mounted = useRef(false);
   useLayoutEffect(() => {
     const el = body.current;
-    if (el) el.scrollTop = scrolls.current.get(drawer.tab) ?? 0;
+    if (el && mounted.current) el.scrollTop = scrolls.current.get(drawer.tab) ?? 0;
+    mounted.current = true;
   }, [drawer.tab, drawer.height]);
   return (
     <section className={`drawer drawer-${drawer.height}`} aria-label="Route views">

@@ -1,4 +1,13 @@
-import { memo, useCallback, useEffect, useMemo, useRef, useState, type PointerEvent as ReactPointerEvent } from 'react';
+import {
+  memo,
+  useCallback,
+  useEffect,
+  useLayoutEffect,
+  useMemo,
+  useRef,
+  useState,
+  type PointerEvent as ReactPointerEvent,
+} from 'react';
 // Konva's core entry and react-konva's core build: the plan draws with 2-D calls inside its own
 // shapes, so none of Konva's ready-made shapes, filters or animations are loaded (issue 16).
 import { Layer, Shape, Stage } from 'react-konva/lib/ReactKonvaCore.js';
@@ -117,7 +126,9 @@ export function PlanView() {
     [store, actions],
   );
 
-  useEffect(() => {
+  // Measured before the first paint: the plan's first frame is drawn at its size, not at a stand-in size
+  // and then again.
+  useLayoutEffect(() => {
     const el = box.current;
     if (!el) return;
     const measure = () =>
