@@ -216,11 +216,15 @@ export function readStates(
     // total is the static thrust, number for number — one shared zero and the same vector, not two
     // more arrays kept per state.
     const still = d[3 * k] === 0 && d[3 * k + 1] === 0 && d[3 * k + 2] === 0;
+    // Cases with the same flow factor (a working and a surge case) have the same dynamic thrust,
+    // number for number: the state before's vector serves both.
+    const before = k > 0 ? states[k - 1]!.dynamic : NO_THRUST;
+    const same = before[0] === d[3 * k] && before[1] === d[3 * k + 1] && before[2] === d[3 * k + 2];
     states[k] = {
       caseId: cases[b.caseIndex[k]!]!.id,
       pressure: b.pressure[k]!,
       static: statics,
-      dynamic: still ? NO_THRUST : vec(d, k),
+      dynamic: still ? NO_THRUST : same ? before : vec(d, k),
       total: still ? statics : vec(t, k),
       closedAgainst: b.side[k]! < 0 ? null : closedAgainst(b.side[k]!),
     };

@@ -3,8 +3,27 @@ import type { Soil } from '../model/projectSchema.js';
 import type { ProvenanceId } from '../provenance/register.js';
 import type { Restraint } from './sizeRestraint.js';
 
-/** The register entries a sized restraint relies on, from what it holds (a block, an anchor, joints). */
+/**
+ * One list per distinct basis, shared by every fitting with that basis: a route of thousands of
+ * fittings has a handful of bases, and a list kept per fitting was about 5 % of what an analysis keeps
+ * alive (which the garbage collector pays for at every collection while the analysis is built).
+ */
+const shared = new Map<string, ProvenanceId[]>();
+
+/**
+ * The register entries a sized restraint relies on, from what it holds (a block, an anchor, joints).
+ * The list is shared between restraints with the same entries: callers must not change it.
+ */
 export function restraintBasis(r: Omit<Restraint, 'basis'>, legs: readonly Leg[], soil: Soil): ProvenanceId[] {
+  const ids = basisOf(r, legs, soil);
+  const key = ids.join(' ');
+  const found = shared.get(key);
+  if (found) return found;
+  shared.set(key, ids);
+  return ids;
+}
+
+function basisOf(r: Omit<Restraint, 'basis'>, legs: readonly Leg[], soil: Soil): ProvenanceId[] {
   const ids: ProvenanceId[] = [];
   if (r.block || r.reverseBlock || r.anchor || r.trenchBottom) ids.push('design.dimension-step');
   if (r.block || r.reverseBlock)
