@@ -113,5 +113,14 @@ export function sizeRestraint(
     out.restrainedLength = out.restrainedLegs.length ? Math.max(...out.restrainedLegs.map((l) => l.length)) : null;
   }
   out.basis = restraintBasis(out, legs, site.soil);
+  // Most fittings end with no steps, findings or restrained legs: one shared empty list each instead
+  // of three kept per fitting (what an analysis keeps alive, every collection while it is built copies).
+  if (!out.steps.length) out.steps = NO_STEPS;
+  if (!out.diagnostics.length) out.diagnostics = NO_FINDINGS;
+  if (!out.restrainedLegs.length) out.restrainedLegs = NO_LEGS;
   return out;
 }
+
+const NO_STEPS = Object.freeze([]) as unknown as CalcStep[];
+const NO_FINDINGS = Object.freeze([]) as unknown as Diagnostic[];
+const NO_LEGS = Object.freeze([]) as unknown as RestrainedLeg[];
