@@ -139,16 +139,27 @@ function scheduled(b: BearingBlock | null): ScheduleBlock | null {
   );
 }
 
-/** What a row's parts are built from, and each part once it has been read. */
-interface RowSource {
-  a: Analysis;
-  f: FittingAnalysis;
-  words: (d: Diagnostic) => string;
-  /** the parts built so far (or set by a caller) */
-  kept: Partial<Pick<ScheduleFitting, 'pipes' | 'cases' | 'restraint' | 'unverified' | 'warnings'>>;
-}
+/** What a row's parts are built from, and each part once it has been read (or set by a caller). */
+type RowSource = { a: Analysis; f: FittingAnalysis; words: (d: Diagnostic) => string } & {
+  [K in LazyKey]: ScheduleFitting[K] | undefined;
+};
 
-const sources = new WeakMap<object, RowSource>();
+type LazyKey = 'pipes' | 'cases' | 'restraint' | 'unverified' | 'warnings';
+
+/**
+ * What every row is an instance of: it holds the row's source in a private field, which no reader of
+ * the row's fields sees (JSON, spreads, structuredClone and Object.keys read own enumerable fields
+ * only), where a WeakMap entry per row had cost more than the rest of the row.
+ */
+class ScheduleRow {
+  readonly #source: RowSource;
+  constructor(source: RowSource) {
+    this.#source = source;
+  }
+  static source(row: object): RowSource {
+    return (row as ScheduleRow).#source;
+  }
+}
 
 /**
  * A row's part built when first read and kept: the table reads the rows in view, the print and the
@@ -157,17 +168,14 @@ const sources = new WeakMap<object, RowSource>();
  * accessor once read: turning it into a data property would too, which a reader of every row (the
  * command line's JSON) pays for.
  */
-function lazyField<K extends keyof RowSource['kept']>(
-  key: K,
-  make: (s: RowSource) => ScheduleFitting[K],
-): PropertyDescriptor {
+function lazyField<K extends LazyKey>(key: K, make: (s: RowSource) => ScheduleFitting[K]): PropertyDescriptor {
   return {
     get(this: ScheduleFitting) {
-      const s = sources.get(this)!;
-      return (s.kept[key] ??= make(s));
+      const s = ScheduleRow.source(this);
+      return (s[key] ??= make(s) as RowSource[K]);
     },
     set(this: ScheduleFitting, value: ScheduleFitting[K]) {
-      sources.get(this)!.kept[key] = value;
+      ScheduleRow.source(this)[key] = value as RowSource[K];
     },
     enumerable: true,
     configurable: true,
@@ -234,22 +242,30 @@ function row(a: Analysis, f: FittingAnalysis, words: (d: Diagnostic) => string):
   const { envelope: e, geometry: g } = f;
   let od = 0;
   for (const l of f.legs) od = Math.max(od, l.pipe.outsideDiameter);
-  const out = {
-    node: f.node.id,
-    mark: f.mark,
-    run: f.run,
-    label: f.node.label ?? null,
-    kind: g.kind as ScheduleFitting['kind'],
-    deflection: g.deflection,
-    horizontalDeflection: g.horizontalDeflection,
-    verticalDeflection: g.verticalDeflection,
-    branchAngle: g.branchAngle,
-    chainage: f.chainage,
-    position: [f.node.x, f.node.y, f.node.elevation] as const,
-    cover: f.node.cover,
-    groundLevel: f.node.elevation + od / 2 + f.node.cover,
-  } as ScheduleFitting;
-  sources.set(out, { a, f, words, kept: {} });
+  // The fields in the order of ScheduleFitting, which JSON and the table read them in.
+  const out = new ScheduleRow({
+    a,
+    f,
+    words,
+    pipes: undefined,
+    cases: undefined,
+    restraint: undefined,
+    unverified: undefined,
+    warnings: undefined,
+  }) as unknown as ScheduleFitting;
+  out.node = f.node.id;
+  out.mark = f.mark;
+  out.run = f.run;
+  out.label = f.node.label ?? null;
+  out.kind = g.kind as ScheduleFitting['kind'];
+  out.deflection = g.deflection;
+  out.horizontalDeflection = g.horizontalDeflection;
+  out.verticalDeflection = g.verticalDeflection;
+  out.branchAngle = g.branchAngle;
+  out.chainage = f.chainage;
+  out.position = [f.node.x, f.node.y, f.node.elevation] as const;
+  out.cover = f.node.cover;
+  out.groundLevel = f.node.elevation + od / 2 + f.node.cover;
   Object.defineProperty(out, 'pipes', PIPES);
   out.soil = nodeSoil(a.project, f.node).id;
   Object.defineProperty(out, 'cases', CASES);
