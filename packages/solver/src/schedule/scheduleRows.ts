@@ -147,21 +147,6 @@ type RowSource = { a: Analysis; f: FittingAnalysis; words: (d: Diagnostic) => st
 type LazyKey = 'pipes' | 'cases' | 'restraint' | 'unverified' | 'warnings';
 
 /**
- * What every row is an instance of: it holds the row's source in a private field, which no reader of
- * the row's fields sees (JSON, spreads, structuredClone and Object.keys read own enumerable fields
- * only), where a WeakMap entry per row had cost more than the rest of the row.
- */
-class ScheduleRow {
-  readonly #source: RowSource;
-  constructor(source: RowSource) {
-    this.#source = source;
-  }
-  static source(row: object): RowSource {
-    return (row as ScheduleRow).#source;
-  }
-}
-
-/**
  * A row's part built when first read and kept: the table reads the rows in view, the print and the
  * exports read every part, and a pressure change reads none. One getter and setter per field, shared by
  * every row (a function made per row would put each row in dictionary mode), and the field stays an
@@ -234,55 +219,69 @@ const UNVERIFIED = lazyField('unverified', ({ f }) => unverified(f.basis));
 /** The diagnostics worded in SI, kept once read. */
 const WARNINGS = lazyField('warnings', ({ f, words }) => (f.diagnostics.length ? f.diagnostics.map(words) : []));
 
+// The class's fields are the row's (declaration merging: the class adds none of its own but its source).
+// eslint-disable-next-line @typescript-eslint/no-unsafe-declaration-merging, @typescript-eslint/no-empty-object-type
+interface ScheduleRow extends ScheduleFitting {}
+
 /**
  * One schedule row: its numbers copied from the analysis, its lists and nested parts (pipes, cases,
- * restraint, words, unverified entries) built when first read. The fields keep their order.
+ * restraint, words, unverified entries) built when first read. The fields keep their order (JSON and
+ * the table read them in it), each set in the constructor so that every field has room in the object
+ * itself. The row holds its source in a private field, which no reader of its fields sees (JSON,
+ * spreads, structuredClone and Object.keys read own enumerable fields only), where a WeakMap entry per
+ * row had cost more than the rest of the row.
  */
-function row(a: Analysis, f: FittingAnalysis, words: (d: Diagnostic) => string): ScheduleFitting {
-  const { envelope: e, geometry: g } = f;
-  let od = 0;
-  for (const l of f.legs) od = Math.max(od, l.pipe.outsideDiameter);
-  // The fields in the order of ScheduleFitting, which JSON and the table read them in.
-  const out = new ScheduleRow({
-    a,
-    f,
-    words,
-    pipes: undefined,
-    cases: undefined,
-    restraint: undefined,
-    unverified: undefined,
-    warnings: undefined,
-  }) as unknown as ScheduleFitting;
-  out.node = f.node.id;
-  out.mark = f.mark;
-  out.run = f.run;
-  out.label = f.node.label ?? null;
-  out.kind = g.kind as ScheduleFitting['kind'];
-  out.deflection = g.deflection;
-  out.horizontalDeflection = g.horizontalDeflection;
-  out.verticalDeflection = g.verticalDeflection;
-  out.branchAngle = g.branchAngle;
-  out.chainage = f.chainage;
-  out.position = [f.node.x, f.node.y, f.node.elevation] as const;
-  out.cover = f.node.cover;
-  out.groundLevel = f.node.elevation + od / 2 + f.node.cover;
-  Object.defineProperty(out, 'pipes', PIPES);
-  out.soil = nodeSoil(a.project, f.node).id;
-  Object.defineProperty(out, 'cases', CASES);
-  out.governingCase = e.governing.caseId;
-  out.designPressure = e.pressure;
-  out.thrust = e.governing.total;
-  out.horizontalThrust = e.horizontal.force;
-  out.upwardThrust = e.upward.force;
-  out.downwardThrust = e.downward.force;
-  out.bearingDirection = e.horizontal.force > 0 ? planBearing(e.horizontal.direction) : null;
-  out.profile = fittingProfile(f);
-  out.waterWeight = f.waterWeight;
-  Object.defineProperty(out, 'restraint', RESTRAINT);
-  Object.defineProperty(out, 'warnings', WARNINGS);
-  out.diagnostics = f.diagnostics;
-  Object.defineProperty(out, 'unverified', UNVERIFIED);
-  return out;
+// eslint-disable-next-line @typescript-eslint/no-unsafe-declaration-merging
+class ScheduleRow {
+  readonly #source: RowSource;
+  constructor(a: Analysis, f: FittingAnalysis, words: (d: Diagnostic) => string) {
+    this.#source = {
+      a,
+      f,
+      words,
+      pipes: undefined,
+      cases: undefined,
+      restraint: undefined,
+      unverified: undefined,
+      warnings: undefined,
+    };
+    const { envelope: e, geometry: g, node } = f;
+    let od = 0;
+    for (const l of f.legs) od = Math.max(od, l.pipe.outsideDiameter);
+    this.node = node.id;
+    this.mark = f.mark;
+    this.run = f.run;
+    this.label = node.label ?? null;
+    this.kind = g.kind as ScheduleFitting['kind'];
+    this.deflection = g.deflection;
+    this.horizontalDeflection = g.horizontalDeflection;
+    this.verticalDeflection = g.verticalDeflection;
+    this.branchAngle = g.branchAngle;
+    this.chainage = f.chainage;
+    this.position = [node.x, node.y, node.elevation] as const;
+    this.cover = node.cover;
+    this.groundLevel = node.elevation + od / 2 + node.cover;
+    Object.defineProperty(this, 'pipes', PIPES);
+    this.soil = nodeSoil(a.project, node).id;
+    Object.defineProperty(this, 'cases', CASES);
+    this.governingCase = e.governing.caseId;
+    this.designPressure = e.pressure;
+    this.thrust = e.governing.total;
+    this.horizontalThrust = e.horizontal.force;
+    this.upwardThrust = e.upward.force;
+    this.downwardThrust = e.downward.force;
+    this.bearingDirection = e.horizontal.force > 0 ? planBearing(e.horizontal.direction) : null;
+    this.profile = fittingProfile(f);
+    this.waterWeight = f.waterWeight;
+    Object.defineProperty(this, 'restraint', RESTRAINT);
+    Object.defineProperty(this, 'warnings', WARNINGS);
+    this.diagnostics = f.diagnostics;
+    Object.defineProperty(this, 'unverified', UNVERIFIED);
+  }
+
+  static source(row: object): RowSource {
+    return (row as ScheduleRow).#source;
+  }
 }
 
 const schedules = new WeakMap<Analysis, Schedule>();
@@ -307,7 +306,7 @@ function siWords(a: Analysis): (d: Diagnostic) => string {
 export function scheduleRowAt(a: Analysis, i: number): ScheduleFitting {
   let list = rowLists.get(a);
   if (!list) rowLists.set(a, (list = new Array<ScheduleFitting>(a.fittings.length)));
-  return (list[i] ??= row(a, a.fittings[i]!, siWords(a)));
+  return (list[i] ??= new ScheduleRow(a, a.fittings[i]!, siWords(a)));
 }
 
 /**
