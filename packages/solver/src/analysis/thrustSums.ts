@@ -188,6 +188,8 @@ const size = (t: Float64Array, k: number) => {
 const planSize = (t: Float64Array, k: number) => Math.sqrt(t[3 * k]! * t[3 * k]! + t[3 * k + 1]! * t[3 * k + 1]!);
 const vec = (a: Float64Array, k: number): Vec3 => [a[3 * k]!, a[3 * k + 1]!, a[3 * k + 2]!];
 const NO_THRUST: Vec3 = Object.freeze([0, 0, 0] as const);
+/** No state thrusts that way (up or down): one shared extreme, not one kept per fitting. */
+const NO_EXTREME: Extreme = Object.freeze({ force: 0, caseId: null });
 
 /** What one fitting's states come to: every state as data, one per case, and the envelope. */
 export interface FittingStates {
@@ -304,8 +306,8 @@ export function readStates(
       governing: states[governing]!,
       horizontal,
       reverse,
-      upward: { force: upForce, caseId: caseOf(upState) },
-      downward: { force: downForce, caseId: caseOf(downState) },
+      upward: upState < 0 ? NO_EXTREME : { force: upForce, caseId: caseOf(upState) },
+      downward: downState < 0 ? NO_EXTREME : { force: downForce, caseId: caseOf(downState) },
       pressure,
     },
   };

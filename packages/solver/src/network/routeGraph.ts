@@ -59,7 +59,8 @@ export function routeGraph(project: Project, kept?: (id: string) => Leg[] | unde
     const old = kept?.(nodes[i]!.id);
     if (old) legs[i] = old;
     else {
-      legs[i] = [];
+      // sized to the node's pipe ends: a list grown by push keeps room for 17
+      legs[i] = new Array<Leg>(legStart[i + 1]! - legStart[i]!);
       fresh[i] = 1;
     }
   }
@@ -68,14 +69,16 @@ export function routeGraph(project: Project, kept?: (id: string) => Leg[] | unde
     const a = from[k]!;
     if (a < 0) continue;
     const b = to[k]!;
-    legFar[cursor[a]!] = b;
-    legPipe[cursor[a]!++] = k;
-    legFar[cursor[b]!] = a;
-    legPipe[cursor[b]!++] = k;
+    const ea = cursor[a]!++;
+    legFar[ea] = b;
+    legPipe[ea] = k;
+    const eb = cursor[b]!++;
+    legFar[eb] = a;
+    legPipe[eb] = k;
     if (!fresh[a] && !fresh[b]) continue;
     const [fromA, fromB] = pipeLegs(pipes[k]!, nodes[a]!, nodes[b]!, useOutside);
-    if (fresh[a]) legs[a]!.push(fromA);
-    if (fresh[b]) legs[b]!.push(fromB);
+    if (fresh[a]) legs[a]![ea - legStart[a]!] = fromA;
+    if (fresh[b]) legs[b]![eb - legStart[b]!] = fromB;
   }
   return { nodes, index, legs, legStart, legFar, legPipe, pipeCount: pipes.length };
 }
