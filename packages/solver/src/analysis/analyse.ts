@@ -1,8 +1,10 @@
 import type { Vec3 } from '../geometry/vector.js';
 import type { Project, ProjectNode } from '../model/projectSchema.js';
-import { legsByNode, pipeLegs, type Leg } from '../network/legs.js';
-import { fittingGeometry, needsRestraint, type FittingGeometry } from '../network/fittingKind.js';
-import { fittingMarks, runLayout, type Run, type RunLayout } from '../network/runs.js';
+import type { Leg } from '../network/legs.js';
+import { fittingGeometry, needsRestraint, type FittingGeometry, type FittingKind } from '../network/fittingKind.js';
+import type { Run } from '../network/runs.js';
+import { routeGraph, type RouteGraph } from '../network/routeGraph.js';
+import { runMarks, runTable, type RunTable } from '../network/runTable.js';
 import type { CaseThrust, ThrustEnvelope } from '../thrust/fittingThrust.js';
 import { waterWeightInFitting } from '../thrust/waterWeight.js';
 import { sizeRestraint, type Restraint } from '../restraint/sizeRestraint.js';
@@ -15,6 +17,7 @@ import { pipeRatingChecks } from '../pressure/pipeRating.js';
 import { copySums, fillStates, readStates, thrustSums, writeSums, type ThrustSums } from './thrustSums.js';
 import { fittingDiagnostics } from './fittingDiagnostics.js';
 import { routeChange } from './routeChange.js';
+import { RouteAnalysis, type RouteTables } from './routeViews.js';
 
 /** Everything computed for one fitting; the schedule, the plan and the record all read this. */
 export interface FittingAnalysis {
@@ -61,25 +64,10 @@ export interface Analysis {
   diagnostics: Diagnostic[];
 }
 
-/** What an analysis keeps for the next one (analyseNext): the sums and geometry of every fitting. */
-interface Kept {
-  sums: ThrustSums;
-  /** fitting index by node id */
-  index: Map<string, number>;
-  geometry: Map<string, FittingGeometry>;
-}
-
-const kept = new WeakMap<Analysis, Kept>();
+const kept = new WeakMap<Analysis, RouteTables>();
 
 /** `analyse`'s memo: one analysis per document. */
 const cache = new WeakMap<Project, Analysis>();
-
-/** Where a fitting stands on the route. */
-interface Place {
-  mark: string;
-  run: string;
-  chainage: number;
-}
 
 /** Thrust, envelope, restraint and findings of fitting `f` from its sums in `sums`. */
 function solveFitting(
@@ -87,7 +75,9 @@ function solveFitting(
   node: ProjectNode,
   legs: Leg[],
   geometry: FittingGeometry,
-  place: Place,
+  mark: string,
+  run: string,
+  chainage: number,
   inputs: readonly Diagnostic[],
   sums: ThrustSums,
   f: number,
@@ -106,9 +96,9 @@ function solveFitting(
   return {
     node,
     // field by field, not a spread: one literal shape for every fitting
-    mark: place.mark,
-    run: place.run,
-    chainage: place.chainage,
+    mark,
+    run,
+    chainage,
     legs,
     geometry,
     cases,
@@ -168,86 +158,79 @@ function sameList(a: readonly Diagnostic[], b: readonly Diagnostic[]): boolean {
   return a.length === b.length && a.every((d, i) => sameDiagnostic(d, b[i]!));
 }
 
-type Reuse = { analysis: Analysis; kept: Kept; reuse: (id: string) => 'all' | 'sums' | 'none' } | null;
+type Reuse = { analysis: Analysis; kept: RouteTables; reuse: (id: string) => 'all' | 'sums' | 'none' } | null;
 
 /** An analysis being put together: what every fitting reads, and the fittings solved so far. */
 interface Assembly {
   project: Project;
-  legs: Map<string, Leg[]>;
-  geometry: Map<string, FittingGeometry>;
+  route: RouteTables;
   prev: Reuse;
-  layout: RunLayout;
-  marks: Map<string, string>;
   inputs: Diagnostic[];
   atNode: Map<string, Diagnostic[]>;
-  nodeById: Map<string, ProjectNode>;
-  /** node ids of the fittings, by run and chainage */
-  order: string[];
-  sums: ThrustSums;
-  index: Map<string, number>;
+  /** node indices of the fittings, by run and chainage */
+  order: number[];
   fittings: FittingAnalysis[];
 }
 
-const isFitting = (geometry: ReadonlyMap<string, FittingGeometry>) => (id: string) => {
-  const kind = geometry.get(id)!.kind;
-  return kind !== 'straight' && kind !== 'none';
-};
+const isFitting = (kind: FittingKind) => kind !== 'straight' && kind !== 'none';
 
 function startAssembly(
   project: Project,
-  legs: Map<string, Leg[]>,
-  geometry: Map<string, FittingGeometry>,
+  graph: RouteGraph,
+  geometry: FittingGeometry[],
+  runs: RunTable,
   prev: Reuse,
-  layout: RunLayout,
-  marks: Map<string, string>,
 ): Assembly {
+  const { marks, order: markOrder } = runMarks(runs, (i) => isFitting(geometry[i]!.kind));
   const inputs = implausibleInputs(project);
-  const nodeById = new Map<string, ProjectNode>();
-  for (const n of project.nodes) nodeById.set(n.id, n);
-  const order: string[] = [];
-  const done = new Set<string>();
-  for (const run of layout.runs) {
-    for (const { id } of run.nodes) {
-      if (layout.runOf.get(id) !== run.letter || !needsRestraint(geometry.get(id)!.kind) || done.has(id)) continue;
-      done.add(id);
-      order.push(id);
+  const order: number[] = [];
+  const fittingAt = new Int32Array(graph.nodes.length).fill(-1);
+  for (let r = 0; r < runs.letters.length; r++) {
+    for (let s = runs.runFirst[r]!; s < runs.runFirst[r + 1]!; s++) {
+      const i = runs.seqNode[s]!;
+      if (runs.owner[i] !== r || !needsRestraint(geometry[i]!.kind) || fittingAt[i]! >= 0) continue;
+      fittingAt[i] = order.length;
+      order.push(i);
     }
   }
   return {
     project,
-    legs,
-    geometry,
+    route: { graph, runs, marks, markOrder, geometry, fittingAt, sums: thrustSums(order.length), views: {} },
     prev,
-    layout,
-    marks,
     inputs,
     atNode: byNode(inputs),
-    nodeById,
     order,
-    sums: thrustSums(order.length),
-    index: new Map<string, number>(),
     fittings: new Array<FittingAnalysis>(order.length),
   };
 }
 
 /** Solves fitting `f` of the assembly, reusing what the analysis before computed where it may. */
 function solveAt(s: Assembly, f: number): void {
-  const { project, prev, sums, fittings } = s;
-  const id = s.order[f]!;
-  s.index.set(id, f);
-  const node = s.nodeById.get(id)!;
-  const g = s.geometry.get(id)!;
-  const l = s.legs.get(id) ?? [];
-  const place: Place = { mark: s.marks.get(id)!, run: s.layout.runOf.get(id)!, chainage: s.layout.chainage.get(id)! };
+  const { project, prev, fittings, route } = s;
+  const { graph, runs, sums } = route;
+  const i = s.order[f]!;
+  const node = graph.nodes[i]!;
+  const id = node.id;
+  const g = route.geometry[i]!;
+  const l = graph.legs[i]!;
+  const mark = route.marks[i]!;
+  const run = runs.letters[runs.owner[i]!]!;
+  const chainage = runs.chainage[i]!;
   const here = s.atNode.get(id) ?? NONE;
   const reuse = prev ? prev.reuse(id) : 'none';
-  const old = reuse === 'none' ? undefined : prev!.analysis.byNode.get(id);
-  const oldIndex = reuse === 'none' ? undefined : prev!.kept.index.get(id);
-  if (old && oldIndex !== undefined) copySums(prev!.kept.sums, oldIndex, sums, f);
+  let old: FittingAnalysis | undefined;
+  let oldIndex = -1;
+  if (reuse !== 'none') {
+    const k = prev!.kept;
+    const at = k.graph.index.get(id);
+    oldIndex = at === undefined ? -1 : k.fittingAt[at]!;
+    if (oldIndex >= 0) old = prev!.analysis.fittings[oldIndex];
+  }
+  if (old) copySums(prev!.kept.sums, oldIndex, sums, f);
   else writeSums(sums, f, l, node.elevation, node.valve && g.kind === 'valve');
   // A restrained length capped by the line beyond the neighbours is sized again after any edit.
   if (reuse === 'all' && old && !old.restraint.dependsOnRoute) {
-    const moved = old.mark !== place.mark || old.run !== place.run || old.chainage !== place.chainage;
+    const moved = old.mark !== mark || old.run !== run || old.chainage !== chainage;
     const reworded = !sameList(
       old.diagnostics.filter((d) => d.subject.node === id && d.subject.field),
       here,
@@ -256,45 +239,44 @@ function solveAt(s: Assembly, f: number): void {
     else
       fittings[f] = {
         ...old,
-        ...place,
+        mark,
+        run,
+        chainage,
         diagnostics: reworded
           ? fittingDiagnostics(node, l, g, old.cases, old.envelope, old.restraint, here)
           : old.diagnostics,
       };
   } else {
-    fittings[f] = solveFitting(project, node, l, g, place, here, sums, f, reuse === 'sums' ? old : undefined);
+    fittings[f] = solveFitting(
+      project,
+      node,
+      l,
+      g,
+      mark,
+      run,
+      chainage,
+      here,
+      sums,
+      f,
+      reuse === 'sums' ? old : undefined,
+    );
   }
 }
 
 function finishAssembly(s: Assembly): Analysis {
-  const { project, fittings, layout } = s;
-  const analysis: Analysis = {
-    project,
-    fittings,
-    byNode: new Map(fittings.map((f) => [f.node.id, f])),
-    legs: s.legs,
-    runs: layout.runs,
-    runOf: layout.runOf,
-    chainage: layout.chainage,
-    marks: s.marks,
-    diagnostics: uniqueDiagnostics([...s.inputs, ...pipeRatingChecks(project)]),
-  };
-  kept.set(analysis, { sums: s.sums, index: s.index, geometry: s.geometry });
+  const { project, fittings } = s;
+  const diagnostics = uniqueDiagnostics([...s.inputs, ...pipeRatingChecks(project)]);
+  const analysis = new RouteAnalysis(project, fittings, diagnostics, s.route);
+  kept.set(analysis, s.route);
   return analysis;
 }
 
 /**
- * The analysis of `project` from its legs and geometry, reusing what `prev` computed where `reuse`
+ * The analysis of `project` from its graph and geometry, reusing what `prev` computed where `reuse`
  * says a fitting did not change (`'all'`: its thrust and restraint; `'sums'`: its sums only).
  */
-function assemble(
-  project: Project,
-  legs: Map<string, Leg[]>,
-  geometry: Map<string, FittingGeometry>,
-  prev: Reuse,
-): Analysis {
-  const layout = runLayout(project, legs);
-  const s = startAssembly(project, legs, geometry, prev, layout, fittingMarks(layout, isFitting(geometry)));
+function assemble(project: Project, graph: RouteGraph, geometry: FittingGeometry[], prev: Reuse): Analysis {
+  const s = startAssembly(project, graph, geometry, runTable(project, graph), prev);
   for (let f = 0; f < s.order.length; f++) solveAt(s, f);
   return finishAssembly(s);
 }
@@ -303,39 +285,46 @@ function assemble(
  * A load-case edit: the same fittings in the same order with the same sums; each is rescaled, and its
  * restraint kept where its envelope did not change.
  */
-function rescale(prev: Analysis, k: Kept, project: Project): Analysis {
+function rescale(prev: Analysis, k: RouteTables, project: Project): Analysis {
   const inputs = implausibleInputs(project);
   const atNode = byNode(inputs);
   const n = prev.fittings.length;
   const fittings = new Array<FittingAnalysis>(n);
   for (let f = 0; f < n; f++) {
     const old = prev.fittings[f]!;
-    const place: Place = { mark: old.mark, run: old.run, chainage: old.chainage };
     const here = atNode.get(old.node.id) ?? NONE;
-    fittings[f] = solveFitting(project, old.node, old.legs, old.geometry, place, here, k.sums, f, old);
+    fittings[f] = solveFitting(
+      project,
+      old.node,
+      old.legs,
+      old.geometry,
+      old.mark,
+      old.run,
+      old.chainage,
+      here,
+      k.sums,
+      f,
+      old,
+    );
   }
-  const analysis: Analysis = {
-    ...prev,
-    project,
-    fittings,
-    byNode: new Map(fittings.map((f) => [f.node.id, f])),
-    // a case edit changes the pressure on every pipe: its rating checks are made again
-    diagnostics: uniqueDiagnostics([...inputs, ...pipeRatingChecks(project)]),
-  };
+  // a case edit changes the pressure on every pipe: its rating checks are made again
+  const diagnostics = uniqueDiagnostics([...inputs, ...pipeRatingChecks(project)]);
+  const analysis = new RouteAnalysis(project, fittings, diagnostics, k);
   kept.set(analysis, k);
   return analysis;
 }
 
-function geometryOf(project: Project, legs: ReadonlyMap<string, Leg[]>): Map<string, FittingGeometry> {
-  const geometry = new Map<string, FittingGeometry>();
-  for (const node of project.nodes) geometry.set(node.id, fittingGeometry(node, legs.get(node.id) ?? []));
+function geometryOf(graph: RouteGraph): FittingGeometry[] {
+  const { nodes, legs } = graph;
+  const geometry = new Array<FittingGeometry>(nodes.length);
+  for (let i = 0; i < nodes.length; i++) geometry[i] = fittingGeometry(nodes[i]!, legs[i]!);
   return geometry;
 }
 
 /** The whole route's fittings, thrusts and restraints: a pure function of the project document. */
 export function analyseProject(project: Project): Analysis {
-  const legs = legsByNode(project);
-  return assemble(project, legs, geometryOf(project, legs), null);
+  const graph = routeGraph(project);
+  return assemble(project, graph, geometryOf(graph), null);
 }
 
 /**
@@ -346,13 +335,13 @@ export function analyseProject(project: Project): Analysis {
 export function* analyseInSteps(project: Project, chunk = 200): Generator<void, Analysis, void> {
   const done = cache.get(project);
   if (done) return done;
-  const legs = legsByNode(project);
+  const graph = routeGraph(project);
   yield;
-  const geometry = geometryOf(project, legs);
+  const geometry = geometryOf(graph);
   yield;
-  const layout = runLayout(project, legs);
+  const runs = runTable(project, graph);
   yield;
-  const s = startAssembly(project, legs, geometry, null, layout, fittingMarks(layout, isFitting(geometry)));
+  const s = startAssembly(project, graph, geometry, runs, null);
   yield;
   for (let f = 0; f < s.order.length; f++) {
     solveAt(s, f);
@@ -381,33 +370,26 @@ export function analyseNext(prev: Analysis | null | undefined, project: Project)
   const change = routeChange(prev.project, project, prev.legs);
   if (change.kind === 'all') return analyseProject(project);
   if (change.kind === 'same') {
-    const same: Analysis = { ...prev, project };
+    const same = new RouteAnalysis(project, prev.fittings, prev.diagnostics, k);
     kept.set(same, k);
     return same;
   }
   if (change.kind === 'cases') return rescale(prev, k, project);
   const { dirty } = change;
-  const useOutside = project.design.thrustArea === 'outside';
-  const nodeById = new Map<string, ProjectNode>();
-  for (const n of project.nodes) nodeById.set(n.id, n);
-  const legs = new Map<string, Leg[]>();
-  for (const n of project.nodes) legs.set(n.id, dirty.has(n.id) ? [] : prev.legs.get(n.id)!);
-  for (const pipe of project.pipes) {
-    if (!dirty.has(pipe.from) && !dirty.has(pipe.to)) continue;
-    const a = nodeById.get(pipe.from);
-    const b = nodeById.get(pipe.to);
-    if (!a || !b) continue;
-    const [fromA, fromB] = pipeLegs(pipe, a, b, useOutside);
-    if (dirty.has(a.id)) legs.get(a.id)!.push(fromA);
-    if (dirty.has(b.id)) legs.get(b.id)!.push(fromB);
-  }
-  const geometry = new Map<string, FittingGeometry>();
-  for (const n of project.nodes) {
-    const g = dirty.has(n.id) ? undefined : k.geometry.get(n.id);
-    geometry.set(n.id, g ?? fittingGeometry(n, legs.get(n.id)!));
+  const before = k.graph;
+  const graph = routeGraph(project, (id) => {
+    if (dirty.has(id)) return undefined;
+    const at = before.index.get(id);
+    return at === undefined ? undefined : before.legs[at];
+  });
+  const geometry = new Array<FittingGeometry>(graph.nodes.length);
+  for (let i = 0; i < graph.nodes.length; i++) {
+    const n = graph.nodes[i]!;
+    const at = dirty.has(n.id) ? undefined : before.index.get(n.id);
+    geometry[i] = at === undefined ? fittingGeometry(n, graph.legs[i]!) : k.geometry[at]!;
   }
   const clean = change.cases ? 'sums' : 'all';
-  return assemble(project, legs, geometry, {
+  return assemble(project, graph, geometry, {
     analysis: prev,
     kept: k,
     reuse: (id) => (dirty.has(id) ? 'none' : clean),

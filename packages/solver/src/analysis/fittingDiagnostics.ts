@@ -51,5 +51,8 @@ export function fittingDiagnostics(
   if (node.valve && geometry.kind === 'valve') found.push(diagnostic('valve.both-ways', { node: node.id }));
   else if (node.valve) found.push(diagnostic('valve.flag-ignored', { node: node.id }));
   if (norm(envelope.governing.total) === 0) found.push(diagnostic('thrust.none', { node: node.id }));
-  return found.length ? uniqueDiagnostics(found) : found;
+  // No findings (most fittings): one shared empty list, not one kept per fitting.
+  return found.length ? uniqueDiagnostics(found) : NO_FINDINGS;
 }
+
+const NO_FINDINGS = Object.freeze([]) as unknown as Diagnostic[];

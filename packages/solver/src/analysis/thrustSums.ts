@@ -188,6 +188,8 @@ const size = (t: Float64Array, k: number) => {
 const planSize = (t: Float64Array, k: number) => Math.sqrt(t[3 * k]! * t[3 * k]! + t[3 * k + 1]! * t[3 * k + 1]!);
 const vec = (a: Float64Array, k: number): Vec3 => [a[3 * k]!, a[3 * k + 1]!, a[3 * k + 2]!];
 const NO_THRUST: Vec3 = Object.freeze([0, 0, 0] as const);
+/** No state thrusts that way (up or down): one shared extreme, not one kept per fitting. */
+const NO_EXTREME: Extreme = Object.freeze({ force: 0, caseId: null });
 
 /** What one fitting's states come to: every state as data, one per case, and the envelope. */
 export interface FittingStates {
@@ -216,11 +218,15 @@ export function readStates(
     // total is the static thrust, number for number — one shared zero and the same vector, not two
     // more arrays kept per state.
     const still = d[3 * k] === 0 && d[3 * k + 1] === 0 && d[3 * k + 2] === 0;
+    // Cases with the same flow factor (a working and a surge case) have the same dynamic thrust,
+    // number for number: the state before's vector serves both.
+    const before = k > 0 ? states[k - 1]!.dynamic : NO_THRUST;
+    const same = before[0] === d[3 * k] && before[1] === d[3 * k + 1] && before[2] === d[3 * k + 2];
     states[k] = {
       caseId: cases[b.caseIndex[k]!]!.id,
       pressure: b.pressure[k]!,
       static: statics,
-      dynamic: still ? NO_THRUST : vec(d, k),
+      dynamic: still ? NO_THRUST : same ? before : vec(d, k),
       total: still ? statics : vec(t, k),
       closedAgainst: b.side[k]! < 0 ? null : closedAgainst(b.side[k]!),
     };
@@ -300,8 +306,8 @@ export function readStates(
       governing: states[governing]!,
       horizontal,
       reverse,
-      upward: { force: upForce, caseId: caseOf(upState) },
-      downward: { force: downForce, caseId: caseOf(downState) },
+      upward: upState < 0 ? NO_EXTREME : { force: upForce, caseId: caseOf(upState) },
+      downward: downState < 0 ? NO_EXTREME : { force: downForce, caseId: caseOf(downState) },
       pressure,
     },
   };

@@ -59,10 +59,11 @@ export function sizeRestraint(
     anchor: null,
     trenchBottom: null,
     restrainedLength: null,
-    restrainedLegs: [],
-    steps: [],
-    diagnostics: [],
-    basis: [],
+    // the shared empty lists until something is added (most fittings add nothing)
+    restrainedLegs: NO_LEGS,
+    steps: NO_STEPS,
+    diagnostics: NO_FINDINGS,
+    basis: NO_BASIS,
     dependsOnRoute: false,
   };
   let needJoints = node.restraint === 'joints';
@@ -77,6 +78,8 @@ export function sizeRestraint(
     needJoints = c.needsJoints;
   }
   if (needJoints && total > 0) {
+    if (out.steps === NO_STEPS) out.steps = [];
+    if (out.diagnostics === NO_FINDINGS) out.diagnostics = [];
     const thrusts = [envelope.governing.total, ...(envelope.reverse ? [envelope.reverse.state.total] : [])];
     const longest = new Map<string, RestrainedLeg>();
     for (const thrust of thrusts) {
@@ -113,5 +116,15 @@ export function sizeRestraint(
     out.restrainedLength = out.restrainedLegs.length ? Math.max(...out.restrainedLegs.map((l) => l.length)) : null;
   }
   out.basis = restraintBasis(out, legs, site.soil);
+  // Most fittings end with no steps, findings or restrained legs: one shared empty list each instead
+  // of three kept per fitting (what an analysis keeps alive, every collection while it is built copies).
+  if (!out.steps.length) out.steps = NO_STEPS;
+  if (!out.diagnostics.length) out.diagnostics = NO_FINDINGS;
+  if (!out.restrainedLegs.length) out.restrainedLegs = NO_LEGS;
   return out;
 }
+
+const NO_STEPS = Object.freeze([]) as unknown as CalcStep[];
+const NO_FINDINGS = Object.freeze([]) as unknown as Diagnostic[];
+const NO_LEGS = Object.freeze([]) as unknown as RestrainedLeg[];
+const NO_BASIS = Object.freeze([]) as unknown as ProvenanceId[];

@@ -139,16 +139,12 @@ function scheduled(b: BearingBlock | null): ScheduleBlock | null {
   );
 }
 
-/** What a row's parts are built from, and each part once it has been read. */
-interface RowSource {
-  a: Analysis;
-  f: FittingAnalysis;
-  words: (d: Diagnostic) => string;
-  /** the parts built so far (or set by a caller) */
-  kept: Partial<Pick<ScheduleFitting, 'pipes' | 'cases' | 'restraint' | 'unverified' | 'warnings'>>;
-}
+/** What a row's parts are built from, and each part once it has been read (or set by a caller). */
+type RowSource = { a: Analysis; f: FittingAnalysis; words: (d: Diagnostic) => string } & {
+  [K in LazyKey]: ScheduleFitting[K] | undefined;
+};
 
-const sources = new WeakMap<object, RowSource>();
+type LazyKey = 'pipes' | 'cases' | 'restraint' | 'unverified' | 'warnings';
 
 /**
  * A row's part built when first read and kept: the table reads the rows in view, the print and the
@@ -157,17 +153,14 @@ const sources = new WeakMap<object, RowSource>();
  * accessor once read: turning it into a data property would too, which a reader of every row (the
  * command line's JSON) pays for.
  */
-function lazyField<K extends keyof RowSource['kept']>(
-  key: K,
-  make: (s: RowSource) => ScheduleFitting[K],
-): PropertyDescriptor {
+function lazyField<K extends LazyKey>(key: K, make: (s: RowSource) => ScheduleFitting[K]): PropertyDescriptor {
   return {
     get(this: ScheduleFitting) {
-      const s = sources.get(this)!;
-      return (s.kept[key] ??= make(s));
+      const s = ScheduleRow.source(this);
+      return (s[key] ??= make(s) as RowSource[K]);
     },
     set(this: ScheduleFitting, value: ScheduleFitting[K]) {
-      sources.get(this)!.kept[key] = value;
+      ScheduleRow.source(this)[key] = value as RowSource[K];
     },
     enumerable: true,
     configurable: true,
@@ -226,47 +219,69 @@ const UNVERIFIED = lazyField('unverified', ({ f }) => unverified(f.basis));
 /** The diagnostics worded in SI, kept once read. */
 const WARNINGS = lazyField('warnings', ({ f, words }) => (f.diagnostics.length ? f.diagnostics.map(words) : []));
 
+// The class's fields are the row's (declaration merging: the class adds none of its own but its source).
+// eslint-disable-next-line @typescript-eslint/no-unsafe-declaration-merging, @typescript-eslint/no-empty-object-type
+interface ScheduleRow extends ScheduleFitting {}
+
 /**
  * One schedule row: its numbers copied from the analysis, its lists and nested parts (pipes, cases,
- * restraint, words, unverified entries) built when first read. The fields keep their order.
+ * restraint, words, unverified entries) built when first read. The fields keep their order (JSON and
+ * the table read them in it), each set in the constructor so that every field has room in the object
+ * itself. The row holds its source in a private field, which no reader of its fields sees (JSON,
+ * spreads, structuredClone and Object.keys read own enumerable fields only), where a WeakMap entry per
+ * row had cost more than the rest of the row.
  */
-function row(a: Analysis, f: FittingAnalysis, words: (d: Diagnostic) => string): ScheduleFitting {
-  const { envelope: e, geometry: g } = f;
-  let od = 0;
-  for (const l of f.legs) od = Math.max(od, l.pipe.outsideDiameter);
-  const out = {
-    node: f.node.id,
-    mark: f.mark,
-    run: f.run,
-    label: f.node.label ?? null,
-    kind: g.kind as ScheduleFitting['kind'],
-    deflection: g.deflection,
-    horizontalDeflection: g.horizontalDeflection,
-    verticalDeflection: g.verticalDeflection,
-    branchAngle: g.branchAngle,
-    chainage: f.chainage,
-    position: [f.node.x, f.node.y, f.node.elevation] as const,
-    cover: f.node.cover,
-    groundLevel: f.node.elevation + od / 2 + f.node.cover,
-  } as ScheduleFitting;
-  sources.set(out, { a, f, words, kept: {} });
-  Object.defineProperty(out, 'pipes', PIPES);
-  out.soil = nodeSoil(a.project, f.node).id;
-  Object.defineProperty(out, 'cases', CASES);
-  out.governingCase = e.governing.caseId;
-  out.designPressure = e.pressure;
-  out.thrust = e.governing.total;
-  out.horizontalThrust = e.horizontal.force;
-  out.upwardThrust = e.upward.force;
-  out.downwardThrust = e.downward.force;
-  out.bearingDirection = e.horizontal.force > 0 ? planBearing(e.horizontal.direction) : null;
-  out.profile = fittingProfile(f);
-  out.waterWeight = f.waterWeight;
-  Object.defineProperty(out, 'restraint', RESTRAINT);
-  Object.defineProperty(out, 'warnings', WARNINGS);
-  out.diagnostics = f.diagnostics;
-  Object.defineProperty(out, 'unverified', UNVERIFIED);
-  return out;
+// eslint-disable-next-line @typescript-eslint/no-unsafe-declaration-merging
+class ScheduleRow {
+  readonly #source: RowSource;
+  constructor(a: Analysis, f: FittingAnalysis, words: (d: Diagnostic) => string) {
+    this.#source = {
+      a,
+      f,
+      words,
+      pipes: undefined,
+      cases: undefined,
+      restraint: undefined,
+      unverified: undefined,
+      warnings: undefined,
+    };
+    const { envelope: e, geometry: g, node } = f;
+    let od = 0;
+    for (const l of f.legs) od = Math.max(od, l.pipe.outsideDiameter);
+    this.node = node.id;
+    this.mark = f.mark;
+    this.run = f.run;
+    this.label = node.label ?? null;
+    this.kind = g.kind as ScheduleFitting['kind'];
+    this.deflection = g.deflection;
+    this.horizontalDeflection = g.horizontalDeflection;
+    this.verticalDeflection = g.verticalDeflection;
+    this.branchAngle = g.branchAngle;
+    this.chainage = f.chainage;
+    this.position = [node.x, node.y, node.elevation] as const;
+    this.cover = node.cover;
+    this.groundLevel = node.elevation + od / 2 + node.cover;
+    Object.defineProperty(this, 'pipes', PIPES);
+    this.soil = nodeSoil(a.project, node).id;
+    Object.defineProperty(this, 'cases', CASES);
+    this.governingCase = e.governing.caseId;
+    this.designPressure = e.pressure;
+    this.thrust = e.governing.total;
+    this.horizontalThrust = e.horizontal.force;
+    this.upwardThrust = e.upward.force;
+    this.downwardThrust = e.downward.force;
+    this.bearingDirection = e.horizontal.force > 0 ? planBearing(e.horizontal.direction) : null;
+    this.profile = fittingProfile(f);
+    this.waterWeight = f.waterWeight;
+    Object.defineProperty(this, 'restraint', RESTRAINT);
+    Object.defineProperty(this, 'warnings', WARNINGS);
+    this.diagnostics = f.diagnostics;
+    Object.defineProperty(this, 'unverified', UNVERIFIED);
+  }
+
+  static source(row: object): RowSource {
+    return (row as ScheduleRow).#source;
+  }
 }
 
 const schedules = new WeakMap<Analysis, Schedule>();
@@ -291,7 +306,7 @@ function siWords(a: Analysis): (d: Diagnostic) => string {
 export function scheduleRowAt(a: Analysis, i: number): ScheduleFitting {
   let list = rowLists.get(a);
   if (!list) rowLists.set(a, (list = new Array<ScheduleFitting>(a.fittings.length)));
-  return (list[i] ??= row(a, a.fittings[i]!, siWords(a)));
+  return (list[i] ??= new ScheduleRow(a, a.fittings[i]!, siWords(a)));
 }
 
 /**
