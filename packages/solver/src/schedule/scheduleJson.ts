@@ -2,10 +2,10 @@ import type { Vec3 } from '../geometry/vector.js';
 import { DIAGNOSTIC_CODES } from '../diagnostics/codes.js';
 import type { Diagnostic } from '../diagnostics/diagnostic.js';
 import type { Dimension } from '../units/conversions.js';
-import { ceilTo, roundTo } from '../units/format.js';
+import { roundTo } from '../units/format.js';
 import type { Schedule, ScheduleBlock, ScheduleFitting } from './scheduleRows.js';
 import { JsonIndenter } from './jsonIndent.js';
-import { decimalText } from './jsonNumber.js';
+import { JsonBytes } from './jsonBytes.js';
 
 /**
  * Decimals kept in the JSON schedule per kind of quantity, SI (docs/project-format.md): millimetres,
@@ -56,92 +56,185 @@ export interface ScheduleJsonOptions {
 }
 
 export interface ScheduleJsonWriting extends ScheduleJsonOptions {
-  /** characters gathered before each call of `write` (default 64 Ki) */
+  /** bytes of UTF-8 gathered before each call of `write` (default 64 Ki) */
   chunk?: number;
 }
 
-// The number texts, as JSON.stringify writes a number: finite ones as String does (-0 as 0), others null.
-const num = (v: number): string => (Number.isFinite(v) ? String(v) : 'null');
-
 const D = JSON_DECIMALS;
-const round = (v: number, decimals: number) => decimalText(roundTo(v, decimals), decimals);
-/** built dimensions and volumes: up, never down */
-const up = (v: number, decimals: number) => decimalText(ceilTo(v, decimals), decimals);
-const roundOrNull = (v: number | null, decimals: number) => (v === null ? 'null' : round(v, decimals));
-const vec = (v: Vec3, decimals: number) =>
-  `[${round(v[0], decimals)},${round(v[1], decimals)},${round(v[2], decimals)}]`;
 
-/** A string value as a JSON literal. */
-const q = (text: string): string => JSON.stringify(text);
-
-const orNull = (text: string | null) => (text === null ? 'null' : q(text));
-
-function list(items: readonly string[]): string {
-  let out = '';
-  for (let i = 0; i < items.length; i++) out += (i ? ',' : '') + q(items[i]!);
-  return `[${out}]`;
+function vec(o: JsonBytes, v: Vec3, decimals: number): void {
+  o.raw('[');
+  o.round(v[0], decimals);
+  o.raw(',');
+  o.round(v[1], decimals);
+  o.raw(',');
+  o.round(v[2], decimals);
+  o.raw(']');
 }
 
-function block(b: ScheduleBlock | null): string {
-  if (!b) return 'null';
-  return (
-    `{"bearingArea":${round(b.bearingArea, D.area)},"faceWidth":${up(b.faceWidth, D.length)}` +
-    `,"faceHeight":${up(b.faceHeight, D.length)},"concreteVolume":${up(b.concreteVolume, D.volume)}` +
-    `,"depth":${up(b.depth, D.length)},"direction":${vec(b.direction, D.unit)}` +
-    `,"passiveResistance":${round(b.passiveResistance, D.force)},"passiveRatio":${round(b.passiveRatio, D.ratio)}` +
-    `,"shapeFactor":${round(b.shapeFactor, D.ratio)},"governs":${q(b.governs)}` +
-    `,"thrust":${round(b.thrust, D.force)},"upwardThrust":${round(b.upwardThrust, D.force)}}`
-  );
+function strOrNull(o: JsonBytes, text: string | null): void {
+  if (text === null) o.raw('null');
+  else o.str(text);
+}
+
+function list(o: JsonBytes, items: readonly string[]): void {
+  o.raw('[');
+  for (let i = 0; i < items.length; i++) {
+    if (i) o.raw(',');
+    o.str(items[i]!);
+  }
+  o.raw(']');
+}
+
+function block(o: JsonBytes, b: ScheduleBlock | null): void {
+  if (!b) return o.raw('null');
+  o.raw('{"bearingArea":');
+  o.round(b.bearingArea, D.area);
+  o.raw(',"faceWidth":');
+  o.up(b.faceWidth, D.length);
+  o.raw(',"faceHeight":');
+  o.up(b.faceHeight, D.length);
+  o.raw(',"concreteVolume":');
+  o.up(b.concreteVolume, D.volume);
+  o.raw(',"depth":');
+  o.up(b.depth, D.length);
+  o.raw(',"direction":');
+  vec(o, b.direction, D.unit);
+  o.raw(',"passiveResistance":');
+  o.round(b.passiveResistance, D.force);
+  o.raw(',"passiveRatio":');
+  o.round(b.passiveRatio, D.ratio);
+  o.raw(',"shapeFactor":');
+  o.round(b.shapeFactor, D.ratio);
+  o.raw(',"governs":');
+  o.str(b.governs);
+  o.raw(',"thrust":');
+  o.round(b.thrust, D.force);
+  o.raw(',"upwardThrust":');
+  o.round(b.upwardThrust, D.force);
+  o.raw('}');
 }
 
 /** What `diagnosticJson` gives, as text: the subject's fields in their order, each value with its kind. */
-function diagnosticJsonText(d: Diagnostic): string {
+function diagnosticText(o: JsonBytes, d: Diagnostic): void {
   const kinds = DIAGNOSTIC_CODES[d.code].values as Record<string, Dimension>;
-  let subject = '';
+  o.raw('{"code":');
+  o.str(d.code);
+  o.raw(',"severity":');
+  o.str(d.severity);
+  o.raw(',"subject":{');
   const s = d.subject as Record<string, unknown>;
+  let first = true;
   for (const key of Object.keys(s)) {
     const v = s[key];
     if (v === undefined) continue; // as JSON.stringify leaves it out
-    subject += `${subject ? ',' : ''}${q(key)}:${typeof v === 'string' ? q(v) : JSON.stringify(v)}`;
+    if (!first) o.raw(',');
+    first = false;
+    o.str(key);
+    o.raw(':');
+    if (typeof v === 'string') o.str(v);
+    else o.json(JSON.stringify(v));
   }
-  let values = '';
+  o.raw('},"values":{');
+  first = true;
   for (const name of Object.keys(d.values)) {
     const kind = kinds[name] ?? 'ratio';
-    values += `${values ? ',' : ''}${q(name)}:{"value":${round(d.values[name]!, D[kind])},"kind":${q(kind)}}`;
+    if (!first) o.raw(',');
+    first = false;
+    o.str(name);
+    o.raw(':{"value":');
+    o.round(d.values[name]!, D[kind]);
+    o.raw(',"kind":');
+    o.str(kind);
+    o.raw('}');
   }
-  return `{"code":${q(d.code)},"severity":${q(d.severity)},"subject":{${subject}},"values":{${values}}}`;
+  o.raw('}}');
 }
 
-function diagnosticList(list: readonly Diagnostic[]): string {
-  let out = '';
-  for (let i = 0; i < list.length; i++) out += (i ? ',' : '') + diagnosticJsonText(list[i]!);
-  return `[${out}]`;
+function diagnosticList(o: JsonBytes, list: readonly Diagnostic[]): void {
+  o.raw('[');
+  for (let i = 0; i < list.length; i++) {
+    if (i) o.raw(',');
+    diagnosticText(o, list[i]!);
+  }
+  o.raw(']');
 }
 
-function restraintText(x: ScheduleFitting['restraint']): string {
+function restraintText(o: JsonBytes, x: ScheduleFitting['restraint']): void {
+  o.raw('{"block":');
+  block(o, x.block);
+  o.raw(',"reverseBlock":');
+  block(o, x.reverseBlock);
+  o.raw(',"anchor":');
   const a = x.anchor;
-  const anchor = a
-    ? `{"concreteVolume":${up(a.concreteVolume, D.volume)},"length":${up(a.length, D.length)}` +
-      `,"width":${up(a.width, D.length)},"height":${up(a.height, D.length)},"side":${up(a.side, D.length)}` +
-      `,"submerged":${a.submerged},"upwardThrust":${round(a.upwardThrust, D.force)}` +
-      `,"horizontalThrust":${round(a.horizontalThrust, D.force)}}`
-    : 'null';
+  if (a) {
+    o.raw('{"concreteVolume":');
+    o.up(a.concreteVolume, D.volume);
+    o.raw(',"length":');
+    o.up(a.length, D.length);
+    o.raw(',"width":');
+    o.up(a.width, D.length);
+    o.raw(',"height":');
+    o.up(a.height, D.length);
+    o.raw(',"side":');
+    o.up(a.side, D.length);
+    o.raw(a.submerged ? ',"submerged":true' : ',"submerged":false');
+    o.raw(',"upwardThrust":');
+    o.round(a.upwardThrust, D.force);
+    o.raw(',"horizontalThrust":');
+    o.round(a.horizontalThrust, D.force);
+    o.raw('}');
+  } else o.raw('null');
+  o.raw(',"trenchBottom":');
   const t = x.trenchBottom;
-  const trench = t
-    ? `{"bearingArea":${round(t.bearingArea, D.area)},"width":${up(t.width, D.length)},"length":${up(t.length, D.length)}}`
-    : 'null';
-  let legs = '';
-  for (let i = 0; i < x.restrainedLegs.length; i++) {
-    const l = x.restrainedLegs[i]!;
-    legs +=
-      `${i ? ',' : ''}{"pipe":${q(l.pipe)},"length":${up(l.length, D.length)}` +
-      `,"toward":${orNull(l.toward)},"joints":${num(l.joints)}}`;
+  if (t) {
+    o.raw('{"bearingArea":');
+    o.round(t.bearingArea, D.area);
+    o.raw(',"width":');
+    o.up(t.width, D.length);
+    o.raw(',"length":');
+    o.up(t.length, D.length);
+    o.raw('}');
+  } else o.raw('null');
+  o.raw(',"restrainedLength":');
+  if (x.restrainedLength === null) o.raw('null');
+  else o.up(x.restrainedLength, D.length);
+  o.raw(',"restrainedLegs":[');
+  const legs = x.restrainedLegs;
+  for (let i = 0; i < legs.length; i++) {
+    const l = legs[i]!;
+    o.raw(i ? ',{"pipe":' : '{"pipe":');
+    o.str(l.pipe);
+    o.raw(',"length":');
+    o.up(l.length, D.length);
+    o.raw(',"toward":');
+    strOrNull(o, l.toward);
+    o.raw(',"joints":');
+    o.num(l.joints);
+    o.raw('}');
   }
-  return (
-    `{"block":${block(x.block)},"reverseBlock":${block(x.reverseBlock)},"anchor":${anchor}` +
-    `,"trenchBottom":${trench},"restrainedLength":${x.restrainedLength === null ? 'null' : up(x.restrainedLength, D.length)}` +
-    `,"restrainedLegs":[${legs}]}`
-  );
+  o.raw(']}');
+}
+
+function pipesText(o: JsonBytes, pipes: ScheduleFitting['pipes'], echo: boolean): void {
+  o.raw('[');
+  for (let i = 0; i < pipes.length; i++) {
+    const p = pipes[i]!;
+    o.raw(i ? ',{"id":' : '{"id":');
+    o.str(p.id);
+    if (echo) {
+      o.raw(',"outsideDiameter":');
+      o.round(p.outsideDiameter, D.diameter);
+      o.raw(',"insideDiameter":');
+      o.round(p.insideDiameter, D.diameter);
+      o.raw(',"material":');
+      o.str(p.material);
+    }
+    o.raw(',"toward":');
+    strOrNull(o, p.toward);
+    o.raw('}');
+  }
+  o.raw(']');
 }
 
 /**
@@ -149,73 +242,153 @@ function restraintText(x: ScheduleFitting['restraint']): string {
  * what the project file already says (position, label, soil, the pipes' sizes) is left out and the
  * pipes, as id and toward, come last.
  */
-function fittingText(f: ScheduleFitting, echo: boolean): string {
-  let pipes = '';
-  for (let i = 0; i < f.pipes.length; i++) {
-    const p = f.pipes[i]!;
-    pipes += echo
-      ? `${i ? ',' : ''}{"id":${q(p.id)},"outsideDiameter":${round(p.outsideDiameter, D.diameter)}` +
-        `,"insideDiameter":${round(p.insideDiameter, D.diameter)},"material":${q(p.material)},"toward":${orNull(p.toward)}}`
-      : `${i ? ',' : ''}{"id":${q(p.id)},"toward":${orNull(p.toward)}}`;
+function fittingText(o: JsonBytes, f: ScheduleFitting, echo: boolean): void {
+  o.raw('{"node":');
+  o.str(f.node);
+  o.raw(',"mark":');
+  o.str(f.mark);
+  o.raw(',"run":');
+  o.str(f.run);
+  if (echo) {
+    o.raw(',"label":');
+    strOrNull(o, f.label);
   }
-  let cases = '';
-  for (let i = 0; i < f.cases.length; i++) {
-    const c = f.cases[i]!;
-    cases +=
-      `${i ? ',' : ''}{"case":${q(c.case)},"pressure":${round(c.pressure, D.pressure)}` +
-      `,"static":${vec(c.static, D.force)},"dynamic":${vec(c.dynamic, D.force)},"total":${vec(c.total, D.force)}` +
-      `,"closedAgainst":${orNull(c.closedAgainst)}}`;
+  o.raw(',"kind":');
+  o.str(f.kind);
+  o.raw(',"deflection":');
+  o.roundOrNull(f.deflection, D.angle);
+  o.raw(',"horizontalDeflection":');
+  o.roundOrNull(f.horizontalDeflection, D.angle);
+  o.raw(',"verticalDeflection":');
+  o.roundOrNull(f.verticalDeflection, D.angle);
+  o.raw(',"branchAngle":');
+  o.roundOrNull(f.branchAngle, D.angle);
+  o.raw(',"chainage":');
+  o.round(f.chainage, D.length);
+  if (echo) {
+    o.raw(',"position":');
+    vec(o, f.position, D.length);
   }
-  return (
-    `{"node":${q(f.node)},"mark":${q(f.mark)},"run":${q(f.run)}` +
-    (echo ? `,"label":${orNull(f.label)}` : '') +
-    `,"kind":${q(f.kind)},"deflection":${roundOrNull(f.deflection, D.angle)}` +
-    `,"horizontalDeflection":${roundOrNull(f.horizontalDeflection, D.angle)}` +
-    `,"verticalDeflection":${roundOrNull(f.verticalDeflection, D.angle)}` +
-    `,"branchAngle":${roundOrNull(f.branchAngle, D.angle)},"chainage":${round(f.chainage, D.length)}` +
-    (echo ? `,"position":${vec(f.position, D.length)}` : '') +
-    `,"cover":${round(f.cover, D.length)},"groundLevel":${round(f.groundLevel, D.elevation)}` +
-    (echo ? `,"pipes":[${pipes}],"soil":${q(f.soil)}` : '') +
-    `,"cases":[${cases}],"governingCase":${q(f.governingCase)}` +
-    `,"designPressure":${round(f.designPressure, D.pressure)},"thrust":${vec(f.thrust, D.force)}` +
-    `,"horizontalThrust":${round(f.horizontalThrust, D.force)},"upwardThrust":${round(f.upwardThrust, D.force)}` +
-    `,"downwardThrust":${round(f.downwardThrust, D.force)}` +
-    `,"bearingDirection":${roundOrNull(f.bearingDirection, D.angle)},"profile":${orNull(f.profile)}` +
-    `,"waterWeight":${round(f.waterWeight, D.force)},"restraint":${restraintText(f.restraint)}` +
-    `,"warnings":${list(f.warnings)},"diagnostics":${diagnosticList(f.diagnostics)}` +
-    `,"unverified":${list(f.unverified)}` +
-    (echo ? '}' : `,"pipes":[${pipes}]}`)
-  );
+  o.raw(',"cover":');
+  o.round(f.cover, D.length);
+  o.raw(',"groundLevel":');
+  o.round(f.groundLevel, D.elevation);
+  if (echo) {
+    o.raw(',"pipes":');
+    pipesText(o, f.pipes, true);
+    o.raw(',"soil":');
+    o.str(f.soil);
+  }
+  o.raw(',"cases":[');
+  // A row's parts are behind getters (built when first read): each is read once.
+  const cases = f.cases;
+  for (let i = 0; i < cases.length; i++) {
+    const c = cases[i]!;
+    o.raw(i ? ',{"case":' : '{"case":');
+    o.str(c.case);
+    o.raw(',"pressure":');
+    o.round(c.pressure, D.pressure);
+    o.raw(',"static":');
+    vec(o, c.static, D.force);
+    o.raw(',"dynamic":');
+    vec(o, c.dynamic, D.force);
+    o.raw(',"total":');
+    vec(o, c.total, D.force);
+    o.raw(',"closedAgainst":');
+    strOrNull(o, c.closedAgainst);
+    o.raw('}');
+  }
+  o.raw('],"governingCase":');
+  o.str(f.governingCase);
+  o.raw(',"designPressure":');
+  o.round(f.designPressure, D.pressure);
+  o.raw(',"thrust":');
+  vec(o, f.thrust, D.force);
+  o.raw(',"horizontalThrust":');
+  o.round(f.horizontalThrust, D.force);
+  o.raw(',"upwardThrust":');
+  o.round(f.upwardThrust, D.force);
+  o.raw(',"downwardThrust":');
+  o.round(f.downwardThrust, D.force);
+  o.raw(',"bearingDirection":');
+  o.roundOrNull(f.bearingDirection, D.angle);
+  o.raw(',"profile":');
+  strOrNull(o, f.profile);
+  o.raw(',"waterWeight":');
+  o.round(f.waterWeight, D.force);
+  o.raw(',"restraint":');
+  restraintText(o, f.restraint);
+  o.raw(',"warnings":');
+  list(o, f.warnings);
+  o.raw(',"diagnostics":');
+  diagnosticList(o, f.diagnostics);
+  o.raw(',"unverified":');
+  list(o, f.unverified);
+  if (!echo) {
+    o.raw(',"pipes":');
+    pipesText(o, f.pipes, false);
+  }
+  o.raw('}');
+}
+
+export interface ScheduleJsonBytes {
+  /** repeat what the project file says (as ScheduleJsonOptions.echo; default true) */
+  echo?: boolean;
+  /** bytes gathered before each call of `write` (default 64 Ki) */
+  chunk?: number;
+  /** characters beyond ASCII to write as \uXXXX as well (see JsonBytes): the terminal guard */
+  escape?: (code: number) => boolean;
 }
 
 /**
- * Writes the schedule as JSON text at the stated precision (no 0.7000000000000001), the same whatever
- * the display units, in pieces of about `chunk` characters: each fitting's text is made from its row
- * and handed on, so no tree of rounded copies and no one string of the whole output is ever held (a
- * 10,000-fitting schedule is some 13 MB of text). The text is what `JSON.stringify` makes of the
- * schedule's fields in the row's order — held so, byte for byte, by a test against that serialiser.
+ * Writes the schedule as compact JSON in UTF-8 at the stated precision (no 0.7000000000000001), the
+ * same whatever the display units, in pieces of about `chunk` bytes: each fitting's text is made from
+ * its row into a byte buffer and handed on, so no tree of rounded copies, no string per number and no
+ * one string of the whole output is ever made (a 10,000-fitting schedule is some 13 MB of text). The
+ * text is what `JSON.stringify` makes of the schedule's fields in the row's order — held so, byte for
+ * byte, by a test against that serialiser. Each piece is a new array: the receiver may keep it.
+ */
+export function writeScheduleJsonBytes(
+  s: Schedule,
+  write: (bytes: Uint8Array) => void,
+  options: ScheduleJsonBytes = {},
+): void {
+  const { echo = true, chunk = 1 << 16, escape = null } = options;
+  const o = new JsonBytes(write, chunk, escape);
+  o.raw('{"project":');
+  o.str(s.project);
+  o.raw(',"units":');
+  o.str(s.units);
+  o.raw(',"warnings":');
+  list(o, s.warnings);
+  o.raw(',"diagnostics":');
+  diagnosticList(o, s.diagnostics);
+  o.raw(',"fittings":[');
+  const fittings = s.fittings;
+  for (let i = 0; i < fittings.length; i++) {
+    if (i) o.raw(',');
+    fittingText(o, fittings[i]!, echo);
+  }
+  o.raw('],"cautions":');
+  list(o, s.cautions);
+  o.raw('}\n');
+  o.flush();
+}
+
+/**
+ * The same text as strings, in pieces of about `chunk` bytes' worth, indented as
+ * `JSON.stringify(v, null, 2)` lays it out when `pretty` (the indenter passes the last line end as it is).
  */
 export function writeScheduleJson(s: Schedule, write: (text: string) => void, options: ScheduleJsonWriting = {}): void {
   const { pretty = false, echo = true, chunk = 1 << 16 } = options;
   const indent = pretty ? new JsonIndenter() : null;
-  let pending = '';
+  const decoder = new TextDecoder();
   const put = (text: string) => {
-    pending += text;
-    if (pending.length >= chunk) {
-      write(indent ? indent.feed(pending) : pending);
-      pending = '';
-    }
+    if (text) write(indent ? indent.feed(text) : text);
   };
-  put(
-    `{"project":${q(s.project)},"units":${q(s.units)},"warnings":${list(s.warnings)}` +
-      `,"diagnostics":${diagnosticList(s.diagnostics)},"fittings":[`,
-  );
-  const fittings = s.fittings;
-  for (let i = 0; i < fittings.length; i++) put((i ? ',' : '') + fittingText(fittings[i]!, echo));
-  put(`],"cautions":${list(s.cautions)}}`);
-  write((indent ? indent.feed(pending) : pending) + '\n');
+  writeScheduleJsonBytes(s, (bytes) => put(decoder.decode(bytes, { stream: true })), { echo, chunk });
+  put(decoder.decode());
 }
-
 /**
  * The schedule as JSON text at the stated precision, the same whatever the display units: what the app
  * exports and, without the echoed input, what `schedule --format json` prints (there streamed).
