@@ -8,6 +8,13 @@ const HEX = '0123456789abcdef';
 /** Room kept beyond the piece size, so that most writes need no check of their own length. */
 const RESERVE = 1024;
 
+/** ASCII text as bytes, made once for `JsonBytes.bytes`. */
+export function ascii(text: string): Uint8Array {
+  const b = new Uint8Array(text.length);
+  for (let i = 0; i < text.length; i++) b[i] = text.charCodeAt(i);
+  return b;
+}
+
 /**
  * JSON text written straight into UTF-8 bytes and handed on in pieces of at least `chunk` bytes (each
  * piece a new array, which the receiver may keep). A 10,000-fitting schedule is some 13 MB of text and
@@ -49,7 +56,20 @@ export class JsonBytes {
     this.at = 0;
   }
 
-  /** Text that is JSON already and ASCII: keys with their punctuation, `null`, `true`. */
+  /** One byte of ASCII: punctuation. */
+  byte(c: number): void {
+    this.room(1);
+    this.buf[this.at++] = c;
+  }
+
+  /** Bytes made once (`ascii`): a key with its punctuation, `null`. */
+  bytes(b: Uint8Array): void {
+    this.room(b.length);
+    this.buf.set(b, this.at);
+    this.at += b.length;
+  }
+
+  /** Text that is JSON already and ASCII: a number's text. */
   raw(text: string): void {
     const n = text.length;
     this.room(n);

@@ -5,7 +5,7 @@ import type { Dimension } from '../units/conversions.js';
 import { roundTo } from '../units/format.js';
 import type { Schedule, ScheduleBlock, ScheduleFitting } from './scheduleRows.js';
 import { JsonIndenter } from './jsonIndent.js';
-import { JsonBytes } from './jsonBytes.js';
+import { ascii, JsonBytes } from './jsonBytes.js';
 
 /**
  * Decimals kept in the JSON schedule per kind of quantity, SI (docs/project-format.md): millimetres,
@@ -62,179 +62,273 @@ export interface ScheduleJsonWriting extends ScheduleJsonOptions {
 
 const D = JSON_DECIMALS;
 
+/** Character codes of the JSON punctuation written on its own. */
+const COMMA = 44;
+const COLON = 58;
+const OPEN_BRACKET = 91;
+const CLOSE_BRACKET = 93;
+const CLOSE_BRACE = 125;
+
+/**
+ * The schedule's keys with the punctuation around them, and its other fixed texts, as bytes made once:
+ * the writer copies each into its buffer (at 10,000 fittings, some 1.5 million of them).
+ */
+const K = {
+  null: ascii('null'),
+  openBearingArea: ascii('{"bearingArea":'),
+  faceWidth: ascii(',"faceWidth":'),
+  faceHeight: ascii(',"faceHeight":'),
+  concreteVolume: ascii(',"concreteVolume":'),
+  depth: ascii(',"depth":'),
+  direction: ascii(',"direction":'),
+  passiveResistance: ascii(',"passiveResistance":'),
+  passiveRatio: ascii(',"passiveRatio":'),
+  shapeFactor: ascii(',"shapeFactor":'),
+  governs: ascii(',"governs":'),
+  thrust: ascii(',"thrust":'),
+  upwardThrust: ascii(',"upwardThrust":'),
+  openCode: ascii('{"code":'),
+  severity: ascii(',"severity":'),
+  subjectOpen: ascii(',"subject":{'),
+  valuesOpen: ascii('},"values":{'),
+  valueOpen: ascii(':{"value":'),
+  kind: ascii(',"kind":'),
+  closeTwo: ascii('}}'),
+  openBlock: ascii('{"block":'),
+  reverseBlock: ascii(',"reverseBlock":'),
+  anchor: ascii(',"anchor":'),
+  openConcreteVolume: ascii('{"concreteVolume":'),
+  length: ascii(',"length":'),
+  width: ascii(',"width":'),
+  height: ascii(',"height":'),
+  side: ascii(',"side":'),
+  horizontalThrust: ascii(',"horizontalThrust":'),
+  trenchBottom: ascii(',"trenchBottom":'),
+  restrainedLength: ascii(',"restrainedLength":'),
+  restrainedLegsOpen: ascii(',"restrainedLegs":['),
+  toward: ascii(',"toward":'),
+  joints: ascii(',"joints":'),
+  closeListObject: ascii(']}'),
+  outsideDiameter: ascii(',"outsideDiameter":'),
+  insideDiameter: ascii(',"insideDiameter":'),
+  material: ascii(',"material":'),
+  openNode: ascii('{"node":'),
+  mark: ascii(',"mark":'),
+  run: ascii(',"run":'),
+  label: ascii(',"label":'),
+  deflection: ascii(',"deflection":'),
+  horizontalDeflection: ascii(',"horizontalDeflection":'),
+  verticalDeflection: ascii(',"verticalDeflection":'),
+  branchAngle: ascii(',"branchAngle":'),
+  chainage: ascii(',"chainage":'),
+  position: ascii(',"position":'),
+  cover: ascii(',"cover":'),
+  groundLevel: ascii(',"groundLevel":'),
+  pipes: ascii(',"pipes":'),
+  soil: ascii(',"soil":'),
+  casesOpen: ascii(',"cases":['),
+  pressure: ascii(',"pressure":'),
+  static: ascii(',"static":'),
+  dynamic: ascii(',"dynamic":'),
+  total: ascii(',"total":'),
+  closedAgainst: ascii(',"closedAgainst":'),
+  governingCaseAfterList: ascii('],"governingCase":'),
+  designPressure: ascii(',"designPressure":'),
+  downwardThrust: ascii(',"downwardThrust":'),
+  bearingDirection: ascii(',"bearingDirection":'),
+  profile: ascii(',"profile":'),
+  waterWeight: ascii(',"waterWeight":'),
+  restraint: ascii(',"restraint":'),
+  warnings: ascii(',"warnings":'),
+  diagnostics: ascii(',"diagnostics":'),
+  unverified: ascii(',"unverified":'),
+  openProject: ascii('{"project":'),
+  units: ascii(',"units":'),
+  fittingsOpen: ascii(',"fittings":['),
+  cautionsAfterList: ascii('],"cautions":'),
+  end: ascii('}\n'),
+  submergedTrue: ascii(',"submerged":true'),
+  submergedFalse: ascii(',"submerged":false'),
+  openPipe: ascii('{"pipe":'),
+  openId: ascii('{"id":'),
+  openCase: ascii('{"case":'),
+};
+
 function vec(o: JsonBytes, v: Vec3, decimals: number): void {
-  o.raw('[');
+  o.byte(OPEN_BRACKET);
   o.round(v[0], decimals);
-  o.raw(',');
+  o.byte(COMMA);
   o.round(v[1], decimals);
-  o.raw(',');
+  o.byte(COMMA);
   o.round(v[2], decimals);
-  o.raw(']');
+  o.byte(CLOSE_BRACKET);
 }
 
 function strOrNull(o: JsonBytes, text: string | null): void {
-  if (text === null) o.raw('null');
+  if (text === null) o.bytes(K.null);
   else o.str(text);
 }
 
 function list(o: JsonBytes, items: readonly string[]): void {
-  o.raw('[');
+  o.byte(OPEN_BRACKET);
   for (let i = 0; i < items.length; i++) {
-    if (i) o.raw(',');
+    if (i) o.byte(COMMA);
     o.str(items[i]!);
   }
-  o.raw(']');
+  o.byte(CLOSE_BRACKET);
 }
 
 function block(o: JsonBytes, b: ScheduleBlock | null): void {
-  if (!b) return o.raw('null');
-  o.raw('{"bearingArea":');
+  if (!b) return o.bytes(K.null);
+  o.bytes(K.openBearingArea);
   o.round(b.bearingArea, D.area);
-  o.raw(',"faceWidth":');
+  o.bytes(K.faceWidth);
   o.up(b.faceWidth, D.length);
-  o.raw(',"faceHeight":');
+  o.bytes(K.faceHeight);
   o.up(b.faceHeight, D.length);
-  o.raw(',"concreteVolume":');
+  o.bytes(K.concreteVolume);
   o.up(b.concreteVolume, D.volume);
-  o.raw(',"depth":');
+  o.bytes(K.depth);
   o.up(b.depth, D.length);
-  o.raw(',"direction":');
+  o.bytes(K.direction);
   vec(o, b.direction, D.unit);
-  o.raw(',"passiveResistance":');
+  o.bytes(K.passiveResistance);
   o.round(b.passiveResistance, D.force);
-  o.raw(',"passiveRatio":');
+  o.bytes(K.passiveRatio);
   o.round(b.passiveRatio, D.ratio);
-  o.raw(',"shapeFactor":');
+  o.bytes(K.shapeFactor);
   o.round(b.shapeFactor, D.ratio);
-  o.raw(',"governs":');
+  o.bytes(K.governs);
   o.str(b.governs);
-  o.raw(',"thrust":');
+  o.bytes(K.thrust);
   o.round(b.thrust, D.force);
-  o.raw(',"upwardThrust":');
+  o.bytes(K.upwardThrust);
   o.round(b.upwardThrust, D.force);
-  o.raw('}');
+  o.byte(CLOSE_BRACE);
 }
 
 /** What `diagnosticJson` gives, as text: the subject's fields in their order, each value with its kind. */
 function diagnosticText(o: JsonBytes, d: Diagnostic): void {
   const kinds = DIAGNOSTIC_CODES[d.code].values as Record<string, Dimension>;
-  o.raw('{"code":');
+  o.bytes(K.openCode);
   o.str(d.code);
-  o.raw(',"severity":');
+  o.bytes(K.severity);
   o.str(d.severity);
-  o.raw(',"subject":{');
+  o.bytes(K.subjectOpen);
   const s = d.subject as Record<string, unknown>;
   let first = true;
   for (const key of Object.keys(s)) {
     const v = s[key];
     if (v === undefined) continue; // as JSON.stringify leaves it out
-    if (!first) o.raw(',');
+    if (!first) o.byte(COMMA);
     first = false;
     o.str(key);
-    o.raw(':');
+    o.byte(COLON);
     if (typeof v === 'string') o.str(v);
     else o.json(JSON.stringify(v));
   }
-  o.raw('},"values":{');
+  o.bytes(K.valuesOpen);
   first = true;
   for (const name of Object.keys(d.values)) {
     const kind = kinds[name] ?? 'ratio';
-    if (!first) o.raw(',');
+    if (!first) o.byte(COMMA);
     first = false;
     o.str(name);
-    o.raw(':{"value":');
+    o.bytes(K.valueOpen);
     o.round(d.values[name]!, D[kind]);
-    o.raw(',"kind":');
+    o.bytes(K.kind);
     o.str(kind);
-    o.raw('}');
+    o.byte(CLOSE_BRACE);
   }
-  o.raw('}}');
+  o.bytes(K.closeTwo);
 }
 
 function diagnosticList(o: JsonBytes, list: readonly Diagnostic[]): void {
-  o.raw('[');
+  o.byte(OPEN_BRACKET);
   for (let i = 0; i < list.length; i++) {
-    if (i) o.raw(',');
+    if (i) o.byte(COMMA);
     diagnosticText(o, list[i]!);
   }
-  o.raw(']');
+  o.byte(CLOSE_BRACKET);
 }
 
 function restraintText(o: JsonBytes, x: ScheduleFitting['restraint']): void {
-  o.raw('{"block":');
+  o.bytes(K.openBlock);
   block(o, x.block);
-  o.raw(',"reverseBlock":');
+  o.bytes(K.reverseBlock);
   block(o, x.reverseBlock);
-  o.raw(',"anchor":');
+  o.bytes(K.anchor);
   const a = x.anchor;
   if (a) {
-    o.raw('{"concreteVolume":');
+    o.bytes(K.openConcreteVolume);
     o.up(a.concreteVolume, D.volume);
-    o.raw(',"length":');
+    o.bytes(K.length);
     o.up(a.length, D.length);
-    o.raw(',"width":');
+    o.bytes(K.width);
     o.up(a.width, D.length);
-    o.raw(',"height":');
+    o.bytes(K.height);
     o.up(a.height, D.length);
-    o.raw(',"side":');
+    o.bytes(K.side);
     o.up(a.side, D.length);
-    o.raw(a.submerged ? ',"submerged":true' : ',"submerged":false');
-    o.raw(',"upwardThrust":');
+    o.bytes(a.submerged ? K.submergedTrue : K.submergedFalse);
+    o.bytes(K.upwardThrust);
     o.round(a.upwardThrust, D.force);
-    o.raw(',"horizontalThrust":');
+    o.bytes(K.horizontalThrust);
     o.round(a.horizontalThrust, D.force);
-    o.raw('}');
-  } else o.raw('null');
-  o.raw(',"trenchBottom":');
+    o.byte(CLOSE_BRACE);
+  } else o.bytes(K.null);
+  o.bytes(K.trenchBottom);
   const t = x.trenchBottom;
   if (t) {
-    o.raw('{"bearingArea":');
+    o.bytes(K.openBearingArea);
     o.round(t.bearingArea, D.area);
-    o.raw(',"width":');
+    o.bytes(K.width);
     o.up(t.width, D.length);
-    o.raw(',"length":');
+    o.bytes(K.length);
     o.up(t.length, D.length);
-    o.raw('}');
-  } else o.raw('null');
-  o.raw(',"restrainedLength":');
-  if (x.restrainedLength === null) o.raw('null');
+    o.byte(CLOSE_BRACE);
+  } else o.bytes(K.null);
+  o.bytes(K.restrainedLength);
+  if (x.restrainedLength === null) o.bytes(K.null);
   else o.up(x.restrainedLength, D.length);
-  o.raw(',"restrainedLegs":[');
+  o.bytes(K.restrainedLegsOpen);
   const legs = x.restrainedLegs;
   for (let i = 0; i < legs.length; i++) {
     const l = legs[i]!;
-    o.raw(i ? ',{"pipe":' : '{"pipe":');
+    if (i) o.byte(COMMA);
+    o.bytes(K.openPipe);
     o.str(l.pipe);
-    o.raw(',"length":');
+    o.bytes(K.length);
     o.up(l.length, D.length);
-    o.raw(',"toward":');
+    o.bytes(K.toward);
     strOrNull(o, l.toward);
-    o.raw(',"joints":');
+    o.bytes(K.joints);
     o.num(l.joints);
-    o.raw('}');
+    o.byte(CLOSE_BRACE);
   }
-  o.raw(']}');
+  o.bytes(K.closeListObject);
 }
 
 function pipesText(o: JsonBytes, pipes: ScheduleFitting['pipes'], echo: boolean): void {
-  o.raw('[');
+  o.byte(OPEN_BRACKET);
   for (let i = 0; i < pipes.length; i++) {
     const p = pipes[i]!;
-    o.raw(i ? ',{"id":' : '{"id":');
+    if (i) o.byte(COMMA);
+    o.bytes(K.openId);
     o.str(p.id);
     if (echo) {
-      o.raw(',"outsideDiameter":');
+      o.bytes(K.outsideDiameter);
       o.round(p.outsideDiameter, D.diameter);
-      o.raw(',"insideDiameter":');
+      o.bytes(K.insideDiameter);
       o.round(p.insideDiameter, D.diameter);
-      o.raw(',"material":');
+      o.bytes(K.material);
       o.str(p.material);
     }
-    o.raw(',"toward":');
+    o.bytes(K.toward);
     strOrNull(o, p.toward);
-    o.raw('}');
+    o.byte(CLOSE_BRACE);
   }
-  o.raw(']');
+  o.byte(CLOSE_BRACKET);
 }
 
 /**
@@ -243,92 +337,93 @@ function pipesText(o: JsonBytes, pipes: ScheduleFitting['pipes'], echo: boolean)
  * pipes, as id and toward, come last.
  */
 function fittingText(o: JsonBytes, f: ScheduleFitting, echo: boolean): void {
-  o.raw('{"node":');
+  o.bytes(K.openNode);
   o.str(f.node);
-  o.raw(',"mark":');
+  o.bytes(K.mark);
   o.str(f.mark);
-  o.raw(',"run":');
+  o.bytes(K.run);
   o.str(f.run);
   if (echo) {
-    o.raw(',"label":');
+    o.bytes(K.label);
     strOrNull(o, f.label);
   }
-  o.raw(',"kind":');
+  o.bytes(K.kind);
   o.str(f.kind);
-  o.raw(',"deflection":');
+  o.bytes(K.deflection);
   o.roundOrNull(f.deflection, D.angle);
-  o.raw(',"horizontalDeflection":');
+  o.bytes(K.horizontalDeflection);
   o.roundOrNull(f.horizontalDeflection, D.angle);
-  o.raw(',"verticalDeflection":');
+  o.bytes(K.verticalDeflection);
   o.roundOrNull(f.verticalDeflection, D.angle);
-  o.raw(',"branchAngle":');
+  o.bytes(K.branchAngle);
   o.roundOrNull(f.branchAngle, D.angle);
-  o.raw(',"chainage":');
+  o.bytes(K.chainage);
   o.round(f.chainage, D.length);
   if (echo) {
-    o.raw(',"position":');
+    o.bytes(K.position);
     vec(o, f.position, D.length);
   }
-  o.raw(',"cover":');
+  o.bytes(K.cover);
   o.round(f.cover, D.length);
-  o.raw(',"groundLevel":');
+  o.bytes(K.groundLevel);
   o.round(f.groundLevel, D.elevation);
   if (echo) {
-    o.raw(',"pipes":');
+    o.bytes(K.pipes);
     pipesText(o, f.pipes, true);
-    o.raw(',"soil":');
+    o.bytes(K.soil);
     o.str(f.soil);
   }
-  o.raw(',"cases":[');
+  o.bytes(K.casesOpen);
   // A row's parts are behind getters (built when first read): each is read once.
   const cases = f.cases;
   for (let i = 0; i < cases.length; i++) {
     const c = cases[i]!;
-    o.raw(i ? ',{"case":' : '{"case":');
+    if (i) o.byte(COMMA);
+    o.bytes(K.openCase);
     o.str(c.case);
-    o.raw(',"pressure":');
+    o.bytes(K.pressure);
     o.round(c.pressure, D.pressure);
-    o.raw(',"static":');
+    o.bytes(K.static);
     vec(o, c.static, D.force);
-    o.raw(',"dynamic":');
+    o.bytes(K.dynamic);
     vec(o, c.dynamic, D.force);
-    o.raw(',"total":');
+    o.bytes(K.total);
     vec(o, c.total, D.force);
-    o.raw(',"closedAgainst":');
+    o.bytes(K.closedAgainst);
     strOrNull(o, c.closedAgainst);
-    o.raw('}');
+    o.byte(CLOSE_BRACE);
   }
-  o.raw('],"governingCase":');
+  o.bytes(K.governingCaseAfterList);
   o.str(f.governingCase);
-  o.raw(',"designPressure":');
+  o.bytes(K.designPressure);
   o.round(f.designPressure, D.pressure);
-  o.raw(',"thrust":');
+  o.bytes(K.thrust);
   vec(o, f.thrust, D.force);
-  o.raw(',"horizontalThrust":');
+  o.bytes(K.horizontalThrust);
   o.round(f.horizontalThrust, D.force);
-  o.raw(',"upwardThrust":');
+  o.bytes(K.upwardThrust);
   o.round(f.upwardThrust, D.force);
-  o.raw(',"downwardThrust":');
+  o.bytes(K.downwardThrust);
   o.round(f.downwardThrust, D.force);
-  o.raw(',"bearingDirection":');
+  o.bytes(K.bearingDirection);
   o.roundOrNull(f.bearingDirection, D.angle);
-  o.raw(',"profile":');
+  o.bytes(K.profile);
   strOrNull(o, f.profile);
-  o.raw(',"waterWeight":');
+  o.bytes(K.waterWeight);
   o.round(f.waterWeight, D.force);
-  o.raw(',"restraint":');
+  o.bytes(K.restraint);
   restraintText(o, f.restraint);
-  o.raw(',"warnings":');
+  o.bytes(K.warnings);
   list(o, f.warnings);
-  o.raw(',"diagnostics":');
+  o.bytes(K.diagnostics);
   diagnosticList(o, f.diagnostics);
-  o.raw(',"unverified":');
+  o.bytes(K.unverified);
   list(o, f.unverified);
   if (!echo) {
-    o.raw(',"pipes":');
+    o.bytes(K.pipes);
     pipesText(o, f.pipes, false);
   }
-  o.raw('}');
+  o.byte(CLOSE_BRACE);
 }
 
 export interface ScheduleJsonBytes {
@@ -355,23 +450,23 @@ export function writeScheduleJsonBytes(
 ): void {
   const { echo = true, chunk = 1 << 16, escape = null } = options;
   const o = new JsonBytes(write, chunk, escape);
-  o.raw('{"project":');
+  o.bytes(K.openProject);
   o.str(s.project);
-  o.raw(',"units":');
+  o.bytes(K.units);
   o.str(s.units);
-  o.raw(',"warnings":');
+  o.bytes(K.warnings);
   list(o, s.warnings);
-  o.raw(',"diagnostics":');
+  o.bytes(K.diagnostics);
   diagnosticList(o, s.diagnostics);
-  o.raw(',"fittings":[');
+  o.bytes(K.fittingsOpen);
   const fittings = s.fittings;
   for (let i = 0; i < fittings.length; i++) {
-    if (i) o.raw(',');
+    if (i) o.byte(COMMA);
     fittingText(o, fittings[i]!, echo);
   }
-  o.raw('],"cautions":');
+  o.bytes(K.cautionsAfterList);
   list(o, s.cautions);
-  o.raw('}\n');
+  o.bytes(K.end);
   o.flush();
 }
 
