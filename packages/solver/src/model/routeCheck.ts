@@ -13,13 +13,13 @@ function distinct(items: readonly { id: string }[]): boolean {
  * — `referenceChecks` (unique ids, soils and nodes that exist, a pipe between two distinct points with
  * its inside diameter below its outside one) and `overlappingPipes` (one pipe per pair of nodes, no two
  * pipes leaving a node along one line) — as yes or no, with the same arithmetic. The command line asks
- * it of every file it reads: nodes are looked up once into an index, and pairs and directions are kept
- * as numbers, with no string, object or array made per pipe. When it says no, the schema words why; a
- * test holds it to the two checks' answer.
+ * it of every file it reads: nodes are looked up once into an index and the pipes checked in one pass,
+ * with directions kept as numbers and no string, object or array made per pipe. When it says no, the
+ * schema words why; a test holds it to the two checks' answer.
  */
 export function routeRulesHold(p: Project): boolean {
   const { nodes, pipes } = p;
-  if (!distinct(p.loadCases) || !distinct(p.soils) || !distinct(pipes)) return false;
+  if (!distinct(p.loadCases) || !distinct(p.soils)) return false;
   const soils = new Set<string>();
   for (const s of p.soils) soils.add(s.id);
   if (p.defaultSoil !== undefined && !soils.has(p.defaultSoil)) return false;
@@ -30,22 +30,32 @@ export function routeRulesHold(p: Project): boolean {
     index.set(n.id, i);
     if (n.soil !== undefined && !soils.has(n.soil)) return false;
   }
-  // Each pipe's two ends as node indices and its direction from the first to the second.
-  const count = nodes.length;
-  const from = new Int32Array(pipes.length);
-  const to = new Int32Array(pipes.length);
-  const dir = new Float64Array(3 * pipes.length);
-  const degree = new Int32Array(count + 1);
-  const pairs = new Set<number>();
+  // One pass over the pipes (a cold process runs each loop mostly before it is compiled): the
+  // directions already leaving each node are a list through `next`, from `first[node]`, of pipe ends
+  // 2i (leaving the first node) and 2i + 1 (leaving the second, the direction reversed).
+  const first = new Int32Array(nodes.length).fill(-1);
+  const next = new Int32Array(2 * pipes.length);
+  const dir = new Float64Array(6 * pipes.length);
+  const limit = Math.cos((OVERLAP_ANGLE * Math.PI) / 180);
+  const leaves = (end: number, node: number, x: number, y: number, z: number): boolean => {
+    for (let e = first[node]!; e !== -1; e = next[e]!)
+      if (dir[3 * e]! * x + dir[3 * e + 1]! * y + dir[3 * e + 2]! * z > limit) return false;
+    dir[3 * end] = x;
+    dir[3 * end + 1] = y;
+    dir[3 * end + 2] = z;
+    next[end] = first[node]!;
+    first[node] = end;
+    return true;
+  };
+  const ids = new Set<string>();
   for (let i = 0; i < pipes.length; i++) {
     const pipe = pipes[i]!;
+    ids.add(pipe.id);
+    if (ids.size !== i + 1) return false;
     if (!(pipe.insideDiameter < pipe.outsideDiameter)) return false;
     const a = index.get(pipe.from);
     const b = index.get(pipe.to);
     if (a === undefined || b === undefined || a === b) return false;
-    const pair = a < b ? a * count + b : b * count + a;
-    if (pairs.has(pair)) return false;
-    pairs.add(pair);
     const na = nodes[a]!;
     const nb = nodes[b]!;
     const dx = nb.x - na.x;
@@ -53,38 +63,12 @@ export function routeRulesHold(p: Project): boolean {
     const dz = nb.elevation - na.elevation;
     const len = Math.sqrt(dx * dx + dy * dy + dz * dz);
     if (len < MIN_PIPE_LENGTH) return false;
-    from[i] = a;
-    to[i] = b;
-    dir[3 * i] = dx / len;
-    dir[3 * i + 1] = dy / len;
-    dir[3 * i + 2] = dz / len;
-    degree[a + 1]!++;
-    degree[b + 1]!++;
-  }
-  // The directions leaving each node side by side (leaving the second end, the pipe's direction reversed).
-  for (let i = 0; i < count; i++) degree[i + 1]! += degree[i]!;
-  const fill = degree.slice(0, count);
-  const leaving = new Float64Array(3 * 2 * pipes.length);
-  for (let i = 0; i < pipes.length; i++) {
-    const x = dir[3 * i]!;
-    const y = dir[3 * i + 1]!;
-    const z = dir[3 * i + 2]!;
-    let k = 3 * fill[from[i]!]!++;
-    leaving[k] = x;
-    leaving[k + 1] = y;
-    leaving[k + 2] = z;
-    k = 3 * fill[to[i]!]!++;
-    leaving[k] = -x;
-    leaving[k + 1] = -y;
-    leaving[k + 2] = -z;
-  }
-  const limit = Math.cos((OVERLAP_ANGLE * Math.PI) / 180);
-  for (let n = 0; n < count; n++) {
-    const end = 3 * degree[n + 1]!;
-    for (let j = 3 * degree[n]!; j < end; j += 3)
-      for (let k = j + 3; k < end; k += 3)
-        if (leaving[j]! * leaving[k]! + leaving[j + 1]! * leaving[k + 1]! + leaving[j + 2]! * leaving[k + 2]! > limit)
-          return false;
+    const x = dx / len;
+    const y = dy / len;
+    const z = dz / len;
+    // A second pipe between the same two nodes, either way round, leaves its first node along the
+    // same unit vector as the first pipe (cos = 1): refused here as overlappingPipes refuses it.
+    if (!leaves(2 * i, a, x, y, z) || !leaves(2 * i + 1, b, -x, -y, -z)) return false;
   }
   return true;
 }
