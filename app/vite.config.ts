@@ -16,8 +16,10 @@ export default defineConfig({
   build: {
     target: 'es2022',
     sourcemap: false,
-    // Every browser the app runs in (ES2022, module workers) preloads modules itself.
-    modulePreload: { polyfill: false },
+    // No preload helper in the first load (0.6 kB gzipped, issue 16): a lazy part's own imports are
+    // fetched by the browser as it reads the part, and the warm-up after the first draw has them in
+    // cache before they are used. Every browser the app runs in (ES2022, module workers) has modules.
+    modulePreload: false,
     rolldownOptions: {
       output: {
         // What the first screen needs in one file: shared pieces split out for the lazy parts would

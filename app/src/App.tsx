@@ -40,11 +40,11 @@ export function App() {
       onDrop={onDrop}
     >
       <TopBar onPrint={() => setPrinting(true)} onOpen={opening.open} />
-      <NoticeBar />
       <main className="workspace">
         <ToolStrip />
         <PlanView />
         <DetailsPanel />
+        <NoticeBar />
       </main>
       <Drawer />
       {printing && <PrintSheet onClose={() => setPrinting(false)} />}

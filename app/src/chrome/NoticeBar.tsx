@@ -1,11 +1,24 @@
+import { useEffect } from 'react';
 import { useActions, useApp } from '../state/StoreContext.js';
 
-/** Messages the user must see: a refused file with its problems, a storage failure, another tab's edits. */
+/** A plain confirmation ("Opened …") goes after this long; anything with lines or actions stays. */
+const PASSING_MS = 10_000;
+
+/**
+ * Messages the user must see: a refused file with its problems, a storage failure, another tab's edits.
+ * It lies over the top of the plan rather than above it, so that showing or dismissing it never resizes
+ * (and redraws) the plan.
+ */
 export function NoticeBar() {
   const notice = useApp((s) => s.notice);
   const actions = useActions();
-  // An empty slot keeps the window's grid rows in place when there is nothing to say.
-  if (!notice) return <div className="notice-slot" />;
+  const passing = notice?.tone === 'info' && notice.lines.length === 0 && !notice.actions?.length;
+  useEffect(() => {
+    if (!passing) return;
+    const timer = setTimeout(() => actions.notify(null), PASSING_MS);
+    return () => clearTimeout(timer);
+  }, [notice, passing, actions]);
+  if (!notice) return null;
   return (
     <div
       className={`notice notice-${notice.tone}`}

@@ -6,6 +6,7 @@ import { registerCommandUi, runCommand } from './appCommands.js';
 import { ExportMenu } from './ExportMenu.js';
 import { CautionDialog } from './CautionDialog.js';
 import { KeptCopiesButton } from './KeptCopiesButton.js';
+import { caseNames } from '../state/caseNames.js';
 
 /** Short words for the file buttons; the table's labels are their tooltips. */
 const FILE_WORD: Partial<Record<ActionName, string>> = { new: 'New', open: 'Open…', save: 'Save' };
@@ -16,7 +17,7 @@ export function TopBar({ onPrint, onOpen }: { onPrint: () => void; onOpen: (file
   const actions = useActions();
   const name = useApp((s) => s.project.name);
   const units = useApp((s) => s.units);
-  const cases = useApp((s) => s.project.loadCases);
+  const cases = useApp((s) => caseNames(s.project.loadCases));
   const caseView = useApp((s) => s.caseView);
   const canUndo = useStore(store.temporal, (t) => t.pastStates.length > 0);
   const canRedo = useStore(store.temporal, (t) => t.futureStates.length > 0);
@@ -49,6 +50,7 @@ export function TopBar({ onPrint, onOpen }: { onPrint: () => void; onOpen: (file
       <input
         className="project-name"
         aria-label="Project name"
+        title={name}
         value={name}
         maxLength={200}
         onChange={(e) => actions.renameProject(e.target.value)}

@@ -35,11 +35,12 @@ export function lazyPart<P extends object>(
 }
 
 /**
- * A module off the first screen that is not drawn (an export's writer): loaded on first use or by the
- * warm-up, whichever comes first.
+ * A module off the first screen that is not drawn (an export's writer, the plan's input tools): loaded
+ * on first use or by the warm-up, whichever comes first; `first` puts it at the head of the warm-up.
  */
-export function lazyModule<T>(load: () => Promise<T>): () => Promise<T> {
-  loaders.push(load);
+export function lazyModule<T>(load: () => Promise<T>, order: 'first' | 'in turn' = 'in turn'): () => Promise<T> {
+  if (order === 'first') loaders.unshift(load);
+  else loaders.push(load);
   return () => importOrReload(load);
 }
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import type { Dimension, UnitSystem } from '@mainbrace/solver';
-import { editable, parseTyped } from './quantity.js';
+import { editable, parseTyped } from './typedQuantity.js';
 import { expectClose } from '../testFixtures.js';
 
 /** Exact factors: 1 ft = 0.3048 m, 1 in = 0.0254 m (1959 yard and pound agreement); 1 psi = 6894.757 Pa (NIST SP 811). */

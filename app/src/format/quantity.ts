@@ -1,13 +1,4 @@
-import {
-  formatNumber,
-  formatSi,
-  fromDisplay,
-  KIP,
-  toDisplay,
-  unitSymbol,
-  type Dimension,
-  type UnitSystem,
-} from '@mainbrace/solver';
+import { formatNumber, formatSi, KIP, unitSymbol, type Dimension, type UnitSystem } from '@mainbrace/solver';
 
 /** An SI value as the user reads it: number and unit in the chosen system. */
 export const show = (si: number, dim: Dimension, units: UnitSystem, significant = 3): string =>
@@ -23,57 +14,3 @@ export const columnForce = (si: number, units: UnitSystem): string =>
 
 /** The unit symbol of a dimension in the chosen system. */
 export const unitOf = (dim: Dimension, units: UnitSystem): string => unitSymbol(dim, units);
-
-/** Same value to a part in 10⁹: what a typed number comes back as after conversion to SI and back. */
-const same = (a: number, b: number) => Math.abs(a - b) <= 1e-9 * Math.max(Math.abs(a), Math.abs(b), 1e-12);
-
-/**
- * A value in display units for an input field: the shortest number (up to 6 significant digits) that
- * is the stored value — so "2000" psf typed shows as 2000, not 2000.0000001 — else, for a value typed
- * in the other system, four significant figures (never fewer than the whole number): 4.921 ft, 89.92 psi.
- * Showing never changes what is stored: a field left unchanged is not written back (NumberField).
- */
-export function editable(si: number, dim: Dimension, units: UnitSystem): string {
-  const v = toDisplay(si, dim, units);
-  if (v === 0 || !Number.isFinite(v)) return String(v);
-  for (let digits = 1; digits <= 6; digits++) {
-    const shown = Number(v.toPrecision(digits));
-    if (same(fromDisplay(shown, dim, units), si)) return String(shown);
-  }
-  const whole = Math.floor(Math.log10(Math.abs(v))) + 1;
-  const decimals = Math.min(12, Math.max(0, 4 - whole));
-  return String(Number(v.toFixed(decimals)));
-}
-
-/** Feet and inches as a site engineer writes them: 4'6", 4' 6, 4 ft 6 in, 4 ft. */
-const FEET_INCHES = /^([-+]?\d+(?:\.\d+)?)\s*(?:'|ft)\s*(?:(\d+(?:\.\d+)?)\s*(?:"|in)?)?$/i;
-
-/**
- * Text typed in display units → SI, or a message saying what was expected. Accepts 1,234.5 (commas
- * grouping thousands), a decimal comma where it cannot be a thousands group (1,5 = 1.5), and feet and
- * inches for US lengths. An ambiguous comma is refused rather than guessed.
- */
-export function parseTyped(
-  text: string,
-  dim: Dimension,
-  units: UnitSystem,
-): { ok: true; si: number } | { ok: false; message: string } {
-  const trimmed = text.trim();
-  const expected = `expected a number in ${unitOf(dim, units) || 'plain units'}`;
-  const fi = units === 'us' && (dim === 'length' || dim === 'elevation') ? FEET_INCHES.exec(trimmed) : null;
-  if (fi) {
-    const feet = Number(fi[1]);
-    const inches = Number(fi[2] ?? 0);
-    return { ok: true, si: (feet + (Math.sign(feet || 1) * inches) / 12) * 0.3048 };
-  }
-  let cleaned = trimmed.replace(/\s/g, '');
-  if (/^[-+]?\d{1,3}(,\d{3})+(\.\d*)?$/.test(cleaned)) cleaned = cleaned.replace(/,/g, '');
-  else if (/^[-+]?\d+,\d+$/.test(cleaned) && !/^[-+]?\d+,\d{3}$/.test(cleaned)) cleaned = cleaned.replace(',', '.');
-  else if (cleaned.includes(','))
-    return {
-      ok: false,
-      message: `${expected}; write decimals with a point (1.5), or commas only between thousands (1,500)`,
-    };
-  if (cleaned === '' || !/^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(cleaned)) return { ok: false, message: expected };
-  return { ok: true, si: fromDisplay(Number(cleaned), dim, units) };
-}

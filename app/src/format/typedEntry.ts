@@ -1,5 +1,6 @@
 import { FOOT, INCH, type UnitSystem } from '@mainbrace/solver';
-import { parseTyped, show } from './quantity.js';
+import { show } from './quantity.js';
+import { parseTyped } from './typedQuantity.js';
 
 /**
  * What the user may type while drawing to place the next node exactly:

@@ -1,5 +1,6 @@
-import { CASE_KINDS, type LoadCase } from '@mainbrace/solver';
-import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
+import { memo } from 'react';
+import { CASE_KINDS, type LoadCase, type UnitSystem } from '@mainbrace/solver';
+import { useActions, useApp } from '../state/StoreContext.js';
 import { nextId } from '../state/documentEdits.js';
 import { NumberField } from './NumberField.js';
 import { TestPressureControl } from './TestPressureControl.js';
@@ -13,19 +14,113 @@ const KIND_LABEL: Record<(typeof CASE_KINDS)[number], string> = {
   other: 'Other',
 };
 
+/**
+ * One case's row. Memoised on the case object: an edit of one case replaces that object only, so the
+ * other rows (and their number fields) are not rendered again.
+ */
+const CaseRow = memo(function CaseRow({
+  c,
+  units: u,
+  removable,
+  firstElevation,
+}: {
+  c: LoadCase;
+  units: UnitSystem;
+  removable: boolean;
+  firstElevation: number | undefined;
+}) {
+  const actions = useActions();
+  const set = (id: string, patch: Partial<LoadCase>) => actions.updateCase(id, patch);
+  return (
+    <tr>
+      <td>
+        <input
+          aria-label={`Name of case ${c.id}`}
+          value={c.label ?? ''}
+          placeholder={c.id}
+          maxLength={80}
+          onChange={(e) => set(c.id, { label: e.target.value || undefined })}
+        />
+      </td>
+      <td>
+        <select
+          aria-label={`Kind of case ${c.id}`}
+          value={c.kind ?? 'other'}
+          onChange={(e) => set(c.id, { kind: e.target.value as LoadCase['kind'] })}
+        >
+          {CASE_KINDS.map((k) => (
+            <option key={k} value={k}>
+              {KIND_LABEL[k]}
+            </option>
+          ))}
+        </select>
+      </td>
+      <td>
+        <NumberField
+          label={`Pressure of ${c.label ?? c.id}`}
+          value={c.pressure}
+          dimension="pressure"
+          units={u}
+          min={0}
+          max={10e6}
+          onCommit={(pressure) => set(c.id, { pressure })}
+          testId={`case-pressure-${c.id}`}
+        />
+      </td>
+      <td>
+        {c.datumElevation === undefined ? (
+          <button className="link" onClick={() => set(c.id, { datumElevation: firstElevation ?? 100 })}>
+            at every node — set a datum
+          </button>
+        ) : (
+          <NumberField
+            label={`Datum of ${c.label ?? c.id}`}
+            value={c.datumElevation}
+            dimension="elevation"
+            units={u}
+            onCommit={(datumElevation) => set(c.id, { datumElevation })}
+          />
+        )}
+      </td>
+      <td>
+        <NumberField
+          label={`Flow factor of ${c.label ?? c.id}`}
+          value={c.flowFactor}
+          dimension="ratio"
+          units={u}
+          min={0}
+          max={10}
+          onCommit={(flowFactor) => set(c.id, { flowFactor })}
+        />
+      </td>
+      <td>
+        <button
+          className="link"
+          disabled={!removable}
+          onClick={() => actions.removeCase(c.id)}
+          aria-label={`Remove case ${c.label ?? c.id}`}
+        >
+          Remove
+        </button>
+      </td>
+    </tr>
+  );
+});
+
 /** The load cases: pressure at a datum, flow factor; the live test-pressure control; what governs where. */
 export function CasesPanel() {
-  const project = useApp((s) => s.project);
+  // The cases and the first node's elevation only: a pressure change renders the panel's table again
+  // (one row of it), not the results beside it, which follow the analysis themselves.
+  const loadCases = useApp((s) => s.project.loadCases);
+  const firstElevation = useApp((s) => s.project.nodes[0]?.elevation);
   const actions = useActions();
-  useAnalysis();
   const u = useApp((s) => s.units);
-  const set = (id: string, patch: Partial<LoadCase>) => actions.updateCase(id, patch);
   const add = () => {
     const id = nextId(
       'case',
-      project.loadCases.map((c) => c.id),
+      loadCases.map((c) => c.id),
     );
-    const like = project.loadCases[0]!;
+    const like = loadCases[0]!;
     actions.addCase({
       id,
       label: 'New case',
@@ -51,82 +146,8 @@ export function CasesPanel() {
               </tr>
             </thead>
             <tbody>
-              {project.loadCases.map((c) => (
-                <tr key={c.id}>
-                  <td>
-                    <input
-                      aria-label={`Name of case ${c.id}`}
-                      value={c.label ?? ''}
-                      placeholder={c.id}
-                      maxLength={80}
-                      onChange={(e) => set(c.id, { label: e.target.value || undefined })}
-                    />
-                  </td>
-                  <td>
-                    <select
-                      aria-label={`Kind of case ${c.id}`}
-                      value={c.kind ?? 'other'}
-                      onChange={(e) => set(c.id, { kind: e.target.value as LoadCase['kind'] })}
-                    >
-                      {CASE_KINDS.map((k) => (
-                        <option key={k} value={k}>
-                          {KIND_LABEL[k]}
-                        </option>
-                      ))}
-                    </select>
-                  </td>
-                  <td>
-                    <NumberField
-                      label={`Pressure of ${c.label ?? c.id}`}
-                      value={c.pressure}
-                      dimension="pressure"
-                      units={u}
-                      min={0}
-                      max={10e6}
-                      onCommit={(pressure) => set(c.id, { pressure })}
-                      testId={`case-pressure-${c.id}`}
-                    />
-                  </td>
-                  <td>
-                    {c.datumElevation === undefined ? (
-                      <button
-                        className="link"
-                        onClick={() => set(c.id, { datumElevation: project.nodes[0]?.elevation ?? 100 })}
-                      >
-                        at every node — set a datum
-                      </button>
-                    ) : (
-                      <NumberField
-                        label={`Datum of ${c.label ?? c.id}`}
-                        value={c.datumElevation}
-                        dimension="elevation"
-                        units={u}
-                        onCommit={(datumElevation) => set(c.id, { datumElevation })}
-                      />
-                    )}
-                  </td>
-                  <td>
-                    <NumberField
-                      label={`Flow factor of ${c.label ?? c.id}`}
-                      value={c.flowFactor}
-                      dimension="ratio"
-                      units={u}
-                      min={0}
-                      max={10}
-                      onCommit={(flowFactor) => set(c.id, { flowFactor })}
-                    />
-                  </td>
-                  <td>
-                    <button
-                      className="link"
-                      disabled={project.loadCases.length <= 1}
-                      onClick={() => actions.removeCase(c.id)}
-                      aria-label={`Remove case ${c.label ?? c.id}`}
-                    >
-                      Remove
-                    </button>
-                  </td>
-                </tr>
+              {loadCases.map((c) => (
+                <CaseRow key={c.id} c={c} units={u} removable={loadCases.length > 1} firstElevation={firstElevation} />
               ))}
             </tbody>
           </table>

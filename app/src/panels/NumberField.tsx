@@ -1,6 +1,7 @@
 import { useId, useState } from 'react';
 import type { Dimension, UnitSystem } from '@mainbrace/solver';
-import { editable, parseTyped, show, unitOf } from '../format/quantity.js';
+import { show, unitOf } from '../format/quantity.js';
+import { editable, parseTyped } from '../format/typedQuantity.js';
 
 export interface NumberFieldProps {
   label: string;

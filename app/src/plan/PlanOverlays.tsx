@@ -9,6 +9,7 @@ import { ARROW_PX } from './drawRoute.js';
 import { LINE, MATERIAL_DASH, MATERIAL_NAME, PALETTE } from './palette.js';
 import { FittingGlyph } from './FittingGlyph.js';
 import { LEGEND_KINDS } from './symbols.js';
+import { caseNames } from '../state/caseNames.js';
 import type { Scene } from './planScene.js';
 
 /** A round force below `f` for the arrow legend: 1, 2, 5 × 10ⁿ in kN or kip (the plan's one force unit). */
@@ -42,7 +43,7 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
   const actions = useActions();
   const store = useAppStore();
   const caseView = useApp((s) => s.caseView);
-  const cases = useApp((s) => s.project.loadCases);
+  const cases = useApp((s) => caseNames(s.project.loadCases));
   const shown =
     caseView.kind === 'envelope'
       ? 'worst of all cases'

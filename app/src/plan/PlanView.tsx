@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useMemo, useRef, useState, type PointerEvent as ReactPointerEvent } from 'react';
+import { memo, useCallback, useEffect, useMemo, useRef, useState, type PointerEvent as ReactPointerEvent } from 'react';
 // Konva's core entry and react-konva's core build: the plan draws with 2-D calls inside its own
 // shapes, so none of Konva's ready-made shapes, filters or animations are loaded (issue 16).
 import { Layer, Shape, Stage } from 'react-konva/lib/ReactKonvaCore.js';
@@ -14,13 +14,14 @@ import { drawRestrainedZones } from './drawZones.js';
 import { drawGrid } from './drawGrid.js';
 import { drawHover, drawOverlay } from './drawOverlay.js';
 import { PlanOverlays } from './PlanOverlays.js';
-import { liveChanges } from './liveChange.js';
+import { liveChanges, type LiveChange } from './liveChange.js';
+import { caseNames } from '../state/caseNames.js';
 import { drawLiveChange } from './drawLiveChange.js';
 import { EMPTY_SELECTION } from '../state/slices.js';
 import { drawPicks, drawUnderlay } from './drawUnderlay.js';
 import { useUnderlayImage } from '../state/underlayImage.js';
 import { UnderlayHint } from './UnderlayHint.js';
-import { TypedEntryBox } from './TypedEntryBox.js';
+import { TypedEntryBox } from './TypedEntryPart.js';
 import { DrawHint } from './DrawHint.js';
 import { sendPlanEvent } from '../tools/planBridge.js';
 import type { PlanEvent, PointerKind } from '../tools/planInput.js';
@@ -41,6 +42,24 @@ function sceneKeeper() {
   let last: Scene | null = null;
   return (next: Scene) => (last = reuseEqualParts(last, next));
 }
+
+/**
+ * Hints and the typed-entry box stack down from the top: a hint that wraps on a narrow plan pushes the
+ * box down instead of covering it. They read the store themselves, so a redraw of the plan (every
+ * test-pressure change) does not render them again.
+ */
+const PlanHints = memo(function PlanHints() {
+  return (
+    <div className="plan-top">
+      <DrawHint />
+      <UnderlayHint />
+      <TypedEntryBox />
+    </div>
+  );
+});
+
+/** No changes: the same empty list while no slider gesture is on. */
+const NO_CHANGES: readonly LiveChange[] = [];
 
 const kindOf = (t: string): PointerKind => (t === 'touch' ? 'touch' : t === 'pen' ? 'pen' : 'mouse');
 
@@ -85,7 +104,7 @@ export function PlanView() {
         : null,
     [liveBase, caseView],
   );
-  const changes = useMemo(() => (before ? liveChanges(before.analysis, analysis) : []), [before, analysis]);
+  const changes = useMemo(() => (before ? liveChanges(before.analysis, analysis) : NO_CHANGES), [before, analysis]);
   const box = useRef<HTMLDivElement>(null);
   const coords = useRef<HTMLSpanElement>(null);
 
@@ -171,6 +190,58 @@ export function PlanView() {
     [viewport, width, height, fittings, plainNodes, marks],
   );
 
+  const snappedNow = snapping && draw.phase === 'drawing';
+  // The interactive layer: dragged nodes, the slider's changes, hover, the drawing in progress. Its
+  // drawing is a stable function of what it shows, so a committed pressure change (which changes none
+  // of it) does not clear and redraw this layer's canvas.
+  const names = useApp((s) => caseNames(s.project.loadCases));
+  const hovered = hover.kind === 'none' ? null : drawn;
+  const drawInteractive = useCallback(
+    (_: Context, shape: KonvaShape) => {
+      const ctx = native(shape);
+      if (moving) {
+        drawPipes(ctx, viewport, moving);
+        drawFittings(ctx, viewport, moving, placeTags(ctx, viewport, moving, new LabelSpace(size.width, size.height)));
+      }
+      // The changes since the slider's gesture began, over the marks (their labels avoid each other).
+      if (before)
+        drawLiveChange(
+          ctx,
+          viewport,
+          before.scene.polygons,
+          changes,
+          (id) => names.find((x) => x.id === id)?.label ?? id,
+          new LabelSpace(size.width, size.height),
+        );
+      if (hovered) drawHover(ctx, viewport, hovered, hover, tool === 'draw');
+      drawOverlay(ctx, viewport, draw, selectBox, units, snappedNow);
+      if (underlayPick && underlay)
+        drawPicks(
+          ctx,
+          viewport,
+          underlayPick.map((q) => imageToPlan(underlay, q)),
+        );
+    },
+    [
+      moving,
+      viewport,
+      size.width,
+      size.height,
+      before,
+      changes,
+      names,
+      hovered,
+      hover,
+      tool,
+      draw,
+      selectBox,
+      units,
+      snappedNow,
+      underlayPick,
+      underlay,
+    ],
+  );
+
   const markedDrawn = useRef(false);
   useEffect(() => {
     // A mark for the start-up benchmark: the first time the route is on screen.
@@ -238,7 +309,6 @@ export function PlanView() {
           : hover.kind !== 'none'
             ? 'pointer'
             : 'default';
-  const snappedNow = snapping && draw.phase === 'drawing';
   return (
     <div
       className="plan"
@@ -270,48 +340,11 @@ export function PlanView() {
           <Shape sceneFunc={drawMarks} />
         </Layer>
         <Layer listening={false}>
-          <Shape
-            sceneFunc={(_, shape) => {
-              const ctx = native(shape);
-              if (moving) {
-                drawPipes(ctx, viewport, moving);
-                drawFittings(
-                  ctx,
-                  viewport,
-                  moving,
-                  placeTags(ctx, viewport, moving, new LabelSpace(size.width, size.height)),
-                );
-              }
-              // The changes since the slider's gesture began, over the marks (their labels avoid each other).
-              if (before)
-                drawLiveChange(
-                  ctx,
-                  viewport,
-                  before.scene.polygons,
-                  changes,
-                  (id) => drawn.loadCases.find((x) => x.id === id)?.label ?? id,
-                  new LabelSpace(size.width, size.height),
-                );
-              drawHover(ctx, viewport, drawn, hover, tool === 'draw');
-              drawOverlay(ctx, viewport, draw, selectBox, units, snappedNow);
-              if (underlayPick && underlay)
-                drawPicks(
-                  ctx,
-                  viewport,
-                  underlayPick.map((q) => imageToPlan(underlay, q)),
-                );
-            }}
-          />
+          <Shape sceneFunc={drawInteractive} />
         </Layer>
       </Stage>
       <PlanOverlays scene={scene} coordsRef={coords} />
-      {/* Hints and the typed-entry box stack down from the top: a hint that wraps on a narrow plan pushes
-          the box down instead of covering it. */}
-      <div className="plan-top">
-        <DrawHint />
-        <UnderlayHint />
-        <TypedEntryBox />
-      </div>
+      <PlanHints />
     </div>
   );
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { drawLiveChange } from './drawLiveChange.js';
+import { drawLiveChange, ghostOutlines } from './drawLiveChange.js';
 import { LabelSpace } from './labelSpace.js';
 import type { ScenePolygon } from './planScene.js';
 import type { LiveChange } from './liveChange.js';
@@ -52,16 +52,20 @@ describe('the live change drawn while the test pressure is dragged (level of det
   const view = { scale: 1, left: 0, top: 0 };
 
   it('draws a ghost of 2 px across but not one of 1 px (MIN_POLYGON_PX = 1.5), nor one off the canvas', () => {
+    const outlines = ghostOutlines([square(50, -50, 2), square(80, -50, 1), square(5000, -50, 2)], view, 400, 300);
+    expect(outlines).toHaveLength(1);
+    // the 2 m square at plan (50, −50), 1 px per metre: screen (50, 50) to (52, 48)
+    expect(outlines[0]![0]).toEqual({ sx: 50, sy: 50 });
+    expect(outlines[0]![2]).toEqual({ sx: 52, sy: 48 });
+  });
+
+  it('strokes the ghosts as one dashed path, and none when no ghost is large enough', () => {
     const r = recorder();
-    drawLiveChange(
-      r.ctx,
-      view,
-      [square(50, -50, 2), square(80, -50, 1), square(5000, -50, 2)],
-      [],
-      (id) => id,
-      new LabelSpace(400, 300),
-    );
+    drawLiveChange(r.ctx, view, [square(50, -50, 2), square(60, -50, 2)], [], (id) => id, new LabelSpace(400, 300));
     expect(r.strokes()).toBe(1);
+    const none = recorder();
+    drawLiveChange(none.ctx, view, [square(80, -50, 1)], [], (id) => id, new LabelSpace(400, 300));
+    expect(none.strokes()).toBe(0);
   });
 
   it('labels every change, moving a label that would overprint another to a free corner; one per cell', () => {

@@ -1,4 +1,4 @@
-import { toScreen, type Viewport } from '../state/viewport.js';
+import { toScreen, type ScreenPoint, type Viewport } from '../state/viewport.js';
 import { label } from './drawRoute.js';
 import { PALETTE, TYPE } from './palette.js';
 import type { ScenePolygon } from './planScene.js';
@@ -24,6 +24,62 @@ const SPOTS: readonly (readonly [number, number])[] = [
 ];
 
 /**
+ * The screen outline of every ghost large enough to see and on screen (by the plan's level of detail:
+ * none under MIN_POLYGON_PX across, none off the canvas); trench pads have no ghost.
+ */
+export function ghostOutlines(
+  ghosts: readonly ScenePolygon[],
+  v: Viewport,
+  width: number,
+  height: number,
+): ScreenPoint[][] {
+  const out: ScreenPoint[][] = [];
+  for (const g of ghosts) {
+    if (g.kind === 'pad') continue;
+    let x0 = Infinity,
+      x1 = -Infinity,
+      y0 = Infinity,
+      y1 = -Infinity;
+    const s = g.points.map((p) => toScreen(v, p));
+    for (const p of s) {
+      x0 = Math.min(x0, p.sx);
+      x1 = Math.max(x1, p.sx);
+      y0 = Math.min(y0, p.sy);
+      y1 = Math.max(y1, p.sy);
+    }
+    if (Math.max(x1 - x0, y1 - y0) < MIN_POLYGON_PX || !segmentOnScreen(x0, y0, x1, y1, width, height)) continue;
+    out.push(s);
+  }
+  return out;
+}
+
+/** The ghosts' outlines as one path, per ghost list (fixed for a gesture: the blocks before it) and view. */
+const ghostPaths = new WeakMap<
+  readonly ScenePolygon[],
+  { v: Viewport; width: number; height: number; path: Path2D | null }
+>();
+
+/**
+ * The slider redraws the overlay at every step while the ghosts and the view stay the same: their path
+ * is made once per gesture and view instead of projecting every block again at each step.
+ */
+function ghostPath(ghosts: readonly ScenePolygon[], v: Viewport, width: number, height: number): Path2D | null {
+  const known = ghostPaths.get(ghosts);
+  if (known && known.v === v && known.width === width && known.height === height) return known.path;
+  const outlines = ghostOutlines(ghosts, v, width, height);
+  let path: Path2D | null = null;
+  if (outlines.length > 0) {
+    path = new Path2D();
+    for (const s of outlines) {
+      s.forEach((p, i) => (i === 0 ? path!.moveTo(p.sx, p.sy) : path!.lineTo(p.sx, p.sy)));
+      path.closePath();
+    }
+  }
+  ghostPaths.set(ghosts, { v, width, height, path });
+  return path;
+}
+
+/**
  * While the test pressure is dragged: each block's footprint from before the drag as a dashed ghost,
  * its growth as a percentage, and a mark where another case now governs (words, not colour alone).
  * By the plan's level of detail (levelOfDetail.ts): a ghost under MIN_POLYGON_PX or off screen is not
@@ -44,25 +100,8 @@ export function drawLiveChange(
   ctx.strokeStyle = PALETTE.ink;
   ctx.lineWidth = 1.2;
   ctx.setLineDash([4, 3]);
-  for (const g of ghosts) {
-    if (g.kind === 'pad') continue;
-    let x0 = Infinity,
-      x1 = -Infinity,
-      y0 = Infinity,
-      y1 = -Infinity;
-    const s = g.points.map((p) => toScreen(v, p));
-    for (const p of s) {
-      x0 = Math.min(x0, p.sx);
-      x1 = Math.max(x1, p.sx);
-      y0 = Math.min(y0, p.sy);
-      y1 = Math.max(y1, p.sy);
-    }
-    if (Math.max(x1 - x0, y1 - y0) < MIN_POLYGON_PX || !segmentOnScreen(x0, y0, x1, y1, width, height)) continue;
-    ctx.beginPath();
-    s.forEach((p, i) => (i === 0 ? ctx.moveTo(p.sx, p.sy) : ctx.lineTo(p.sx, p.sy)));
-    ctx.closePath();
-    ctx.stroke();
-  }
+  const path = ghostPath(ghosts, v, width, height);
+  if (path) ctx.stroke(path);
   ctx.setLineDash([]);
   const cells = new Occupancy(SYMBOL_CELL_PX);
   for (const c of changes) {

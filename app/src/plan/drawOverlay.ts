@@ -1,6 +1,7 @@
 import { formatSi, type Project, type UnitSystem } from '@mainbrace/solver';
 import type { Hit } from '../tools/hit.js';
-import { rubberBand, type DrawState } from '../tools/drawTool.js';
+import type { DrawState } from '../tools/drawTool.js';
+import { rubberBand } from '../tools/rubberBand.js';
 import type { PlanPoint } from '../state/documentEdits.js';
 import { toScreen, type Viewport } from '../state/viewport.js';
 import { label } from './drawRoute.js';

@@ -4,6 +4,7 @@ import { gridSpacing } from '../state/viewport.js';
 import { useApp } from '../state/StoreContext.js';
 import { LABEL_FACE, PALETTE } from '../plan/palette.js';
 import { FittingGlyph } from '../plan/FittingGlyph.js';
+import { placeKeyMarks } from './keyPlanMarks.js';
 
 const W = 420;
 const H = 230;
@@ -82,46 +83,65 @@ export function KeyPlan({
   const bar = gridSpacing(scale, 80);
   // Other fittings as dots while they are few enough to read; on a long route the line alone.
   const dots = !marks || analysis.fittings.length <= 200;
+  const strong = marks ? analysis.fittings.filter((f) => marks.has(f.mark)) : analysis.fittings;
+  // Tie-ins first: they bound the route, and a crew finds its way from them.
+  const labels = placeKeyMarks(
+    [
+      ...tieIns.map((n) => ({ key: n.id, text: analysis.marks.get(n.id) ?? '', x: sx(n.x), y: sy(n.y) })),
+      ...strong.map((f) => ({ key: f.node.id, text: f.mark, x: sx(f.node.x), y: sy(f.node.y) })),
+    ],
+    W,
+    H,
+    MARK,
+  );
   return (
     <figure className="key-plan">
       <svg viewBox={`0 0 ${W} ${H}`} role="img" aria-label="Key plan of the route with fitting marks">
         <rect x="0.5" y="0.5" width={W - 1} height={H - 1} fill="none" stroke={PALETTE.gridMajor} />
         <path d={route} fill="none" stroke={PALETTE.pipe} strokeWidth={1.6} strokeLinecap="round" />
-        {tieIns.map((n) => (
-          <g key={n.id}>
-            <FittingGlyph kind="tie-in" x={sx(n.x)} y={sy(n.y)} scale={0.6} />
-            <text x={sx(n.x) + 5} y={sy(n.y) - 4} fontSize={MARK} fontFamily={LABEL_FACE} fontWeight="700">
-              {analysis.marks.get(n.id)}
-            </text>
-          </g>
-        ))}
-        {(marks && !dots ? analysis.fittings.filter((f) => marks.has(f.mark)) : analysis.fittings).map((f, i) =>
+        {(marks && !dots ? strong : analysis.fittings).map((f) =>
           marks && !marks.has(f.mark) ? (
             dots ? (
               <circle key={f.node.id} cx={sx(f.node.x)} cy={sy(f.node.y)} r={1.6} fill={PALETTE.gridLabel} />
             ) : null
           ) : (
-            <g key={f.node.id}>
-              <FittingGlyph
-                kind={f.geometry.kind}
-                x={sx(f.node.x)}
-                y={sy(f.node.y)}
-                angle={f.legs[0] ? (Math.atan2(-f.legs[0].direction[1], f.legs[0].direction[0]) * 180) / Math.PI : 0}
-                scale={0.6}
-              />
-              <text
-                x={sx(f.node.x) + 5}
-                y={sy(f.node.y) + (i % 2 ? 14 : -5)}
-                fontSize={MARK}
-                fontFamily={LABEL_FACE}
-                fontWeight="700"
-                fill={PALETTE.ink}
-              >
-                {f.mark}
-              </text>
-            </g>
+            <FittingGlyph
+              key={f.node.id}
+              kind={f.geometry.kind}
+              x={sx(f.node.x)}
+              y={sy(f.node.y)}
+              angle={f.legs[0] ? (Math.atan2(-f.legs[0].direction[1], f.legs[0].direction[0]) * 180) / Math.PI : 0}
+              scale={0.6}
+            />
           ),
         )}
+        {tieIns.map((n) => (
+          <FittingGlyph key={n.id} kind="tie-in" x={sx(n.x)} y={sy(n.y)} scale={0.6} />
+        ))}
+        {labels.map((m) => (
+          <g key={m.key}>
+            {m.leader && (
+              <line
+                x1={m.x}
+                y1={m.y}
+                x2={Math.min(Math.max(m.x, m.box.x), m.box.x + m.box.w)}
+                y2={Math.min(Math.max(m.y, m.box.y), m.box.y + m.box.h)}
+                stroke={PALETTE.ink}
+                strokeWidth={0.6}
+              />
+            )}
+            <text
+              x={m.box.x}
+              y={m.baseline}
+              fontSize={MARK}
+              fontFamily={LABEL_FACE}
+              fontWeight="700"
+              fill={PALETTE.ink}
+            >
+              {m.text}
+            </text>
+          </g>
+        ))}
         <g transform={`translate(${W - 18}, 10)`}>
           <path d="M0 0 L5 14 L0 11 L-5 14 Z" fill={PALETTE.ink} />
           <text x="0" y="25" textAnchor="middle" fontSize={MARK} fontWeight="700">

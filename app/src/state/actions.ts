@@ -25,7 +25,7 @@ import type { Viewport } from './viewport.js';
 import { setPlanLength } from './legLength.js';
 import { routePieces } from './connectivity.js';
 import type { DrawState } from '../tools/drawTool.js';
-import { fittedView, revealFitting as planCommandReveal, showFitting } from '../tools/planCommands.js';
+import { fittedView, revealFitting as planCommandReveal, showFitting } from '../tools/planView.js';
 import { planInputOf } from '../tools/planBridge.js';
 import { editProblems } from './editCheck.js';
 import { checksReady, loadChecks } from './checks.js';

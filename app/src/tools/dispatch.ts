@@ -3,7 +3,8 @@ import { panBy, zoomAt } from '../state/viewport.js';
 import { drawClick, drawHover, drawWith } from './drawPointer.js';
 import { endPan, movePan, startPan } from './panGesture.js';
 import { movePinch, startPinch } from './pinchGesture.js';
-import { fittedView, planCommand } from './planCommands.js';
+import { planCommand } from './planCommands.js';
+import { resized } from './planView.js';
 import { distancePx, hitAt, touchLike } from './planGeometry.js';
 import { selectDown, selectMove, selectUp } from './selectPointer.js';
 import { pickUnderlayPoint, picking } from './calibratePick.js';
@@ -12,7 +13,6 @@ import {
   DRAG_PX,
   HIT_PX,
   IDLE_GESTURE,
-  LEGEND_MIN_CANVAS_PX,
   type PlanDerived,
   type PlanEvent,
   type PlanInput,
@@ -48,17 +48,8 @@ function withoutTouch(s: PlanInput, id: number): PlanInput {
 export function dispatch(s: PlanInput, e: PlanEvent, derived: PlanDerived = NO_DERIVED): DispatchResult {
   const done = (state: PlanInput, intents: PlanIntent[] = []): DispatchResult => ({ state, intents, handled: true });
   switch (e.type) {
-    case 'resize': {
-      const first = s.canvas.width === 0 || s.canvas.height === 0;
-      const next = {
-        ...s,
-        canvas: { width: e.width, height: e.height },
-        // A narrow plan starts with the legend closed (one tap opens it).
-        legendOpen: first ? s.legendOpen && e.width >= LEGEND_MIN_CANVAS_PX : s.legendOpen,
-      };
-      // The first size the plan learns is when it can first show the whole route.
-      return done(first ? { ...next, viewport: fittedView(next) } : next);
-    }
+    case 'resize':
+      return done(resized(s, e.width, e.height));
     case 'pointerDown': {
       let t = s;
       if (touchLike(e.pointer)) {

@@ -1,6 +1,9 @@
 import type { PlanPoint, RouteEnd } from '../state/documentEdits.js';
 import type { Hit } from './hit.js';
-import { signedTurn, snapSegment } from './snapping.js';
+import { snapSegment } from './snapping.js';
+import { lastPoint, previousDirection } from './rubberBand.js';
+
+export { rubberBand } from './rubberBand.js';
 
 /** The draw tool: click to place vertices; a run may start and end on nodes or on pipes. */
 export type DrawState =
@@ -34,18 +37,6 @@ export interface DrawOutcome {
 }
 
 const IDLE: DrawState = { phase: 'idle' };
-
-function lastPoint(s: Extract<DrawState, { phase: 'drawing' }>): PlanPoint {
-  return s.vertices.length ? s.vertices[s.vertices.length - 1]! : s.startPoint;
-}
-
-function previousDirection(s: Extract<DrawState, { phase: 'drawing' }>): PlanPoint | null {
-  const pts = [s.startPoint, ...s.vertices];
-  if (pts.length < 2) return null;
-  const a = pts[pts.length - 2]!;
-  const b = pts[pts.length - 1]!;
-  return { x: b.x - a.x, y: b.y - a.y };
-}
 
 /** Where the pointer would place the next vertex: on the hit node or pipe, else snapped open ground. */
 function target(s: Extract<DrawState, { phase: 'drawing' }>, at: PlanPoint, hit: Hit, ctx: DrawContext): PlanPoint {
@@ -90,17 +81,4 @@ export function drawStep(state: DrawState, event: DrawEvent, ctx: DrawContext): 
       if (state.vertices.length === 0) return { state: IDLE };
       return { state: { ...state, vertices: state.vertices.slice(0, -1) } };
   }
-}
-
-/** The rubber-band segment while drawing, with its live length (m) and turn from the previous segment (°). */
-export function rubberBand(
-  state: DrawState,
-): { from: PlanPoint; to: PlanPoint; length: number; deflection: number | null } | null {
-  if (state.phase !== 'drawing' || !state.cursor) return null;
-  const from = lastPoint(state);
-  const to = state.cursor;
-  const d = { x: to.x - from.x, y: to.y - from.y };
-  const prev = previousDirection(state);
-  const length = Math.hypot(d.x, d.y);
-  return { from, to, length, deflection: prev && length > 0 ? Math.abs(signedTurn(prev, d)) : null };
 }

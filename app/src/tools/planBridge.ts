@@ -1,8 +1,11 @@
 import { analyse, scheduleOf } from '@mainbrace/solver';
 import type { AppState, AppStore } from '../state/store.js';
 import type { Actions } from '../state/actions.js';
-import { dispatch, type DispatchResult } from './dispatch.js';
+import type { dispatch as Dispatch, DispatchResult } from './dispatch.js';
 import type { PlanDerived, PlanEvent, PlanInput, PlanIntent } from './planInput.js';
+import { resized } from './planView.js';
+import { actionForKey } from '../chrome/actionTable.js';
+import { lazyModule } from '../chrome/lazyPart.js';
 
 /** The dispatcher's view of the app state. */
 export function planInputOf(s: AppState): PlanInput {
@@ -78,6 +81,42 @@ export function applyOutcome(
   }
 }
 
+// The input tools (the dispatcher and the tools it runs: select, draw, pan, typed entry) are not needed
+// to draw the first screen, so they load on the first pointer or key event, or in the warm-up after the
+// first draw, whichever comes first (issue 16: about 5 kB gzipped off the first load). Events that come
+// while they load wait in order and are replayed through them, so nothing the user did is lost.
+let dispatchNow: typeof Dispatch | null = null;
+type Waiting = { store: AppStore; actions: Actions; event: PlanEvent; handlers?: Partial<IntentHandlers> };
+const waiting: Waiting[] = [];
+
+function run(w: Waiting, dispatch: typeof Dispatch): DispatchResult {
+  const s = w.store.getState();
+  const out = dispatch(planInputOf(s), w.event, derivedOf(s));
+  applyOutcome(w.store, w.actions, out, w.handlers);
+  return out;
+}
+
+/** Loads the input tools (once) and replays what waited for them. */
+export const loadPlanInput = lazyModule(
+  () =>
+    import('./dispatch.js').then((m) => {
+      dispatchNow = m.dispatch;
+      for (const w of waiting.splice(0)) run(w, m.dispatch);
+    }),
+  'first',
+);
+
+/** What an event that waits for the input tools is taken to have done, until it is replayed. */
+function waited(s: PlanInput, event: PlanEvent): DispatchResult {
+  // A key the tools will use must not also act on the page (Save must not open the browser's dialog).
+  if (event.type !== 'key') return { state: s, intents: [], handled: true };
+  const action = actionForKey(event);
+  const handled =
+    (event.key === ' ' && !event.ctrl && !event.meta) ||
+    (action !== undefined && (action.scope !== 'plan' || event.planFocused));
+  return { state: s, intents: [], handled };
+}
+
 /** Sends one event through the dispatcher and applies the outcome. */
 export function sendPlanEvent(
   store: AppStore,
@@ -85,8 +124,20 @@ export function sendPlanEvent(
   event: PlanEvent,
   handlers?: Partial<IntentHandlers>,
 ): DispatchResult {
+  if (dispatchNow) return run({ store, actions, event, handlers }, dispatchNow);
   const s = store.getState();
-  const out = dispatch(planInputOf(s), event, derivedOf(s));
-  applyOutcome(store, actions, out, handlers);
-  return out;
+  // The plan's size is what its first draw needs: taken at once (after anything still waiting).
+  if (event.type === 'resize' && waiting.length === 0) {
+    const state = resized(planInputOf(s), event.width, event.height);
+    applyOutcome(store, actions, { state, intents: [], handled: true });
+    return { state, intents: [], handled: true };
+  }
+  waiting.push({ store, actions, event, handlers });
+  void loadPlanInput().catch(() => undefined); // a failure is tried again at the next event
+  return waited(planInputOf(s), event);
+}
+
+/** Makes the input tools present at once (tests that drive the plan synchronously). */
+export function installPlanInput(dispatch: typeof Dispatch) {
+  dispatchNow = dispatch;
 }

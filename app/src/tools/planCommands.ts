@@ -1,8 +1,8 @@
-import { imageToPlan } from '@mainbrace/solver';
 import type { ActionName } from '../chrome/actionTable.js';
-import { centreOn, fitView, panBy, toScreen, zoomAt } from '../state/viewport.js';
+import { panBy, zoomAt } from '../state/viewport.js';
 import { EMPTY_SELECTION, type ToolName } from '../state/slices.js';
 import { drawWith } from './drawPointer.js';
+import { fittedView, reveal } from './planView.js';
 import {
   fitInsetRight,
   IDLE_GESTURE,
@@ -15,25 +15,6 @@ import {
 
 type Outcome = { state: PlanInput; intents: PlanIntent[] };
 
-/** The view that shows the whole route (or, with no route yet, the site plan), leaving the legend's strip clear. */
-export function fittedView(s: Pick<PlanInput, 'project' | 'canvas' | 'legendOpen'>) {
-  const width = s.canvas.width - fitInsetRight(s);
-  // A small plan cannot spare 100 px of margin a side: keep room for arrows in proportion.
-  const margin = Math.min(100, 0.14 * Math.min(width, s.canvas.height));
-  // With no route yet, a site plan to trace is what there is to see: fit its corners.
-  const u = s.project.underlay;
-  const points =
-    s.project.nodes.length === 0 && u
-      ? [
-          { u: 0, v: 0 },
-          { u: u.width, v: 0 },
-          { u: 0, v: u.height },
-          { u: u.width, v: u.height },
-        ].map((q) => imageToPlan(u, q))
-      : s.project.nodes;
-  return fitView(points, width, s.canvas.height, margin);
-}
-
 const setTool = (s: PlanInput, tool: ToolName): PlanInput => ({
   ...s,
   tool,
@@ -41,20 +22,6 @@ const setTool = (s: PlanInput, tool: ToolName): PlanInput => ({
   gesture: IDLE_GESTURE,
   hover: { kind: 'none' },
 });
-
-/** Brings a node into view (keeping the scale) when it is off screen or under the edge. */
-function reveal(s: PlanInput, id: string): PlanInput {
-  const n = s.project.nodes.find((x) => x.id === id);
-  if (!n) return s;
-  const p = toScreen(s.viewport, n);
-  const margin = 40;
-  const inside =
-    p.sx >= margin &&
-    p.sy >= margin &&
-    p.sx <= s.canvas.width - fitInsetRight(s) - margin &&
-    p.sy <= s.canvas.height - margin;
-  return inside ? s : { ...s, viewport: centreOn(s.viewport, n, s.canvas.width - fitInsetRight(s), s.canvas.height) };
-}
 
 /** Tab and Shift+Tab: the next or previous fitting in chainage order, selected and brought into view. */
 function walk(s: PlanInput, step: 1 | -1, derived: PlanDerived): PlanInput {
@@ -118,21 +85,4 @@ export function planCommand(s: PlanInput, name: ActionName, derived: PlanDerived
     default:
       return { state: s, intents: [{ kind: 'command', name }] };
   }
-}
-
-/** Selects a fitting, bringing it into view only when it is off screen (a row of the schedule). */
-export const revealFitting = (s: PlanInput, id: string): PlanInput =>
-  reveal({ ...s, selection: { nodes: new Set([id]), pipes: new Set() } }, id);
-
-/** Selects a fitting and brings it into view (the schedule's and details' "zoom to fitting"). */
-export function showFitting(s: PlanInput, id: string): PlanInput {
-  const n = s.project.nodes.find((x) => x.id === id);
-  if (!n) return s;
-  // Close enough to read the fitting's block and arrow: at least 4 px per metre.
-  const scale = Math.max(s.viewport.scale, 4);
-  return {
-    ...s,
-    selection: { nodes: new Set([id]), pipes: new Set() },
-    viewport: centreOn({ ...s.viewport, scale }, n, s.canvas.width - fitInsetRight(s), s.canvas.height),
-  };
 }

@@ -4,7 +4,8 @@ import { createActions, type Actions } from '../state/actions.js';
 import { toScreen, type ScreenPoint } from '../state/viewport.js';
 import type { PipeSpec } from '../state/documentEdits.js';
 import type { ActionName } from '../chrome/actionTable.js';
-import { sendPlanEvent, type IntentHandlers } from './planBridge.js';
+import { installPlanInput, sendPlanEvent, type IntentHandlers } from './planBridge.js';
+import { dispatch } from './dispatch.js';
 import type { PlanEvent, PointerKind } from './planInput.js';
 
 /** DN200 ductile iron, OD 222 mm (EN 545 table, as the app's catalogue has it), for drawn runs. */
@@ -25,6 +26,8 @@ type Where = { x: number; y: number } | { px: ScreenPoint };
  * ({x, y}) — turned into pixels through the current view — or in pixels ({px}).
  */
 export function planHarness(doc: Project, o: HarnessOptions = {}) {
+  // headless and synchronous: the input tools are here from the start (the app loads them on first use)
+  installPlanInput(dispatch);
   const store: AppStore = createAppStore(doc, HARNESS_PIPE);
   const actions: Actions = createActions(store);
   store.setState({ legendOpen: o.legend ?? false });

@@ -127,3 +127,4 @@ export {
 } from './pressure/surge.js';
 export { proposeTestPressure, type TestProposal, type TestRule, type TestCriterion } from './pressure/testPressure.js';
 export * from './geometry/similarity.js';
+export * from './geometry/calibration.js';

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { fromDistance, fromTwoPoints, imageToPlan, planDistance, planToImage, type Placement } from './similarity.js';
+import { imageToPlan, planToImage, type Placement } from './similarity.js';
+import { fromDistance, fromTwoPoints, planDistance } from './calibration.js';
 
 // Every expected value below is worked by hand in the comment beside it, from
 // plan = (x, y) + s·R(θ)·(u, −v) (similarity.ts).

@@ -1,6 +1,7 @@
 import { projectSchema } from './project.js';
 import type { Project } from './projectSchema.js';
-import { plainErrors, problemsFromIssues, type Problem } from './problems.js';
+import type { Problem } from './problems.js';
+import { plainErrors, problemsFromIssues } from './schemaProblems.js';
 import { tinyNumberProblems } from './tinyNumbers.js';
 
 export type ParseResult = { ok: true; project: Project } | { ok: false; problems: Problem[] };

@@ -2,7 +2,8 @@ import type { z } from 'zod';
 import { projectShape, designSchema, loadCaseSchema, nodeSchema, pipeSchema, soilSchema } from './projectSchema.js';
 import type { Project } from './projectSchema.js';
 import { crossCheck } from './crossChecks.js';
-import { pathText, plainErrors, problemsFromIssues, type Problem } from './problems.js';
+import { pathText, type Problem } from './problems.js';
+import { plainErrors, problemsFromIssues } from './schemaProblems.js';
 import { tinyNumberProblems } from './tinyNumbers.js';
 
 /** The list items of a project, each with its own schema. */

@@ -1,5 +1,3 @@
-import type { z } from 'zod';
-
 /** One reason a file was refused: where (`pipes[1].outsideDiameter`) and what was expected. */
 export interface Problem {
   path: string;
@@ -15,55 +13,6 @@ export function pathText(path: readonly PropertyKey[]): string {
     if (typeof key === 'number') out += `[${key}]`;
     else if (typeof key === 'string' && /^[A-Za-z_$][\w$]*$/.test(key)) out += out ? `.${key}` : key;
     else out += `[${JSON.stringify(String(key))}]`;
-  }
-  return out;
-}
-
-function describe(value: unknown): string {
-  if (value === undefined) return 'nothing (the field is missing)';
-  if (value === null) return 'null';
-  if (Array.isArray(value)) return 'a list';
-  if (typeof value === 'number' && !Number.isFinite(value)) return String(value);
-  if (typeof value === 'string')
-    return `the text ${JSON.stringify(value.length > 30 ? value.slice(0, 30) + '…' : value)}`;
-  return `a ${typeof value}`;
-}
-
-const expectedWords: Record<string, string> = {
-  number: 'a number',
-  string: 'text',
-  boolean: 'true or false',
-  object: 'an object',
-  array: 'a list',
-};
-
-/** zod error map: every message says what was expected, in plain words. */
-export const plainErrors: z.core.$ZodErrorMap = (issue) => {
-  switch (issue.code) {
-    case 'invalid_type': {
-      const expected = expectedWords[issue.expected] ?? issue.expected;
-      return `expected ${expected}, got ${describe(issue.input)}`;
-    }
-    case 'invalid_value':
-      return `must be one of ${issue.values.map((v) => JSON.stringify(v)).join(', ')}; got ${describe(issue.input)}`;
-    case 'unrecognized_keys':
-      return `unknown field${issue.keys.length > 1 ? 's' : ''} ${issue.keys.map((k) => `"${k}"`).join(', ')} (not part of the project format)`;
-    default:
-      return undefined;
-  }
-};
-
-/** zod issues → problems; unknown keys become one problem per field so each path is exact. */
-export function problemsFromIssues(issues: readonly z.core.$ZodIssue[]): Problem[] {
-  const out: Problem[] = [];
-  for (const issue of issues) {
-    if (issue.code === 'unrecognized_keys') {
-      for (const key of issue.keys) {
-        out.push({ path: pathText([...issue.path, key]), message: 'unknown field (not part of the project format)' });
-      }
-    } else {
-      out.push({ path: pathText(issue.path) || '(whole file)', message: issue.message });
-    }
   }
   return out;
 }
