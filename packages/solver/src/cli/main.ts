@@ -17,6 +17,7 @@ const io = {
   interactive: process.stdout.isTTY === true,
   readFile: (path: string, maxBytes: number) => readLimited(resolve(base, path), maxBytes),
   out: (text: string) => void (readerGone || process.stdout.write(text)),
+  outBytes: (bytes: Uint8Array) => void (readerGone || process.stdout.write(bytes)),
   err: (text: string) => void process.stderr.write(text),
 };
 // Import and export (and the CSV, projection and schema libraries they read with) load only for those

@@ -8,7 +8,7 @@ import { analyse } from '../analysis/analyse.js';
 import { legsByNode } from '../network/legs.js';
 import { fittingGeometry, needsRestraint } from '../network/fittingKind.js';
 import { scheduleOf } from '../schedule/scheduleRows.js';
-import { writeScheduleJson } from '../schedule/scheduleJson.js';
+import { writeScheduleJson, writeScheduleJsonBytes } from '../schedule/scheduleJson.js';
 import { scheduleView } from '../schedule/scheduleView.js';
 import { scheduleCsv } from '../schedule/scheduleCsv.js';
 import { scheduleTable } from '../schedule/scheduleTable.js';
@@ -17,7 +17,7 @@ import { takeOffCsv, takeOffTable } from '../schedule/quantitiesText.js';
 import { positionColumns } from '../schedule/stations.js';
 import type { UnitSystem } from '../units/conversions.js';
 import { DEFAULT_MAX_BYTES } from './readLimited.js';
-import { escapeControls, terminalSafe } from './terminalText.js';
+import { escapeControls, terminalActsOn, terminalSafe } from './terminalText.js';
 import { escapedView } from './escapedView.js';
 
 /** What the command line needs from the outside world, so that it runs in tests without a process. */
@@ -30,6 +30,11 @@ export interface CliIo {
    */
   readFile: (path: string, maxBytes: number) => Uint8Array;
   out: (text: string) => void;
+  /**
+   * bytes of UTF-8 to the same output, when the process can take them: the compact JSON schedule is
+   * written as bytes (guarded as it is made), without strings in between
+   */
+  outBytes?: (bytes: Uint8Array) => void;
   err: (text: string) => void;
 }
 
@@ -215,9 +220,13 @@ export async function runCli(argv: readonly string[], rawIo: CliIo): Promise<num
     const pretty = io.interactive === true || args.options.has('pretty');
     // What the file already says (positions, labels, soils, pipe sizes) is left out unless --full.
     const full = args.options.has('full');
-    if (format === 'json')
-      // Streamed in pieces (some 13 MB at 10,000 fittings), each through the terminal guard: the same
-      // text as guarding the whole, since JSON has no raw CR or other C0 control for a cut to split.
+    if (format === 'json' && !pretty && rawIo.outBytes)
+      // Bytes made in pieces (some 13 MB at 10,000 fittings), guarded character by character as they are
+      // made: the same bytes as guarding the whole text, since only a string's characters can need it.
+      writeScheduleJsonBytes(scheduleOf(analysis), rawIo.outBytes, { echo: full, escape: terminalActsOn });
+    else if (format === 'json')
+      // Streamed in pieces, each through the terminal guard: the same text as guarding the whole, since
+      // JSON has no raw CR or other C0 control for a cut to split.
       writeScheduleJson(scheduleOf(analysis), io.out, { pretty, echo: full });
     else if (format === 'csv') io.out(scheduleCsv(escapedView(scheduleView(analysis, units))));
     else if (format === 'table')

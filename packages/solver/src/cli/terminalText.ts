@@ -21,6 +21,20 @@ const MAY_NEED_ESCAPE =
   // eslint-disable-next-line no-control-regex -- matching control characters is the point
   /[\u0000-\u0009\u000b-\u001f\u007f-\u009f\u061c\u200e\u200f\u2028\u2029\u202a-\u202e\u2066-\u2069]/;
 
+/**
+ * The characters of MAY_NEED_ESCAPE that JSON text can hold as they are (U+007F and above; JSON escapes
+ * every C0 control in a string), as a test of one code: the JSON schedule's byte writer asks it of each
+ * such character, so that its output is what terminalSafe makes of the text (a test holds the two to
+ * the same set).
+ */
+export const terminalActsOn = (c: number): boolean =>
+  (c >= 0x7f && c <= 0x9f) ||
+  c === 0x061c ||
+  c === 0x200e ||
+  c === 0x200f ||
+  (c >= 0x2028 && c <= 0x202e) ||
+  (c >= 0x2066 && c <= 0x2069);
+
 /** As JSON writes it (`\u001b`): visible, and inside JSON output a string still means the same. */
 const escaped = (c: string) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`;
 

@@ -2,10 +2,10 @@ import type { Vec3 } from '../geometry/vector.js';
 import { DIAGNOSTIC_CODES } from '../diagnostics/codes.js';
 import type { Diagnostic } from '../diagnostics/diagnostic.js';
 import type { Dimension } from '../units/conversions.js';
-import { ceilTo, roundTo } from '../units/format.js';
+import { roundTo } from '../units/format.js';
 import type { Schedule, ScheduleBlock, ScheduleFitting } from './scheduleRows.js';
 import { JsonIndenter } from './jsonIndent.js';
-import { decimalText } from './jsonNumber.js';
+import { ascii, JsonBytes } from './jsonBytes.js';
 
 /**
  * Decimals kept in the JSON schedule per kind of quantity, SI (docs/project-format.md): millimetres,
@@ -56,92 +56,279 @@ export interface ScheduleJsonOptions {
 }
 
 export interface ScheduleJsonWriting extends ScheduleJsonOptions {
-  /** characters gathered before each call of `write` (default 64 Ki) */
+  /** bytes of UTF-8 gathered before each call of `write` (default 64 Ki) */
   chunk?: number;
 }
 
-// The number texts, as JSON.stringify writes a number: finite ones as String does (-0 as 0), others null.
-const num = (v: number): string => (Number.isFinite(v) ? String(v) : 'null');
-
 const D = JSON_DECIMALS;
-const round = (v: number, decimals: number) => decimalText(roundTo(v, decimals), decimals);
-/** built dimensions and volumes: up, never down */
-const up = (v: number, decimals: number) => decimalText(ceilTo(v, decimals), decimals);
-const roundOrNull = (v: number | null, decimals: number) => (v === null ? 'null' : round(v, decimals));
-const vec = (v: Vec3, decimals: number) =>
-  `[${round(v[0], decimals)},${round(v[1], decimals)},${round(v[2], decimals)}]`;
 
-/** A string value as a JSON literal. */
-const q = (text: string): string => JSON.stringify(text);
+/** Character codes of the JSON punctuation written on its own. */
+const COMMA = 44;
+const COLON = 58;
+const OPEN_BRACKET = 91;
+const CLOSE_BRACKET = 93;
+const CLOSE_BRACE = 125;
 
-const orNull = (text: string | null) => (text === null ? 'null' : q(text));
+/**
+ * The schedule's keys with the punctuation around them, and its other fixed texts, as bytes made once:
+ * the writer copies each into its buffer (at 10,000 fittings, some 1.5 million of them).
+ */
+const K = {
+  null: ascii('null'),
+  openBearingArea: ascii('{"bearingArea":'),
+  faceWidth: ascii(',"faceWidth":'),
+  faceHeight: ascii(',"faceHeight":'),
+  concreteVolume: ascii(',"concreteVolume":'),
+  depth: ascii(',"depth":'),
+  direction: ascii(',"direction":'),
+  passiveResistance: ascii(',"passiveResistance":'),
+  passiveRatio: ascii(',"passiveRatio":'),
+  shapeFactor: ascii(',"shapeFactor":'),
+  governs: ascii(',"governs":'),
+  thrust: ascii(',"thrust":'),
+  upwardThrust: ascii(',"upwardThrust":'),
+  openCode: ascii('{"code":'),
+  severity: ascii(',"severity":'),
+  subjectOpen: ascii(',"subject":{'),
+  valuesOpen: ascii('},"values":{'),
+  valueOpen: ascii(':{"value":'),
+  kind: ascii(',"kind":'),
+  closeTwo: ascii('}}'),
+  openBlock: ascii('{"block":'),
+  reverseBlock: ascii(',"reverseBlock":'),
+  anchor: ascii(',"anchor":'),
+  openConcreteVolume: ascii('{"concreteVolume":'),
+  length: ascii(',"length":'),
+  width: ascii(',"width":'),
+  height: ascii(',"height":'),
+  side: ascii(',"side":'),
+  horizontalThrust: ascii(',"horizontalThrust":'),
+  trenchBottom: ascii(',"trenchBottom":'),
+  restrainedLength: ascii(',"restrainedLength":'),
+  restrainedLegsOpen: ascii(',"restrainedLegs":['),
+  toward: ascii(',"toward":'),
+  joints: ascii(',"joints":'),
+  closeListObject: ascii(']}'),
+  outsideDiameter: ascii(',"outsideDiameter":'),
+  insideDiameter: ascii(',"insideDiameter":'),
+  material: ascii(',"material":'),
+  openNode: ascii('{"node":'),
+  mark: ascii(',"mark":'),
+  run: ascii(',"run":'),
+  label: ascii(',"label":'),
+  deflection: ascii(',"deflection":'),
+  horizontalDeflection: ascii(',"horizontalDeflection":'),
+  verticalDeflection: ascii(',"verticalDeflection":'),
+  branchAngle: ascii(',"branchAngle":'),
+  chainage: ascii(',"chainage":'),
+  position: ascii(',"position":'),
+  cover: ascii(',"cover":'),
+  groundLevel: ascii(',"groundLevel":'),
+  pipes: ascii(',"pipes":'),
+  soil: ascii(',"soil":'),
+  casesOpen: ascii(',"cases":['),
+  pressure: ascii(',"pressure":'),
+  static: ascii(',"static":'),
+  dynamic: ascii(',"dynamic":'),
+  total: ascii(',"total":'),
+  closedAgainst: ascii(',"closedAgainst":'),
+  governingCaseAfterList: ascii('],"governingCase":'),
+  designPressure: ascii(',"designPressure":'),
+  downwardThrust: ascii(',"downwardThrust":'),
+  bearingDirection: ascii(',"bearingDirection":'),
+  profile: ascii(',"profile":'),
+  waterWeight: ascii(',"waterWeight":'),
+  restraint: ascii(',"restraint":'),
+  warnings: ascii(',"warnings":'),
+  diagnostics: ascii(',"diagnostics":'),
+  unverified: ascii(',"unverified":'),
+  openProject: ascii('{"project":'),
+  units: ascii(',"units":'),
+  fittingsOpen: ascii(',"fittings":['),
+  cautionsAfterList: ascii('],"cautions":'),
+  end: ascii('}\n'),
+  submergedTrue: ascii(',"submerged":true'),
+  submergedFalse: ascii(',"submerged":false'),
+  openPipe: ascii('{"pipe":'),
+  openId: ascii('{"id":'),
+  openCase: ascii('{"case":'),
+};
 
-function list(items: readonly string[]): string {
-  let out = '';
-  for (let i = 0; i < items.length; i++) out += (i ? ',' : '') + q(items[i]!);
-  return `[${out}]`;
+function vec(o: JsonBytes, v: Vec3, decimals: number): void {
+  o.byte(OPEN_BRACKET);
+  o.round(v[0], decimals);
+  o.byte(COMMA);
+  o.round(v[1], decimals);
+  o.byte(COMMA);
+  o.round(v[2], decimals);
+  o.byte(CLOSE_BRACKET);
 }
 
-function block(b: ScheduleBlock | null): string {
-  if (!b) return 'null';
-  return (
-    `{"bearingArea":${round(b.bearingArea, D.area)},"faceWidth":${up(b.faceWidth, D.length)}` +
-    `,"faceHeight":${up(b.faceHeight, D.length)},"concreteVolume":${up(b.concreteVolume, D.volume)}` +
-    `,"depth":${up(b.depth, D.length)},"direction":${vec(b.direction, D.unit)}` +
-    `,"passiveResistance":${round(b.passiveResistance, D.force)},"passiveRatio":${round(b.passiveRatio, D.ratio)}` +
-    `,"shapeFactor":${round(b.shapeFactor, D.ratio)},"governs":${q(b.governs)}` +
-    `,"thrust":${round(b.thrust, D.force)},"upwardThrust":${round(b.upwardThrust, D.force)}}`
-  );
+function strOrNull(o: JsonBytes, text: string | null): void {
+  if (text === null) o.bytes(K.null);
+  else o.str(text);
+}
+
+function list(o: JsonBytes, items: readonly string[]): void {
+  o.byte(OPEN_BRACKET);
+  for (let i = 0; i < items.length; i++) {
+    if (i) o.byte(COMMA);
+    o.str(items[i]!);
+  }
+  o.byte(CLOSE_BRACKET);
+}
+
+function block(o: JsonBytes, b: ScheduleBlock | null): void {
+  if (!b) return o.bytes(K.null);
+  o.bytes(K.openBearingArea);
+  o.round(b.bearingArea, D.area);
+  o.bytes(K.faceWidth);
+  o.up(b.faceWidth, D.length);
+  o.bytes(K.faceHeight);
+  o.up(b.faceHeight, D.length);
+  o.bytes(K.concreteVolume);
+  o.up(b.concreteVolume, D.volume);
+  o.bytes(K.depth);
+  o.up(b.depth, D.length);
+  o.bytes(K.direction);
+  vec(o, b.direction, D.unit);
+  o.bytes(K.passiveResistance);
+  o.round(b.passiveResistance, D.force);
+  o.bytes(K.passiveRatio);
+  o.round(b.passiveRatio, D.ratio);
+  o.bytes(K.shapeFactor);
+  o.round(b.shapeFactor, D.ratio);
+  o.bytes(K.governs);
+  o.str(b.governs);
+  o.bytes(K.thrust);
+  o.round(b.thrust, D.force);
+  o.bytes(K.upwardThrust);
+  o.round(b.upwardThrust, D.force);
+  o.byte(CLOSE_BRACE);
 }
 
 /** What `diagnosticJson` gives, as text: the subject's fields in their order, each value with its kind. */
-function diagnosticJsonText(d: Diagnostic): string {
+function diagnosticText(o: JsonBytes, d: Diagnostic): void {
   const kinds = DIAGNOSTIC_CODES[d.code].values as Record<string, Dimension>;
-  let subject = '';
+  o.bytes(K.openCode);
+  o.str(d.code);
+  o.bytes(K.severity);
+  o.str(d.severity);
+  o.bytes(K.subjectOpen);
   const s = d.subject as Record<string, unknown>;
+  let first = true;
   for (const key of Object.keys(s)) {
     const v = s[key];
     if (v === undefined) continue; // as JSON.stringify leaves it out
-    subject += `${subject ? ',' : ''}${q(key)}:${typeof v === 'string' ? q(v) : JSON.stringify(v)}`;
+    if (!first) o.byte(COMMA);
+    first = false;
+    o.str(key);
+    o.byte(COLON);
+    if (typeof v === 'string') o.str(v);
+    else o.json(JSON.stringify(v));
   }
-  let values = '';
+  o.bytes(K.valuesOpen);
+  first = true;
   for (const name of Object.keys(d.values)) {
     const kind = kinds[name] ?? 'ratio';
-    values += `${values ? ',' : ''}${q(name)}:{"value":${round(d.values[name]!, D[kind])},"kind":${q(kind)}}`;
+    if (!first) o.byte(COMMA);
+    first = false;
+    o.str(name);
+    o.bytes(K.valueOpen);
+    o.round(d.values[name]!, D[kind]);
+    o.bytes(K.kind);
+    o.str(kind);
+    o.byte(CLOSE_BRACE);
   }
-  return `{"code":${q(d.code)},"severity":${q(d.severity)},"subject":{${subject}},"values":{${values}}}`;
+  o.bytes(K.closeTwo);
 }
 
-function diagnosticList(list: readonly Diagnostic[]): string {
-  let out = '';
-  for (let i = 0; i < list.length; i++) out += (i ? ',' : '') + diagnosticJsonText(list[i]!);
-  return `[${out}]`;
+function diagnosticList(o: JsonBytes, list: readonly Diagnostic[]): void {
+  o.byte(OPEN_BRACKET);
+  for (let i = 0; i < list.length; i++) {
+    if (i) o.byte(COMMA);
+    diagnosticText(o, list[i]!);
+  }
+  o.byte(CLOSE_BRACKET);
 }
 
-function restraintText(x: ScheduleFitting['restraint']): string {
+function restraintText(o: JsonBytes, x: ScheduleFitting['restraint']): void {
+  o.bytes(K.openBlock);
+  block(o, x.block);
+  o.bytes(K.reverseBlock);
+  block(o, x.reverseBlock);
+  o.bytes(K.anchor);
   const a = x.anchor;
-  const anchor = a
-    ? `{"concreteVolume":${up(a.concreteVolume, D.volume)},"length":${up(a.length, D.length)}` +
-      `,"width":${up(a.width, D.length)},"height":${up(a.height, D.length)},"side":${up(a.side, D.length)}` +
-      `,"submerged":${a.submerged},"upwardThrust":${round(a.upwardThrust, D.force)}` +
-      `,"horizontalThrust":${round(a.horizontalThrust, D.force)}}`
-    : 'null';
+  if (a) {
+    o.bytes(K.openConcreteVolume);
+    o.up(a.concreteVolume, D.volume);
+    o.bytes(K.length);
+    o.up(a.length, D.length);
+    o.bytes(K.width);
+    o.up(a.width, D.length);
+    o.bytes(K.height);
+    o.up(a.height, D.length);
+    o.bytes(K.side);
+    o.up(a.side, D.length);
+    o.bytes(a.submerged ? K.submergedTrue : K.submergedFalse);
+    o.bytes(K.upwardThrust);
+    o.round(a.upwardThrust, D.force);
+    o.bytes(K.horizontalThrust);
+    o.round(a.horizontalThrust, D.force);
+    o.byte(CLOSE_BRACE);
+  } else o.bytes(K.null);
+  o.bytes(K.trenchBottom);
   const t = x.trenchBottom;
-  const trench = t
-    ? `{"bearingArea":${round(t.bearingArea, D.area)},"width":${up(t.width, D.length)},"length":${up(t.length, D.length)}}`
-    : 'null';
-  let legs = '';
-  for (let i = 0; i < x.restrainedLegs.length; i++) {
-    const l = x.restrainedLegs[i]!;
-    legs +=
-      `${i ? ',' : ''}{"pipe":${q(l.pipe)},"length":${up(l.length, D.length)}` +
-      `,"toward":${orNull(l.toward)},"joints":${num(l.joints)}}`;
+  if (t) {
+    o.bytes(K.openBearingArea);
+    o.round(t.bearingArea, D.area);
+    o.bytes(K.width);
+    o.up(t.width, D.length);
+    o.bytes(K.length);
+    o.up(t.length, D.length);
+    o.byte(CLOSE_BRACE);
+  } else o.bytes(K.null);
+  o.bytes(K.restrainedLength);
+  if (x.restrainedLength === null) o.bytes(K.null);
+  else o.up(x.restrainedLength, D.length);
+  o.bytes(K.restrainedLegsOpen);
+  const legs = x.restrainedLegs;
+  for (let i = 0; i < legs.length; i++) {
+    const l = legs[i]!;
+    if (i) o.byte(COMMA);
+    o.bytes(K.openPipe);
+    o.str(l.pipe);
+    o.bytes(K.length);
+    o.up(l.length, D.length);
+    o.bytes(K.toward);
+    strOrNull(o, l.toward);
+    o.bytes(K.joints);
+    o.num(l.joints);
+    o.byte(CLOSE_BRACE);
   }
-  return (
-    `{"block":${block(x.block)},"reverseBlock":${block(x.reverseBlock)},"anchor":${anchor}` +
-    `,"trenchBottom":${trench},"restrainedLength":${x.restrainedLength === null ? 'null' : up(x.restrainedLength, D.length)}` +
-    `,"restrainedLegs":[${legs}]}`
-  );
+  o.bytes(K.closeListObject);
+}
+
+function pipesText(o: JsonBytes, pipes: ScheduleFitting['pipes'], echo: boolean): void {
+  o.byte(OPEN_BRACKET);
+  for (let i = 0; i < pipes.length; i++) {
+    const p = pipes[i]!;
+    if (i) o.byte(COMMA);
+    o.bytes(K.openId);
+    o.str(p.id);
+    if (echo) {
+      o.bytes(K.outsideDiameter);
+      o.round(p.outsideDiameter, D.diameter);
+      o.bytes(K.insideDiameter);
+      o.round(p.insideDiameter, D.diameter);
+      o.bytes(K.material);
+      o.str(p.material);
+    }
+    o.bytes(K.toward);
+    strOrNull(o, p.toward);
+    o.byte(CLOSE_BRACE);
+  }
+  o.byte(CLOSE_BRACKET);
 }
 
 /**
@@ -149,73 +336,154 @@ function restraintText(x: ScheduleFitting['restraint']): string {
  * what the project file already says (position, label, soil, the pipes' sizes) is left out and the
  * pipes, as id and toward, come last.
  */
-function fittingText(f: ScheduleFitting, echo: boolean): string {
-  let pipes = '';
-  for (let i = 0; i < f.pipes.length; i++) {
-    const p = f.pipes[i]!;
-    pipes += echo
-      ? `${i ? ',' : ''}{"id":${q(p.id)},"outsideDiameter":${round(p.outsideDiameter, D.diameter)}` +
-        `,"insideDiameter":${round(p.insideDiameter, D.diameter)},"material":${q(p.material)},"toward":${orNull(p.toward)}}`
-      : `${i ? ',' : ''}{"id":${q(p.id)},"toward":${orNull(p.toward)}}`;
+function fittingText(o: JsonBytes, f: ScheduleFitting, echo: boolean): void {
+  o.bytes(K.openNode);
+  o.str(f.node);
+  o.bytes(K.mark);
+  o.str(f.mark);
+  o.bytes(K.run);
+  o.str(f.run);
+  if (echo) {
+    o.bytes(K.label);
+    strOrNull(o, f.label);
   }
-  let cases = '';
-  for (let i = 0; i < f.cases.length; i++) {
-    const c = f.cases[i]!;
-    cases +=
-      `${i ? ',' : ''}{"case":${q(c.case)},"pressure":${round(c.pressure, D.pressure)}` +
-      `,"static":${vec(c.static, D.force)},"dynamic":${vec(c.dynamic, D.force)},"total":${vec(c.total, D.force)}` +
-      `,"closedAgainst":${orNull(c.closedAgainst)}}`;
+  o.bytes(K.kind);
+  o.str(f.kind);
+  o.bytes(K.deflection);
+  o.roundOrNull(f.deflection, D.angle);
+  o.bytes(K.horizontalDeflection);
+  o.roundOrNull(f.horizontalDeflection, D.angle);
+  o.bytes(K.verticalDeflection);
+  o.roundOrNull(f.verticalDeflection, D.angle);
+  o.bytes(K.branchAngle);
+  o.roundOrNull(f.branchAngle, D.angle);
+  o.bytes(K.chainage);
+  o.round(f.chainage, D.length);
+  if (echo) {
+    o.bytes(K.position);
+    vec(o, f.position, D.length);
   }
-  return (
-    `{"node":${q(f.node)},"mark":${q(f.mark)},"run":${q(f.run)}` +
-    (echo ? `,"label":${orNull(f.label)}` : '') +
-    `,"kind":${q(f.kind)},"deflection":${roundOrNull(f.deflection, D.angle)}` +
-    `,"horizontalDeflection":${roundOrNull(f.horizontalDeflection, D.angle)}` +
-    `,"verticalDeflection":${roundOrNull(f.verticalDeflection, D.angle)}` +
-    `,"branchAngle":${roundOrNull(f.branchAngle, D.angle)},"chainage":${round(f.chainage, D.length)}` +
-    (echo ? `,"position":${vec(f.position, D.length)}` : '') +
-    `,"cover":${round(f.cover, D.length)},"groundLevel":${round(f.groundLevel, D.elevation)}` +
-    (echo ? `,"pipes":[${pipes}],"soil":${q(f.soil)}` : '') +
-    `,"cases":[${cases}],"governingCase":${q(f.governingCase)}` +
-    `,"designPressure":${round(f.designPressure, D.pressure)},"thrust":${vec(f.thrust, D.force)}` +
-    `,"horizontalThrust":${round(f.horizontalThrust, D.force)},"upwardThrust":${round(f.upwardThrust, D.force)}` +
-    `,"downwardThrust":${round(f.downwardThrust, D.force)}` +
-    `,"bearingDirection":${roundOrNull(f.bearingDirection, D.angle)},"profile":${orNull(f.profile)}` +
-    `,"waterWeight":${round(f.waterWeight, D.force)},"restraint":${restraintText(f.restraint)}` +
-    `,"warnings":${list(f.warnings)},"diagnostics":${diagnosticList(f.diagnostics)}` +
-    `,"unverified":${list(f.unverified)}` +
-    (echo ? '}' : `,"pipes":[${pipes}]}`)
-  );
+  o.bytes(K.cover);
+  o.round(f.cover, D.length);
+  o.bytes(K.groundLevel);
+  o.round(f.groundLevel, D.elevation);
+  if (echo) {
+    o.bytes(K.pipes);
+    pipesText(o, f.pipes, true);
+    o.bytes(K.soil);
+    o.str(f.soil);
+  }
+  o.bytes(K.casesOpen);
+  // A row's parts are behind getters (built when first read): each is read once.
+  const cases = f.cases;
+  for (let i = 0; i < cases.length; i++) {
+    const c = cases[i]!;
+    if (i) o.byte(COMMA);
+    o.bytes(K.openCase);
+    o.str(c.case);
+    o.bytes(K.pressure);
+    o.round(c.pressure, D.pressure);
+    o.bytes(K.static);
+    vec(o, c.static, D.force);
+    o.bytes(K.dynamic);
+    vec(o, c.dynamic, D.force);
+    o.bytes(K.total);
+    vec(o, c.total, D.force);
+    o.bytes(K.closedAgainst);
+    strOrNull(o, c.closedAgainst);
+    o.byte(CLOSE_BRACE);
+  }
+  o.bytes(K.governingCaseAfterList);
+  o.str(f.governingCase);
+  o.bytes(K.designPressure);
+  o.round(f.designPressure, D.pressure);
+  o.bytes(K.thrust);
+  vec(o, f.thrust, D.force);
+  o.bytes(K.horizontalThrust);
+  o.round(f.horizontalThrust, D.force);
+  o.bytes(K.upwardThrust);
+  o.round(f.upwardThrust, D.force);
+  o.bytes(K.downwardThrust);
+  o.round(f.downwardThrust, D.force);
+  o.bytes(K.bearingDirection);
+  o.roundOrNull(f.bearingDirection, D.angle);
+  o.bytes(K.profile);
+  strOrNull(o, f.profile);
+  o.bytes(K.waterWeight);
+  o.round(f.waterWeight, D.force);
+  o.bytes(K.restraint);
+  restraintText(o, f.restraint);
+  o.bytes(K.warnings);
+  list(o, f.warnings);
+  o.bytes(K.diagnostics);
+  diagnosticList(o, f.diagnostics);
+  o.bytes(K.unverified);
+  list(o, f.unverified);
+  if (!echo) {
+    o.bytes(K.pipes);
+    pipesText(o, f.pipes, false);
+  }
+  o.byte(CLOSE_BRACE);
+}
+
+export interface ScheduleJsonBytes {
+  /** repeat what the project file says (as ScheduleJsonOptions.echo; default true) */
+  echo?: boolean;
+  /** bytes gathered before each call of `write` (default 64 Ki) */
+  chunk?: number;
+  /** characters beyond ASCII to write as \uXXXX as well (see JsonBytes): the terminal guard */
+  escape?: (code: number) => boolean;
 }
 
 /**
- * Writes the schedule as JSON text at the stated precision (no 0.7000000000000001), the same whatever
- * the display units, in pieces of about `chunk` characters: each fitting's text is made from its row
- * and handed on, so no tree of rounded copies and no one string of the whole output is ever held (a
- * 10,000-fitting schedule is some 13 MB of text). The text is what `JSON.stringify` makes of the
- * schedule's fields in the row's order — held so, byte for byte, by a test against that serialiser.
+ * Writes the schedule as compact JSON in UTF-8 at the stated precision (no 0.7000000000000001), the
+ * same whatever the display units, in pieces of about `chunk` bytes: each fitting's text is made from
+ * its row into a byte buffer and handed on, so no tree of rounded copies, no string per number and no
+ * one string of the whole output is ever made (a 10,000-fitting schedule is some 13 MB of text). The
+ * text is what `JSON.stringify` makes of the schedule's fields in the row's order — held so, byte for
+ * byte, by a test against that serialiser. Each piece is a new array: the receiver may keep it.
+ */
+export function writeScheduleJsonBytes(
+  s: Schedule,
+  write: (bytes: Uint8Array) => void,
+  options: ScheduleJsonBytes = {},
+): void {
+  const { echo = true, chunk = 1 << 16, escape = null } = options;
+  const o = new JsonBytes(write, chunk, escape);
+  o.bytes(K.openProject);
+  o.str(s.project);
+  o.bytes(K.units);
+  o.str(s.units);
+  o.bytes(K.warnings);
+  list(o, s.warnings);
+  o.bytes(K.diagnostics);
+  diagnosticList(o, s.diagnostics);
+  o.bytes(K.fittingsOpen);
+  const fittings = s.fittings;
+  for (let i = 0; i < fittings.length; i++) {
+    if (i) o.byte(COMMA);
+    fittingText(o, fittings[i]!, echo);
+  }
+  o.bytes(K.cautionsAfterList);
+  list(o, s.cautions);
+  o.bytes(K.end);
+  o.flush();
+}
+
+/**
+ * The same text as strings, in pieces of about `chunk` bytes' worth, indented as
+ * `JSON.stringify(v, null, 2)` lays it out when `pretty` (the indenter passes the last line end as it is).
  */
 export function writeScheduleJson(s: Schedule, write: (text: string) => void, options: ScheduleJsonWriting = {}): void {
   const { pretty = false, echo = true, chunk = 1 << 16 } = options;
   const indent = pretty ? new JsonIndenter() : null;
-  let pending = '';
+  const decoder = new TextDecoder();
   const put = (text: string) => {
-    pending += text;
-    if (pending.length >= chunk) {
-      write(indent ? indent.feed(pending) : pending);
-      pending = '';
-    }
+    if (text) write(indent ? indent.feed(text) : text);
   };
-  put(
-    `{"project":${q(s.project)},"units":${q(s.units)},"warnings":${list(s.warnings)}` +
-      `,"diagnostics":${diagnosticList(s.diagnostics)},"fittings":[`,
-  );
-  const fittings = s.fittings;
-  for (let i = 0; i < fittings.length; i++) put((i ? ',' : '') + fittingText(fittings[i]!, echo));
-  put(`],"cautions":${list(s.cautions)}}`);
-  write((indent ? indent.feed(pending) : pending) + '\n');
+  writeScheduleJsonBytes(s, (bytes) => put(decoder.decode(bytes, { stream: true })), { echo, chunk });
+  put(decoder.decode());
 }
-
 /**
  * The schedule as JSON text at the stated precision, the same whatever the display units: what the app
  * exports and, without the echoed input, what `schedule --format json` prints (there streamed).
