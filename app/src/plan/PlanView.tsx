@@ -32,7 +32,7 @@ import { useUnderlayImage } from '../state/underlayImage.js';
 import { UnderlayHint } from './UnderlayHint.js';
 import { TypedEntryBox } from './TypedEntryPart.js';
 import { DrawHint } from './DrawHint.js';
-import { sendPlanEvent } from '../tools/planBridge.js';
+import { capturesPress, sendPlanEvent } from '../tools/planBridge.js';
 import type { PlanEvent, PointerKind } from '../tools/planInput.js';
 import { runCommand } from '../chrome/appCommands.js';
 import { focusDetails } from '../chrome/shortcuts.js';
@@ -278,7 +278,7 @@ export function PlanView() {
       shift: e.shiftKey,
       alt: e.altKey,
     });
-    if (store.getState().gesture.kind !== 'idle' && out.handled) e.currentTarget.setPointerCapture(e.pointerId);
+    if (capturesPress(store, out)) e.currentTarget.setPointerCapture(e.pointerId);
   };
   const onPointerMove = (e: ReactPointerEvent<HTMLDivElement>) => {
     const at = local(e);
