@@ -43,6 +43,17 @@ describe('plan events before the input tools have loaded', () => {
   });
 });
 
+/** A mouse press with `button` at (sx, sy) px. */
+const press = (id: number, button: number, sx: number, sy: number): PlanEvent => ({
+  type: 'pointerDown',
+  id,
+  pointer: 'mouse',
+  button,
+  at: { sx, sy },
+  shift: false,
+  alt: false,
+});
+
 describe('a drag started before the input tools have loaded', () => {
   it('keeps the pointer on the plan, and pans by the whole drag once replayed', async () => {
     // A fresh copy of the bridge: its tools not loaded, whatever the test above did.
@@ -57,15 +68,7 @@ describe('a drag started before the input tools have loaded', () => {
     const was = toScreen(store.getState().viewport, node);
 
     send(key('h'));
-    const down = send({
-      type: 'pointerDown',
-      id: 1,
-      pointer: 'mouse',
-      button: 0,
-      at: { sx: 100, sy: 100 },
-      shift: false,
-      alt: false,
-    });
+    const down = send(press(1, 0, 100, 100));
     // no gesture yet (the press waits), but the release may come over a panel: the plan must take the pointer
     expect(store.getState().gesture.kind).toBe('idle');
     expect(bridge.capturesPress(store, down)).toBe(true);
@@ -80,28 +83,12 @@ describe('a drag started before the input tools have loaded', () => {
     expect(store.getState().gesture.kind).toBe('idle');
 
     // once loaded, the gesture decides: a pan press takes the pointer, a right-button press with the select tool does not
-    const pan = send({
-      type: 'pointerDown',
-      id: 2,
-      pointer: 'mouse',
-      button: 0,
-      at: { sx: 10, sy: 10 },
-      shift: false,
-      alt: false,
-    });
+    const pan = send(press(2, 0, 10, 10));
     expect(bridge.capturesPress(store, pan)).toBe(true);
     send({ type: 'pointerUp', id: 2, pointer: 'mouse', at: { sx: 10, sy: 10 } });
     send(key('v'));
     expect(store.getState().tool).toBe('select');
-    const right = send({
-      type: 'pointerDown',
-      id: 3,
-      pointer: 'mouse',
-      button: 2,
-      at: { sx: 10, sy: 10 },
-      shift: false,
-      alt: false,
-    });
+    const right = send(press(3, 2, 10, 10));
     expect(bridge.capturesPress(store, right)).toBe(false);
   });
 });
