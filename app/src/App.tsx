@@ -2,7 +2,6 @@ import { useState } from 'react';
 import { useStore } from 'zustand';
 import { TopBar } from './chrome/TopBar.js';
 import { ToolStrip } from './chrome/ToolStrip.js';
-import { NoticeBar } from './chrome/NoticeBar.js';
 import { PlanView } from './plan/PlanView.js';
 import { DetailsPanel } from './panels/DetailsPanel.js';
 import { Drawer } from './panels/Drawer.js';
@@ -44,7 +43,6 @@ export function App() {
         <ToolStrip />
         <PlanView />
         <DetailsPanel />
-        <NoticeBar />
       </main>
       <Drawer />
       {printing && <PrintSheet onClose={() => setPrinting(false)} />}

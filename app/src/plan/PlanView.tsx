@@ -1,5 +1,4 @@
 import {
-  memo,
   useCallback,
   useEffect,
   useLayoutEffect,
@@ -29,10 +28,8 @@ import { drawLiveChange } from './drawLiveChange.js';
 import { EMPTY_SELECTION } from '../state/slices.js';
 import { drawPicks, drawUnderlay } from './drawUnderlay.js';
 import { useUnderlayImage } from '../state/underlayImage.js';
-import { UnderlayHint } from './UnderlayHint.js';
-import { TypedEntryBox } from './TypedEntryPart.js';
-import { DrawHint } from './DrawHint.js';
-import { sendPlanEvent } from '../tools/planBridge.js';
+import { PlanHints } from './PlanHints.js';
+import { capturesPress, sendPlanEvent } from '../tools/planBridge.js';
 import type { PlanEvent, PointerKind } from '../tools/planInput.js';
 import { runCommand } from '../chrome/appCommands.js';
 import { focusDetails } from '../chrome/shortcuts.js';
@@ -51,21 +48,6 @@ function sceneKeeper() {
   let last: Scene | null = null;
   return (next: Scene) => (last = reuseEqualParts(last, next));
 }
-
-/**
- * Hints and the typed-entry box stack down from the top: a hint that wraps on a narrow plan pushes the
- * box down instead of covering it. They read the store themselves, so a redraw of the plan (every
- * test-pressure change) does not render them again.
- */
-const PlanHints = memo(function PlanHints() {
-  return (
-    <div className="plan-top">
-      <DrawHint />
-      <UnderlayHint />
-      <TypedEntryBox />
-    </div>
-  );
-});
 
 /** No changes: the same empty list while no slider gesture is on. */
 const NO_CHANGES: readonly LiveChange[] = [];
@@ -278,7 +260,7 @@ export function PlanView() {
       shift: e.shiftKey,
       alt: e.altKey,
     });
-    if (store.getState().gesture.kind !== 'idle' && out.handled) e.currentTarget.setPointerCapture(e.pointerId);
+    if (capturesPress(store, out)) e.currentTarget.setPointerCapture(e.pointerId);
   };
   const onPointerMove = (e: ReactPointerEvent<HTMLDivElement>) => {
     const at = local(e);
@@ -296,8 +278,8 @@ export function PlanView() {
 
   const onWheel = useCallback(
     (e: WheelEvent) => {
-      // The legend scrolls its own content.
-      if (e.target instanceof Element && e.target.closest('.plan-legend')) return;
+      // The legend and a long notice scroll their own content.
+      if (e.target instanceof Element && e.target.closest('.plan-legend, .notice')) return;
       e.preventDefault();
       const r = box.current!.getBoundingClientRect();
       send({ type: 'wheel', at: { sx: e.clientX - r.left, sy: e.clientY - r.top }, deltaY: e.deltaY });

@@ -41,4 +41,24 @@ describe('marks on the key plan', () => {
     expect(m!.box.x + m!.box.w).toBeLessThanOrEqual(W);
     expect(m!.box.y).toBeGreaterThanOrEqual(0);
   });
+
+  it('keeps every mark inside the frame when its point is crowded out of every place', () => {
+    // Twenty fittings at one point by the right edge: the places round it run out after a dozen or so.
+    const crowd: KeyMark[] = Array.from({ length: 20 }, (_, i) => ({
+      key: `c${i}`,
+      text: `C${i + 10}`,
+      x: W - 3,
+      y: 100,
+    }));
+    const placed = placeKeyMarks(crowd, W, H, SIZE);
+    expect(placed).toHaveLength(20);
+    for (const m of placed) {
+      expect(m.box.x, m.text).toBeGreaterThanOrEqual(0);
+      expect(m.box.x + m.box.w, m.text).toBeLessThanOrEqual(W);
+      expect(m.box.y, m.text).toBeGreaterThanOrEqual(0);
+      expect(m.box.y + m.box.h, m.text).toBeLessThanOrEqual(H);
+    }
+    // the last one was moved in from beyond the edge: a leader ties it to its point
+    expect(placed.at(-1)!.leader).toBe(true);
+  });
 });

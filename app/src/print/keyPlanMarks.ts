@@ -26,7 +26,7 @@ const FAR = 2.4;
  * Places every mark of a key plan where it overlaps no other mark, no symbol and stays inside the frame:
  * first beside its point (right, left, above, below), then farther off with a leader line. Fittings a few
  * metres apart print as points closer than a mark is tall, and a crew must read each mark. When nothing
- * fits, the mark goes in its first place anyway: every mark is printed.
+ * fits, the mark goes in its first place anyway, moved inside the frame: every mark is printed whole.
  */
 export function placeKeyMarks(marks: readonly KeyMark[], width: number, height: number, size: number): PlacedMark[] {
   const space = new LabelSpace(width, height);
@@ -37,8 +37,10 @@ export function placeKeyMarks(marks: readonly KeyMark[], width: number, height: 
     const near = around(m, w, h, 1);
     const far = around(m, w, h, FAR);
     const placed = space.place(near) ?? space.place(far);
-    const r = placed ?? near[0]!;
-    return { ...m, box: r, baseline: r.y + 0.8 * h, leader: placed !== null && !near.includes(placed) };
+    const r = placed ?? inside(near[0]!, width, height);
+    // A leader wherever the mark stands off its point: a far place, or its first place moved into the frame.
+    const leader = placed ? !near.includes(placed) : r.x !== near[0]!.x || r.y !== near[0]!.y;
+    return { ...m, box: r, baseline: r.y + 0.8 * h, leader };
   });
 }
 
@@ -55,4 +57,9 @@ function around(m: KeyMark, w: number, h: number, reach: number) {
     { x: m.x + gap, y: m.y - h / 2, w, h },
     { x: m.x - gap - w, y: m.y - h / 2, w, h },
   ];
+}
+
+/** A box moved the least way to lie inside the frame (a mark cut by the frame's edge is misread). */
+function inside(r: { x: number; y: number; w: number; h: number }, width: number, height: number) {
+  return { ...r, x: Math.min(Math.max(r.x, 0), width - r.w), y: Math.min(Math.max(r.y, 0), height - r.h) };
 }

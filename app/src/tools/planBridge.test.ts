@@ -1,4 +1,4 @@
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { createAppStore } from '../state/store.js';
 import { createActions } from '../state/actions.js';
 import { chain, DN300 } from '../testFixtures.js';
@@ -40,5 +40,55 @@ describe('plan events before the input tools have loaded', () => {
     // and from now on at once
     sendPlanEvent(store, actions, key('d'));
     expect(store.getState().tool).toBe('draw');
+  });
+});
+
+/** A mouse press with `button` at (sx, sy) px. */
+const press = (id: number, button: number, sx: number, sy: number): PlanEvent => ({
+  type: 'pointerDown',
+  id,
+  pointer: 'mouse',
+  button,
+  at: { sx, sy },
+  shift: false,
+  alt: false,
+});
+
+describe('a drag started before the input tools have loaded', () => {
+  it('keeps the pointer on the plan, and pans by the whole drag once replayed', async () => {
+    // A fresh copy of the bridge: its tools not loaded, whatever the test above did.
+    vi.resetModules();
+    const bridge = await import('./planBridge.js');
+    const { toScreen } = await import('../state/viewport.js');
+    const store = createAppStore(chain([0, 0], [30, 0], [30, 40]), DN300);
+    const actions = createActions(store);
+    const send = (e: PlanEvent) => bridge.sendPlanEvent(store, actions, e);
+    send({ type: 'resize', width: 800, height: 500 });
+    const node = store.getState().project.nodes[0]!;
+    const was = toScreen(store.getState().viewport, node);
+
+    send(key('h'));
+    const down = send(press(1, 0, 100, 100));
+    // no gesture yet (the press waits), but the release may come over a panel: the plan must take the pointer
+    expect(store.getState().gesture.kind).toBe('idle');
+    expect(bridge.capturesPress(store, down)).toBe(true);
+    send({ type: 'pointerMove', id: 1, pointer: 'mouse', at: { sx: 160, sy: 130 }, alt: false });
+    send({ type: 'pointerUp', id: 1, pointer: 'mouse', at: { sx: 160, sy: 130 } });
+
+    await bridge.loadPlanInput();
+    // a pan moves every point by the drag: (160 − 100, 130 − 100) px
+    const now = toScreen(store.getState().viewport, node);
+    expect(now.sx - was.sx).toBeCloseTo(60, 6);
+    expect(now.sy - was.sy).toBeCloseTo(30, 6);
+    expect(store.getState().gesture.kind).toBe('idle');
+
+    // once loaded, the gesture decides: a pan press takes the pointer, a right-button press with the select tool does not
+    const pan = send(press(2, 0, 10, 10));
+    expect(bridge.capturesPress(store, pan)).toBe(true);
+    send({ type: 'pointerUp', id: 2, pointer: 'mouse', at: { sx: 10, sy: 10 } });
+    send(key('v'));
+    expect(store.getState().tool).toBe('select');
+    const right = send(press(3, 2, 10, 10));
+    expect(bridge.capturesPress(store, right)).toBe(false);
   });
 });

@@ -137,6 +137,16 @@ export function sendPlanEvent(
   return waited(planInputOf(s), event);
 }
 
+/**
+ * Whether the plan takes the pointer just pressed (pointer capture), so that its moves and release reach
+ * the plan even off it: when the press began a gesture, and when the press waits for the input tools,
+ * since it may begin one when it is replayed (a drag started before they load would otherwise lose its
+ * release over a panel and leave the gesture open). Capture ends by itself when the pointer is released.
+ */
+export function capturesPress(store: AppStore, out: DispatchResult): boolean {
+  return out.handled && (dispatchNow === null || store.getState().gesture.kind !== 'idle');
+}
+
 /** Makes the input tools present at once (tests that drive the plan synchronously). */
 export function installPlanInput(dispatch: typeof Dispatch) {
   dispatchNow = dispatch;

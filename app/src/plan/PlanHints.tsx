@@ -1,0 +1,23 @@
+import { memo } from 'react';
+import { NoticeBar } from '../chrome/NoticeBar.js';
+import { DrawHint } from './DrawHint.js';
+import { UnderlayHint } from './UnderlayHint.js';
+import { TypedEntryBox } from './TypedEntryPart.js';
+
+/**
+ * The notice, the hints and the typed-entry box stack down from the top of the plan: a notice or a hint
+ * that wraps on a narrow plan pushes what is below it down instead of covering it (a notice that stays
+ * until dismissed must not hide the typed-entry box while a run is drawn). They lie over the plan, never
+ * resizing it, and read the store themselves, so a redraw of the plan (every test-pressure change) does
+ * not render them again. A press on them is theirs, not the plan's.
+ */
+export const PlanHints = memo(function PlanHints() {
+  return (
+    <div className="plan-top" onPointerDown={(e) => e.stopPropagation()} onDoubleClick={(e) => e.stopPropagation()}>
+      <NoticeBar />
+      <DrawHint />
+      <UnderlayHint />
+      <TypedEntryBox />
+    </div>
+  );
+});
