@@ -16,14 +16,14 @@ export default defineConfig({
   build: {
     target: 'es2022',
     sourcemap: false,
-    // No preload helper in the first load (0.6 kB gzipped, issue 16): a lazy part's own imports are
+    // No preload helper in the first load (0.6 kB gzipped, docs/performance.md): a lazy part's own imports are
     // fetched by the browser as it reads the part, and the warm-up after the first draw has them in
     // cache before they are used. Every browser the app runs in (ES2022, module workers) has modules.
     modulePreload: false,
     rolldownOptions: {
       output: {
         // What the first screen needs in one file: shared pieces split out for the lazy parts would
-        // each be a request of its own and compress apart (issue 16: 6 kB gzipped more).
+        // each be a request of its own and compress apart (docs/performance.md: 6 kB gzipped more).
         codeSplitting: { groups: [{ name: 'start', tags: ['$initial'] }] },
       },
     },

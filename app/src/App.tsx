@@ -9,7 +9,7 @@ import { useFileOpening } from './files/useFileOpening.js';
 import { keptCopiesView } from './state/keptCopiesView.js';
 import { lazyPart } from './chrome/lazyPart.js';
 
-// Off the first screen, each in a chunk of its own (issue 16).
+// Off the first screen, each in a chunk of its own (docs/performance.md).
 const PrintSheet = lazyPart(() => import('./print/PrintSheet.js').then((m) => m.PrintSheet));
 const KeptCopiesDialog = lazyPart(() => import('./chrome/KeptCopiesDialog.js').then((m) => m.KeptCopiesDialog));
 const ImportDialog = lazyPart(() => import('./chrome/ImportDialog.js').then((m) => m.ImportDialog));

@@ -17,20 +17,20 @@ const DIST = join(import.meta.dirname, '../../app/dist');
 const ONLY = process.env.BENCH_ONLY ?? '';
 
 const BUDGET = {
-  /** ms of main-thread work per test-pressure change at 1,000 fittings (issue 16 item 4) */
+  /** ms of main-thread work per test-pressure change at 1,000 fittings (docs/performance.md) */
   pressureChangeMs: 12,
-  /** kB gzipped of JavaScript loaded before the first paint (issue 16 item 4) */
+  /** kB gzipped of JavaScript loaded before the first paint (docs/performance.md) */
   firstLoadKb: 200,
-  /** ms from navigation to the demo drawn in a fresh browser profile (issue 16 item 4) */
+  /** ms from navigation to the demo drawn in a fresh browser profile (docs/performance.md) */
   demoDrawnMs: 1000,
-  /** ms, the longest main-thread task while a 10,000-node route opens (issue 17 item 11) */
+  /** ms, the longest main-thread task while a 10,000-node route opens (docs/performance.md) */
   openLongestTaskMs: 200,
   /**
-   * ms, the longest main-thread task per keystroke in the project name on that route: issue 17 item 11
+   * ms, the longest main-thread task per keystroke in the project name on that route (docs/performance.md)
    * asks for no task over 200 ms on such a route (the name no longer re-runs the analysis)
    */
   renameLongestTaskMs: 200,
-  /** ms, the longest main-thread task while the print of that route is prepared (issue 17 item 11) */
+  /** ms, the longest main-thread task while the print of that route is prepared (docs/performance.md) */
   printLongestTaskMs: 200,
   /** ms, 95th percentile frame interval while dragging a node or the test-pressure slider at 1,000
    * fittings: one 60 Hz frame plus 20 % for the timer jitter of a shared headless machine */

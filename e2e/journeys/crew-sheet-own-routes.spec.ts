@@ -14,7 +14,7 @@ test.beforeAll(() => {
 /**
  * Two routes of our own (invented streets), printed as a crew would get them: an SI main of nine
  * fittings and a US main of twelve, whose last sheet is full, so the job's take-off has no free row of
- * sketches to sit in. Issue 12: at most one page per six fittings, the take-off included.
+ * sketches to sit in. At most one page per six fittings, the take-off included.
  */
 for (const [name, paper] of [
   ['probe-si', 'A4'],

@@ -7,7 +7,7 @@ const loaders: (() => Promise<unknown>)[] = [];
 /**
  * A part of the app off the first screen (a drawer tab, the details of a selection, the print, a
  * dialog) in a chunk of its own, so that the first screen loads and compiles less JavaScript
- * (issue 16). Rendered while it loads it shows `fallback`; once loaded (see `warmParts`) it renders
+ * (docs/performance.md). Rendered while it loads it shows `fallback`; once loaded (see `warmParts`) it renders
  * at once. The first render decides which, so a part never remounts and keeps its state.
  */
 export function lazyPart<P extends object>(

@@ -1,5 +1,5 @@
 // The schedule and quantities as files: loaded when an export is chosen (or once the first screen is
-// drawn), not with the first screen (issue 16).
+// drawn), not with the first screen (docs/performance.md).
 import {
   analyse,
   scheduleCsv,

@@ -2,7 +2,7 @@ import { fromDisplay, toDisplay, type Dimension, type UnitSystem } from '@mainbr
 import { unitOf } from './quantity.js';
 
 // A value as typed into a field and back (NumberField, the plan's typed entry): apart from the
-// display formats of quantity.ts, since no field is on the first screen (issue 16).
+// display formats of quantity.ts, since no field is on the first screen (docs/performance.md).
 
 /** Same value to a part in 10⁹: what a typed number comes back as after conversion to SI and back. */
 const same = (a: number, b: number) => Math.abs(a - b) <= 1e-9 * Math.max(Math.abs(a), Math.abs(b), 1e-12);

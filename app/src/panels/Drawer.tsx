@@ -4,7 +4,7 @@ import type { DrawerTab } from '../state/store.js';
 import { ScheduleTable } from './ScheduleTable.js';
 import { lazyPart } from '../chrome/lazyPart.js';
 
-// The tabs after the schedule load in chunks of their own (issue 16: the first screen shows the schedule).
+// The tabs after the schedule load in chunks of their own (docs/performance.md: the first screen shows the schedule).
 const loading = (what: string) => <p className="muted">Loading {what}…</p>;
 const ProfilePanel = lazyPart(() => import('./ProfilePanel.js').then((m) => m.ProfilePanel), loading('the profile'));
 const CasesPanel = lazyPart(() => import('./CasesPanel.js').then((m) => m.CasesPanel), loading('the pressure cases'));

@@ -8,7 +8,7 @@ import {
   type PointerEvent as ReactPointerEvent,
 } from 'react';
 // Konva's core entry and react-konva's core build: the plan draws with 2-D calls inside its own
-// shapes, so none of Konva's ready-made shapes, filters or animations are loaded (issue 16).
+// shapes, so none of Konva's ready-made shapes, filters or animations are loaded (docs/performance.md).
 import { Layer, Shape, Stage } from 'react-konva/lib/ReactKonvaCore.js';
 import type { Context } from 'konva/lib/Context';
 import type { Shape as KonvaShape } from 'konva/lib/Shape';

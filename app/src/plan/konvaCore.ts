@@ -1,6 +1,6 @@
 // Konva's core as the plan uses it, put in place of `konva/lib/Core.js` (vite.config.ts), which
 // react-konva reads its node classes from by name. The plan draws with a Stage, Layers and Shapes;
-// Konva's own core entry adds Animation, Tween and FastLayer, which nothing here uses (issue 16:
+// Konva's own core entry adds Animation, Tween and FastLayer, which nothing here uses (docs/performance.md:
 // 2.6 kB gzipped of the first load). Group stays: react-konva falls back to it for an unknown name.
 import { Konva as Global } from 'konva/lib/Global.js';
 import { Util, Transform } from 'konva/lib/Util.js';

@@ -1,5 +1,5 @@
 /**
- * Level of detail for the plan (issue 16): what is too small or too crowded to read on screen is not
+ * Level of detail for the plan (docs/performance.md): what is too small or too crowded to read on screen is not
  * drawn, and a label is tested for room before its text is formatted or measured. Screen px throughout.
  */
 

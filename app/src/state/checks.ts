@@ -10,7 +10,7 @@ let loading: Promise<Checks> | null = null;
 /**
  * Starts loading the schema checks (zod, once). They are not needed to open a valid project: the app
  * loads them after the first screen is drawn, to word a refusal, or for an edit that the check by
- * hand cannot pass (issue 16: zod was 27 kB gzipped fetched before the demo was drawn).
+ * hand cannot pass (docs/performance.md: zod was 27 kB gzipped fetched before the demo was drawn).
  */
 export function loadChecks(): Promise<Checks> {
   loading ??= importOrReload(() => import('./schemaChecks.js')).then(

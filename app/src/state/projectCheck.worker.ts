@@ -1,5 +1,5 @@
 // The whole-file check of a large project text, off the main thread: JSON.parse and the schema check
-// of a 10,000-node route take over a second, a task that would freeze the page (issue 17 item 11).
+// of a 10,000-node route take over a second, a task that would freeze the page (docs/performance.md).
 // Answers with the checked document as JSON text: a string crosses to the page far more cheaply than
 // a structured clone of the object graph, and JSON.parse on the page is the browser's own fast path.
 import { parseProject, parseProjectText, problemText, type ParseResult } from '@mainbrace/solver';

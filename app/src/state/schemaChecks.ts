@@ -1,3 +1,3 @@
 // Everything the app needs of the project schema (zod), in a chunk of its own: it loads beside the
-// first screen instead of before it (issue 16: zod was 23 kB of the first-load JavaScript).
+// first screen instead of before it (docs/performance.md: zod was 23 kB of the first-load JavaScript).
 export { parseProject, parseProjectText, partProblems, crossProblems } from '@mainbrace/solver';

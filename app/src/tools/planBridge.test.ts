@@ -6,7 +6,7 @@ import { loadPlanInput, sendPlanEvent } from './planBridge.js';
 import type { PlanEvent } from './planInput.js';
 
 // No harness here: in this file the input tools are not installed, so the plan's events take the
-// app's path — they wait for the tools' chunk, then replay in order (issue 16).
+// app's path — they wait for the tools' chunk, then replay in order (docs/performance.md).
 const key = (k: string, ctrl = false): PlanEvent => ({
   type: 'key',
   key: k,

@@ -83,7 +83,7 @@ export function applyOutcome(
 
 // The input tools (the dispatcher and the tools it runs: select, draw, pan, typed entry) are not needed
 // to draw the first screen, so they load on the first pointer or key event, or in the warm-up after the
-// first draw, whichever comes first (issue 16: about 5 kB gzipped off the first load). Events that come
+// first draw, whichever comes first (docs/performance.md: about 5 kB gzipped off the first load). Events that come
 // while they load wait in order and are replayed through them, so nothing the user did is lost.
 let dispatchNow: typeof Dispatch | null = null;
 type Waiting = { store: AppStore; actions: Actions; event: PlanEvent; handlers?: Partial<IntentHandlers> };

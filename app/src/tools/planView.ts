@@ -3,7 +3,7 @@ import { centreOn, fitView, toScreen } from '../state/viewport.js';
 import { fitInsetRight, LEGEND_MIN_CANVAS_PX, type PlanInput } from './planInput.js';
 
 // How the plan's view is framed: what the store's actions and the plan's first size need at start,
-// apart from the input tools (tools/dispatch.ts), which load on first use (issue 16).
+// apart from the input tools (tools/dispatch.ts), which load on first use (docs/performance.md).
 
 /** The view that shows the whole route (or, with no route yet, the site plan), leaving the legend's strip clear. */
 export function fittedView(s: Pick<PlanInput, 'project' | 'canvas' | 'legendOpen'>) {

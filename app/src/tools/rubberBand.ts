@@ -3,7 +3,7 @@ import type { DrawState } from './drawTool.js';
 import { signedTurn } from './snapping.js';
 
 // The run being drawn as the plan shows it (plan/drawOverlay.ts), apart from the draw tool's steps
-// (drawTool.ts), which load with the input tools on first use (issue 16).
+// (drawTool.ts), which load with the input tools on first use (docs/performance.md).
 
 type Drawing = Extract<DrawState, { phase: 'drawing' }>;
 

@@ -12,7 +12,7 @@ const root = join(here, '../../..');
 const out = join(root, '.bench');
 mkdirSync(out, { recursive: true });
 
-/** Ratio budgets (issue 16): a figure over its floor may not exceed these. */
+/** Ratio budgets (docs/performance.md): a figure over its floor may not exceed these. */
 const BUDGETS = {
   'schedule-10000': 3,
   'cli-json-10000': 3,

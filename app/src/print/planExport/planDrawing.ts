@@ -51,7 +51,7 @@ const MARGIN = 20;
 const MARK_SIZE = 2.5;
 
 /**
- * The plan at a true scale for the drawing set (issue 12 part 7): pipes at their outside diameter
+ * The plan at a true scale for the drawing set: pipes at their outside diameter
  * (at least a visible line), blocks, anchors and pads from the setting-out geometry, restrained zones
  * as a tick per joint, fitting marks, a north arrow, a scale bar and a scale statement. Throws when
  * the sheet would be larger than LARGEST_SHEET: the message names a smaller scale.

@@ -1,7 +1,7 @@
 import { imageToPlan, RAD, type ImagePoint, type Placement, type PlanXY } from './similarity.js';
 
 // Calibrating a site plan from picked points (the Site plan tab), apart from the transform itself
-// (similarity.ts), which the plan draws with: the app loads the tab on first use (issue 16).
+// (similarity.ts), which the plan draws with: the app loads the tab on first use (docs/performance.md).
 
 const fromFactor = (re: number, im: number, t: PlanXY): Placement => {
   const rotation = Math.atan2(im, re) / RAD;

@@ -20,7 +20,7 @@ const prefixed = (problems: Problem[], path: (string | number)[]) =>
 /**
  * The problems of one part of a project checked on its own, with the same words as the whole file's
  * check: a top-level field (`name`, `design`) or one item of a list (`nodes[4]`). An editor that
- * changes one part need not check the rest (issue 16: validate only what an edit changed).
+ * changes one part need not check the rest (docs/performance.md: validate only what an edit changed).
  */
 export function partProblems(key: string, value: unknown, index?: number): Problem[] {
   const schema: z.ZodType | undefined =

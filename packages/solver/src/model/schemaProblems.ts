@@ -2,7 +2,7 @@ import type { z } from 'zod';
 import { pathText, type Problem } from './problems.js';
 
 // The schema's refusals in plain words: read only with the schema (zod), which loads after the first
-// screen (issue 16), apart from the problem type and paths the check by hand also uses (problems.ts).
+// screen (docs/performance.md), apart from the problem type and paths the check by hand also uses (problems.ts).
 
 function describe(value: unknown): string {
   if (value === undefined) return 'nothing (the field is missing)';

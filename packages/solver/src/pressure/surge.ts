@@ -84,7 +84,7 @@ export interface SurgeEstimate {
 }
 
 /**
- * A surge case from a velocity change (issue 11 part 5): for each pipe ΔP = ρ·a·Δv with a from
+ * A surge case from a velocity change: for each pipe ΔP = ρ·a·Δv with a from
  * Korteweg, Δv either the given change or the pipe's whole working flow stopping at once
  * (|Q·flow factor|/A_inside). The largest rise over the route, added to the working case's pressure,
  * is the suggested surge case: conservative, since the rise is taken everywhere at its largest.

@@ -66,7 +66,7 @@ function acrossTrench(direction: Vec3, legs: readonly Leg[]): boolean {
  * until its own weight holds the uplift; or one anchor alone, enlarged until the base friction on what
  * the uplift leaves of its weight holds the horizontal thrust too. Each way's concrete grows with the
  * thrust, and whether the thickened block is allowed does not depend on the pressure, so the least of
- * them grows with the pressure too (issue 17: quantities never fall as the pressure rises).
+ * them grows with the pressure too (quantities never fall as the pressure rises: quantitiesGrow.test.ts).
  */
 export function concreteRestraint(
   project: Project,

@@ -155,7 +155,7 @@ describe('gravity anchor at a crest bend (DIPRA gravity block form; docs/check-v
     expectClose(r.anchor!.requiredVolume / FT3, 145.1, 5e-4);
   });
 
-  it('refuses a gravity anchor where the submerged weight is not positive (issue 17: heavy water)', () => {
+  it('refuses a gravity anchor where the submerged weight is not positive (heavy water)', () => {
     // The file schema now refuses such water; the solver still must not trust its caller: heavy water
     // (2,400 kg/m³, γw = 23,536 N/m³) against 23,000 N/m³ concrete, groundwater above the pipe.
     const p = crestRoute({ design: { groundwaterElevation: 105, concreteUnitWeight: 23_000 } });

@@ -5,7 +5,7 @@ import { restraintConcrete } from '../schedule/concrete.js';
 import { route } from '../../test/projectBuilder.js';
 
 /**
- * Issue 17 item 5: raising the pressure never lowers the concrete at a fitting (invariant). The thrust
+ * Raising the pressure never lowers the concrete at a fitting (invariant). The thrust
  * of every part grows in proportion to the pressure, so the restraint that holds it must not shrink:
  * a block that just fails to hold an uplift by its weight is thickened, or joined by an anchor, but is
  * never swapped for less concrete.
@@ -80,7 +80,7 @@ const shapes = fc.record({
   od: fc.double({ min: 0.1, max: 0.9, noNaN: true }),
 });
 
-describe('quantities grow with pressure (issue 17 item 5; invariant)', () => {
+describe('quantities grow with pressure (invariant)', () => {
   it('a dead end rising 1 in 10: the concrete never falls over 100 kPa … 3 MPa in 1 % steps', () => {
     const s: Shape = {
       turn: 0,

@@ -24,7 +24,7 @@ const short = route({
   ],
 });
 
-describe('restrained lengths capped at what the route holds (issue 17 item 4)', () => {
+describe('restrained lengths capped at what the route holds', () => {
   it('measures the line from the fitting to the next branch or end, through straight joints (geometry)', () => {
     expectClose(reachAlong(short, 'c', 'p1'), 3, 1e-12);
     expectClose(reachAlong(short, 'c', 'p2'), 2 + 2.5, 1e-12);

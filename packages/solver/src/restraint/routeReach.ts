@@ -33,7 +33,7 @@ function linksOf(project: Project): Map<string, Link[]> {
  * m, the length of line a restrained zone can run along from `node` out along `pipe`: through every
  * node where the line simply continues (two pipes: straight joints and the fittings the zone may run
  * through), up to the first node where it branches or ends. Pipe–soil friction acts only on pipe that
- * exists, so no restrained length can exceed this (issue 17 item 4). At a tie-in the line runs on into
+ * exists, so no restrained length can exceed this. At a tie-in the line runs on into
  * the existing main, whose length the project does not know: no limit there (Infinity).
  */
 export function reachAlong(project: Project, node: string, pipe: string): number {

@@ -57,7 +57,7 @@ export interface AnchorLine {
   marks: string[];
 }
 
-/** Quantities take-off (issue 12 part 5): concrete by element and total with waste, joints, fittings, anchors. SI. */
+/** Quantities take-off: concrete by element and total with waste, joints, fittings, anchors. SI. */
 export interface TakeOff {
   concrete: ConcreteLine[];
   /** m³, sum of the elements */

@@ -6,7 +6,7 @@ import { route } from '../../test/projectBuilder.js';
 import { PSI } from '../units/conversions.js';
 
 /**
- * Notes, not repeats (issue 12): a main of four 12-in C900 DR 25 pipes (pressure class 165 psi) held
+ * Notes, not repeats: a main of four 12-in C900 DR 25 pipes (pressure class 165 psi) held
  * at 200 psi in its working case, with no datum, so every pipe carries the same 200 psi. Each pipe is
  * over its rating; the sheet says so once, naming the pipes, not once per pipe.
  */

@@ -28,7 +28,7 @@ export function scheduleNotes(
   names?: { pipe: (id: string) => string; caseName: (id: string) => string },
 ): { notes: ScheduleNote[]; byMark: Map<string, number[]> } {
   // `seen` keeps the marks' membership test constant-time: a finding shared by 10,000 fittings made
-  // the list search quadratic (issue 16, a 10,000-node route).
+  // the list search quadratic (docs/performance.md, a 10,000-node route).
   // A finding about the route as a whole (no mark: a pipe over its rating, an input out of range) is
   // its own note, worded with what it names, rather than merged into its code's general meaning.
   // A finding on a pipe (over its rating) is one note per code and case, naming the pipes: a line of

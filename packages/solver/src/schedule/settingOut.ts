@@ -55,7 +55,7 @@ export interface PadSetOut extends SetOutPlace {
   thickness: number;
 }
 
-/** Setting-out data of one fitting (issue 12 part 3): what a crew pegs and levels. SI, levels in m. */
+/** Setting-out data of one fitting: what a crew pegs and levels. SI, levels in m. */
 export interface SettingOut {
   east: number;
   north: number;
