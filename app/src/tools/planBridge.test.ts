@@ -2,7 +2,7 @@ import { describe, expect, it, vi } from 'vitest';
 import { createAppStore } from '../state/store.js';
 import { createActions } from '../state/actions.js';
 import { chain, DN300 } from '../testFixtures.js';
-import { loadPlanInput, sendPlanEvent } from './planBridge.js';
+import { loadPlanInput, queueEvent, sendPlanEvent, type Waiting } from './planBridge.js';
 import type { PlanEvent } from './planInput.js';
 
 // No harness here: in this file the input tools are not installed, so the plan's events take the
@@ -90,5 +90,28 @@ describe('a drag started before the input tools have loaded', () => {
     expect(store.getState().tool).toBe('select');
     const right = send(press(3, 2, 10, 10));
     expect(bridge.capturesPress(store, right)).toBe(false);
+  });
+});
+
+describe('moves that wait for the input tools', () => {
+  const store = createAppStore(chain([0, 0], [30, 0]), DN300);
+  const actions = createActions(store);
+  const move = (id: number, sx: number): Waiting => ({
+    store,
+    actions,
+    event: { type: 'pointerMove', id, pointer: 'touch', at: { sx, sy: 0 }, alt: false },
+  });
+  const at = (w: Waiting) => (w.event.type === 'pointerMove' ? `${w.event.id}@${w.event.at.sx}` : w.event.type);
+
+  it('keep only where each pointer got to between other events, in order', () => {
+    const queue: Waiting[] = [];
+    for (let sx = 0; sx < 1000; sx++) queueEvent(queue, move(1, sx));
+    queueEvent(queue, { store, actions, event: press(1, 0, 999, 0) });
+    queueEvent(queue, move(1, 5));
+    queueEvent(queue, move(1, 6));
+    // two fingers: their moves interleave, and each stays
+    queueEvent(queue, move(2, 7));
+    queueEvent(queue, move(1, 8));
+    expect(queue.map(at)).toEqual(['1@999', 'pointerDown', '1@6', '2@7', '1@8']);
   });
 });

@@ -86,7 +86,7 @@ export function applyOutcome(
 // first draw, whichever comes first (docs/performance.md: about 5 kB gzipped off the first load). Events that come
 // while they load wait in order and are replayed through them, so nothing the user did is lost.
 let dispatchNow: typeof Dispatch | null = null;
-type Waiting = { store: AppStore; actions: Actions; event: PlanEvent; handlers?: Partial<IntentHandlers> };
+export type Waiting = { store: AppStore; actions: Actions; event: PlanEvent; handlers?: Partial<IntentHandlers> };
 const waiting: Waiting[] = [];
 
 function run(w: Waiting, dispatch: typeof Dispatch): DispatchResult {
@@ -105,6 +105,18 @@ export const loadPlanInput = lazyModule(
     }),
   'first',
 );
+
+/**
+ * Adds an event to those waiting for the input tools. A pointer's move replaces its move just before it:
+ * only where the pointer got to matters (a pan takes the whole drag, a hover the last place), and a
+ * chunk slow to load, or failing and tried again, must not make every move of the meantime wait.
+ */
+export function queueEvent(queue: Waiting[], w: Waiting): void {
+  const last = queue[queue.length - 1];
+  if (w.event.type === 'pointerMove' && last?.event.type === 'pointerMove' && last.event.id === w.event.id)
+    queue[queue.length - 1] = w;
+  else queue.push(w);
+}
 
 /** What an event that waits for the input tools is taken to have done, until it is replayed. */
 function waited(s: PlanInput, event: PlanEvent): DispatchResult {
@@ -132,7 +144,7 @@ export function sendPlanEvent(
     applyOutcome(store, actions, { state, intents: [], handled: true });
     return { state, intents: [], handled: true };
   }
-  waiting.push({ store, actions, event, handlers });
+  queueEvent(waiting, { store, actions, event, handlers });
   void loadPlanInput().catch(() => undefined); // a failure is tried again at the next event
   return waited(planInputOf(s), event);
 }
