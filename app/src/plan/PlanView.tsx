@@ -49,7 +49,7 @@ function sceneKeeper() {
   return (next: Scene) => (last = reuseEqualParts(last, next));
 }
 
-/** No changes: the same empty list while no slider gesture is on. */
+/** One empty list, the same object while no slider gesture is on, so the live layer's memo is not made again. */
 const NO_CHANGES: readonly LiveChange[] = [];
 
 const kindOf = (t: string): PointerKind => (t === 'touch' ? 'touch' : t === 'pen' ? 'pen' : 'mouse');
