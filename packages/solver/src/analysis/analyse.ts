@@ -182,7 +182,7 @@ function startAssembly(
   prev: Reuse,
 ): Assembly {
   const { marks, order: markOrder } = runMarks(runs, (i) => isFitting(geometry[i]!.kind));
-  const inputs = implausibleInputs(project);
+  const inputs = implausibleInputs(project, graph.index);
   const order: number[] = [];
   const fittingAt = new Int32Array(graph.nodes.length).fill(-1);
   for (let r = 0; r < runs.letters.length; r++) {
@@ -286,7 +286,7 @@ function assemble(project: Project, graph: RouteGraph, geometry: FittingGeometry
  * restraint kept where its envelope did not change.
  */
 function rescale(prev: Analysis, k: RouteTables, project: Project): Analysis {
-  const inputs = implausibleInputs(project);
+  const inputs = implausibleInputs(project, k.graph.index);
   const atNode = byNode(inputs);
   const n = prev.fittings.length;
   const fittings = new Array<FittingAnalysis>(n);
