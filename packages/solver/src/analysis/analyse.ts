@@ -14,7 +14,16 @@ import type { ProvenanceId } from '../provenance/register.js';
 import type { CalcStep } from './calcRecord.js';
 import { implausibleInputs } from '../model/plausibility.js';
 import { pipeRatingChecks } from '../pressure/pipeRating.js';
-import { copySums, fillStates, readStates, thrustSums, writeSums, type ThrustSums } from './thrustSums.js';
+import {
+  casePressures,
+  copySums,
+  fillStates,
+  readEnvelope,
+  thrustSums,
+  writeSums,
+  type ThrustSums,
+} from './thrustSums.js';
+import { SolvedFitting } from './solvedFitting.js';
 import { fittingDiagnostics } from './fittingDiagnostics.js';
 import { routeChange } from './routeChange.js';
 import { RouteAnalysis, type RouteTables } from './routeViews.js';
@@ -83,32 +92,38 @@ function solveFitting(
   f: number,
   before: FittingAnalysis | undefined,
 ): FittingAnalysis {
-  const { states, cases, envelope } = readStates(
-    fillStates(sums, f, project.loadCases, project.water.density),
-    project.loadCases,
-    legs,
-  );
+  const source = { sums, index: f, loadCases: project.loadCases, density: project.water.density };
+  const b = fillStates(sums, f, source.loadCases, source.density);
+  const known = readEnvelope(b, source.loadCases, legs);
+  const envelope = known.envelope;
   // The restraint reads the project's design and soils, the node, its legs and the envelope only.
   const restraint =
     before && sameEnvelope(before.envelope, envelope)
       ? before.restraint
       : sizeRestraint(project, node, legs, geometry, envelope);
-  return {
+  // the findings read each case's pressure from the buffer, before the next fitting fills it
+  const diagnostics = fittingDiagnostics(
     node,
-    // field by field, not a spread: one literal shape for every fitting
+    legs,
+    geometry,
+    casePressures(b, source.loadCases),
+    envelope,
+    restraint,
+    inputs,
+  );
+  return new SolvedFitting(
+    node,
     mark,
     run,
     chainage,
     legs,
     geometry,
-    cases,
-    states,
-    envelope,
-    waterWeight: before ? before.waterWeight : waterWeightInFitting(legs, project.water.density),
+    source,
+    known,
+    before ? before.waterWeight : waterWeightInFitting(legs, project.water.density),
     restraint,
-    diagnostics: fittingDiagnostics(node, legs, geometry, cases, envelope, restraint, inputs),
-    basis: restraint.basis,
-  };
+    diagnostics,
+  );
 }
 
 const sameVec = (a: Vec3, b: Vec3) => a[0] === b[0] && a[1] === b[1] && a[2] === b[2];
@@ -182,7 +197,7 @@ function startAssembly(
   prev: Reuse,
 ): Assembly {
   const { marks, order: markOrder } = runMarks(runs, (i) => isFitting(geometry[i]!.kind));
-  const inputs = implausibleInputs(project);
+  const inputs = implausibleInputs(project, graph.index);
   const order: number[] = [];
   const fittingAt = new Int32Array(graph.nodes.length).fill(-1);
   for (let r = 0; r < runs.letters.length; r++) {
@@ -236,16 +251,15 @@ function solveAt(s: Assembly, f: number): void {
       here,
     );
     if (!moved && !reworded) fittings[f] = old;
-    else
-      fittings[f] = {
-        ...old,
-        mark,
-        run,
-        chainage,
-        diagnostics: reworded
-          ? fittingDiagnostics(node, l, g, old.cases, old.envelope, old.restraint, here)
-          : old.diagnostics,
-      };
+    else {
+      const diagnostics = reworded
+        ? fittingDiagnostics(node, l, g, old.cases, old.envelope, old.restraint, here)
+        : old.diagnostics;
+      fittings[f] =
+        old instanceof SolvedFitting
+          ? old.placed(mark, run, chainage, diagnostics)
+          : { ...old, mark, run, chainage, diagnostics };
+    }
   } else {
     fittings[f] = solveFitting(
       project,
@@ -286,7 +300,7 @@ function assemble(project: Project, graph: RouteGraph, geometry: FittingGeometry
  * restraint kept where its envelope did not change.
  */
 function rescale(prev: Analysis, k: RouteTables, project: Project): Analysis {
-  const inputs = implausibleInputs(project);
+  const inputs = implausibleInputs(project, k.graph.index);
   const atNode = byNode(inputs);
   const n = prev.fittings.length;
   const fittings = new Array<FittingAnalysis>(n);

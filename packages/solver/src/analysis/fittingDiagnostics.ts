@@ -5,14 +5,13 @@ import type { FittingGeometry } from '../network/fittingKind.js';
 import type { CaseThrust, ThrustEnvelope } from '../thrust/fittingThrust.js';
 import type { Restraint } from '../restraint/sizeRestraint.js';
 import { VACUUM_GAUGE_PRESSURE } from '../pressure/nodePressure.js';
+import type { CasePressures } from './thrustSums.js';
 import { diagnostic, uniqueDiagnostics, type Diagnostic } from '../diagnostics/diagnostic.js';
 
-function negativePressure(node: string, cases: readonly CaseThrust[], out: Diagnostic[]): void {
-  for (const c of cases) {
-    if (c.pressure >= 0) continue;
-    const code = c.pressure <= VACUUM_GAUGE_PRESSURE + 1e-6 ? 'pressure.vapour-floor' : 'pressure.below-zero';
-    out.push(diagnostic(code, { node, case: c.caseId }, { pressure: c.pressure }));
-  }
+function negativePressure(node: string, caseId: string, pressure: number, out: Diagnostic[]): void {
+  if (pressure >= 0) return;
+  const code = pressure <= VACUUM_GAUGE_PRESSURE + 1e-6 ? 'pressure.vapour-floor' : 'pressure.below-zero';
+  out.push(diagnostic(code, { node, case: caseId }, { pressure }));
 }
 
 /**
@@ -38,13 +37,15 @@ export function fittingDiagnostics(
   node: ProjectNode,
   legs: readonly Leg[],
   geometry: FittingGeometry,
-  cases: readonly CaseThrust[],
+  /** one state per case, or each case's pressure read without making the states (thrustSums.ts) */
+  cases: readonly CaseThrust[] | CasePressures,
   envelope: ThrustEnvelope,
   restraint: Restraint,
   inputs: readonly Diagnostic[],
 ): Diagnostic[] {
   const found: Diagnostic[] = [...inputs];
-  negativePressure(node.id, cases, found);
+  if (typeof cases === 'function') cases((caseId, pressure) => negativePressure(node.id, caseId, pressure, found));
+  else for (const c of cases) negativePressure(node.id, c.caseId, c.pressure, found);
   for (const d of restraint.diagnostics) found.push(d);
   const unbalanced = flowImbalance(node.id, legs, geometry);
   if (unbalanced) found.push(unbalanced);

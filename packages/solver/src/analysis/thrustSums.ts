@@ -199,52 +199,55 @@ export interface FittingStates {
   envelope: ThrustEnvelope;
 }
 
+/** The envelope, and which states its governing and reverse state objects are (−1: none). */
+export interface EnvelopeRead {
+  envelope: ThrustEnvelope;
+  governingState: number;
+  reverseState: number;
+}
+
 /**
- * The states in the buffer as objects, with their envelope, by the rules of thrust/fittingThrust.ts
- * (worstPerCase, thrustEnvelope): the same comparisons in the same order over the same numbers.
+ * State k of the buffer as an object. No flow (a test case, a closed valve): the dynamic thrust is +0
+ * (fillStates adds 0) and the total is the static thrust, number for number — one shared zero and the
+ * same vector, not two more arrays kept per state. Cases with the same flow factor (a working and a
+ * surge case) have the same dynamic thrust, number for number: `before` (the state before's vector)
+ * then serves both.
  */
-export function readStates(
+function stateAt(
+  b: StateBuffer,
+  k: number,
+  cases: readonly LoadCase[],
+  closedAgainst: (side: number) => string,
+  before: Vec3,
+): CaseThrust {
+  const statics = vec(b.statics, k);
+  const d = b.dynamic;
+  const still = d[3 * k] === 0 && d[3 * k + 1] === 0 && d[3 * k + 2] === 0;
+  const same = before[0] === d[3 * k] && before[1] === d[3 * k + 1] && before[2] === d[3 * k + 2];
+  return {
+    caseId: cases[b.caseIndex[k]!]!.id,
+    pressure: b.pressure[k]!,
+    static: statics,
+    dynamic: still ? NO_THRUST : same ? before : vec(d, k),
+    total: still ? statics : vec(b.total, k),
+    closedAgainst: b.side[k]! < 0 ? null : closedAgainst(b.side[k]!),
+  };
+}
+
+const pipeOfSide = (legs: readonly Leg[]) => (side: number) => legs[side]!.pipe.id;
+
+/**
+ * The envelope of the states in the buffer, by the rules of thrust/fittingThrust.ts (thrustEnvelope):
+ * the same comparisons in the same order over the same numbers. Only the governing and the reverse
+ * state become objects; `readStates` makes the others when they are read.
+ */
+export function readEnvelope(
   b: StateBuffer,
   cases: readonly LoadCase[],
   legs: readonly Leg[],
-  closedAgainst: (side: number) => string = (side) => legs[side]!.pipe.id,
-): FittingStates {
+  closedAgainst: (side: number) => string = pipeOfSide(legs),
+): EnvelopeRead {
   const t = b.total;
-  const states: CaseThrust[] = new Array<CaseThrust>(b.count);
-  for (let k = 0; k < b.count; k++) {
-    const statics = vec(b.statics, k);
-    const d = b.dynamic;
-    // No flow (a test case, a closed valve): the dynamic thrust is +0 (fillStates adds 0) and the
-    // total is the static thrust, number for number — one shared zero and the same vector, not two
-    // more arrays kept per state.
-    const still = d[3 * k] === 0 && d[3 * k + 1] === 0 && d[3 * k + 2] === 0;
-    // Cases with the same flow factor (a working and a surge case) have the same dynamic thrust,
-    // number for number: the state before's vector serves both.
-    const before = k > 0 ? states[k - 1]!.dynamic : NO_THRUST;
-    const same = before[0] === d[3 * k] && before[1] === d[3 * k + 1] && before[2] === d[3 * k + 2];
-    states[k] = {
-      caseId: cases[b.caseIndex[k]!]!.id,
-      pressure: b.pressure[k]!,
-      static: statics,
-      dynamic: still ? NO_THRUST : same ? before : vec(d, k),
-      total: still ? statics : vec(t, k),
-      closedAgainst: b.side[k]! < 0 ? null : closedAgainst(b.side[k]!),
-    };
-  }
-  let worst: CaseThrust[];
-  if (b.count === cases.length) worst = states;
-  else {
-    worst = [];
-    for (let k = 0; k < b.count; k++) {
-      const c = b.caseIndex[k]!;
-      let best = k;
-      while (k + 1 < b.count && b.caseIndex[k + 1] === c) {
-        k++;
-        if (size(t, k) > size(t, best)) best = k;
-      }
-      worst.push(states[best]!);
-    }
-  }
   let governing = 0;
   let largest = -1;
   let hForce = 0;
@@ -276,7 +279,7 @@ export function readStates(
     }
     if (b.pressure[k]! > pressure) pressure = b.pressure[k]!;
   }
-  const caseOf = (k: number) => (k < 0 ? null : states[k]!.caseId);
+  const caseOf = (k: number) => (k < 0 ? null : cases[b.caseIndex[k]!]!.id);
   const direction: Vec3 = hState < 0 ? [0, 0, 0] : [t[3 * hState]! / hForce, t[3 * hState + 1]! / hForce, 0];
   const horizontal: Extreme & { direction: Vec3 } = { force: hForce, caseId: caseOf(hState), direction };
   let reverse: ThrustEnvelope['reverse'] = null;
@@ -290,8 +293,11 @@ export function readStates(
       rState = k;
     }
   }
+  // no states (no load case): no governing state, as the states' list gives none
+  const governingState =
+    b.count > 0 ? stateAt(b, governing, cases, closedAgainst, NO_THRUST) : (undefined as unknown as CaseThrust);
   if (rState >= 0) {
-    const s = states[rState]!;
+    const s = rState === governing ? governingState : stateAt(b, rState, cases, closedAgainst, NO_THRUST);
     reverse = {
       force: rForce,
       caseId: s.caseId,
@@ -300,15 +306,77 @@ export function readStates(
     };
   }
   return {
-    states,
-    cases: worst,
     envelope: {
-      governing: states[governing]!,
+      governing: governingState,
       horizontal,
       reverse,
       upward: upState < 0 ? NO_EXTREME : { force: upForce, caseId: caseOf(upState) },
       downward: downState < 0 ? NO_EXTREME : { force: downForce, caseId: caseOf(downState) },
       pressure,
     },
+    governingState: governing,
+    reverseState: rState,
   };
 }
+
+/**
+ * The states in the buffer as objects and the worst per case, by the rules of thrust/fittingThrust.ts
+ * (worstPerCase): the same comparisons in the same order over the same numbers. `known` (the envelope
+ * read from the same buffer) gives the objects already made for its governing and reverse states,
+ * which stay the same objects here.
+ */
+export function readCases(
+  b: StateBuffer,
+  cases: readonly LoadCase[],
+  legs: readonly Leg[],
+  known: EnvelopeRead,
+  closedAgainst: (side: number) => string = pipeOfSide(legs),
+): { states: CaseThrust[]; cases: CaseThrust[] } {
+  const t = b.total;
+  const states: CaseThrust[] = new Array<CaseThrust>(b.count);
+  for (let k = 0; k < b.count; k++) {
+    if (k === known.governingState) states[k] = known.envelope.governing;
+    else if (k === known.reverseState) states[k] = known.envelope.reverse!.state;
+    else states[k] = stateAt(b, k, cases, closedAgainst, k > 0 ? states[k - 1]!.dynamic : NO_THRUST);
+  }
+  let worst: CaseThrust[];
+  if (b.count === cases.length) worst = states;
+  else {
+    worst = [];
+    for (let k = 0; k < b.count; k++) {
+      const c = b.caseIndex[k]!;
+      let best = k;
+      while (k + 1 < b.count && b.caseIndex[k + 1] === c) {
+        k++;
+        if (size(t, k) > size(t, best)) best = k;
+      }
+      worst.push(states[best]!);
+    }
+  }
+  return { states, cases: worst };
+}
+
+/** Every state of the buffer as objects, with their envelope (`readEnvelope`, then `readCases`). */
+export function readStates(
+  b: StateBuffer,
+  cases: readonly LoadCase[],
+  legs: readonly Leg[],
+  closedAgainst: (side: number) => string = pipeOfSide(legs),
+): FittingStates {
+  const known = readEnvelope(b, cases, legs, closedAgainst);
+  return { ...readCases(b, cases, legs, known, closedAgainst), envelope: known.envelope };
+}
+
+/**
+ * Each case's pressure at the node, as the worst state per case gives it (every state of a case has the
+ * case's pressure at the node, so the first state of each case serves), without making the states.
+ */
+export function casePressures(b: StateBuffer, cases: readonly LoadCase[]): CasePressures {
+  return (each) => {
+    for (let k = 0; k < b.count; k++)
+      if (k === 0 || b.caseIndex[k] !== b.caseIndex[k - 1]) each(cases[b.caseIndex[k]!]!.id, b.pressure[k]!);
+  };
+}
+
+/** Calls `each` with every case's id and pressure, in case order. */
+export type CasePressures = (each: (caseId: string, pressure: number) => void) => void;

@@ -1,6 +1,6 @@
 import type { Diagnostic, DiagnosticCode, Subject } from '../diagnostics/diagnostic.js';
 import { diagnostic } from '../diagnostics/diagnostic.js';
-import { LIMITS, unusual, type Limit, type LimitId } from './limits.js';
+import { LIMITS, unusual, type LimitId } from './limits.js';
 import type { Project } from './projectSchema.js';
 import { nodeCover, nodeGround, nodeOutsideDiameters } from './groundLevel.js';
 
@@ -20,49 +20,99 @@ const CODE: Partial<Record<LimitId, DiagnosticCode>> = {
   safetyFactor: 'input.factor-unusual',
 };
 
+/** Each soil's checked fields, in the order their warnings are listed: limit, field. */
+const SOIL_CHECKS = [
+  ['bearing', 'bearing'],
+  ['soilUnitWeight', 'unitWeight'],
+  ['frictionAngle', 'frictionAngle'],
+  ['cohesion', 'cohesion'],
+] as const;
+
+/** Whether `v` is outside the usual range of limit `id` (and that limit has a warning code). */
+function isUnusual(id: LimitId, v: number): boolean {
+  const l = LIMITS[id];
+  return CODE[id] !== undefined && l.usual !== undefined && unusual(l, v);
+}
+
+/** The warning for `v` outside the usual range of limit `id`; only called when `isUnusual` said so. */
+function flagged(id: LimitId, v: number, subject: Subject): Diagnostic {
+  const usual = LIMITS[id].usual!;
+  return diagnostic(CODE[id]!, subject, { value: v, low: usual.min, high: usual.max });
+}
+
+/**
+ * m, the largest outside diameter meeting at node i (as `nodeOutsideDiameters` gives it), in a typed
+ * array by node index, or null when two nodes share an id (then only that map answers alike for both).
+ * Every node and pipe is checked on every analysis: the map of ids cost more than the checks.
+ */
+function outsideDiametersByIndex(p: Project, index?: ReadonlyMap<string, number>): Float64Array | null {
+  const nodes = p.nodes;
+  let at = index;
+  if (!at) {
+    const made = new Map<string, number>();
+    for (let i = 0; i < nodes.length; i++) made.set(nodes[i]!.id, i);
+    at = made;
+  }
+  if (at.size !== nodes.length) return null;
+  const od = new Float64Array(nodes.length);
+  for (const pipe of p.pipes) {
+    const a = at.get(pipe.from);
+    if (a !== undefined) od[a] = Math.max(od[a]!, pipe.outsideDiameter);
+    const b = at.get(pipe.to);
+    if (b !== undefined) od[b] = Math.max(od[b]!, pipe.outsideDiameter);
+  }
+  return od;
+}
+
 /**
  * Values inside the hard limits but outside the usual ones (model/limits.ts): each a warning naming the
  * field, since such a value is more often a unit slip than a design. Velocity is |Q·flow factor|/a,
- * the largest over the cases.
+ * the largest over the cases. `index` (node index by id, as the route graph holds it) saves making one.
  */
-export function implausibleInputs(p: Project): Diagnostic[] {
+export function implausibleInputs(p: Project, index?: ReadonlyMap<string, number>): Diagnostic[] {
   const out: Diagnostic[] = [];
-  // The subject is made only for a value out of range: every node and pipe is checked on every analysis.
-  const check = (id: LimitId, v: number, subject: () => Subject) => {
-    const l: Limit = LIMITS[id];
-    const code = CODE[id];
-    if (code && l.usual && unusual(l, v))
-      out.push(diagnostic(code, subject(), { value: v, low: l.usual.min, high: l.usual.max }));
-  };
-  check('density', p.water.density, () => ({ field: 'water.density' }));
+  // Plain loops: the subject is made only for a value out of range, and no closure per node or pipe.
+  if (isUnusual('density', p.water.density)) out.push(flagged('density', p.water.density, { field: 'water.density' }));
   const d = p.design;
-  check('concreteUnitWeight', d.concreteUnitWeight, () => ({ field: 'design.concreteUnitWeight' }));
-  check('blockDepth', d.blockDepth, () => ({ field: 'design.blockDepth' }));
-  if (d.trenchWidth !== null) check('trenchWidth', d.trenchWidth, () => ({ field: 'design.trenchWidth' }));
+  if (isUnusual('concreteUnitWeight', d.concreteUnitWeight))
+    out.push(flagged('concreteUnitWeight', d.concreteUnitWeight, { field: 'design.concreteUnitWeight' }));
+  if (isUnusual('blockDepth', d.blockDepth))
+    out.push(flagged('blockDepth', d.blockDepth, { field: 'design.blockDepth' }));
+  if (d.trenchWidth !== null && isUnusual('trenchWidth', d.trenchWidth))
+    out.push(flagged('trenchWidth', d.trenchWidth, { field: 'design.trenchWidth' }));
   for (const k of ['bearingSafetyFactor', 'upliftSafetyFactor', 'restraintSafetyFactor'] as const)
-    check('safetyFactor', d[k], () => ({ field: `design.${k}` }));
-  p.loadCases.forEach((c, i) =>
-    check('pressure', c.pressure, () => ({ case: c.id, field: `loadCases[${i}].pressure` })),
-  );
-  p.soils.forEach((s, i) => {
-    const at = (f: string) => () => ({ soil: s.id, field: `soils[${i}].${f}` });
-    check('bearing', s.bearing, at('bearing'));
-    check('soilUnitWeight', s.unitWeight, at('unitWeight'));
-    check('frictionAngle', s.frictionAngle, at('frictionAngle'));
-    check('cohesion', s.cohesion, at('cohesion'));
-  });
-  const od = nodeOutsideDiameters(p);
-  p.nodes.forEach((n, i) =>
-    check('cover', nodeCover(n, od.get(n.id) ?? 0), () => ({
-      node: n.id,
-      field: `nodes[${i}].${n.groundLevel === undefined ? 'cover' : 'groundLevel'}`,
-    })),
-  );
+    if (isUnusual('safetyFactor', d[k])) out.push(flagged('safetyFactor', d[k], { field: `design.${k}` }));
+  const cases = p.loadCases;
+  for (let i = 0; i < cases.length; i++) {
+    const c = cases[i]!;
+    if (isUnusual('pressure', c.pressure))
+      out.push(flagged('pressure', c.pressure, { case: c.id, field: `loadCases[${i}].pressure` }));
+  }
+  for (let i = 0; i < p.soils.length; i++) {
+    const s = p.soils[i]!;
+    for (const [id, f] of SOIL_CHECKS)
+      if (isUnusual(id, s[f])) out.push(flagged(id, s[f], { soil: s.id, field: `soils[${i}].${f}` }));
+  }
+  const nodes = p.nodes;
+  const byIndex = outsideDiametersByIndex(p, index);
+  const byId = byIndex ? null : nodeOutsideDiameters(p);
+  const odAt = (i: number): number => (byIndex ? byIndex[i]! : (byId!.get(nodes[i]!.id) ?? 0));
+  for (let i = 0; i < nodes.length; i++) {
+    const n = nodes[i]!;
+    const cover = nodeCover(n, odAt(i));
+    if (isUnusual('cover', cover))
+      out.push(
+        flagged('cover', cover, {
+          node: n.id,
+          field: `nodes[${i}].${n.groundLevel === undefined ? 'cover' : 'groundLevel'}`,
+        }),
+      );
+  }
   // Groundwater above the ground everywhere: no usual range fits every site, but above the whole
   // route it is more often an elevation typed in another unit or datum than a flooded site.
-  if (d.groundwaterElevation !== null && p.nodes.length > 0) {
+  if (d.groundwaterElevation !== null && nodes.length > 0) {
     let highestGround = -Infinity;
-    for (const n of p.nodes) highestGround = Math.max(highestGround, nodeGround(n, od.get(n.id) ?? 0));
+    for (let i = 0; i < nodes.length; i++) highestGround = Math.max(highestGround, nodeGround(nodes[i]!, odAt(i)));
     if (d.groundwaterElevation > highestGround)
       out.push(
         diagnostic(
@@ -74,11 +124,17 @@ export function implausibleInputs(p: Project): Diagnostic[] {
   }
   // a loop, not Math.max(...cases): spread into a call, some 125,000 cases overflow the stack
   let factor = 0;
-  for (const c of p.loadCases) factor = Math.max(factor, Math.abs(c.flowFactor));
-  p.pipes.forEach((pipe, i) => {
-    check('outsideDiameter', pipe.outsideDiameter, () => ({ pipe: pipe.id, field: `pipes[${i}].outsideDiameter` }));
+  for (const c of cases) factor = Math.max(factor, Math.abs(c.flowFactor));
+  const pipes = p.pipes;
+  for (let i = 0; i < pipes.length; i++) {
+    const pipe = pipes[i]!;
+    if (isUnusual('outsideDiameter', pipe.outsideDiameter))
+      out.push(
+        flagged('outsideDiameter', pipe.outsideDiameter, { pipe: pipe.id, field: `pipes[${i}].outsideDiameter` }),
+      );
     const velocity = (Math.abs(pipe.flow) * factor) / ((Math.PI * pipe.insideDiameter ** 2) / 4);
-    check('velocity', velocity, () => ({ pipe: pipe.id, field: `pipes[${i}].flow` }));
-  });
+    if (isUnusual('velocity', velocity))
+      out.push(flagged('velocity', velocity, { pipe: pipe.id, field: `pipes[${i}].flow` }));
+  }
   return out;
 }
