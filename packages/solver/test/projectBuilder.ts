@@ -1,3 +1,5 @@
+import { readFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
 import { parseProject } from '../src/model/parseProject.js';
 import type { Project, ProjectInput } from '../src/model/projectSchema.js';
 import { INCH, PSI, PSF } from '../src/units/conversions.js';
@@ -45,13 +47,19 @@ export function routeInput(spec: RouteSpec): ProjectInput {
   } as ProjectInput;
 }
 
-/** Builds and validates a project; throws with the problems if the fixture itself is wrong. */
-export function route(spec: RouteSpec): Project {
-  const input = routeInput(spec);
+/** Validates a project input; throws with the problems if the fixture itself is wrong. */
+export function validProject(input: unknown): Project {
   const parsed = parseProject(input);
   if (!parsed.ok) throw new Error(parsed.problems.map((p) => `${p.path}: ${p.message}`).join('\n'));
   return parsed.project;
 }
+
+/** The demo project file as the user opens it, not yet checked. */
+export const demoInput = () =>
+  JSON.parse(readFileSync(fileURLToPath(new URL('../../../public/demo/larkspur-rise.json', import.meta.url)), 'utf8'));
+
+/** Builds and validates a project; throws with the problems if the fixture itself is wrong. */
+export const route = (spec: RouteSpec): Project => validProject(routeInput(spec));
 
 /** A bend of deflection `deg` at n2: in along +x, out turned left (counter-clockwise) by `deg`. */
 export function bendRoute(deg: number, od: number, pressure: number): Project {

@@ -1,9 +1,5 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
-import { readFileSync } from 'node:fs';
-import { fileURLToPath } from 'node:url';
-import type { Project } from '../src/model/projectSchema.js';
-import { parseProject } from '../src/model/parseProject.js';
 import { analyseProject } from '../src/analysis/analyse.js';
 import { scheduleOf, type Schedule } from '../src/schedule/scheduleRows.js';
 import { writeScheduleJsonBytes, type ScheduleJsonBytes } from '../src/schedule/scheduleJson.js';
@@ -11,14 +7,7 @@ import { terminalActsOn, terminalSafe } from '../src/cli/terminalText.js';
 import { generateRoute } from '../bench/generateRoute.js';
 import { randomRoute, routeExtras as extras, routeWithExtras as project } from './randomRoutes.js';
 import { scheduleJsonOracle } from './oracle/scheduleJsonOracle.js';
-
-const demoPath = fileURLToPath(new URL('../../../public/demo/larkspur-rise.json', import.meta.url));
-
-function parsed(input: unknown): Project {
-  const r = parseProject(input);
-  if (!r.ok) throw new Error(r.problems.map((p) => `${p.path}: ${p.message}`).join('\n'));
-  return r.project;
-}
+import { demoInput, validProject } from './projectBuilder.js';
 
 /** The writer's bytes joined and read as UTF-8 (refusing anything that is not). */
 function bytesText(s: Schedule, options: ScheduleJsonBytes): string {
@@ -38,9 +27,9 @@ function expectOracleBytes(s: Schedule, chunks = [1, 7, 1 << 16]): void {
 
 describe('the JSON schedule written as bytes is the old serialiser’s text in UTF-8', () => {
   it('on the demo project and generated routes', () => {
-    expectOracleBytes(scheduleOf(analyseProject(parsed(JSON.parse(readFileSync(demoPath, 'utf8'))))));
-    expectOracleBytes(scheduleOf(analyseProject(parsed(generateRoute(50)))), [1, 997, 1 << 16]);
-    expectOracleBytes(scheduleOf(analyseProject(parsed(generateRoute(1000)))), [1 << 16]);
+    expectOracleBytes(scheduleOf(analyseProject(validProject(demoInput()))));
+    expectOracleBytes(scheduleOf(analyseProject(validProject(generateRoute(50)))), [1, 997, 1 << 16]);
+    expectOracleBytes(scheduleOf(analyseProject(validProject(generateRoute(1000)))), [1 << 16]);
   }, 60_000);
 
   it('on random routes (fast-check, fixed seed)', () => {
@@ -53,7 +42,7 @@ describe('the JSON schedule written as bytes is the old serialiser’s text in U
   }, 120_000);
 
   it('with the terminal guard: what terminalSafe makes of the whole text', () => {
-    const p = JSON.parse(readFileSync(demoPath, 'utf8'));
+    const p = demoInput();
     // Escapes a terminal acts on, separators, bidi overrides, quotes, a backslash and a character
     // outside the BMP, in the name, a node id, a label, a soil and a case (as the writer test does).
     p.name = 'Main\u001b[8m \u2028 "quoted" \\ \u{1F6B0}\u007f';
@@ -62,7 +51,7 @@ describe('the JSON schedule written as bytes is the old serialiser’s text in U
     p.soils[1].label = 'Soft clay\r\u001b[1A\u009b2K';
     p.soils[1].bearing = 0;
     p.loadCases[2].label = 'Test\u009b31m\u2066';
-    const s = scheduleOf(analyseProject(parsed(p)));
+    const s = scheduleOf(analyseProject(validProject(p)));
     for (const echo of [false, true]) {
       const expected = terminalSafe(scheduleJsonOracle(s, { echo }));
       expect(expected).not.toBe(scheduleJsonOracle(s, { echo })); // there is something to guard

@@ -1,9 +1,5 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
-import { readFileSync } from 'node:fs';
-import { fileURLToPath } from 'node:url';
-import type { Project } from '../src/model/projectSchema.js';
-import { parseProject } from '../src/model/parseProject.js';
 import { analyseProject } from '../src/analysis/analyse.js';
 import { scheduleOf, type Schedule } from '../src/schedule/scheduleRows.js';
 import { scheduleJson, writeScheduleJson, type ScheduleJsonWriting } from '../src/schedule/scheduleJson.js';
@@ -12,14 +8,7 @@ import { terminalSafe } from '../src/cli/terminalText.js';
 import { generateRoute } from '../bench/generateRoute.js';
 import { randomRoute, routeExtras as extras, routeWithExtras as project } from './randomRoutes.js';
 import { scheduleJsonOracle } from './oracle/scheduleJsonOracle.js';
-
-const demoPath = fileURLToPath(new URL('../../../public/demo/larkspur-rise.json', import.meta.url));
-
-function parsed(input: unknown): Project {
-  const r = parseProject(input);
-  if (!r.ok) throw new Error(r.problems.map((p) => `${p.path}: ${p.message}`).join('\n'));
-  return r.project;
-}
+import { demoInput, validProject } from './projectBuilder.js';
 
 /** The writer's pieces joined. */
 function streamed(s: Schedule, options: ScheduleJsonWriting): string {
@@ -47,14 +36,14 @@ function expectSameText(s: Schedule, chunks = [1, 7, 1 << 16]): void {
 
 describe('the streamed JSON schedule is the text of the serialiser it replaced, byte for byte', () => {
   it('on the demo project', () => {
-    const s = scheduleOf(analyseProject(parsed(JSON.parse(readFileSync(demoPath, 'utf8')))));
+    const s = scheduleOf(analyseProject(validProject(demoInput())));
     expect(s.fittings.length).toBeGreaterThan(5);
     expectSameText(s);
   });
 
   it('on generated routes (the bench’s), with tees, dead ends and vertical bends', () => {
-    expectSameText(scheduleOf(analyseProject(parsed(generateRoute(50)))), [1, 997, 1 << 16]);
-    expectSameText(scheduleOf(analyseProject(parsed(generateRoute(1000)))), [1 << 16]);
+    expectSameText(scheduleOf(analyseProject(validProject(generateRoute(50)))), [1, 997, 1 << 16]);
+    expectSameText(scheduleOf(analyseProject(validProject(generateRoute(1000)))), [1 << 16]);
   }, 60_000);
 
   it('on random routes (fast-check, fixed seed)', () => {
@@ -72,7 +61,7 @@ describe('the streamed JSON schedule is the text of the serialiser it replaced, 
   }, 120_000);
 
   it('through the terminal guard piece by piece gives what terminalSafe made of the whole text', () => {
-    const p = JSON.parse(readFileSync(demoPath, 'utf8'));
+    const p = demoInput();
     // Escapes a terminal acts on, a line and a paragraph separator, a right-to-left override, quotes,
     // a backslash and a character outside the BMP, in the name, a node id, a label, a soil and a case.
     p.name = 'Main\u001b[8m \u2028 "quoted" \\ \u{1F6B0}';
@@ -81,7 +70,7 @@ describe('the streamed JSON schedule is the text of the serialiser it replaced, 
     p.soils[1].label = 'Soft clay\r\u001b[1A\u009b2K';
     p.soils[1].bearing = 0; // so the soil's label is worded in a warning
     p.loadCases[2].label = 'Test\u009b31m\u2066';
-    const s = scheduleOf(analyseProject(parsed(p)));
+    const s = scheduleOf(analyseProject(validProject(p)));
     expect(s.fittings.some((f) => f.warnings.some((w) => w.includes('Soft clay')))).toBe(true);
     for (const v of VARIANTS) {
       const expected = terminalSafe(scheduleJsonOracle(s, v));
