@@ -8,6 +8,7 @@ import { runMarks, runTable, type RunTable } from '../network/runTable.js';
 import type { CaseThrust, ThrustEnvelope } from '../thrust/fittingThrust.js';
 import { waterWeightInFitting } from '../thrust/waterWeight.js';
 import { sizeRestraint, type Restraint } from '../restraint/sizeRestraint.js';
+import { faceTerms, type FaceTerms } from '../restraint/bearingBlock.js';
 import { thrustSteps } from './thrustSteps.js';
 import { sameDiagnostic, uniqueDiagnostics, type Diagnostic } from '../diagnostics/diagnostic.js';
 import type { ProvenanceId } from '../provenance/register.js';
@@ -91,6 +92,7 @@ function solveFitting(
   sums: ThrustSums,
   f: number,
   before: FittingAnalysis | undefined,
+  faces?: FaceTerms,
 ): FittingAnalysis {
   const source = { sums, index: f, loadCases: project.loadCases, density: project.water.density };
   const b = fillStates(sums, f, source.loadCases, source.density);
@@ -100,7 +102,7 @@ function solveFitting(
   const restraint =
     before && sameEnvelope(before.envelope, envelope)
       ? before.restraint
-      : sizeRestraint(project, node, legs, geometry, envelope);
+      : sizeRestraint(project, node, legs, geometry, envelope, false, faces);
   // the findings read each case's pressure from the buffer, before the next fitting fills it
   const diagnostics = fittingDiagnostics(
     node,
@@ -304,6 +306,8 @@ function rescale(prev: Analysis, k: RouteTables, project: Project): Analysis {
   const atNode = byNode(inputs);
   const n = prev.fittings.length;
   const fittings = new Array<FittingAnalysis>(n);
+  // the block search's terms that do not depend on the thrust, per fitting, kept with the route
+  const faces = (k.faces ??= new Array<FaceTerms>(n));
   for (let f = 0; f < n; f++) {
     const old = prev.fittings[f]!;
     const here = atNode.get(old.node.id) ?? NONE;
@@ -319,6 +323,7 @@ function rescale(prev: Analysis, k: RouteTables, project: Project): Analysis {
       k.sums,
       f,
       old,
+      (faces[f] ??= faceTerms()),
     );
   }
   // a case edit changes the pressure on every pipe: its rating checks are made again

@@ -6,6 +6,7 @@ import { runsOf, type RunTable } from '../network/runTable.js';
 import type { Run } from '../network/runs.js';
 import type { Diagnostic } from '../diagnostics/diagnostic.js';
 import type { ThrustSums } from './thrustSums.js';
+import type { FaceTerms } from '../restraint/bearingBlock.js';
 import type { Analysis, FittingAnalysis } from './analyse.js';
 
 /**
@@ -23,6 +24,11 @@ export interface RouteTables {
   /** fitting index per node index, −1 for a node that is not a fitting */
   fittingAt: Int32Array;
   sums: ThrustSums;
+  /**
+   * per fitting, the block search's terms that do not depend on the thrust, made by the first load-case
+   * edit and read by the next ones (a test-pressure slider sizes every block again at each step)
+   */
+  faces?: FaceTerms[];
   /** the maps made from these tables so far, shared by every analysis of the same route */
   views: RouteMaps;
 }

@@ -6,8 +6,8 @@ import {
   ovesenDepthTerm3,
   ovesenFactor,
   passivePerWidth,
+  passiveConstants,
   passiveResistance,
-  rankinePassiveCoefficient,
 } from './passiveResistance.js';
 import { REGISTER } from '../provenance/register.js';
 import { roundDownTo, roundUpTo } from './rounding.js';
@@ -41,6 +41,84 @@ export interface BearingBlockInput {
   waterUnitWeight: number;
   /** build the calculation record too (only when someone reads it) */
   record?: boolean;
+  /**
+   * the fitting's terms per face height from an earlier sizing, kept by a caller that sizes the same
+   * fitting again for another thrust (a load-case edit); filled and checked here (`faceTerms`)
+   */
+  faces?: FaceTerms | undefined;
+}
+
+/**
+ * The parts of the face search that do not depend on the thrust, per face height: the passive
+ * resistance per metre of width and Ovesen's two depth terms. A pressure change sizes every block
+ * again for a new thrust over the same heights, soil and depths; these were a third of that. Each
+ * entry is worked out by the same arithmetic as the search itself, so the blocks are the same.
+ */
+export interface FaceTerms {
+  centreDepth: number;
+  step: number;
+  shortest: number;
+  heights: number;
+  soil: BearingBlockInput['soil'] | null;
+  unitWeight: number;
+  frictionAngle: number;
+  cohesion: number;
+  waterDepth: number | null;
+  waterUnitWeight: number;
+  /** per height k: resistance per width, 1.1·E⁴, 0.4·(Kp − Ka)·E³ (NaN: not yet worked out) */
+  terms: Float64Array;
+}
+
+/** An empty table for `BearingBlockInput.faces`: the first sizing fills it. */
+export const faceTerms = (): FaceTerms => ({
+  centreDepth: NaN,
+  step: NaN,
+  shortest: NaN,
+  heights: -1,
+  soil: null,
+  unitWeight: NaN,
+  frictionAngle: NaN,
+  cohesion: NaN,
+  waterDepth: null,
+  waterUnitWeight: NaN,
+  terms: new Float64Array(0),
+});
+
+/** `t`, emptied for other inputs unless it was filled for these (a kept table never answers for others). */
+function termsFor(
+  t: FaceTerms,
+  i: BearingBlockInput,
+  centreDepth: number,
+  shortest: number,
+  heights: number,
+): Float64Array {
+  const s = i.soil;
+  if (
+    t.centreDepth === centreDepth &&
+    t.step === i.step &&
+    t.shortest === shortest &&
+    t.heights === heights &&
+    t.soil === s &&
+    t.unitWeight === s.unitWeight &&
+    t.frictionAngle === s.frictionAngle &&
+    t.cohesion === s.cohesion &&
+    t.waterDepth === i.waterDepth &&
+    t.waterUnitWeight === i.waterUnitWeight
+  )
+    return t.terms;
+  t.centreDepth = centreDepth;
+  t.step = i.step;
+  t.shortest = shortest;
+  t.heights = heights;
+  t.soil = s;
+  t.unitWeight = s.unitWeight;
+  t.frictionAngle = s.frictionAngle;
+  t.cohesion = s.cohesion;
+  t.waterDepth = i.waterDepth;
+  t.waterUnitWeight = i.waterUnitWeight;
+  if (t.terms.length < 3 * (heights + 1)) t.terms = new Float64Array(3 * (heights + 1));
+  t.terms.fill(NaN);
+  return t.terms;
 }
 
 export interface BearingBlock {
@@ -142,10 +220,7 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
   // The search below weighs many faces of one soil and depth: Kp, √Kp and (Kp − Ka)^⅔ once per block,
   // the depth terms once per height, then a few operations per width — the arithmetic of
   // passiveResistance × ovesenFactor in the same order, so `resistance` gives the same numbers.
-  const kp = rankinePassiveCoefficient(i.soil.frictionAngle);
-  const sqrtKp = Math.sqrt(kp);
-  const d = kp - 1 / kp;
-  const d23 = d ** (2 / 3);
+  const { kp, sqrtKp, d, d23 } = passiveConstants(i.soil.frictionAngle);
   const better = (aw: number, ah: number, bw: number, bh: number) =>
     aw < 0 ||
     bw * bh < aw * ah - 1e-12 ||
@@ -157,6 +232,10 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
   let chosenH = -1;
   const heights = Math.round((tallest - shortest) / i.step);
   const heightAt = (k: number) => shortest + k * i.step;
+  const kept = i.faces ? termsFor(i.faces, i, centreDepth, shortest, heights) : null;
+  // the chosen face's resistance per width and Ovesen factor, as `resistance` would give them
+  let chosenPerWidth = 0;
+  let chosenShape = 1;
   for (let k = 0; k <= heights; k++) {
     const height = heightAt(k);
     const wMax = widest(height);
@@ -171,21 +250,35 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
     // The passive resistance grows with the width: find the narrowest face that holds.
     const top = centreDepth - height / 2;
     const bottom = centreDepth + height / 2;
-    const perWidth = passivePerWidth(
-      kp,
-      sqrtKp,
-      top,
-      bottom,
-      i.soil.unitWeight,
-      i.soil.cohesion,
-      i.waterDepth,
-      i.waterUnitWeight,
-    );
     const h = bottom - Math.max(0, top);
     const flat = !(h > 0) || d <= 0;
-    const e = 1 - h / bottom;
-    const term4 = flat ? 0 : ovesenDepthTerm(e);
-    const term3 = flat ? 0 : ovesenDepthTerm3(d, e);
+    let perWidth: number;
+    let term4: number;
+    let term3: number;
+    if (kept && !Number.isNaN(kept[3 * k]!)) {
+      perWidth = kept[3 * k]!;
+      term4 = kept[3 * k + 1]!;
+      term3 = kept[3 * k + 2]!;
+    } else {
+      perWidth = passivePerWidth(
+        kp,
+        sqrtKp,
+        top,
+        bottom,
+        i.soil.unitWeight,
+        i.soil.cohesion,
+        i.waterDepth,
+        i.waterUnitWeight,
+      );
+      const e = 1 - h / bottom;
+      term4 = flat ? 0 : ovesenDepthTerm(e);
+      term3 = flat ? 0 : ovesenDepthTerm3(d, e);
+      if (kept) {
+        kept[3 * k] = perWidth;
+        kept[3 * k + 1] = term4;
+        kept[3 * k + 2] = term3;
+      }
+    }
     const steps = Math.floor((wMax - wBearing) / i.step + 1e-9);
     const holds = (n: number) => {
       const width = wBearing + n * i.step;
@@ -207,6 +300,8 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
     if (better(chosenW, chosenH, width, height)) {
       chosenW = width;
       chosenH = height;
+      chosenPerWidth = perWidth;
+      chosenShape = flat || !(width > 0) ? 1 : ovesenAt(d23, term4, term3, h, width);
     }
   }
   const byBearing: Face | null = bearingW < 0 ? null : { width: bearingW, height: bearingH };
@@ -246,7 +341,9 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
     diagnostics.push(diagnostic('block.wide-face', {}, { faceWidth: width, faceHeight: height }));
   }
   const { top, bottom } = faceDepths(height);
-  const passive = resistance(chosen);
+  // `resistance(chosen)`, from the terms the search used for the chosen face (the same arithmetic)
+  const twoD = width * chosenPerWidth;
+  const passive = { twoD, shape: chosenShape, total: twoD * chosenShape };
   const passiveRatio = passive.total / i.thrust;
   const concreteVolume = width * height * i.blockDepth;
   const steps: CalcStep[] = !i.record

@@ -5,7 +5,7 @@ import type { Project } from '../model/projectSchema.js';
 import type { ThrustEnvelope } from '../thrust/fittingThrust.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { REGISTER } from '../provenance/register.js';
-import { sizeBearingBlock, type BearingBlock } from './bearingBlock.js';
+import { sizeBearingBlock, type BearingBlock, type FaceTerms } from './bearingBlock.js';
 import { roundUpTo } from './rounding.js';
 import { sizeGravityAnchor, type AnchorResult, type GravityAnchor } from './gravityAnchor.js';
 import { sizeTrenchBottom, type TrenchBottomBearing } from './trenchBottom.js';
@@ -76,6 +76,7 @@ export function concreteRestraint(
   total: number,
   site: FittingSite,
   record: boolean,
+  faces?: FaceTerms,
 ): ConcreteRestraint {
   const { design } = project;
   const { soil } = site;
@@ -106,7 +107,7 @@ export function concreteRestraint(
       record,
     });
 
-  const blocks = hasHorizontal ? sizeBlocks(project, node, legs, envelope, site, record) : null;
+  const blocks = hasHorizontal ? sizeBlocks(project, node, legs, envelope, site, record, faces) : null;
   if (!hasUp) {
     if (blocks) useBlocks(out, blocks);
   } else if (!blocks) {
@@ -228,6 +229,7 @@ function sizeBlocks(
   envelope: ThrustEnvelope,
   site: FittingSite,
   record: boolean,
+  faces: FaceTerms | undefined,
 ): SizedBlocks {
   const { design } = project;
   const { soil } = site;
@@ -263,6 +265,8 @@ function sizeBlocks(
       waterDepth: site.waterDepth,
       waterUnitWeight: site.waterUnitWeight,
       record,
+      // both blocks of a fitting stand at its depths in its soil: one table serves them
+      faces,
     });
     for (const step of r.steps) out.steps.push(step);
     for (const d of r.diagnostics) out.diagnostics.push({ ...d, subject: { ...d.subject, node } });

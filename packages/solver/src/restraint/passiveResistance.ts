@@ -9,6 +9,35 @@ export function rankinePassiveCoefficient(frictionAngle: number): number {
   return (1 + s) / (1 - s);
 }
 
+/** What a block's face search needs of the soil's friction angle: Kp, √Kp, Kp − Ka and (Kp − Ka)^⅔. */
+export interface PassiveConstants {
+  frictionAngle: number;
+  kp: number;
+  sqrtKp: number;
+  /** Kp − Ka = Kp − 1/Kp */
+  d: number;
+  /** (Kp − Ka)^⅔ */
+  d23: number;
+}
+
+let lastConstants: PassiveConstants = passiveConstantsOf(NaN);
+
+function passiveConstantsOf(frictionAngle: number): PassiveConstants {
+  const kp = rankinePassiveCoefficient(frictionAngle);
+  const d = kp - 1 / kp;
+  return { frictionAngle, kp, sqrtKp: Math.sqrt(kp), d, d23: d ** (2 / 3) };
+}
+
+/**
+ * `passiveConstantsOf`, remembered for the last friction angle asked: a route's blocks are sized one
+ * after the other, mostly in one soil, and the power and the sine were a tenth of sizing a block
+ * (docs/performance.md). The same arithmetic, so the same numbers.
+ */
+export function passiveConstants(frictionAngle: number): PassiveConstants {
+  if (lastConstants.frictionAngle !== frictionAngle) lastConstants = passiveConstantsOf(frictionAngle);
+  return lastConstants;
+}
+
 /**
  * Effective vertical stress at depth z below ground, Pa: γ·z above the water table at depth zw,
  * γ·zw + (γ − γw)·(z − zw) below it (the soil's unit weight taken as saturated below the water

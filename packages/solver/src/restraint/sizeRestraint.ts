@@ -6,7 +6,7 @@ import type { Project, ProjectNode } from '../model/projectSchema.js';
 import type { ThrustEnvelope } from '../thrust/fittingThrust.js';
 import { diagnostic, sameDiagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { reachAlong } from './routeReach.js';
-import type { BearingBlock } from './bearingBlock.js';
+import type { BearingBlock, FaceTerms } from './bearingBlock.js';
 import type { GravityAnchor } from './gravityAnchor.js';
 import type { TrenchBottomBearing } from './trenchBottom.js';
 import { restrainedLength, type RestrainedLeg } from './restrainedLength.js';
@@ -42,6 +42,8 @@ export interface Restraint {
  * Sizes the restraint of one fitting from its thrust envelope: concrete (block, anchor, trench-bottom
  * bearing) unless the node asks for restrained joints or the soil cannot bear; restrained joint lengths
  * then, for the governing thrust and, where it reverses, for the reverse thrust too (longest per pipe).
+ * `faces`, kept by a caller that sizes the same fitting again for other thrusts, holds the block search's
+ * terms that do not depend on the thrust (bearingBlock.ts).
  */
 export function sizeRestraint(
   project: Project,
@@ -50,6 +52,7 @@ export function sizeRestraint(
   geometry: FittingGeometry,
   envelope: ThrustEnvelope,
   record = false,
+  faces?: FaceTerms,
 ): Restraint {
   const site = fittingSite(project, node, legs);
   const total = norm(envelope.governing.total);
@@ -68,7 +71,7 @@ export function sizeRestraint(
   };
   let needJoints = node.restraint === 'joints';
   if (node.restraint === 'block') {
-    const c = concreteRestraint(project, node.id, legs, envelope, total, site, record);
+    const c = concreteRestraint(project, node.id, legs, envelope, total, site, record, faces);
     out.block = c.block;
     out.reverseBlock = c.reverseBlock;
     out.anchor = c.anchor;
