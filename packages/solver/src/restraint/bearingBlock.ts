@@ -171,6 +171,64 @@ interface Face {
   height: number;
 }
 
+/** The better of two faces: less area, or as much and squarer (−1: no face yet). */
+function better(aw: number, ah: number, bw: number, bh: number): boolean {
+  return (
+    aw < 0 ||
+    bw * bh < aw * ah - 1e-12 ||
+    (Math.abs(bw * bh - aw * ah) <= 1e-12 && Math.abs(Math.log(bw / bh)) < Math.abs(Math.log(aw / ah)))
+  );
+}
+
+/** The widest face the rule allows at height `h` (within the trench where the face stands across it). */
+function widestAt(
+  h: number,
+  tallest: number,
+  limits: (typeof REGISTER)['block.face-limits']['value'],
+  step: number,
+  trenchWidth: number | undefined,
+): number {
+  return h >= tallest - 1e-9
+    ? roundDownTo(Math.min(limits.widest * h, limits.widestMetres), step)
+    : Math.min(limits.wide * h, trenchWidth ?? Infinity);
+}
+
+/**
+ * A face `width` wide, at a height whose resistance per width and Ovesen depth terms are given, holds
+ * `needed` (SF·T): the arithmetic of passiveResistance × ovesenFactor, in the same order.
+ */
+function faceHolds(
+  width: number,
+  perWidth: number,
+  flat: boolean,
+  d23: number,
+  term4: number,
+  term3: number,
+  h: number,
+  needed: number,
+): boolean {
+  const shape = flat || !(width > 0) ? 1 : ovesenAt(d23, term4, term3, h, width);
+  return width * perWidth * shape >= needed;
+}
+
+/** A face's passive resistance: Rankine in 2-D, Ovesen's factor, and their product. */
+function faceResistance(i: BearingBlockInput, centreDepth: number, f: Face) {
+  const top = centreDepth - f.height / 2;
+  const bottom = centreDepth + f.height / 2;
+  const twoD = passiveResistance({
+    width: f.width,
+    top,
+    bottom,
+    unitWeight: i.soil.unitWeight,
+    frictionAngle: i.soil.frictionAngle,
+    cohesion: i.soil.cohesion,
+    waterDepth: i.waterDepth,
+    waterUnitWeight: i.waterUnitWeight,
+  });
+  const shape = ovesenFactor({ frictionAngle: i.soil.frictionAngle, top, bottom, width: f.width });
+  return { twoD, shape, total: twoD * shape };
+}
+
 /**
  * Sizes a concrete bearing block against undisturbed soil (DIPRA bearing method, Rankine
  * passive resistance, DIPRA/AWWA M23 face proportions). The face
@@ -196,49 +254,27 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
       diagnostic('block.taller-than-cover', {}, { faceHeight: shortest, bottomDepth: 2 * shortest, centreDepth }),
     );
   }
-  const widest = (h: number) =>
-    h >= tallest - 1e-9
-      ? roundDownTo(Math.min(limits.widest * h, limits.widestMetres), i.step)
-      : Math.min(limits.wide * h, i.trenchWidth ?? Infinity);
-  const faceDepths = (h: number) => ({ top: centreDepth - h / 2, bottom: centreDepth + h / 2 });
-  const resistance = (f: Face) => {
-    const { top, bottom } = faceDepths(f.height);
-    const twoD = passiveResistance({
-      width: f.width,
-      top,
-      bottom,
-      unitWeight: i.soil.unitWeight,
-      frictionAngle: i.soil.frictionAngle,
-      cohesion: i.soil.cohesion,
-      waterDepth: i.waterDepth,
-      waterUnitWeight: i.waterUnitWeight,
-    });
-    const shape = ovesenFactor({ frictionAngle: i.soil.frictionAngle, top, bottom, width: f.width });
-    return { twoD, shape, total: twoD * shape };
-  };
   const needed = i.safetyFactor * i.thrust;
   // The search below weighs many faces of one soil and depth: Kp, √Kp and (Kp − Ka)^⅔ once per block,
   // the depth terms once per height, then a few operations per width — the arithmetic of
   // passiveResistance × ovesenFactor in the same order, so `resistance` gives the same numbers.
   const { kp, sqrtKp, d, d23 } = passiveConstants(i.soil.frictionAngle);
-  const better = (aw: number, ah: number, bw: number, bh: number) =>
-    aw < 0 ||
-    bw * bh < aw * ah - 1e-12 ||
-    (Math.abs(bw * bh - aw * ah) <= 1e-12 && Math.abs(Math.log(bw / bh)) < Math.abs(Math.log(aw / ah)));
   // Faces as two numbers each (−1: none yet): a block is sized at every fitting on every edit.
   let bearingW = -1;
   let bearingH = -1;
   let chosenW = -1;
   let chosenH = -1;
   const heights = Math.round((tallest - shortest) / i.step);
-  const heightAt = (k: number) => shortest + k * i.step;
+  // The loop below makes no closure and no object: it runs for every block on every edit, and what a
+  // closure in it captured (a context per height, each number in it boxed) was most of the garbage
+  // an analysis made.
   const kept = i.faces ? termsFor(i.faces, i, centreDepth, shortest, heights) : null;
   // the chosen face's resistance per width and Ovesen factor, as `resistance` would give them
   let chosenPerWidth = 0;
   let chosenShape = 1;
   for (let k = 0; k <= heights; k++) {
-    const height = heightAt(k);
-    const wMax = widest(height);
+    const height = shortest + k * i.step;
+    const wMax = widestAt(height, tallest, limits, i.step, i.trenchWidth);
     const wBearing = Math.max(shortest, roundUpTo(area / height, i.step));
     if (wBearing > wMax + 1e-9) continue;
     if (better(bearingW, bearingH, wBearing, height)) {
@@ -280,19 +316,15 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
       }
     }
     const steps = Math.floor((wMax - wBearing) / i.step + 1e-9);
-    const holds = (n: number) => {
-      const width = wBearing + n * i.step;
-      const shape = flat || !(width > 0) ? 1 : ovesenAt(d23, term4, term3, h, width);
-      return width * perWidth * shape >= needed;
-    };
+    const step = i.step;
     let lo = 0;
-    if (!holds(0)) {
-      if (!holds(steps)) continue;
+    if (!faceHolds(wBearing, perWidth, flat, d23, term4, term3, h, needed)) {
+      if (!faceHolds(wBearing + steps * step, perWidth, flat, d23, term4, term3, h, needed)) continue;
       lo = 1;
       let hi = steps;
       while (lo < hi) {
         const mid = (lo + hi) >> 1;
-        if (holds(mid)) hi = mid;
+        if (faceHolds(wBearing + mid * step, perWidth, flat, d23, term4, term3, h, needed)) hi = mid;
         else lo = mid + 1;
       }
     }
@@ -304,14 +336,13 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
       chosenShape = flat || !(width > 0) ? 1 : ovesenAt(d23, term4, term3, h, width);
     }
   }
-  const byBearing: Face | null = bearingW < 0 ? null : { width: bearingW, height: bearingH };
-  const chosen: Face | null = chosenW < 0 ? null : { width: chosenW, height: chosenH };
-  if (!chosen) {
+  if (chosenW < 0) {
     // The strongest face within the limits, for the message.
+    const widest = (h: number) => widestAt(h, tallest, limits, i.step, i.trenchWidth);
     let strongest = { face: { width: widest(shortest), height: shortest }, resistance: 0 };
     for (let k = 0; k <= heights; k++) {
-      const face = { width: widest(heightAt(k)), height: heightAt(k) };
-      const r = resistance(face).total;
+      const face = { width: widest(shortest + k * i.step), height: shortest + k * i.step };
+      const r = faceResistance(i, centreDepth, face).total;
       if (r > strongest.resistance) strongest = { face, resistance: r };
     }
     diagnostics.push(
@@ -330,9 +361,10 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
     );
     return { block: null, bearingArea: area, steps: [], diagnostics };
   }
-  const { width, height } = chosen;
+  const width = chosenW;
+  const height = chosenH;
   const governs =
-    byBearing && byBearing.width === width && byBearing.height === height
+    bearingW >= 0 && bearingW === width && bearingH === height
       ? width === shortest && height === shortest && shortest * shortest > area
         ? 'minimum'
         : 'bearing'
@@ -340,7 +372,8 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
   if (width > 2 * height + 1e-9) {
     diagnostics.push(diagnostic('block.wide-face', {}, { faceWidth: width, faceHeight: height }));
   }
-  const { top, bottom } = faceDepths(height);
+  const top = centreDepth - height / 2;
+  const bottom = centreDepth + height / 2;
   // `resistance(chosen)`, from the terms the search used for the chosen face (the same arithmetic)
   const twoD = width * chosenPerWidth;
   const passive = { twoD, shape: chosenShape, total: twoD * chosenShape };
