@@ -13,7 +13,7 @@ import { thrustSteps } from './thrustSteps.js';
 import { sameDiagnostic, uniqueDiagnostics, type Diagnostic } from '../diagnostics/diagnostic.js';
 import type { ProvenanceId } from '../provenance/register.js';
 import type { CalcStep } from './calcRecord.js';
-import { implausibleInputs } from '../model/plausibility.js';
+import { implausibleInputs, type PlausibilityKept } from '../model/plausibility.js';
 import { pipeRatingChecks } from '../pressure/pipeRating.js';
 import {
   casePressures,
@@ -199,7 +199,8 @@ function startAssembly(
   prev: Reuse,
 ): Assembly {
   const { marks, order: markOrder } = runMarks(runs, (i) => isFitting(geometry[i]!.kind));
-  const inputs = implausibleInputs(project, graph.index);
+  const plausible: PlausibilityKept = {};
+  const inputs = implausibleInputs(project, graph.index, plausible);
   const order: number[] = [];
   const fittingAt = new Int32Array(graph.nodes.length).fill(-1);
   for (let r = 0; r < runs.letters.length; r++) {
@@ -212,7 +213,17 @@ function startAssembly(
   }
   return {
     project,
-    route: { graph, runs, marks, markOrder, geometry, fittingAt, sums: thrustSums(order.length), views: {} },
+    route: {
+      graph,
+      runs,
+      marks,
+      markOrder,
+      geometry,
+      fittingAt,
+      sums: thrustSums(order.length),
+      plausible,
+      views: {},
+    },
     prev,
     inputs,
     atNode: byNode(inputs),
@@ -302,7 +313,7 @@ function assemble(project: Project, graph: RouteGraph, geometry: FittingGeometry
  * restraint kept where its envelope did not change.
  */
 function rescale(prev: Analysis, k: RouteTables, project: Project): Analysis {
-  const inputs = implausibleInputs(project, k.graph.index);
+  const inputs = implausibleInputs(project, k.graph.index, k.plausible);
   const atNode = byNode(inputs);
   const n = prev.fittings.length;
   const fittings = new Array<FittingAnalysis>(n);

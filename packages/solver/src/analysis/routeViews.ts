@@ -7,6 +7,7 @@ import type { Run } from '../network/runs.js';
 import type { Diagnostic } from '../diagnostics/diagnostic.js';
 import type { ThrustSums } from './thrustSums.js';
 import type { FaceTerms } from '../restraint/bearingBlock.js';
+import type { PlausibilityKept } from '../model/plausibility.js';
 import type { Analysis, FittingAnalysis } from './analyse.js';
 
 /**
@@ -29,6 +30,8 @@ export interface RouteTables {
    * edit and read by the next ones (a test-pressure slider sizes every block again at each step)
    */
   faces?: FaceTerms[];
+  /** what the plausibility check found of the route's nodes, for a load-case edit to keep */
+  plausible: PlausibilityKept;
   /** the maps made from these tables so far, shared by every analysis of the same route */
   views: RouteMaps;
 }

@@ -64,12 +64,59 @@ function outsideDiametersByIndex(p: Project, index?: ReadonlyMap<string, number>
   return od;
 }
 
+/** What the check of a route's nodes found, kept for the next check of the same route (`implausibleInputs`). */
+export interface PlausibilityKept {
+  route?: { nodes: Project['nodes']; pipes: Project['pipes']; design: Project['design']; found: Diagnostic[] };
+}
+
+/** Unusual cover at each node, and groundwater above the whole route: they read nodes, pipes and design only. */
+function routeFindings(p: Project, index: ReadonlyMap<string, number> | undefined): Diagnostic[] {
+  const found: Diagnostic[] = [];
+  const d = p.design;
+  const nodes = p.nodes;
+  const byIndex = outsideDiametersByIndex(p, index);
+  const byId = byIndex ? null : nodeOutsideDiameters(p);
+  const odAt = (i: number): number => (byIndex ? byIndex[i]! : (byId!.get(nodes[i]!.id) ?? 0));
+  for (let i = 0; i < nodes.length; i++) {
+    const n = nodes[i]!;
+    const cover = nodeCover(n, odAt(i));
+    if (isUnusual('cover', cover))
+      found.push(
+        flagged('cover', cover, {
+          node: n.id,
+          field: `nodes[${i}].${n.groundLevel === undefined ? 'cover' : 'groundLevel'}`,
+        }),
+      );
+  }
+  // Groundwater above the ground everywhere: no usual range fits every site, but above the whole
+  // route it is more often an elevation typed in another unit or datum than a flooded site.
+  if (d.groundwaterElevation !== null && nodes.length > 0) {
+    let highestGround = -Infinity;
+    for (let i = 0; i < nodes.length; i++) highestGround = Math.max(highestGround, nodeGround(nodes[i]!, odAt(i)));
+    if (d.groundwaterElevation > highestGround)
+      found.push(
+        diagnostic(
+          'input.groundwater-above-ground',
+          { field: 'design.groundwaterElevation' },
+          { groundwater: d.groundwaterElevation, highestGround },
+        ),
+      );
+  }
+  return found;
+}
+
 /**
  * Values inside the hard limits but outside the usual ones (model/limits.ts): each a warning naming the
  * field, since such a value is more often a unit slip than a design. Velocity is |Q·flow factor|/a,
  * the largest over the cases. `index` (node index by id, as the route graph holds it) saves making one.
+ * `kept`, held by the caller for one route, keeps the findings about the nodes for the next check of
+ * the same nodes, pipes and design (a load-case edit checks the cases and the pipes' velocities only).
  */
-export function implausibleInputs(p: Project, index?: ReadonlyMap<string, number>): Diagnostic[] {
+export function implausibleInputs(
+  p: Project,
+  index?: ReadonlyMap<string, number>,
+  kept?: PlausibilityKept,
+): Diagnostic[] {
   const out: Diagnostic[] = [];
   // Plain loops: the subject is made only for a value out of range, and no closure per node or pipe.
   if (isUnusual('density', p.water.density)) out.push(flagged('density', p.water.density, { field: 'water.density' }));
@@ -93,35 +140,12 @@ export function implausibleInputs(p: Project, index?: ReadonlyMap<string, number
     for (const [id, f] of SOIL_CHECKS)
       if (isUnusual(id, s[f])) out.push(flagged(id, s[f], { soil: s.id, field: `soils[${i}].${f}` }));
   }
-  const nodes = p.nodes;
-  const byIndex = outsideDiametersByIndex(p, index);
-  const byId = byIndex ? null : nodeOutsideDiameters(p);
-  const odAt = (i: number): number => (byIndex ? byIndex[i]! : (byId!.get(nodes[i]!.id) ?? 0));
-  for (let i = 0; i < nodes.length; i++) {
-    const n = nodes[i]!;
-    const cover = nodeCover(n, odAt(i));
-    if (isUnusual('cover', cover))
-      out.push(
-        flagged('cover', cover, {
-          node: n.id,
-          field: `nodes[${i}].${n.groundLevel === undefined ? 'cover' : 'groundLevel'}`,
-        }),
-      );
-  }
-  // Groundwater above the ground everywhere: no usual range fits every site, but above the whole
-  // route it is more often an elevation typed in another unit or datum than a flooded site.
-  if (d.groundwaterElevation !== null && nodes.length > 0) {
-    let highestGround = -Infinity;
-    for (let i = 0; i < nodes.length; i++) highestGround = Math.max(highestGround, nodeGround(nodes[i]!, odAt(i)));
-    if (d.groundwaterElevation > highestGround)
-      out.push(
-        diagnostic(
-          'input.groundwater-above-ground',
-          { field: 'design.groundwaterElevation' },
-          { groundwater: d.groundwaterElevation, highestGround },
-        ),
-      );
-  }
+  const route = kept
+    ? kept.route && kept.route.nodes === p.nodes && kept.route.pipes === p.pipes && kept.route.design === d
+      ? kept.route.found
+      : (kept.route = { nodes: p.nodes, pipes: p.pipes, design: d, found: routeFindings(p, index) }).found
+    : routeFindings(p, index);
+  for (let i = 0; i < route.length; i++) out.push(route[i]!);
   // a loop, not Math.max(...cases): spread into a call, some 125,000 cases overflow the stack
   let factor = 0;
   for (const c of cases) factor = Math.max(factor, Math.abs(c.flowFactor));
