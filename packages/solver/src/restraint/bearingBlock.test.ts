@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { sizeBearingBlock, type BearingBlockInput } from './bearingBlock.js';
+import { faceTerms, sizeBearingBlock, type BearingBlockInput } from './bearingBlock.js';
 import { FOOT, INCH, PSF } from '../units/conversions.js';
 import { LBF } from '../../test/projectBuilder.js';
 import { expectClose } from '../../test/tolerance.js';
@@ -133,5 +133,36 @@ describe('bearing block area A = SF·T/σ (DIPRA form; docs/check-values.md CV-1
   it('estimates concrete as face × block depth', () => {
     const b = sizeBearingBlock(base()).block!;
     expectClose(b.concreteVolume, b.faceWidth * b.faceHeight * 0.6, 1e-12);
+  });
+
+  // Invariant: the face terms a caller keeps between sizings (a load-case edit) change no block, and a
+  // table made for other depths, soil or groundwater is worked out again rather than read.
+  it('gives the same block, number for number, with the face terms kept from earlier sizings', () => {
+    const kept = faceTerms();
+    // each variant differs from the one before in one input
+    const v: Partial<BearingBlockInput>[] = [
+      { soil: { unitWeight: 17000, frictionAngle: 26, cohesion: 0 }, step: 0.05 },
+    ];
+    const next = (change: (last: Partial<BearingBlockInput>) => Partial<BearingBlockInput>) =>
+      v.push({ ...v[v.length - 1]!, ...change(v[v.length - 1]!) });
+    next(() => ({ waterDepth: 0.4 }));
+    next(() => ({ waterUnitWeight: 1025 * 9.80665 }));
+    next(() => ({ cover: 4 * FOOT + 0.01 })); // a centimetre deeper: the same face heights, other terms
+    next((l) => ({ soil: { ...l.soil!, unitWeight: 18500 } }));
+    next((l) => ({ soil: { ...l.soil!, frictionAngle: 34 } }));
+    next((l) => ({ soil: { ...l.soil!, cohesion: 5000 } }));
+    next(() => ({ step: 0.1 }));
+    next(() => ({ outsideDiameter: 0.6, trenchWidth: 1.2 }));
+    const variants = v;
+    let compared = 0;
+    // each variant's thrusts in turn (the table is read), then the next variant (it is made again)
+    for (const v of [...variants, ...variants])
+      for (const t of [4e3, 3e4, 9e4, 2.5e5, 6e4, 1.2e4]) {
+        const fresh = sizeBearingBlock(base({ ...v, thrust: t }));
+        const again = sizeBearingBlock(base({ ...v, thrust: t, faces: kept }));
+        expect(again).toEqual(fresh);
+        if (fresh.block) compared++;
+      }
+    expect(compared).toBeGreaterThan(60);
   });
 });
