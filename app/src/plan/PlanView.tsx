@@ -12,21 +12,20 @@ import {
 import { Layer, Shape, Stage } from 'react-konva/lib/ReactKonvaCore.js';
 import type { Context } from 'konva/lib/Context';
 import type { Shape as KonvaShape } from 'konva/lib/Shape';
-import { analyse, FOOT, imageToPlan } from '@mainbrace/solver';
+import { analyse, FOOT } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp, useAppStore } from '../state/StoreContext.js';
 import { toPlan, type ScreenPoint } from '../state/viewport.js';
-import { dragScene, planScene } from './planScene.js';
+import { planScene } from './planScene.js';
 import { drawArrows, drawFittings, drawPipes, drawRestraints, placeTags } from './drawRoute.js';
 import { LabelSpace } from './labelSpace.js';
 import { drawRestrainedZones } from './drawZones.js';
 import { drawGrid } from './drawGrid.js';
-import { drawHover, drawOverlay } from './drawOverlay.js';
 import { PlanOverlays } from './PlanOverlays.js';
-import { liveChanges, type LiveChange } from './liveChange.js';
+import type { LiveChange } from './liveChange.js';
 import { caseNames } from '../state/caseNames.js';
-import { drawLiveChange } from './drawLiveChange.js';
 import { EMPTY_SELECTION } from '../state/slices.js';
-import { drawPicks, drawUnderlay } from './drawUnderlay.js';
+import { drawUnderlay } from './drawUnderlay.js';
+import { useInteractiveLayer } from './useInteractiveLayer.js';
 import { useUnderlayImage } from '../state/underlayImage.js';
 import { PlanHints } from './PlanHints.js';
 import { capturesPress, sendPlanEvent } from '../tools/planBridge.js';
@@ -95,7 +94,19 @@ export function PlanView() {
         : null,
     [liveBase, caseView],
   );
-  const changes = useMemo(() => (before ? liveChanges(before.analysis, analysis) : NO_CHANGES), [before, analysis]);
+  // The interactive layer's code loads with the input tools, or as soon as there is something for it to show.
+  const busy =
+    !!preview ||
+    !!liveBase ||
+    hover.kind !== 'none' ||
+    draw.phase !== 'idle' ||
+    !!selectBox ||
+    (!!underlayPick && underlayPick.length > 0);
+  const live = useInteractiveLayer(busy);
+  const changes = useMemo(
+    () => (before && live ? live.liveChanges(before.analysis, analysis) : NO_CHANGES),
+    [live, before, analysis],
+  );
   const box = useRef<HTMLDivElement>(null);
   const coords = useRef<HTMLSpanElement>(null);
 
@@ -138,8 +149,8 @@ export function PlanView() {
     [current, before],
   );
   const moving = useMemo(
-    () => (preview ? dragScene(drawn, analysis, selection, preview) : null),
-    [drawn, analysis, selection, preview],
+    () => (preview && live ? live.dragScene(drawn, analysis, selection, preview) : null),
+    [live, drawn, analysis, selection, preview],
   );
 
   // Layers for what changes at different rates. A test-pressure change redraws the two layers of
@@ -190,32 +201,23 @@ export function PlanView() {
   const names = useApp((s) => caseNames(s.project.loadCases));
   const hovered = hover.kind === 'none' ? null : drawn;
   const drawInteractive = useCallback(
-    (_: Context, shape: KonvaShape) => {
-      const ctx = native(shape);
-      if (moving) {
-        drawPipes(ctx, viewport, moving);
-        drawFittings(ctx, viewport, moving, placeTags(ctx, viewport, moving, new LabelSpace(size.width, size.height)));
-      }
-      // The changes since the slider's gesture began, over the marks (their labels avoid each other).
-      if (before)
-        drawLiveChange(
-          ctx,
-          viewport,
-          before.scene.polygons,
-          changes,
-          (id) => names.find((x) => x.id === id)?.label ?? id,
-          new LabelSpace(size.width, size.height),
-        );
-      if (hovered) drawHover(ctx, viewport, hovered, hover, tool === 'draw');
-      drawOverlay(ctx, viewport, draw, selectBox, units, snappedNow);
-      if (underlayPick && underlay)
-        drawPicks(
-          ctx,
-          viewport,
-          underlayPick.map((q) => imageToPlan(underlay, q)),
-        );
-    },
+    (_: Context, shape: KonvaShape) =>
+      live?.drawInteractive(native(shape), viewport, {
+        width: size.width,
+        height: size.height,
+        units,
+        moving,
+        live: before
+          ? { before: before.scene, changes, caseLabel: (id) => names.find((x) => x.id === id)?.label ?? id }
+          : null,
+        hover: hovered ? { project: hovered, hit: hover, attaching: tool === 'draw' } : null,
+        draw,
+        selectBox,
+        snapped: snappedNow,
+        picks: underlayPick && underlay ? { underlay, points: underlayPick } : null,
+      }),
     [
+      live,
       moving,
       viewport,
       size.width,
