@@ -26,7 +26,7 @@ import { caseNames } from '../state/caseNames.js';
 import { EMPTY_SELECTION } from '../state/slices.js';
 import { drawUnderlay } from './drawUnderlay.js';
 import { useInteractiveLayer } from './useInteractiveLayer.js';
-import { useUnderlayImage } from '../state/underlayImage.js';
+import { useUnderlayImage } from '../state/useUnderlayImage.js';
 import { PlanHints } from './PlanHints.js';
 import { capturesPress, sendPlanEvent } from '../tools/planBridge.js';
 import type { PlanEvent, PointerKind } from '../tools/planInput.js';
