@@ -72,3 +72,34 @@ describe('edits made before the schema checks are loaded', () => {
     expect(store.temporal.getState().pastStates.length).toBe(1);
   });
 });
+
+describe('edits of the route’s shape made before their code is loaded', () => {
+  it('wait for it, and the edits after them keep their turn', async () => {
+    vi.resetModules();
+    const routeEdits = await import('./routeEdits.js');
+    const { createActions } = await import('./actions.js');
+    const { createAppStore } = await import('./store.js');
+    const store = createAppStore(
+      project(
+        [
+          { id: 'n1', x: 0, y: 0 },
+          { id: 'n2', x: 25, y: 0 },
+        ],
+        [{ from: 'n1', to: 'n2' }],
+      ),
+      DN300,
+    );
+    const actions = createActions(store);
+    expect(routeEdits.routeEdits()).toBeNull();
+    actions.moveNodes(new Map([['n2', { x: 30, y: 4 }]]));
+    actions.updateNode('n2', { cover: 1.4 }); // needs no route edit, but waits its turn
+    expect(store.getState().project.nodes[1]).toMatchObject({ x: 25, y: 0 });
+    expect(store.getState().project.nodes[1]!.cover).not.toBe(1.4);
+    await vi.waitFor(() => expect(store.getState().project.nodes[1]).toMatchObject({ x: 30, y: 4, cover: 1.4 }));
+    // two steps, undone in turn: the cover first, then the move
+    actions.undo();
+    expect(store.getState().project.nodes[1]).toMatchObject({ x: 30, y: 4 });
+    actions.undo();
+    expect(store.getState().project.nodes[1]).toMatchObject({ x: 25, y: 0 });
+  });
+});

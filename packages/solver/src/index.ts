@@ -1,7 +1,8 @@
 // The solver's public surface: the project model, the analysis, the schedule, and display units.
 export * from './model/projectSchema.js';
 export { projectSchema } from './model/project.js';
-export { MIN_PIPE_LENGTH, OVERLAP_ANGLE, geometryProblems } from './model/crossChecks.js';
+export { geometryProblems } from './model/crossChecks.js';
+export { MIN_PIPE_LENGTH, OVERLAP_ANGLE } from './model/routeRules.js';
 export { LIMITS, unusual, type Limit, type LimitId } from './model/limits.js';
 export { implausibleInputs } from './model/plausibility.js';
 export { nodeCover, nodeGround, nodeOutsideDiameters, pipeLevelFor, coverFor } from './model/groundLevel.js';

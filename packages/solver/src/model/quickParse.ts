@@ -1,7 +1,7 @@
 import { REGISTER } from '../provenance/register.js';
 import { LIMITS, type LimitId } from './limits.js';
 import type { Project } from './projectSchema.js';
-import { MIN_PIPE_LENGTH, pipeBelowGround } from './crossChecks.js';
+import { MIN_PIPE_LENGTH, pipeBelowGround } from './routeRules.js';
 import { routeRulesHold } from './routeCheck.js';
 import { SMALLEST_VALUE } from './tinyNumbers.js';
 
