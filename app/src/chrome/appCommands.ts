@@ -2,7 +2,7 @@ import { importOrReload } from './loadChunk.js';
 import { savedDocument } from '../state/savedDocument.js';
 import type { AppStore } from '../state/store.js';
 import type { Actions } from '../state/actions.js';
-import { download, fileStem, projectText } from '../files/projectFile.js';
+import { download, fileStem, projectText } from '../files/saveFile.js';
 import type { ActionName } from './actionTable.js';
 import { lazyModule } from './lazyPart.js';
 

@@ -1,13 +1,14 @@
 import { useState } from 'react';
 import type { Project } from '@mainbrace/solver';
 import { useActions, useAppStore } from '../state/StoreContext.js';
-import { openProjectFile } from './projectFile.js';
 import { fitView } from '../state/viewport.js';
 import type { ImportChoices, PendingImport } from './routeImport.js';
 import { lazyModule } from '../chrome/lazyPart.js';
 
 /** Reading a file of any kind and importing a route: loaded on the first Open or drop (or after the first draw). */
 const routes = lazyModule(() => import('./routeImport.js'));
+/** Reading and checking a project file: loaded likewise. */
+const projectFiles = lazyModule(() => import('./projectFile.js'));
 
 /** Notes worth showing after an import: warnings first, then at most a few notes. */
 function importLines(notes: { level: string; where: string; message: string }[]): string[] {
@@ -29,7 +30,7 @@ export function useFileOpening() {
 
   const open = async (file: File) => {
     const r = await (await routes()).readAnyFile(file);
-    if (r.kind === 'project') return openProjectFile(file, actions);
+    if (r.kind === 'project') return (await projectFiles()).openProjectFile(file, actions);
     if (r.kind === 'route') return setPending(r.pending);
     actions.notify({
       tone: 'error',

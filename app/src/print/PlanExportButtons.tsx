@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { scheduleOf } from '@mainbrace/solver';
 import { useAnalysis, useApp } from '../state/StoreContext.js';
-import { fileStem } from '../files/projectFile.js';
+import { fileStem } from '../files/saveFile.js';
 import { PLAN_SCALES, planDrawing } from './planExport/planDrawing.js';
 import { drawingSvg } from './planExport/drawingSvg.js';
 import { drawingPdf } from './planExport/drawingPdf.js';
