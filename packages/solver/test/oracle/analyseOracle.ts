@@ -14,6 +14,7 @@ import { VACUUM_GAUGE_PRESSURE } from '../../src/pressure/nodePressure.js';
 import { waterWeightInFitting } from '../../src/thrust/waterWeight.js';
 import { sizeRestraint, type Restraint } from '../../src/restraint/sizeRestraint.js';
 import { thrustSteps } from '../../src/analysis/thrustSteps.js';
+import { wordedStep } from '../../src/analysis/calculationRecord.js';
 import { diagnostic, uniqueDiagnostics, type Diagnostic } from '../../src/diagnostics/diagnostic.js';
 import type { ProvenanceId } from '../../src/provenance/register.js';
 import type { CalcStep } from '../../src/analysis/calcRecord.js';
@@ -182,7 +183,7 @@ export function calculationRecord(project: Project, f: FittingAnalysis): CalcSte
   let r = records.get(f);
   if (!r) {
     const restraint = sizeRestraint(project, f.node, f.legs, f.geometry, f.envelope, true);
-    r = [...thrustSteps(project, f.node, f.legs, f.envelope.governing), ...restraint.steps];
+    r = [...thrustSteps(project, f.node, f.legs, f.envelope.governing), ...restraint.steps.map(wordedStep)];
     records.set(f, r);
   }
   return r;
