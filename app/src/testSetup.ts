@@ -1,7 +1,10 @@
 import 'vitest-canvas-mock';
 import { loadChecks } from './state/checks.js';
 import { loadRouteEdits } from './state/routeEdits.js';
+import { loadCommands } from './chrome/appCommands.js';
 
-// The app loads its schema checks and the route's edits after its first screen; the tests before they start.
+// The app loads its schema checks, the route's edits and its commands after its first screen; the tests
+// before they start.
 await loadChecks();
 await loadRouteEdits();
+await loadCommands();
