@@ -24,9 +24,8 @@ import { PlanOverlays } from './PlanOverlays.js';
 import type { LiveChange } from './liveChange.js';
 import { caseNames } from '../state/caseNames.js';
 import { EMPTY_SELECTION } from '../state/slices.js';
-import { drawUnderlay } from './drawUnderlay.js';
 import { useInteractiveLayer } from './useInteractiveLayer.js';
-import { useUnderlayImage } from '../state/useUnderlayImage.js';
+import { drawUnderlayImage, useUnderlayImage } from '../state/useUnderlayImage.js';
 import { PlanHints } from './PlanHints.js';
 import { capturesPress, sendPlanEvent } from '../tools/planBridge.js';
 import type { PlanEvent, PointerKind } from '../tools/planInput.js';
@@ -169,7 +168,7 @@ export function PlanView() {
     (_: Context, shape: KonvaShape) => {
       const ctx = native(shape);
       drawGrid(ctx, viewport, width, height, units);
-      if (underlay && underlayImage.status === 'ready') drawUnderlay(ctx, viewport, underlay, underlayImage.image);
+      if (underlay && underlayImage.status === 'ready') drawUnderlayImage(ctx, viewport, underlay, underlayImage.image);
       drawRestraints(ctx, viewport, { polygons }, width, height);
     },
     [viewport, width, height, units, polygons, underlay, underlayImage],

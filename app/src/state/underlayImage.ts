@@ -1,5 +1,7 @@
 // The site plan's image decoded for drawing: loaded only when a project has one (state/useUnderlayImage.ts).
 import { browserStore, type KeyValueStore } from './keyValue.js';
+
+export { drawUnderlay } from '../plan/drawUnderlay.js';
 import type { UnderlayImage } from './underlayFile.js';
 import type { ImageState } from './useUnderlayImage.js';
 

@@ -8,8 +8,18 @@ export type ImageState =
   | { status: 'ready'; image: HTMLImageElement; bytes: number | null }
   | { status: 'missing'; message: string };
 
-/** The decoder (state/underlayImage.ts): only a project with a site plan needs it. */
-const decoder = lazyModule(() => import('./underlayImage.js'));
+type Decoder = typeof import('./underlayImage.js');
+let loaded: Decoder | null = null;
+/** The decoder and the image's drawing (state/underlayImage.ts): only a project with a site plan needs them. */
+const decoder = lazyModule(() => import('./underlayImage.js').then((m) => (loaded = m)));
+
+/**
+ * Draws a decoded site-plan image under the route (plan/drawUnderlay.ts); its code came with the
+ * decoder, which a `ready` image implies.
+ */
+export function drawUnderlayImage(...args: Parameters<Decoder['drawUnderlay']>): void {
+  loaded?.drawUnderlay(...args);
+}
 
 /** The underlay's image for drawing and for the panel; re-renders when it is decoded. */
 export function useUnderlayImage(u: UnderlayImage | undefined): ImageState {
