@@ -2,13 +2,14 @@ import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'vitest/config';
 import react from '@vitejs/plugin-react';
 import { offline } from './build/offline.js';
+import { noPreloadHelper } from './build/noPreloadHelper.js';
 
 const publicDir = fileURLToPath(new URL('../public', import.meta.url));
 const htmlTemplate = fileURLToPath(new URL('./index.html', import.meta.url));
 const konvaCore = fileURLToPath(new URL('./src/plan/konvaCore.ts', import.meta.url));
 
 export default defineConfig({
-  plugins: [react(), offline(publicDir, htmlTemplate)],
+  plugins: [react(), offline(publicDir, htmlTemplate), noPreloadHelper()],
   publicDir,
   base: './',
   // Konva's core without the parts the plan never uses (src/plan/konvaCore.ts).
