@@ -1,8 +1,8 @@
 import type { Project } from '@mainbrace/solver';
 
-/** Offers text to the user as a download. */
-export function download(name: string, text: string, type: string) {
-  const url = URL.createObjectURL(new Blob([text], { type }));
+/** Offers a file (text, or the bytes of a drawing) to the user as a download. */
+export function download(name: string, data: BlobPart, type: string) {
+  const url = URL.createObjectURL(new Blob([data], { type }));
   const a = document.createElement('a');
   a.href = url;
   a.download = name;
