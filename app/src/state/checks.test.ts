@@ -40,16 +40,17 @@ describe('opening a project without the schema library', () => {
   });
 });
 
-describe('edits made before the schema checks are loaded', () => {
-  const doc = () =>
-    project(
-      [
-        { id: 'n1', x: 0, y: 0 },
-        { id: 'n2', x: 25, y: 0 },
-      ],
-      [{ from: 'n1', to: 'n2' }],
-    );
+/** One pipe at Saltmarsh Way, as the app opens it. */
+const doc = () =>
+  project(
+    [
+      { id: 'n1', x: 0, y: 0 },
+      { id: 'n2', x: 25, y: 0 },
+    ],
+    [{ from: 'n1', to: 'n2' }],
+  );
 
+describe('edits made before the schema checks are loaded', () => {
   it('makes an edit the check by hand passes at once', async () => {
     const { checks, createActions, createAppStore } = await fresh();
     const store = createAppStore(doc(), DN300);
@@ -79,16 +80,7 @@ describe('edits of the route’s shape made before their code is loaded', () => 
     const routeEdits = await import('./routeEdits.js');
     const { createActions } = await import('./actions.js');
     const { createAppStore } = await import('./store.js');
-    const store = createAppStore(
-      project(
-        [
-          { id: 'n1', x: 0, y: 0 },
-          { id: 'n2', x: 25, y: 0 },
-        ],
-        [{ from: 'n1', to: 'n2' }],
-      ),
-      DN300,
-    );
+    const store = createAppStore(doc(), DN300);
     const actions = createActions(store);
     expect(routeEdits.routeEdits()).toBeNull();
     actions.moveNodes(new Map([['n2', { x: 30, y: 4 }]]));
