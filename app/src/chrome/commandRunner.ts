@@ -54,6 +54,9 @@ async function exportGeoJson(store: AppStore, actions: Actions) {
 /** Carries out a window command (the plan's own commands are the dispatcher's). */
 export function runCommand(name: ActionName, store: AppStore, actions: Actions, ui: Partial<CommandUi>) {
   const project = () => store.getState().project;
+  /** A file written from the project by one of the export writers, named after the project. */
+  const exportAs = (suffix: string, type: string, text: (t: Awaited<ReturnType<typeof exportTexts>>) => string) =>
+    void exportTexts().then((t) => download(`${fileStem(project())}-${suffix}`, text(t), type));
   switch (name) {
     case 'undo':
       return actions.undo();
@@ -69,25 +72,11 @@ export function runCommand(name: ActionName, store: AppStore, actions: Actions, 
       return actions.markSaved(project());
     }
     case 'exportCsv':
-      return void exportTexts().then((t) =>
-        download(
-          `${fileStem(project())}-schedule.csv`,
-          t.scheduleCsvText(project(), store.getState().units),
-          'text/csv',
-        ),
-      );
+      return exportAs('schedule.csv', 'text/csv', (t) => t.scheduleCsvText(project(), store.getState().units));
     case 'exportQuantities':
-      return void exportTexts().then((t) =>
-        download(
-          `${fileStem(project())}-quantities.csv`,
-          t.quantitiesCsvText(project(), store.getState().units),
-          'text/csv',
-        ),
-      );
+      return exportAs('quantities.csv', 'text/csv', (t) => t.quantitiesCsvText(project(), store.getState().units));
     case 'exportJson':
-      return void exportTexts().then((t) =>
-        download(`${fileStem(project())}-schedule.json`, t.scheduleJsonText(project()), 'application/json'),
-      );
+      return exportAs('schedule.json', 'application/json', (t) => t.scheduleJsonText(project()));
     case 'exportGeoJson':
       return void exportGeoJson(store, actions);
     case 'print':
