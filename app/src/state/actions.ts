@@ -119,8 +119,20 @@ export function createActions(store: AppStore) {
   const withRouteEdits = (run: (ops: RouteEdits) => void) => {
     const ops = routeEdits();
     if (ops && (!waiting || head)) run(ops);
-    else later(() => run(routeEdits()!), loadRouteEdits, 'the route editing');
+    // The schema checks too, so that an edit the check by hand would send to the back of the queue is
+    // checked in its turn.
+    else
+      later(
+        () => run(routeEdits()!),
+        () =>
+          loadRouteEdits().then(async () => {
+            if (!checksReady()) await loadChecks();
+          }),
+        'the route editing',
+      );
   };
+  /** Runs `run` now, or after the edits waiting for their code when some wait. */
+  const inTurn = (run: () => void) => (waiting && !head ? later(run, () => Promise.resolve()) : run());
   const history = () => store.temporal.getState();
   let liveStart: Project | null = null;
   let lastTyping: { key: string; at: number } | null = null;
@@ -145,15 +157,19 @@ export function createActions(store: AppStore) {
             },
           });
       }),
-    moveNodes: (moves: ReadonlyMap<string, PlanPoint>) =>
+    moveNodes: (moves: ReadonlyMap<string, PlanPoint>) => {
+      // The drag's preview shows the nodes where they go until the move is made; a later drag's is its own.
+      const preview = get().dragPreview;
       withRouteEdits((ops) => {
-        set({ dragPreview: null });
+        if (get().dragPreview === preview) set({ dragPreview: null });
         edit((p) => ops.moveNodes(p, moves));
-      }),
-    deleteSelection: () =>
+      });
+    },
+    deleteSelection: () => {
+      // What is selected when Delete is pressed, even if the route's edits are still loading.
+      const { nodes, pipes } = get().selection;
+      if (nodes.size + pipes.size === 0) return;
       withRouteEdits((ops) => {
-        const { nodes, pipes } = get().selection;
-        if (nodes.size + pipes.size === 0) return;
         const before = get().project;
         edit((p) => ops.deleteItems(p, nodes, pipes));
         const after = get().project;
@@ -170,7 +186,8 @@ export function createActions(store: AppStore) {
             lines: [],
           },
         });
-      }),
+      });
+    },
     updateNode: (id: string, patch: Partial<ProjectNode>) =>
       edit(
         (p) => ({ ...p, nodes: p.nodes.map((n) => (n.id === id ? { ...n, ...patch, id } : n)) }),
@@ -280,14 +297,17 @@ export function createActions(store: AppStore) {
     liveEdit: (change: (p: Project) => Project) => set({ project: change(get().project) }),
 
     // ——— history
-    undo: () => {
-      history().undo();
-      set({ selection: prune(get().selection, get().project), dragPreview: null });
-    },
-    redo: () => {
-      history().redo();
-      set({ selection: prune(get().selection, get().project) });
-    },
+    // An undo waits its turn behind edits still waiting for their code, so that it undoes the last edit made.
+    undo: () =>
+      inTurn(() => {
+        history().undo();
+        set({ selection: prune(get().selection, get().project), dragPreview: null });
+      }),
+    redo: () =>
+      inTurn(() => {
+        history().redo();
+        set({ selection: prune(get().selection, get().project) });
+      }),
 
     // ——— view, tools and selection (not undoable)
     setViewport: (viewport: Viewport) => set({ viewport }),
