@@ -32,6 +32,9 @@ export const loadCommands = lazyModule(() => import('./commandRunner.js').then((
 export function runCommand(name: ActionName, store: AppStore, actions: Actions) {
   if (name === 'undo') return actions.undo();
   if (name === 'redo') return actions.redo();
+  // The file picker opens only within the click or key that asked for it: never after a wait.
+  if (name === 'open') return ui.pickFile?.();
+  if (name === 'print') return ui.print?.();
   if (loaded) return loaded.runCommand(name, store, actions, ui);
   loadCommands().then(
     (m) => m.runCommand(name, store, actions, ui),

@@ -51,21 +51,15 @@ async function exportGeoJson(store: AppStore, actions: Actions) {
   else actions.notify({ tone: 'error', title: 'The design was not exported as GeoJSON', lines: [r.message] });
 }
 
-/** Carries out a window command (the plan's own commands are the dispatcher's). */
+/** Carries out a window command that may wait for code (chrome/appCommands.ts runs undo, redo, Open and Print itself). */
 export function runCommand(name: ActionName, store: AppStore, actions: Actions, ui: Partial<CommandUi>) {
   const project = () => store.getState().project;
   /** A file written from the project by one of the export writers, named after the project. */
   const exportAs = (suffix: string, type: string, text: (t: Awaited<ReturnType<typeof exportTexts>>) => string) =>
     void exportTexts().then((t) => download(`${fileStem(project())}-${suffix}`, text(t), type));
   switch (name) {
-    case 'undo':
-      return actions.undo();
-    case 'redo':
-      return actions.redo();
     case 'new':
       return startNew(store, actions, ui);
-    case 'open':
-      return ui.pickFile?.();
     case 'save': {
       const doc = savedDocument(store.getState());
       download(`${fileStem(doc)}.json`, projectText(doc), 'application/json');
@@ -79,8 +73,6 @@ export function runCommand(name: ActionName, store: AppStore, actions: Actions, 
       return exportAs('schedule.json', 'application/json', (t) => t.scheduleJsonText(project()));
     case 'exportGeoJson':
       return void exportGeoJson(store, actions);
-    case 'print':
-      return ui.print?.();
     default:
       return;
   }
