@@ -15,8 +15,18 @@ export function useFileOpening() {
   const store = useAppStore();
   const [pending, setPending] = useState<PendingImport | null>(null);
 
+  /** The file is not opened when the code that reads it cannot be loaded: say so, naming it. */
+  const unreadable = (name: string) =>
+    actions.notify({
+      tone: 'error',
+      title: `${name} was not opened — your project is unchanged`,
+      lines: ['The code that reads files could not be loaded: reload the page (your project is kept) and try again.'],
+    });
+
   const open = async (file: File) => {
-    const r = await (await opening()).openFile(file, actions);
+    const m = await opening().catch(() => null);
+    if (!m) return unreadable(file.name);
+    const r = await m.openFile(file, actions);
     if (r) setPending(r);
   };
 
@@ -24,7 +34,9 @@ export function useFileOpening() {
     const p = pending;
     if (!p) return;
     setPending(null);
-    await (await opening()).importRoute(p, choices, store, actions);
+    const m = await opening().catch(() => null);
+    if (!m) return unreadable(p.name);
+    await m.importRoute(p, choices, store, actions);
   };
 
   return { pending, open, confirm, cancel: () => setPending(null) };
