@@ -17,9 +17,10 @@ export default defineConfig({
   build: {
     target: 'es2022',
     sourcemap: false,
-    // No preload helper in the first load (0.6 kB gzipped, docs/performance.md): a lazy part's own imports are
-    // fetched by the browser as it reads the part, and the warm-up after the first draw has them in
-    // cache before they are used. Every browser the app runs in (ES2022, module workers) has modules.
+    // No module-preload polyfill and no preload links (docs/performance.md): a lazy part's own imports are
+    // fetched by the browser as it reads the part, and the warm-up after the first draw has them in cache
+    // before they are used. Every browser the app runs in (ES2022, module workers) has modules. Vite's
+    // preload helper itself goes by build/noPreloadHelper.ts.
     modulePreload: false,
     rolldownOptions: {
       output: {

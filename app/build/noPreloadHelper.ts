@@ -15,8 +15,13 @@ export function noPreloadHelper(): Plugin {
     apply: 'build',
     renderChunk: {
       order: 'post',
-      handler(code) {
-        if (!code.includes(HELPER)) return null;
+      handler(code, chunk) {
+        if (!code.includes(HELPER)) {
+          // A Vite that writes the helper otherwise would bring it back unnoticed: say so.
+          if (chunk.isEntry && code.includes('__vitePreload('))
+            this.warn('the preload helper was not found where expected: it stays in the first load');
+          return null;
+        }
         // The original stays, unused, for the minifier to drop with the pieces only it used.
         return {
           code: code.replace(HELPER, 'var __vitePreload = (load) => load();\nvar unusedPreload = function preload('),
