@@ -3,6 +3,8 @@ import { readFileSync, writeFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { diagnosticsMarkdown } from '../diagnostics/codeTable.js';
 import { provenanceMarkdown, registerValuesModule } from './registerTable.js';
+import { REGISTER, type ProvenanceId } from './register.js';
+import { UNVERIFIED, VALUES } from './registerValues.js';
 import { limitsMarkdown } from '../model/limitsTable.js';
 
 const docs = (name: string) => fileURLToPath(new URL(`../../../../docs/${name}`, import.meta.url));
@@ -30,5 +32,8 @@ describe('the generated reference pages in docs/', () => {
     const file = fileURLToPath(new URL('./registerValues.ts', import.meta.url));
     if (process.env.UPDATE_DOCS) writeFileSync(file, registerValuesModule());
     expect(readFileSync(file, 'utf8')).toBe(registerValuesModule());
+    // and the values as the code reads them are the register's, each (a text can hide what JSON cannot write)
+    for (const id of Object.keys(REGISTER) as ProvenanceId[]) expect(VALUES[id]).toEqual(REGISTER[id].value);
+    expect(UNVERIFIED).toEqual((Object.keys(REGISTER) as ProvenanceId[]).filter((id) => !REGISTER[id].verified));
   });
 });
