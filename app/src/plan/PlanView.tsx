@@ -101,10 +101,10 @@ export function PlanView() {
     draw.phase !== 'idle' ||
     !!selectBox ||
     (!!underlayPick && underlayPick.length > 0);
-  const live = useInteractiveLayer(busy);
+  const layer = useInteractiveLayer(busy);
   const changes = useMemo(
-    () => (before && live ? live.liveChanges(before.analysis, analysis) : NO_CHANGES),
-    [live, before, analysis],
+    () => (before && layer ? layer.liveChanges(before.analysis, analysis) : NO_CHANGES),
+    [layer, before, analysis],
   );
   const box = useRef<HTMLDivElement>(null);
   const coords = useRef<HTMLSpanElement>(null);
@@ -148,8 +148,8 @@ export function PlanView() {
     [current, before],
   );
   const moving = useMemo(
-    () => (preview && live ? live.dragScene(drawn, analysis, selection, preview) : null),
-    [live, drawn, analysis, selection, preview],
+    () => (preview && layer ? layer.dragScene(drawn, analysis, selection, preview) : null),
+    [layer, drawn, analysis, selection, preview],
   );
 
   // Layers for what changes at different rates. A test-pressure change redraws the two layers of
@@ -201,7 +201,7 @@ export function PlanView() {
   const hovered = hover.kind === 'none' ? null : drawn;
   const drawInteractive = useCallback(
     (_: Context, shape: KonvaShape) =>
-      live?.drawInteractive(native(shape), viewport, {
+      layer?.drawInteractive(native(shape), viewport, {
         width: size.width,
         height: size.height,
         units,
@@ -216,7 +216,7 @@ export function PlanView() {
         picks: underlayPick && underlay ? { underlay, points: underlayPick } : null,
       }),
     [
-      live,
+      layer,
       moving,
       viewport,
       size.width,

@@ -1,4 +1,5 @@
-// The site plan's image decoded for drawing: loaded only when a project has one (state/useUnderlayImage.ts).
+// The site plan's image decoded for drawing: off the first screen, loaded in the warm-up after it, or at
+// once for a project that has a site plan (state/useUnderlayImage.ts).
 import { browserStore, type KeyValueStore } from './keyValue.js';
 
 export { drawUnderlay } from '../plan/drawUnderlay.js';

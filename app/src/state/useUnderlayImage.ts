@@ -10,7 +10,7 @@ export type ImageState =
 
 type Decoder = typeof import('./underlayImage.js');
 let loaded: Decoder | null = null;
-/** The decoder and the image's drawing (state/underlayImage.ts): only a project with a site plan needs them. */
+/** The decoder and the image's drawing (state/underlayImage.ts): only a project with a site plan needs them at start. */
 const decoder = lazyModule(() => import('./underlayImage.js').then((m) => (loaded = m)));
 
 /**
