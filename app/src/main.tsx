@@ -1,6 +1,6 @@
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
-import { analyse, findSize, scheduleOf, type Project } from '@mainbrace/solver';
+import { findSize, type Project } from '@mainbrace/solver';
 import { App } from './App.js';
 import { createAppStore } from './state/store.js';
 import { createActions } from './state/actions.js';
@@ -13,7 +13,7 @@ import { takeStartNotice } from './state/startNotice.js';
 import type { Notice } from './state/store.js';
 import { setSaveBeforeReload } from './chrome/loadChunk.js';
 import { registerServiceWorker, watchForNewVersion } from './chrome/newVersion.js';
-import { createRecovery } from './chrome/recoveryActions.js';
+import { lazyRecovery } from './chrome/lazyRecovery.js';
 import { installShortcuts } from './chrome/shortcuts.js';
 import { ErrorBoundary } from './chrome/ErrorBoundary.js';
 import type { PipeSpec } from './state/documentEdits.js';
@@ -81,6 +81,8 @@ function keptNotice(kept: Restored): Notice | null {
 }
 
 async function start() {
+  // Read-only hook for the browser tests, in the dev and test builds only, in a file of its own.
+  const testHook = import.meta.env.DEV || import.meta.env.MODE === 'test' ? import('./testHook.js') : null;
   const kv = browserStore;
   const channel = openTabChannel();
   bindKeptCopies(kv, channel);
@@ -109,33 +111,10 @@ async function start() {
   if (notice) actions.notify(notice);
   void refreshKeptCopies(false);
   watchForNewVersion(actions.notify, autosave.flush);
-  if (import.meta.env.DEV || import.meta.env.MODE === 'test') {
-    // Read-only hook for the browser tests: the document and its results, never a way to change them.
-    Object.defineProperty(window, '__mainbrace', {
-      value: Object.freeze({
-        project: () => structuredClone(store.getState().project),
-        schedule: () => structuredClone(scheduleOf(analyse(store.getState().project))),
-        selection: () => ({
-          nodes: [...store.getState().selection.nodes],
-          pipes: [...store.getState().selection.pipes],
-        }),
-        viewport: () => ({ ...store.getState().viewport }),
-        // cheap reads for the benchmarks, which must not clone a 10,000-node document to count it
-        counts: () => {
-          const p = store.getState().project;
-          return { nodes: p.nodes.length, pipes: p.pipes.length, fittings: analyse(p).fittings.length };
-        },
-        nodeAt: (i: number) => {
-          const n = store.getState().project.nodes[i];
-          return n ? { x: n.x, y: n.y } : null;
-        },
-        canUndo: () => store.temporal.getState().pastStates.length > 0,
-      }),
-    });
-  }
+  if (testHook) void testHook.then((m) => m.installTestHook(store));
   createRoot(document.getElementById('root')!).render(
     <StrictMode>
-      <ErrorBoundary store={store} recovery={createRecovery(kv, store, actions, autosave)}>
+      <ErrorBoundary store={store} recovery={lazyRecovery(kv, store, actions, autosave)}>
         <StoreProvider store={store} actions={actions}>
           <App />
         </StoreProvider>

@@ -1,5 +1,10 @@
 import 'vitest-canvas-mock';
 import { loadChecks } from './state/checks.js';
+import { loadRouteEdits } from './state/routeEdits.js';
+import { loadCommands } from './chrome/appCommands.js';
 
-// The app loads its schema checks before it opens a document; so do the tests.
+// The app loads its schema checks, the route's edits and its commands after its first screen; the tests
+// before they start.
 await loadChecks();
+await loadRouteEdits();
+await loadCommands();

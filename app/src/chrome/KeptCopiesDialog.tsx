@@ -7,7 +7,7 @@ import {
   removeKeptCopy,
   type KeptCopySummary,
 } from '../state/keptCopiesView.js';
-import { download } from '../files/projectFile.js';
+import { download } from '../files/saveFile.js';
 
 const dateOf = (iso: string) => {
   const d = new Date(iso);

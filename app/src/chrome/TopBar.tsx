@@ -4,9 +4,12 @@ import { useActions, useApp, useAppStore } from '../state/StoreContext.js';
 import { ACTIONS, titleOf, type ActionName } from './actionTable.js';
 import { registerCommandUi, runCommand } from './appCommands.js';
 import { ExportMenu } from './ExportMenu.js';
-import { CautionDialog } from './CautionDialog.js';
+import { lazyPart } from './lazyPart.js';
 import { KeptCopiesButton } from './KeptCopiesButton.js';
 import { caseNames } from '../state/caseNames.js';
+
+/** The cautions in full: opened from the top bar, so loaded after the first screen. */
+const CautionDialog = lazyPart(() => import('./CautionDialog.js').then((m) => m.CautionDialog));
 
 /** Short words for the file buttons; the table's labels are their tooltips. */
 const FILE_WORD: Partial<Record<ActionName, string>> = { new: 'New', open: 'Open…', save: 'Save' };

@@ -1,15 +1,7 @@
-import { importOrReload } from './loadChunk.js';
-import { savedDocument } from '../state/savedDocument.js';
 import type { AppStore } from '../state/store.js';
 import type { Actions } from '../state/actions.js';
-import { download, fileStem, projectText } from '../files/projectFile.js';
 import type { ActionName } from './actionTable.js';
 import { lazyModule } from './lazyPart.js';
-
-/** The schedule and quantities files: their writers load when first chosen (or after the first draw). */
-const exportTexts = lazyModule(() => import('../files/exportTexts.js'));
-/** The blank project (it reads the soil library): loaded when New is first chosen, or after the first draw. */
-const blankProjects = lazyModule(() => import('../files/blankProject.js'));
 
 /** Parts of the window a command needs: the file picker and the print view. */
 export interface CommandUi {
@@ -30,85 +22,27 @@ export function hasUnsavedWork(store: AppStore): boolean {
   return s.project.nodes.length > 0 && s.project !== s.fileBaseline;
 }
 
-/** New: a blank project from the documented defaults, in the units in use; asks first when work would be lost. */
-function startNew(store: AppStore, actions: Actions) {
-  const go = () =>
-    void blankProjects().then(({ blankProject }) => {
-      const blank = { ...blankProject(), units: store.getState().units };
-      actions.replaceProject(blank);
-      actions.markSaved(blank);
-      actions.notify(null);
-    });
-  if (!hasUnsavedWork(store)) return go();
-  actions.notify({
-    tone: 'warning',
-    title: 'Start a new project? This one has changes not saved to a file.',
-    lines: ['Save it first to keep a file, or discard it (Undo still brings it back in this session).'],
-    actions: [
-      {
-        label: 'Save, then start new',
-        run: () => {
-          runCommand('save', store, actions);
-          go();
-        },
-      },
-      { label: 'Discard and start new', run: go },
-      { label: 'Keep working', run: () => actions.notify(null) },
-    ],
-  });
-}
+type Commands = typeof import('./commandRunner.js');
+let loaded: Commands | null = null;
 
-/** The design as GeoJSON for a GIS; the exchange module loads only now (docs/routes.md). */
-async function exportGeoJson(store: AppStore, actions: Actions) {
-  const ex = await importOrReload(() => import('@mainbrace/solver/exchange'));
-  const project = store.getState().project;
-  const r = ex.designGeoJson(project);
-  if (r.ok) download(`${fileStem(project)}.geojson`, r.text, 'application/geo+json');
-  else actions.notify({ tone: 'error', title: 'The design was not exported as GeoJSON', lines: [r.message] });
-}
+/** The commands' code: first in the warm-up after the first screen (nothing there runs one unasked). */
+export const loadCommands = lazyModule(() => import('./commandRunner.js').then((m) => (loaded = m)), 'first');
 
 /** Carries out a window command (the plan's own commands are the dispatcher's). */
 export function runCommand(name: ActionName, store: AppStore, actions: Actions) {
-  const project = () => store.getState().project;
-  switch (name) {
-    case 'undo':
-      return actions.undo();
-    case 'redo':
-      return actions.redo();
-    case 'new':
-      return startNew(store, actions);
-    case 'open':
-      return ui.pickFile?.();
-    case 'save': {
-      const doc = savedDocument(store.getState());
-      download(`${fileStem(doc)}.json`, projectText(doc), 'application/json');
-      return actions.markSaved(project());
-    }
-    case 'exportCsv':
-      return void exportTexts().then((t) =>
-        download(
-          `${fileStem(project())}-schedule.csv`,
-          t.scheduleCsvText(project(), store.getState().units),
-          'text/csv',
-        ),
-      );
-    case 'exportQuantities':
-      return void exportTexts().then((t) =>
-        download(
-          `${fileStem(project())}-quantities.csv`,
-          t.quantitiesCsvText(project(), store.getState().units),
-          'text/csv',
-        ),
-      );
-    case 'exportJson':
-      return void exportTexts().then((t) =>
-        download(`${fileStem(project())}-schedule.json`, t.scheduleJsonText(project()), 'application/json'),
-      );
-    case 'exportGeoJson':
-      return void exportGeoJson(store, actions);
-    case 'print':
-      return ui.print?.();
-    default:
-      return;
-  }
+  if (name === 'undo') return actions.undo();
+  if (name === 'redo') return actions.redo();
+  // The file picker opens only within the click or key that asked for it: never after a wait.
+  if (name === 'open') return ui.pickFile?.();
+  if (name === 'print') return ui.print?.();
+  if (loaded) return loaded.runCommand(name, store, actions, ui);
+  loadCommands().then(
+    (m) => m.runCommand(name, store, actions, ui),
+    () =>
+      actions.notify({
+        tone: 'error',
+        title: 'That command was not carried out: its code could not be loaded',
+        lines: ['Reload the page (your project is kept) and try again.'],
+      }),
+  );
 }

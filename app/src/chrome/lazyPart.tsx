@@ -1,4 +1,4 @@
-import { lazy, Suspense, useState, type ComponentType, type ReactNode } from 'react';
+import { Component, lazy, Suspense, useState, type ComponentType, type ReactNode } from 'react';
 import { importOrReload } from './loadChunk.js';
 
 /** Every lazy part's loader, for the warm-up after the first draw. */
@@ -21,17 +21,52 @@ export function lazyPart<P extends object>(
       return c;
     });
   loaders.push(get);
-  const Waiting = lazy(() => importOrReload(get).then((c) => ({ default: c })));
+  const Waiting = lazy(() =>
+    importOrReload(get).then(
+      (c) => ({ default: c }),
+      (e: unknown) => {
+        throw new PartNotLoaded(e instanceof Error ? e.message : String(e));
+      },
+    ),
+  );
   function Part(props: P) {
     const [Loaded] = useState(() => loaded);
     if (Loaded) return <Loaded {...props} />;
     return (
-      <Suspense fallback={fallback}>
-        <Waiting {...props} />
-      </Suspense>
+      <LoadFailure>
+        <Suspense fallback={fallback}>
+          <Waiting {...props} />
+        </Suspense>
+      </LoadFailure>
     );
   }
   return Part;
+}
+
+/** The code of a part off the first screen could not be loaded (after `importOrReload` tried). */
+class PartNotLoaded extends Error {}
+
+/**
+ * A part whose code could not be loaded says so where it would have been, instead of taking the whole
+ * screen down with it (the app's error screen is for errors in what did load).
+ */
+class LoadFailure extends Component<{ children: ReactNode }, { error: unknown }> {
+  override state: { error: unknown } = { error: null };
+
+  static getDerivedStateFromError(error: unknown) {
+    return { error };
+  }
+
+  override render() {
+    if (this.state.error === null) return this.props.children;
+    // An error of the part itself is the app's error screen's, as if the part had been there all along.
+    if (!(this.state.error instanceof PartNotLoaded)) throw this.state.error;
+    return (
+      <p className="part-failed" role="alert">
+        This part of Mainbrace could not be loaded: reload the page (your project is kept).
+      </p>
+    );
+  }
 }
 
 /**

@@ -6,7 +6,7 @@ import type { Autosave } from '../state/autosave.js';
 import { keepStoredProject, setAsideStoredProject, storedProjectText } from '../state/recovery.js';
 import { leaveNoticeForNextStart } from '../state/startNotice.js';
 import { importOrReload } from './loadChunk.js';
-import { download, fileStem, projectText, readProjectFile } from '../files/projectFile.js';
+import { download, fileStem, projectText } from '../files/saveFile.js';
 
 /** What the error screen can do: each way out keeps the project that failed as a kept copy. */
 export interface Recovery {
@@ -48,6 +48,7 @@ export function createRecovery(kv: KeyValueStore, store: AppStore, actions: Acti
       window.location.reload();
     },
     async open(file) {
+      const { readProjectFile } = await importOrReload(() => import('../files/projectFile.js'));
       const r = await readProjectFile(file);
       if (!r.ok) return r.lines;
       await replaceWith(r.project);

@@ -25,28 +25,6 @@ export async function readProjectFile(file: File): Promise<OpenResult> {
   return checkProjectText(text, 'file');
 }
 
-/** Offers text to the user as a download. */
-export function download(name: string, text: string, type: string) {
-  const url = URL.createObjectURL(new Blob([text], { type }));
-  const a = document.createElement('a');
-  a.href = url;
-  a.download = name;
-  document.body.appendChild(a);
-  a.click();
-  a.remove();
-  setTimeout(() => URL.revokeObjectURL(url), 1000);
-}
-
-/** A file name from the project name: letters, digits and dashes. */
-export const fileStem = (p: Project) =>
-  p.name
-    .replace(/[^\p{L}\p{N}]+/gu, '-')
-    .replace(/^-|-$/g, '')
-    .toLowerCase() || 'mainbrace-project';
-
-/** The project file as saved: the document itself, two-space JSON. */
-export const projectText = (p: Project) => JSON.stringify(p, null, 2) + '\n';
-
 /** Opens a dropped or chosen file: the project is replaced only if the file is valid, and the user is told. */
 export async function openProjectFile(
   file: File,

@@ -1,7 +1,8 @@
 import { useRef, useState } from 'react';
 import { planDistance, type Underlay } from '@mainbrace/solver';
 import { useActions, useApp, useAppStore } from '../state/StoreContext.js';
-import { INLINE_LIMIT_BYTES, loadImageFile, useUnderlayImage, type ImageState } from '../state/underlayImage.js';
+import { INLINE_LIMIT_BYTES, loadImageFile } from '../state/underlayFile.js';
+import { useUnderlayImage, type ImageState } from '../state/useUnderlayImage.js';
 import { calibrate, firstPlacement, type CalibrationInput } from '../state/underlayEdits.js';
 import { parseLength } from '../format/typedEntry.js';
 import { show } from '../format/quantity.js';

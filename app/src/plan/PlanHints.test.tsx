@@ -9,7 +9,7 @@ import { chain, DN300 } from '../testFixtures.js';
 afterEach(cleanup);
 
 describe('the stack at the top of the plan', () => {
-  it('puts a notice above the draw hint in one stack, so that it pushes the hint down instead of covering it', () => {
+  it('puts a notice above the draw hint in one stack, so that it pushes the hint down instead of covering it', async () => {
     const store = createAppStore(chain([0, 0], [30, 0]), DN300);
     const actions = createActions(store);
     const planPress = vi.fn();
@@ -25,7 +25,12 @@ describe('the stack at the top of the plan', () => {
       actions.notify({ tone: 'warning', title: 'That run is not connected', lines: ['Join it to a node'] });
     });
     const notice = screen.getByTestId('notice');
-    const hint = document.querySelector('.plan-hint')!;
+    // the hint's words load after the first screen
+    const hint = await vi.waitFor(() => {
+      const h = document.querySelector('.plan-hint');
+      if (!h) throw new Error('the draw hint is not shown yet');
+      return h;
+    });
     expect(hint.textContent).toMatch(/run/);
     // siblings in the same flow: the later one is laid out below the earlier, never under it
     expect(notice.parentElement).toBe(hint.parentElement);

@@ -1,8 +1,15 @@
 import { memo } from 'react';
 import { NoticeBar } from '../chrome/NoticeBar.js';
-import { DrawHint } from './DrawHint.js';
+import { useApp } from '../state/StoreContext.js';
+import { lazyPart } from '../chrome/lazyPart.js';
 import { UnderlayHint } from './UnderlayHint.js';
 import { TypedEntryBox } from './TypedEntryPart.js';
+
+/** What a click does with the draw tool: its words load after the first screen, which never shows them. */
+const DrawHintText = lazyPart(() => import('./DrawHint.js').then((m) => m.DrawHint));
+function DrawHint() {
+  return useApp((s) => s.tool) === 'draw' ? <DrawHintText /> : null;
+}
 
 /**
  * The notice, the hints and the typed-entry box stack down from the top of the plan: a notice or a hint

@@ -12,22 +12,20 @@ import {
 import { Layer, Shape, Stage } from 'react-konva/lib/ReactKonvaCore.js';
 import type { Context } from 'konva/lib/Context';
 import type { Shape as KonvaShape } from 'konva/lib/Shape';
-import { analyse, FOOT, imageToPlan } from '@mainbrace/solver';
+import { analyse, FOOT } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp, useAppStore } from '../state/StoreContext.js';
 import { toPlan, type ScreenPoint } from '../state/viewport.js';
-import { dragScene, planScene } from './planScene.js';
+import { planScene } from './planScene.js';
 import { drawArrows, drawFittings, drawPipes, drawRestraints, placeTags } from './drawRoute.js';
 import { LabelSpace } from './labelSpace.js';
 import { drawRestrainedZones } from './drawZones.js';
 import { drawGrid } from './drawGrid.js';
-import { drawHover, drawOverlay } from './drawOverlay.js';
 import { PlanOverlays } from './PlanOverlays.js';
-import { liveChanges, type LiveChange } from './liveChange.js';
+import type { LiveChange } from './liveChange.js';
 import { caseNames } from '../state/caseNames.js';
-import { drawLiveChange } from './drawLiveChange.js';
 import { EMPTY_SELECTION } from '../state/slices.js';
-import { drawPicks, drawUnderlay } from './drawUnderlay.js';
-import { useUnderlayImage } from '../state/underlayImage.js';
+import { useInteractiveLayer } from './useInteractiveLayer.js';
+import { drawUnderlayImage, useUnderlayImage } from '../state/useUnderlayImage.js';
 import { PlanHints } from './PlanHints.js';
 import { capturesPress, sendPlanEvent } from '../tools/planBridge.js';
 import type { PlanEvent, PointerKind } from '../tools/planInput.js';
@@ -95,7 +93,19 @@ export function PlanView() {
         : null,
     [liveBase, caseView],
   );
-  const changes = useMemo(() => (before ? liveChanges(before.analysis, analysis) : NO_CHANGES), [before, analysis]);
+  // The interactive layer's code loads with the input tools, or as soon as there is something for it to show.
+  const busy =
+    !!preview ||
+    !!liveBase ||
+    hover.kind !== 'none' ||
+    draw.phase !== 'idle' ||
+    !!selectBox ||
+    (!!underlayPick && underlayPick.length > 0);
+  const layer = useInteractiveLayer(busy);
+  const changes = useMemo(
+    () => (before && layer ? layer.liveChanges(before.analysis, analysis) : NO_CHANGES),
+    [layer, before, analysis],
+  );
   const box = useRef<HTMLDivElement>(null);
   const coords = useRef<HTMLSpanElement>(null);
 
@@ -138,8 +148,8 @@ export function PlanView() {
     [current, before],
   );
   const moving = useMemo(
-    () => (preview ? dragScene(drawn, analysis, selection, preview) : null),
-    [drawn, analysis, selection, preview],
+    () => (preview && layer ? layer.dragScene(drawn, analysis, selection, preview) : null),
+    [layer, drawn, analysis, selection, preview],
   );
 
   // Layers for what changes at different rates. A test-pressure change redraws the two layers of
@@ -158,7 +168,7 @@ export function PlanView() {
     (_: Context, shape: KonvaShape) => {
       const ctx = native(shape);
       drawGrid(ctx, viewport, width, height, units);
-      if (underlay && underlayImage.status === 'ready') drawUnderlay(ctx, viewport, underlay, underlayImage.image);
+      if (underlay && underlayImage.status === 'ready') drawUnderlayImage(ctx, viewport, underlay, underlayImage.image);
       drawRestraints(ctx, viewport, { polygons }, width, height);
     },
     [viewport, width, height, units, polygons, underlay, underlayImage],
@@ -190,32 +200,23 @@ export function PlanView() {
   const names = useApp((s) => caseNames(s.project.loadCases));
   const hovered = hover.kind === 'none' ? null : drawn;
   const drawInteractive = useCallback(
-    (_: Context, shape: KonvaShape) => {
-      const ctx = native(shape);
-      if (moving) {
-        drawPipes(ctx, viewport, moving);
-        drawFittings(ctx, viewport, moving, placeTags(ctx, viewport, moving, new LabelSpace(size.width, size.height)));
-      }
-      // The changes since the slider's gesture began, over the marks (their labels avoid each other).
-      if (before)
-        drawLiveChange(
-          ctx,
-          viewport,
-          before.scene.polygons,
-          changes,
-          (id) => names.find((x) => x.id === id)?.label ?? id,
-          new LabelSpace(size.width, size.height),
-        );
-      if (hovered) drawHover(ctx, viewport, hovered, hover, tool === 'draw');
-      drawOverlay(ctx, viewport, draw, selectBox, units, snappedNow);
-      if (underlayPick && underlay)
-        drawPicks(
-          ctx,
-          viewport,
-          underlayPick.map((q) => imageToPlan(underlay, q)),
-        );
-    },
+    (_: Context, shape: KonvaShape) =>
+      layer?.drawInteractive(native(shape), viewport, {
+        width: size.width,
+        height: size.height,
+        units,
+        moving,
+        live: before
+          ? { before: before.scene, changes, caseLabel: (id) => names.find((x) => x.id === id)?.label ?? id }
+          : null,
+        hover: hovered ? { project: hovered, hit: hover, attaching: tool === 'draw' } : null,
+        draw,
+        selectBox,
+        snapped: snappedNow,
+        picks: underlayPick && underlay ? { underlay, points: underlayPick } : null,
+      }),
     [
+      layer,
       moving,
       viewport,
       size.width,

@@ -315,29 +315,3 @@ function scenePlainNodes(
       }));
   });
 }
-
-/**
- * What moves while nodes are dragged: the dragged nodes and the pipes that meet them, at their
- * preview positions, without results (the document changes, and results follow, on drop).
- */
-export function dragScene(
-  project: Project,
-  analysis: Analysis,
-  selection: Selection,
-  preview: ReadonlyMap<string, PlanPoint>,
-): Scene {
-  const touching = project.pipes.filter((p) => preview.has(p.from) || preview.has(p.to));
-  const ids = new Set([...preview.keys(), ...touching.flatMap((p) => [p.from, p.to])]);
-  const sub: Project = { ...project, nodes: project.nodes.filter((n) => ids.has(n.id)), pipes: touching };
-  const scene = planScene(sub, analysis, { kind: 'envelope' }, selection, preview);
-  const moving = (id: string) => preview.has(id);
-  return {
-    ...scene,
-    arrows: [],
-    polygons: [],
-    zones: [],
-    largestForce: 0,
-    fittings: scene.fittings.filter((f) => moving(f.node)),
-    plainNodes: scene.plainNodes.filter((n) => moving(n.id)),
-  };
-}

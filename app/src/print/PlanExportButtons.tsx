@@ -1,21 +1,10 @@
 import { useState } from 'react';
 import { scheduleOf } from '@mainbrace/solver';
 import { useAnalysis, useApp } from '../state/StoreContext.js';
-import { fileStem } from '../files/projectFile.js';
+import { download, fileStem } from '../files/saveFile.js';
 import { PLAN_SCALES, planDrawing } from './planExport/planDrawing.js';
 import { drawingSvg } from './planExport/drawingSvg.js';
 import { drawingPdf } from './planExport/drawingPdf.js';
-
-function save(name: string, data: BlobPart, type: string) {
-  const url = URL.createObjectURL(new Blob([data], { type }));
-  const a = document.createElement('a');
-  a.href = url;
-  a.download = name;
-  document.body.appendChild(a);
-  a.click();
-  a.remove();
-  setTimeout(() => URL.revokeObjectURL(url), 1000);
-}
 
 /** Plan export at a chosen scale for the drawing set, as SVG or PDF (one sheet as large as the plan needs). */
 export function PlanExportButtons() {
@@ -29,8 +18,8 @@ export function PlanExportButtons() {
     try {
       const d = planDrawing(analysis, scheduleOf(analysis).fittings, units, s, project.name);
       const name = `${fileStem(project)}-plan-${s.id.replace(/[^0-9a-z]+/gi, '')}.${kind}`;
-      if (kind === 'svg') save(name, drawingSvg(d), 'image/svg+xml');
-      else save(name, drawingPdf(d) as BlobPart, 'application/pdf');
+      if (kind === 'svg') download(name, drawingSvg(d), 'image/svg+xml');
+      else download(name, drawingPdf(d) as BlobPart, 'application/pdf');
       setProblem(null);
     } catch (e) {
       setProblem((e as Error).message);

@@ -11,24 +11,14 @@ import {
 } from '@mainbrace/solver';
 import type { AppState, AppStore, CaseView, DrawerTab, Selection, ToolName } from './store.js';
 import { EMPTY_SELECTION } from './store.js';
-import {
-  addRoute,
-  deleteItems,
-  moveNodes,
-  updateNode,
-  updatePipe,
-  type PipeSpec,
-  type PlanPoint,
-  type RouteEnd,
-} from './documentEdits.js';
+import type { PipeSpec, PlanPoint, RouteEnd } from './documentEdits.js';
 import type { Viewport } from './viewport.js';
-import { setPlanLength } from './legLength.js';
 import { routePieces } from './connectivity.js';
 import type { DrawState } from '../tools/drawTool.js';
 import { fittedView, revealFitting as planCommandReveal, showFitting } from '../tools/planView.js';
 import { planInputOf } from '../tools/planBridge.js';
-import { editProblems } from './editCheck.js';
-import { checksReady, loadChecks } from './checks.js';
+import { checks, checksReady, loadChecks } from './checks.js';
+import { loadRouteEdits, routeEdits, type RouteEdits } from './routeEdits.js';
 
 /** Typing pauses shorter than this, ms, keep extending the same undo step. */
 const TYPING_WINDOW_MS = 1500;
@@ -55,14 +45,25 @@ function prune(sel: Selection, p: Project): Selection {
 export function createActions(store: AppStore) {
   const get = store.getState;
   const set = (patch: Partial<AppState>) => store.setState(patch);
-  /** Edits waiting for the schema checks, in the order they were made; null when none waits. */
+  /** Edits waiting for code still loading, in the order they were made; null when none waits. */
   let waiting: Promise<void> | null = null;
-  const later = (run: () => void) => {
-    const next = (waiting ?? loadChecks()).then(run, () =>
+  /** Whether a waiting edit is being made now: it is at the head of the queue and goes ahead at once. */
+  let head = false;
+  const later = (run: () => void, until: () => Promise<unknown> = loadChecks, what = 'the project checks') => {
+    const ahead = waiting;
+    const turn = () => {
+      head = true;
+      try {
+        run();
+      } finally {
+        head = false;
+      }
+    };
+    const next = (ahead ? ahead.then(until) : until()).then(turn, () =>
       set({
         notice: {
           tone: 'error',
-          title: 'That change was not made: the project checks could not be loaded',
+          title: `That change was not made: ${what} could not be loaded`,
           lines: ['Reload the page (your project is kept) and make the change again.'],
         },
       }),
@@ -79,7 +80,7 @@ export function createActions(store: AppStore) {
    * already (opened, restored) comes `checked` and is not checked again.
    */
   const edit = (change: (p: Project) => Project, typing?: string, checked = false) => {
-    if (waiting) later(() => apply(change, typing, checked));
+    if (waiting && !head) later(() => apply(change, typing, checked));
     else apply(change, typing, checked);
   };
   const apply = (change: (p: Project) => Project, typing: string | undefined, checked: boolean) => {
@@ -87,7 +88,7 @@ export function createActions(store: AppStore) {
     const after = change(before);
     if (after === before) return;
     let lines: string[] = [];
-    if (!checked && checksReady()) lines = editProblems(before, after);
+    if (!checked && checksReady()) lines = checks().editProblems(before, after);
     // The schema checks load after the first screen: until then an edit the check by hand passes
     // as a whole document is made at once; any other waits for them, and so do the edits after it.
     else if (!checked && !quickParse(after)) return later(() => apply(change, typing, checked));
@@ -111,57 +112,95 @@ export function createActions(store: AppStore) {
     set({ project: after, selection: prune(get().selection, after), ...stale });
     if (same) history().resume();
   };
+  /**
+   * An edit of the route's shape (a run drawn, nodes moved or deleted, a leg's length): its code loads
+   * after the first screen (state/routeEdits.ts); one made before it is here waits for it, in turn.
+   */
+  const withRouteEdits = (run: (ops: RouteEdits) => void) => {
+    const ops = routeEdits();
+    if (ops && (!waiting || head)) run(ops);
+    // The schema checks too, so that an edit the check by hand would send to the back of the queue is
+    // checked in its turn.
+    else
+      later(
+        () => run(routeEdits()!),
+        () =>
+          loadRouteEdits().then(async () => {
+            if (!checksReady()) await loadChecks();
+          }),
+        'the route editing',
+      );
+  };
+  /** Runs `run` now, or after the edits waiting for their code when some wait. */
+  const inTurn = (run: () => void) => (waiting && !head ? later(run, () => Promise.resolve()) : run());
   const history = () => store.temporal.getState();
   let liveStart: Project | null = null;
   let lastTyping: { key: string; at: number } | null = null;
 
   return {
     // ——— document edits (undoable)
-    addRun: (start: RouteEnd, vertices: PlanPoint[], end: RouteEnd | null) => {
-      const before = routePieces(get().project).length;
-      edit((p) => addRoute(p, start, vertices, end, get().pipeSpec));
-      const after = routePieces(get().project).length;
-      // A run not joined to the main is sized alone, with dead-end blocks at both ends: say so at once.
-      if (after > before && after > 1)
-        set({
-          notice: {
-            tone: 'warning',
-            title: `That run is not connected to the rest of the main (the route is now ${after} separate pieces)`,
-            lines: [
-              'Each piece is sized on its own, with a dead-end block at every free end.',
-              'To join it, undo (Ctrl+Z) and draw it again starting or ending on a node or pipe: the plan rings what a click would join.',
-            ],
-          },
-        });
-    },
+    addRun: (start: RouteEnd, vertices: PlanPoint[], end: RouteEnd | null) =>
+      withRouteEdits((ops) => {
+        const before = routePieces(get().project).length;
+        edit((p) => ops.addRoute(p, start, vertices, end, get().pipeSpec));
+        const after = routePieces(get().project).length;
+        // A run not joined to the main is sized alone, with dead-end blocks at both ends: say so at once.
+        if (after > before && after > 1)
+          set({
+            notice: {
+              tone: 'warning',
+              title: `That run is not connected to the rest of the main (the route is now ${after} separate pieces)`,
+              lines: [
+                'Each piece is sized on its own, with a dead-end block at every free end.',
+                'To join it, undo (Ctrl+Z) and draw it again starting or ending on a node or pipe: the plan rings what a click would join.',
+              ],
+            },
+          });
+      }),
     moveNodes: (moves: ReadonlyMap<string, PlanPoint>) => {
-      set({ dragPreview: null });
-      edit((p) => moveNodes(p, moves));
+      // The drag's preview shows the nodes where they go until the move is made; a later drag's is its own.
+      const preview = get().dragPreview;
+      withRouteEdits((ops) => {
+        if (get().dragPreview === preview) set({ dragPreview: null });
+        edit((p) => ops.moveNodes(p, moves));
+      });
     },
     deleteSelection: () => {
+      // What is selected when Delete is pressed, even if the route's edits are still loading.
       const { nodes, pipes } = get().selection;
       if (nodes.size + pipes.size === 0) return;
-      const before = get().project;
-      edit((p) => deleteItems(p, nodes, pipes));
-      const after = get().project;
-      if (after === before) return;
-      const gone = { nodes: before.nodes.length - after.nodes.length, pipes: before.pipes.length - after.pipes.length };
-      set({
-        selection: EMPTY_SELECTION,
-        notice: {
-          tone: 'info',
-          title: `Deleted ${gone.nodes} node${gone.nodes === 1 ? '' : 's'} and ${gone.pipes} pipe${gone.pipes === 1 ? '' : 's'} — Ctrl+Z brings them back`,
-          lines: [],
-        },
+      withRouteEdits((ops) => {
+        const before = get().project;
+        edit((p) => ops.deleteItems(p, nodes, pipes));
+        const after = get().project;
+        if (after === before) return;
+        const gone = {
+          nodes: before.nodes.length - after.nodes.length,
+          pipes: before.pipes.length - after.pipes.length,
+        };
+        set({
+          selection: EMPTY_SELECTION,
+          notice: {
+            tone: 'info',
+            title: `Deleted ${gone.nodes} node${gone.nodes === 1 ? '' : 's'} and ${gone.pipes} pipe${gone.pipes === 1 ? '' : 's'} — Ctrl+Z brings them back`,
+            lines: [],
+          },
+        });
       });
     },
     updateNode: (id: string, patch: Partial<ProjectNode>) =>
-      edit((p) => updateNode(p, id, patch), 'label' in patch ? `node-label-${id}` : undefined),
+      edit(
+        (p) => ({ ...p, nodes: p.nodes.map((n) => (n.id === id ? { ...n, ...patch, id } : n)) }),
+        'label' in patch ? `node-label-${id}` : undefined,
+      ),
     updatePipe: (id: string, patch: Partial<Pipe>) =>
-      edit((p) => updatePipe(p, id, patch), 'label' in patch ? `pipe-label-${id}` : undefined),
+      edit(
+        (p) => ({ ...p, pipes: p.pipes.map((x) => (x.id === id ? { ...x, ...patch, id } : x)) }),
+        'label' in patch ? `pipe-label-${id}` : undefined,
+      ),
     /** A pipe's plan length, moving one of its nodes along it (the other stays). */
     setPipeLength: (id: string, length: number, moving: 'from' | 'to') =>
-      edit((p) => setPlanLength(p, id, length, moving)),
+      withRouteEdits((ops) => edit((p) => ops.setPlanLength(p, id, length, moving))),
     /** Bedding and wrap for every pipe at once: one undo step. */
     setBeddingEverywhere: (patch: Pick<Partial<Pipe>, 'trenchType' | 'encasement'>) =>
       edit((p) =>
@@ -258,14 +297,17 @@ export function createActions(store: AppStore) {
     liveEdit: (change: (p: Project) => Project) => set({ project: change(get().project) }),
 
     // ——— history
-    undo: () => {
-      history().undo();
-      set({ selection: prune(get().selection, get().project), dragPreview: null });
-    },
-    redo: () => {
-      history().redo();
-      set({ selection: prune(get().selection, get().project) });
-    },
+    // An undo waits its turn behind edits still waiting for their code, so that it undoes the last edit made.
+    undo: () =>
+      inTurn(() => {
+        history().undo();
+        set({ selection: prune(get().selection, get().project), dragPreview: null });
+      }),
+    redo: () =>
+      inTurn(() => {
+        history().redo();
+        set({ selection: prune(get().selection, get().project) });
+      }),
 
     // ——— view, tools and selection (not undoable)
     setViewport: (viewport: Viewport) => set({ viewport }),

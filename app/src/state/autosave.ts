@@ -7,7 +7,7 @@ import { deleteKeptCopy, keepCopy, updateKeptCopy, type KeptCopy } from './keptC
 import { projectFromText } from './restore.js';
 import type { TabChannel } from './tabChannel.js';
 import { storageErrorDetail } from './storageError.js';
-import { download, fileStem, projectText } from '../files/projectFile.js';
+import { download, fileStem, projectText } from '../files/saveFile.js';
 import { refreshKeptCopies, showKeptCopies } from './keptCopiesView.js';
 
 const DELAY_MS = 400;

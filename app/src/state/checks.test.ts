@@ -40,16 +40,17 @@ describe('opening a project without the schema library', () => {
   });
 });
 
-describe('edits made before the schema checks are loaded', () => {
-  const doc = () =>
-    project(
-      [
-        { id: 'n1', x: 0, y: 0 },
-        { id: 'n2', x: 25, y: 0 },
-      ],
-      [{ from: 'n1', to: 'n2' }],
-    );
+/** One pipe at Saltmarsh Way, as the app opens it. */
+const doc = () =>
+  project(
+    [
+      { id: 'n1', x: 0, y: 0 },
+      { id: 'n2', x: 25, y: 0 },
+    ],
+    [{ from: 'n1', to: 'n2' }],
+  );
 
+describe('edits made before the schema checks are loaded', () => {
   it('makes an edit the check by hand passes at once', async () => {
     const { checks, createActions, createAppStore } = await fresh();
     const store = createAppStore(doc(), DN300);
@@ -70,5 +71,69 @@ describe('edits made before the schema checks are loaded', () => {
     expect(store.getState().notice?.title).toBe('That change was not made: it would leave the project invalid');
     expect(store.getState().notice?.lines[0]).toMatch(/^nodes\[1\]\.cover: /);
     expect(store.temporal.getState().pastStates.length).toBe(1);
+  });
+});
+
+describe('edits of the route’s shape made before their code is loaded', () => {
+  it('wait for it, and the edits after them keep their turn', async () => {
+    vi.resetModules();
+    const routeEdits = await import('./routeEdits.js');
+    const { createActions } = await import('./actions.js');
+    const { createAppStore } = await import('./store.js');
+    const store = createAppStore(doc(), DN300);
+    const actions = createActions(store);
+    expect(routeEdits.routeEdits()).toBeNull();
+    actions.moveNodes(new Map([['n2', { x: 30, y: 4 }]]));
+    actions.updateNode('n2', { cover: 1.4 }); // needs no route edit, but waits its turn
+    expect(store.getState().project.nodes[1]).toMatchObject({ x: 25, y: 0 });
+    expect(store.getState().project.nodes[1]!.cover).not.toBe(1.4);
+    await vi.waitFor(() => expect(store.getState().project.nodes[1]).toMatchObject({ x: 30, y: 4, cover: 1.4 }));
+    // two steps, undone in turn: the cover first, then the move
+    actions.undo();
+    expect(store.getState().project.nodes[1]).toMatchObject({ x: 30, y: 4 });
+    actions.undo();
+    expect(store.getState().project.nodes[1]).toMatchObject({ x: 25, y: 0 });
+  });
+
+  /** Fresh modules with the route's edits not loaded yet, as at start; a three-node route. */
+  async function starting() {
+    vi.resetModules();
+    const routeEdits = await import('./routeEdits.js');
+    const { createActions } = await import('./actions.js');
+    const { createAppStore } = await import('./store.js');
+    const store = createAppStore(
+      project(
+        [
+          { id: 'n1', x: 0, y: 0 },
+          { id: 'n2', x: 25, y: 0 },
+          { id: 'n3', x: 25, y: 30 },
+        ],
+        [
+          { from: 'n1', to: 'n2' },
+          { from: 'n2', to: 'n3' },
+        ],
+      ),
+      DN300,
+    );
+    expect(routeEdits.routeEdits()).toBeNull();
+    return { store, actions: createActions(store) };
+  }
+
+  it('delete what was selected when Delete was pressed, whatever is selected when their code arrives', async () => {
+    const { store, actions } = await starting();
+    actions.select({ nodes: new Set(['n3']), pipes: new Set() });
+    actions.deleteSelection();
+    actions.select({ nodes: new Set(['n1']), pipes: new Set() });
+    await vi.waitFor(() => expect(store.getState().project.nodes.map((n) => n.id)).toEqual(['n1', 'n2']));
+  });
+
+  it('are what an undo pressed meanwhile undoes, as the last edit made', async () => {
+    const { store, actions } = await starting();
+    actions.updateNode('n2', { cover: 1.4 }); // made at once
+    actions.moveNodes(new Map([['n3', { x: 40, y: 30 }]])); // waits for its code
+    actions.undo();
+    await vi.waitFor(() => expect(store.temporal.getState().futureStates.length).toBe(1));
+    expect(store.getState().project.nodes[2]).toMatchObject({ x: 25, y: 30 });
+    expect(store.getState().project.nodes[1]!.cover).toBe(1.4);
   });
 });

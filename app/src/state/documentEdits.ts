@@ -254,11 +254,3 @@ export function deleteItems(project: Project, nodeIds: ReadonlySet<string>, pipe
   const nodes = doc.nodes.filter((n) => !remaining.has(n.id) && !(touched.has(n.id) && !stillUsed.has(n.id)));
   return keepGeometry(project, { ...doc, nodes, pipes });
 }
-
-export function updateNode(project: Project, id: string, patch: Partial<ProjectNode>): Project {
-  return { ...project, nodes: project.nodes.map((n) => (n.id === id ? { ...n, ...patch, id } : n)) };
-}
-
-export function updatePipe(project: Project, id: string, patch: Partial<Pipe>): Project {
-  return { ...project, pipes: project.pipes.map((p) => (p.id === id ? { ...p, ...patch, id } : p)) };
-}

@@ -1,7 +1,8 @@
 // The solver's public surface: the project model, the analysis, the schedule, and display units.
 export * from './model/projectSchema.js';
 export { projectSchema } from './model/project.js';
-export { MIN_PIPE_LENGTH, OVERLAP_ANGLE, geometryProblems } from './model/crossChecks.js';
+export { geometryProblems } from './model/crossChecks.js';
+export { MIN_PIPE_LENGTH, OVERLAP_ANGLE } from './model/routeRules.js';
 export { LIMITS, unusual, type Limit, type LimitId } from './model/limits.js';
 export { implausibleInputs } from './model/plausibility.js';
 export { nodeCover, nodeGround, nodeOutsideDiameters, pipeLevelFor, coverFor } from './model/groundLevel.js';
@@ -33,10 +34,10 @@ export {
   analyseNext,
   analyseProject,
   analyseInSteps,
-  calculationRecord,
   type Analysis,
   type FittingAnalysis,
 } from './analysis/analyse.js';
+export { calculationRecord } from './analysis/calculationRecord.js';
 export type { CalcStep, RecordValue } from './analysis/calcRecord.js';
 export { nodeSoil, type Restraint } from './restraint/sizeRestraint.js';
 export {
@@ -96,7 +97,8 @@ export {
 } from './diagnostics/diagnostic.js';
 export { diagnosticText, type WordingContext } from './diagnostics/wording.js';
 export { wordingContext, legName, legTarget } from './diagnostics/context.js';
-export { REGISTER, provenance, unverified, type ProvenanceId } from './provenance/register.js';
+export { REGISTER, provenance, type ProvenanceId } from './provenance/register.js';
+export { unverified } from './provenance/unverified.js';
 export { notVerifiedText, type ProvenanceEntry, type SourceKind } from './provenance/entry.js';
 export { CAUTIONS, SHORT_CAUTION } from './schedule/cautions.js';
 export { restraintConcrete } from './schedule/concrete.js';

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { route, type NodeSpec, type PipeSpec } from './projectBuilder.js';
 import type { Project } from '../src/model/projectSchema.js';
-import { OVERLAP_ANGLE } from '../src/model/crossChecks.js';
+import { OVERLAP_ANGLE } from '../src/model/routeRules.js';
 
 /** Outside diameters drawn for random routes, m (EN 545:2010 external diameters, DN100–DN600). */
 const ODS = [0.118, 0.17, 0.222, 0.274, 0.326, 0.429, 0.532, 0.635];

@@ -8,12 +8,10 @@ import { runMarks, runTable, type RunTable } from '../network/runTable.js';
 import type { CaseThrust, ThrustEnvelope } from '../thrust/fittingThrust.js';
 import { waterWeightInFitting } from '../thrust/waterWeight.js';
 import { sizeRestraint, type Restraint } from '../restraint/sizeRestraint.js';
-import { faceTerms, type FaceTerms } from '../restraint/bearingBlock.js';
-import { thrustSteps } from './thrustSteps.js';
 import { sameDiagnostic, uniqueDiagnostics, type Diagnostic } from '../diagnostics/diagnostic.js';
 import type { ProvenanceId } from '../provenance/register.js';
-import type { CalcStep } from './calcRecord.js';
 import { implausibleInputs, type PlausibilityKept } from '../model/plausibility.js';
+import { faceTerms, type FaceTerms } from '../restraint/bearingBlock.js';
 import { pipeRatingChecks } from '../pressure/pipeRating.js';
 import {
   casePressures,
@@ -437,20 +435,4 @@ export function analyse(project: Project, prev?: Analysis | null): Analysis {
     cache.set(project, result);
   }
   return result;
-}
-
-const records = new WeakMap<FittingAnalysis, CalcStep[]>();
-
-/**
- * A fitting's calculation record — thrust, then restraint — built when first read by sizing the
- * fitting again with its record (the schedule never pays for it).
- */
-export function calculationRecord(project: Project, f: FittingAnalysis): CalcStep[] {
-  let r = records.get(f);
-  if (!r) {
-    const restraint = sizeRestraint(project, f.node, f.legs, f.geometry, f.envelope, true);
-    r = [...thrustSteps(project, f.node, f.legs, f.envelope.governing), ...restraint.steps];
-    records.set(f, r);
-  }
-  return r;
 }

@@ -1,5 +1,5 @@
 import type { Pipe } from '../model/projectSchema.js';
-import { REGISTER } from '../provenance/register.js';
+import { VALUES } from '../provenance/registerValues.js';
 
 /** A pipe's bedding: how the trench bottom and backfill around it are made. */
 export interface Bedding {
@@ -44,7 +44,7 @@ export const BEDDINGS: readonly Bedding[] = [
 ];
 
 /** Laying condition assumed when a pipe states none: the register's, which the restraint sizing reads too. */
-export const DEFAULT_BEDDING: number = REGISTER['joints.default-trench-type'].value;
+export const DEFAULT_BEDDING: number = VALUES['joints.default-trench-type'];
 
 /** "AWWA C150/C151 laying condition 4": the standard's reference for a bedding. */
 export const beddingReference = (condition: number): string => `AWWA C150/C151 laying condition ${condition}`;

@@ -1,6 +1,6 @@
 import type { Material } from '../model/projectSchema.js';
 import { STANDARD_GRAVITY } from '../units/quantities.js';
-import { REGISTER } from '../provenance/register.js';
+import { VALUES } from '../provenance/registerValues.js';
 
 /**
  * Density of each pipe material, kg/m³, for the pipe self-weight that adds to pipe–soil friction
@@ -8,8 +8,8 @@ import { REGISTER } from '../provenance/register.js';
  * pipe.weightPerLength instead.
  */
 export const MATERIAL_DENSITY: Readonly<Record<Material, number>> = {
-  ...REGISTER['material.density'].value,
-  other: REGISTER['material.density'].value['ductile-iron'],
+  ...VALUES['material.density'],
+  other: VALUES['material.density']['ductile-iron'],
 };
 
 /**

@@ -1,4 +1,4 @@
-import { REGISTER } from '../provenance/register.js';
+import { VALUES } from '../provenance/registerValues.js';
 import { metricPlasticRating } from './pressureRatings.js';
 import { sizeFromWall, type PipeSeries } from './pipeSeries.js';
 
@@ -9,7 +9,7 @@ const MM = 1e-3; // m per mm
  * rating.metric-wall-rounding). OD in mm.
  */
 export function metricWall(odMm: number, sdr: number): number {
-  const step = REGISTER['rating.metric-wall-rounding'].value / MM;
+  const step = VALUES['rating.metric-wall-rounding'] / MM;
   return Math.ceil(odMm / sdr / step - 1e-9) * step * MM;
 }
 

@@ -1,5 +1,5 @@
 import { PSI } from '../units/conversions.js';
-import { REGISTER } from '../provenance/register.js';
+import { VALUES } from '../provenance/registerValues.js';
 import type { PressureRating } from './pipeSeries.js';
 
 /** Pa per bar (EN and ISO pressures are stated in bar). */
@@ -12,7 +12,7 @@ export const BAR = 1e5;
  */
 export function awwaDuctileIronRating(pressureClass: number): PressureRating {
   const working = pressureClass * PSI;
-  const limit = working + REGISTER['rating.di-awwa'].value.surgeAllowance;
+  const limit = working + VALUES['rating.di-awwa'].surgeAllowance;
   return { label: `PC ${pressureClass}`, working, withSurge: limit, test: limit, basis: 'rating.di-awwa' };
 }
 
@@ -22,7 +22,7 @@ export function awwaDuctileIronRating(pressureClass: number): PressureRating {
  * (register: rating.pvc-c900).
  */
 export function c900Rating(dr: 14 | 18 | 25): PressureRating {
-  const r = REGISTER['rating.pvc-c900'].value;
+  const r = VALUES['rating.pvc-c900'];
   const working = r[`dr${dr}`];
   const limit = r.occasionalSurgeFactor * working;
   return {
@@ -39,7 +39,7 @@ export function c900Rating(dr: 14 | 18 | 25): PressureRating {
  * field test ≤ 1.5 × the class (register: rating.pe-c906).
  */
 export function c906Rating(dr: 11 | 17): PressureRating {
-  const r = REGISTER['rating.pe-c906'].value;
+  const r = VALUES['rating.pe-c906'];
   const working = r[`dr${dr}`];
   return {
     label: `PC ${Math.round(working / PSI)}`,
@@ -53,7 +53,7 @@ export function c906Rating(dr: 11 | 17): PressureRating {
 /** EN 545 ductile iron of class Cxx: PFA = xx bar, PMA = 1.2·PFA, PEA = 1.2·PFA + 5 bar (register: rating.en545). */
 export function en545Rating(pressureClass: string): PressureRating {
   const pfa = Number(pressureClass.replace(/^C/, '')) * BAR;
-  const r = REGISTER['rating.en545'].value;
+  const r = VALUES['rating.en545'];
   return {
     label: pressureClass,
     working: pfa,
@@ -65,7 +65,7 @@ export function en545Rating(pressureClass: string): PressureRating {
 
 /** Metric PVC-U or PE of nominal pressure PN (bar): PFA = PN, PMA = 1.25·PFA, PEA = 1.5·PFA (register: rating.plastic-metric). */
 export function metricPlasticRating(pn: number): PressureRating {
-  const r = REGISTER['rating.plastic-metric'].value;
+  const r = VALUES['rating.plastic-metric'];
   const pfa = pn * BAR;
   return {
     label: `PN ${pn}`,

@@ -1,4 +1,5 @@
-import { calculationRecord, type Analysis, type FittingAnalysis } from '../analysis/analyse.js';
+import type { Analysis, FittingAnalysis } from '../analysis/analyse.js';
+import { calculationRecord } from '../analysis/calculationRecord.js';
 import type { RecordValue } from '../analysis/calcRecord.js';
 import { formatSi } from '../units/format.js';
 import type { UnitSystem } from '../units/conversions.js';
@@ -7,7 +8,8 @@ import { fittingTitle } from '../schedule/fittingNames.js';
 import { diagnosticText } from '../diagnostics/wording.js';
 import { wordingContext } from '../diagnostics/context.js';
 import { notVerifiedText } from '../provenance/entry.js';
-import { REGISTER, unverified } from '../provenance/register.js';
+import { REGISTER } from '../provenance/register.js';
+import { unverified } from '../provenance/unverified.js';
 import { scheduleOf } from '../schedule/scheduleRows.js';
 import { restraintElements } from '../schedule/restraintElements.js';
 import { escapeControls } from './terminalText.js';

@@ -2,7 +2,7 @@ import type { z } from 'zod';
 import type { Project } from './projectSchema.js';
 import { norm } from '../geometry/vector.js';
 import { pathText, type Problem } from './problems.js';
-import { nodeCover, nodeOutsideDiameters } from './groundLevel.js';
+import { MIN_PIPE_LENGTH, OVERLAP_ANGLE, pipeBelowGround, type Add } from './routeRules.js';
 
 type Ctx = z.core.$RefinementCtx<Project>;
 
@@ -19,14 +19,6 @@ function uniqueIds(items: readonly { id: string }[], list: string, ctx: Pick<Ctx
     } else seen.set(item.id, i);
   });
 }
-
-/** Minimum distance between a pipe's two ends, m: below this the pipe has no direction. */
-export const MIN_PIPE_LENGTH = 0.001;
-
-export type Add = (path: (string | number)[], message: string) => void;
-
-/** Two pipes leaving a node closer than this in direction lie on top of each other, degrees. */
-export const OVERLAP_ANGLE = 0.5;
 
 /** Nodes standing at one point (within MIN_PIPE_LENGTH) but not joined by a pipe. */
 function coincidentNodes(p: Project, add: Add) {
@@ -107,22 +99,6 @@ export function overlappingPipes(p: Project, add: Add) {
     leave(i, a.id, ux, uy, uz);
     leave(i, b.id, -ux, -uy, -uz);
   }
-}
-
-/** A node with a ground level must have its pipe below it: the derived cover is not negative. */
-export function pipeBelowGround(p: Project, add: Add) {
-  if (!p.nodes.some((n) => n.groundLevel !== undefined)) return;
-  const od = nodeOutsideDiameters(p);
-  p.nodes.forEach((n, i) => {
-    if (n.groundLevel === undefined) return;
-    const d = od.get(n.id) ?? 0;
-    const cover = nodeCover(n, d);
-    if (cover < 0)
-      add(
-        ['nodes', i, 'groundLevel'],
-        `must be at or above the top of the pipe (elevation ${n.elevation} m + OD/2 ${d / 2} m): the pipe would stand ${Math.round(-cover * 1000) / 1000} m out of the ground`,
-      );
-  });
 }
 
 /** Checks that span several fields: unique ids, references that resolve, sane pipes. */

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { REGISTER } from '../provenance/register.js';
+import { VALUES } from '../provenance/registerValues.js';
 import type { Dimension } from '../units/conversions.js';
 import { LIMITS, type Limit, type LimitId } from './limits.js';
 import { CASE_KINDS, ENCASEMENTS, END_CONDITIONS, MATERIALS, RESTRAINT_METHODS } from './choices.js';
@@ -39,7 +39,7 @@ function limited(id: LimitId) {
   return n;
 }
 /** Default safety factor on bearing, uplift and restrained length (register: design.safety-factor). */
-const SF = REGISTER['design.safety-factor'].value;
+const SF = VALUES['design.safety-factor'];
 const safetyFactor = () => limited('safetyFactor');
 
 // The choice lists live in a module without zod, so that a screen offering them loads no schema code.
@@ -47,7 +47,7 @@ export { CASE_KINDS, ENCASEMENTS, END_CONDITIONS, MATERIALS, RESTRAINT_METHODS }
 
 export const waterSchema = z.strictObject({
   /** kg/m³; water at 20 °C (register: water.density) */
-  density: limited('density').default(REGISTER['water.density'].value),
+  density: limited('density').default(VALUES['water.density']),
 });
 
 export const designSchema = z.strictObject({
@@ -56,18 +56,18 @@ export const designSchema = z.strictObject({
   upliftSafetyFactor: safetyFactor().default(SF),
   restraintSafetyFactor: safetyFactor().default(SF),
   /** N/m³; 23,600 ≈ 150 lb/ft³ normal-weight concrete (common practice); at least 15 kN/m³ so that it sinks */
-  concreteUnitWeight: limited('concreteUnitWeight').default(REGISTER['concrete.unit-weight'].value),
+  concreteUnitWeight: limited('concreteUnitWeight').default(VALUES['concrete.unit-weight']),
   /** m, or null when groundwater lies below every block */
   groundwaterElevation: limited('elevation').nullable().default(null),
   /** m, thickness of a bearing block from the fitting to its bearing face (concrete volume estimate) */
-  blockDepth: limited('blockDepth').default(REGISTER['design.block-depth'].value),
+  blockDepth: limited('blockDepth').default(VALUES['design.block-depth']),
   /** m, trench width for the face-width check, or null for OD + 2 × 0.3 m (common practice) */
   trenchWidth: limited('trenchWidth').nullable().default(null),
   /**
    * m, the construction step built dimensions are rounded up to; the same whatever the display units
    * (50 mm by default; a US office may set 2 in = 0.0508 m)
    */
-  dimensionStep: limited('dimensionStep').default(REGISTER['design.dimension-step'].value),
+  dimensionStep: limited('dimensionStep').default(VALUES['design.dimension-step']),
   /**
    * m, length of one pipe between joints: restrained joints are counted and drawn from it, the first at
    * the fitting. 6 m is common practice (EN 545 pipes are made 6 m long; 20 ft pipes are 6.1 m).
@@ -265,7 +265,7 @@ export const projectShape = z.strictObject({
   version: z.literal(1, { error: 'must be 1 (the only version this program reads)' }),
   name: z.string().max(200).default('Untitled main'),
   units: z.enum(['us', 'si']).default('si'),
-  water: waterSchema.default({ density: REGISTER['water.density'].value }),
+  water: waterSchema.default({ density: VALUES['water.density'] }),
   design: designSchema.default(() => designSchema.parse({})),
   loadCases: z.array(loadCaseSchema).min(1, { error: 'must have at least one load case' }),
   soils: z.array(soilSchema).min(1, { error: 'must have at least one soil' }),

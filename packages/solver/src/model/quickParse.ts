@@ -1,7 +1,7 @@
-import { REGISTER } from '../provenance/register.js';
+import { VALUES } from '../provenance/registerValues.js';
 import { LIMITS, type LimitId } from './limits.js';
 import type { Project } from './projectSchema.js';
-import { MIN_PIPE_LENGTH, pipeBelowGround } from './crossChecks.js';
+import { MIN_PIPE_LENGTH, pipeBelowGround } from './routeRules.js';
 import { routeRulesHold } from './routeCheck.js';
 import { SMALLEST_VALUE } from './tinyNumbers.js';
 
@@ -57,7 +57,7 @@ function opt<T>(out: Rec, o: Rec, key: string, read: (v: unknown) => T): void {
   if (o[key] !== undefined) out[key] = read(o[key]);
 }
 
-const SF = REGISTER['design.safety-factor'].value;
+const SF = VALUES['design.safety-factor'];
 
 export const QUICK_FIELDS = {
   project: [
@@ -127,11 +127,11 @@ export const QUICK_FIELDS = {
 const MATERIALS = ['ductile-iron', 'pvc', 'hdpe', 'steel', 'other'] as const;
 
 function water(v: unknown): Project['water'] {
-  if (v === undefined) return { density: REGISTER['water.density'].value };
+  if (v === undefined) return { density: VALUES['water.density'] };
   if (!isObject(v)) no();
   const o = v as Rec;
   only(o, QUICK_FIELDS.water);
-  return { density: o.density === undefined ? REGISTER['water.density'].value : num(o.density, 'density') };
+  return { density: o.density === undefined ? VALUES['water.density'] : num(o.density, 'density') };
 }
 
 function design(v: unknown): Project['design'] {
@@ -146,15 +146,11 @@ function design(v: unknown): Project['design'] {
     bearingSafetyFactor: or('bearingSafetyFactor', (x) => num(x, 'safetyFactor'), SF),
     upliftSafetyFactor: or('upliftSafetyFactor', (x) => num(x, 'safetyFactor'), SF),
     restraintSafetyFactor: or('restraintSafetyFactor', (x) => num(x, 'safetyFactor'), SF),
-    concreteUnitWeight: or(
-      'concreteUnitWeight',
-      (x) => num(x, 'concreteUnitWeight'),
-      REGISTER['concrete.unit-weight'].value,
-    ),
+    concreteUnitWeight: or('concreteUnitWeight', (x) => num(x, 'concreteUnitWeight'), VALUES['concrete.unit-weight']),
     groundwaterElevation: or('groundwaterElevation', nullable('elevation'), null),
-    blockDepth: or('blockDepth', (x) => num(x, 'blockDepth'), REGISTER['design.block-depth'].value),
+    blockDepth: or('blockDepth', (x) => num(x, 'blockDepth'), VALUES['design.block-depth']),
     trenchWidth: or('trenchWidth', nullable('trenchWidth'), null),
-    dimensionStep: or('dimensionStep', (x) => num(x, 'dimensionStep'), REGISTER['design.dimension-step'].value),
+    dimensionStep: or('dimensionStep', (x) => num(x, 'dimensionStep'), VALUES['design.dimension-step']),
     layingLength: or('layingLength', (x) => num(x, 'layingLength'), 6),
     // absent stays absent, as the schema leaves it (the register's default applies)
     ...(o.concreteWaste === undefined ? {} : { concreteWaste: num(o.concreteWaste, 'concreteWaste') }),

@@ -1,7 +1,8 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
 import type { Project } from './projectSchema.js';
-import { OVERLAP_ANGLE, overlappingPipes, referenceChecks } from './crossChecks.js';
+import { overlappingPipes, referenceChecks } from './crossChecks.js';
+import { OVERLAP_ANGLE } from './routeRules.js';
 import { routeRulesHold } from './routeCheck.js';
 import { generateRoute } from '../../bench/generateRoute.js';
 import { quickParse } from './quickParse.js';

@@ -1,5 +1,5 @@
 import type { Project } from './projectSchema.js';
-import { MIN_PIPE_LENGTH, OVERLAP_ANGLE } from './crossChecks.js';
+import { MIN_PIPE_LENGTH, OVERLAP_ANGLE } from './routeRules.js';
 
 /** True when the items' ids are all different. */
 function distinct(items: readonly { id: string }[]): boolean {

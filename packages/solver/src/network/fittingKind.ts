@@ -1,7 +1,7 @@
 import { angleBetween, horizontal, negate, slopeAngle, type Vec3 } from '../geometry/vector.js';
 import type { Leg } from './legs.js';
 import type { ProjectNode } from '../model/projectSchema.js';
-import { REGISTER } from '../provenance/register.js';
+import { VALUES } from '../provenance/registerValues.js';
 
 /** What stands at a node, as the schedule names it; plus the two kinds the schedule leaves out. */
 export type FittingKind =
@@ -18,11 +18,11 @@ export type FittingKind =
   | 'none';
 
 /** Two pipes deflecting less than this are a straight-through joint (project-format.md), degrees. */
-export const STRAIGHT_TOLERANCE = REGISTER['fitting.straight-tolerance'].value;
+export const STRAIGHT_TOLERANCE = VALUES['fitting.straight-tolerance'];
 /** A run through a tee or cross may deviate this much from straight and still be a run, degrees. */
-export const RUN_TOLERANCE = REGISTER['fitting.run-tolerance'].value;
+export const RUN_TOLERANCE = VALUES['fitting.run-tolerance'];
 /** A branch within this of square to its run is a tee; otherwise a wye, degrees. */
-export const TEE_TOLERANCE = REGISTER['fitting.tee-tolerance'].value;
+export const TEE_TOLERANCE = VALUES['fitting.tee-tolerance'];
 /** Relative difference below which two areas count as equal. */
 const AREA_TOLERANCE = 1e-6;
 

@@ -1,9 +1,9 @@
 import { STANDARD_GRAVITY } from '../units/quantities.js';
 import type { LoadCase } from '../model/projectSchema.js';
-import { REGISTER } from '../provenance/register.js';
+import { VALUES } from '../provenance/registerValues.js';
 
 /** The lowest gauge pressure water in a pipe can have, Pa (register: water.vapour-floor). Below it the column separates. */
-export const VACUUM_GAUGE_PRESSURE = REGISTER['water.vapour-floor'].value;
+export const VACUUM_GAUGE_PRESSURE = VALUES['water.vapour-floor'];
 
 /**
  * Gauge pressure at a point of elevation z for a load case, Pa: the case pressure at its datum

@@ -1,9 +1,9 @@
 import type { Material, Pipe, Project } from '../model/projectSchema.js';
-import { REGISTER } from '../provenance/register.js';
+import { VALUES } from '../provenance/registerValues.js';
 
 /** Modulus E (Pa) and Poisson's ratio ν of the pipe materials whose values have a source (register: surge.pipe-elasticity). */
 export const PIPE_ELASTICITY: Readonly<Partial<Record<Material, { modulus: number; poisson: number }>>> = (() => {
-  const v = REGISTER['surge.pipe-elasticity'].value;
+  const v = VALUES['surge.pipe-elasticity'];
   const of = (m: 'ductile-iron' | 'pvc' | 'hdpe' | 'steel') => ({ modulus: v[`${m}.E`], poisson: v[`${m}.nu`] });
   return { 'ductile-iron': of('ductile-iron'), pvc: of('pvc'), hdpe: of('hdpe'), steel: of('steel') };
 })();
@@ -37,7 +37,7 @@ export interface WaveSpeedInput {
  * A thin-wall formula: for thick plastic walls (DR below about 20) it is an estimate.
  */
 export function waveSpeed(i: WaveSpeedInput): number {
-  const k = i.bulkModulus ?? REGISTER['surge.water-bulk-modulus'].value;
+  const k = i.bulkModulus ?? VALUES['surge.water-bulk-modulus'];
   const c1 = i.support ?? 1;
   return Math.sqrt(k / i.density) / Math.sqrt(1 + (c1 * k * i.insideDiameter) / (i.modulus * i.wall));
 }

@@ -5,8 +5,9 @@ const DIPRA = 'DIPRA, Thrust Restraint Design for Ductile Iron Pipe, 7th ed. (20
 
 /**
  * The one register of every coefficient, table, formula and default the solver relies on. Code reads
- * its values from here, so that what a result depends on is also what the calculation record and the
- * print list. docs/provenance.md is generated from it.
+ * its values from here (through registerValues.ts, generated from it without the words), so that what a
+ * result depends on is also what the calculation record and the print list. docs/provenance.md is
+ * generated from it.
  */
 export const REGISTER = {
   'gravity.standard': {
@@ -471,20 +472,3 @@ export const REGISTER = {
 export type ProvenanceId = keyof typeof REGISTER;
 
 export const provenance = (id: ProvenanceId): ProvenanceEntry => REGISTER[id];
-
-/** The entries among `ids` that were not read in their source, in register order. */
-export function unverified(ids: Iterable<ProvenanceId>): ProvenanceId[] {
-  const list = [...ids];
-  if (list.length === 0) return [];
-  // A schedule asks this for every fitting, and fittings share a handful of bases: remember each.
-  const key = list.join('\u0000');
-  let found = unverifiedOf.get(key);
-  if (!found) {
-    const wanted = new Set(list);
-    found = (Object.keys(REGISTER) as ProvenanceId[]).filter((id) => wanted.has(id) && !REGISTER[id].verified);
-    unverifiedOf.set(key, found);
-  }
-  return found.slice();
-}
-
-const unverifiedOf = new Map<string, ProvenanceId[]>();

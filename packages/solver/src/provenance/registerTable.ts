@@ -23,9 +23,9 @@ export function provenanceMarkdown(): string {
     '# Provenance register',
     '',
     'Every coefficient, table, formula and default the solver relies on, with where it comes from. The code reads',
-    'its values from `packages/solver/src/provenance/register.ts`, and every result lists the entries it depends on',
-    'that were not read in their source: the calculation record, `explain` and the print say',
-    '“not verified against <document, clause>” beside them.',
+    'its values from `packages/solver/src/provenance/register.ts` (through `registerValues.ts`, generated from it),',
+    'and every result lists the entries it depends on that were not read in their source: the calculation record,',
+    '`explain` and the print say “not verified against <document, clause>” beside them.',
     '',
     '*verified* means the value was read in the document itself, or in a faithful reproduction of its table named',
     'in the source. *common practice* is a rule of thumb of the trade; *own rule* a choice of this project;',
@@ -38,6 +38,34 @@ export function provenanceMarkdown(): string {
     '| id | quantity | value | unit | kind | source | verified |',
     '|---|---|---|---|---|---|---|',
     ...rows,
+    '',
+  ].join('\n');
+}
+
+/**
+ * provenance/registerValues.ts: the register's values and which entries are unverified, without their
+ * words, for the code that computes with them (the words load only where they are shown).
+ */
+export function registerValuesModule(): string {
+  const values = (Object.entries(REGISTER) as [string, ProvenanceEntry][]).map(
+    ([id, e]) => `  '${id}': ${JSON.stringify(e.value)},`,
+  );
+  const open = (Object.entries(REGISTER) as [string, ProvenanceEntry][]).filter(([, e]) => !e.verified);
+  return [
+    '// Generated from register.ts by provenance/generatedDocs.test.ts (`UPDATE_DOCS=1 corepack pnpm test`): edit',
+    '// the register, never this file. The values the solver computes with, apart from the register’s words,',
+    '// so that code which only computes does not load the words (docs/performance.md).',
+    "import type { ProvenanceId, REGISTER } from './register.js';",
+    '',
+    '/** Each register entry’s value, by id. */',
+    "export const VALUES: { readonly [K in ProvenanceId]: (typeof REGISTER)[K]['value'] } = {",
+    ...values,
+    '};',
+    '',
+    '/** The entries not read in their source, in register order. */',
+    'export const UNVERIFIED: readonly ProvenanceId[] = [',
+    ...open.map(([id]) => `  '${id}',`),
+    '];',
     '',
   ].join('\n');
 }

@@ -9,7 +9,7 @@ import {
   passiveConstants,
   passiveResistance,
 } from './passiveResistance.js';
-import { REGISTER } from '../provenance/register.js';
+import { VALUES } from '../provenance/registerValues.js';
 import { roundDownTo, roundUpTo } from './rounding.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 
@@ -184,7 +184,7 @@ function better(aw: number, ah: number, bw: number, bh: number): boolean {
 function widestAt(
   h: number,
   tallest: number,
-  limits: (typeof REGISTER)['block.face-limits']['value'],
+  limits: (typeof VALUES)['block.face-limits'],
   step: number,
   trenchWidth: number | undefined,
 ): number {
@@ -244,7 +244,7 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
   const diagnostics: Diagnostic[] = [];
   const area = (i.safetyFactor * i.thrust) / i.allowableBearing;
   const centreDepth = i.cover + i.outsideDiameter / 2;
-  const limits = REGISTER['block.face-limits'].value;
+  const limits = VALUES['block.face-limits'];
   // Face centred on the pipe: h ≤ (centreDepth + h/2)/2 gives h ≤ 2/3 of the centreline depth.
   const ruleTallest = roundDownTo((2 * centreDepth) / 3, i.step);
   const shortest = roundUpTo(i.outsideDiameter, i.step);

@@ -4,7 +4,7 @@ import type { Leg } from '../network/legs.js';
 import type { Project } from '../model/projectSchema.js';
 import type { ThrustEnvelope } from '../thrust/fittingThrust.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
-import { REGISTER } from '../provenance/register.js';
+import { VALUES } from '../provenance/registerValues.js';
 import { sizeBearingBlock, type BearingBlock, type FaceTerms } from './bearingBlock.js';
 import { roundUpTo } from './rounding.js';
 import { sizeGravityAnchor, type AnchorResult, type GravityAnchor } from './gravityAnchor.js';
@@ -40,7 +40,7 @@ export const present = (force: number, total: number) => force > 1e-7 * total &&
  * along that trench and is not limited by its width.
  */
 function acrossTrench(direction: Vec3, legs: readonly Leg[]): boolean {
-  const limit = REGISTER['block.across-trench'].value;
+  const limit = VALUES['block.across-trench'];
   // One pass, no arrays: asked for every block of every fitting.
   let planLegs = 0;
   let allAlongLine = true;
@@ -323,7 +323,7 @@ function heavyBlock(
   const unitWeight = concreteWeight(design.concreteUnitWeight, site, submerged);
   if (!(unitWeight > 0)) return null;
   const volume = (design.upliftSafetyFactor * upward) / unitWeight;
-  const thickest = REGISTER['block.thickest'].value * design.blockDepth;
+  const thickest = VALUES['block.thickest'] * design.blockDepth;
   if (volume > bearingArea * thickest) return null;
   const face = block.faceWidth * block.faceHeight;
   const depth = Math.max(block.depth, roundUpTo(volume / face, site.step));

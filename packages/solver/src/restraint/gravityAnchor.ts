@@ -2,7 +2,7 @@ import { value, type CalcStep } from '../analysis/calcRecord.js';
 import { roundUpTo } from './rounding.js';
 import { concreteWeight, type FittingSite } from './site.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
-import { REGISTER } from '../provenance/register.js';
+import { VALUES } from '../provenance/registerValues.js';
 
 export interface GravityAnchorInput {
   /** N, largest upward thrust over the states */
@@ -55,7 +55,7 @@ export type AnchorResult =
 
 /** tan δ of concrete cast on the soil, δ = ⅔·φ (register: anchor.base-friction). */
 export const baseFrictionCoefficient = (frictionAngle: number): number =>
-  Math.tan((REGISTER['anchor.base-friction'].value * frictionAngle * Math.PI) / 180);
+  Math.tan((VALUES['anchor.base-friction'] * frictionAngle * Math.PI) / 180);
 
 /**
  * Dead-weight anchor for an upward thrust (DIPRA gravity thrust block; the form V = S_f·T_v/W_m is

@@ -1,20 +1,20 @@
 import { value, type RecordValue } from '../analysis/calcRecord.js';
 import { pipeWeightPerLength } from '../catalog/materialDensity.js';
 import type { Pipe, Soil } from '../model/projectSchema.js';
-import { REGISTER } from '../provenance/register.js';
+import { VALUES } from '../provenance/registerValues.js';
 import { effectiveStress, rankinePassiveCoefficient } from './passiveResistance.js';
 import type { FittingSite } from './site.js';
 
 /** Trench-type coefficient K_n for laying conditions 1–5 of AWWA C150/C151 (register: unverified). */
-export const TRENCH_COEFFICIENT: Readonly<Record<number, number>> = REGISTER['joints.trench-coefficient'].value;
+export const TRENCH_COEFFICIENT: Readonly<Record<number, number>> = VALUES['joints.trench-coefficient'];
 /** Laying condition assumed when a pipe states none. */
-export const DEFAULT_TRENCH_TYPE = REGISTER['joints.default-trench-type'].value;
+export const DEFAULT_TRENCH_TYPE = VALUES['joints.default-trench-type'];
 /** f_φ: pipe friction angle over soil friction angle (register: unverified). */
-export const DEFAULT_FRICTION_RATIO = REGISTER['joints.friction-ratio'].value;
+export const DEFAULT_FRICTION_RATIO = VALUES['joints.friction-ratio'];
 /** f_c: pipe adhesion over soil cohesion (register: unverified). */
-export const DEFAULT_ADHESION_RATIO = REGISTER['joints.adhesion-ratio'].value;
+export const DEFAULT_ADHESION_RATIO = VALUES['joints.adhesion-ratio'];
 /** Friction on polyethylene-encased pipe relative to bare pipe, adhesion neglected (register: unverified). */
-export const ENCASED_FRICTION_FACTOR = REGISTER['joints.encasement-factor'].value;
+export const ENCASED_FRICTION_FACTOR = VALUES['joints.encasement-factor'];
 
 export interface PipeSoilResistance {
   /** N/m, unit frictional resistance F_s along the pipe */

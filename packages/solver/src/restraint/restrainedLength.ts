@@ -1,13 +1,11 @@
 import { dot, horizontalNorm, norm, type Vec3 } from '../geometry/vector.js';
-import { value, type CalcStep } from '../analysis/calcRecord.js';
+import { value, type SizingStep } from '../analysis/calcRecord.js';
 import type { Leg } from '../network/legs.js';
 import type { FittingKind } from '../network/fittingKind.js';
 import type { Soil } from '../model/projectSchema.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { pipeSoilResistance } from './pipeSoilResistance.js';
 import { jointMaterialBasis } from './jointMaterial.js';
-import { REGISTER, type ProvenanceId } from '../provenance/register.js';
-import { notVerifiedText } from '../provenance/entry.js';
 import type { FittingSite } from './site.js';
 
 export interface RestrainedLeg {
@@ -34,15 +32,6 @@ export interface RestrainedLengthInput {
   record?: boolean;
 }
 
-/** "L = …, not verified against DIPRA …, horizontal bend equation": the equation with its standing. */
-const reference = (id: ProvenanceId): string => {
-  const e = REGISTER[id];
-  return e.verified ? `${e.quantity} (${e.source})` : `${e.quantity}, ${notVerifiedText(e)}`;
-};
-const BEND_REFERENCE = reference('joints.bend-equation');
-const AXIAL_REFERENCE = reference('joints.axial-equation');
-const UPLIFT_REFERENCE = reference('joints.uplift-equation');
-
 /**
  * Restrained joint length each side of a fitting (DIPRA method, as AWWA M41 adopts
  * it; equation bodies from memory, register `joints.bend-equation`). Bends, written with the
@@ -53,12 +42,12 @@ const UPLIFT_REFERENCE = reference('joints.uplift-equation');
  */
 export function restrainedLength(i: RestrainedLengthInput): {
   legs: RestrainedLeg[];
-  steps: CalcStep[];
+  steps: SizingStep[];
   diagnostics: Diagnostic[];
 } {
   const diagnostics: Diagnostic[] = [];
   const t = norm(i.thrust);
-  const steps: CalcStep[] = [];
+  const steps: SizingStep[] = [];
   const out: RestrainedLeg[] = [];
   const isBend = (i.kind === 'bend' || i.kind === 'reducing-bend') && i.deflection !== null;
   const upward = i.thrust[2] > horizontalNorm(i.thrust);
@@ -104,7 +93,7 @@ export function restrainedLength(i: RestrainedLengthInput): {
             : []),
         ],
         result: value('L', 'restrained length', length, 'length', 'computed'),
-        reference: isBend ? (upward ? UPLIFT_REFERENCE : BEND_REFERENCE) : AXIAL_REFERENCE,
+        basis: isBend ? (upward ? 'joints.uplift-equation' : 'joints.bend-equation') : 'joints.axial-equation',
       });
     if (length > leg.length) {
       diagnostics.push(

@@ -1,11 +1,11 @@
 import { STANDARD_GRAVITY } from '../units/quantities.js';
 import type { Leg } from '../network/legs.js';
 import type { Project, ProjectNode, Soil } from '../model/projectSchema.js';
-import { REGISTER } from '../provenance/register.js';
+import { VALUES } from '../provenance/registerValues.js';
 import { nodeCover, nodeGround } from '../model/groundLevel.js';
 
 /** Clear width each side of the pipe assumed for the trench when the design gives none, m (common practice). */
-export const TRENCH_CLEARANCE = REGISTER['trench.clearance'].value;
+export const TRENCH_CLEARANCE = VALUES['trench.clearance'];
 
 /** The soil a node bears on: its own, else the project default, else the first soil. */
 export function nodeSoil(project: Project, node: ProjectNode): Soil {

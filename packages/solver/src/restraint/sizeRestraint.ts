@@ -1,5 +1,5 @@
 import { norm } from '../geometry/vector.js';
-import type { CalcStep } from '../analysis/calcRecord.js';
+import type { SizingStep } from '../analysis/calcRecord.js';
 import type { Leg } from '../network/legs.js';
 import type { FittingGeometry } from '../network/fittingKind.js';
 import type { Project, ProjectNode } from '../model/projectSchema.js';
@@ -27,7 +27,7 @@ export interface Restraint {
   restrainedLength: number | null;
   restrainedLegs: RestrainedLeg[];
   /** the record of the restraint, in order (empty unless asked for) */
-  steps: CalcStep[];
+  steps: SizingStep[];
   diagnostics: Diagnostic[];
   /** the register entries the sizing relied on */
   basis: ProvenanceId[];
@@ -127,7 +127,7 @@ export function sizeRestraint(
   return out;
 }
 
-const NO_STEPS = Object.freeze([]) as unknown as CalcStep[];
+const NO_STEPS = Object.freeze([]) as unknown as SizingStep[];
 const NO_FINDINGS = Object.freeze([]) as unknown as Diagnostic[];
 const NO_LEGS = Object.freeze([]) as unknown as RestrainedLeg[];
 const NO_BASIS = Object.freeze([]) as unknown as ProvenanceId[];

@@ -1,5 +1,5 @@
 import type { Project } from '../model/projectSchema.js';
-import { REGISTER } from '../provenance/register.js';
+import { VALUES } from '../provenance/registerValues.js';
 import type { UnitSystem } from '../units/conversions.js';
 import { columnNumber, columnUnit } from './columnUnits.js';
 import { fittingTitle } from './fittingNames.js';
@@ -73,7 +73,7 @@ export interface TakeOff {
 
 /** The project's waste allowance, or the register's default when it states none. */
 export const concreteWaste = (project: Project): number =>
-  project.design.concreteWaste ?? REGISTER['quantities.concrete-waste'].value;
+  project.design.concreteWaste ?? VALUES['quantities.concrete-waste'];
 
 /**
  * The take-off of some schedule rows (a page's or the whole job's). Pipe sizes are named by the

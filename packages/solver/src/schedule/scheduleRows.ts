@@ -6,7 +6,8 @@ import type { BearingBlock } from '../restraint/bearingBlock.js';
 import type { Diagnostic } from '../diagnostics/diagnostic.js';
 import { diagnosticText } from '../diagnostics/wording.js';
 import { legTarget, wordingContext } from '../diagnostics/context.js';
-import { unverified, type ProvenanceId } from '../provenance/register.js';
+import type { ProvenanceId } from '../provenance/register.js';
+import { unverified } from '../provenance/unverified.js';
 import { CAUTIONS } from './cautions.js';
 import { restrainedJointCount } from './restrainedJoints.js';
 

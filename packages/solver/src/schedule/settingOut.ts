@@ -1,9 +1,9 @@
-import { REGISTER } from '../provenance/register.js';
+import { VALUES } from '../provenance/registerValues.js';
 import { planBearing, type Vec3 } from '../geometry/vector.js';
 import type { ScheduleFitting } from './scheduleRows.js';
 
 /** Thickness of a trench-bottom pad, m (register: pad.thickness), never less than the construction step. */
-export const padThickness = (step: number): number => Math.max(REGISTER['pad.thickness'].value, step);
+export const padThickness = (step: number): number => Math.max(VALUES['pad.thickness'], step);
 
 /**
  * An anchor's three dimensions. The anchor sizing may report length × width × height; where it

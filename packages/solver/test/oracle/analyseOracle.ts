@@ -13,10 +13,8 @@ import {
 import { VACUUM_GAUGE_PRESSURE } from '../../src/pressure/nodePressure.js';
 import { waterWeightInFitting } from '../../src/thrust/waterWeight.js';
 import { sizeRestraint, type Restraint } from '../../src/restraint/sizeRestraint.js';
-import { thrustSteps } from '../../src/analysis/thrustSteps.js';
 import { diagnostic, uniqueDiagnostics, type Diagnostic } from '../../src/diagnostics/diagnostic.js';
 import type { ProvenanceId } from '../../src/provenance/register.js';
-import type { CalcStep } from '../../src/analysis/calcRecord.js';
 import { implausibleInputs } from '../../src/model/plausibility.js';
 import { pipeRatingChecks } from '../../src/pressure/pipeRating.js';
 
@@ -170,20 +168,4 @@ export function analyse(project: Project): Analysis {
     cache.set(project, result);
   }
   return result;
-}
-
-const records = new WeakMap<FittingAnalysis, CalcStep[]>();
-
-/**
- * A fitting's calculation record — thrust, then restraint — built when first read by sizing the
- * fitting again with its record (the schedule never pays for it).
- */
-export function calculationRecord(project: Project, f: FittingAnalysis): CalcStep[] {
-  let r = records.get(f);
-  if (!r) {
-    const restraint = sizeRestraint(project, f.node, f.legs, f.geometry, f.envelope, true);
-    r = [...thrustSteps(project, f.node, f.legs, f.envelope.governing), ...restraint.steps];
-    records.set(f, r);
-  }
-  return r;
 }

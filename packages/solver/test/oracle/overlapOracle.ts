@@ -1,6 +1,6 @@
 import type { Project } from '../../src/model/projectSchema.js';
 import { norm } from '../../src/geometry/vector.js';
-import { MIN_PIPE_LENGTH, OVERLAP_ANGLE, type Add } from '../../src/model/crossChecks.js';
+import { MIN_PIPE_LENGTH, OVERLAP_ANGLE, type Add } from '../../src/model/routeRules.js';
 
 // The overlapping-pipes check as it was before it was written as plain loops (src/model/crossChecks.ts),
 // kept as the reference a test holds the new one to: the same problems, in the same order.

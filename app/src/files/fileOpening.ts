@@ -1,0 +1,55 @@
+// Opening a chosen or dropped file and importing a route into the project (files/useFileOpening.ts holds
+// what waits for the import dialog): loaded on the first Open or drop, or in the warm-up.
+import type { Project } from '@mainbrace/solver';
+import type { Actions } from '../state/actions.js';
+import type { AppStore } from '../state/store.js';
+import { fitView } from '../state/viewport.js';
+import { openProjectFile } from './projectFile.js';
+import { readAnyFile, runImport, type ImportChoices, type PendingImport } from './routeImport.js';
+
+/** Notes worth showing after an import: warnings first, then at most a few notes. */
+function importLines(notes: { level: string; where: string; message: string }[]): string[] {
+  const text = (n: { level: string; where: string; message: string }) =>
+    `${n.level === 'warning' ? '! ' : ''}${n.where ? `${n.where}: ` : ''}${n.message}`;
+  const warnings = notes.filter((n) => n.level !== 'note').map(text);
+  const rest = notes.filter((n) => n.level === 'note').map(text);
+  return [...warnings, ...rest.slice(0, 6), ...(rest.length > 6 ? [`… and ${rest.length - 6} more notes`] : [])];
+}
+
+/** Opens a project file at once, or returns the route a file holds for the import dialog; null otherwise. */
+export async function openFile(file: File, actions: Actions): Promise<PendingImport | null> {
+  const r = await readAnyFile(file);
+  if (r.kind === 'project') {
+    await openProjectFile(file, actions);
+    return null;
+  }
+  if (r.kind === 'route') return r.pending;
+  actions.notify({
+    tone: 'error',
+    title: `${file.name} was not imported — your project is unchanged`,
+    lines: r.lines,
+  });
+  return null;
+}
+
+/** Imports a route as the dialog chose: it replaces the project, shown whole, or the user is told why not. */
+export async function importRoute(p: PendingImport, choices: ImportChoices, store: AppStore, actions: Actions) {
+  const current: Project = store.getState().project;
+  const r = await runImport(p, choices, current);
+  if (r.ok) {
+    actions.replaceProject(r.project);
+    // A route from elsewhere lies wherever its coordinates put it: show all of it.
+    const el = document.querySelector('[data-testid="plan"]');
+    actions.setViewport(fitView(r.project.nodes, el?.clientWidth ?? 800, el?.clientHeight ?? 500));
+    actions.notify({
+      tone: 'info',
+      title: `Imported ${p.name}: ${r.project.nodes.length} nodes, ${r.project.pipes.length} pipes`,
+      lines: importLines(r.notes),
+    });
+  } else
+    actions.notify({
+      tone: 'error',
+      title: `${p.name} was not imported — your project is unchanged`,
+      lines: importLines(r.notes.filter((n) => n.level === 'error')),
+    });
+}
