@@ -145,17 +145,7 @@ export function createActions(store: AppStore) {
         edit((p) => ops.addRoute(p, start, vertices, end, get().pipeSpec));
         const after = routePieces(get().project).length;
         // A run not joined to the main is sized alone, with dead-end blocks at both ends: say so at once.
-        if (after > before && after > 1)
-          set({
-            notice: {
-              tone: 'warning',
-              title: `That run is not connected to the rest of the main (the route is now ${after} separate pieces)`,
-              lines: [
-                'Each piece is sized on its own, with a dead-end block at every free end.',
-                'To join it, undo (Ctrl+Z) and draw it again starting or ending on a node or pipe: the plan rings what a click would join.',
-              ],
-            },
-          });
+        if (after > before && after > 1) set({ notice: ops.separateRunNotice(after) });
       }),
     moveNodes: (moves: ReadonlyMap<string, PlanPoint>) => {
       // The drag's preview shows the nodes where they go until the move is made; a later drag's is its own.
@@ -174,18 +164,7 @@ export function createActions(store: AppStore) {
         edit((p) => ops.deleteItems(p, nodes, pipes));
         const after = get().project;
         if (after === before) return;
-        const gone = {
-          nodes: before.nodes.length - after.nodes.length,
-          pipes: before.pipes.length - after.pipes.length,
-        };
-        set({
-          selection: EMPTY_SELECTION,
-          notice: {
-            tone: 'info',
-            title: `Deleted ${gone.nodes} node${gone.nodes === 1 ? '' : 's'} and ${gone.pipes} pipe${gone.pipes === 1 ? '' : 's'} — Ctrl+Z brings them back`,
-            lines: [],
-          },
-        });
+        set({ selection: EMPTY_SELECTION, notice: ops.deletedNotice(before, after) });
       });
     },
     updateNode: (id: string, patch: Partial<ProjectNode>) =>
