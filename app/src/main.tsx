@@ -8,9 +8,8 @@ import { StoreProvider } from './state/StoreContext.js';
 import { restoreProject, startAutosave, type Restored } from './state/autosave.js';
 import { browserStore } from './state/keyValue.js';
 import { newTabId, openTabChannel } from './state/tabChannel.js';
-import { bindKeptCopies, refreshKeptCopies, showKeptCopies } from './state/keptCopiesView.js';
+import { bindKeptCopies, refreshKeptCopies } from './state/keptCopiesView.js';
 import { takeStartNotice } from './state/startNotice.js';
-import type { Notice } from './state/store.js';
 import { setSaveBeforeReload } from './chrome/loadChunk.js';
 import { registerServiceWorker, watchForNewVersion } from './chrome/newVersion.js';
 import { lazyRecovery } from './chrome/lazyRecovery.js';
@@ -19,6 +18,7 @@ import { ErrorBoundary } from './chrome/ErrorBoundary.js';
 import type { PipeSpec } from './state/documentEdits.js';
 import { loadChecks, validated } from './state/checks.js';
 import { afterFirstDraw } from './chrome/warmUp.js';
+import type { Notice } from './state/store.js';
 import { warmParts } from './chrome/lazyPart.js';
 import './styles.css';
 
@@ -50,36 +50,6 @@ function defaultPipe(project: Project): PipeSpec {
   };
 }
 
-/** What the user is told at start about the project kept from the last visit, if anything. */
-function keptNotice(kept: Restored): Notice | null {
-  const copies = { label: 'Show kept copies', run: showKeptCopies };
-  switch (kept.kind) {
-    case 'unreadable':
-      return {
-        tone: 'warning',
-        title: kept.copy
-          ? 'The project kept from your last visit could not be read: it is in Kept copies, unchanged, and the demo opened instead'
-          : 'The project kept from your last visit could not be read, and could not be copied aside: it stays in storage until you save over it; the demo opened instead',
-        lines: kept.lines,
-        ...(kept.copy ? { actions: [copies] } : {}),
-      };
-    case 'empty':
-      return {
-        tone: 'warning',
-        title: 'The project kept in this browser was empty, so there was nothing to open: the demo opened instead',
-        lines: ['The last save may have been cut short (the browser closed while saving, or its storage was cleared).'],
-      };
-    case 'storage-failed':
-      return {
-        tone: 'warning',
-        title: 'The browser’s storage could not be read: the demo opened, and a project kept there is left untouched',
-        lines: [kept.detail],
-      };
-    default:
-      return null;
-  }
-}
-
 async function start() {
   // Read-only hook for the browser tests, in the dev and test builds only, in a file of its own.
   const testHook = import.meta.env.DEV || import.meta.env.MODE === 'test' ? import('./testHook.js') : null;
@@ -107,7 +77,19 @@ async function start() {
   // A damaged or empty record is replaced by what opened (a damaged one is in the kept copies first).
   if ((kept.kind === 'unreadable' && kept.copy) || kept.kind === 'empty') void autosave.claim();
   installShortcuts(store, actions);
-  const notice = keptNotice(kept) ?? takeStartNotice();
+  // What went wrong with the kept project, if anything, is worded by code only such a start loads.
+  const problem =
+    kept.kind === 'project' || kept.kind === 'none'
+      ? null
+      : await import('./state/keptNotice.js').then(
+          (m) => m.keptNotice(kept),
+          (): Notice => ({
+            tone: 'warning',
+            title: 'The project kept from your last visit did not open: the demo opened instead',
+            lines: ['Kept copies may hold it; reload the page to see why.'],
+          }),
+        );
+  const notice = problem ?? takeStartNotice();
   if (notice) actions.notify(notice);
   void refreshKeptCopies(false);
   watchForNewVersion(actions.notify, autosave.flush);
