@@ -6,7 +6,7 @@ import { readRecord, writeIfAt, writeOver } from './storedProject.js';
 import { deleteKeptCopy, keepCopy, updateKeptCopy, type KeptCopy } from './keptCopies.js';
 import { projectFromText } from './restore.js';
 import type { TabChannel } from './tabChannel.js';
-import { storageErrorDetail } from './storageError.js';
+import { storageErrorDetail } from './storageFailure.js';
 import { download, fileStem, projectText } from '../files/saveFile.js';
 import { refreshKeptCopies, showKeptCopies } from './keptCopiesView.js';
 
@@ -53,11 +53,17 @@ export function startAutosave(store: AppStore, o: AutosaveOptions) {
     saved = null; // retry at the next edit or flush
     if (failed) return;
     failed = true;
-    o.notify({
+    const notice = (detail: string): Notice => ({
       tone: 'warning',
       title: 'Autosave failed: your work is only in this tab — save it to a file',
-      lines: [storageErrorDetail(e)],
+      lines: [detail],
       actions: [saveToFile],
+    });
+    // At once; then with the browser's reason worded, unless another notice has come meanwhile.
+    const first = notice('the browser did not store the project');
+    o.notify(first);
+    void storageErrorDetail(e).then((detail) => {
+      if (store.getState().notice === first) o.notify(notice(detail));
     });
   }
 

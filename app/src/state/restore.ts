@@ -3,7 +3,7 @@ import { validated, type Validated } from './checks.js';
 import type { KeyValueStore } from './keyValue.js';
 import { readRecord, type StoredRecord } from './storedProject.js';
 import { keepCopyOnce, type KeptCopy } from './keptCopies.js';
-import { storageErrorDetail } from './storageError.js';
+import { storageErrorDetail } from './storageFailure.js';
 import { checkProjectText } from './projectCheck.js';
 
 /** What was kept from the last visit, and the revision this tab's document grows from. */
@@ -36,7 +36,7 @@ export async function restoreProject(kv: KeyValueStore): Promise<Restored> {
   try {
     record = await readRecord(kv);
   } catch (e) {
-    return { kind: 'storage-failed', detail: storageErrorDetail(e) };
+    return { kind: 'storage-failed', detail: await storageErrorDetail(e) };
   }
   if (!record) return { kind: 'none' };
   if (record.text.trim() === '') return { kind: 'empty', revision: record.revision };
