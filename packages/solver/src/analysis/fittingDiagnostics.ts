@@ -51,6 +51,7 @@ export function fittingDiagnostics(
   if (unbalanced) found.push(unbalanced);
   if (node.valve && geometry.kind === 'valve') found.push(diagnostic('valve.both-ways', { node: node.id }));
   else if (node.valve) found.push(diagnostic('valve.flag-ignored', { node: node.id }));
+  if (legs.length > 4) found.push(diagnostic('fitting.many-pipes', { node: node.id }));
   if (norm(envelope.governing.total) === 0) found.push(diagnostic('thrust.none', { node: node.id }));
   // No findings (most fittings): one shared empty list, not one kept per fitting.
   return found.length ? uniqueDiagnostics(found) : NO_FINDINGS;

@@ -57,6 +57,12 @@ export const DIAGNOSTIC_CODES = {
       'The valve flag applies only where two pipes meet; the node was sized as its fitting without a closed valve.',
     action: 'Move the valve to a node between two pipes, or clear the flag.',
   },
+  'fitting.many-pipes': {
+    severity: 'warning',
+    values: {},
+    meaning: 'More than four pipes meet at the node: no standard fitting joins them. It is sized as one junction.',
+    action: 'Build it from standard fittings a short pipe apart, each drawn as its own node.',
+  },
   'thrust.none': {
     severity: 'info',
     values: {},

@@ -52,6 +52,8 @@ const WORDS: Record<DiagnosticCode, Words> = {
     'Valve sized open, and closed with the pressure on either side: its restraint holds the thrust both ways along the line.',
   'valve.flag-ignored': () =>
     'The valve flag applies only where two pipes meet; this node was sized as its fitting without a closed valve.',
+  'fitting.many-pipes': () =>
+    'More than four pipes meet here: no standard fitting joins them (sized as one junction). Build it from standard fittings a short pipe apart, each drawn as its own node.',
   'thrust.none': () => 'No thrust at this fitting in any case.',
   'anchor.submerged': () =>
     'Gravity anchor below groundwater: sized with the submerged unit weight of concrete (γc − γw); design for the highest groundwater level.',

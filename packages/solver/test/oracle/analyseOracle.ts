@@ -105,6 +105,8 @@ function analyseFitting(
   if (unbalanced) found.push(unbalanced);
   if (node.valve && geometry.kind === 'valve') found.push(diagnostic('valve.both-ways', { node: node.id }));
   else if (node.valve) found.push(diagnostic('valve.flag-ignored', { node: node.id }));
+  // the finding added after this oracle was written, so that it still answers for everything else
+  if (legs.length > 4) found.push(diagnostic('fitting.many-pipes', { node: node.id }));
   if (norm(envelope.governing.total) === 0) found.push(diagnostic('thrust.none', { node: node.id }));
   return {
     node,
