@@ -13,7 +13,7 @@ const loaders: (() => Promise<unknown>)[] = [];
 export function lazyPart<P extends object>(
   load: () => Promise<ComponentType<P>>,
   fallback: ReactNode = null,
-): ComponentType<P> {
+): ComponentType<P> & { preload: () => Promise<unknown> } {
   let loaded: ComponentType<P> | null = null;
   const get = () =>
     load().then((c) => {
@@ -40,7 +40,8 @@ export function lazyPart<P extends object>(
       </LoadFailure>
     );
   }
-  return Part;
+  // what the tests await to render the part at once, as the app does after its warm-up
+  return Object.assign(Part, { preload: get });
 }
 
 /** The code of a part off the first screen could not be loaded (after `importOrReload` tried). */
