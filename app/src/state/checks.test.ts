@@ -2,7 +2,7 @@ import { describe, expect, it, vi } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { parseProject, problemText } from '@mainbrace/solver';
-import { DN300, project } from '../testFixtures.js';
+import { chain, DN300, project } from '../testFixtures.js';
 
 const demo = JSON.parse(
   readFileSync(resolve(import.meta.dirname, '../../../public/demo/larkspur-rise.json'), 'utf8'),
@@ -101,20 +101,7 @@ describe('edits of the route’s shape made before their code is loaded', () => 
     const routeEdits = await import('./routeEdits.js');
     const { createActions } = await import('./actions.js');
     const { createAppStore } = await import('./store.js');
-    const store = createAppStore(
-      project(
-        [
-          { id: 'n1', x: 0, y: 0 },
-          { id: 'n2', x: 25, y: 0 },
-          { id: 'n3', x: 25, y: 30 },
-        ],
-        [
-          { from: 'n1', to: 'n2' },
-          { from: 'n2', to: 'n3' },
-        ],
-      ),
-      DN300,
-    );
+    const store = createAppStore(chain([0, 0], [25, 0], [25, 30]), DN300);
     expect(routeEdits.routeEdits()).toBeNull();
     return { store, actions: createActions(store) };
   }
