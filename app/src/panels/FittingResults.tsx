@@ -18,6 +18,7 @@ import {
   toDisplay,
   type FittingAnalysis,
   type Project,
+  readsZero,
 } from '@mainbrace/solver';
 import { columnForce, show, showColumnForce, unitOf } from '../format/quantity.js';
 import { bearingText, fittingTitle } from '../format/fittingNames.js';
@@ -67,14 +68,14 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
               {bearingText(planBearing(e.horizontal.direction))} (from north)
             </>
           )}
-          {e.upward.force > 0 && (
+          {!readsZero(e.upward.force, 'force', u) && (
             <>
               {e.horizontal.force > 0 ? '; ' : ''}upward <strong>{showColumnForce(e.upward.force, u)}</strong>
             </>
           )}
-          {e.downward.force > 0 && (
+          {!readsZero(e.downward.force, 'force', u) && (
             <>
-              {e.horizontal.force > 0 || e.upward.force > 0 ? '; ' : ''}downward{' '}
+              {e.horizontal.force > 0 || !readsZero(e.upward.force, 'force', u) ? '; ' : ''}downward{' '}
               <strong>{showColumnForce(e.downward.force, u)}</strong>
             </>
           )}{' '}

@@ -82,7 +82,14 @@ export {
   type ViewRow,
 } from './schedule/scheduleView.js';
 export { noteAfterHeading, scheduleNotes, type ScheduleNote } from './schedule/scheduleNotes.js';
-export { columnNumber, columnUnit, quantityText, COLUMN_UNITS, type ColumnKind } from './schedule/columnUnits.js';
+export {
+  columnNumber,
+  columnUnit,
+  quantityText,
+  readsZero,
+  COLUMN_UNITS,
+  type ColumnKind,
+} from './schedule/columnUnits.js';
 export { KIND_NAME, bearingText, compassPoint, fittingTitle, angleText } from './schedule/fittingNames.js';
 export { DIAGNOSTIC_CODES, type CodeSpec } from './diagnostics/codes.js';
 export {

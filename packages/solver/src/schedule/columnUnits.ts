@@ -64,6 +64,14 @@ export function columnNumber(si: number, kind: Exclude<ColumnKind, 'text'>, unit
   return kind === 'angle' ? trim(clean) : clean;
 }
 
+/**
+ * Whether a value reads as zero in its column (0.04 kN is "0.0"): a part of a result that small is left
+ * out rather than listed as nothing, whichever screen or file words it.
+ */
+export function readsZero(si: number, kind: Exclude<ColumnKind, 'text' | 'built'>, units: UnitSystem): boolean {
+  return Number(columnNumber(si, kind, units)) === 0;
+}
+
 /** A column's unit as its heading shows it: "kN", "ft-in". */
 export const columnUnit = (kind: Exclude<ColumnKind, 'text'>, units: UnitSystem): string =>
   COLUMN_UNITS[kind][units].symbol;

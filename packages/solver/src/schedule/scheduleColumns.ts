@@ -1,7 +1,7 @@
 import { norm } from '../geometry/vector.js';
 import type { Project } from '../model/projectSchema.js';
 import { restraintConcrete } from './concrete.js';
-import type { ColumnKind } from './columnUnits.js';
+import { readsZero, type ColumnKind } from './columnUnits.js';
 import { bearingText, fittingTitle } from './fittingNames.js';
 import { restrainedText, restraintSummary } from './restraintText.js';
 import type { ScheduleFitting } from './scheduleRows.js';
@@ -65,8 +65,12 @@ export const SCHEDULE_COLUMNS: readonly ScheduleColumn[] = [
   col('case', 'Governing case', 'text', (f, c) => caseName(c, f.governingCase)),
   col('thrust', 'Thrust', 'force', (f) => norm(f.thrust)),
   col('horizontal', 'Horizontal thrust', 'force', (f) => f.horizontalThrust),
-  col('upward', 'Upward thrust', 'force', (f) => (f.upwardThrust > 0 ? f.upwardThrust : null)),
-  col('downward', 'Downward thrust', 'force', (f) => (f.downwardThrust > 0 ? f.downwardThrust : null)),
+  col('upward', 'Upward thrust', 'force', (f, c) =>
+    readsZero(f.upwardThrust, 'force', c.units) ? null : f.upwardThrust,
+  ),
+  col('downward', 'Downward thrust', 'force', (f, c) =>
+    readsZero(f.downwardThrust, 'force', c.units) ? null : f.downwardThrust,
+  ),
   col('profile', 'Crest or sag', 'text', (f) => f.profile),
   col('bears', 'Block bears toward', 'text', (f) => (f.restraint.block ? bearingText(f.bearingDirection) : null)),
   col('soil', 'Soil', 'text', (f, c) => soilName(c, f.soil)),
