@@ -9,7 +9,7 @@ import type { FittingAnalysis } from './analyse.js';
 const records = new WeakMap<FittingAnalysis, CalcStep[]>();
 
 /** A step with its reference in words: a register entry's quantity and source, or why it is not verified. */
-export function wordedStep(step: SizingStep): CalcStep {
+function wordedStep(step: SizingStep): CalcStep {
   if (!('basis' in step)) return step;
   const { basis, ...rest } = step;
   const e = REGISTER[basis];

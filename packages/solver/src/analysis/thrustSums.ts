@@ -191,14 +191,6 @@ const NO_THRUST: Vec3 = Object.freeze([0, 0, 0] as const);
 /** No state thrusts that way (up or down): one shared extreme, not one kept per fitting. */
 const NO_EXTREME: Extreme = Object.freeze({ force: 0, caseId: null });
 
-/** What one fitting's states come to: every state as data, one per case, and the envelope. */
-export interface FittingStates {
-  states: CaseThrust[];
-  /** per case the state with the largest thrust (the first of equals) */
-  cases: CaseThrust[];
-  envelope: ThrustEnvelope;
-}
-
 /** The envelope, and which states its governing and reverse state objects are (−1: none). */
 export interface EnvelopeRead {
   envelope: ThrustEnvelope;
@@ -239,7 +231,7 @@ const pipeOfSide = (legs: readonly Leg[]) => (side: number) => legs[side]!.pipe.
 /**
  * The envelope of the states in the buffer, by the rules of thrust/fittingThrust.ts (thrustEnvelope):
  * the same comparisons in the same order over the same numbers. Only the governing and the reverse
- * state become objects; `readStates` makes the others when they are read.
+ * state become objects; `readCases` makes the others when they are read.
  */
 export function readEnvelope(
   b: StateBuffer,
@@ -354,17 +346,6 @@ export function readCases(
     }
   }
   return { states, cases: worst };
-}
-
-/** Every state of the buffer as objects, with their envelope (`readEnvelope`, then `readCases`). */
-export function readStates(
-  b: StateBuffer,
-  cases: readonly LoadCase[],
-  legs: readonly Leg[],
-  closedAgainst: (side: number) => string = pipeOfSide(legs),
-): FittingStates {
-  const known = readEnvelope(b, cases, legs, closedAgainst);
-  return { ...readCases(b, cases, legs, known, closedAgainst), envelope: known.envelope };
 }
 
 /**
