@@ -193,6 +193,10 @@ function widestAt(
     : Math.min(limits.wide * h, trenchWidth ?? Infinity);
 }
 
+/** Ovesen's 3-D factor of a face `width` wide at that height (1 on a flat search or an empty face). */
+const faceShape = (width: number, flat: boolean, d23: number, term4: number, term3: number, h: number): number =>
+  flat || !(width > 0) ? 1 : ovesenAt(d23, term4, term3, h, width);
+
 /**
  * A face `width` wide, at a height whose resistance per width and Ovesen depth terms are given, holds
  * `needed` (SF·T): the arithmetic of passiveResistance × ovesenFactor, in the same order.
@@ -207,8 +211,7 @@ function faceHolds(
   h: number,
   needed: number,
 ): boolean {
-  const shape = flat || !(width > 0) ? 1 : ovesenAt(d23, term4, term3, h, width);
-  return width * perWidth * shape >= needed;
+  return width * perWidth * faceShape(width, flat, d23, term4, term3, h) >= needed;
 }
 
 /** A face's passive resistance: Rankine in 2-D, Ovesen's factor, and their product. */
@@ -333,7 +336,7 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
       chosenW = width;
       chosenH = height;
       chosenPerWidth = perWidth;
-      chosenShape = flat || !(width > 0) ? 1 : ovesenAt(d23, term4, term3, h, width);
+      chosenShape = faceShape(width, flat, d23, term4, term3, h);
     }
   }
   if (chosenW < 0) {
