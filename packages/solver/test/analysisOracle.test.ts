@@ -6,6 +6,7 @@ import { scheduleOf } from '../src/schedule/scheduleRows.js';
 import { scheduleJson } from '../src/schedule/scheduleJson.js';
 import { randomRoute, routeExtras as extras, routeWithExtras as project } from './randomRoutes.js';
 import { analyseProject as oracle } from './oracle/analyseOracle.js';
+import { RECENT_ANALYSES } from '../src/analysis/recentAnalyses.js';
 
 const runs = { seed: 20261203, numRuns: 120 };
 
@@ -230,4 +231,25 @@ describe('the analysis a step at a time (analyseInSteps), as the app opens a lon
       { ...runs, numRuns: 60 },
     );
   }, 120_000);
+});
+
+describe("analyse's memo of the documents asked for last (recentAnalyses.ts)", () => {
+  it('keeps the analysis of each recent document, and gives the same numbers for one it let go', () => {
+    const first = project(
+      fc.sample(randomRoute({ flows: true }), { seed: runs.seed, numRuns: 1 })[0]!,
+      fc.sample(extras, { seed: runs.seed, numRuns: 1 })[0]!,
+    );
+    const documents = [first];
+    const made = [analyse(first)];
+    // one document more than the memo keeps: the first one's analysis is let go
+    for (let k = 1; k <= RECENT_ANALYSES; k++) {
+      const p = documents[k - 1]!;
+      documents.push({ ...p, loadCases: p.loadCases.map((c) => ({ ...c, pressure: c.pressure + 1000 })) });
+      made.push(analyse(documents[k]!, made[k - 1]));
+    }
+    for (let k = 1; k <= RECENT_ANALYSES; k++) expect(analyse(documents[k]!)).toBe(made[k]);
+    const again = analyse(first, made[RECENT_ANALYSES]);
+    expect(again).not.toBe(made[0]);
+    expectSame(visible(again), visible(made[0]!), '', 0);
+  });
 });

@@ -26,6 +26,7 @@ import { SolvedFitting } from './solvedFitting.js';
 import { fittingDiagnostics } from './fittingDiagnostics.js';
 import { routeChange } from './routeChange.js';
 import { RouteAnalysis, type RouteTables } from './routeViews.js';
+import { RecentAnalyses } from './recentAnalyses.js';
 
 /** Everything computed for one fitting; the schedule, the plan and the record all read this. */
 export interface FittingAnalysis {
@@ -74,8 +75,8 @@ export interface Analysis {
 
 const kept = new WeakMap<Analysis, RouteTables>();
 
-/** `analyse`'s memo: one analysis per document. */
-const cache = new WeakMap<Project, Analysis>();
+/** `analyse`'s memo: one analysis per document, for the documents asked for last. */
+const cache = new RecentAnalyses();
 
 /** Thrust, envelope, restraint and findings of fitting `f` from its sums in `sums`. */
 function solveFitting(
@@ -425,7 +426,8 @@ export function analyseNext(prev: Analysis | null | undefined, project: Project)
 }
 
 /**
- * `analyseProject`, memoised by document identity: an unchanged document is never recomputed. Given
+ * `analyseProject`, memoised by document identity for the documents asked for last (recentAnalyses.ts):
+ * an unchanged document is not recomputed. Given
  * the analysis of the document before an edit, only what the edit changed is computed (analyseNext).
  */
 export function analyse(project: Project, prev?: Analysis | null): Analysis {
