@@ -19,7 +19,7 @@ export * from './units/format.js';
 export * from './units/quantities.js';
 export { legsByNode, type Leg } from './network/legs.js';
 export { fittingGeometry, needsRestraint, type FittingKind, type FittingGeometry } from './network/fittingKind.js';
-export { runLayout, fittingMarks, runLetter, type Run, type RunLayout } from './network/runs.js';
+export { runLetter, type Run } from './network/runs.js';
 export { pressureAt, VACUUM_GAUGE_PRESSURE } from './pressure/nodePressure.js';
 export { momentumBalance, type ThrustParts } from './thrust/momentumBalance.js';
 export {

@@ -3,8 +3,11 @@ import type { RouteGraph } from './routeGraph.js';
 import { runLetter, type Run } from './runs.js';
 
 /**
- * The runs of `runLayout` (network/runs.ts has the rules) on node and pipe indices: the same walk, the
- * same choices in the same order, held in flat arrays. Run r's nodes are entries runFirst[r] …
+ * The network split into runs, on node and pipe indices in flat arrays. The main starts at the first
+ * tie-in at an end, else the first end, else the first node; at every node it goes on along the
+ * straightest unwalked pipe, and every other pipe there starts a branch. Branches are lettered in the
+ * order they leave their parent runs (the main's first, by chainage), then their own branches; a
+ * network in pieces letters each piece after the last. Chainage restarts at 0 at the start of each run. Run r's nodes are entries runFirst[r] …
  * runFirst[r + 1] − 1 of `seqNode` (with their chainage in `seqChainage`), its pipes entries
  * pipeFirst[r] … of `seqPipe`.
  */
@@ -55,7 +58,7 @@ export function runTable(project: { nodes: readonly { end?: string | undefined }
   };
   const legAt = (node: number, e: number) => legs[node]![e - legStart[node]!]!;
 
-  /** Walks a run from node `start` along leg entry `e`: straight on at every node, as runLayout does. */
+  /** Walks a run from node `start` along leg entry `e`: straight on at every node. */
   const walk = (start: number, e: number, parent: number): number => {
     const r = t.letters.length;
     t.letters.push(runLetter(r));
@@ -124,7 +127,7 @@ export function runTable(project: { nodes: readonly { end?: string | undefined }
       }
     }
   };
-  // The candidate starts in runLayout's order; once every pipe is walked none is left.
+  // The candidate starts in order; once every pipe is walked none is left.
   const nodes = project.nodes;
   for (let i = 0; i < n && 2 * walkedCount < pipeEnds; i++) if (nodes[i]!.end === 'tie-in' && degree(i) === 1) from(i);
   for (let i = 0; i < n && 2 * walkedCount < pipeEnds; i++) if (degree(i) === 1) from(i);
@@ -135,7 +138,9 @@ export function runTable(project: { nodes: readonly { end?: string | undefined }
 }
 
 /**
- * Marks of the fittings by `fittingMarks`' rule (network/runs.ts): per node index its mark or
+ * Marks of the fittings: the run letter and a number in chainage order along the run that owns the
+ * node (A1, A2 … on the main, B1 … on the first branch); only nodes `isFitting` accepts are numbered,
+ * and a node's mark changes only when its own run changes before it. Per node index its mark or
  * undefined, and the marked nodes in the order they were marked.
  */
 export function runMarks(
@@ -156,7 +161,7 @@ export function runMarks(
   return { marks, order };
 }
 
-/** The runs as `runLayout` returns them, made from the table (the app and the record read these). */
+/** The runs as lists of node ids and pipe ids, made from the table (the app and the record read these). */
 export function runsOf(t: RunTable, g: RouteGraph, pipeId: (k: number) => string): Run[] {
   const runs: Run[] = [];
   for (let r = 0; r < t.letters.length; r++) {
