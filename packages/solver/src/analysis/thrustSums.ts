@@ -191,6 +191,9 @@ const NO_THRUST: Vec3 = Object.freeze([0, 0, 0] as const);
 /** No state thrusts that way (up or down): one shared extreme, not one kept per fitting. */
 const NO_EXTREME: Extreme = Object.freeze({ force: 0, caseId: null });
 
+/** The case of state `k` of the buffer (−1: none). */
+const caseOf = (b: StateBuffer, cases: readonly LoadCase[], k: number) => (k < 0 ? null : cases[b.caseIndex[k]!]!.id);
+
 /** The envelope, and which states its governing and reverse state objects are (−1: none). */
 export interface EnvelopeRead {
   envelope: ThrustEnvelope;
@@ -209,7 +212,7 @@ function stateAt(
   b: StateBuffer,
   k: number,
   cases: readonly LoadCase[],
-  closedAgainst: (side: number) => string,
+  legs: readonly Leg[],
   before: Vec3,
 ): CaseThrust {
   const statics = vec(b.statics, k);
@@ -222,23 +225,17 @@ function stateAt(
     static: statics,
     dynamic: still ? NO_THRUST : same ? before : vec(d, k),
     total: still ? statics : vec(b.total, k),
-    closedAgainst: b.side[k]! < 0 ? null : closedAgainst(b.side[k]!),
+    // a closed valve holds the pressure of the pipe on its closed side
+    closedAgainst: b.side[k]! < 0 ? null : legs[b.side[k]!]!.pipe.id,
   };
 }
-
-const pipeOfSide = (legs: readonly Leg[]) => (side: number) => legs[side]!.pipe.id;
 
 /**
  * The envelope of the states in the buffer, by the rules of thrust/fittingThrust.ts (thrustEnvelope):
  * the same comparisons in the same order over the same numbers. Only the governing and the reverse
  * state become objects; `readCases` makes the others when they are read.
  */
-export function readEnvelope(
-  b: StateBuffer,
-  cases: readonly LoadCase[],
-  legs: readonly Leg[],
-  closedAgainst: (side: number) => string = pipeOfSide(legs),
-): EnvelopeRead {
+export function readEnvelope(b: StateBuffer, cases: readonly LoadCase[], legs: readonly Leg[]): EnvelopeRead {
   const t = b.total;
   let governing = 0;
   let largest = -1;
@@ -271,9 +268,8 @@ export function readEnvelope(
     }
     if (b.pressure[k]! > pressure) pressure = b.pressure[k]!;
   }
-  const caseOf = (k: number) => (k < 0 ? null : cases[b.caseIndex[k]!]!.id);
   const direction: Vec3 = hState < 0 ? [0, 0, 0] : [t[3 * hState]! / hForce, t[3 * hState + 1]! / hForce, 0];
-  const horizontal: Extreme & { direction: Vec3 } = { force: hForce, caseId: caseOf(hState), direction };
+  const horizontal: Extreme & { direction: Vec3 } = { force: hForce, caseId: caseOf(b, cases, hState), direction };
   let reverse: ThrustEnvelope['reverse'] = null;
   let rForce = 0;
   let rState = -1;
@@ -287,9 +283,9 @@ export function readEnvelope(
   }
   // no states (no load case): no governing state, as the states' list gives none
   const governingState =
-    b.count > 0 ? stateAt(b, governing, cases, closedAgainst, NO_THRUST) : (undefined as unknown as CaseThrust);
+    b.count > 0 ? stateAt(b, governing, cases, legs, NO_THRUST) : (undefined as unknown as CaseThrust);
   if (rState >= 0) {
-    const s = rState === governing ? governingState : stateAt(b, rState, cases, closedAgainst, NO_THRUST);
+    const s = rState === governing ? governingState : stateAt(b, rState, cases, legs, NO_THRUST);
     reverse = {
       force: rForce,
       caseId: s.caseId,
@@ -302,8 +298,8 @@ export function readEnvelope(
       governing: governingState,
       horizontal,
       reverse,
-      upward: upState < 0 ? NO_EXTREME : { force: upForce, caseId: caseOf(upState) },
-      downward: downState < 0 ? NO_EXTREME : { force: downForce, caseId: caseOf(downState) },
+      upward: upState < 0 ? NO_EXTREME : { force: upForce, caseId: caseOf(b, cases, upState) },
+      downward: downState < 0 ? NO_EXTREME : { force: downForce, caseId: caseOf(b, cases, downState) },
       pressure,
     },
     governingState: governing,
@@ -322,14 +318,13 @@ export function readCases(
   cases: readonly LoadCase[],
   legs: readonly Leg[],
   known: EnvelopeRead,
-  closedAgainst: (side: number) => string = pipeOfSide(legs),
 ): { states: CaseThrust[]; cases: CaseThrust[] } {
   const t = b.total;
   const states: CaseThrust[] = new Array<CaseThrust>(b.count);
   for (let k = 0; k < b.count; k++) {
     if (k === known.governingState) states[k] = known.envelope.governing;
     else if (k === known.reverseState) states[k] = known.envelope.reverse!.state;
-    else states[k] = stateAt(b, k, cases, closedAgainst, k > 0 ? states[k - 1]!.dynamic : NO_THRUST);
+    else states[k] = stateAt(b, k, cases, legs, k > 0 ? states[k - 1]!.dynamic : NO_THRUST);
   }
   let worst: CaseThrust[];
   if (b.count === cases.length) worst = states;
