@@ -7,6 +7,8 @@ import { nodeCover, nodeGround, pipeLevelFor } from './groundLevel.js';
 import { analyse } from '../analysis/analyse.js';
 import { legsByNode } from '../network/legs.js';
 import { fittingSite } from '../restraint/site.js';
+import { scheduleOf } from '../schedule/scheduleRows.js';
+import { settingOut } from '../schedule/settingOut.js';
 
 // A bend at b between two 0.3 m OD pipes (project-format.md, "Ground levels").
 const file = (b: Record<string, unknown>) => ({
@@ -49,6 +51,25 @@ describe('ground levels at nodes', () => {
     const withGround = analyse(parsed({ groundLevel: 102 })).byNode.get('b')!;
     const withCover = analyse(parsed({ cover: 1.85 })).byNode.get('b')!;
     expect(withGround.restraint).toEqual(withCover.restraint);
+  });
+
+  it('put the surveyed ground and its cover in the schedule, and set the block out from that ground', () => {
+    // A stated cover beside a ground level is not used (project-format.md, "Ground levels").
+    const p = parsed({ groundLevel: 102, cover: 0.6 });
+    const row = scheduleOf(analyse(p)).fittings.find((f) => f.node === 'b')!;
+    expect(row.groundLevel).toBe(102);
+    expect(row.cover).toBeCloseTo(1.85, 12); // 102 − 100 − 0.15
+    const block = row.restraint.block!;
+    const out = settingOut(row, p.design.dimensionStep);
+    // the face is centred on the pipe centreline, 2.0 m below the ground (102 − 100)
+    expect(out.block!.topDepth).toBeCloseTo(2 - block.faceHeight / 2, 12);
+    expect(out.block!.baseDepth).toBeCloseTo(2 + block.faceHeight / 2, 12);
+    expect(out.block!.baseLevel).toBeCloseTo(100 - block.faceHeight / 2, 12);
+    // the same as the equivalent stated cover, number for number
+    const stated = scheduleOf(analyse(parsed({ cover: 1.85 }))).fittings.find((f) => f.node === 'b')!;
+    expect(row.cover).toBeCloseTo(stated.cover, 12);
+    expect(row.groundLevel).toBeCloseTo(stated.groundLevel, 12);
+    expect(settingOut(stated, p.design.dimensionStep).block!.baseDepth).toBeCloseTo(out.block!.baseDepth, 12);
   });
 
   it('refuse a pipe standing out of the ground, naming the field', () => {

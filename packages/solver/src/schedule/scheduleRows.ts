@@ -2,6 +2,7 @@ import { planBearing, type Vec3 } from '../geometry/vector.js';
 import type { Analysis, FittingAnalysis } from '../analysis/analyse.js';
 import type { FittingKind } from '../network/fittingKind.js';
 import { nodeSoil } from '../restraint/sizeRestraint.js';
+import { nodeCover, nodeGround } from '../model/groundLevel.js';
 import type { BearingBlock } from '../restraint/bearingBlock.js';
 import type { Diagnostic } from '../diagnostics/diagnostic.js';
 import { diagnosticText } from '../diagnostics/wording.js';
@@ -260,8 +261,9 @@ class ScheduleRow {
     this.branchAngle = g.branchAngle;
     this.chainage = f.chainage;
     this.position = [node.x, node.y, node.elevation] as const;
-    this.cover = node.cover;
-    this.groundLevel = node.elevation + od / 2 + node.cover;
+    // a surveyed ground level governs the cover, as it does in the sizing (project-format.md)
+    this.cover = nodeCover(node, od);
+    this.groundLevel = nodeGround(node, od);
     Object.defineProperty(this, 'pipes', PIPES);
     this.soil = nodeSoil(a.project, node).id;
     Object.defineProperty(this, 'cases', CASES);
