@@ -29,6 +29,13 @@ export function angleBetween(a: Vec3, b: Vec3): number {
 }
 
 /** Slope angle of a direction above the horizontal, degrees in [-90, 90]. */
+/**
+ * Degrees within which two angles count as equal when one is compared with a limit: the noise of an
+ * angle worked out from coordinates (a survey's 6 decimals of a metre over a 50 m pipe turn it by some
+ * 10⁻⁶°). A 90° bend from rounded coordinates is 90°, and a 0.5° one is 0.5°.
+ */
+export const ANGLE_NOISE = 1e-5;
+
 export const slopeAngle = (a: Vec3): number => (Math.atan2(a[2], horizontalNorm(a)) * 180) / Math.PI;
 
 /** Plan bearing of a direction, degrees clockwise from north in [0, 360). */

@@ -25,6 +25,41 @@ describe('which fitting stands at each node', () => {
     expect(kinds(p)).toEqual({ a: 'dead-end', c: 'bend', d: 'bend' });
   });
 
+  it('counts a deflection of exactly 0.5° as a bend, though acos gives 0.49999999999986°', () => {
+    const t = (0.5 * Math.PI) / 180;
+    const p = route({
+      nodes: [
+        { id: 'a', x: 0, y: 0, end: 'tie-in' },
+        { id: 'b', x: 50, y: 0 },
+        { id: 'c', x: 50 + 50 * Math.cos(t), y: 50 * Math.sin(t), end: 'tie-in' },
+      ],
+      pipes: [
+        { from: 'a', to: 'b', od: 0.326 },
+        { from: 'b', to: 'c', od: 0.326 },
+      ],
+    });
+    expect(kinds(p)).toEqual({ b: 'bend' });
+  });
+
+  it('reads a 90° bend from coordinates rounded to 6 decimals as 90°, not sharper', () => {
+    // 45° each way from the bend at (50, 0), the far ends at 6 decimals as a survey file gives them:
+    // 35.355339 and 35.355340 for 50·sin 45° = 35.3553390593, which turns the bend 90.0000008°
+    const p = route({
+      nodes: [
+        { id: 'a', x: 14.644661, y: -35.35534, end: 'tie-in' },
+        { id: 'b', x: 50, y: 0, restraint: 'joints' },
+        { id: 'c', x: 85.355339, y: -35.355339, end: 'tie-in' },
+      ],
+      pipes: [
+        { from: 'a', to: 'b', od: 0.326 },
+        { from: 'b', to: 'c', od: 0.326 },
+      ],
+    });
+    const b = analyse(p).byNode.get('b')!;
+    expect(b.geometry.deflection).toBeGreaterThan(90);
+    expect(b.diagnostics.map((d) => d.code)).not.toContain('joints.sharp-bend');
+  });
+
   it('tells a reducer, a reducing bend and a closed valve apart', () => {
     const p = route({
       nodes: [

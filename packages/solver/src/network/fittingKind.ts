@@ -1,4 +1,4 @@
-import { angleBetween, horizontal, negate, slopeAngle, type Vec3 } from '../geometry/vector.js';
+import { ANGLE_NOISE, angleBetween, horizontal, negate, slopeAngle, type Vec3 } from '../geometry/vector.js';
 import type { Leg } from './legs.js';
 import type { ProjectNode } from '../model/projectSchema.js';
 import { VALUES } from '../provenance/registerValues.js';
@@ -56,7 +56,7 @@ function twoPipeGeometry(node: ProjectNode, a: Leg, b: Leg): FittingGeometry {
   const equal = sameArea(a.thrustArea, b.thrustArea) && sameArea(a.flowArea, b.flowArea);
   let kind: FittingKind;
   if (node.valve) kind = 'valve';
-  else if (deflection < STRAIGHT_TOLERANCE) kind = equal ? 'straight' : 'reducer';
+  else if (deflection < STRAIGHT_TOLERANCE - ANGLE_NOISE) kind = equal ? 'straight' : 'reducer';
   else kind = equal ? 'bend' : 'reducing-bend';
   return { kind, deflection, horizontalDeflection, verticalDeflection, branchAngle: null, branchLeg: null };
 }

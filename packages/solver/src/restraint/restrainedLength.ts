@@ -1,4 +1,4 @@
-import { dot, horizontalNorm, norm, type Vec3 } from '../geometry/vector.js';
+import { ANGLE_NOISE, dot, horizontalNorm, norm, type Vec3 } from '../geometry/vector.js';
 import { value, type SizingStep } from '../analysis/calcRecord.js';
 import type { Leg } from '../network/legs.js';
 import type { FittingKind } from '../network/fittingKind.js';
@@ -101,7 +101,7 @@ export function restrainedLength(i: RestrainedLengthInput): {
       );
     }
   }
-  if (isBend && (i.deflection as number) > 90) {
+  if (isBend && (i.deflection as number) > 90 + ANGLE_NOISE) {
     diagnostics.push(diagnostic('joints.sharp-bend', {}, { deflection: i.deflection as number }));
   }
   return { legs: out, steps, diagnostics };
