@@ -4,6 +4,7 @@ import type { Leg } from '../network/legs.js';
 import type { Project } from '../model/projectSchema.js';
 import type { ThrustEnvelope } from '../thrust/fittingThrust.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
+import { STRAIGHT_TOLERANCE } from '../network/fittingKind.js';
 import { VALUES } from '../provenance/registerValues.js';
 import { sizeBearingBlock, type BearingBlock, type FaceTerms } from './bearingBlock.js';
 import { roundUpTo } from './rounding.js';
@@ -92,7 +93,11 @@ export function concreteRestraint(
   };
   const h = envelope.horizontal;
   const up = envelope.upward.force;
-  const hasHorizontal = present(h.force, total);
+  // A thrust within the straight-joint tolerance of vertical (a crest or sag straight in plan, but for
+  // the millimetres its coordinates were rounded to) has no horizontal part to hold, as a joint
+  // deflected less than that tolerance has no thrust to hold (fittingKind.ts).
+  const sideways = h.force > total * Math.sin((STRAIGHT_TOLERANCE * Math.PI) / 180);
+  const hasHorizontal = present(h.force, total) && sideways;
   const hasUp = present(up, total);
   const horizontalNeeded = Math.max(h.force, envelope.reverse?.force ?? 0);
   const atNode = (list: readonly Diagnostic[]) => list.map((d) => ({ ...d, subject: { ...d.subject, node } }));
