@@ -16,10 +16,16 @@ if ! command -v pnpm >/dev/null 2>&1 || ! pnpm --version 2>/dev/null | grep -q '
   fi
 fi
 
-if [ "${1:-}" = browser ] && ! command -v chromium >/dev/null 2>&1; then
-  sudo_if_needed() { if [ "$(id -u)" = 0 ]; then "$@"; else sudo "$@"; fi; }
-  sudo_if_needed apt-get update
-  sudo_if_needed env DEBIAN_FRONTEND=noninteractive apt-get install -y chromium
+# The browser journeys read the printed crew sheet's PDF with poppler-utils (pdftotext, pdfinfo).
+if [ "${1:-}" = browser ]; then
+  missing=()
+  command -v chromium >/dev/null 2>&1 || missing+=(chromium)
+  command -v pdftotext >/dev/null 2>&1 && command -v pdfinfo >/dev/null 2>&1 || missing+=(poppler-utils)
+  if [ "${#missing[@]}" -gt 0 ]; then
+    sudo_if_needed() { if [ "$(id -u)" = 0 ]; then "$@"; else sudo "$@"; fi; }
+    sudo_if_needed apt-get update
+    sudo_if_needed env DEBIAN_FRONTEND=noninteractive apt-get install -y "${missing[@]}"
+  fi
 fi
 
 pnpm install --frozen-lockfile
