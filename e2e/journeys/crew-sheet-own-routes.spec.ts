@@ -44,7 +44,13 @@ for (const [name, paper] of [
     const clipped = await clippedOnSheet(page);
     expect(clipped).toEqual([]);
     const pdf = `artifacts/${name}-${paper}.pdf`;
-    await page.pdf({ format: paper, landscape: true, printBackground: true, path: pdf });
+    // The page size is the sheet's own (its @page rule), as the browser's print dialog takes it.
+    await page.pdf({ preferCSSPageSize: true, printBackground: true, path: pdf });
+    const size = execFileSync('pdfinfo', [pdf], { encoding: 'utf8' }).match(/Page size:\s+([\d.]+) x ([\d.]+)/)!;
+    // ISO 216 A4 is 297 × 210 mm (841.89 × 595.28 pt); ANSI Letter 11 × 8.5 in (792 × 612 pt), landscape
+    expect([Math.round(Number(size[1])), Math.round(Number(size[2]))]).toEqual(
+      paper === 'A4' ? [842, 595] : [792, 612],
+    );
     const pages = pdfPages(pdf);
     expect(pages.length).toBe(sheets);
     const all = pages.join('\n');

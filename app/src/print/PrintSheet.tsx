@@ -244,7 +244,6 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
   );
   return (
     <div className={`print-preview paper-${paper}`} data-testid="print-sheet">
-      <style>{`@page { size: ${paper === 'a4' ? 'A4' : 'letter'} landscape; }`}</style>
       <div className="print-toolbar no-print">
         <button onClick={() => window.print()} disabled={!done} data-testid="print-now">
           Print
