@@ -65,6 +65,16 @@ export function columnNumber(si: number, kind: Exclude<ColumnKind, 'text'>, unit
 }
 
 /**
+ * The SI value a column shows for `si`, rounded as it shows it (built quantities up): totals add these,
+ * so that a total is the sum of what its rows print.
+ */
+export function shownValue(si: number, kind: Exclude<ColumnKind, 'text' | 'built'>, units: UnitSystem): number {
+  const u = COLUMN_UNITS[kind][units];
+  const shown = si / u.factor;
+  return (u.up ? ceilTo(shown, u.decimals) : roundTo(shown, u.decimals)) * u.factor;
+}
+
+/**
  * Whether a value reads as zero in its column (0.04 kN is "0.0"): a part of a result that small is left
  * out rather than listed as nothing, whichever screen or file words it.
  */

@@ -6,6 +6,7 @@ import { scheduleOf } from './scheduleRows.js';
 import { takeOff, takeOffRows } from './quantities.js';
 import { takeOffCsv } from './quantitiesText.js';
 import { anchorBox, padThickness } from './settingOut.js';
+import { ceilTo } from '../units/format.js';
 
 const demoText = readFileSync(new URL('../../../../public/demo/larkspur-rise.json', import.meta.url), 'utf8');
 const parsed = parseProjectText(demoText);
@@ -17,23 +18,39 @@ describe('quantities take-off', () => {
   const t = takeOff(fittings, project, 'si');
 
   it('sums each element from the rows it comes from (invariant: the take-off adds what the schedule sizes)', () => {
-    const blocks = fittings.reduce((v, f) => v + (f.restraint.block?.concreteVolume ?? 0), 0);
+    // each piece as a row prints it: m³ rounded up to 0.01
+    const shown = (v: number) => ceilTo(v, 2);
+    const blocks = fittings.reduce((v, f) => v + shown(f.restraint.block?.concreteVolume ?? 0), 0);
     expect(t.concrete.find((l) => l.element === 'block')!.volume).toBeCloseTo(blocks, 12);
     const anchors = fittings.reduce((v, f) => {
       if (!f.restraint.anchor) return v;
       const b = anchorBox(f.restraint.anchor);
-      return v + b.length * b.width * b.height;
+      return v + shown(b.length * b.width * b.height);
     }, 0);
     expect(t.concrete.find((l) => l.element === 'anchor')?.volume ?? 0).toBeCloseTo(anchors, 12);
-    const pads = fittings.reduce(
-      (v, f) => v + (f.restraint.trenchBottom ? f.restraint.trenchBottom.width * f.restraint.trenchBottom.length : 0),
-      0,
-    );
-    expect(t.concrete.find((l) => l.element === 'pad')?.volume ?? 0).toBeCloseTo(pads * padThickness(0.05), 12);
+    const pads = fittings.reduce((v, f) => {
+      const pad = f.restraint.trenchBottom;
+      return pad ? v + shown(pad.width * pad.length * padThickness(0.05)) : v;
+    }, 0);
+    expect(t.concrete.find((l) => l.element === 'pad')?.volume ?? 0).toBeCloseTo(pads, 12);
     expect(t.concreteNet).toBeCloseTo(
       t.concrete.reduce((v, l) => v + l.volume, 0),
       12,
     );
+  });
+
+  it('prints lines that add up: the elements to the net, the net and the waste to the total (SI and US)', () => {
+    for (const units of ['si', 'us'] as const) {
+      const rows = takeOffRows(takeOff(fittings, project, units), units).filter((r) => r.section === 'Concrete');
+      const q = (item: string) => Number(rows.find((r) => r.item.startsWith(item))!.quantity);
+      const elements = rows.filter((r) => !/^(Net|Waste|Total)/.test(r.item)).map((r) => Number(r.quantity));
+      expect(elements.length).toBeGreaterThan(1);
+      expect(q('Net')).toBeCloseTo(
+        elements.reduce((a, b) => a + b, 0),
+        9,
+      );
+      expect(q('Total to order')).toBeCloseTo(q('Net') + q('Waste'), 9);
+    }
   });
 
   it('adds the waste allowance: 10 % by default, the project’s own when it states one', () => {

@@ -1,7 +1,7 @@
 import type { Project } from '../model/projectSchema.js';
 import { VALUES } from '../provenance/registerValues.js';
 import type { UnitSystem } from '../units/conversions.js';
-import { columnNumber, columnUnit } from './columnUnits.js';
+import { columnNumber, columnUnit, shownValue } from './columnUnits.js';
 import { fittingTitle } from './fittingNames.js';
 import { anchorBox, padThickness } from './settingOut.js';
 import type { ScheduleFitting } from './scheduleRows.js';
@@ -79,17 +79,19 @@ export const concreteWaste = (project: Project): number =>
  * The take-off of some schedule rows (a page's or the whole job's). Pipe sizes are named by the
  * project's nominal size where the pipe has one, else by the outside diameter in display units.
  * Blocks count face × thickness, anchors their built box (dimensions rounded up), pads the pad
- * thickness of the register (pad.thickness).
+ * thickness of the register (pad.thickness); each piece as its row shows it in `units` (rounded up).
  */
 export function takeOff(fittings: readonly ScheduleFitting[], project: Project, units: UnitSystem): TakeOff {
   const pipes = new Map(project.pipes.map((p) => [p.id, p]));
   const sizeOf = (pipe: string, od: number) =>
     pipes.get(pipe)?.nominal ?? `${columnNumber(od, 'diameter', units)} ${columnUnit('diameter', units)}`;
   const concrete = new Map<ConcreteElement, ConcreteLine>();
+  // Each piece as its fitting's row prints it (rounded up in the display unit), so that every line and
+  // total is the sum of what the sheet lists.
   const addConcrete = (element: ConcreteElement, volume: number, mark: string) => {
     const line = concrete.get(element) ?? { element, count: 0, volume: 0, marks: [] };
     line.count++;
-    line.volume += volume;
+    line.volume += shownValue(volume, 'volume', units);
     line.marks.push(mark);
     concrete.set(element, line);
   };
@@ -106,7 +108,7 @@ export function takeOff(fittings: readonly ScheduleFitting[], project: Project, 
       const built = box.length * box.width * box.height;
       addConcrete('anchor', built, f.mark);
       const key = `${box.length}|${box.width}|${box.height}`;
-      const line = anchors.get(key) ?? { ...box, count: 0, volume: built, marks: [] };
+      const line = anchors.get(key) ?? { ...box, count: 0, volume: shownValue(built, 'volume', units), marks: [] };
       line.count++;
       line.marks.push(f.mark);
       anchors.set(key, line);
