@@ -31,7 +31,8 @@ export interface PipeSoilResistance {
  * Iron Pipe"; AWWA M41;
  * equation bodies from memory): F_s = A_p·C_p + W·tan δ with A_p = π·D, W = 2·W_e + W_p + W_w,
  * W_e = γ·H·D (the prism load, on top and bottom), C_p = f_c·c, δ = f_φ·φ; encased pipe 0.7·W·tan δ.
- * R_s = K_n·P_p·D, P_p = Rankine passive pressure at the pipe centreline σ'v(H_c)·Kp + 2c·√Kp.
+ * R_s = K_n·P_p·D, P_p = Rankine passive pressure at the pipe centreline σ'v(H_c)·Kp + 2c·√Kp; none in
+ * a soil with no shear strength.
  * Below the water table the soil weighs γ − γw and the pipe is buoyed by γw·π/4·D² (effective
  * stresses under groundwater).
  *
@@ -64,7 +65,10 @@ export function pipeSoilResistance(
   const kp = rankinePassiveCoefficient(soil.frictionAngle);
   const passivePressure =
     effectiveStress(centreDepth, soil.unitWeight, site.waterDepth, gw) * kp + 2 * soil.cohesion * Math.sqrt(kp);
-  const bearing = kn * passivePressure * d;
+  // A soil with no shear strength (φ = 0, c = 0) pushes back on the moving side no harder than it pushes
+  // on the other (Kp = Ka = 1): it resists nothing, though the formula's gross passive pressure is σ'v.
+  const shearless = !(soil.frictionAngle > 0) && !(soil.cohesion > 0);
+  const bearing = shearless ? 0 : kn * passivePressure * d;
   const uplift = Math.max(0, pipeWeight + waterWeight - buoyancy + earthLoad);
   const given = (v: unknown) => (v === undefined ? 'default (unverified)' : 'project');
   return {
@@ -100,7 +104,13 @@ export function pipeSoilResistance(
         'forcePerLength',
         'computed',
       ),
-      value('R_s', 'unit bearing K_n·P_p·D', bearing, 'forcePerLength', 'computed'),
+      value(
+        'R_s',
+        'unit bearing K_n·P_p·D',
+        bearing,
+        'forcePerLength',
+        shearless ? 'none: the soil has no shear strength (φ = 0, c = 0)' : 'computed',
+      ),
     ],
   };
 }

@@ -89,6 +89,29 @@ describe('restrained joint length (DIPRA method; docs/check-values.md CV-34)', (
     expect(f.restraint.restrainedLength).toBeGreaterThan(0);
   });
 
+  it('a soil with no shear strength (φ = 0, c = 0) holds a bend by nothing: not adequate, no length issued', () => {
+    // Kp = Ka = 1: the soil pushes back on the moving side no harder than on the other (first principles)
+    const p = route({
+      pressure: 1e6,
+      soils: [{ id: 'peat', bearing: 0, unitWeight: 11000, frictionAngle: 0, cohesion: 0 }],
+      nodes: [
+        { id: 'a', x: -30, y: 0, end: 'tie-in' },
+        { id: 'b', x: 0, y: 0 },
+        { id: 'c', x: 30 * Math.SQRT1_2, y: 30 * Math.SQRT1_2, end: 'tie-in' },
+      ],
+      pipes: [
+        { from: 'a', to: 'b', od: 0.326 },
+        { from: 'b', to: 'c', od: 0.326 },
+      ],
+    });
+    const f = analyse(p).byNode.get('b')!;
+    expect(f.geometry.kind).toBe('bend');
+    expect(f.restraint.block).toBeNull();
+    expect(f.diagnostics.map((d) => d.code)).toContain('joints.no-resistance');
+    expect(f.restraint.restrainedLegs).toEqual([]);
+    expect(f.restraint.restrainedLength).toBeNull();
+  });
+
   it('zero thrust gives no restraint at all', () => {
     const p = route({
       pressure: 0,
