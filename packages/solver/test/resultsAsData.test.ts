@@ -107,6 +107,9 @@ describe('one schedule view: the CLI table and the CSV show the same cell texts,
           if (cell && !/[",\r\n]/.test(cell)) expect(line.split(',')).toContain(cell);
         }
       });
+      // after the rows, a blank record and the cautions every result carries
+      expect(csvRows[view.rows.length + 1]).toBe('');
+      expect(csvRows.slice(view.rows.length + 2).join('\n')).toMatch(/licensed[\s\S]*undisturbed soil[\s\S]*cure/);
       // Table: each row carries the view's cells of the compact columns, in crew order.
       const table = scheduleTable(view, a.project.name).split('\n');
       view.rows.forEach((r) => {

@@ -11,6 +11,7 @@ import { scheduleOf } from '../schedule/scheduleRows.js';
 import { writeScheduleJson, writeScheduleJsonBytes } from '../schedule/scheduleJson.js';
 import { scheduleView } from '../schedule/scheduleView.js';
 import { scheduleCsv } from '../schedule/scheduleCsv.js';
+import { CAUTIONS } from '../schedule/cautions.js';
 import { scheduleTable } from '../schedule/scheduleTable.js';
 import { takeOff, takeOffRows, type TakeOffRow } from '../schedule/quantities.js';
 import { takeOffCsv, takeOffTable } from '../schedule/quantitiesText.js';
@@ -209,7 +210,13 @@ export async function runCli(argv: readonly string[], rawIo: CliIo): Promise<num
     if (args.command === 'quantities') {
       const t = takeOff(scheduleOf(analysis).fittings, project, units);
       if (format === 'json')
-        io.out(JSON.stringify(t, null, io.interactive || args.options.has('pretty') ? 2 : undefined) + '\n');
+        io.out(
+          JSON.stringify(
+            { ...t, cautions: CAUTIONS },
+            null,
+            io.interactive || args.options.has('pretty') ? 2 : undefined,
+          ) + '\n',
+        );
       else if (format === 'csv') io.out(takeOffCsv(takeOffRows(t, units).map(escapeRow)));
       else if (format === 'table')
         io.out(takeOffTable(takeOffRows(t, units).map(escapeRow), escapeControls(project.name), t.waste));

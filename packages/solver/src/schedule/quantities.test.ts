@@ -76,7 +76,19 @@ describe('quantities take-off', () => {
     const rows = takeOffRows(t, 'si');
     const csv = takeOffCsv(rows).trimEnd().split('\r\n');
     expect(csv[0]).toBe('Section,Item,Size,Count,Quantity,Unit,Fittings');
-    expect(csv).toHaveLength(rows.length + 1);
+    // the table, a blank record, then the cautions every result carries
+    const blank = csv.indexOf('');
+    expect(blank).toBe(rows.length + 1);
+    const cautions = csv.slice(blank + 1).join('\n');
+    expect(csv.slice(blank + 1).every((l) => /^"?Caution: /.test(l))).toBe(true);
+    for (const needed of [
+      /design aid/,
+      /licensed/,
+      /utility’s standards/,
+      /undisturbed soil/,
+      /cure before pressure testing/,
+    ])
+      expect(cautions).toMatch(needed);
     expect(rows.find((r) => r.item === 'Total to order')!.quantity).toBe(
       (Math.ceil(t.concreteOrdered * 100 - 1e-9) / 100).toFixed(2),
     );

@@ -1,4 +1,5 @@
-import { csvField } from './scheduleCsv.js';
+import { cautionRecords, csvField } from './scheduleCsv.js';
+import { CAUTIONS } from './cautions.js';
 import type { TakeOffRow } from './quantities.js';
 
 const HEAD = ['Section', 'Item', 'Size', 'Count', 'Quantity', 'Unit', 'Fittings'] as const;
@@ -14,7 +15,7 @@ export function takeOffCsv(rows: readonly TakeOffRow[]): string {
         .map((c, i) => csvField(c, numeric[i]!))
         .join(','),
     );
-  return lines.join('\r\n') + '\r\n';
+  return [...lines, ...cautionRecords()].join('\r\n') + '\r\n';
 }
 
 /** The take-off as a fixed-width table for a terminal. */
@@ -35,6 +36,8 @@ export function takeOffTable(rows: readonly TakeOffRow[], project: string, waste
       line(HEAD),
       line(widths.map((w) => '-'.repeat(w))),
       ...body.map(line),
+      '',
+      ...CAUTIONS.map((c) => `Caution: ${c}`),
     ].join('\n') + '\n'
   );
 }

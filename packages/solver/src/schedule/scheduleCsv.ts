@@ -1,3 +1,4 @@
+import { CAUTIONS } from './cautions.js';
 import type { ScheduleView } from './scheduleView.js';
 
 /**
@@ -9,10 +10,16 @@ export function csvField(text: string, isNumber: boolean): string {
   return /[",\r\n]/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
 }
 
+/**
+ * The cautions every result carries, as CSV records after a blank one: a spreadsheet shows them under the
+ * table, and a reader of the table stops at the blank record.
+ */
+export const cautionRecords = (): string[] => ['', ...CAUTIONS.map((c) => csvField(`Caution: ${c}`, false))];
+
 /** The schedule as CSV: every column of the view, one row per fitting in crew order, units in the header. */
 export function scheduleCsv(view: ScheduleView): string {
   const numeric = (kind: string) => kind !== 'text' && kind !== 'built';
   const header = view.columns.map((c) => csvField(c.heading, false)).join(',');
   const rows = view.rows.map((r) => view.columns.map((c) => csvField(r.cells[c.id]!, numeric(c.kind))).join(','));
-  return [header, ...rows].join('\r\n') + '\r\n';
+  return [header, ...rows, ...cautionRecords()].join('\r\n') + '\r\n';
 }
