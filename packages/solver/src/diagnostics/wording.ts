@@ -1,4 +1,5 @@
 import { formatDimension, formatSi } from '../units/format.js';
+import { quantityText } from '../schedule/columnUnits.js';
 import type { UnitSystem } from '../units/conversions.js';
 import { DIAGNOSTIC_CODES, type DiagnosticCode } from './codes.js';
 import type { Diagnostic, Subject } from './diagnostic.js';
@@ -124,6 +125,8 @@ function shownValues(d: Diagnostic, units: UnitSystem): Shown {
     const kind = kinds[name];
     if (kind === 'ratio' || kind === undefined) out[name] = formatRatio(v);
     else if (BUILT.has(name)) out[name] = formatDimension(v, units);
+    // a restrained length reads as the schedule's column gives it (rounded up)
+    else if (name === 'length' && d.code.startsWith('joints.')) out[name] = quantityText(v, 'restrained', units);
     else out[name] = formatSi(v, kind as Parameters<typeof formatSi>[1], units);
   }
   if (d.code === 'flow.unbalanced') {

@@ -1,5 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import { analyse } from '../analysis/analyse.js';
+import { scheduleOf } from '../schedule/scheduleRows.js';
 import { route } from '../../test/projectBuilder.js';
 import { expectClose } from '../../test/tolerance.js';
 
@@ -51,6 +52,9 @@ describe('restrained joint length (DIPRA method; docs/check-values.md CV-34)', (
     const f = analyse(p).byNode.get('b')!;
     expectClose(f.restraint.restrainedLength!, 25.5496, 1e-4);
     expect(f.diagnostics.map((d) => d.code)).toContain('joints.encroach');
+    // the warning gives the length the schedule gives: 25.5496 m rounded up to 25.6 m, not 25.5
+    const row = scheduleOf(analyse(p)).fittings.find((r) => r.node === 'b')!;
+    expect(row.warnings.join(' ')).toContain('restrained length 25.6 m');
   });
 
   it('longer for polyethylene-encased pipe (0.7 × friction, from memory)', () => {
