@@ -63,7 +63,7 @@ function basisOf(bits: number): ProvenanceId[] {
     ids.push('block.bearing-area', 'block.face-rule', 'block.face-limits', 'passive.rankine', 'passive.ovesen');
   if (bits & ANCHOR) ids.push('anchor.weight-rule', 'anchor.base-friction');
   if (bits & HEAVY) ids.push('anchor.weight-rule', 'block.thickest');
-  if (bits & PAD) ids.push('pad.bearing-area');
+  if (bits & PAD) ids.push('pad.bearing-area', 'pad.thickness');
   if (bits & BEND) ids.push('joints.bend-equation', 'joints.trench-coefficient', 'joints.bearing-pressure');
   if (bits & UPLIFT) ids.push('joints.uplift-equation');
   if (bits & AXIAL) ids.push('joints.axial-equation');

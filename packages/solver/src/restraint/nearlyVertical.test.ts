@@ -1,6 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import { analyse } from '../analysis/analyse.js';
 import { route } from '../../test/projectBuilder.js';
+import { scheduleOf } from '../schedule/scheduleRows.js';
 
 /**
  * A crest straight in plan, but for the millimetre a typed point was rounded to: its thrust is upward,
@@ -43,5 +44,26 @@ describe('a thrust within the straight-joint tolerance of vertical', () => {
     expect(f.envelope.horizontal.force / f.envelope.upward.force).toBeGreaterThan(Math.sin((0.5 * Math.PI) / 180));
     expect(f.restraint.block ?? f.restraint.anchor).not.toBeNull();
     expect(f.restraint.block !== null || f.restraint.anchor!.horizontalThrust > 0).toBe(true);
+  });
+});
+
+describe('a sag held by a trench-bottom pad', () => {
+  it('lists the pad thickness among the values not read in their source', () => {
+    const p = route({
+      nodes: [
+        { id: 'a', x: 0, y: 0, z: 100, end: 'tie-in' },
+        { id: 'b', x: 40, y: 0, z: 98 },
+        { id: 'c', x: 80, y: 0, z: 100, end: 'tie-in' },
+      ],
+      pipes: [
+        { from: 'a', to: 'b', od: 0.222 },
+        { from: 'b', to: 'c', od: 0.222 },
+      ],
+      pressure: 1e6,
+    });
+    const row = scheduleOf(analyse(p)).fittings.find((f) => f.node === 'b')!;
+    expect(row.restraint.trenchBottom).not.toBeNull();
+    // the pad's volume in the take-off uses the register's pad.thickness, registered unverified
+    expect(row.unverified).toContain('pad.thickness');
   });
 });
