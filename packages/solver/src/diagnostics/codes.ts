@@ -163,6 +163,14 @@ export const DIAGNOSTIC_CODES = {
       'The restrained length computed along a leg is longer than the line it runs along (to the next branch or end): it is cut to the line, which cannot hold the thrust by itself. The restraint is not adequate.',
     action: 'Add a block or anchor at the fitting, restrain the whole line and its end, or change the layout.',
   },
+  'joints.into-existing-main': {
+    severity: 'warning',
+    values: { length: 'length', reach: 'length', beyond: 'length' },
+    meaning:
+      'The restrained length runs past the tie-in into the existing main: the zone relies on joints of the existing main being restrained over the rest of its length.',
+    action:
+      'Restrain the existing main’s joints over that length (confirm what it has), or add a block or anchor at the fitting.',
+  },
   'joints.fused-pe': {
     severity: 'info',
     values: {},

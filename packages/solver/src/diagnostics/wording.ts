@@ -82,6 +82,8 @@ const WORDS: Record<DiagnosticCode, Words> = {
     `The restrained length ${v.length} along ${leg(s, c)} runs past the next fitting (${v.legLength} away): the restrained zones of neighbouring fittings overlap and must be designed together.`,
   'joints.longer-than-route': (v, s, c) =>
     `Not adequate: the restrained length needed along ${leg(s, c)}, ${v.length}, is longer than the ${v.reach} of line there (to the next branch or end); it is cut to ${v.reach}, which cannot hold the thrust alone. Add a block or anchor, restrain the whole line and its end, or change the layout.`,
+  'joints.into-existing-main': (v, s, c) =>
+    `The restrained length ${v.length} along ${leg(s, c)} runs ${v.beyond} past the tie-in ${v.reach} away, into the existing main: restrain the existing main’s joints over that length (confirm what it has), or add a block or anchor at the fitting.`,
   'joints.fused-pe': (_v, s, c) =>
     `${capital(leg(s, c))} is fused PE, which is end-load bearing: restrain the transitions to gasketed pipe and allow for thermal and Poisson loads.`,
   'joints.material-basis': (_v, s, c) =>
@@ -126,7 +128,8 @@ function shownValues(d: Diagnostic, units: UnitSystem): Shown {
     if (kind === 'ratio' || kind === undefined) out[name] = formatRatio(v);
     else if (BUILT.has(name)) out[name] = formatDimension(v, units);
     // a restrained length reads as the schedule's column gives it (rounded up)
-    else if (name === 'length' && d.code.startsWith('joints.')) out[name] = quantityText(v, 'restrained', units);
+    else if ((name === 'length' || name === 'beyond') && d.code.startsWith('joints.'))
+      out[name] = quantityText(v, 'restrained', units);
     else out[name] = formatSi(v, kind as Parameters<typeof formatSi>[1], units);
   }
   if (d.code === 'flow.unbalanced') {

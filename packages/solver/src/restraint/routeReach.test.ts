@@ -75,3 +75,20 @@ describe('restrained lengths capped at what the route holds', () => {
     expectClose(reachAlong(ring, 'a', 'p1'), 40, 1e-12);
   });
 });
+
+describe('a restrained zone that runs past a tie-in', () => {
+  it('is not cut there, and says how far it runs into the existing main', () => {
+    // The same fitting with its 3 m leg ending at a tie-in: the existing main goes on beyond it.
+    const tied = { ...short, nodes: short.nodes.map((n) => (n.id === 'a' ? { ...n, end: 'tie-in' as const } : n)) };
+    const f = analyse(tied).byNode.get('c')!;
+    const along = f.restraint.restrainedLegs.find((l) => l.pipe === 'p1')!;
+    expect(along.length).toBeGreaterThan(3);
+    const into = f.diagnostics.filter((d) => d.code === 'joints.into-existing-main');
+    expect(into.map((d) => d.subject.pipe)).toEqual(['p1']);
+    expectClose(into[0]!.values.reach!, 3, 1e-12);
+    expectClose(into[0]!.values.beyond!, along.length - 3, 1e-12);
+    // cut only on its other leg, which ends at a dead end
+    const cut = f.diagnostics.filter((d) => d.code === 'joints.longer-than-route');
+    expect(cut.map((d) => d.subject.pipe)).toEqual(['p2']);
+  });
+});

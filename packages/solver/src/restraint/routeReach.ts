@@ -29,14 +29,20 @@ function linksOf(project: Project): Map<string, Link[]> {
   return links;
 }
 
+/** The line a restrained zone can run along from a fitting: its length, and whether it ends at a tie-in. */
+export interface LineAlong {
+  /** m, along the line from the fitting to the node where it branches or ends */
+  length: number;
+  /** the line ends at a tie-in: it runs on into the existing main */
+  tieIn: boolean;
+}
+
 /**
- * m, the length of line a restrained zone can run along from `node` out along `pipe`: through every
- * node where the line simply continues (two pipes: straight joints and the fittings the zone may run
- * through), up to the first node where it branches or ends. Pipe–soil friction acts only on pipe that
- * exists, so no restrained length can exceed this. At a tie-in the line runs on into
- * the existing main, whose length the project does not know: no limit there (Infinity).
+ * The line from `node` out along `pipe`: through every node where the line simply continues (two pipes:
+ * straight joints and the fittings a zone may run through), up to the first node where it branches or
+ * ends.
  */
-export function reachAlong(project: Project, node: string, pipe: string): number {
+export function lineAlong(project: Project, node: string, pipe: string): LineAlong {
   const links = linksOf(project);
   let here = node;
   let via = pipe;
@@ -44,13 +50,24 @@ export function reachAlong(project: Project, node: string, pipe: string): number
   const seen = new Set<string>([node]);
   for (;;) {
     const link = links.get(here)?.find((l) => l.pipe === via);
-    if (!link) return total;
+    if (!link) return { length: total, tieIn: false };
     total += link.length;
     const next = links.get(link.far) ?? [];
-    if (next.length === 1 && tieIns.get(project)!.has(link.far)) return Infinity;
-    if (next.length !== 2 || seen.has(link.far)) return total;
+    if (next.length === 1 && tieIns.get(project)!.has(link.far)) return { length: total, tieIn: true };
+    if (next.length !== 2 || seen.has(link.far)) return { length: total, tieIn: false };
     seen.add(link.far);
     here = link.far;
     via = next[0]!.pipe === via ? next[1]!.pipe : next[0]!.pipe;
   }
+}
+
+/**
+ * m, the length of line a restrained zone can run along from `node` out along `pipe` (`lineAlong`).
+ * Pipe–soil friction acts only on pipe that exists, so no restrained length can exceed this. At a tie-in
+ * the line runs on into the existing main, whose length the project does not know: no limit there
+ * (Infinity).
+ */
+export function reachAlong(project: Project, node: string, pipe: string): number {
+  const line = lineAlong(project, node, pipe);
+  return line.tieIn ? Infinity : line.length;
 }

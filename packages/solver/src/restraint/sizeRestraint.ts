@@ -5,7 +5,7 @@ import type { FittingGeometry } from '../network/fittingKind.js';
 import type { Project, ProjectNode } from '../model/projectSchema.js';
 import type { ThrustEnvelope } from '../thrust/fittingThrust.js';
 import { diagnostic, sameDiagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
-import { reachAlong } from './routeReach.js';
+import { lineAlong } from './routeReach.js';
 import type { BearingBlock, FaceTerms } from './bearingBlock.js';
 import type { GravityAnchor } from './gravityAnchor.js';
 import type { TrenchBottomBearing } from './trenchBottom.js';
@@ -107,7 +107,17 @@ export function sizeRestraint(
       const own = legs.find((l) => l.pipe.id === pipe)?.length ?? 0;
       if (leg.length <= own) continue;
       out.dependsOnRoute = true;
-      const reach = reachAlong(project, node.id, pipe);
+      const line = lineAlong(project, node.id, pipe);
+      const reach = line.tieIn ? Infinity : line.length;
+      if (line.tieIn && leg.length > line.length) {
+        out.diagnostics.push(
+          diagnostic(
+            'joints.into-existing-main',
+            { node: node.id, pipe },
+            { length: leg.length, reach: line.length, beyond: leg.length - line.length },
+          ),
+        );
+      }
       if (leg.length > reach) {
         out.diagnostics.push(
           diagnostic('joints.longer-than-route', { node: node.id, pipe }, { length: leg.length, reach }),
