@@ -13,7 +13,7 @@ import {
   segmentOnScreen,
   textWidth,
 } from './levelOfDetail.js';
-import { showColumnForce } from '../format/quantity.js';
+import { thrustLabel } from './thrustLabel.js';
 
 type Ctx = CanvasRenderingContext2D;
 
@@ -315,11 +315,7 @@ export function drawArrows(
       { x: ex - w / 2, y: uy >= 0 ? ey + 4 : ey - 4 - h, w, h },
     ];
     if (!room(24).some((r) => space.fits(r))) continue;
-    const total = Math.hypot(a.horizontal, a.vertical);
-    // One force unit for the whole plan (kN, or kip in US units): a label never switches to lbf.
-    let text = showColumnForce(a.horizontal, units);
-    if (Math.abs(a.vertical) > 0.02 * total)
-      text += `  ${a.vertical > 0 ? '↑' : '↓'} ${showColumnForce(Math.abs(a.vertical), units)}`;
+    const text = thrustLabel(a.horizontal, a.vertical, units);
     const w = textWidth(ctx, TYPE.force, text) + 4;
     const spot = space.place(room(w));
     if (spot) label(ctx, text, spot.x + 2, spot.y + h / 2, PALETTE.thrust, TYPE.force);
