@@ -110,15 +110,31 @@ const CrewPage = memo(function CrewPage({
     project,
     units,
   );
-  const first = rows[0]!.cells,
-    end = rows[rows.length - 1]!.cells;
   const position = positionColumns(project.sheet?.chainageStyle)[0]!;
+  // Chainage restarts on each run: a sheet holding the end of one run and the start of the next gives
+  // each run's span of its own.
+  const spans: (typeof rows)[] = [];
+  for (const r of rows) {
+    const last = spans[spans.length - 1];
+    if (last && last[0]!.fitting.run === r.fitting.run) last.push(r);
+    else spans.push([r]);
+  }
+  const subtitle = spans
+    .map((span) => {
+      const first = span[0]!.cells,
+        end = span[span.length - 1]!.cells;
+      const word = position === 'station' ? 'station' : 'chainage';
+      return span.length === 1
+        ? `${first.mark}, ${word} ${first[position]}`
+        : `${first.mark}–${end.mark}, ${word === 'station' ? 'stations' : word} ${first[position]} to ${end[position]}`;
+    })
+    .join('; ');
   return (
     <section className="sheet-page" data-testid="crew-page" aria-label={`Sheet ${index + 1} of ${pages}`}>
       <TitleBlock
         project={project}
         units={units}
-        subtitle={`${first.mark}–${end.mark}, ${position === 'station' ? 'stations' : 'chainage'} ${first[position]} to ${end[position]}`}
+        subtitle={subtitle}
         sheet={`Sheet ${index + 1} of ${pages}`}
         note={
           pageTakeOff.concreteNet > 0
