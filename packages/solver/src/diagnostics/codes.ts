@@ -129,6 +129,7 @@ export const DIAGNOSTIC_CODES = {
       ratio: 'ratio',
       safetyFactor: 'ratio',
       bearingArea: 'area',
+      largestFace: 'area',
       faceWidth: 'length',
       faceHeight: 'length',
     },

@@ -73,7 +73,7 @@ const WORDS: Record<DiagnosticCode, Words> = {
   'block.wide-face': (v) =>
     `Face ${v.faceWidth} wide is more than twice its ${v.faceHeight} height: the cover limits the height. Consider restrained joints or a deeper block.`,
   'block.not-adequate': (v) =>
-    `Not adequate: no block within the cover and face limits holds ${v.thrust} with a safety factor of ${v.safetyFactor} (bearing area ${v.bearingArea} needed; the strongest face allowed, ${v.faceWidth} wide × ${v.faceHeight} high, resists ${v.ratio} × the thrust). Restrained joints are sized instead: check them, or deepen the main, improve the soil, or have the block designed by a geotechnical engineer.`,
+    `Not adequate: no block within the cover and face limits holds ${v.thrust} with a safety factor of ${v.safetyFactor}: it needs ${v.bearingArea} of bearing face, and the largest face allowed is ${v.largestFace}; the strongest face allowed, ${v.faceWidth} wide × ${v.faceHeight} high, resists ${v.ratio} × the thrust by passive pressure, where ${v.safetyFactor} is needed. Restrained joints are sized instead: check them, or deepen the main, improve the soil, or have the block designed by a geotechnical engineer.`,
   'pad.no-bearing': (_v, s, c) =>
     `No bearing under the fitting: ${soil(s, c)} cannot take the downward thrust; restrained joints are sized instead, or replace the soil.`,
   'joints.no-resistance': (v, s, c) =>

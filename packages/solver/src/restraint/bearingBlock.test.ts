@@ -74,6 +74,15 @@ describe('bearing block area A = SF·T/σ (DIPRA form; docs/check-values.md CV-1
     expect(r.diagnostics.find((d) => d.code === 'block.not-adequate')!.values.ratio).toBeLessThan(1.5);
   });
 
+  it('says what the largest face allowed is where the bearing area is what no face reaches', () => {
+    // a soft bearing value: the area SF·T/σ outgrows every face the cover and limits allow
+    const r = sizeBearingBlock(base({ allowableBearing: 150 * PSF }));
+    expect(r.block).toBeNull();
+    const d = r.diagnostics.find((x) => x.code === 'block.not-adequate')!;
+    expect(d.values.largestFace).toBeGreaterThan(0);
+    expect(d.values.largestFace).toBeLessThan(d.values.bearingArea!);
+  });
+
   it('reports the bearing area as governing for CV-7, and the passive resistance where it enlarged the face', () => {
     expect(
       sizeBearingBlock(base({ thrust: 7385 * LBF, outsideDiameter: 9.05 * INCH, cover: 3 * FOOT })).block!.governs,

@@ -343,10 +343,12 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
     // The strongest face within the limits, for the message.
     const widest = (h: number) => widestAt(h, tallest, limits, i.step, i.trenchWidth);
     let strongest = { face: { width: widest(shortest), height: shortest }, resistance: 0 };
+    let largestFace = 0;
     for (let k = 0; k <= heights; k++) {
       const face = { width: widest(shortest + k * i.step), height: shortest + k * i.step };
       const r = faceResistance(i, centreDepth, face).total;
       if (r > strongest.resistance) strongest = { face, resistance: r };
+      largestFace = Math.max(largestFace, face.width * face.height);
     }
     diagnostics.push(
       diagnostic(
@@ -357,6 +359,7 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
           ratio: strongest.resistance / i.thrust,
           safetyFactor: i.safetyFactor,
           bearingArea: area,
+          largestFace,
           faceWidth: strongest.face.width,
           faceHeight: strongest.face.height,
         },
