@@ -2,6 +2,7 @@ import { describe, it, expect } from 'vitest';
 import { analyse } from '../analysis/analyse.js';
 import { scheduleOf } from '../schedule/scheduleRows.js';
 import { route } from '../../test/projectBuilder.js';
+import type { Soil } from '../model/projectSchema.js';
 import { expectClose } from '../../test/tolerance.js';
 
 // Hand calculation of the restrained-joint method, docs/check-values.md CV-34 (DIPRA form, from memory):
@@ -17,6 +18,25 @@ import { expectClose } from '../../test/tolerance.js';
 //   dead end:  L = S_f·P·A / F_s = 132,433 / 5,183.37 = 25.550 m
 const soils = [{ id: 's', bearing: 150e3, unitWeight: 18000, frictionAngle: 30, cohesion: 0, pipeFrictionRatio: 0.6 }];
 const pipe = { od: 0.33528, id_: 0.3162, weightPerLength: 700, trenchType: 4 };
+
+/** The fitting at b: a bend of `deflection`° at 1 MPa between two 30 m pipes of 0.326 m OD in `soil`. */
+function bendIn(soil: Soil, deflection: number) {
+  const t = (deflection * Math.PI) / 180;
+  const p = route({
+    pressure: 1e6,
+    soils: [soil],
+    nodes: [
+      { id: 'a', x: -30, y: 0, end: 'tie-in' },
+      { id: 'b', x: 0, y: 0 },
+      { id: 'c', x: 30 * Math.cos(t), y: 30 * Math.sin(t), end: 'tie-in' },
+    ],
+    pipes: [
+      { from: 'a', to: 'b', od: 0.326 },
+      { from: 'b', to: 'c', od: 0.326 },
+    ],
+  });
+  return analyse(p).byNode.get('b')!;
+}
 
 describe('restrained joint length (DIPRA method; docs/check-values.md CV-34)', () => {
   it('a 90° bend needs 8.43 m each side, as worked by hand', () => {
@@ -74,20 +94,7 @@ describe('restrained joint length (DIPRA method; docs/check-values.md CV-34)', (
   });
 
   it('a muck node gets no block, a warning, and restrained joints instead', () => {
-    const p = route({
-      pressure: 1e6,
-      soils: [{ id: 'muck', bearing: 0, unitWeight: 14000, frictionAngle: 0, cohesion: 5000 }],
-      nodes: [
-        { id: 'a', x: -30, y: 0, end: 'tie-in' },
-        { id: 'b', x: 0, y: 0 },
-        { id: 'c', x: 0, y: 30, end: 'tie-in' },
-      ],
-      pipes: [
-        { from: 'a', to: 'b', od: 0.326 },
-        { from: 'b', to: 'c', od: 0.326 },
-      ],
-    });
-    const f = analyse(p).byNode.get('b')!;
+    const f = bendIn({ id: 'muck', bearing: 0, unitWeight: 14000, frictionAngle: 0, cohesion: 5000 }, 90);
     expect(f.restraint.block).toBeNull();
     expect(f.diagnostics.map((d) => d.code)).toContain('soil.no-bearing');
     expect(f.restraint.restrainedLength).toBeGreaterThan(0);
@@ -95,20 +102,7 @@ describe('restrained joint length (DIPRA method; docs/check-values.md CV-34)', (
 
   it('a soil with no shear strength (φ = 0, c = 0) holds a bend by nothing: not adequate, no length issued', () => {
     // Kp = Ka = 1: the soil pushes back on the moving side no harder than on the other (first principles)
-    const p = route({
-      pressure: 1e6,
-      soils: [{ id: 'peat', bearing: 0, unitWeight: 11000, frictionAngle: 0, cohesion: 0 }],
-      nodes: [
-        { id: 'a', x: -30, y: 0, end: 'tie-in' },
-        { id: 'b', x: 0, y: 0 },
-        { id: 'c', x: 30 * Math.SQRT1_2, y: 30 * Math.SQRT1_2, end: 'tie-in' },
-      ],
-      pipes: [
-        { from: 'a', to: 'b', od: 0.326 },
-        { from: 'b', to: 'c', od: 0.326 },
-      ],
-    });
-    const f = analyse(p).byNode.get('b')!;
+    const f = bendIn({ id: 'peat', bearing: 0, unitWeight: 11000, frictionAngle: 0, cohesion: 0 }, 45);
     expect(f.geometry.kind).toBe('bend');
     expect(f.restraint.block).toBeNull();
     expect(f.diagnostics.map((d) => d.code)).toContain('joints.no-resistance');
