@@ -112,6 +112,8 @@ describe('the command line', () => {
     expect(e.stdout).toMatch(
       /^Restraint\n {2}A4 block {2}1\.10 m w × 0\.90 m h × 0\.60 m t, 0\.60 m³; bears 0° N, 63\.1 kN and holds 0\.2 kN up$/m,
     );
+    // a mark typed in lower case finds the same fitting
+    expect(run('explain', demo, 'a4').stdout).toBe(e.stdout);
     const valve = run('explain', demo, 'A10');
     expect(valve.stdout).toMatch(/^ {2}A10 block {11}\S/m);
     expect(valve.stdout).toMatch(/^ {2}A10 opposite block {2}\S/m);

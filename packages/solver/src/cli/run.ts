@@ -184,7 +184,10 @@ export async function runCli(argv: readonly string[], rawIo: CliIo): Promise<num
     if (args.command === 'explain') {
       const id = args.positional[1];
       if (!id) throw new UsageError('missing MARK: give the fitting’s mark (A4) or its node id');
-      const byMark = analysis.fittings.find((f) => f.mark === id);
+      // A mark as typed, or in the other case (a4 for A4): marks are letters and digits only.
+      const byMark =
+        analysis.fittings.find((f) => f.mark === id) ??
+        analysis.fittings.find((f) => f.mark.toUpperCase() === id.toUpperCase());
       const byNode = analysis.byNode.get(id);
       if (byMark && byNode && byMark !== byNode) {
         // Node ids are free text, so "A2" may be one fitting's mark and another's node id.
