@@ -27,12 +27,12 @@ test('a GeoJSON route opened in the app becomes a connected project whose bends 
 }) => {
   const app = new MainbracePage(page);
   await app.gotoFresh();
-  // The demo is drawn, not placed on the earth: its GeoJSON export is offered disabled, saying why.
+  // The demo is drawn, not placed on the earth: its GeoJSON export says why it cannot be made, in the
+  // app's own terms (no command-line option).
   await page.getByRole('button', { name: 'Export ▾' }).click();
-  const geojson = page.getByRole('menuitem', { name: 'Design as GeoJSON (for a GIS)' });
-  await expect(geojson).toBeDisabled();
-  await expect(geojson).toHaveAttribute('title', /imported from a GeoJSON file or from a CSV survey/);
-  await page.keyboard.press('Escape');
+  await page.getByRole('menuitem', { name: 'Design as GeoJSON (for a GIS)' }).click();
+  await expect(page.getByText(/GeoJSON needs a route imported from a GeoJSON file/)).toBeVisible();
+  await expect(page.getByText(/--proj4/)).toHaveCount(0);
   await app.openFile(routeFile);
   const dialog = page.getByRole('dialog', { name: /Import a GeoJSON route from quarry-hill-road.geojson/ });
   await expect(dialog).toBeVisible();

@@ -1,15 +1,9 @@
 import { useEffect, useRef, useState } from 'react';
 import { ACTIONS, titleOf, type ActionName } from './actionTable.js';
-import { useApp } from '../state/StoreContext.js';
-
-/** Why an export cannot be made of this project, or null. */
-const GEOREFERENCE_NEEDED =
-  'A drawn project is not placed on the earth: GeoJSON needs a route imported from a GeoJSON file or from a CSV survey with its projection.';
 
 /** The Export menu, from the action table: closes on a choice, on Escape and on a click anywhere else. */
 export function ExportMenu({ run }: { run: (name: ActionName) => void }) {
   const [open, setOpen] = useState(false);
-  const placed = useApp((s) => s.project.georeference !== undefined);
   const box = useRef<HTMLDivElement>(null);
   const button = useRef<HTMLButtonElement>(null);
   useEffect(() => {
@@ -41,8 +35,7 @@ export function ExportMenu({ run }: { run: (name: ActionName) => void }) {
             <button
               key={a.name}
               role="menuitem"
-              disabled={a.name === 'exportGeoJson' && !placed}
-              title={a.name === 'exportGeoJson' && !placed ? GEOREFERENCE_NEEDED : titleOf(a.name)}
+              title={titleOf(a.name)}
               onClick={() => {
                 setOpen(false);
                 run(a.name);

@@ -46,6 +46,16 @@ function startNew(store: AppStore, actions: Actions, ui: Partial<CommandUi>) {
 async function exportGeoJson(store: AppStore, actions: Actions) {
   const ex = await importOrReload(() => import('@mainbrace/solver/exchange'));
   const project = store.getState().project;
+  if (!project.georeference) {
+    actions.notify({
+      tone: 'error',
+      title: 'The design was not exported as GeoJSON',
+      lines: [
+        'A drawn project is not placed on the earth: GeoJSON needs a route imported from a GeoJSON file, or from a CSV survey with its projection (Open…).',
+      ],
+    });
+    return;
+  }
   const r = ex.designGeoJson(project);
   if (r.ok) download(`${fileStem(project)}.geojson`, r.text, 'application/geo+json');
   else actions.notify({ tone: 'error', title: 'The design was not exported as GeoJSON', lines: [r.message] });
