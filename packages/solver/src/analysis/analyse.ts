@@ -26,7 +26,7 @@ import { SolvedFitting } from './solvedFitting.js';
 import { fittingDiagnostics } from './fittingDiagnostics.js';
 import { routeChange } from './routeChange.js';
 import { RouteAnalysis, type RouteTables } from './routeViews.js';
-import { RecentAnalyses } from './recentAnalyses.js';
+import { keepAnalysis, recentAnalysis } from './recentAnalyses.js';
 
 /** Everything computed for one fitting; the schedule, the plan and the record all read this. */
 export interface FittingAnalysis {
@@ -74,9 +74,6 @@ export interface Analysis {
 }
 
 const kept = new WeakMap<Analysis, RouteTables>();
-
-/** `analyse`'s memo: one analysis per document, for the documents asked for last. */
-const cache = new RecentAnalyses();
 
 /** Thrust, envelope, restraint and findings of fitting `f` from its sums in `sums`. */
 function solveFitting(
@@ -362,7 +359,7 @@ export function analyseProject(project: Project): Analysis {
  * same analysis, which `analyse` then returns for this document without computing it again.
  */
 export function* analyseInSteps(project: Project, chunk = 200): Generator<void, Analysis, void> {
-  const done = cache.get(project);
+  const done = recentAnalysis(project);
   if (done) return done;
   const graph = routeGraph(project);
   yield;
@@ -377,7 +374,7 @@ export function* analyseInSteps(project: Project, chunk = 200): Generator<void, 
     if ((f + 1) % chunk === 0) yield;
   }
   const analysis = finishAssembly(s);
-  cache.set(project, analysis);
+  keepAnalysis(project, analysis);
   return analysis;
 }
 
@@ -431,10 +428,10 @@ export function analyseNext(prev: Analysis | null | undefined, project: Project)
  * the analysis of the document before an edit, only what the edit changed is computed (analyseNext).
  */
 export function analyse(project: Project, prev?: Analysis | null): Analysis {
-  let result = cache.get(project);
+  let result = recentAnalysis(project);
   if (!result) {
     result = analyseNext(prev, project);
-    cache.set(project, result);
+    keepAnalysis(project, result);
   }
   return result;
 }

@@ -10,23 +10,19 @@ import type { Analysis } from './analyse.js';
  */
 export const RECENT_ANALYSES = 8;
 
-/** The analyses of the last `RECENT_ANALYSES` documents asked for, the least recently used going first. */
-export class RecentAnalyses {
-  readonly #kept = new Map<Project, Analysis>();
+/** The analyses of the last documents asked for, the least recently used first (a Map keeps its order). */
+const kept = new Map<Project, Analysis>();
 
-  get(project: Project): Analysis | undefined {
-    const found = this.#kept.get(project);
-    if (found) {
-      // most recently used last, so that the oldest entry is the first the map iterates
-      this.#kept.delete(project);
-      this.#kept.set(project, found);
-    }
-    return found;
-  }
+/** The analysis kept for `project`, now the most recently used, or undefined. */
+export function recentAnalysis(project: Project): Analysis | undefined {
+  const found = kept.get(project);
+  if (found) keepAnalysis(project, found);
+  return found;
+}
 
-  set(project: Project, analysis: Analysis): void {
-    this.#kept.delete(project);
-    this.#kept.set(project, analysis);
-    if (this.#kept.size > RECENT_ANALYSES) this.#kept.delete(this.#kept.keys().next().value!);
-  }
+/** Keeps `analysis` for `project`, letting the least recently used go beyond RECENT_ANALYSES. */
+export function keepAnalysis(project: Project, analysis: Analysis): void {
+  kept.delete(project);
+  kept.set(project, analysis);
+  if (kept.size > RECENT_ANALYSES) kept.delete(kept.keys().next().value!);
 }

@@ -167,10 +167,8 @@ export const DIAGNOSTIC_CODES = {
   'joints.into-existing-main': {
     severity: 'warning',
     values: { length: 'length', reach: 'length', beyond: 'length' },
-    meaning:
-      'The restrained length runs past the tie-in into the existing main: the zone relies on joints of the existing main being restrained over the rest of its length.',
-    action:
-      'Restrain the existing main’s joints over that length (confirm what it has), or add a block or anchor at the fitting.',
+    meaning: 'The restrained length runs past the tie-in into the existing main, whose joints it then relies on.',
+    action: 'Restrain the existing main’s joints that far, or add a block or anchor at the fitting.',
   },
   'joints.fused-pe': {
     severity: 'info',

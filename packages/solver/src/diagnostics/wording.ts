@@ -73,7 +73,7 @@ const WORDS: Record<DiagnosticCode, Words> = {
   'block.wide-face': (v) =>
     `Face ${v.faceWidth} wide is more than twice its ${v.faceHeight} height: the cover limits the height. Consider restrained joints or a deeper block.`,
   'block.not-adequate': (v) =>
-    `Not adequate: no block within the cover and face limits holds ${v.thrust} with a safety factor of ${v.safetyFactor}: it needs ${v.bearingArea} of bearing face, and the largest face allowed is ${v.largestFace}; the strongest face allowed, ${v.faceWidth} wide × ${v.faceHeight} high, resists ${v.ratio} × the thrust by passive pressure, where ${v.safetyFactor} is needed. Restrained joints are sized instead: check them, or deepen the main, improve the soil, or have the block designed by a geotechnical engineer.`,
+    `Not adequate: no block within the cover and face limits holds ${v.thrust} with a safety factor of ${v.safetyFactor}: a face of ${v.bearingArea} is needed, the largest allowed is ${v.largestFace}, and the strongest, ${v.faceWidth} wide × ${v.faceHeight} high, resists ${v.ratio} × the thrust by passive pressure (${v.safetyFactor} needed). Restrained joints are sized instead: check them, or deepen the main, improve the soil, or have the block designed by a geotechnical engineer.`,
   'pad.no-bearing': (_v, s, c) =>
     `No bearing under the fitting: ${soil(s, c)} cannot take the downward thrust; restrained joints are sized instead, or replace the soil.`,
   'joints.no-resistance': (v, s, c) =>
@@ -83,7 +83,7 @@ const WORDS: Record<DiagnosticCode, Words> = {
   'joints.longer-than-route': (v, s, c) =>
     `Not adequate: the restrained length needed along ${leg(s, c)}, ${v.length}, is longer than the ${v.reach} of line there (to the next branch or end); it is cut to ${v.reach}, which cannot hold the thrust alone. Add a block or anchor, restrain the whole line and its end, or change the layout.`,
   'joints.into-existing-main': (v, s, c) =>
-    `The restrained length ${v.length} along ${leg(s, c)} runs ${v.beyond} past the tie-in ${v.reach} away, into the existing main: restrain the existing main’s joints over that length (confirm what it has), or add a block or anchor at the fitting.`,
+    `The restrained length ${v.length} along ${leg(s, c)} runs ${v.beyond} past the tie-in ${v.reach} away, into the existing main: restrain its joints that far too, or add a block or anchor.`,
   'joints.fused-pe': (_v, s, c) =>
     `${capital(leg(s, c))} is fused PE, which is end-load bearing: restrain the transitions to gasketed pipe and allow for thermal and Poisson loads.`,
   'joints.material-basis': (_v, s, c) =>
