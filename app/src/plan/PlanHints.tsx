@@ -2,13 +2,18 @@ import { memo } from 'react';
 import { NoticeBar } from '../chrome/NoticeBar.js';
 import { useApp } from '../state/StoreContext.js';
 import { lazyPart } from '../chrome/lazyPart.js';
-import { UnderlayHint } from './UnderlayHint.js';
 import { TypedEntryBox } from './TypedEntryPart.js';
 
 /** What a click does with the draw tool: its words load after the first screen, which never shows them. */
 const DrawHintText = lazyPart(() => import('./DrawHint.js').then((m) => m.DrawHint));
 function DrawHint() {
   return useApp((s) => s.tool) === 'draw' ? <DrawHintText /> : null;
+}
+
+/** What to click while the site plan is calibrated: its words load after the first screen too. */
+const UnderlayHintText = lazyPart(() => import('./UnderlayHint.js').then((m) => m.UnderlayHint));
+function UnderlayHint() {
+  return useApp((s) => s.underlayPick !== null && s.underlayPick.length < 2) ? <UnderlayHintText /> : null;
 }
 
 /**

@@ -1,7 +1,6 @@
 import { memo, useMemo, type RefObject } from 'react';
 import { FOOT, formatSi, KIND_NAME, KIP, type FittingKind, type Material } from '@mainbrace/solver';
-import { useActions, useApp, useAppStore } from '../state/StoreContext.js';
-import { sendPlanEvent } from '../tools/planBridge.js';
+import { useActions, useApp } from '../state/StoreContext.js';
 import { showColumnForce } from '../format/quantity.js';
 import { gridSpacing } from '../state/viewport.js';
 import { gridStep } from './drawGrid.js';
@@ -11,6 +10,10 @@ import { FittingGlyph } from './FittingGlyph.js';
 import { LEGEND_KINDS } from './symbols.js';
 import { caseNames } from '../state/caseNames.js';
 import type { Scene } from './planScene.js';
+import { lazyPart } from '../chrome/lazyPart.js';
+
+/** The run's finish buttons: shown only while a run is drawn, so they load after the first screen. */
+const FinishRun = lazyPart(() => import('./FinishRun.js').then((m) => m.FinishRun));
 
 /** A round force below `f` for the arrow legend: 1, 2, 5 × 10ⁿ in kN or kip (the plan's one force unit). */
 function roundForce(f: number, us: boolean): number {
@@ -41,7 +44,6 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
   const units = useApp((s) => s.units);
   const legendOpen = useApp((s) => s.legendOpen);
   const actions = useActions();
-  const store = useAppStore();
   const caseView = useApp((s) => s.caseView);
   const cases = useApp((s) => caseNames(s.project.loadCases));
   const shown =
@@ -176,24 +178,7 @@ export function PlanOverlays({ scene, coordsRef }: { scene: Scene; coordsRef: Re
           warning
         </div>
       </div>
-      {drawing && (
-        // Touch has no Enter key and no double-click to rely on: a button finishes the run.
-        <div className="plan-finish">
-          <button
-            onPointerDown={(e) => e.stopPropagation()}
-            onClick={() => sendPlanEvent(store, actions, { type: 'command', name: 'finish' })}
-            data-testid="finish-run"
-          >
-            Finish run
-          </button>
-          <button
-            onPointerDown={(e) => e.stopPropagation()}
-            onClick={() => sendPlanEvent(store, actions, { type: 'command', name: 'cancel' })}
-          >
-            Cancel
-          </button>
-        </div>
-      )}
+      {drawing && <FinishRun />}
     </>
   );
 }
