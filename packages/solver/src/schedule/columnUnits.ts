@@ -52,14 +52,18 @@ export const COLUMN_UNITS: Record<Exclude<ColumnKind, 'text'>, Record<UnitSystem
 /** Trailing zeros after the point dropped for angles: 22.5, 11.25, 90. */
 const trim = (text: string) => (text.includes('.') ? text.replace(/\.?0+$/, '') : text);
 
+/** `si` in the column's display unit, rounded as the column shows it (built quantities up). */
+function displayed(si: number, kind: Exclude<ColumnKind, 'text' | 'built'>, units: UnitSystem): number {
+  const u = COLUMN_UNITS[kind][units];
+  const shown = si / u.factor;
+  return u.up ? ceilTo(shown, u.decimals) : roundTo(shown, u.decimals);
+}
+
 /** An SI value as a column shows it: the number only, its unit is in the column heading. */
 export function columnNumber(si: number, kind: Exclude<ColumnKind, 'text'>, units: UnitSystem): string {
   if (!Number.isFinite(si)) return '—';
   if (kind === 'built') return formatDimension(si, units).replace(/ m$/, '');
-  const u = COLUMN_UNITS[kind][units];
-  const shown = si / u.factor;
-  const rounded = u.up ? ceilTo(shown, u.decimals) : roundTo(shown, u.decimals);
-  const text = rounded.toFixed(u.decimals);
+  const text = displayed(si, kind, units).toFixed(COLUMN_UNITS[kind][units].decimals);
   const clean = /^-0(\.0*)?$/.test(text) ? text.slice(1) : text;
   return kind === 'angle' ? trim(clean) : clean;
 }
@@ -68,19 +72,15 @@ export function columnNumber(si: number, kind: Exclude<ColumnKind, 'text'>, unit
  * The SI value a column shows for `si`, rounded as it shows it (built quantities up): totals add these,
  * so that a total is the sum of what its rows print.
  */
-export function shownValue(si: number, kind: Exclude<ColumnKind, 'text' | 'built'>, units: UnitSystem): number {
-  const u = COLUMN_UNITS[kind][units];
-  const shown = si / u.factor;
-  return (u.up ? ceilTo(shown, u.decimals) : roundTo(shown, u.decimals)) * u.factor;
-}
+export const shownValue = (si: number, kind: Exclude<ColumnKind, 'text' | 'built'>, units: UnitSystem): number =>
+  displayed(si, kind, units) * COLUMN_UNITS[kind][units].factor;
 
 /**
  * Whether a value reads as zero in its column (0.04 kN is "0.0"): a part of a result that small is left
  * out rather than listed as nothing, whichever screen or file words it.
  */
-export function readsZero(si: number, kind: Exclude<ColumnKind, 'text' | 'built'>, units: UnitSystem): boolean {
-  return Number(columnNumber(si, kind, units)) === 0;
-}
+export const readsZero = (si: number, kind: Exclude<ColumnKind, 'text' | 'built'>, units: UnitSystem): boolean =>
+  displayed(si, kind, units) === 0;
 
 /** A column's unit as its heading shows it: "kN", "ft-in". */
 export const columnUnit = (kind: Exclude<ColumnKind, 'text'>, units: UnitSystem): string =>
