@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import { analyse } from '../analysis/analyse.js';
-import { reachAlong } from './routeReach.js';
+import { lineAlong } from './routeReach.js';
 import { route } from '../../test/projectBuilder.js';
 import { expectClose } from '../../test/tolerance.js';
 
@@ -26,8 +26,8 @@ const short = route({
 
 describe('restrained lengths capped at what the route holds', () => {
   it('measures the line from the fitting to the next branch or end, through straight joints (geometry)', () => {
-    expectClose(reachAlong(short, 'c', 'p1'), 3, 1e-12);
-    expectClose(reachAlong(short, 'c', 'p2'), 2 + 2.5, 1e-12);
+    expectClose(lineAlong(short, 'c', 'p1').length, 3, 1e-12);
+    expectClose(lineAlong(short, 'c', 'p2').length, 2 + 2.5, 1e-12);
   });
 
   it('cuts each restrained leg to its line and reports an error naming both lengths', () => {
@@ -44,7 +44,7 @@ describe('restrained lengths capped at what the route holds', () => {
     }
   });
 
-  it('sets no limit toward a tie-in, where the line runs on into the existing main', () => {
+  it('ends toward a tie-in at the tie-in, saying the line runs on into the existing main', () => {
     const tied = route({
       pressure: 1e6,
       nodes: [
@@ -53,7 +53,8 @@ describe('restrained lengths capped at what the route holds', () => {
       ],
       pipes: [{ id: 'p1', from: 'a', to: 'b', od: 0.3 }],
     });
-    expect(reachAlong(tied, 'b', 'p1')).toBe(Infinity);
+    expect(lineAlong(tied, 'b', 'p1')).toEqual({ length: 20, tieIn: true });
+    expect(lineAlong(short, 'c', 'p1').tieIn).toBe(false);
   });
 
   it('stops at a loop instead of walking round it', () => {
@@ -72,7 +73,7 @@ describe('restrained lengths capped at what the route holds', () => {
         { id: 'p4', from: 'd', to: 'a', od: 0.3 },
       ],
     });
-    expectClose(reachAlong(ring, 'a', 'p1'), 40, 1e-12);
+    expectClose(lineAlong(ring, 'a', 'p1').length, 40, 1e-12);
   });
 });
 

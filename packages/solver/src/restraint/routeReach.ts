@@ -40,7 +40,8 @@ export interface LineAlong {
 /**
  * The line from `node` out along `pipe`: through every node where the line simply continues (two pipes:
  * straight joints and the fittings a zone may run through), up to the first node where it branches or
- * ends.
+ * ends. Pipe–soil friction acts only on pipe that exists, so no restrained length can run past its end;
+ * at a tie-in the line runs on into the existing main, whose length the project does not know.
  */
 export function lineAlong(project: Project, node: string, pipe: string): LineAlong {
   const links = linksOf(project);
@@ -59,15 +60,4 @@ export function lineAlong(project: Project, node: string, pipe: string): LineAlo
     here = link.far;
     via = next[0]!.pipe === via ? next[1]!.pipe : next[0]!.pipe;
   }
-}
-
-/**
- * m, the length of line a restrained zone can run along from `node` out along `pipe` (`lineAlong`).
- * Pipe–soil friction acts only on pipe that exists, so no restrained length can exceed this. At a tie-in
- * the line runs on into the existing main, whose length the project does not know: no limit there
- * (Infinity).
- */
-export function reachAlong(project: Project, node: string, pipe: string): number {
-  const line = lineAlong(project, node, pipe);
-  return line.tieIn ? Infinity : line.length;
 }

@@ -102,26 +102,21 @@ export function sizeRestraint(
       out.steps.push(...r.steps);
       for (const d of r.diagnostics) if (!out.diagnostics.some((o) => sameDiagnostic(o, d))) out.diagnostics.push(d);
     }
-    // No zone can run along more pipe than the route has: cap it there and say so.
+    // No zone can run along more pipe than the route has: cap it there and say so. Past a tie-in it
+    // runs on into the existing main: say how far.
     for (const [pipe, leg] of longest) {
       const own = legs.find((l) => l.pipe.id === pipe)?.length ?? 0;
       if (leg.length <= own) continue;
       out.dependsOnRoute = true;
       const line = lineAlong(project, node.id, pipe);
-      const reach = line.tieIn ? Infinity : line.length;
-      if (line.tieIn && leg.length > line.length) {
-        out.diagnostics.push(
-          diagnostic(
-            'joints.into-existing-main',
-            { node: node.id, pipe },
-            { length: leg.length, reach: line.length, beyond: leg.length - line.length },
-          ),
-        );
-      }
-      if (leg.length > reach) {
-        out.diagnostics.push(
-          diagnostic('joints.longer-than-route', { node: node.id, pipe }, { length: leg.length, reach }),
-        );
+      if (leg.length <= line.length) continue;
+      const subject = { node: node.id, pipe };
+      const reach = line.length;
+      if (line.tieIn) {
+        const beyond = leg.length - reach;
+        out.diagnostics.push(diagnostic('joints.into-existing-main', subject, { length: leg.length, reach, beyond }));
+      } else {
+        out.diagnostics.push(diagnostic('joints.longer-than-route', subject, { length: leg.length, reach }));
         longest.set(pipe, { ...leg, length: reach });
       }
     }
