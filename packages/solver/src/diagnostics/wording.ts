@@ -119,6 +119,8 @@ const WORDS: Record<DiagnosticCode, Words> = {
 
 /** Built dimensions read as a crew builds them (rounded up); other values to drawing precision. */
 const BUILT = new Set(['faceWidth', 'faceHeight', 'trenchWidth', 'bottomDepth', 'centreDepth', 'cover', 'minCover']);
+/** Restrained lengths (the joints codes' `length` and `beyond`) read as the schedule's column gives them. */
+const RESTRAINED = new Set(['length', 'beyond']);
 
 function shownValues(d: Diagnostic, units: UnitSystem): Shown {
   const kinds = DIAGNOSTIC_CODES[d.code].values as Record<string, string>;
@@ -127,9 +129,7 @@ function shownValues(d: Diagnostic, units: UnitSystem): Shown {
     const kind = kinds[name];
     if (kind === 'ratio' || kind === undefined) out[name] = formatRatio(v);
     else if (BUILT.has(name)) out[name] = formatDimension(v, units);
-    // a restrained length reads as the schedule's column gives it (rounded up)
-    else if ((name === 'length' || name === 'beyond') && d.code.startsWith('joints.'))
-      out[name] = quantityText(v, 'restrained', units);
+    else if (RESTRAINED.has(name)) out[name] = quantityText(v, 'restrained', units);
     else out[name] = formatSi(v, kind as Parameters<typeof formatSi>[1], units);
   }
   if (d.code === 'flow.unbalanced') {
