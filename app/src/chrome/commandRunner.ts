@@ -42,23 +42,22 @@ function startNew(store: AppStore, actions: Actions, ui: Partial<CommandUi>) {
   });
 }
 
+const NOT_PLACED =
+  'A drawn project is not placed on the earth: GeoJSON needs a route imported from a GeoJSON file, or from a CSV survey with its projection (Open…).';
+
 /** The design as GeoJSON for a GIS; the exchange module loads only now (docs/routes.md). */
 async function exportGeoJson(store: AppStore, actions: Actions) {
   const ex = await importOrReload(() => import('@mainbrace/solver/exchange'));
   const project = store.getState().project;
-  if (!project.georeference) {
+  const r = ex.designGeoJson(project);
+  if (r.ok) download(`${fileStem(project)}.geojson`, r.text, 'application/geo+json');
+  else
     actions.notify({
       tone: 'error',
       title: 'The design was not exported as GeoJSON',
-      lines: [
-        'A drawn project is not placed on the earth: GeoJSON needs a route imported from a GeoJSON file, or from a CSV survey with its projection (Open…).',
-      ],
+      // the solver's words name the command line's option; a drawn project is told in the app's terms
+      lines: [r.reason === 'not-placed' ? NOT_PLACED : r.message],
     });
-    return;
-  }
-  const r = ex.designGeoJson(project);
-  if (r.ok) download(`${fileStem(project)}.geojson`, r.text, 'application/geo+json');
-  else actions.notify({ tone: 'error', title: 'The design was not exported as GeoJSON', lines: [r.message] });
 }
 
 /** Carries out a window command that may wait for code (chrome/appCommands.ts runs undo, redo, Open and Print itself). */

@@ -17,7 +17,11 @@ interface Feature {
   properties: Record<string, unknown>;
 }
 
-export type ExportResult = { ok: true; text: string; features: number } | { ok: false; message: string };
+/** Why a design was not exported: no georeference (a drawn project), or one proj4 cannot use. */
+export type ExportRefusal = 'not-placed' | 'bad-projection';
+
+export type ExportResult =
+  { ok: true; text: string; features: number } | { ok: false; reason: ExportRefusal; message: string };
 
 /**
  * The design as an RFC 7946 FeatureCollection in WGS 84 longitude/latitude, back through the project's
@@ -29,6 +33,7 @@ export function designGeoJson(project: Project): ExportResult {
   if (!project.georeference)
     return {
       ok: false,
+      reason: 'not-placed',
       message:
         'the project has no georeference: it was not imported from GeoJSON and no proj4 definition was given, so its plan cannot be placed on the earth (import the route from GeoJSON, or a CSV survey with --proj4)',
     };
@@ -36,7 +41,11 @@ export function designGeoJson(project: Project): ExportResult {
   try {
     proj = projectionOf(project.georeference.proj4);
   } catch (e) {
-    return { ok: false, message: `georeference.proj4 is not a projection proj4 can use: ${(e as Error).message}` };
+    return {
+      ok: false,
+      reason: 'bad-projection',
+      message: `georeference.proj4 is not a projection proj4 can use: ${(e as Error).message}`,
+    };
   }
   const at = (x: number, y: number, z: number): Position => {
     const [lon, lat] = proj.inverse([x, y]);

@@ -8,4 +8,4 @@ export type { ColumnMapping, SurveyUnit, SurveyTable } from './csvSurvey.js';
 export { defaultPipe, DEFAULT_SERIES, DEFAULT_NOMINAL, type PipeChoice } from './pipeChoice.js';
 export { noteText, type ImportNote } from './importNotes.js';
 export { localTransverseMercator, projectionOf, type PlanProjection } from './localProjection.js';
-export { designGeoJson, type ExportResult } from './geojsonExport.js';
+export { designGeoJson, type ExportRefusal, type ExportResult } from './geojsonExport.js';
