@@ -123,10 +123,9 @@ const CrewPage = memo(function CrewPage({
     .map((span) => {
       const first = span[0]!.cells,
         end = span[span.length - 1]!.cells;
-      const word = position === 'station' ? 'station' : 'chainage';
-      return span.length === 1
-        ? `${first.mark}, ${word} ${first[position]}`
-        : `${first.mark}–${end.mark}, ${word === 'station' ? 'stations' : word} ${first[position]} to ${end[position]}`;
+      if (span.length === 1) return `${first.mark}, ${position} ${first[position]}`;
+      const word = position === 'station' ? 'stations' : position;
+      return `${first.mark}–${end.mark}, ${word} ${first[position]} to ${end[position]}`;
     })
     .join('; ');
   return (
