@@ -17,3 +17,6 @@ export const CAUTIONS: readonly string[] = [
   'Excavation behind a block later (other utilities) can remove its soil support: record blocks on the as-built drawings.',
   'Gravity anchors are sized for the highest groundwater level given; restrained zones of neighbouring fittings that overlap must be designed together.',
 ];
+
+/** The cautions as a terminal table ends with them, one marked line each. */
+export const cautionLines = (): string[] => CAUTIONS.map((c) => `! ${c}`);

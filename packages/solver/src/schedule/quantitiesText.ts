@@ -1,5 +1,5 @@
 import { cautionRecords, csvField } from './scheduleCsv.js';
-import { CAUTIONS } from './cautions.js';
+import { cautionLines } from './cautions.js';
 import type { TakeOffRow } from './quantities.js';
 
 const HEAD = ['Section', 'Item', 'Size', 'Count', 'Quantity', 'Unit', 'Fittings'] as const;
@@ -37,7 +37,7 @@ export function takeOffTable(rows: readonly TakeOffRow[], project: string, waste
       line(widths.map((w) => '-'.repeat(w))),
       ...body.map(line),
       '',
-      ...CAUTIONS.map((c) => `Caution: ${c}`),
+      ...cautionLines(),
     ].join('\n') + '\n'
   );
 }

@@ -1,4 +1,4 @@
-import { CAUTIONS } from './cautions.js';
+import { cautionLines } from './cautions.js';
 import { TABLE_COLUMNS } from './scheduleColumns.js';
 import { pickColumns, type ScheduleView } from './scheduleView.js';
 import { noteAfterHeading } from './scheduleNotes.js';
@@ -37,6 +37,6 @@ export function scheduleTable(
         `  ${n.number}. ${SEVERITY_MARK[n.severity]} ${noteAfterHeading(n)}${n.marks.length ? ` (${n.marks.join(', ')})` : ''}`,
       );
   }
-  out.push('', ...CAUTIONS.map((c) => `! ${c}`));
+  out.push('', ...cautionLines());
   return out.join('\n') + '\n';
 }
