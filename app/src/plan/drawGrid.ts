@@ -1,6 +1,7 @@
 import { FOOT, type UnitSystem } from '@mainbrace/solver';
 import { gridSpacing, toPlan, toScreen, type Viewport } from '../state/viewport.js';
 import { PALETTE, TYPE } from './palette.js';
+import { unitOf } from '../format/quantity.js';
 
 /** Grid spacing in metres for the view, in round numbers of the display unit (m, or ft). */
 export function gridStep(v: Viewport, units: UnitSystem): number {
@@ -23,7 +24,8 @@ export function drawGrid(ctx: CanvasRenderingContext2D, v: Viewport, width: numb
     i1 = Math.ceil(bottomRight.x / step);
   const j0 = Math.floor(bottomRight.y / step),
     j1 = Math.ceil(topLeft.y / step);
-  const fmt = (m: number) => `${Math.round((m / unit) * 100) / 100}`;
+  // every coordinate with its unit: "E 500 m"
+  const fmt = (m: number) => `${Math.round((m / unit) * 100) / 100} ${unitOf('length', units)}`;
   for (let i = i0; i <= i1; i++) {
     const sx = Math.round(toScreen(v, { x: i * step, y: 0 }).sx) + 0.5;
     ctx.strokeStyle = i % 5 === 0 ? PALETTE.gridMajor : PALETTE.gridMinor;
