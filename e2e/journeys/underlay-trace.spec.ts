@@ -174,6 +174,43 @@ test('typed input places nodes exactly, and a leg length typed in the details pa
   await app.shot('typed-input');
 });
 
+test.describe('with the service worker off, so that a chunk can be held back', () => {
+  test.use({ serviceWorkers: 'block' });
+
+  test('a quick typist loses nothing while the entry box is still loading: the plan passes each key to the entry', async ({
+    page,
+  }) => {
+    // The box's code is held back, so every key of the first entry lands on the plan, not in the box.
+    let release = () => {};
+    const held = new Promise<void>((r) => (release = r));
+    await page.route(/\/assets\/TypedEntryBox-[^/]*\.js$/, async (route) => {
+      await held;
+      await route.continue();
+    });
+    const app = new MainbracePage(page);
+    await app.blankCanvas();
+    await app.tool('draw');
+    await page.keyboard.type('E 10 N 20');
+    await page.keyboard.press('Enter');
+    await page.keyboard.type('25 @90');
+    await page.keyboard.press('Enter');
+    await expect(page.getByTestId('typed-entry')).toHaveCount(0); // still held back
+    release();
+    await expect(page.getByTestId('typed-entry')).toBeVisible();
+    await page.keyboard.type('12.5 L90');
+    await expect(page.getByTestId('typed-entry')).toBeFocused(); // the box, loaded, takes the entry on
+    await page.keyboard.press('Enter');
+    await page.keyboard.press('Enter'); // Enter on an empty entry finishes the run
+    await expect
+      .poll(async () => (await app.project()).nodes.map((n) => [n.x, n.y]))
+      .toEqual([
+        [10, 20],
+        [35, 20], // 25 m due east
+        [35, 32.5], // 12.5 m turning 90° left: due north
+      ]);
+  });
+});
+
 test('a site plan calibrated by the known coordinates of two marks lands each mark on its coordinates', async ({
   page,
 }) => {

@@ -37,7 +37,9 @@ export function installShortcuts(store: AppStore, actions: Actions): () => void 
   const onKey = (e: KeyboardEvent) => {
     const action = actionForKey({ key: e.key, shift: e.shiftKey, ctrl: e.ctrlKey, meta: e.metaKey, alt: e.altKey });
     if (typing(e.target) && action?.name !== 'save') return;
-    if (pressesControl(e)) return;
+    // A typed entry under way takes every key, even with the tool's button still focused (its space and Enter).
+    const entering = store.getState().typed !== '';
+    if (pressesControl(e) && !entering) return;
     const plan = document.querySelector('[data-testid="plan"]');
     const out = sendPlanEvent(
       store,
@@ -54,7 +56,7 @@ export function installShortcuts(store: AppStore, actions: Actions): () => void 
       handlers,
     );
     if (out.handled && e.key !== ' ') e.preventDefault();
-    if (out.handled && e.key === ' ' && document.activeElement === plan) e.preventDefault();
+    if (out.handled && e.key === ' ' && (entering || document.activeElement === plan)) e.preventDefault();
   };
   const onKeyUp = (e: KeyboardEvent) => {
     if (e.key === ' ') sendPlanEvent(store, actions, { type: 'keyUp', key: ' ' });

@@ -140,10 +140,10 @@ export function dispatch(s: PlanInput, e: PlanEvent, derived: PlanDerived = NO_D
     case 'wheel':
       return done({ ...s, viewport: zoomAt(s.viewport, e.at, Math.exp(-e.deltaY * 0.0015)) });
     case 'key': {
+      const typing = typedKey(s, e.key, e.ctrl || e.meta || e.alt);
+      if (typing) return done(typing.state, typing.intents);
       if (e.key === ' ' && !e.ctrl && !e.meta) return done({ ...s, spaceHeld: true });
       if (e.key === 'Escape' && s.underlayPick) return done({ ...s, underlayPick: null });
-      const typing = typedKey(s, e.key, e.ctrl || e.meta || e.alt);
-      if (typing) return done(typing);
       const action = actionForKey(e);
       if (!action || (action.scope === 'plan' && !e.planFocused)) return { state: s, intents: [], handled: false };
       // Enter on a plan with nothing to finish or open is left to the page.

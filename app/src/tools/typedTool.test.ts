@@ -20,6 +20,30 @@ describe('typed input while drawing, through the dispatcher', () => {
     expect(h.state().typed).toBe('12');
   });
 
+  it('keys typed over the plan before the box has the keyboard go on with the entry, in order', () => {
+    // The box's code loads with the draw tool: a quick typist's spaces, letters and Enter come to the plan.
+    const h = planHarness(emptyProject());
+    h.command('toolDraw');
+    for (const k of 'E 10 N 20') h.key(k);
+    expect(h.state().typed).toBe('E 10 N 20');
+    expect(h.state().spaceHeld).toBe(false); // a space inside an entry is text, not the pan key
+    h.key('Enter');
+    for (const k of '25 @9') h.key(k);
+    h.key('Backspace');
+    h.key('9');
+    h.key('0');
+    h.key('Enter');
+    h.key('7');
+    h.key('Escape'); // clears the entry and leaves the run going
+    expect(h.state().typed).toBe('');
+    expect(h.state().draw.phase).toBe('drawing');
+    h.key('Enter'); // Enter with no entry finishes the run
+    expect(h.doc().nodes.map((n) => [n.x, n.y])).toEqual([
+      [10, 20],
+      [35, 20], // 25 m due east
+    ]);
+  });
+
   it('coordinates start a run, lengths with a bearing and a turn place nodes exactly, Enter on empty finishes', () => {
     const h = planHarness(emptyProject());
     h.command('toolDraw');

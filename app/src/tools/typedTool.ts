@@ -7,10 +7,20 @@ import type { PlanInput, PlanOutcome } from './planInput.js';
 /** Keys that, pressed over the plan with the draw tool, start a typed entry: a number or coordinates. */
 export const STARTS_ENTRY = /^[0-9.@eE]$/;
 
-/** A key that starts or extends the typed entry, or null when the key is not one. */
-export function typedKey(s: PlanInput, key: string, modified: boolean): PlanInput | null {
-  if (s.tool !== 'draw' || modified || !STARTS_ENTRY.test(key)) return null;
-  return { ...s, typed: s.typed + key, typedError: null };
+/**
+ * A key over the plan that starts or goes on with the typed entry, or null when the key is not one. Once
+ * an entry has begun, every character is its own, Backspace takes one back and Enter places it: keys
+ * typed before the box has the keyboard (its code loads with the draw tool) still reach the entry, in order.
+ */
+export function typedKey(s: PlanInput, key: string, modified: boolean): PlanOutcome | null {
+  if (s.tool !== 'draw' || modified) return null;
+  if (s.typed === '')
+    return STARTS_ENTRY.test(key) ? { state: { ...s, typed: key, typedError: null }, intents: [] } : null;
+  if (key.length === 1) return { state: { ...s, typed: s.typed + key, typedError: null }, intents: [] };
+  if (key === 'Backspace') return { state: { ...s, typed: s.typed.slice(0, -1), typedError: null }, intents: [] };
+  if (key === 'Enter') return typedEnter(s);
+  if (key === 'Escape') return { state: { ...s, typed: '', typedError: null }, intents: [] };
+  return null;
 }
 
 /**
