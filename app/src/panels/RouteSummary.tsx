@@ -1,4 +1,4 @@
-import { norm, quantityText } from '@mainbrace/solver';
+import { norm, quantityText, scheduleView } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
 import { show, showColumnForce } from '../format/quantity.js';
 import { KIND_NAME } from '../format/fittingNames.js';
@@ -13,7 +13,9 @@ export function RouteSummary() {
   const project = analysis.project;
   const actions = useActions();
   const u = useApp((s) => s.units);
-  const { length, concrete, ranked, pieces, warned } = routeSummary(analysis);
+  const { length, ranked, pieces, warned } = routeSummary(analysis);
+  // The schedule's own total (memoised, the table beside it has it): the same figure as its footer.
+  const concrete = scheduleView(analysis, u).concrete;
   const words = useDiagnosticWords();
   return (
     <section className="inputs">

@@ -17,6 +17,7 @@ import { createAppStore } from '../state/store.js';
 import { createActions } from '../state/actions.js';
 import { StoreProvider } from '../state/StoreContext.js';
 import { ScheduleTable } from './ScheduleTable.js';
+import { RouteSummary } from './RouteSummary.js';
 import { PrintSheet } from '../print/PrintSheet.js';
 import { DN300 } from '../testFixtures.js';
 
@@ -69,6 +70,27 @@ describe('the four schedule outputs agree cell for cell (app table, print, CLI t
         for (const c of pickColumns(view, TABLE_COLUMNS)) expect(line).toContain(r.cells[c.id]);
         expect(csv).toContain(r.cells.restraint);
       }
+    });
+  }
+});
+
+describe('the route summary’s concrete is the schedule’s total', () => {
+  for (const units of ['si', 'us'] as UnitSystem[]) {
+    it(`on the demo in ${units.toUpperCase()}`, () => {
+      // Invariant: both add the pieces as printed (each rounded up), so the two figures on one screen agree.
+      const project = { ...demo(), units };
+      const store = createAppStore(project, DN300);
+      store.setState({ units });
+      const { container } = render(
+        <StoreProvider store={store} actions={createActions(store)}>
+          <RouteSummary />
+          <ScheduleTable />
+        </StoreProvider>,
+      );
+      const total = container.querySelector('[data-testid="schedule-table"] tfoot td.num.strong')!.textContent!;
+      const facts = [...container.querySelectorAll('dl.facts dt')];
+      const summary = facts.find((dt) => dt.textContent === 'Concrete (blocks and anchors)')!.nextElementSibling!;
+      expect(summary.textContent).toBe(`${total} ${units === 'si' ? 'm³' : 'yd³'}`);
     });
   }
 });

@@ -1,4 +1,4 @@
-import { norm, restraintConcrete, type Analysis, type FittingAnalysis, type Project } from '@mainbrace/solver';
+import { norm, type Analysis, type FittingAnalysis, type Project } from '@mainbrace/solver';
 import { routePieces } from './connectivity.js';
 import { keptPer } from './keptPer.js';
 
@@ -69,8 +69,6 @@ const pieceCount = (project: Project): number =>
 export interface RouteSummaryFigures {
   /** m, every pipe once */
   length: number;
-  /** m³, every block and anchor */
-  concrete: number;
   /** the six fittings with the largest governing thrust, largest first */
   ranked: FittingAnalysis[];
   /** pieces of the network that are not joined to each other */
@@ -87,7 +85,6 @@ export function routeSummary(analysis: Analysis): RouteSummaryFigures {
   if (!s) {
     s = {
       length: networkLength(analysis),
-      concrete: analysis.fittings.reduce((v, f) => v + restraintConcrete(f.restraint), 0),
       ranked: largestThrusts(analysis, 6),
       pieces: pieceCount(analysis.project),
       warned: analysis.fittings.filter((f) => f.diagnostics.some((d) => d.severity !== 'info')).length,

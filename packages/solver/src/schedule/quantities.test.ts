@@ -7,6 +7,7 @@ import { takeOff, takeOffRows } from './quantities.js';
 import { takeOffCsv } from './quantitiesText.js';
 import { anchorBox, padThickness } from './settingOut.js';
 import { ceilTo } from '../units/format.js';
+import { scheduleView } from './scheduleView.js';
 
 const demoText = readFileSync(new URL('../../../../public/demo/larkspur-rise.json', import.meta.url), 'utf8');
 const parsed = parseProjectText(demoText);
@@ -51,6 +52,21 @@ describe('quantities take-off', () => {
       );
       expect(q('Total to order')).toBeCloseTo(q('Net') + q('Waste'), 9);
     }
+  });
+
+  it('agrees with the schedule: its concrete total is the take-off’s blocks, opposite blocks and anchors (SI and US)', () => {
+    // Invariant: both add the pieces as printed. A fitting with a block and an opposite block (A10) rounded
+    // as one row would print 0.01 more or less than its two pieces listed apart.
+    const a = analyse(project);
+    for (const units of ['si', 'us'] as const) {
+      const lines = takeOff(fittings, project, units).concrete.filter((l) => l.element !== 'pad');
+      expect(scheduleView(a, units).concrete).toBeCloseTo(
+        lines.reduce((v, l) => v + l.volume, 0),
+        12,
+      );
+    }
+    // By hand from the take-off's lines (m³, each piece rounded up to 0.01): 3.04 + 0.57 + 3.69.
+    expect(scheduleView(a, 'si').concrete).toBeCloseTo(7.3, 12);
   });
 
   it('adds the waste allowance: 10 % by default, the project’s own when it states one', () => {

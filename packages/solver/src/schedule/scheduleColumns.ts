@@ -1,6 +1,6 @@
 import { norm } from '../geometry/vector.js';
 import type { Project } from '../model/projectSchema.js';
-import { restraintConcrete } from './concrete.js';
+import { shownConcrete } from './concrete.js';
 import { readsZero, type ColumnKind } from './columnUnits.js';
 import { bearingText, fittingTitle } from './fittingNames.js';
 import { restrainedText, restraintSummary } from './restraintText.js';
@@ -98,8 +98,8 @@ export const SCHEDULE_COLUMNS: readonly ScheduleColumn[] = [
   col('restrained', 'Restrained length', 'restrained', (f) => f.restraint.restrainedLength),
   col('restrainedLegs', 'Restrained legs', 'text', (f, c) => restrainedText(f, c.units) || null),
   col('restraint', 'Restraint', 'text', (f, c) => restraintSummary(f, c.units, c.project.design.dimensionStep)),
-  col('concrete', 'Concrete', 'volume', (f) => {
-    const v = restraintConcrete(f.restraint);
+  col('concrete', 'Concrete', 'volume', (f, c) => {
+    const v = shownConcrete(f.restraint, c.units);
     return v > 0 ? v : null;
   }),
   col('notes', 'Notes', 'text', (f, c) => c.notes(f) || null),

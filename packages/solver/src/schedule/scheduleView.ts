@@ -2,11 +2,11 @@ import type { Analysis } from '../analysis/analyse.js';
 import { diagnosticText } from '../diagnostics/wording.js';
 import { wordingContext } from '../diagnostics/context.js';
 import type { UnitSystem } from '../units/conversions.js';
-import { columnNumber, columnUnit, shownValue, type ColumnKind } from './columnUnits.js';
+import { columnNumber, columnUnit, type ColumnKind } from './columnUnits.js';
 import { SCHEDULE_COLUMNS, type CellContext } from './scheduleColumns.js';
 import { scheduleNotes, type ScheduleNote } from './scheduleNotes.js';
 import { scheduleRowAt, type ScheduleFitting } from './scheduleRows.js';
-import { restraintConcrete } from './concrete.js';
+import { shownConcrete } from './concrete.js';
 
 export interface ViewColumn {
   id: string;
@@ -65,8 +65,8 @@ export function scheduleView(a: Analysis, units: UnitSystem): ScheduleView {
     columns: SCHEDULE_COLUMNS.map((c) => ({ id: c.id, heading: headingOf(c.heading, c.kind, units), kind: c.kind })),
     rows: a.fittings.map((_, i) => lazyRow(a, i, cellContext)),
     notes,
-    // the sum of the column as it prints, each row rounded up in the display unit
-    concrete: a.fittings.reduce((t, f) => t + shownValue(restraintConcrete(f.restraint), 'volume', units), 0),
+    // the sum of the column as it prints: each piece rounded up in the display unit, as its own line shows it
+    concrete: a.fittings.reduce((t, f) => t + shownConcrete(f.restraint, units), 0),
   };
   views.set(a, { ...views.get(a), [units]: view });
   return view;
