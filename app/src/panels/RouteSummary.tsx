@@ -1,4 +1,4 @@
-import { norm, quantityText, scheduleView } from '@mainbrace/solver';
+import { norm, quantityText, scheduleConcrete } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
 import { show, showColumnForce } from '../format/quantity.js';
 import { KIND_NAME } from '../format/fittingNames.js';
@@ -14,8 +14,8 @@ export function RouteSummary() {
   const actions = useActions();
   const u = useApp((s) => s.units);
   const { length, ranked, pieces, warned } = routeSummary(analysis);
-  // The schedule's own total (memoised, the table beside it has it): the same figure as its footer.
-  const concrete = scheduleView(analysis, u).concrete;
+  // The schedule's own total (memoised): the same figure as its footer.
+  const concrete = scheduleConcrete(analysis, u);
   const words = useDiagnosticWords();
   return (
     <section className="inputs">

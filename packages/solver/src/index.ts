@@ -76,6 +76,7 @@ export {
 export { SCHEDULE_COLUMNS, TABLE_COLUMNS, APP_COLUMNS, type ScheduleColumn } from './schedule/scheduleColumns.js';
 export {
   scheduleView,
+  scheduleConcrete,
   pickColumns,
   type ScheduleView,
   type ViewColumn,

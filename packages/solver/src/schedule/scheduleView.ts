@@ -65,11 +65,25 @@ export function scheduleView(a: Analysis, units: UnitSystem): ScheduleView {
     columns: SCHEDULE_COLUMNS.map((c) => ({ id: c.id, heading: headingOf(c.heading, c.kind, units), kind: c.kind })),
     rows: a.fittings.map((_, i) => lazyRow(a, i, cellContext)),
     notes,
-    // the sum of the column as it prints: each piece rounded up in the display unit, as its own line shows it
-    concrete: a.fittings.reduce((t, f) => t + shownConcrete(f.restraint, units), 0),
+    concrete: scheduleConcrete(a, units),
   };
   views.set(a, { ...views.get(a), [units]: view });
   return view;
+}
+
+const totals = new WeakMap<Analysis, Partial<Record<UnitSystem, number>>>();
+
+/**
+ * m³, the concrete column's total as it prints: each piece rounded up in the display unit, as its own
+ * line shows it, then added. Memoised apart from the view, so that a screen showing only the total (the
+ * route summary, after every test-pressure change) does not word the schedule's notes.
+ */
+export function scheduleConcrete(a: Analysis, units: UnitSystem): number {
+  const cached = totals.get(a)?.[units];
+  if (cached !== undefined) return cached;
+  const total = a.fittings.reduce((t, f) => t + shownConcrete(f.restraint, units), 0);
+  totals.set(a, { ...totals.get(a), [units]: total });
+  return total;
 }
 
 /**
