@@ -40,6 +40,9 @@ export function fittingTitle(g: {
   const name = KIND_NAME[g.kind];
   if (g.deflection !== null && g.kind !== 'valve' && g.kind !== 'reducer')
     return `${name} ${angleText(g.deflection)}${g.profile ? ` ${g.profile}` : ''}`;
-  if (g.branchAngle !== null) return `${name}, branch at ${angleText(g.branchAngle)}`;
+  // A branch's angle in space takes the grades of both pipes (a spur square to a main in plan reads
+  // 89.99° when they fall differently): a tenth of a degree names the fitting a crew sets; the thrust
+  // keeps the full angle.
+  if (g.branchAngle !== null) return `${name}, branch at ${Math.round(g.branchAngle * 10) / 10}°`;
   return name;
 }
