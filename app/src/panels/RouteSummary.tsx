@@ -32,7 +32,7 @@ export function RouteSummary() {
             <dd>{show(length, 'length', u, 4)}</dd>
             <dt>Fittings to restrain</dt>
             <dd>{analysis.fittings.length}</dd>
-            <dt>Concrete (blocks and anchors)</dt>
+            <dt>Concrete (blocks, anchors, pads)</dt>
             <dd>{quantityText(concrete, 'volume', u)}</dd>
             <dt>Fittings with warnings</dt>
             <dd>{warned}</dd>

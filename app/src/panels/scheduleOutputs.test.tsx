@@ -89,7 +89,7 @@ describe('the route summary’s concrete is the schedule’s total', () => {
       );
       const total = container.querySelector('[data-testid="schedule-table"] tfoot td.num.strong')!.textContent!;
       const facts = [...container.querySelectorAll('dl.facts dt')];
-      const summary = facts.find((dt) => dt.textContent === 'Concrete (blocks and anchors)')!.nextElementSibling!;
+      const summary = facts.find((dt) => dt.textContent === 'Concrete (blocks, anchors, pads)')!.nextElementSibling!;
       expect(summary.textContent).toBe(`${total} ${units === 'si' ? 'm³' : 'yd³'}`);
     });
   }

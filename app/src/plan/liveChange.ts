@@ -15,10 +15,10 @@ export interface LiveChange {
 const concrete = new WeakMap<Restraint, number>();
 
 /** m³ of a restraint, worked out once per restraint object: the gesture's start is read at every step. */
-function concreteOf(r: Restraint): number {
+function concreteOf(r: Restraint, step: number): number {
   let v = concrete.get(r);
   if (v === undefined) {
-    v = restraintConcrete(r);
+    v = restraintConcrete(r, step);
     concrete.set(r, v);
   }
   return v;
@@ -31,11 +31,13 @@ function concreteOf(r: Restraint): number {
  */
 export function liveChanges(before: Analysis, now: Analysis): LiveChange[] {
   const out: LiveChange[] = [];
+  const stepBefore = before.project.design.dimensionStep;
+  const step = now.project.design.dimensionStep;
   for (const f of now.fittings) {
     const b = before.byNode.get(f.node.id);
     if (!b) continue;
-    const was = concreteOf(b.restraint);
-    const is = restraintConcrete(f.restraint);
+    const was = concreteOf(b.restraint, stepBefore);
+    const is = restraintConcrete(f.restraint, step);
     const growth = was > 0 ? is / was - 1 : null;
     const from = b.envelope.governing.caseId;
     const to = f.envelope.governing.caseId;

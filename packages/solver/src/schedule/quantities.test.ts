@@ -7,7 +7,7 @@ import { takeOff, takeOffRows } from './quantities.js';
 import { takeOffCsv } from './quantitiesText.js';
 import { anchorBox, padThickness } from './settingOut.js';
 import { ceilTo } from '../units/format.js';
-import { scheduleView } from './scheduleView.js';
+import { scheduleConcrete, scheduleView } from './scheduleView.js';
 
 const demoText = readFileSync(new URL('../../../../public/demo/larkspur-rise.json', import.meta.url), 'utf8');
 const parsed = parseProjectText(demoText);
@@ -54,19 +54,29 @@ describe('quantities take-off', () => {
     }
   });
 
-  it('agrees with the schedule: its concrete total is the take-off’s blocks, opposite blocks and anchors (SI and US)', () => {
+  it('agrees with the schedule: its concrete total is the take-off’s net concrete, pads included (SI and US)', () => {
     // Invariant: both add the pieces as printed. A fitting with a block and an opposite block (A10) rounded
-    // as one row would print 0.01 more or less than its two pieces listed apart.
+    // as one row would print 0.01 more or less than its two pieces listed apart; a sag bend's trench-bottom
+    // pad is concrete poured like any block, so its row counts it.
     const a = analyse(project);
     for (const units of ['si', 'us'] as const) {
-      const lines = takeOff(fittings, project, units).concrete.filter((l) => l.element !== 'pad');
-      expect(scheduleView(a, units).concrete).toBeCloseTo(
-        lines.reduce((v, l) => v + l.volume, 0),
-        12,
-      );
+      const t = takeOff(fittings, project, units);
+      expect(scheduleView(a, units).concrete).toBeCloseTo(t.concreteNet, 12);
+      expect(scheduleConcrete(a, units)).toBe(scheduleView(a, units).concrete);
     }
-    // By hand from the take-off's lines (m³, each piece rounded up to 0.01): 3.04 + 0.57 + 3.69.
-    expect(scheduleView(a, 'si').concrete).toBeCloseTo(7.3, 12);
+    // By hand from the take-off's lines (m³, each piece rounded up to 0.01): 3.04 + 0.57 + 3.69 + 0.18.
+    expect(scheduleView(a, 'si').concrete).toBeCloseTo(7.48, 12);
+    // Each row's concrete is its own pieces: the sag bends' rows carry block and pad.
+    const view = scheduleView(a, 'si');
+    const sags = view.rows.filter((r) => r.fitting.restraint.trenchBottom);
+    expect(sags.length).toBeGreaterThan(0);
+    for (const r of sags) {
+      const b = r.fitting.restraint.block;
+      const t = r.fitting.restraint.trenchBottom!;
+      // pad thickness 0.15 m (register pad.thickness), each piece rounded up to 0.01 m³
+      const byHand = (b ? ceilTo(b.concreteVolume, 2) : 0) + ceilTo(t.width * t.length * 0.15, 2);
+      expect(r.values.concrete).toBeCloseTo(byHand, 12);
+    }
   });
 
   it('adds the waste allowance: 10 % by default, the project’s own when it states one', () => {

@@ -3,11 +3,11 @@ import { VALUES } from '../provenance/registerValues.js';
 import type { UnitSystem } from '../units/conversions.js';
 import { columnNumber, columnUnit, shownValue } from './columnUnits.js';
 import { fittingTitle } from './fittingNames.js';
-import { anchorBox, padThickness } from './settingOut.js';
+import { anchorBox } from './settingOut.js';
 import type { ScheduleFitting } from './scheduleRows.js';
+import { concretePieces, type ConcreteElement } from './concrete.js';
 
-/** The pieces of concrete the take-off counts, in the order it lists them. */
-export type ConcreteElement = 'block' | 'reverseBlock' | 'anchor' | 'pad';
+export type { ConcreteElement } from './concrete.js';
 
 export const CONCRETE_ELEMENT_NAME: Record<ConcreteElement, string> = {
   block: 'Bearing blocks',
@@ -78,8 +78,7 @@ export const concreteWaste = (project: Project): number =>
 /**
  * The take-off of some schedule rows (a page's or the whole job's). Pipe sizes are named by the
  * project's nominal size where the pipe has one, else by the outside diameter in display units.
- * Blocks count face × thickness, anchors their built box (dimensions rounded up), pads the pad
- * thickness of the register (pad.thickness); each piece as its row shows it in `units` (rounded up).
+ * The concrete is each fitting's pieces (`concretePieces`), each as its row shows it in `units` (rounded up).
  */
 export function takeOff(fittings: readonly ScheduleFitting[], project: Project, units: UnitSystem): TakeOff {
   const pipes = new Map(project.pipes.map((p) => [p.id, p]));
@@ -100,22 +99,15 @@ export function takeOff(fittings: readonly ScheduleFitting[], project: Project, 
   const anchors = new Map<string, AnchorLine>();
   for (const f of fittings) {
     const r = f.restraint;
-    if (r.block) addConcrete('block', r.block.concreteVolume, f.mark);
-    if (r.reverseBlock) addConcrete('reverseBlock', r.reverseBlock.concreteVolume, f.mark);
+    for (const p of concretePieces(r, project.design.dimensionStep)) addConcrete(p.element, p.volume, f.mark);
     if (r.anchor) {
-      // Concrete to order is the built box (its dimensions are rounded up), not the volume required.
       const box = anchorBox(r.anchor);
-      const built = box.length * box.width * box.height;
-      addConcrete('anchor', built, f.mark);
       const key = `${box.length}|${box.width}|${box.height}`;
+      const built = box.length * box.width * box.height;
       const line = anchors.get(key) ?? { ...box, count: 0, volume: shownValue(built, 'volume', units), marks: [] };
       line.count++;
       line.marks.push(f.mark);
       anchors.set(key, line);
-    }
-    if (r.trenchBottom) {
-      const t = r.trenchBottom;
-      addConcrete('pad', t.width * t.length * padThickness(project.design.dimensionStep), f.mark);
     }
     for (const l of r.restrainedLegs) {
       const pipe = f.pipes.find((p) => p.id === l.pipe);

@@ -99,7 +99,7 @@ export const SCHEDULE_COLUMNS: readonly ScheduleColumn[] = [
   col('restrainedLegs', 'Restrained legs', 'text', (f, c) => restrainedText(f, c.units) || null),
   col('restraint', 'Restraint', 'text', (f, c) => restraintSummary(f, c.units, c.project.design.dimensionStep)),
   col('concrete', 'Concrete', 'volume', (f, c) => {
-    const v = shownConcrete(f.restraint, c.units);
+    const v = shownConcrete(f.restraint, c.units, c.project.design.dimensionStep);
     return v > 0 ? v : null;
   }),
   col('notes', 'Notes', 'text', (f, c) => c.notes(f) || null),

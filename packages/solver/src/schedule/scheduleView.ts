@@ -81,7 +81,8 @@ const totals = new WeakMap<Analysis, Partial<Record<UnitSystem, number>>>();
 export function scheduleConcrete(a: Analysis, units: UnitSystem): number {
   const cached = totals.get(a)?.[units];
   if (cached !== undefined) return cached;
-  const total = a.fittings.reduce((t, f) => t + shownConcrete(f.restraint, units), 0);
+  const step = a.project.design.dimensionStep;
+  const total = a.fittings.reduce((t, f) => t + shownConcrete(f.restraint, units, step), 0);
   totals.set(a, { ...totals.get(a), [units]: total });
   return total;
 }
