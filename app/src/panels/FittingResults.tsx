@@ -42,6 +42,9 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
   const words = useDiagnosticWords();
   const r = f.restraint;
   const e = f.envelope;
+  const sized = !!(r.block || r.anchor || r.trenchBottom || r.restrainedLegs.length > 0);
+  // An error among the findings means what is listed (if anything) does not hold the fitting.
+  const notAdequate = f.diagnostics.some((d) => d.severity === 'error');
   const open = unverified(f.basis);
   const forceUnit = u === 'us' ? 'kip' : 'kN';
   const row = scheduleView(analysis, u).rows[analysis.fittings.indexOf(f)];
@@ -132,6 +135,12 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
       </p>
       <h4>Restraint</h4>
       <ul className="restraint">
+        {notAdequate && (
+          <li className="not-adequate" data-testid="not-adequate">
+            NOT ADEQUATE — {sized ? 'do not build as shown' : 'no restraint is sized that holds this fitting'}: see the
+            findings below.
+          </li>
+        )}
         {r.block && (
           <li data-testid="block">
             <span className="element">{elementName(f.mark, 'block')}</span> Bearing block, bears{' '}
@@ -192,7 +201,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
             </li>
           );
         })}
-        {!r.block && !r.anchor && !r.trenchBottom && r.restrainedLegs.length === 0 && <li>None needed.</li>}
+        {!sized && !notAdequate && <li>None needed.</li>}
       </ul>
       {row && <RestraintSketch fitting={row.fitting} analysis={analysis} units={u} notes={row.cells.notes} />}
       {f.diagnostics.length > 0 && (

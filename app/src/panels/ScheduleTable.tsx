@@ -2,6 +2,7 @@ import { startTransition, useEffect, useMemo, useRef, useState } from 'react';
 import {
   APP_COLUMNS,
   columnNumber,
+  noteAfterHeading,
   pickColumns,
   positionColumns,
   scheduleView,
@@ -128,6 +129,12 @@ export function ScheduleTable() {
                     data-col={c.id}
                   >
                     {r.cells[c.id]}
+                    {c.id === 'mark' && worst === 'error' && (
+                      <span className="na-flag" title="Not adequate: see the notes">
+                        {' '}
+                        ✕<span className="visually-hidden"> not adequate</span>
+                      </span>
+                    )}
                   </td>
                 ))}
               </tr>
@@ -147,7 +154,8 @@ export function ScheduleTable() {
         <ol className="schedule-notes" data-testid="schedule-notes">
           {view.notes.map((n) => (
             <li key={n.number} value={n.number} className={`note-${n.severity}`}>
-              {n.text} <span className="muted">({n.marks.join(', ')})</span>
+              {n.severity === 'error' ? <strong>NOT ADEQUATE. </strong> : null}
+              {noteAfterHeading(n)} <span className="muted">({n.marks.join(', ') || 'whole route'})</span>
             </li>
           ))}
         </ol>

@@ -5,7 +5,8 @@ import type { TakeOffRow } from '@mainbrace/solver';
  * command line), grouped under their section. Used on the sheet and in the app's drawer.
  */
 export function TakeOffTable({ rows, compact = false }: { rows: readonly TakeOffRow[]; compact?: boolean }) {
-  if (rows.length === 0) return <p className="muted">Nothing to build.</p>;
+  // Not "nothing to build": a fitting that nothing holds (not adequate) adds no line either.
+  if (rows.length === 0) return <p className="muted">Nothing sized.</p>;
   return (
     <table className={`takeoff ${compact ? 'takeoff-compact' : ''}`} data-testid="takeoff">
       <thead>
