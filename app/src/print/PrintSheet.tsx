@@ -1,6 +1,6 @@
 import { memo, useEffect, useLayoutEffect, useMemo, useRef, useState } from 'react';
 import {
-  CAUTIONS,
+  PAGE_CAUTIONS,
   columnNumber,
   columnUnit,
   noteAfterHeading,
@@ -47,9 +47,6 @@ const crewColumns = (project: Project) => [
   'concrete',
   'notes',
 ];
-
-/** The four cautions a crew must not miss, printed on every page (the full list is in the appendix). */
-const PAGE_CAUTIONS = [CAUTIONS[0]!, CAUTIONS[1]!, CAUTIONS[3]!, CAUTIONS[4]!, CAUTIONS[5]!];
 
 type Paper = 'a4' | 'letter';
 

@@ -108,7 +108,7 @@ export { wordingContext, legName, legTarget } from './diagnostics/context.js';
 export { REGISTER, provenance, type ProvenanceId } from './provenance/register.js';
 export { unverified } from './provenance/unverified.js';
 export { notVerifiedText, type ProvenanceEntry, type SourceKind } from './provenance/entry.js';
-export { CAUTIONS, SHORT_CAUTION } from './schedule/cautions.js';
+export { CAUTIONS, PAGE_CAUTIONS, SHORT_CAUTION } from './schedule/cautions.js';
 export { restraintConcrete } from './schedule/concrete.js';
 export * from './schedule/quantities.js';
 export { takeOffCsv, takeOffTable } from './schedule/quantitiesText.js';

@@ -1,24 +1,14 @@
 import type { Drawing } from './planDrawing.js';
 import { INK_COLOUR } from './drawingSvg.js';
+import { winAnsiBytes } from './winAnsi.js';
 
 /** PDF points per millimetre. */
 const PT = 72 / 25.4;
 const f = (v: number) => (Math.round(v * 100) / 100).toString();
 const rgb = (hex: string) => [1, 3, 5].map((i) => f(parseInt(hex.slice(i, i + 2), 16) / 255)).join(' ');
 
-/**
- * A PDF string in WinAnsi (Latin-1 for what a plan writes: ×, °, ²): other characters become '?',
- * and the delimiters are escaped.
- */
-function pdfText(s: string): string {
-  let out = '';
-  for (const ch of s) {
-    const c = ch.codePointAt(0)!;
-    const b = c < 256 ? ch : '?';
-    out += b === '(' || b === ')' || b === '\\' ? `\\${b}` : b;
-  }
-  return out;
-}
+/** A PDF literal string's body: the text in WinAnsi bytes, its delimiters escaped (PDF 32000-1, 7.3.4.2). */
+const pdfText = (s: string): string => winAnsiBytes(s).replace(/[()\\]/g, (b) => `\\${b}`);
 
 /**
  * The drawing as a one-page vector PDF (PDF 1.4: Helvetica, uncompressed content) whose page is the
@@ -42,9 +32,10 @@ export function drawingPdf(d: Drawing): Uint8Array {
     } else {
       const size = m.size * PT;
       // Helvetica averages about half an em per character: enough to centre a short label.
-      const shift = m.anchor === 'middle' ? (m.text.length * size * 0.5) / 2 : 0;
+      const text = pdfText(m.text);
+      const shift = m.anchor === 'middle' ? (winAnsiBytes(m.text).length * size * 0.5) / 2 : 0;
       ops.push(
-        `0 0 0 rg BT /${m.bold ? 'F2' : 'F1'} ${f(size)} Tf ${f(m.x * PT - shift)} ${Y(m.y)} Td (${pdfText(m.text)}) Tj ET`,
+        `0 0 0 rg BT /${m.bold ? 'F2' : 'F1'} ${f(size)} Tf ${f(m.x * PT - shift)} ${Y(m.y)} Td (${text}) Tj ET`,
       );
     }
   }
@@ -68,7 +59,7 @@ export function drawingPdf(d: Drawing): Uint8Array {
   body += `xref\n0 ${objects.length + 1}\n0000000000 65535 f \n`;
   for (const o of offsets) body += `${String(o).padStart(10, '0')} 00000 n \n`;
   body += `trailer\n<< /Size ${objects.length + 1} /Root 1 0 R >>\nstartxref\n${xref}\n%%EOF\n`;
-  // Every character is below 256 (pdfText saw to it), one byte each: offsets are byte offsets.
+  // Every character is below 256 (winAnsiBytes saw to it), one byte each: offsets are byte offsets.
   const bytes = new Uint8Array(body.length);
   for (let i = 0; i < body.length; i++) bytes[i] = body.charCodeAt(i) & 0xff;
   return bytes;

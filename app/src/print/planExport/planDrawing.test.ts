@@ -1,7 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
-import { analyse, FOOT, parseProject, scheduleOf } from '@mainbrace/solver';
+import { analyse, FOOT, PAGE_CAUTIONS, parseProject, scheduleOf } from '@mainbrace/solver';
 import { PLAN_SCALES, planDrawing } from './planDrawing.js';
 import { drawingSvg } from './drawingSvg.js';
 import { drawingPdf } from './drawingPdf.js';
@@ -58,4 +58,59 @@ describe('plan export at scale', () => {
     const offsets = [...pdf.slice(xref).matchAll(/^(\d{10}) 00000 n $/gm)].map((m) => Number(m[1]));
     offsets.forEach((o, i) => expect(pdf.slice(o, o + `${i + 1} 0 obj`.length)).toBe(`${i + 1} 0 obj`));
   });
+
+  it('prints the em dash and curly quotes as WinAnsi bytes, and the cautions every printed page carries', () => {
+    const d = planDrawing(analysis, rows, 'us', scale('1in40ft'), parsed.project.name);
+    const strings = pdfStrings(drawingPdf(d));
+    // PDF 32000-1:2008, Annex D, Table D.2: emdash is WinAnsi 227 octal (0x97), quoteright 222 (0x92).
+    const title = strings.find((b) => latin(b).startsWith('Larkspur Rise'))!;
+    expect([...title.slice(0, 16)]).toEqual([...Buffer.from('Larkspur Rise ', 'ascii'), 0x97, 0x20]);
+    expect(strings.some((b) => b.includes(0x3f))).toBe(false); // no '?' where a character was
+    const text = strings.map(fromWinAnsi).join(' ');
+    expect(text).toContain('Larkspur Rise — Quillon Avenue main, phase 1 — plan at 1" = 40 ft');
+    // The five cautions of a printed output: design aid, licensed engineer, local codes and the utility's
+    // standards, undisturbed soil, curing before the test.
+    for (const topic of [
+      /design aid/,
+      /licensed professional engineer/,
+      /Local codes, the utility’s standards/,
+      /bear on undisturbed soil/,
+      /cure before pressure testing/,
+    ])
+      expect(text).toMatch(topic);
+    for (const c of PAGE_CAUTIONS) expect(text).toContain(c);
+    // The SVG carries the same words, in UTF-8.
+    const svg = drawingSvg(d);
+    expect(svg).toContain('Larkspur Rise — Quillon Avenue');
+    for (const c of PAGE_CAUTIONS) expect(svgText(svg)).toContain(c);
+  });
 });
+
+const latin = (b: Uint8Array) => String.fromCharCode(...b);
+
+/**
+ * The WinAnsi codes above 127 this plan's words use that are not Latin-1, as PDF 32000-1:2008, Annex D,
+ * Table D.2 lists them (octal): quoteleft 221, quoteright 222, quotedblleft 223, quotedblright 224,
+ * endash 226, emdash 227. 240–377 octal are Latin-1 (×, °, ²).
+ */
+const WIN_ANSI: Record<number, string> = { 0o221: '‘', 0o222: '’', 0o223: '“', 0o224: '”', 0o226: '–', 0o227: '—' };
+const fromWinAnsi = (b: Uint8Array) =>
+  [...b].map((c) => (c >= 0x80 && c < 0xa0 ? (WIN_ANSI[c] ?? '\ufffd') : String.fromCharCode(c))).join('');
+
+/**
+ * The bytes of each string a PDF's content stream shows with Tj, its escapes undone (PDF 32000-1,
+ * 7.3.4.2): "\(", "\)", "\\" stand for the character after the backslash.
+ */
+function pdfStrings(pdf: Uint8Array): Uint8Array[] {
+  const all = latin(pdf);
+  const start = all.indexOf('stream\n') + 'stream\n'.length;
+  const content = all.slice(start, all.indexOf('\nendstream', start));
+  const out: Uint8Array[] = [];
+  for (const m of content.matchAll(/\(((?:\\.|[^\\)])*)\) Tj/g))
+    out.push(Uint8Array.from(m[1]!.replace(/\\(.)/g, '$1'), (c) => c.charCodeAt(0)));
+  return out;
+}
+
+/** The text of an SVG's text elements, one line each joined by spaces. */
+const svgText = (svg: string) =>
+  [...svg.matchAll(/<text[^>]*>([^<]*)<\/text>/g)].map((m) => m[1]!.replace(/&amp;/g, '&')).join(' ');

@@ -9,6 +9,7 @@ import {
   type UnitSystem,
 } from '@mainbrace/solver';
 import { extentOf } from '../../format/extent.js';
+import { CAUTION_INDENT, CAUTION_LINE, CAUTION_SIZE, cautionLines, wrapText } from './sheetText.js';
 
 /** A drawing scale a drawing set uses: metric ratios, or inches on paper to feet on the ground. */
 export interface PlanScale {
@@ -53,7 +54,8 @@ const MARK_SIZE = 2.5;
 /**
  * The plan at a true scale for the drawing set: pipes at their outside diameter
  * (at least a visible line), blocks, anchors and pads from the setting-out geometry, restrained zones
- * as a tick per joint, fitting marks, a north arrow, a scale bar and a scale statement. Throws when
+ * as a tick per joint, fitting marks, a north arrow, a scale bar, a scale statement and, under them, the
+ * cautions every printed page carries. Throws when
  * the sheet would be larger than LARGEST_SHEET: the message names a smaller scale.
  */
 export function planDrawing(
@@ -68,7 +70,10 @@ export function planDrawing(
   const [y0, y1] = extentOf(project.nodes.map((n) => n.y));
   const k = scale.mmPerMetre;
   const width = Math.max(297, (x1 - x0) * k + 2 * MARGIN);
-  const height = Math.max(210, (y1 - y0) * k + 2 * MARGIN + 30);
+  const cautions = cautionLines(width - 2 * MARGIN);
+  // The cautions' block under the scale bar: a heading, then their lines.
+  const cautionBlock = CAUTION_LINE * (cautions.length + 1) + 8;
+  const height = Math.max(210, (y1 - y0) * k + 2 * MARGIN + 30 + cautionBlock);
   if (!(width <= LARGEST_SHEET && height <= LARGEST_SHEET)) {
     throw new Error(
       `At ${scale.label} the plan needs a sheet ${Math.round(width)} × ${Math.round(height)} mm, more than ${LARGEST_SHEET} mm: choose a smaller scale`,
@@ -196,7 +201,7 @@ export function planDrawing(
   });
   marks.push({ t: 'text', x: nx, y: ny + 14, text: 'N', size: 3.5, bold: true, anchor: 'middle' });
   const barGround = niceLength(60 / k, units);
-  const barY = height - MARGIN + 6;
+  const barY = height - MARGIN + 6 - cautionBlock;
   marks.push({ t: 'line', x1: MARGIN, y1: barY, x2: MARGIN + barGround * k, y2: barY, ink: 'ink', width: 1 });
   for (const s of [0, 0.5, 1])
     marks.push({
@@ -218,14 +223,21 @@ export function planDrawing(
         : `${formatDimension(barGround, 'si').replace(/\.00 m$/, ' m')}`,
     size: MARK_SIZE,
   });
-  marks.push({
-    t: 'text',
-    x: MARGIN,
-    y: MARGIN - 6,
-    text: `${title} — plan at ${scale.label} on a ${Math.round(width)} × ${Math.round(height)} mm sheet. Blocks, anchors (dashed), pads and restrained joints (ticks) from the schedule. Design aid only: check by a licensed engineer.`,
-    size: 3,
-    bold: true,
-  });
+  const statement = `${title} — plan at ${scale.label} on a ${Math.round(width)} × ${Math.round(height)} mm sheet. Blocks, anchors (dashed), pads and restrained joints (ticks) from the schedule.`;
+  // Clear of the north arrow at the top right.
+  wrapText(statement, 3, width - 2 * MARGIN - 10).forEach((line, i) =>
+    marks.push({ t: 'text', x: MARGIN, y: MARGIN - 6 + i * 4.2, text: line, size: 3, bold: true }),
+  );
+  marks.push({ t: 'text', x: MARGIN, y: barY + 8, text: 'Cautions', size: CAUTION_SIZE, bold: true });
+  cautions.forEach((line, i) =>
+    marks.push({
+      t: 'text',
+      x: MARGIN + (line.indent ? CAUTION_INDENT : 0),
+      y: barY + 8 + CAUTION_LINE * (i + 1),
+      text: line.text,
+      size: CAUTION_SIZE,
+    }),
+  );
   return { width, height, marks, scale };
 }
 

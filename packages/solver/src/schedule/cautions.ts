@@ -18,5 +18,13 @@ export const CAUTIONS: readonly string[] = [
   'Gravity anchors are sized for the highest groundwater level given; restrained zones of neighbouring fittings that overlap must be designed together.',
 ];
 
+/**
+ * The cautions every printed page carries (the full list goes in the print's appendix): design aid and
+ * the licensed engineer's check, local codes and the utility's standards, undisturbed soil, concrete
+ * clear of joints, curing before the test. The schedule print, the crew sheet and the plan drawing all
+ * print these, so that no printed output carries fewer.
+ */
+export const PAGE_CAUTIONS: readonly string[] = [CAUTIONS[0]!, CAUTIONS[1]!, CAUTIONS[3]!, CAUTIONS[4]!, CAUTIONS[5]!];
+
 /** The cautions as a terminal table ends with them, one marked line each. */
 export const cautionLines = (): string[] => CAUTIONS.map((c) => `! ${c}`);
