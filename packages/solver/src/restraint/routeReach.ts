@@ -37,27 +37,47 @@ export interface LineAlong {
   tieIn: boolean;
 }
 
+/** One pipe of a line walked out from a fitting: its id, 3-D length, and the node the walk entered it at. */
+export interface LineStep {
+  pipe: string;
+  /** the node the walk came from: the pipe's `from` or its `to` */
+  entered: string;
+  /** m, 3-D length of the pipe */
+  length: number;
+}
+
 /**
- * The line from `node` out along `pipe`: through every node where the line simply continues (two pipes:
- * straight joints and the fittings a zone may run through), up to the first node where it branches or
- * ends. Pipe–soil friction acts only on pipe that exists, so no restrained length can run past its end;
- * at a tie-in the line runs on into the existing main, whose length the project does not know.
+ * The pipes of the line from `node` out along `pipe`, in order: through every node where the line simply
+ * continues (two pipes: straight joints and the fittings a zone may run through), up to the first node
+ * where it branches or ends; and whether it ends at a tie-in, where it runs on into the existing main.
  */
-export function lineAlong(project: Project, node: string, pipe: string): LineAlong {
+export function pipesAlong(project: Project, node: string, pipe: string): { steps: LineStep[]; tieIn: boolean } {
   const links = linksOf(project);
+  const steps: LineStep[] = [];
   let here = node;
   let via = pipe;
-  let total = 0;
   const seen = new Set<string>([node]);
   for (;;) {
     const link = links.get(here)?.find((l) => l.pipe === via);
-    if (!link) return { length: total, tieIn: false };
-    total += link.length;
+    if (!link) return { steps, tieIn: false };
+    steps.push({ pipe: via, entered: here, length: link.length });
     const next = links.get(link.far) ?? [];
-    if (next.length === 1 && tieIns.get(project)!.has(link.far)) return { length: total, tieIn: true };
-    if (next.length !== 2 || seen.has(link.far)) return { length: total, tieIn: false };
+    if (next.length === 1 && tieIns.get(project)!.has(link.far)) return { steps, tieIn: true };
+    if (next.length !== 2 || seen.has(link.far)) return { steps, tieIn: false };
     seen.add(link.far);
     here = link.far;
     via = next[0]!.pipe === via ? next[1]!.pipe : next[0]!.pipe;
   }
+}
+
+/**
+ * The length of the line from `node` out along `pipe` (`pipesAlong`). Pipe–soil friction acts only on
+ * pipe that exists, so no restrained length can run past its end; at a tie-in the line runs on into the
+ * existing main, whose length the project does not know.
+ */
+export function lineAlong(project: Project, node: string, pipe: string): LineAlong {
+  const { steps, tieIn } = pipesAlong(project, node, pipe);
+  let length = 0;
+  for (const s of steps) length += s.length;
+  return { length, tieIn };
 }

@@ -91,7 +91,8 @@ describe('quantities take-off', () => {
     expect(new Set(t.fittings.flatMap((l) => l.marks)).size).toBe(fittings.length);
   });
 
-  it('counts restrained joints by size: the sum of every leg’s joints', () => {
+  it('counts restrained joints by size: where no zones overlap (the demo), the sum of every leg’s joints', () => {
+    // Zones that overlap count each joint once: restrainedStretches.test.ts.
     const legs = fittings.flatMap((f) => f.restraint.restrainedLegs);
     expect(t.joints.reduce((n, l) => n + l.joints, 0)).toBe(legs.reduce((n, l) => n + l.joints, 0));
     expect(legs.length).toBeGreaterThan(0);

@@ -6,6 +6,7 @@ import { fittingTitle } from './fittingNames.js';
 import { anchorBox } from './settingOut.js';
 import type { ScheduleFitting } from './scheduleRows.js';
 import { concretePieces, type ConcreteElement } from './concrete.js';
+import { restrainedStretches, stretchJoints } from './restrainedStretches.js';
 
 export type { ConcreteElement } from './concrete.js';
 
@@ -109,16 +110,6 @@ export function takeOff(fittings: readonly ScheduleFitting[], project: Project, 
       line.marks.push(f.mark);
       anchors.set(key, line);
     }
-    for (const l of r.restrainedLegs) {
-      const pipe = f.pipes.find((p) => p.id === l.pipe);
-      const od = pipe?.outsideDiameter ?? 0;
-      const size = sizeOf(l.pipe, od);
-      const line = joints.get(size) ?? { size, outsideDiameter: od, joints: 0, length: 0 };
-      line.joints += l.joints;
-      line.length += l.length;
-      line.outsideDiameter = Math.max(line.outsideDiameter, od);
-      joints.set(size, line);
-    }
     const sizes = [...new Map(f.pipes.map((p) => [sizeOf(p.id, p.outsideDiameter), p.outsideDiameter])).entries()]
       .sort((a, b) => b[1] - a[1])
       .map(([s]) => s);
@@ -130,6 +121,19 @@ export function takeOff(fittings: readonly ScheduleFitting[], project: Project, 
     line.marks.push(f.mark);
     kinds.set(key, line);
   }
+  // Restrained pipe each metre once: zones of neighbouring fittings that overlap restrain the pipe between
+  // them, not twice its length. Each stretch as a crew would measure it, rounded up as a row shows it.
+  const jointLine = (pipe: string) => {
+    const od = pipes.get(pipe)?.outsideDiameter ?? 0;
+    const size = sizeOf(pipe, od);
+    const line = joints.get(size) ?? { size, outsideDiameter: od, joints: 0, length: 0 };
+    line.outsideDiameter = Math.max(line.outsideDiameter, od);
+    joints.set(size, line);
+    return line;
+  };
+  const stretches = restrainedStretches(project, fittings);
+  for (const s of stretches) jointLine(s.pipe).length += shownValue(s.end - s.start, 'restrained', units);
+  for (const [pipe, n] of stretchJoints(project, stretches, project.design.layingLength)) jointLine(pipe).joints += n;
   const order: ConcreteElement[] = ['block', 'reverseBlock', 'anchor', 'pad'];
   const lines = order.flatMap((e) => (concrete.has(e) ? [concrete.get(e)!] : []));
   const net = lines.reduce((v, l) => v + l.volume, 0);
