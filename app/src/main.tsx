@@ -7,6 +7,8 @@ import { createActions } from './state/actions.js';
 import { StoreProvider } from './state/StoreContext.js';
 import { restoreProject, startAutosave, type Restored } from './state/autosave.js';
 import { browserStore } from './state/keyValue.js';
+import { pageStorage, removeKey } from './state/unsavedEdits.js';
+import { withUnsaved } from './state/unsavedRestore.js';
 import { newTabId, openTabChannel } from './state/tabChannel.js';
 import { bindKeptCopies, refreshKeptCopies } from './state/keptCopiesView.js';
 import { takeStartNotice } from './state/startNotice.js';
@@ -59,7 +61,10 @@ async function start() {
   // The demo is fetched while the kept project is read (index.html preloads it), not after.
   const demo = fetch(DEMO_URL).then((r) => r.json() as Promise<unknown>);
   demo.catch(() => undefined); // a kept project opens without it
-  const kept = await restoreProject(kv);
+  const sync = pageStorage();
+  // A document left unsaved by a reload right after an edit opens instead of the copy it grew from.
+  const unsaved = await withUnsaved(kv, sync, await restoreProject(kv));
+  const kept = unsaved.kept;
   const project = await firstProject(kept, demo);
   const store = createAppStore(project, defaultPipe(project));
   const actions = createActions(store);
@@ -72,8 +77,13 @@ async function start() {
     base: kept.kind === 'none' ? 0 : kept.kind === 'storage-failed' ? -1 : kept.revision,
     notify: actions.notify,
     adopt: actions.replaceProject,
+    sync,
   });
   setSaveBeforeReload(autosave.flush);
+  if (unsaved.adopted) {
+    void autosave.claim(); // writes this tab's own unsaved entry at once, then saves it to storage
+    removeKey(sync, unsaved.adopted);
+  }
   // A damaged or empty record is replaced by what opened (a damaged one is in the kept copies first).
   if ((kept.kind === 'unreadable' && kept.copy) || kept.kind === 'empty') void autosave.claim();
   installShortcuts(store, actions);
@@ -89,7 +99,7 @@ async function start() {
             lines: ['Kept copies may hold it; reload the page to see why.'],
           }),
         );
-  const notice = problem ?? takeStartNotice();
+  const notice = problem ?? unsaved.notice ?? takeStartNotice();
   if (notice) actions.notify(notice);
   void refreshKeptCopies(false);
   watchForNewVersion(actions.notify, autosave.flush);

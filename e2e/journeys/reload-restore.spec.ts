@@ -2,7 +2,9 @@ import { test, expect, type Page } from '@playwright/test';
 import { MainbracePage } from '../pages/mainbrace.js';
 
 /** The project text the app keeps in IndexedDB (idb-keyval's default store), or null. */
-function kept(page: Page): Promise<{ name: string; loadCases: { id: string; pressure: number }[] } | null> {
+function kept(
+  page: Page,
+): Promise<{ name: string; nodes?: unknown[]; loadCases: { id: string; pressure: number }[] } | null> {
   return page.evaluate(
     () =>
       new Promise((resolve) => {
@@ -52,4 +54,44 @@ test('a renamed project with a new test pressure comes back as it was after a re
   await app.drawerTab('cases');
   await expect(page.getByTestId('test-pressure')).toHaveValue('1250');
   await app.shot('reload-restore');
+});
+
+test('the last edit comes back after a reload or a navigation made at once, before the autosave wrote it', async ({
+  page,
+}) => {
+  const app = new MainbracePage(page);
+  await app.blankCanvas();
+  await app.draw([
+    [0, 0],
+    [100, 0],
+    [150, 50],
+  ]);
+  await expect.poll(async () => (await kept(page))?.nodes?.length).toBe(3);
+
+  // A second run, and the page reloaded at once: no waiting for the autosave.
+  await app.draw([
+    [150, 50],
+    [150, 120],
+    [50, 120],
+    [0, 100],
+  ]);
+  const drawn = await app.project();
+  expect(drawn.nodes).toHaveLength(6);
+  await page.reload();
+  await app.ready();
+  expect(await app.project()).toEqual(drawn);
+
+  // A field committed, then the page left for another and opened again at once.
+  await app.drawerTab('cases');
+  const field = page.getByTestId('test-pressure');
+  await field.fill('1375');
+  await field.press('Enter');
+  await expect.poll(async () => (await app.project()).loadCases.find((c) => c.id === 'test')!.pressure).toBe(1_375_000);
+  await page.goto('about:blank');
+  await page.goto('/');
+  await app.ready();
+  expect((await app.project()).loadCases.find((c) => c.id === 'test')!.pressure).toBe(1_375_000);
+  expect((await app.project()).nodes).toHaveLength(6);
+  // No warning: the edit was the user's own and nothing newer was in storage.
+  await expect(page.getByRole('alert')).toHaveCount(0);
 });

@@ -9,6 +9,7 @@ import type { TabChannel } from './tabChannel.js';
 import { storageErrorDetail } from './storageFailure.js';
 import { download, fileStem, projectText } from '../files/saveFile.js';
 import { refreshKeptCopies, showKeptCopies } from './keptCopiesView.js';
+import { clearUnsaved, writeUnsaved, type SyncStorage } from './unsavedEdits.js';
 
 const DELAY_MS = 400;
 
@@ -23,6 +24,8 @@ export interface AutosaveOptions {
   /** replaces the document with another tab's version (an undoable step like Open) */
   adopt: (project: Project) => void;
   delayMs?: number;
+  /** synchronous storage for the document as the page is left (unsavedEdits.ts); null where blocked */
+  sync?: SyncStorage | null;
 }
 
 const timeOf = (iso: string) => new Date(iso).toLocaleTimeString([], { hour: '2-digit', minute: '2-digit' });
@@ -35,6 +38,7 @@ const showCopies = { label: 'Show kept copies', run: showKeptCopies };
  */
 export function startAutosave(store: AppStore, o: AutosaveOptions) {
   const { kv, channel, tab } = o;
+  const sync = o.sync ?? null;
   let base = o.base;
   let saved: Project | null = savedDocument(store.getState());
   let timer: ReturnType<typeof setTimeout> | null = null;
@@ -89,6 +93,7 @@ export function startAutosave(store: AppStore, o: AutosaveOptions) {
     if (conflict) {
       conflict.mine = await updateKeptCopy(kv, conflict.mine, text);
       saved = project;
+      clearUnsaved(sync, tab); // the kept copy holds it
       failed = false;
       void refreshKeptCopies();
       if (store.getState().notice?.title !== conflictNotice(conflict.mine).title)
@@ -103,6 +108,7 @@ export function startAutosave(store: AppStore, o: AutosaveOptions) {
     const mine = await keepCopy(kv, text, 'this tab’s version, not saved over a newer one from another tab');
     conflict = { mine };
     saved = project;
+    clearUnsaved(sync, tab);
     void refreshKeptCopies();
     o.notify(conflictNotice(mine));
   }
@@ -110,6 +116,7 @@ export function startAutosave(store: AppStore, o: AutosaveOptions) {
   function accept(revision: number, project: Project, tell: boolean) {
     base = revision;
     saved = project;
+    if (current() === project) clearUnsaved(sync, tab);
     if (tell) channel?.post({ kind: 'saved', revision, tab });
   }
 
@@ -148,6 +155,7 @@ export function startAutosave(store: AppStore, o: AutosaveOptions) {
       ? await updateKeptCopy(kv, conflict.mine, text)
       : await keepCopy(kv, text, 'this tab’s version');
     conflict = null;
+    clearUnsaved(sync, tab); // this tab's version is in the kept copy
     accept(theirs.revision, r.project, false);
     o.adopt(r.project);
     void refreshKeptCopies();
@@ -186,10 +194,21 @@ export function startAutosave(store: AppStore, o: AutosaveOptions) {
   const unlisten = channel?.listen((m) => {
     if (m.kind === 'saved' && m.tab !== tab) void serial(() => follow(m.revision));
   });
-  const onHide = () => {
-    if (document.visibilityState === 'hidden') void flush();
+  /** The save below may not finish before the page goes: the document is written synchronously first. */
+  const keepUnsaved = () => {
+    const project = current();
+    if (project !== saved)
+      writeUnsaved(sync, { base, savedAt: new Date().toISOString(), tab, text: JSON.stringify(project) });
   };
-  const onPageHide = () => void flush();
+  const onHide = () => {
+    if (document.visibilityState !== 'hidden') return;
+    keepUnsaved();
+    void flush();
+  };
+  const onPageHide = () => {
+    keepUnsaved();
+    void flush();
+  };
   document.addEventListener('visibilitychange', onHide);
   window.addEventListener('pagehide', onPageHide);
   return {
@@ -201,6 +220,7 @@ export function startAutosave(store: AppStore, o: AutosaveOptions) {
     /** saves now even if nothing changed since the last save: the document replaces a set-aside copy */
     claim: async () => {
       saved = null;
+      keepUnsaved();
       await flush();
     },
     /** stops saving: pending edits are dropped (the error screen sets the kept project aside first) */
