@@ -79,6 +79,7 @@ const CrewPage = memo(function CrewPage({
   extra,
   side,
   onSideOverflow,
+  onExtraOverflow,
 }: {
   rows: ViewRow[];
   index: number;
@@ -93,12 +94,23 @@ const CrewPage = memo(function CrewPage({
   side?: React.ReactNode;
   /** the side column could not hold `side`: it must go on a page of its own */
   onSideOverflow?: () => void;
+  /** the page could not hold `extra` below its sketches and notes: it must go elsewhere */
+  onExtraOverflow?: () => void;
 }) {
   const aside = useRef<HTMLElement>(null);
+  const body = useRef<HTMLDivElement>(null);
   useLayoutEffect(() => {
     const el = aside.current;
     if (side && onSideOverflow && el && el.scrollHeight > el.clientHeight + 1) onSideOverflow();
   }, [side, onSideOverflow]);
+  // Long notes (a route that is not adequate) can leave the take-off no room: it would print over the
+  // cautions.
+  useLayoutEffect(() => {
+    const el = body.current;
+    const own = el?.querySelector(':scope > .sheet-takeoff');
+    const over = (e: Element | null | undefined) => !!e && e.scrollHeight > e.clientHeight + 1;
+    if (extra && onExtraOverflow && (over(el) || over(own))) onExtraOverflow();
+  }, [extra, onExtraOverflow]);
   const columns = pickColumns(view, crewColumns(project));
   const marks = new Set(rows.map((r) => r.fitting.mark));
   const notes = view.notes.filter((n) => n.marks.some((m) => marks.has(m)) || (index === 0 && n.marks.length === 0));
@@ -164,7 +176,7 @@ const CrewPage = memo(function CrewPage({
           ))}
         </tbody>
       </table>
-      <div className={`sheet-body ${extra ? 'with-extra' : ''}`}>
+      <div className={`sheet-body ${extra ? 'with-extra' : ''}`} ref={body}>
         <div className={`sketches ${rows.length <= PER_PAGE / 2 ? 'one-row' : ''}`}>
           {rows.map((r) => (
             <RestraintSketch
@@ -226,9 +238,12 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
     return out;
   }, [view]);
   // The job's take-off fills the second row of sketches of a last page with three fittings or fewer;
-  // on a fuller last page it follows the notes in the side column, and only where it does not fit
-  // there does it take a page of its own (the crew part keeps to one page per six fittings).
-  const fitsOnLast = (pages[pages.length - 1]?.length ?? PER_PAGE) <= PER_PAGE / 2;
+  // on a fuller last page, or where long notes leave it no room below them, it follows the notes in the
+  // side column, and only where it does not fit there does it take a page of its own (the crew part keeps
+  // to one page per six fittings).
+  const [pageOverflow, setPageOverflow] = useState<readonly ViewRow[][] | null>(null);
+  const fitsOnLast = (pages[pages.length - 1]?.length ?? PER_PAGE) <= PER_PAGE / 2 && pageOverflow !== pages;
+  const markPageOverflow = useMemo(() => () => setPageOverflow(pages), [pages]);
   const [sideOverflow, setSideOverflow] = useState<readonly ViewRow[][] | null>(null);
   const inSide = !fitsOnLast && sideOverflow !== pages;
   const markSideOverflow = useMemo(() => () => setSideOverflow(pages), [pages]);
@@ -338,6 +353,7 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
                 ) : undefined
               }
               onSideOverflow={i === pages.length - 1 && inSide ? markSideOverflow : undefined}
+              onExtraOverflow={i === pages.length - 1 && fitsOnLast ? markPageOverflow : undefined}
             />
           );
         })}
