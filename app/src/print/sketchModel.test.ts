@@ -1,7 +1,16 @@
 import { describe, it, expect } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
-import { analyse, formatDimension, parseProject, scheduleOf, settingOut } from '@mainbrace/solver';
+import {
+  analyse,
+  formatDimension,
+  parseProject,
+  scheduleCsv,
+  scheduleOf,
+  scheduleView,
+  settingOut,
+  type UnitSystem,
+} from '@mainbrace/solver';
 import { sketchOf } from './sketchModel.js';
 
 const parsed = parseProject(
@@ -66,5 +75,76 @@ describe('restraint sketches are drawn from the schedule row', () => {
     expect(s.notAdequate).toBe(true);
     expect(s.lines[0]).toMatch(/^NOT ADEQUATE/);
     expect([...s.plan, ...s.section].some((x) => x.t === 'poly' && x.role === 'block')).toBe(false);
+  });
+});
+
+/** The records of a CSV (RFC 4180: quoted fields may hold commas and doubled quotes). */
+function csvRecords(text: string): string[][] {
+  const records: string[][] = [];
+  let field = '';
+  let record: string[] = [];
+  let quoted = false;
+  for (let i = 0; i < text.length; i++) {
+    const ch = text[i]!;
+    if (quoted && ch === '"' && text[i + 1] === '"') {
+      field += '"';
+      i++;
+    } else if (ch === '"') {
+      quoted = !quoted;
+    } else if (quoted || (ch !== ',' && ch !== '\r' && ch !== '\n')) {
+      field += ch;
+    } else if (ch === ',') {
+      record.push(field);
+      field = '';
+    } else if (ch === '\n') {
+      records.push([...record, field]);
+      record = [];
+      field = '';
+    }
+  }
+  return records;
+}
+
+describe('the crew sheet and the CSV give each depth below ground as the same text', () => {
+  for (const units of ['si', 'us'] as UnitSystem[]) {
+    it(`for every block and anchor of the demo in ${units.toUpperCase()}`, () => {
+      const [header, ...records] = csvRecords(scheduleCsv(scheduleView(analysis, units)));
+      const at = (record: string[], start: string) => record[header!.findIndex((h) => h.startsWith(start))]!;
+      // The CSV has the unit in its heading; the sheet writes it after the number in SI.
+      const withUnit = (cell: string) => (units === 'si' ? `${cell} m` : cell);
+      let checked = 0;
+      for (const f of rows) {
+        const record = records.find((r) => r[0] === f.mark)!;
+        const words = sketchOf(f, analysis, units).lines.join(' ');
+        const dimsText = dims(sketchOf(f, analysis, units));
+        if (f.restraint.block) {
+          const [top, base] = [
+            withUnit(at(record, 'Block top below ground')),
+            withUnit(at(record, 'Depth to block base')),
+          ];
+          expect(words, f.mark).toContain(`top ${top}, base ${base} below ground`);
+          expect(dimsText, f.mark).toEqual(expect.arrayContaining([top, base]));
+          checked++;
+        }
+        if (f.restraint.anchor) {
+          const base = withUnit(at(record, 'Depth to anchor base'));
+          expect(words, f.mark).toContain(`base ${base} below ground`);
+          checked++;
+        }
+      }
+      expect(checked).toBeGreaterThan(5);
+    });
+  }
+
+  it('rounds a block’s top toward the ground and its base into it, so the built block holds the designed one', () => {
+    // By hand from the demo's A2 (settingOut): top 1.4130 m = 55.63 in, base 1.9130 m = 75.31 in below
+    // ground. Top to the inch toward the ground: 55 in = 4 ft 7 in; base away from it: 76 in = 6 ft 4 in.
+    // In SI to the centimetre: 1.41 m and 1.92 m.
+    const f = rows.find((r) => r.mark === 'A2')!;
+    const so = settingOut(f, parsed.project.design.dimensionStep).block!;
+    expect(so.topDepth).toBeCloseTo(1.413, 3);
+    expect(so.baseDepth).toBeCloseTo(1.913, 3);
+    expect(sketchOf(f, analysis, 'us').lines.join(' ')).toContain('top 4 ft 7 in, base 6 ft 4 in below ground');
+    expect(sketchOf(f, analysis, 'si').lines.join(' ')).toContain('top 1.41 m, base 1.92 m below ground');
   });
 });

@@ -82,13 +82,9 @@ export function sketchOf(f: ScheduleFitting, analysis: Analysis, units: UnitSyst
   const so = settingOut(f, design.dimensionStep);
   const r = f.restraint;
   const dim = (m: number) => formatDimension(m, units);
-  // Depths to the centimetre (the inch in US units): a base rounds down into the ground, a top up toward it.
-  const depth = (m: number, way: 'up' | 'down') => {
-    const step = units === 'us' ? 0.0254 : 0.01;
-    const n = way === 'up' ? Math.ceil(m / step - 1e-9) : Math.floor(m / step + 1e-9);
-    const v = Math.max(0, n * step);
-    return units === 'us' ? formatDimension(v - 1e-9, units) : `${v.toFixed(2)} m`;
-  };
+  // Depths as the schedule words them (columnUnits.ts): the top and the base of concrete round apart.
+  const topText = (m: number) => quantityText(m, 'topDepth', units);
+  const baseText = (m: number) => quantityText(m, 'baseDepth', units);
   const notAdequate = f.diagnostics.some((d) => d.severity === 'error');
   const concrete: Role = notAdequate ? 'outline' : 'block';
   const legs = analysis.legs.get(f.node) ?? [];
@@ -360,7 +356,7 @@ export function sketchOf(f: ScheduleFitting, analysis: Analysis, units: UnitSyst
       y1: gy,
       x2: dx,
       y2: sy(main.topDepth),
-      text: depth(main.topDepth, 'down'),
+      text: topText(main.topDepth),
       side: 1,
     });
     section.push({
@@ -369,7 +365,7 @@ export function sketchOf(f: ScheduleFitting, analysis: Analysis, units: UnitSyst
       y1: gy,
       x2: dx + 14,
       y2: sy(main.baseDepth),
-      text: depth(main.baseDepth, 'up'),
+      text: baseText(main.baseDepth),
       side: 1,
     });
   } else if (so.anchor) {
@@ -379,7 +375,7 @@ export function sketchOf(f: ScheduleFitting, analysis: Analysis, units: UnitSyst
       y1: gy,
       x2: dx,
       y2: sy(so.anchor.baseDepth),
-      text: depth(so.anchor.baseDepth, 'up'),
+      text: baseText(so.anchor.baseDepth),
       side: 1,
     });
   } else if (so.pad) {
@@ -389,7 +385,7 @@ export function sketchOf(f: ScheduleFitting, analysis: Analysis, units: UnitSyst
       y1: gy,
       x2: dx,
       y2: sy(so.pad.baseDepth),
-      text: depth(so.pad.baseDepth, 'up'),
+      text: baseText(so.pad.baseDepth),
       side: 1,
     });
   } else {
@@ -402,7 +398,7 @@ export function sketchOf(f: ScheduleFitting, analysis: Analysis, units: UnitSyst
   // The block's size is in the table row and on the dimensions: the words say what they cannot.
   const blockLine = (b: NonNullable<typeof so.block>, what: string) =>
     `${what} bears ${compassPoint(b.bearing)} against undisturbed soil ${bearingSide(f)}, ` +
-    `face ${dim(b.thickness)} from fitting centre; top ${depth(b.topDepth, 'down')}, base ${depth(b.baseDepth, 'up')} below ground.`;
+    `face ${dim(b.thickness)} from fitting centre; top ${topText(b.topDepth)}, base ${baseText(b.baseDepth)} below ground.`;
   if (so.block) lines.push(blockLine(so.block, 'Block'));
   if (so.reverseBlock) {
     const same =
@@ -419,7 +415,7 @@ export function sketchOf(f: ScheduleFitting, analysis: Analysis, units: UnitSyst
   if (so.anchor)
     lines.push(
       `Anchor ${dim(so.anchor.length)} L × ${dim(so.anchor.width)} W × ${dim(so.anchor.height)} H${so.anchor.cube ? ' (cube)' : ''} ` +
-        `under the fitting, base ${depth(so.anchor.baseDepth, 'up')} below ground; anchor straps to the fitting.`,
+        `under the fitting, base ${baseText(so.anchor.baseDepth)} below ground; anchor straps to the fitting.`,
     );
   if (so.pad)
     lines.push(

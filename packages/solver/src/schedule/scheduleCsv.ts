@@ -1,4 +1,5 @@
 import { CAUTIONS } from './cautions.js';
+import { isDimensionKind, type ColumnKind } from './columnUnits.js';
 import type { ScheduleView } from './scheduleView.js';
 
 /**
@@ -18,7 +19,7 @@ export const cautionRecords = (): string[] => ['', ...CAUTIONS.map((c) => csvFie
 
 /** The schedule as CSV: every column of the view, one row per fitting in crew order, units in the header. */
 export function scheduleCsv(view: ScheduleView): string {
-  const numeric = (kind: string) => kind !== 'text' && kind !== 'built';
+  const numeric = (kind: ColumnKind) => kind !== 'text' && !isDimensionKind(kind);
   const header = view.columns.map((c) => csvField(c.heading, false)).join(',');
   const rows = view.rows.map((r) => view.columns.map((c) => csvField(r.cells[c.id]!, numeric(c.kind))).join(','));
   return [header, ...rows, ...cautionRecords()].join('\r\n') + '\r\n';

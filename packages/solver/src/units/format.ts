@@ -103,7 +103,11 @@ export function formatDimension(meters: number, system: UnitSystem): string {
     const cm = ceilTo(meters, 2);
     return cm - mm < 1e-9 ? `${cm.toFixed(2)} m` : `${mm.toFixed(3)} m`;
   }
-  const inches = builtInches(meters);
+  return feetAndInches(builtInches(meters));
+}
+
+/** Whole inches as a crew reads them: "7 in", "2 ft", "4 ft 7 in". */
+export function feetAndInches(inches: number): string {
   const feet = Math.floor(inches / 12);
   const rest = inches - feet * 12;
   if (feet === 0) return `${rest} in`;
