@@ -31,11 +31,24 @@ describe('parseTyped', () => {
     ['abc', 'pressure', 'si', 'kPa'],
     ['', 'flow', 'us', 'gpm'],
     ['1.2.3', 'diameter', 'si', 'mm'],
-    ['12 m', 'length', 'us', 'ft'],
+    ['12 kg', 'length', 'us', 'ft'],
+    ['12 psi', 'length', 'si', 'm'],
   ] as const)('refuses %j as a %s in %s units with a message naming %s', (text, dim, units, unit) => {
     const r = parseTyped(text, dim, units);
     expect(r.ok).toBe(false);
     if (!r.ok) expect(r.message).toContain(unit);
+  });
+
+  it('takes a unit typed after the number, in either system: 54 in, 1.2 m, 150 psi, 4 ft', () => {
+    // 1 in = 0.0254 m and 1 ft = 0.3048 m exactly (international yard and pound, 1959); 1 psi is
+    // 6894.757 Pa (NIST SP 811, B.8).
+    expectClose(si('54 in', 'length', 'us'), 54 * 0.0254, 1e-12);
+    expectClose(si('54in', 'elevation', 'si'), 54 * 0.0254, 1e-12);
+    expectClose(si('1.2 m', 'length', 'us'), 1.2, 1e-12);
+    expectClose(si('4 ft', 'length', 'si'), 4 * 0.3048, 1e-12);
+    expectClose(si('150 psi', 'pressure', 'si'), 150 * 6894.757, 0.1);
+    expectClose(si('1,035 kPa', 'pressure', 'us'), 1035e3, 1e-6);
+    expectClose(si('300 mm', 'diameter', 'us'), 0.3, 1e-12);
   });
 
   it('names plain units when the quantity has no unit (a ratio)', () => {

@@ -1,4 +1,4 @@
-import { fromDisplay, toDisplay, type Dimension, type UnitSystem } from '@mainbrace/solver';
+import { DISPLAY_UNITS, fromDisplay, INCH, toDisplay, type Dimension, type UnitSystem } from '@mainbrace/solver';
 import { unitOf } from './quantity.js';
 
 // A value as typed into a field and back (NumberField, the plan's typed entry): apart from the
@@ -28,10 +28,27 @@ export function editable(si: number, dim: Dimension, units: UnitSystem): string 
 /** Feet and inches as a site engineer writes them: 4'6", 4' 6, 4 ft 6 in, 4 ft. */
 const FEET_INCHES = /^([-+]?\d+(?:\.\d+)?)\s*(?:'|ft)\s*(?:(\d+(?:\.\d+)?)\s*(?:"|in)?)?$/i;
 
+/** The units a value of `dim` may be typed in, whichever system is shown: both systems' own, and inches. */
+function unitsFor(dim: Dimension): { symbol: string; factor: number }[] {
+  const own = [DISPLAY_UNITS.si[dim], DISPLAY_UNITS.us[dim]].filter((u) => u.symbol !== '');
+  return dim === 'length' || dim === 'elevation' ? [...own, { symbol: 'in', factor: INCH }] : own;
+}
+
+/** A unit written after the number ("54 in", "150 psi"): the number's text and the unit, or null. */
+function typedUnit(text: string, dim: Dimension): { number: string; factor: number } | null {
+  for (const u of unitsFor(dim).sort((a, b) => b.symbol.length - a.symbol.length)) {
+    const at = text.length - u.symbol.length;
+    if (at > 0 && text.slice(at).toLowerCase() === u.symbol.toLowerCase() && /[\d.\s]$/.test(text.slice(0, at)))
+      return { number: text.slice(0, at).trim(), factor: u.factor };
+  }
+  return null;
+}
+
 /**
  * Text typed in display units → SI, or a message saying what was expected. Accepts 1,234.5 (commas
- * grouping thousands), a decimal comma where it cannot be a thousands group (1,5 = 1.5), and feet and
- * inches for US lengths. An ambiguous comma is refused rather than guessed.
+ * grouping thousands), a decimal comma where it cannot be a thousands group (1,5 = 1.5), feet and
+ * inches for US lengths, and a unit after the number in either system (54 in, 1.2 m, 150 psi). An
+ * ambiguous comma is refused rather than guessed.
  */
 export function parseTyped(
   text: string,
@@ -39,14 +56,19 @@ export function parseTyped(
   units: UnitSystem,
 ): { ok: true; si: number } | { ok: false; message: string } {
   const trimmed = text.trim();
-  const expected = `expected a number in ${unitOf(dim, units) || 'plain units'}`;
+  const shown = unitOf(dim, units);
+  const other = unitsFor(dim)
+    .map((u) => u.symbol)
+    .filter((u) => u !== shown);
+  const expected = `expected a number in ${shown || 'plain units'}${other.length ? ` (or with its unit: ${other.join(', ')})` : ''}`;
   const fi = units === 'us' && (dim === 'length' || dim === 'elevation') ? FEET_INCHES.exec(trimmed) : null;
   if (fi) {
     const feet = Number(fi[1]);
     const inches = Number(fi[2] ?? 0);
     return { ok: true, si: (feet + (Math.sign(feet || 1) * inches) / 12) * 0.3048 };
   }
-  let cleaned = trimmed.replace(/\s/g, '');
+  const unit = typedUnit(trimmed, dim);
+  let cleaned = (unit ? unit.number : trimmed).replace(/\s/g, '');
   if (/^[-+]?\d{1,3}(,\d{3})+(\.\d*)?$/.test(cleaned)) cleaned = cleaned.replace(/,/g, '');
   else if (/^[-+]?\d+,\d+$/.test(cleaned) && !/^[-+]?\d+,\d{3}$/.test(cleaned)) cleaned = cleaned.replace(',', '.');
   else if (cleaned.includes(','))
@@ -55,5 +77,5 @@ export function parseTyped(
       message: `${expected}; write decimals with a point (1.5), or commas only between thousands (1,500)`,
     };
   if (cleaned === '' || !/^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(cleaned)) return { ok: false, message: expected };
-  return { ok: true, si: fromDisplay(Number(cleaned), dim, units) };
+  return { ok: true, si: unit ? Number(cleaned) * unit.factor : fromDisplay(Number(cleaned), dim, units) };
 }
