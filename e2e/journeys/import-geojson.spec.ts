@@ -43,6 +43,20 @@ test('a GeoJSON route opened in the app becomes a connected project whose bends 
 
   const project = await app.project();
   expect(project.nodes).toHaveLength(6);
+  // Shown whole, and clear of the open legend at the plan's right.
+  const legend = (await page.getByTestId('legend').boundingBox())!;
+  const plan = (await page.getByTestId('plan').boundingBox())!;
+  const xs: number[] = [];
+  for (const n of project.nodes) {
+    const at = await app.toPage(n.x, n.y);
+    expect(at.x).toBeGreaterThan(plan.x);
+    expect(at.y).toBeGreaterThan(plan.y);
+    expect(at.y).toBeLessThan(plan.y + plan.height);
+    expect(at.x).toBeLessThan(legend.x);
+    xs.push(at.x);
+  }
+  // centred in the plan less the legend's strip (LEGEND_INSET_PX, 250 px: app/src/tools/planInput.ts)
+  expect(Math.abs((Math.min(...xs) + Math.max(...xs)) / 2 - (plan.x + (plan.width - 250) / 2))).toBeLessThan(2);
   // One network: the spur shares the main's third point, so every node is reached from n1.
   const reached = new Set(['n1']);
   for (let i = 0; i < 6; i++)

@@ -3,7 +3,6 @@
 import type { Project } from '@mainbrace/solver';
 import type { Actions } from '../state/actions.js';
 import type { AppStore } from '../state/store.js';
-import { fitView } from '../state/viewport.js';
 import { openProjectFile } from './projectFile.js';
 import { readAnyFile, runImport, type ImportChoices, type PendingImport } from './routeImport.js';
 
@@ -37,10 +36,9 @@ export async function importRoute(p: PendingImport, choices: ImportChoices, stor
   const current: Project = store.getState().project;
   const r = await runImport(p, choices, current);
   if (r.ok) {
+    // A route from elsewhere lies wherever its coordinates put it: replacing the project shows all of it,
+    // clear of the legend.
     actions.replaceProject(r.project);
-    // A route from elsewhere lies wherever its coordinates put it: show all of it.
-    const el = document.querySelector('[data-testid="plan"]');
-    actions.setViewport(fitView(r.project.nodes, el?.clientWidth ?? 800, el?.clientHeight ?? 500));
     actions.notify({
       tone: 'info',
       title: `Imported ${p.name}: ${r.project.nodes.length} nodes, ${r.project.pipes.length} pipes`,
