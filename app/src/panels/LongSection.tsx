@@ -125,13 +125,6 @@ export function LongSection({
         <g key={b.letter} className="profile-branch" data-testid={`section-branch-${b.letter}`}>
           <path d={path(b.points, 'ground')} className="profile-ground profile-branch-ground" />
           <path d={path(b.points, 'pipe')} className="profile-pipe profile-branch-pipe" />
-          <text
-            x={sx(b.points[b.points.length - 1]!.chainage) + 4}
-            y={sz(b.points[b.points.length - 1]!.pipe) + 3}
-            className="profile-label"
-          >
-            {`run ${b.letter} from ${analysis.marks.get(b.from) ?? b.from}`}
-          </text>
           {marks(b.points, true)}
           {bends(b.points)}
         </g>
@@ -140,6 +133,18 @@ export function LongSection({
       <path d={path(data.points, 'pipe')} className="profile-pipe" />
       {marks(data.points, false)}
       {bends(data.points)}
+      {/* Over the main, with a halo: a branch laid at the main's level runs along it. */}
+      {data.branches.map((b) => (
+        <text
+          key={b.letter}
+          x={sx(b.points[b.points.length - 1]!.chainage) + 4}
+          y={sz(b.points[b.points.length - 1]!.pipe) - 6}
+          className="profile-label profile-branch-label"
+          data-testid={`section-branch-label-${b.letter}`}
+        >
+          {`run ${b.letter} from ${analysis.marks.get(b.from) ?? b.from}`}
+        </text>
+      ))}
       <text x={W - M.right + 8} y={M.top + 8} className="profile-label profile-label-strong">
         Long section
       </text>
