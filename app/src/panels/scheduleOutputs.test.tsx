@@ -1,5 +1,5 @@
 import { describe, it, expect, afterEach } from 'vitest';
-import { render, cleanup } from '@testing-library/react';
+import { render, cleanup, waitFor } from '@testing-library/react';
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import {
@@ -117,3 +117,56 @@ describe('positions along the route follow the sheet setting in the app table as
     }
   });
 });
+
+describe('the CSV words its warnings in the display units, as the print words its notes', () => {
+  it('gives the demo’s US warnings in feet, inches and kip, each the sentence of a note the print shows', async () => {
+    const project: Project = { ...demo(), units: 'us' };
+    const store = createAppStore(project, DN300);
+    store.setState({ units: 'us' });
+    const { container } = render(
+      <StoreProvider store={store} actions={createActions(store)}>
+        <PrintSheet onClose={() => {}} />
+      </StoreProvider>,
+    );
+    const view = scheduleView(analyse(project), 'us');
+    const records = csvRecords(scheduleCsv(view));
+    const warnings = records[0]!.indexOf('Warnings');
+    const a10 = records.find((r) => r[0] === 'A10')![warnings]!.split(' | ');
+    // The demo's A10 block face is 0.90 m = 35.4 in, shown 3 ft (its Face width cell); its trench is
+    // 0.874 m = 34.4 in, a built width rounded up to 35 in = 2 ft 11 in (columnUnits.ts, built lengths).
+    expect(a10[0]).toMatch(/^Bearing face 3 ft wide is wider than the 2 ft 11 in trench/);
+    expect(a10[1]).toMatch(/^The thrust reverses between load states \(up to [\d.]+ kip the other way\)/);
+    // The print's notes of A10 (on a later sheet, made a few at a time) are the same sentences.
+    const printed = () => [...container.querySelectorAll('.sheet-notes li')].map((li) => li.textContent!);
+    await waitFor(() => {
+      for (const w of a10) expect(printed().some((p) => p.startsWith(`${w} (`) && p.includes('A10'))).toBe(true);
+    });
+    // No length, force or pressure in SI units anywhere in the US warnings.
+    for (const r of records.slice(1).filter((r) => r[warnings])) expect(r[warnings]).not.toMatch(/\d (m|kN|kPa)\b/);
+  });
+});
+
+/** The records of a CSV (RFC 4180: a quoted field may hold commas and doubled quotes). */
+function csvRecords(text: string): string[][] {
+  const records: string[][] = [];
+  let record: string[] = [];
+  let field = '';
+  let quoted = false;
+  for (let i = 0; i < text.length; i++) {
+    const ch = text[i]!;
+    if (quoted && ch === '"' && text[i + 1] === '"') {
+      field += '"';
+      i++;
+    } else if (ch === '"') quoted = !quoted;
+    else if (quoted || (ch !== ',' && ch !== '\r' && ch !== '\n')) field += ch;
+    else if (ch === ',') {
+      record.push(field);
+      field = '';
+    } else if (ch === '\n') {
+      records.push([...record, field]);
+      record = [];
+      field = '';
+    }
+  }
+  return records;
+}

@@ -1,4 +1,5 @@
 import { norm } from '../geometry/vector.js';
+import type { Diagnostic } from '../diagnostics/diagnostic.js';
 import type { Project } from '../model/projectSchema.js';
 import { shownConcrete } from './concrete.js';
 import { readsZero, type ColumnKind } from './columnUnits.js';
@@ -15,6 +16,8 @@ export interface CellContext {
   units: UnitSystem;
   /** numbers of the notes this row carries: "1, 3" */
   notes: (f: ScheduleFitting) => string;
+  /** a finding as one sentence in the view's units, as its notes word it */
+  words: (d: Diagnostic) => string;
 }
 
 /** One column of the schedule, shared by every output: the CLI table, CSV, the app's table and the print. */
@@ -103,7 +106,7 @@ export const SCHEDULE_COLUMNS: readonly ScheduleColumn[] = [
     return v > 0 ? v : null;
   }),
   col('notes', 'Notes', 'text', (f, c) => c.notes(f) || null),
-  col('warnings', 'Warnings', 'text', (f) => f.warnings.join(' | ') || null),
+  col('warnings', 'Warnings', 'text', (f, c) => f.diagnostics.map(c.words).join(' | ') || null),
 ];
 
 /** The columns of the compact outputs, by id. */

@@ -1,4 +1,5 @@
 import type { Analysis } from '../analysis/analyse.js';
+import type { Diagnostic } from '../diagnostics/diagnostic.js';
 import { diagnosticText } from '../diagnostics/wording.js';
 import { wordingContext } from '../diagnostics/context.js';
 import type { UnitSystem } from '../units/conversions.js';
@@ -51,7 +52,8 @@ export function scheduleView(a: Analysis, units: UnitSystem): ScheduleView {
     { mark: '', diagnostics: a.diagnostics.filter((d) => !a.byNode.has(d.subject.node ?? '')) },
     ...a.fittings,
   ];
-  const { notes, byMark } = scheduleNotes(rowsForNotes, (d) => diagnosticText(d, context), {
+  const words = (d: Diagnostic) => diagnosticText(d, context);
+  const { notes, byMark } = scheduleNotes(rowsForNotes, words, {
     pipe: context.pipeName,
     caseName: context.caseName,
   });
@@ -59,6 +61,7 @@ export function scheduleView(a: Analysis, units: UnitSystem): ScheduleView {
     project: a.project,
     units,
     notes: (f) => (byMark.get(f.mark) ?? []).join(', '),
+    words,
   };
   const view: ScheduleView = {
     units,
