@@ -1,5 +1,5 @@
 import { memo } from 'react';
-import { CASE_KINDS, type LoadCase, type UnitSystem } from '@mainbrace/solver';
+import { CASE_KINDS, LIMITS, type LoadCase, type UnitSystem } from '@mainbrace/solver';
 import { useActions, useApp } from '../state/StoreContext.js';
 import { nextId } from '../state/documentEdits.js';
 import { NumberField } from './NumberField.js';
@@ -78,7 +78,10 @@ const CaseRow = memo(function CaseRow({
             value={c.datumElevation}
             dimension="elevation"
             units={u}
+            min={LIMITS.elevation.hard.min}
+            max={LIMITS.elevation.hard.max}
             onCommit={(datumElevation) => set(c.id, { datumElevation })}
+            testId={`case-datum-${c.id}`}
           />
         )}
       </td>

@@ -97,6 +97,8 @@ export function DesignSettings() {
               value={d.groundwaterElevation}
               dimension="elevation"
               units={u}
+              min={LIMITS.elevation.hard.min}
+              max={LIMITS.elevation.hard.max}
               onCommit={(v) => actions.updateDesign({ groundwaterElevation: v })}
             />
             <button className="link" onClick={() => actions.updateDesign({ groundwaterElevation: null })}>

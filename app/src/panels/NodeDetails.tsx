@@ -1,4 +1,4 @@
-import { nodeCover, type Project, type ProjectNode } from '@mainbrace/solver';
+import { LIMITS, nodeCover, type Project, type ProjectNode } from '@mainbrace/solver';
 import { useActions, useApp } from '../state/StoreContext.js';
 import { NumberField } from './NumberField.js';
 import { levelPatch, type LevelEdit } from './nodeLevels.js';
@@ -30,8 +30,26 @@ export function NodeDetails({ node, project, pipeCount }: { node: ProjectNode; p
         />
       </div>
       <div className="field-row">
-        <NumberField label="East" value={node.x} dimension="length" units={u} onCommit={(x) => set({ x })} />
-        <NumberField label="North" value={node.y} dimension="length" units={u} onCommit={(y) => set({ y })} />
+        <NumberField
+          label="East"
+          value={node.x}
+          dimension="length"
+          units={u}
+          min={LIMITS.coordinate.hard.min}
+          max={LIMITS.coordinate.hard.max}
+          onCommit={(x) => set({ x })}
+          testId="node-east"
+        />
+        <NumberField
+          label="North"
+          value={node.y}
+          dimension="length"
+          units={u}
+          min={LIMITS.coordinate.hard.min}
+          max={LIMITS.coordinate.hard.max}
+          onCommit={(y) => set({ y })}
+          testId="node-north"
+        />
       </div>
       {grounded && (
         <div className="field-row">
@@ -40,6 +58,8 @@ export function NodeDetails({ node, project, pipeCount }: { node: ProjectNode; p
             value={node.groundLevel!}
             dimension="elevation"
             units={u}
+            min={LIMITS.elevation.hard.min}
+            max={LIMITS.elevation.hard.max}
             onCommit={(value) => level({ typed: 'ground', value })}
             hint="Surveyed; the pipe keeps its cover"
             testId="node-ground"
@@ -55,7 +75,8 @@ export function NodeDetails({ node, project, pipeCount }: { node: ProjectNode; p
           value={node.elevation}
           dimension="elevation"
           units={u}
-          {...(grounded ? { max: node.groundLevel! - od / 2 } : {})}
+          min={LIMITS.elevation.hard.min}
+          max={grounded ? node.groundLevel! - od / 2 : LIMITS.elevation.hard.max}
           onCommit={(value) => level({ typed: 'pipe', value })}
           {...(grounded ? { hint: 'Type it and the cover follows' } : {})}
           testId="node-elevation"

@@ -9,8 +9,11 @@ export interface NumberFieldProps {
   value: number;
   dimension: Dimension;
   units: UnitSystem;
-  /** receives the new SI value; only called with a value that passed the checks */
-  onCommit: (si: number) => void;
+  /**
+   * receives the new SI value; only called with a value that passed the checks. It may return the
+   * lines of the document's refusal of the value, shown at the field like a refusal of its own.
+   */
+  onCommit: (si: number) => void | readonly string[];
   /** SI bounds; a value outside is refused with a message naming the bound */
   min?: number;
   max?: number;
@@ -51,7 +54,9 @@ export function NumberField(p: NumberFieldProps) {
     if (p.max !== undefined && r.si > p.max)
       return setError(`${p.label}: must be at most ${show(p.max, p.dimension, p.units, 4)}`);
     setError(null);
-    if (Math.abs(r.si - p.value) > 1e-12 * Math.max(1, Math.abs(p.value))) p.onCommit(r.si);
+    if (Math.abs(r.si - p.value) <= 1e-12 * Math.max(1, Math.abs(p.value))) return;
+    const refused = p.onCommit(r.si);
+    if (refused && refused.length > 0) setError(refused.join(' '));
   };
   const unit = unitOf(p.dimension, p.units);
   return (

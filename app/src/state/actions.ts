@@ -1,6 +1,7 @@
 import {
   quickParse,
   sheetOf,
+  type Problem,
   type LoadCase,
   type Pipe,
   type Project,
@@ -9,7 +10,7 @@ import {
   type Soil,
   type Underlay,
 } from '@mainbrace/solver';
-import type { AppState, AppStore, CaseView, DrawerTab, Selection, ToolName } from './store.js';
+import type { AppState, AppStore, CaseView, DrawerTab, Notice, Selection, ToolName } from './store.js';
 import { EMPTY_SELECTION } from './store.js';
 import type { PipeSpec, PlanPoint, RouteEnd } from './documentEdits.js';
 import type { Viewport } from './viewport.js';
@@ -19,6 +20,19 @@ import { fittedView, revealFitting as planCommandReveal, showFitting } from '../
 import { planInputOf } from '../tools/planBridge.js';
 import { checks, checksReady, loadChecks } from './checks.js';
 import { loadRouteEdits, routeEdits, type RouteEdits } from './routeEdits.js';
+import { resultsOf } from './results.js';
+import { refusalLine } from './refusalWords.js';
+
+const NONE: readonly string[] = [];
+
+/** Fitting marks of the document on screen; none if its results cannot be worked out (the refusal still shows). */
+function marksOf(project: Project): ReadonlyMap<string, string> {
+  try {
+    return resultsOf(project).marks;
+  } catch {
+    return new Map();
+  }
+}
 
 /** Typing pauses shorter than this, ms, keep extending the same undo step. */
 const TYPING_WINDOW_MS = 1500;
@@ -79,28 +93,32 @@ export function createActions(store: AppStore) {
    * Only the parts the edit replaced are checked (`editProblems`); a whole document that was checked
    * already (opened, restored) comes `checked` and is not checked again.
    */
-  const edit = (change: (p: Project) => Project, typing?: string, checked = false) => {
-    if (waiting && !head) later(() => apply(change, typing, checked));
-    else apply(change, typing, checked);
+  const edit = (change: (p: Project) => Project, typing?: string, checked = false): readonly string[] => {
+    if (!waiting || head) return apply(change, typing, checked);
+    later(() => apply(change, typing, checked));
+    return NONE;
   };
-  const apply = (change: (p: Project) => Project, typing: string | undefined, checked: boolean) => {
+  /** The last refusal shown: the next edit that goes through clears it from the screen (so does Dismiss). */
+  let refusal: Notice | null = null;
+  /** Makes the edit; the lines of its refusal when it was refused now (the field shows them too). */
+  const apply = (change: (p: Project) => Project, typing: string | undefined, checked: boolean): readonly string[] => {
     const before = get().project;
     const after = change(before);
-    if (after === before) return;
-    let lines: string[] = [];
-    if (!checked && checksReady()) lines = checks().editProblems(before, after);
+    if (after === before) return NONE;
+    let problems: Problem[] = [];
+    if (!checked && checksReady()) problems = checks().editProblemList(before, after);
     // The schema checks load after the first screen: until then an edit the check by hand passes
     // as a whole document is made at once; any other waits for them, and so do the edits after it.
-    else if (!checked && !quickParse(after)) return later(() => apply(change, typing, checked));
-    if (lines.length) {
-      set({
-        notice: {
-          tone: 'error',
-          title: 'That change was not made: it would leave the project invalid',
-          lines,
-        },
-      });
-      return;
+    else if (!checked && !quickParse(after)) {
+      later(() => apply(change, typing, checked));
+      return NONE;
+    }
+    if (problems.length) {
+      const wording = { project: after, units: get().units, marks: marksOf(before) };
+      const lines = problems.map((p) => refusalLine(p, wording));
+      refusal = { tone: 'error', title: 'That change was not made: it would leave the project invalid', lines };
+      set({ notice: refusal });
+      return lines;
     }
     // Keystrokes into one text field within a moment of each other are one undo step, not one per letter.
     const now = Date.now();
@@ -108,9 +126,12 @@ export function createActions(store: AppStore) {
     lastTyping = typing === undefined ? null : { key: typing, at: now };
     if (same) history().pause();
     // A passing message ("Deleted 2 nodes — Ctrl+Z brings them back") is out of date after the next edit.
-    const stale = get().notice?.tone === 'info' ? { notice: null } : {};
+    // So is the refusal of an earlier edit, once an edit goes through.
+    const shown = get().notice;
+    const stale = shown?.tone === 'info' || (shown && shown === refusal) ? { notice: null } : {};
     set({ project: after, selection: prune(get().selection, after), ...stale });
     if (same) history().resume();
+    return NONE;
   };
   /**
    * An edit of the route's shape (a run drawn, nodes moved or deleted, a leg's length): its code loads

@@ -63,13 +63,16 @@ describe('edits made before the schema checks are loaded', () => {
     const { checks, createActions, createAppStore } = await fresh();
     const store = createAppStore(doc(), DN300);
     const actions = createActions(store);
+    // The refusal is shown, then cleared by the later edit that goes through.
+    const shown: NonNullable<ReturnType<typeof store.getState>['notice']>[] = [];
+    store.subscribe((s) => void (s.notice && shown.push(s.notice)));
     actions.updateNode('n2', { cover: Number.NaN }); // waits for the schema checks
     actions.updateNode('n2', { cover: 1.7 }); // would pass by hand, but waits its turn
     expect(store.getState().project.nodes[1]!.cover).not.toBe(1.7);
     await checks.loadChecks();
     await vi.waitFor(() => expect(store.getState().project.nodes[1]!.cover).toBe(1.7));
-    expect(store.getState().notice?.title).toBe('That change was not made: it would leave the project invalid');
-    expect(store.getState().notice?.lines[0]).toMatch(/^nodes\[1\]\.cover: /);
+    expect(shown[0]?.title).toBe('That change was not made: it would leave the project invalid');
+    expect(shown[0]?.lines[0]).toMatch(/^Cover to top of pipe at node \w+: expected a number/);
     expect(store.temporal.getState().pastStates.length).toBe(1);
   });
 });

@@ -29,7 +29,7 @@ const LEAST_ONE: Partial<Record<List, string>> = {
  * diameter changed. Same words as the whole-file check; a keystroke in one field of a 10,000-node
  * route checks that one field.
  */
-export function editProblems(before: Project, after: Project): string[] {
+export function editProblemList(before: Project, after: Project): Problem[] {
   const b = before as unknown as Record<string, unknown>;
   const a = after as unknown as Record<string, unknown>;
   const out: Problem[] = [];
@@ -54,5 +54,9 @@ export function editProblems(before: Project, after: Project): string[] {
     }
   }
   if (cross && out.length === 0) out.push(...checks().crossProblems(after));
-  return out.map(problemText);
+  return out;
 }
+
+/** As editProblemList, each problem as one line with its path in the file. */
+export const editProblems = (before: Project, after: Project): string[] =>
+  editProblemList(before, after).map(problemText);

@@ -2,4 +2,4 @@
 // first screen instead of before it (docs/performance.md: zod was 23 kB of the first-load JavaScript).
 export { parseProject, parseProjectText, partProblems, crossProblems } from '@mainbrace/solver';
 // An edit's own check reads the schema's parts, so it comes with them.
-export { editProblems } from './editCheck.js';
+export { editProblemList, editProblems } from './editCheck.js';
