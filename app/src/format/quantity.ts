@@ -1,16 +1,26 @@
-import { formatNumber, formatSi, KIP, unitSymbol, type Dimension, type UnitSystem } from '@mainbrace/solver';
+import { columnNumber, formatSi, quantityText, unitSymbol, type Dimension, type UnitSystem } from '@mainbrace/solver';
+
+/**
+ * Dimensions that are a schedule column's kind wherever the app shows them: a pressure or a force reads
+ * in that column's unit and precision, without thousands separators as the CSV needs (columnUnits.ts),
+ * so the panel, the plan and the print word it as the schedule does.
+ */
+const COLUMN_KIND: Partial<Record<Dimension, 'pressure' | 'force'>> = { pressure: 'pressure', force: 'force' };
 
 /** An SI value as the user reads it: number and unit in the chosen system. */
-export const show = (si: number, dim: Dimension, units: UnitSystem, significant = 3): string =>
-  formatSi(si, dim, units, significant);
+export function show(si: number, dim: Dimension, units: UnitSystem, significant = 3): string {
+  const kind = COLUMN_KIND[dim];
+  return kind ? quantityText(si, kind, units) : formatSi(si, dim, units, significant);
+}
 
-/** A force in a table column: kN, or kip in US units, so that one column never mixes lbf and kip. */
-export const showColumnForce = (si: number, units: UnitSystem): string =>
-  units === 'us' ? `${formatNumber(si / KIP)} kip` : formatSi(si, 'force', 'si');
+/**
+ * A force with its unit as the schedule's force column has it (columnUnits.ts: kN to 0.1, kip to 0.01):
+ * a thrust reads the same on the plan, in the panel and in the schedule and print.
+ */
+export const showColumnForce = (si: number, units: UnitSystem): string => quantityText(si, 'force', units);
 
-/** A force as a bare number in the column's one unit (kN, or kip in US units), the unit in the heading. */
-export const columnForce = (si: number, units: UnitSystem): string =>
-  formatNumber(units === 'us' ? si / KIP : si / 1000);
+/** A force as a bare number in the force column's unit and precision, the unit in the heading. */
+export const columnForce = (si: number, units: UnitSystem): string => columnNumber(si, 'force', units);
 
 /** The unit symbol of a dimension in the chosen system. */
 export const unitOf = (dim: Dimension, units: UnitSystem): string => unitSymbol(dim, units);

@@ -14,13 +14,13 @@ import {
   REGISTER,
   scheduleView,
   unverified,
-  formatNumber,
-  toDisplay,
+  columnNumber,
+  columnUnit,
   type FittingAnalysis,
   type Project,
   readsZero,
 } from '@mainbrace/solver';
-import { columnForce, show, showColumnForce, unitOf } from '../format/quantity.js';
+import { columnForce, show, showColumnForce } from '../format/quantity.js';
 import { bearingText, fittingTitle } from '../format/fittingNames.js';
 import { useDiagnosticWords } from '../format/words.js';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
@@ -46,7 +46,9 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
   // An error among the findings means what is listed (if anything) does not hold the fitting.
   const notAdequate = f.diagnostics.some((d) => d.severity === 'error');
   const open = unverified(f.basis);
-  const forceUnit = u === 'us' ? 'kip' : 'kN';
+  const forceUnit = columnUnit('force', u);
+  // A part of the thrust is named only where it reads as more than nothing at the force column's precision.
+  const horizontalShown = !readsZero(e.horizontal.force, 'force', u);
   const row = scheduleView(analysis, u).rows[analysis.fittings.indexOf(f)];
   return (
     <section className="results" aria-label={`Results for ${f.mark}`} data-testid="fitting-results">
@@ -58,14 +60,14 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
       </button>
       <dl className="facts">
         <dt>Chainage</dt>
-        <dd>{show(f.chainage, 'length', u, 4)}</dd>
+        <dd>{quantityText(f.chainage, 'chainage', u)}</dd>
         <dt>Design pressure</dt>
-        <dd>{show(e.pressure, 'pressure', u)}</dd>
+        <dd data-testid="design-pressure">{quantityText(e.pressure, 'pressure', u)}</dd>
         <dt>Governing case</dt>
         <dd>{caseLabel(project, e.governing.caseId)}</dd>
         <dt>Thrust</dt>
         <dd data-testid="governing-thrust">
-          {e.horizontal.force > 0 && (
+          {horizontalShown && (
             <>
               horizontal <strong>{showColumnForce(e.horizontal.force, u)}</strong>, bears toward{' '}
               {bearingText(planBearing(e.horizontal.direction))} (from north)
@@ -73,12 +75,12 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
           )}
           {!readsZero(e.upward.force, 'force', u) && (
             <>
-              {e.horizontal.force > 0 ? '; ' : ''}upward <strong>{showColumnForce(e.upward.force, u)}</strong>
+              {horizontalShown ? '; ' : ''}upward <strong>{showColumnForce(e.upward.force, u)}</strong>
             </>
           )}
           {!readsZero(e.downward.force, 'force', u) && (
             <>
-              {e.horizontal.force > 0 || !readsZero(e.upward.force, 'force', u) ? '; ' : ''}downward{' '}
+              {horizontalShown || !readsZero(e.upward.force, 'force', u) ? '; ' : ''}downward{' '}
               <strong>{showColumnForce(e.downward.force, u)}</strong>
             </>
           )}{' '}
@@ -103,7 +105,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
           <tbody>
             {(
               [
-                [`Pressure (${unitOf('pressure', u)})`, (c) => formatNumber(toDisplay(c.pressure, 'pressure', u))],
+                [`Pressure (${columnUnit('pressure', u)})`, (c) => columnNumber(c.pressure, 'pressure', u)],
                 [`Static (${forceUnit})`, (c) => columnForce(norm(c.static), u)],
                 [`Dynamic (${forceUnit})`, (c) => columnForce(norm(c.dynamic), u)],
                 [`Total (${forceUnit})`, (c) => columnForce(norm(c.total), u)],
@@ -152,10 +154,11 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
               {formatDimension(r.block.faceWidth, u)} wide × {formatDimension(r.block.faceHeight, u)} high
             </strong>
             , {formatDimension(r.block.depth, u)} from the fitting to the bearing face; bearing area{' '}
-            {show(r.block.bearingArea, 'area', u)} needed, {show(r.block.faceWidth * r.block.faceHeight, 'area', u)}{' '}
-            given; concrete {quantityText(r.block.concreteVolume, 'volume', u)}. Passive resistance{' '}
-            {r.block.passiveRatio.toFixed(2)} × the thrust (3-D factor {r.block.shapeFactor.toFixed(2)}); the face is
-            set by {BLOCK_GOVERNS[r.block.governs]}.
+            {quantityText(r.block.bearingArea, 'area', u)} needed,{' '}
+            {quantityText(r.block.faceWidth * r.block.faceHeight, 'area', u)} given; concrete{' '}
+            {quantityText(r.block.concreteVolume, 'volume', u)}. Passive resistance {r.block.passiveRatio.toFixed(2)} ×
+            the thrust (3-D factor {r.block.shapeFactor.toFixed(2)}); the face is set by{' '}
+            {BLOCK_GOVERNS[r.block.governs]}.
           </li>
         )}
         {r.reverseBlock && (
@@ -184,7 +187,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
         {r.trenchBottom && (
           <li data-testid="pad">
             <span className="element">{elementName(f.mark, 'trenchBottom')}</span> Trench-bottom bearing, bears{' '}
-            {showColumnForce(e.downward.force, u)} down: {show(r.trenchBottom.bearingArea, 'area', u)}: pad{' '}
+            {showColumnForce(e.downward.force, u)} down: {quantityText(r.trenchBottom.bearingArea, 'area', u)}: pad{' '}
             {formatDimension(r.trenchBottom.width, u)} across × {formatDimension(r.trenchBottom.length, u)} along the
             pipe.
           </li>
