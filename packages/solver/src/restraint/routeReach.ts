@@ -49,18 +49,28 @@ export interface LineStep {
 /**
  * The pipes of the line from `node` out along `pipe`, in order: through every node where the line simply
  * continues (two pipes: straight joints and the fittings a zone may run through), up to the first node
- * where it branches or ends; and whether it ends at a tie-in, where it runs on into the existing main.
+ * where it branches or ends (or, given `within`, m, the first pipe that reaches that far); and whether it
+ * ends at a tie-in, where it runs on into the existing main.
  */
-export function pipesAlong(project: Project, node: string, pipe: string): { steps: LineStep[]; tieIn: boolean } {
+export function pipesAlong(
+  project: Project,
+  node: string,
+  pipe: string,
+  within = Infinity,
+): { steps: LineStep[]; tieIn: boolean } {
   const links = linksOf(project);
   const steps: LineStep[] = [];
   let here = node;
   let via = pipe;
+  let total = 0;
   const seen = new Set<string>([node]);
   for (;;) {
     const link = links.get(here)?.find((l) => l.pipe === via);
     if (!link) return { steps, tieIn: false };
     steps.push({ pipe: via, entered: here, length: link.length });
+    total += link.length;
+    // A walk for a restrained length stops where the length is covered: a long line is not walked whole.
+    if (total >= within) return { steps, tieIn: false };
     const next = links.get(link.far) ?? [];
     if (next.length === 1 && tieIns.get(project)!.has(link.far)) return { steps, tieIn: true };
     if (next.length !== 2 || seen.has(link.far)) return { steps, tieIn: false };

@@ -1,8 +1,7 @@
 import type { Project } from '../model/projectSchema.js';
 import { pipesAlong } from '../restraint/routeReach.js';
-import { legsByNode } from '../network/legs.js';
+import { pipeLegs } from '../network/legs.js';
 import { fittingGeometry } from '../network/fittingKind.js';
-import type { Leg } from '../network/legs.js';
 
 /** A stretch of one pipe to restrain, m along the pipe from its `from` node (past its ends into a tie-in). */
 export interface RestrainedStretch {
@@ -33,7 +32,7 @@ export function restrainedStretches(project: Project, fittings: readonly Zones[]
   };
   for (const f of fittings)
     for (const leg of f.restraint.restrainedLegs) {
-      const { steps, tieIn } = pipesAlong(project, f.node, leg.pipe);
+      const { steps, tieIn } = pipesAlong(project, f.node, leg.pipe, leg.length);
       let left = leg.length;
       for (const s of steps) {
         if (!(left > 0)) break;
@@ -100,14 +99,22 @@ export function stretchJoints(
     byPipe.set(s.pipe, (byPipe.get(s.pipe) ?? 0) + n);
   }
   // Two pipe ends meeting at a straight joint are one joint, not two.
-  let legs: Map<string, Leg[]> | undefined;
+  const pipeById = new Map(project.pipes.map((p) => [p.id, p]));
+  const outside = project.design.thrustArea === 'outside';
+  const legAt = (node: string, pipe: string) => {
+    const p = pipeById.get(pipe);
+    const a = p && nodes.get(p.from);
+    const b = p && nodes.get(p.to);
+    return p && a && b ? pipeLegs(p, a, b, outside)[p.from === node ? 0 : 1] : undefined;
+  };
+  const joined = new Map<string, number>();
+  for (const p of project.pipes) for (const n of [p.from, p.to]) joined.set(n, (joined.get(n) ?? 0) + 1);
   for (const [id, pipes] of reached) {
-    if (pipes.length !== 2) continue;
-    legs ??= legsByNode(project);
-    const own = legs.get(id);
     const node = nodes.get(id);
-    if (node && own?.length === 2 && fittingGeometry(node, own).kind === 'straight')
-      byPipe.set(pipes[1]!, byPipe.get(pipes[1]!)! - 1);
+    const own = pipes.map((pipe) => legAt(id, pipe));
+    if (node && joined.get(id) === 2 && pipes.length === 2 && own[0] && own[1])
+      if (fittingGeometry(node, [own[0], own[1]]).kind === 'straight')
+        byPipe.set(pipes[1]!, byPipe.get(pipes[1]!)! - 1);
   }
   return byPipe;
 }
