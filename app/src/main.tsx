@@ -7,8 +7,8 @@ import { createActions } from './state/actions.js';
 import { StoreProvider } from './state/StoreContext.js';
 import { restoreProject, startAutosave, type Restored } from './state/autosave.js';
 import { browserStore } from './state/keyValue.js';
-import { pageStorage, removeKey } from './state/unsavedEdits.js';
-import { withUnsaved } from './state/unsavedRestore.js';
+import { hasUnsaved, pageStorage, removeKey } from './state/unsavedEdits.js';
+import type { WithUnsaved } from './state/unsavedRestore.js';
 import { newTabId, openTabChannel } from './state/tabChannel.js';
 import { bindKeptCopies, refreshKeptCopies } from './state/keptCopiesView.js';
 import { takeStartNotice } from './state/startNotice.js';
@@ -63,7 +63,10 @@ async function start() {
   demo.catch(() => undefined); // a kept project opens without it
   const sync = pageStorage();
   // A document left unsaved by a reload right after an edit opens instead of the copy it grew from.
-  const unsaved = await withUnsaved(kv, sync, await restoreProject(kv));
+  const restored = await restoreProject(kv);
+  const unsaved: WithUnsaved = hasUnsaved(sync)
+    ? await import('./state/unsavedRestore.js').then((m) => m.withUnsaved(kv, sync, restored))
+    : { kept: restored, adopted: null, notice: null };
   const kept = unsaved.kept;
   const project = await firstProject(kept, demo);
   const store = createAppStore(project, defaultPipe(project));

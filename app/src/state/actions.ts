@@ -21,7 +21,6 @@ import { planInputOf } from '../tools/planBridge.js';
 import { checks, checksReady, loadChecks } from './checks.js';
 import { loadRouteEdits, routeEdits, type RouteEdits } from './routeEdits.js';
 import { resultsOf } from './results.js';
-import { refusalLine } from './refusalWords.js';
 
 const NONE: readonly string[] = [];
 
@@ -115,7 +114,7 @@ export function createActions(store: AppStore) {
     }
     if (problems.length) {
       const wording = { project: after, units: get().units, marks: marksOf(before) };
-      const lines = problems.map((p) => refusalLine(p, wording));
+      const lines = problems.map((p) => checks().refusalLine(p, wording));
       refusal = { tone: 'error', title: 'That change was not made: it would leave the project invalid', lines };
       set({ notice: refusal });
       return lines;

@@ -72,6 +72,17 @@ export function readUnsaved(storage: SyncStorage | null): { key: string; edit: U
   }
 }
 
+/** Whether any tab left an unsaved document: the code that weighs one loads only then. */
+export function hasUnsaved(storage: SyncStorage | null): boolean {
+  if (!storage) return false;
+  try {
+    for (let i = 0; i < storage.length; i++) if (storage.key(i)?.startsWith(PREFIX)) return true;
+  } catch {
+    // as readUnsaved
+  }
+  return false;
+}
+
 export function removeKey(storage: SyncStorage | null, key: string): void {
   try {
     storage?.removeItem(key);
