@@ -63,7 +63,7 @@ test('a restrained bend shows its joints by mark, and each block and anchor is n
   const results = page.getByTestId('fitting-results');
   // 6.2 m of restrained length at the default 6 m laying length: joints at 0 and 6 m.
   await expect(results.getByTestId('restrained').first()).toContainText('A13 joints');
-  await expect(results.getByTestId('restrained').first()).toContainText('2 joints at 6.00 m laying length');
+  await expect(results.getByTestId('restrained').first()).toContainText('2 joints at 6.0 m laying length');
   await app.shot('restrained-zone');
   await page.getByTestId(`row-${marks.get('A10')}`).click();
   await expect(results.getByTestId('block')).toContainText('A10 block');

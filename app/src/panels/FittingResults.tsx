@@ -5,6 +5,7 @@ import {
   formatDimension,
   horizontalNorm,
   jointsText,
+  layingLengthText,
   legTarget,
   norm,
   notVerifiedText,
@@ -20,7 +21,7 @@ import {
   type Project,
   readsZero,
 } from '@mainbrace/solver';
-import { columnForce, show, showColumnForce } from '../format/quantity.js';
+import { columnForce, showColumnForce } from '../format/quantity.js';
 import { bearingText, fittingTitle } from '../format/fittingNames.js';
 import { useDiagnosticWords } from '../format/words.js';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
@@ -200,7 +201,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
               <strong>{quantityText(l.length, 'restrained', u)}</strong>{' '}
               {toward ? `toward ${toward}` : 'to the end of the line'}:{' '}
               {jointsText(restrainedJointCount(l.length, project.design.layingLength))} at{' '}
-              {show(project.design.layingLength, 'length', u)} laying length, the first at the fitting.
+              {layingLengthText(project.design.layingLength, u)} laying length, the first at the fitting.
             </li>
           );
         })}

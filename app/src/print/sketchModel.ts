@@ -2,6 +2,7 @@ import {
   compassPoint,
   formatDimension,
   jointsText,
+  layingLengthText,
   quantityText,
   restrainedJointPositions,
   settingOut,
@@ -427,7 +428,7 @@ export function sketchOf(f: ScheduleFitting, analysis: Analysis, units: UnitSyst
         `${quantityText(l.length, 'restrained', units)} toward ${l.toward ?? 'the end of the line'} (${jointsText(l.joints)})`,
     );
     lines.push(
-      `Restrain ${legsText.join('; ')}: ${quantityText(design.layingLength, 'restrained', units)} pipes, the first joint at the fitting.`,
+      `Restrain ${legsText.join('; ')}: ${layingLengthText(design.layingLength, units)} pipes, the first joint at the fitting.`,
     );
   }
   return { mark: f.mark, plan, section, lines, notAdequate, jointsOnly };

@@ -65,7 +65,7 @@ export {
   restrainedLegText,
   jointsText,
 } from './schedule/restraintText.js';
-export { restrainedJointCount, restrainedJointPositions } from './schedule/restrainedJoints.js';
+export { layingLengthText, restrainedJointCount, restrainedJointPositions } from './schedule/restrainedJoints.js';
 export {
   restraintElements,
   elementName,

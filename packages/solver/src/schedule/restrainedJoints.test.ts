@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { restrainedJointCount, restrainedJointPositions } from './restrainedJoints.js';
+import { layingLengthText, restrainedJointCount, restrainedJointPositions } from './restrainedJoints.js';
 
 // Hand count: with a joint at the fitting and one every laying length ℓ, the joints closer to the
 // fitting than the restrained length L are those at 0, ℓ, 2ℓ … below L: ⌈L/ℓ⌉ of them.
@@ -23,5 +23,13 @@ describe('joints to restrain along a leg', () => {
   it('restrains nothing for no restrained length', () => {
     expect(restrainedJointCount(0, 6)).toBe(0);
     expect(restrainedJointPositions(0, 6)).toEqual([]);
+  });
+
+  it('words the laying length to a tenth, as a length along the line: 6 m pipes are 19.7 ft, not 20 ft', () => {
+    // 6 m / 0.3048 m per ft = 19.685 ft, to the nearest tenth 19.7 ft; 20 ft × 0.3048 = 6.096 m.
+    expect(layingLengthText(6, 'us')).toBe('19.7 ft');
+    expect(layingLengthText(6, 'si')).toBe('6.0 m');
+    expect(layingLengthText(20 * 0.3048, 'us')).toBe('20.0 ft');
+    expect(layingLengthText(20 * 0.3048, 'si')).toBe('6.1 m');
   });
 });

@@ -1,3 +1,6 @@
+import type { UnitSystem } from '../units/conversions.js';
+import { quantityText } from './columnUnits.js';
+
 /**
  * Joints to restrain along a leg of restrained length `length` (m) when pipes are `layingLength` (m)
  * long and the first joint is at the fitting: every joint closer to the fitting than the restrained
@@ -13,3 +16,11 @@ export function restrainedJointCount(length: number, layingLength: number): numb
 export function restrainedJointPositions(length: number, layingLength: number): number[] {
   return Array.from({ length: restrainedJointCount(length, layingLength) }, (_, k) => k * layingLength);
 }
+
+/**
+ * The laying length as every output words it ("19.7 ft", "6.0 m"): a length along the line, shown as
+ * the chainage column shows one (columnUnits.ts), to the nearest tenth. Not rounded up as a restrained
+ * length is: the joints sit a pipe's true length apart, and a 6 m pipe called "20 ft" places them wrongly.
+ */
+export const layingLengthText = (layingLength: number, units: UnitSystem): string =>
+  quantityText(layingLength, 'chainage', units);
