@@ -1,4 +1,6 @@
 import { expect } from 'vitest';
+import { readFileSync } from 'node:fs';
+import { resolve } from 'node:path';
 import { parseProject, type Project, type ProjectInput } from '@mainbrace/solver';
 import type { PipeSpec } from './state/documentEdits.js';
 
@@ -81,3 +83,37 @@ export const chain = (...points: [number, number][]): Project =>
     points.map(([x, y], i) => ({ id: `n${i + 1}`, x, y })),
     points.slice(1).map((_, i) => ({ from: `n${i + 1}`, to: `n${i + 2}` })),
   );
+
+/** The demo project as the app opens it (public/demo), checked by the solver's parser. */
+export function demoProject(): Project {
+  const r = parseProject(
+    JSON.parse(readFileSync(resolve(import.meta.dirname, '../../public/demo/larkspur-rise.json'), 'utf8')),
+  );
+  if (!r.ok) throw new Error('demo does not parse');
+  return r.project;
+}
+
+/** The records of a CSV (RFC 4180: a quoted field may hold commas and doubled quotes). */
+export function csvRecords(text: string): string[][] {
+  const records: string[][] = [];
+  let record: string[] = [];
+  let field = '';
+  let quoted = false;
+  for (let i = 0; i < text.length; i++) {
+    const ch = text[i]!;
+    if (quoted && ch === '"' && text[i + 1] === '"') {
+      field += '"';
+      i++;
+    } else if (ch === '"') quoted = !quoted;
+    else if (quoted || (ch !== ',' && ch !== '\r' && ch !== '\n')) field += ch;
+    else if (ch === ',') {
+      record.push(field);
+      field = '';
+    } else if (ch === '\n') {
+      records.push([...record, field]);
+      record = [];
+      field = '';
+    }
+  }
+  return records;
+}

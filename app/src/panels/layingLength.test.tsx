@@ -1,22 +1,16 @@
 import { describe, it, expect, afterEach } from 'vitest';
 import { render, cleanup } from '@testing-library/react';
-import { readFileSync } from 'node:fs';
-import { resolve } from 'node:path';
-import { parseProject, type UnitSystem } from '@mainbrace/solver';
+import { type UnitSystem } from '@mainbrace/solver';
 import { createAppStore } from '../state/store.js';
 import { createActions } from '../state/actions.js';
 import { StoreProvider } from '../state/StoreContext.js';
 import { resultsOf } from '../state/results.js';
 import { FittingResults } from './FittingResults.js';
-import { DN300 } from '../testFixtures.js';
+import { demoProject, DN300 } from '../testFixtures.js';
 
 afterEach(cleanup);
 
-const parsed = parseProject(
-  JSON.parse(readFileSync(resolve(import.meta.dirname, '../../../public/demo/larkspur-rise.json'), 'utf8')),
-);
-if (!parsed.ok) throw new Error('demo does not parse');
-const project = parsed.project;
+const project = demoProject();
 
 describe('the laying length reads the same in the panel’s words and its sketch', () => {
   // The demo's 6 m pipes: 6 / 0.3048 = 19.685 ft, a length along the line shown to the tenth as the

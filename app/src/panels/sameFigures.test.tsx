@@ -1,32 +1,17 @@
 import { describe, it, expect, afterEach } from 'vitest';
 import { render, cleanup } from '@testing-library/react';
-import { readFileSync } from 'node:fs';
-import { resolve } from 'node:path';
-import {
-  columnUnit,
-  horizontalNorm,
-  parseProject,
-  scheduleView,
-  type Project,
-  type UnitSystem,
-} from '@mainbrace/solver';
+import { columnUnit, horizontalNorm, scheduleView, type UnitSystem } from '@mainbrace/solver';
 import { createAppStore } from '../state/store.js';
 import { createActions } from '../state/actions.js';
 import { StoreProvider } from '../state/StoreContext.js';
 import { resultsOf } from '../state/results.js';
 import { FittingResults } from './FittingResults.js';
 import { thrustLabel } from '../plan/thrustLabel.js';
-import { DN300 } from '../testFixtures.js';
+import { demoProject, DN300 } from '../testFixtures.js';
 
 afterEach(cleanup);
 
-function demo(): Project {
-  const r = parseProject(
-    JSON.parse(readFileSync(resolve(import.meta.dirname, '../../../public/demo/larkspur-rise.json'), 'utf8')),
-  );
-  if (!r.ok) throw new Error('demo does not parse');
-  return r.project;
-}
+const demo = demoProject;
 
 /**
  * Invariant: a quantity the schedule has a column for reads the same in the fitting's panel and on the

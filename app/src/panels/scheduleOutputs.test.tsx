@@ -1,10 +1,7 @@
 import { describe, it, expect, afterEach } from 'vitest';
 import { render, cleanup, waitFor } from '@testing-library/react';
-import { readFileSync } from 'node:fs';
-import { resolve } from 'node:path';
 import {
   analyse,
-  parseProject,
   pickColumns,
   scheduleCsv,
   scheduleTable,
@@ -19,17 +16,11 @@ import { StoreProvider } from '../state/StoreContext.js';
 import { ScheduleTable } from './ScheduleTable.js';
 import { RouteSummary } from './RouteSummary.js';
 import { PrintSheet } from '../print/PrintSheet.js';
-import { DN300 } from '../testFixtures.js';
+import { csvRecords, demoProject, DN300 } from '../testFixtures.js';
 
 afterEach(cleanup);
 
-function demo(): Project {
-  const r = parseProject(
-    JSON.parse(readFileSync(resolve(import.meta.dirname, '../../../public/demo/larkspur-rise.json'), 'utf8')),
-  );
-  if (!r.ok) throw new Error('demo does not parse');
-  return r.project;
-}
+const demo = demoProject;
 
 /** The texts of a rendered table's body rows, cell by cell. */
 const bodyCells = (table: Element) =>
@@ -145,28 +136,3 @@ describe('the CSV words its warnings in the display units, as the print words it
     for (const r of records.slice(1).filter((r) => r[warnings])) expect(r[warnings]).not.toMatch(/\d (m|kN|kPa)\b/);
   });
 });
-
-/** The records of a CSV (RFC 4180: a quoted field may hold commas and doubled quotes). */
-function csvRecords(text: string): string[][] {
-  const records: string[][] = [];
-  let record: string[] = [];
-  let field = '';
-  let quoted = false;
-  for (let i = 0; i < text.length; i++) {
-    const ch = text[i]!;
-    if (quoted && ch === '"' && text[i + 1] === '"') {
-      field += '"';
-      i++;
-    } else if (ch === '"') quoted = !quoted;
-    else if (quoted || (ch !== ',' && ch !== '\r' && ch !== '\n')) field += ch;
-    else if (ch === ',') {
-      record.push(field);
-      field = '';
-    } else if (ch === '\n') {
-      records.push([...record, field]);
-      record = [];
-      field = '';
-    }
-  }
-  return records;
-}

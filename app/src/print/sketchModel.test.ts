@@ -1,10 +1,7 @@
 import { describe, it, expect } from 'vitest';
-import { readFileSync } from 'node:fs';
-import { resolve } from 'node:path';
 import {
   analyse,
   formatDimension,
-  parseProject,
   scheduleCsv,
   scheduleOf,
   scheduleView,
@@ -12,11 +9,9 @@ import {
   type UnitSystem,
 } from '@mainbrace/solver';
 import { sketchOf } from './sketchModel.js';
+import { csvRecords, demoProject } from '../testFixtures.js';
 
-const parsed = parseProject(
-  JSON.parse(readFileSync(resolve(import.meta.dirname, '../../../public/demo/larkspur-rise.json'), 'utf8')),
-);
-if (!parsed.ok) throw new Error('demo does not parse');
+const parsed = { project: demoProject() };
 const analysis = analyse(parsed.project);
 const rows = scheduleOf(analysis).fittings;
 const dims = (s: ReturnType<typeof sketchOf>) =>
@@ -77,33 +72,6 @@ describe('restraint sketches are drawn from the schedule row', () => {
     expect([...s.plan, ...s.section].some((x) => x.t === 'poly' && x.role === 'block')).toBe(false);
   });
 });
-
-/** The records of a CSV (RFC 4180: quoted fields may hold commas and doubled quotes). */
-function csvRecords(text: string): string[][] {
-  const records: string[][] = [];
-  let field = '';
-  let record: string[] = [];
-  let quoted = false;
-  for (let i = 0; i < text.length; i++) {
-    const ch = text[i]!;
-    if (quoted && ch === '"' && text[i + 1] === '"') {
-      field += '"';
-      i++;
-    } else if (ch === '"') {
-      quoted = !quoted;
-    } else if (quoted || (ch !== ',' && ch !== '\r' && ch !== '\n')) {
-      field += ch;
-    } else if (ch === ',') {
-      record.push(field);
-      field = '';
-    } else if (ch === '\n') {
-      records.push([...record, field]);
-      record = [];
-      field = '';
-    }
-  }
-  return records;
-}
 
 describe('the crew sheet and the CSV give each depth below ground as the same text', () => {
   for (const units of ['si', 'us'] as UnitSystem[]) {

@@ -1,15 +1,11 @@
 import { describe, it, expect } from 'vitest';
-import { readFileSync } from 'node:fs';
-import { resolve } from 'node:path';
-import { analyse, FOOT, PAGE_CAUTIONS, parseProject, scheduleOf } from '@mainbrace/solver';
+import { analyse, FOOT, PAGE_CAUTIONS, scheduleOf } from '@mainbrace/solver';
 import { PLAN_SCALES, planDrawing } from './planDrawing.js';
 import { drawingSvg } from './drawingSvg.js';
 import { drawingPdf } from './drawingPdf.js';
+import { demoProject } from '../../testFixtures.js';
 
-const parsed = parseProject(
-  JSON.parse(readFileSync(resolve(import.meta.dirname, '../../../../public/demo/larkspur-rise.json'), 'utf8')),
-);
-if (!parsed.ok) throw new Error('demo does not parse');
+const parsed = { project: demoProject() };
 const analysis = analyse(parsed.project);
 const rows = scheduleOf(analysis).fittings;
 const scale = (id: string) => PLAN_SCALES.find((s) => s.id === id)!;
