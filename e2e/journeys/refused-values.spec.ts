@@ -54,3 +54,25 @@ test('a value the project cannot take is refused at its field, as labelled, and 
   await expect(page.getByTestId('notice')).toHaveCount(0);
   await app.shot('refused-values');
 });
+
+test('a bad entry left in a node’s field stays with that node, not the next node shown', async ({ page }) => {
+  const app = new MainbracePage(page);
+  await app.blankCanvas();
+  await app.draw([
+    [0, 0],
+    [100, 0],
+    [150, 50],
+  ]);
+  await expect.poll(async () => (await app.project()).nodes.length).toBe(3);
+  const [n1, , n3] = (await app.project()).nodes.map((n) => n.id);
+  // Both ends carry the default cover, so the field's value is the same at each.
+  await app.selectNode(n1!);
+  const cover = page.getByTestId('node-cover');
+  const shown = await cover.inputValue();
+  await cover.fill('abc');
+  await cover.press('Enter');
+  await expect(cover).toHaveAttribute('aria-invalid', 'true');
+  await app.selectNode(n3!);
+  await expect(page.getByTestId('node-cover')).toHaveValue(shown);
+  await expect(page.getByTestId('node-cover')).toHaveAttribute('aria-invalid', 'false');
+});

@@ -34,12 +34,13 @@ export function DetailsPanel() {
     body = node && (
       <>
         {fitting && <FittingResults fitting={fitting} project={project} />}
-        <NodeDetails node={node} project={project} pipeCount={analysis.legs.get(id)?.length ?? 0} />
+        {/* Keyed by the node: a refused entry left in a field stays with its node, not the next one shown. */}
+        <NodeDetails key={id} node={node} project={project} pipeCount={analysis.legs.get(id)?.length ?? 0} />
       </>
     );
   } else if (count === 1) {
     const pipe = project.pipes.find((p) => p.id === [...selection.pipes][0]);
-    body = pipe && <PipeDetails pipe={pipe} project={project} />;
+    body = pipe && <PipeDetails key={pipe.id} pipe={pipe} project={project} />;
   } else if (count > 1) {
     body = (
       <section className="inputs">
