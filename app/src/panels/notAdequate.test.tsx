@@ -56,6 +56,10 @@ describe('a fitting nothing holds is flagged, never "none needed"', () => {
     const row = container.querySelector('[data-testid=row-n2]')!;
     expect(row.classList.contains('not-adequate')).toBe(true);
     expect(row.querySelector('td.mark')?.textContent).toContain('not adequate');
+    // the restraint cell says so on its own (a black-and-white print, a filtered CSV), not "—"
+    expect(row.querySelector('td[data-col=restraint]')?.textContent).toBe(
+      'NOT ADEQUATE (see the notes): no restraint sized',
+    );
     const notes = [...container.querySelectorAll('[data-testid=schedule-notes] li.note-error')];
     expect(notes.length).toBeGreaterThan(0);
     for (const n of notes) expect(n.textContent).toMatch(/^NOT ADEQUATE\. /);

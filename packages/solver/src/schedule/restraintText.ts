@@ -73,5 +73,8 @@ export function restraintSummary(f: ScheduleFitting, units: UnitSystem, step: nu
   if (r.trenchBottom)
     parts.push(`bottom pad ${padText(r.trenchBottom, step, units)} ${padForceText(f.downwardThrust, units)}`);
   if (r.restrainedLegs.length) parts.push(`restrain ${restrainedText(f, units)}`);
+  // A row a crew reads alone (a black-and-white print, a filtered CSV) says so when it must not be built.
+  if (f.diagnostics.some((d) => d.severity === 'error'))
+    return `NOT ADEQUATE (see the notes): ${parts.length ? parts.join('; ') : 'no restraint sized'}`;
   return parts.length ? parts.join('; ') : '—';
 }

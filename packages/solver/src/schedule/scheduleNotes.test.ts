@@ -2,6 +2,7 @@ import { describe, it, expect } from 'vitest';
 import { analyse } from '../analysis/analyse.js';
 import { scheduleView } from './scheduleView.js';
 import { scheduleTable } from './scheduleTable.js';
+import { noteAfterHeading } from './scheduleNotes.js';
 import { route } from '../../test/projectBuilder.js';
 import { PSI } from '../units/conversions.js';
 
@@ -58,5 +59,16 @@ describe('an error note under its heading', () => {
     const line = table.split('\n').find((l) => l.includes('rated working pressure'))!;
     expect(line).toContain('!! NOT ADEQUATE');
     expect(line.toLowerCase().split('not adequate').length - 1).toBe(1);
+  });
+});
+
+describe('noteAfterHeading', () => {
+  it('drops the sentence’s own "Not adequate:" and starts what is left with a capital', () => {
+    expect(noteAfterHeading({ severity: 'error', text: 'Not adequate: the restrained length is cut.' })).toBe(
+      'The restrained length is cut.',
+    );
+    expect(noteAfterHeading({ severity: 'warning', text: 'Not adequate: as written.' })).toBe(
+      'Not adequate: as written.',
+    );
   });
 });

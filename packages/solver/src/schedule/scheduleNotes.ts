@@ -15,7 +15,7 @@ export interface ScheduleNote {
  * the sentence's own leading "Not adequate:" is dropped so that the words are not said twice.
  */
 export const noteAfterHeading = (n: Pick<ScheduleNote, 'severity' | 'text'>): string =>
-  n.severity === 'error' ? n.text.replace(/^Not adequate:\s*/, '') : n.text;
+  n.severity === 'error' ? n.text.replace(/^Not adequate:\s*(.)/, (_, c: string) => c.toUpperCase()) : n.text;
 
 /**
  * Each distinct finding once (crew-sheet.md: notes, not repeats): diagnostics grouped by code, most
