@@ -130,6 +130,8 @@ function shownValues(d: Diagnostic, units: UnitSystem): Shown {
     if (kind === 'ratio' || kind === undefined) out[name] = formatRatio(v);
     else if (BUILT.has(name)) out[name] = formatDimension(v, units);
     else if (RESTRAINED.has(name)) out[name] = quantityText(v, 'restrained', units);
+    // Forces and pressures as the schedule's columns give them, so that a note and its row agree.
+    else if (kind === 'force' || kind === 'pressure') out[name] = quantityText(v, kind, units);
     else out[name] = formatSi(v, kind as Parameters<typeof formatSi>[1], units);
   }
   if (d.code === 'flow.unbalanced') {

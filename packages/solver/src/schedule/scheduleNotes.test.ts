@@ -40,8 +40,9 @@ describe('pipe rating notes', () => {
   it('the same finding on four pipes is one note naming the four', () => {
     const notes = ratingNotes(main());
     expect(notes).toHaveLength(1);
-    expect(notes[0]!.text).toContain('200 psi');
-    expect(notes[0]!.text).toContain('165 psi');
+    // as the schedule's pressure column gives them in US units: psi to a tenth
+    expect(notes[0]!.text).toContain('200.0 psi');
+    expect(notes[0]!.text).toContain('165.0 psi');
     for (const span of ['A1 to A2', 'A2 to A3', 'A3 to A4', 'A4 to A5']) expect(notes[0]!.text).toContain(span);
   });
 
