@@ -89,7 +89,7 @@ export function createActions(store: AppStore) {
   /**
    * An undoable edit: a new document from the old one. A change that would leave the document
    * invalid (two nodes on one point, an ID above the OD) is refused with a message, never stored.
-   * Only the parts the edit replaced are checked (`editProblems`); a whole document that was checked
+   * Only the parts the edit replaced are checked (`editProblemList`); a whole document that was checked
    * already (opened, restored) comes `checked` and is not checked again.
    */
   const edit = (change: (p: Project) => Project, typing?: string, checked = false): readonly string[] => {

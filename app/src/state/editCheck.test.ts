@@ -1,8 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import type { Project } from '@mainbrace/solver';
-import { editProblems } from './editCheck.js';
+import { problemText, type Project } from '@mainbrace/solver';
+import { editProblemList } from './editCheck.js';
 import { validated } from './checks.js';
 import { chain } from '../testFixtures.js';
+
+/** The problems of an edit, each as one line with its path in the file (as the whole-file check words them). */
+const editProblems = (before: Project, after: Project): string[] => editProblemList(before, after).map(problemText);
 
 /** An L-shaped main of three nodes (invented: Quillon Street). */
 const doc = (): Project => chain([0, 0], [30, 0], [30, 40]);

@@ -1,4 +1,4 @@
-import { problemText, type Problem, type Project } from '@mainbrace/solver';
+import type { Problem, Project } from '@mainbrace/solver';
 import { checks } from './checks.js';
 
 const LISTS = ['nodes', 'pipes', 'loadCases', 'soils'] as const;
@@ -56,7 +56,3 @@ export function editProblemList(before: Project, after: Project): Problem[] {
   if (cross && out.length === 0) out.push(...checks().crossProblems(after));
   return out;
 }
-
-/** As editProblemList, each problem as one line with its path in the file. */
-export const editProblems = (before: Project, after: Project): string[] =>
-  editProblemList(before, after).map(problemText);
