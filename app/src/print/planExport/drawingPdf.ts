@@ -7,8 +7,8 @@ const PT = 72 / 25.4;
 const f = (v: number) => (Math.round(v * 100) / 100).toString();
 const rgb = (hex: string) => [1, 3, 5].map((i) => f(parseInt(hex.slice(i, i + 2), 16) / 255)).join(' ');
 
-/** A PDF literal string's body: the text in WinAnsi bytes, its delimiters escaped (PDF 32000-1, 7.3.4.2). */
-const pdfText = (s: string): string => winAnsiBytes(s).replace(/[()\\]/g, (b) => `\\${b}`);
+/** A PDF literal string's body: WinAnsi bytes (`winAnsiBytes`), its delimiters escaped (PDF 32000-1, 7.3.4.2). */
+const pdfText = (bytes: string): string => bytes.replace(/[()\\]/g, (b) => `\\${b}`);
 
 /**
  * The drawing as a one-page vector PDF (PDF 1.4: Helvetica, uncompressed content) whose page is the
@@ -32,8 +32,9 @@ export function drawingPdf(d: Drawing): Uint8Array {
     } else {
       const size = m.size * PT;
       // Helvetica averages about half an em per character: enough to centre a short label.
-      const text = pdfText(m.text);
-      const shift = m.anchor === 'middle' ? (winAnsiBytes(m.text).length * size * 0.5) / 2 : 0;
+      const bytes = winAnsiBytes(m.text);
+      const text = pdfText(bytes);
+      const shift = m.anchor === 'middle' ? (bytes.length * size * 0.5) / 2 : 0;
       ops.push(
         `0 0 0 rg BT /${m.bold ? 'F2' : 'F1'} ${f(size)} Tf ${f(m.x * PT - shift)} ${Y(m.y)} Td (${text}) Tj ET`,
       );
