@@ -22,6 +22,7 @@ import { loadChecks, validated } from './state/checks.js';
 import { afterFirstDraw } from './chrome/warmUp.js';
 import type { Notice } from './state/store.js';
 import { warmParts } from './chrome/lazyPart.js';
+import { loadScheduleWords } from './state/scheduleViewOf.js';
 import './styles.css';
 
 const DEMO_URL = `${import.meta.env.BASE_URL}demo/larkspur-rise.json`;
@@ -55,6 +56,8 @@ function defaultPipe(project: Project): PipeSpec {
 async function start() {
   // Read-only hook for the browser tests, in the dev and test builds only, in a file of its own.
   const testHook = import.meta.env.DEV || import.meta.env.MODE === 'test' ? import('./testHook.js') : null;
+  // The findings' meanings load beside the kept project and the demo; the first render needs them.
+  const scheduleWords = loadScheduleWords();
   const kv = browserStore;
   const channel = openTabChannel();
   bindKeptCopies(kv, channel);
@@ -69,6 +72,7 @@ async function start() {
     : { kept: restored, adopted: null, notice: null };
   const kept = unsaved.kept;
   const project = await firstProject(kept, demo);
+  await scheduleWords;
   const store = createAppStore(project, defaultPipe(project));
   const actions = createActions(store);
   // The demo or a blank project is nobody's unsaved work: New replaces it without asking.

@@ -1,12 +1,13 @@
 import { describe, it, expect, vi, afterEach } from 'vitest';
 import { render, screen, cleanup, act } from '@testing-library/react';
-import { scheduleCsv, scheduleView, analyse } from '@mainbrace/solver';
+import { scheduleCsv, analyse } from '@mainbrace/solver';
 import { createAppStore } from '../state/store.js';
 import { createActions } from '../state/actions.js';
 import { StoreProvider } from '../state/StoreContext.js';
 import { DetailsPanel } from '../panels/DetailsPanel.js';
 import { MAX_FILE_BYTES, readProjectFile } from '../files/projectFile.js';
 import { DN300, project } from '../testFixtures.js';
+import { scheduleViewOf } from '../state/scheduleViewOf.js';
 
 afterEach(cleanup);
 
@@ -63,7 +64,7 @@ describe('robustness of the app at its edges', () => {
   it('keeps a label that a spreadsheet would run as a formula inert in the CSV export', () => {
     const p = route();
     const withFormula = { ...p, nodes: p.nodes.map((n) => (n.id === 'n2' ? { ...n, label: '=HYPERLINK("x")' } : n)) };
-    const csv = scheduleCsv(scheduleView(analyse(withFormula), 'si'));
+    const csv = scheduleCsv(scheduleViewOf(analyse(withFormula), 'si'));
     expect(csv).toContain(`"'=HYPERLINK(""x"")"`);
   });
 

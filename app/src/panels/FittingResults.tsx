@@ -13,7 +13,6 @@ import {
   quantityText,
   restrainedJointCount,
   REGISTER,
-  scheduleView,
   unverified,
   columnNumber,
   columnUnit,
@@ -27,6 +26,7 @@ import { useDiagnosticWords } from '../format/words.js';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
 import { CalcRecordView } from './CalcRecordView.js';
 import { RestraintSketch } from '../print/RestraintSketch.js';
+import { scheduleViewOf } from '../state/scheduleViewOf.js';
 
 /** The results of one fitting: thrust per case, the governing case, its restraint and warnings. */
 /** What set a block's face, in words. */
@@ -50,7 +50,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
   const forceUnit = columnUnit('force', u);
   // A part of the thrust is named only where it reads as more than nothing at the force column's precision.
   const horizontalShown = !readsZero(e.horizontal.force, 'force', u);
-  const row = scheduleView(analysis, u).rows[analysis.fittings.indexOf(f)];
+  const row = scheduleViewOf(analysis, u).rows[analysis.fittings.indexOf(f)];
   return (
     <section className="results" aria-label={`Results for ${f.mark}`} data-testid="fitting-results">
       <h3>

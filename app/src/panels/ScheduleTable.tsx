@@ -5,11 +5,11 @@ import {
   noteAfterHeading,
   pickColumns,
   positionColumns,
-  scheduleView,
   SHORT_CAUTION,
   type ViewRow,
 } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
+import { scheduleViewOf } from '../state/scheduleViewOf.js';
 
 /** A table longer than this renders only the rows in view (and a margin), with spacers for the rest. */
 const WINDOW_FROM = 300;
@@ -76,7 +76,7 @@ export function ScheduleTable() {
   const analysis = useAnalysis();
   const actions = useActions();
   const [sort, setSort] = useState<{ id: string; up: boolean } | null>(null);
-  const view = useMemo(() => scheduleView(analysis, units), [analysis, units]);
+  const view = useMemo(() => scheduleViewOf(analysis, units), [analysis, units]);
   // Chainage, stations or both, as the project's sheet setting says (the print and the CLI table do the same).
   const style = useApp((s) => s.project.sheet?.chainageStyle);
   const columns = pickColumns(

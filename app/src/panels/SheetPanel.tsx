@@ -2,7 +2,6 @@ import {
   LIMITS,
   REGISTER,
   notVerifiedText,
-  scheduleView,
   sheetOf,
   takeOff,
   takeOffRows,
@@ -12,6 +11,7 @@ import {
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
 import { NumberField } from './NumberField.js';
 import { TakeOffTable } from '../print/TakeOffTable.js';
+import { scheduleViewOf } from '../state/scheduleViewOf.js';
 
 const TITLE_FIELDS: { key: Exclude<keyof Sheet, 'chainageStyle'>; label: string; max: number }[] = [
   { key: 'drawingNumber', label: 'Drawing number', max: 40 },
@@ -33,7 +33,7 @@ export function SheetPanel() {
   const analysis = useAnalysis();
   const actions = useActions();
   const sheet = sheetOf(project.sheet);
-  const view = scheduleView(analysis, units);
+  const view = scheduleViewOf(analysis, units);
   const t = takeOff(
     view.rows.map((r) => r.fitting),
     project,

@@ -1,6 +1,6 @@
 import { describe, it, expect, afterEach } from 'vitest';
 import { render, cleanup } from '@testing-library/react';
-import { columnUnit, horizontalNorm, scheduleView, type UnitSystem } from '@mainbrace/solver';
+import { columnUnit, horizontalNorm, type UnitSystem } from '@mainbrace/solver';
 import { createAppStore } from '../state/store.js';
 import { createActions } from '../state/actions.js';
 import { StoreProvider } from '../state/StoreContext.js';
@@ -8,6 +8,7 @@ import { resultsOf } from '../state/results.js';
 import { FittingResults } from './FittingResults.js';
 import { thrustLabel } from '../plan/thrustLabel.js';
 import { demoProject, DN300 } from '../testFixtures.js';
+import { scheduleViewOf } from '../state/scheduleViewOf.js';
 
 afterEach(cleanup);
 
@@ -25,7 +26,7 @@ describe('the panel and the plan give a fitting’s figures as the schedule does
       const store = createAppStore(project, DN300);
       store.setState({ units });
       const analysis = resultsOf(store.getState().project);
-      const view = scheduleView(analysis, units);
+      const view = scheduleViewOf(analysis, units);
       const withUnit = (cell: string, kind: 'chainage' | 'pressure' | 'force') => `${cell} ${columnUnit(kind, units)}`;
       for (const [i, f] of analysis.fittings.entries()) {
         const cells = view.rows[i]!.cells;

@@ -5,7 +5,6 @@ import {
   pickColumns,
   scheduleCsv,
   scheduleTable,
-  scheduleView,
   TABLE_COLUMNS,
   type Project,
   type UnitSystem,
@@ -17,6 +16,7 @@ import { ScheduleTable } from './ScheduleTable.js';
 import { RouteSummary } from './RouteSummary.js';
 import { PrintSheet } from '../print/PrintSheet.js';
 import { csvRecords, demoProject, DN300 } from '../testFixtures.js';
+import { scheduleViewOf } from '../state/scheduleViewOf.js';
 
 afterEach(cleanup);
 
@@ -32,7 +32,7 @@ describe('the four schedule outputs agree cell for cell (app table, print, CLI t
       const project = { ...demo(), units };
       const store = createAppStore(project, DN300);
       const actions = createActions(store);
-      const view = scheduleView(analyse(project), units);
+      const view = scheduleViewOf(analyse(project), units);
       const { container } = render(
         <StoreProvider store={store} actions={actions}>
           <ScheduleTable />
@@ -119,7 +119,7 @@ describe('the CSV words its warnings in the display units, as the print words it
         <PrintSheet onClose={() => {}} />
       </StoreProvider>,
     );
-    const view = scheduleView(analyse(project), 'us');
+    const view = scheduleViewOf(analyse(project), 'us');
     const records = csvRecords(scheduleCsv(view));
     const warnings = records[0]!.indexOf('Warnings');
     const a10 = records.find((r) => r[0] === 'A10')![warnings]!.split(' | ');

@@ -6,7 +6,6 @@ import {
   noteAfterHeading,
   pickColumns,
   positionColumns,
-  scheduleView,
   takeOff,
   takeOffRows,
   type Analysis,
@@ -22,6 +21,7 @@ import { TakeOffDigest, TakeOffTable } from './TakeOffTable.js';
 import { TitleBlock } from './TitleBlock.js';
 import { Appendix } from './Appendix.js';
 import { PlanExportButtons } from './PlanExportButtons.js';
+import { scheduleViewOf } from '../state/scheduleViewOf.js';
 
 /** Fittings per crew page: six sketches a page is the budget (crew-sheet.md). */
 export const PER_PAGE = 6;
@@ -231,7 +231,7 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
   const units = useApp((s) => s.units);
   const [appendix, setAppendix] = useState(false);
   const [paper, setPaper] = useState<Paper>('a4');
-  const view = scheduleView(analysis, units);
+  const view = scheduleViewOf(analysis, units);
   const pages = useMemo(() => {
     const out: ViewRow[][] = [];
     for (let i = 0; i < view.rows.length; i += PER_PAGE) out.push(view.rows.slice(i, i + PER_PAGE));

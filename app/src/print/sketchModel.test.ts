@@ -1,15 +1,8 @@
 import { describe, it, expect } from 'vitest';
-import {
-  analyse,
-  formatDimension,
-  scheduleCsv,
-  scheduleOf,
-  scheduleView,
-  settingOut,
-  type UnitSystem,
-} from '@mainbrace/solver';
+import { analyse, formatDimension, scheduleCsv, scheduleOf, settingOut, type UnitSystem } from '@mainbrace/solver';
 import { sketchOf } from './sketchModel.js';
 import { csvRecords, demoProject } from '../testFixtures.js';
+import { scheduleViewOf } from '../state/scheduleViewOf.js';
 
 const parsed = { project: demoProject() };
 const analysis = analyse(parsed.project);
@@ -76,7 +69,7 @@ describe('restraint sketches are drawn from the schedule row', () => {
 describe('the crew sheet and the CSV give each depth below ground as the same text', () => {
   for (const units of ['si', 'us'] as UnitSystem[]) {
     it(`for every block and anchor of the demo in ${units.toUpperCase()}`, () => {
-      const [header, ...records] = csvRecords(scheduleCsv(scheduleView(analysis, units)));
+      const [header, ...records] = csvRecords(scheduleCsv(scheduleViewOf(analysis, units)));
       const at = (record: string[], start: string) => record[header!.findIndex((h) => h.startsWith(start))]!;
       // The CSV has the unit in its heading; the sheet writes it after the number in SI.
       const withUnit = (cell: string) => (units === 'si' ? `${cell} m` : cell);

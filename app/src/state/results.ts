@@ -1,5 +1,6 @@
 import { routeSummary } from './routeFigures.js';
-import { analyse, analyseInSteps, scheduleView, type Analysis, type Project, type UnitSystem } from '@mainbrace/solver';
+import { analyse, analyseInSteps, type Analysis, type Project, type UnitSystem } from '@mainbrace/solver';
+import { scheduleViewOf } from './scheduleViewOf.js';
 
 /**
  * Fields of the document no result depends on: the file's identity, the project's name, the display
@@ -62,7 +63,7 @@ export async function prepareResults(project: Project, units: UnitSystem): Promi
     last = step.value;
   }
   await nextTask();
-  scheduleView(last, units);
+  scheduleViewOf(last, units);
   await nextTask();
   routeSummary(last);
   await nextTask();

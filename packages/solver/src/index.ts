@@ -93,6 +93,7 @@ export {
 } from './schedule/columnUnits.js';
 export { KIND_NAME, bearingText, compassPoint, fittingTitle, angleText } from './schedule/fittingNames.js';
 export { DIAGNOSTIC_CODES, type CodeSpec } from './diagnostics/codes.js';
+export type { CodeMeaning, CodeMeanings } from './diagnostics/codeMeanings.js';
 export {
   diagnostic,
   bySeverity,

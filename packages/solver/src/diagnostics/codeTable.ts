@@ -1,4 +1,5 @@
-import { DIAGNOSTIC_CODES, type CodeSpec } from './codes.js';
+import { DIAGNOSTIC_CODES, type CodeSpec, type DiagnosticCode } from './codes.js';
+import { CODE_MEANINGS } from './codeMeanings.js';
 
 const SI_UNIT: Record<string, string> = {
   length: 'm',
@@ -23,11 +24,12 @@ const cell = (t: string) => t.replace(/\|/g, '\\|');
 
 /** docs/diagnostics.md: every code the solver can report, what it means and what to do. */
 export function diagnosticsMarkdown(): string {
-  const rows = (Object.entries(DIAGNOSTIC_CODES) as [string, CodeSpec][]).map(([code, s]) => {
+  const rows = (Object.entries(DIAGNOSTIC_CODES) as [DiagnosticCode, CodeSpec][]).map(([code, s]) => {
+    const { meaning, action } = CODE_MEANINGS[code];
     const values = Object.entries(s.values)
       .map(([name, kind]) => `${name} (${SI_UNIT[kind] ?? kind})`)
       .join(', ');
-    return `| \`${code}\` | ${s.severity} | ${cell(s.meaning)} | ${cell(s.action)} | ${values || '—'} |`;
+    return `| \`${code}\` | ${s.severity} | ${cell(meaning)} | ${cell(action)} | ${values || '—'} |`;
   });
   return [
     '# Diagnostics',
@@ -39,7 +41,7 @@ export function diagnosticsMarkdown(): string {
     'Severities: **info** a fact worth knowing; **warning** check before building; **error** the restraint is not',
     'adequate as it stands (the schedule says so and what to do).',
     '',
-    'This page is generated from `packages/solver/src/diagnostics/codes.ts`; a test keeps it current',
+    'This page is generated from `packages/solver/src/diagnostics/codes.ts` and `codeMeanings.ts`; a test keeps it current',
     '(`UPDATE_DOCS=1 corepack pnpm test` rewrites it).',
     '',
     '| code | severity | meaning | what to do | values (SI) |',

@@ -8,6 +8,7 @@ import { takeOffCsv } from './quantitiesText.js';
 import { anchorBox, padThickness } from './settingOut.js';
 import { ceilTo } from '../units/format.js';
 import { scheduleConcrete, scheduleView } from './scheduleView.js';
+import { CODE_MEANINGS } from '../diagnostics/codeMeanings.js';
 
 const demoText = readFileSync(new URL('../../../../public/demo/larkspur-rise.json', import.meta.url), 'utf8');
 const parsed = parseProjectText(demoText);
@@ -61,13 +62,13 @@ describe('quantities take-off', () => {
     const a = analyse(project);
     for (const units of ['si', 'us'] as const) {
       const t = takeOff(fittings, project, units);
-      expect(scheduleView(a, units).concrete).toBeCloseTo(t.concreteNet, 12);
-      expect(scheduleConcrete(a, units)).toBe(scheduleView(a, units).concrete);
+      expect(scheduleView(a, units, CODE_MEANINGS).concrete).toBeCloseTo(t.concreteNet, 12);
+      expect(scheduleConcrete(a, units)).toBe(scheduleView(a, units, CODE_MEANINGS).concrete);
     }
     // By hand from the take-off's lines (m³, each piece rounded up to 0.01): 3.04 + 0.57 + 3.69 + 0.18.
-    expect(scheduleView(a, 'si').concrete).toBeCloseTo(7.48, 12);
+    expect(scheduleView(a, 'si', CODE_MEANINGS).concrete).toBeCloseTo(7.48, 12);
     // Each row's concrete is its own pieces: the sag bends' rows carry block and pad.
-    const view = scheduleView(a, 'si');
+    const view = scheduleView(a, 'si', CODE_MEANINGS);
     const sags = view.rows.filter((r) => r.fitting.restraint.trenchBottom);
     expect(sags.length).toBeGreaterThan(0);
     for (const r of sags) {

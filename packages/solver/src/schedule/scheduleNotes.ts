@@ -1,4 +1,5 @@
-import { DIAGNOSTIC_CODES, type DiagnosticCode, type Severity } from '../diagnostics/codes.js';
+import type { DiagnosticCode, Severity } from '../diagnostics/codes.js';
+import type { CodeMeanings } from '../diagnostics/codeMeanings.js';
 import { bySeverity, type Diagnostic } from '../diagnostics/diagnostic.js';
 
 /** One numbered note of a schedule: a finding printed once, with the marks it applies to. */
@@ -25,6 +26,7 @@ export const noteAfterHeading = (n: Pick<ScheduleNote, 'severity' | 'text'>): st
 export function scheduleNotes(
   rows: readonly { mark: string; diagnostics: readonly Diagnostic[] }[],
   words: (d: Diagnostic) => string,
+  meanings: CodeMeanings,
   names?: { pipe: (id: string) => string; caseName: (id: string) => string },
 ): { notes: ScheduleNote[]; byMark: Map<string, number[]> } {
   // `seen` keeps the marks' membership test constant-time: a finding shared by 10,000 fittings made
@@ -67,7 +69,7 @@ export function scheduleNotes(
   }
   const ordered = [...groups.values()].sort((a, b) => bySeverity(a.first, b.first));
   const notes: ScheduleNote[] = ordered.map((g, i) => {
-    const spec = DIAGNOSTIC_CODES[g.first.code];
+    const spec = meanings[g.first.code];
     let text = g.texts.size === 1 ? [...g.texts][0]! : `${spec.meaning} ${spec.action}`;
     if (g.pipes && g.pipes.length > 1 && names) {
       const list = g.pipes.map((id) => names.pipe(id).replace(/^the pipe /, '')).join('; ');

@@ -1,5 +1,6 @@
 import type { Analysis } from '../analysis/analyse.js';
 import type { Diagnostic } from '../diagnostics/diagnostic.js';
+import type { CodeMeanings } from '../diagnostics/codeMeanings.js';
 import { diagnosticText } from '../diagnostics/wording.js';
 import { wordingContext } from '../diagnostics/context.js';
 import type { UnitSystem } from '../units/conversions.js';
@@ -41,9 +42,10 @@ const views = new WeakMap<Analysis, Partial<Record<UnitSystem, ScheduleView>>>()
 
 /**
  * The one view model of the schedule (CLI table, CSV, app table, print): the cell texts are made here
- * and only here, so every output shows the same value for the same cell. Memoised per analysis and units.
+ * and only here, so every output shows the same value for the same cell. Memoised per analysis and units:
+ * a program words its findings with one table of meanings (CODE_MEANINGS), whichever call passes it first.
  */
-export function scheduleView(a: Analysis, units: UnitSystem): ScheduleView {
+export function scheduleView(a: Analysis, units: UnitSystem, meanings: CodeMeanings): ScheduleView {
   const cached = views.get(a)?.[units];
   if (cached) return cached;
   const context = wordingContext(a, units);
@@ -53,7 +55,7 @@ export function scheduleView(a: Analysis, units: UnitSystem): ScheduleView {
     ...a.fittings,
   ];
   const words = (d: Diagnostic) => diagnosticText(d, context);
-  const { notes, byMark } = scheduleNotes(rowsForNotes, words, {
+  const { notes, byMark } = scheduleNotes(rowsForNotes, words, meanings, {
     pipe: context.pipeName,
     caseName: context.caseName,
   });
