@@ -1,10 +1,10 @@
 import { value, type CalcStep } from '../analysis/calcRecord.js';
-import { roundUpTo } from './rounding.js';
+import { roundDownTo, roundUpTo } from './rounding.js';
 
 export interface TrenchBottomBearing {
   /** m², required bearing area under the fitting SF·T_down/σ_v */
   bearingArea: number;
-  /** m, across the trench: the trench width rounded up to the step (a built dimension) */
+  /** m, across the trench: the trench width taken down to the step, so that the pad fits between its walls */
   width: number;
   /** m, along the pipe, rounded up to the step */
   length: number;
@@ -14,7 +14,8 @@ export interface TrenchBottomBearing {
  * Downward thrust at a sag bend bears on the trench bottom (the vector sum of the pressure forces
  * has a −z part): the
  * same bearing equation as a block, A = SF·T/σ_v, with the soil's vertical bearing value; the pad is
- * the trench's width and as long as the area needs (at least one OD).
+ * as wide as the trench allows in whole steps (a pad rounded up past the trench width cannot be cast in
+ * it) and as long as the area needs at that width (at least one OD).
  */
 export function sizeTrenchBottom(
   downward: number,
@@ -26,15 +27,17 @@ export function sizeTrenchBottom(
   record = false,
 ): { bearing: TrenchBottomBearing; steps: CalcStep[] } {
   const bearingArea = (safetyFactor * downward) / verticalBearing;
-  const length = Math.max(roundUpTo(bearingArea / trenchWidth, step), roundUpTo(outsideDiameter, step));
+  const stepped = roundDownTo(trenchWidth, step);
+  const width = stepped > 0 ? stepped : trenchWidth;
+  const length = Math.max(roundUpTo(bearingArea / width, step), roundUpTo(outsideDiameter, step));
   return {
-    bearing: { bearingArea, width: roundUpTo(trenchWidth, step), length },
+    bearing: { bearingArea, width, length },
     steps: !record
       ? []
       : [
           {
             title: 'Bearing on the trench bottom',
-            formula: 'A = SF · T_down / σ_v;  length = A / trench width',
+            formula: 'A = SF · T_down / σ_v;  width = trench width down to the step;  length = A / width',
             inputs: [
               value('T_down', 'largest downward thrust', downward, 'force', 'momentum balance'),
               value('SF', 'bearing safety factor', safetyFactor, 'ratio', 'project design'),
