@@ -1,7 +1,7 @@
 import { norm } from '../geometry/vector.js';
 import type { ProjectNode } from '../model/projectSchema.js';
 import type { Leg } from '../network/legs.js';
-import type { FittingGeometry } from '../network/fittingKind.js';
+import { RUN_TOLERANCE, runTurn, type FittingGeometry } from '../network/fittingKind.js';
 import type { CaseThrust, ThrustEnvelope } from '../thrust/fittingThrust.js';
 import type { Restraint } from '../restraint/sizeRestraint.js';
 import { VACUUM_GAUGE_PRESSURE } from '../pressure/nodePressure.js';
@@ -52,6 +52,8 @@ export function fittingDiagnostics(
   if (node.valve && geometry.kind === 'valve') found.push(diagnostic('valve.both-ways', { node: node.id }));
   else if (node.valve) found.push(diagnostic('valve.flag-ignored', { node: node.id }));
   if (legs.length > 4) found.push(diagnostic('fitting.many-pipes', { node: node.id }));
+  const turn = runTurn(legs, geometry);
+  if (turn !== null && turn > RUN_TOLERANCE) found.push(diagnostic('fitting.bent-run', { node: node.id }, { turn }));
   if (norm(envelope.governing.total) === 0) found.push(diagnostic('thrust.none', { node: node.id }));
   // No findings (most fittings): one shared empty list, not one kept per fitting.
   return found.length ? uniqueDiagnostics(found) : NO_FINDINGS;

@@ -46,6 +46,11 @@ export const CODE_MEANINGS: CodeMeanings = {
     meaning: 'More than four pipes meet at the node: no standard fitting joins them. It is sized as one junction.',
     action: 'Build it from standard fittings a short pipe apart, each drawn as its own node.',
   },
+  'fitting.bent-run': {
+    meaning:
+      'The run through a three-pipe junction turns from straight by more than a run may: no standard tee or wye has a bent run. It is sized as one junction.',
+    action: 'Build it as a tee or wye and a bend a short pipe apart, each drawn as its own node.',
+  },
   'thrust.none': {
     meaning: 'No thrust acts at the fitting in any case.',
     action: 'None.',

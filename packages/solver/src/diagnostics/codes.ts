@@ -43,6 +43,10 @@ export const DIAGNOSTIC_CODES = {
     severity: 'warning',
     values: {},
   },
+  'fitting.bent-run': {
+    severity: 'warning',
+    values: { turn: 'angle' },
+  },
   'thrust.none': {
     severity: 'info',
     values: {},

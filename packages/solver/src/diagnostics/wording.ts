@@ -55,6 +55,8 @@ const WORDS: Record<DiagnosticCode, Words> = {
     'The valve flag applies only where two pipes meet; this node was sized as its fitting without a closed valve.',
   'fitting.many-pipes': () =>
     'More than four pipes meet here: no standard fitting joins them (sized as one junction). Build it from standard fittings a short pipe apart, each drawn as its own node.',
+  'fitting.bent-run': (v) =>
+    `The run through this junction turns ${v.turn}: no standard tee or wye has a bent run (sized as one junction). Build it as a tee or wye and a bend a short pipe apart, each drawn as its own node.`,
   'thrust.none': () => 'No thrust at this fitting in any case.',
   'anchor.submerged': () =>
     'Gravity anchor below groundwater: sized with the submerged unit weight of concrete (γc − γw); design for the highest groundwater level.',

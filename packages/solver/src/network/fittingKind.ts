@@ -61,6 +61,16 @@ function twoPipeGeometry(node: ProjectNode, a: Leg, b: Leg): FittingGeometry {
   return { kind, deflection, horizontalDeflection, verticalDeflection, branchAngle: null, branchLeg: null };
 }
 
+/**
+ * Degrees the run through a three-pipe junction (the two legs other than the branch) turns from
+ * straight; null for any other fitting.
+ */
+export function runTurn(legs: readonly Leg[], g: FittingGeometry): number | null {
+  if (g.branchLeg === null || legs.length !== 3) return null;
+  const [a, b] = [0, 1, 2].filter((i) => i !== g.branchLeg) as [number, number];
+  return 180 - angleBetween(legs[a]!.direction, legs[b]!.direction);
+}
+
 function threePipeGeometry(legs: readonly Leg[]): FittingGeometry {
   // The run is the most nearly opposite pair; the third leg is the branch.
   let best = { i: 0, j: 1, angle: -1 };

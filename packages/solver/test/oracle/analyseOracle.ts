@@ -107,6 +107,21 @@ function analyseFitting(
   else if (node.valve) found.push(diagnostic('valve.flag-ignored', { node: node.id }));
   // the finding added after this oracle was written, so that it still answers for everything else
   if (legs.length > 4) found.push(diagnostic('fitting.many-pipes', { node: node.id }));
+  // a run through a three-pipe junction bent from straight: the largest angle between two of its legs
+  if (legs.length === 3) {
+    const pairs: [number, number][] = [
+      [0, 1],
+      [0, 2],
+      [1, 2],
+    ];
+    const angles = pairs.map(([i, j]) => {
+      const [p, q] = [legs[i]!.direction, legs[j]!.direction];
+      const cos = (p[0] * q[0] + p[1] * q[1] + p[2] * q[2]) / (Math.hypot(...p) * Math.hypot(...q));
+      return (Math.acos(Math.max(-1, Math.min(1, cos))) * 180) / Math.PI;
+    });
+    const turn = 180 - Math.max(...angles);
+    if (turn > 5) found.push(diagnostic('fitting.bent-run', { node: node.id }, { turn }));
+  }
   if (norm(envelope.governing.total) === 0) found.push(diagnostic('thrust.none', { node: node.id }));
   return {
     node,
