@@ -3,6 +3,7 @@ import {
   elementName,
   fittingProfile,
   formatDimension,
+  shownDimension,
   horizontalNorm,
   jointsText,
   layingLengthText,
@@ -156,10 +157,10 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
             </strong>
             , {formatDimension(r.block.depth, u)} from the fitting to the bearing face; bearing area{' '}
             {quantityText(r.block.bearingArea, 'area', u)} needed,{' '}
-            {quantityText(r.block.faceWidth * r.block.faceHeight, 'area', u)} given; concrete{' '}
-            {quantityText(r.block.concreteVolume, 'volume', u)}. Passive resistance {r.block.passiveRatio.toFixed(2)} ×
-            the thrust (3-D factor {r.block.shapeFactor.toFixed(2)}); the face is set by{' '}
-            {BLOCK_GOVERNS[r.block.governs]}.
+            {quantityText(shownDimension(r.block.faceWidth, u) * shownDimension(r.block.faceHeight, u), 'area', u)}{' '}
+            given; concrete {quantityText(r.block.concreteVolume, 'volume', u)}. Passive resistance{' '}
+            {r.block.passiveRatio.toFixed(2)} × the thrust (3-D factor {r.block.shapeFactor.toFixed(2)}); the face is
+            set by {BLOCK_GOVERNS[r.block.governs]}.
           </li>
         )}
         {r.reverseBlock && (

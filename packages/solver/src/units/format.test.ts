@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { formatDimension, formatNumber, formatQuantity } from './format.js';
+import { formatDimension, shownDimension, formatNumber, formatQuantity } from './format.js';
 import { LBF } from '../../test/projectBuilder.js';
 
 describe('numbers as an engineer writes them', () => {
@@ -36,5 +36,15 @@ describe('numbers as an engineer writes them', () => {
     expect(formatDimension(26 * 0.0254, 'us')).toBe('2 ft 2 in');
     expect(formatDimension(48 * 0.0254, 'us')).toBe('4 ft');
     expect(formatDimension(10 * 0.0254, 'us')).toBe('10 in');
+  });
+
+  it('gives the built dimension as shown, so that an area worked from it is the face a crew builds', () => {
+    // 0.35 m = 13.78 in, shown 1 ft 2 in = 14 in = 0.3556 m (1 in = 0.0254 m exactly, NIST SP 811)
+    expect(formatDimension(0.35, 'us')).toBe('1 ft 2 in');
+    expect(shownDimension(0.35, 'us')).toBeCloseTo(14 * 0.0254, 12);
+    // 0.3501 m: the centimetre (0.36) would add 9 mm, so the millimetre (0.351 m) is shown
+    expect(formatDimension(0.3501, 'si')).toBe('0.351 m');
+    expect(shownDimension(0.3501, 'si')).toBeCloseTo(0.351, 12);
+    expect(shownDimension(0.75, 'si')).toBe(0.75);
   });
 });

@@ -91,6 +91,13 @@ export const roundTo = (value: number, decimals: number): number => {
 /** Whole inches of a built length, rounded up. */
 export const builtInches = (meters: number): number => ceilTo(meters / 0.0254, 0);
 
+/** The SI built dimension as shown: to the centimetre, or the millimetre where the centimetre adds more. */
+function builtMetres(meters: number): { value: number; decimals: 2 | 3 } {
+  const mm = ceilTo(meters, 3);
+  const cm = ceilTo(meters, 2);
+  return cm - mm < 1e-9 ? { value: cm, decimals: 2 } : { value: mm, decimals: 3 };
+}
+
 /**
  * A built dimension as a crew reads it, rounded up so that it is never less than computed: metres to
  * the centimetre (to the millimetre where the centimetre would add more than a millimetre's worth) in
@@ -99,12 +106,15 @@ export const builtInches = (meters: number): number => ceilTo(meters / 0.0254, 0
 export function formatDimension(meters: number, system: UnitSystem): string {
   if (!Number.isFinite(meters)) return '—';
   if (system === 'si') {
-    const mm = ceilTo(meters, 3);
-    const cm = ceilTo(meters, 2);
-    return cm - mm < 1e-9 ? `${cm.toFixed(2)} m` : `${mm.toFixed(3)} m`;
+    const { value, decimals } = builtMetres(meters);
+    return `${value.toFixed(decimals)} m`;
   }
   return feetAndInches(builtInches(meters));
 }
+
+/** m, the built dimension as formatDimension shows it (so that an area worked from it is the one built). */
+export const shownDimension = (meters: number, system: UnitSystem): number =>
+  system === 'si' ? builtMetres(meters).value : builtInches(meters) * 0.0254;
 
 /** Whole inches as a crew reads them: "7 in", "2 ft", "4 ft 7 in". */
 export function feetAndInches(inches: number): string {
