@@ -1,5 +1,7 @@
 import {
   caseLabel,
+  anchorConcrete,
+  blockConcrete,
   elementName,
   fittingProfile,
   formatDimension,
@@ -158,7 +160,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
             , {formatDimension(r.block.depth, u)} from the fitting to the bearing face; bearing area{' '}
             {quantityText(r.block.bearingArea, 'area', u)} needed,{' '}
             {quantityText(shownDimension(r.block.faceWidth, u) * shownDimension(r.block.faceHeight, u), 'area', u)}{' '}
-            given; concrete {quantityText(r.block.concreteVolume, 'volume', u)}. Passive resistance{' '}
+            given; concrete {quantityText(blockConcrete(r.block, u), 'volume', u)}. Passive resistance{' '}
             {r.block.passiveRatio.toFixed(2)} × the thrust (3-D factor {r.block.shapeFactor.toFixed(2)}); the face is
             set by {BLOCK_GOVERNS[r.block.governs]}.
           </li>
@@ -170,7 +172,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
             <strong>
               {formatDimension(r.reverseBlock.faceWidth, u)} wide × {formatDimension(r.reverseBlock.faceHeight, u)} high
             </strong>
-            ; concrete {quantityText(r.reverseBlock.concreteVolume, 'volume', u)}.
+            ; concrete {quantityText(blockConcrete(r.reverseBlock, u), 'volume', u)}.
           </li>
         )}
         {r.anchor && (
@@ -181,7 +183,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
               {formatDimension(r.anchor.length, u)} long × {formatDimension(r.anchor.width, u)} wide ×{' '}
               {formatDimension(r.anchor.height, u)} high
             </strong>
-            , {quantityText(r.anchor.concreteVolume, 'volume', u)} of concrete
+            , {quantityText(anchorConcrete(r.anchor, u), 'volume', u)} of concrete
             {r.anchor.submerged ? ', submerged weight' : ''}
             {r.anchor.horizontalThrust > 0 ? '; its base friction also holds the horizontal thrust' : ''}.
           </li>

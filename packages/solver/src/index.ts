@@ -110,7 +110,7 @@ export { REGISTER, provenance, type ProvenanceId } from './provenance/register.j
 export { unverified } from './provenance/unverified.js';
 export { notVerifiedText, type ProvenanceEntry, type SourceKind } from './provenance/entry.js';
 export { CAUTIONS, PAGE_CAUTIONS, SHORT_CAUTION } from './schedule/cautions.js';
-export { restraintConcrete } from './schedule/concrete.js';
+export { anchorConcrete, blockConcrete, restraintConcrete } from './schedule/concrete.js';
 export * from './schedule/quantities.js';
 export { takeOffCsv, takeOffTable } from './schedule/quantitiesText.js';
 export * from './schedule/settingOut.js';

@@ -71,7 +71,7 @@ const concreteAt = (s: Shape, pressure: number): number | null => {
   const f = a.byNode.get('c');
   if (!f) return 0;
   if (f.diagnostics.some((d) => d.severity === 'error')) return null;
-  return concretePieces(f.restraint, a.project.design.dimensionStep)
+  return concretePieces(f.restraint, a.project.design.dimensionStep, 'si')
     .filter((p) => p.element !== 'pad')
     .reduce((v, p) => v + p.volume, 0);
 };

@@ -5,7 +5,7 @@ import { columnNumber, columnUnit, shownValue } from './columnUnits.js';
 import { fittingTitle } from './fittingNames.js';
 import { anchorBox } from './settingOut.js';
 import type { ScheduleFitting } from './scheduleRows.js';
-import { concretePieces, type ConcreteElement } from './concrete.js';
+import { anchorConcrete, concretePieces, type ConcreteElement } from './concrete.js';
 import { restrainedStretches, stretchJoints } from './restrainedStretches.js';
 
 export type { ConcreteElement } from './concrete.js';
@@ -100,11 +100,11 @@ export function takeOff(fittings: readonly ScheduleFitting[], project: Project, 
   const anchors = new Map<string, AnchorLine>();
   for (const f of fittings) {
     const r = f.restraint;
-    for (const p of concretePieces(r, project.design.dimensionStep)) addConcrete(p.element, p.volume, f.mark);
+    for (const p of concretePieces(r, project.design.dimensionStep, units)) addConcrete(p.element, p.volume, f.mark);
     if (r.anchor) {
       const box = anchorBox(r.anchor);
       const key = `${box.length}|${box.width}|${box.height}`;
-      const built = box.length * box.width * box.height;
+      const built = anchorConcrete(r.anchor, units);
       const line = anchors.get(key) ?? { ...box, count: 0, volume: shownValue(built, 'volume', units), marks: [] };
       line.count++;
       line.marks.push(f.mark);

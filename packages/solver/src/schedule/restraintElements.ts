@@ -11,6 +11,7 @@ import {
   restrainedLegText,
 } from './restraintText.js';
 import type { ScheduleFitting } from './scheduleRows.js';
+import { anchorConcrete, blockConcrete } from './concrete.js';
 
 /** What a fitting is held by, one element each; a fitting may need several. */
 export type RestraintElementKind = 'block' | 'reverseBlock' | 'anchor' | 'trenchBottom' | 'joints';
@@ -60,7 +61,7 @@ export function restraintElements(f: ScheduleFitting, units: UnitSystem, step: n
   if (r.block)
     add(
       'block',
-      `${blockText(r.block, units)}, ${vol(r.block.concreteVolume)}`,
+      `${blockText(r.block, units)}, ${vol(blockConcrete(r.block, units))}`,
       r.block.thrust,
       planBearing(r.block.direction),
       blockForceText(r.block, units),
@@ -68,7 +69,7 @@ export function restraintElements(f: ScheduleFitting, units: UnitSystem, step: n
   if (r.reverseBlock)
     add(
       'reverseBlock',
-      `${blockText(r.reverseBlock, units)}, ${vol(r.reverseBlock.concreteVolume)}`,
+      `${blockText(r.reverseBlock, units)}, ${vol(blockConcrete(r.reverseBlock, units))}`,
       r.reverseBlock.thrust,
       planBearing(r.reverseBlock.direction),
       blockForceText(r.reverseBlock, units),
@@ -76,7 +77,7 @@ export function restraintElements(f: ScheduleFitting, units: UnitSystem, step: n
   if (r.anchor)
     add(
       'anchor',
-      `${anchorText(r.anchor, units)}, ${vol(r.anchor.concreteVolume)}`,
+      `${anchorText(r.anchor, units)}, ${vol(anchorConcrete(r.anchor, units))}`,
       r.anchor.upwardThrust,
       'up',
       anchorForceText(r.anchor, units),

@@ -5,6 +5,7 @@ import type { ScheduleFitting } from './scheduleRows.js';
 import { planBearing } from '../geometry/vector.js';
 import { bearingText } from './fittingNames.js';
 import { padThickness } from './settingOut.js';
+import { anchorConcrete } from './concrete.js';
 
 type Block = NonNullable<ScheduleFitting['restraint']['block']>;
 
@@ -68,7 +69,7 @@ export function restraintSummary(f: ScheduleFitting, units: UnitSystem, step: nu
     parts.push(`opposite block ${blockText(r.reverseBlock, units)} ${blockForceText(r.reverseBlock, units)}`);
   if (r.anchor)
     parts.push(
-      `anchor ${anchorText(r.anchor, units)}, ${quantityText(r.anchor.concreteVolume, 'volume', units)}, ${anchorForceText(r.anchor, units)}`,
+      `anchor ${anchorText(r.anchor, units)}, ${quantityText(anchorConcrete(r.anchor, units), 'volume', units)}, ${anchorForceText(r.anchor, units)}`,
     );
   if (r.trenchBottom)
     parts.push(`bottom pad ${padText(r.trenchBottom, step, units)} ${padForceText(f.downwardThrust, units)}`);

@@ -1,7 +1,7 @@
 import { norm } from '../geometry/vector.js';
 import type { Diagnostic } from '../diagnostics/diagnostic.js';
 import type { Project } from '../model/projectSchema.js';
-import { shownConcrete } from './concrete.js';
+import { anchorConcrete, blockConcrete, shownConcrete } from './concrete.js';
 import { readsZero, type ColumnKind } from './columnUnits.js';
 import { bearingText, fittingTitle } from './fittingNames.js';
 import { restrainedText, restraintSummary } from './restraintText.js';
@@ -84,16 +84,22 @@ export const SCHEDULE_COLUMNS: readonly ScheduleColumn[] = [
     f.restraint.block ? BLOCK_GOVERNS[f.restraint.block.governs] : null,
   ),
   col('thickness', 'Block thickness', 'built', (f) => f.restraint.block?.depth ?? null),
-  col('blockConcrete', 'Block concrete', 'volume', (f) => f.restraint.block?.concreteVolume ?? null),
+  col('blockConcrete', 'Block concrete', 'volume', (f, c) =>
+    f.restraint.block ? blockConcrete(f.restraint.block, c.units) : null,
+  ),
   col('oppositeWidth', 'Opposite face width', 'built', (f) => f.restraint.reverseBlock?.faceWidth ?? null),
   col('oppositeHeight', 'Opposite face height', 'built', (f) => f.restraint.reverseBlock?.faceHeight ?? null),
-  col('oppositeConcrete', 'Opposite block concrete', 'volume', (f) => f.restraint.reverseBlock?.concreteVolume ?? null),
+  col('oppositeConcrete', 'Opposite block concrete', 'volume', (f, c) =>
+    f.restraint.reverseBlock ? blockConcrete(f.restraint.reverseBlock, c.units) : null,
+  ),
   col('anchorSide', 'Anchor side', 'built', (f) => f.restraint.anchor?.side ?? null),
   col('anchorLength', 'Anchor length', 'built', (f, c) => setOut(f, c).anchor?.length ?? null),
   col('anchorWidth', 'Anchor width', 'built', (f, c) => setOut(f, c).anchor?.width ?? null),
   col('anchorHeight', 'Anchor height', 'built', (f, c) => setOut(f, c).anchor?.height ?? null),
   col('anchorBase', 'Depth to anchor base', 'baseDepth', (f, c) => setOut(f, c).anchor?.baseDepth ?? null),
-  col('anchorConcrete', 'Anchor concrete', 'volume', (f) => f.restraint.anchor?.concreteVolume ?? null),
+  col('anchorConcrete', 'Anchor concrete', 'volume', (f, c) =>
+    f.restraint.anchor ? anchorConcrete(f.restraint.anchor, c.units) : null,
+  ),
   col('padArea', 'Trench-bottom area', 'area', (f) => f.restraint.trenchBottom?.bearingArea ?? null),
   col('padLength', 'Trench-bottom pad length', 'built', (f) => f.restraint.trenchBottom?.length ?? null),
   col('padWidth', 'Trench-bottom pad width', 'built', (f) => f.restraint.trenchBottom?.width ?? null),
