@@ -9,6 +9,7 @@ import {
 } from '@mainbrace/solver';
 import { useActions, useApp } from '../state/StoreContext.js';
 import { NumberField } from './NumberField.js';
+import { DESIGN_FIELDS } from '../format/fieldLabels.js';
 
 const MIXED = 'mixed';
 
@@ -88,7 +89,7 @@ export function BeddingAndWrap() {
       </div>
       <div className="field-row">
         <NumberField
-          label="Pipe laying length"
+          label={DESIGN_FIELDS.layingLength}
           value={project.design.layingLength}
           dimension="length"
           units={u}
@@ -98,7 +99,7 @@ export function BeddingAndWrap() {
           hint="Joint to joint: restrained joints are counted and drawn from it."
         />
         <NumberField
-          label="Safety factor on restrained length"
+          label={DESIGN_FIELDS.restraintSafetyFactor}
           value={project.design.restraintSafetyFactor}
           dimension="ratio"
           units={u}

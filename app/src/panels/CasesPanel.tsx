@@ -6,6 +6,7 @@ import { NumberField } from './NumberField.js';
 import { TestPressureControl } from './TestPressureControl.js';
 import { GoverningList } from './GoverningList.js';
 import { SurgeSuggestion } from './SurgeSuggestion.js';
+import { CASE_FIELDS } from '../format/fieldLabels.js';
 
 const KIND_LABEL: Record<(typeof CASE_KINDS)[number], string> = {
   working: 'Working',
@@ -35,7 +36,7 @@ const CaseRow = memo(function CaseRow({
     <tr>
       <td>
         <input
-          aria-label={`Name of case ${c.id}`}
+          aria-label={`${CASE_FIELDS.label} of case ${c.id}`}
           value={c.label ?? ''}
           placeholder={c.id}
           maxLength={80}
@@ -57,7 +58,7 @@ const CaseRow = memo(function CaseRow({
       </td>
       <td>
         <NumberField
-          label={`Pressure of ${c.label ?? c.id}`}
+          label={`${CASE_FIELDS.pressure} of ${c.label ?? c.id}`}
           value={c.pressure}
           dimension="pressure"
           units={u}
@@ -74,7 +75,7 @@ const CaseRow = memo(function CaseRow({
           </button>
         ) : (
           <NumberField
-            label={`Datum of ${c.label ?? c.id}`}
+            label={`${CASE_FIELDS.datumElevation} of ${c.label ?? c.id}`}
             value={c.datumElevation}
             dimension="elevation"
             units={u}
@@ -87,7 +88,7 @@ const CaseRow = memo(function CaseRow({
       </td>
       <td>
         <NumberField
-          label={`Flow factor of ${c.label ?? c.id}`}
+          label={`${CASE_FIELDS.flowFactor} of ${c.label ?? c.id}`}
           value={c.flowFactor}
           dimension="ratio"
           units={u}

@@ -1,6 +1,7 @@
 import { LIMITS } from '@mainbrace/solver';
 import { useActions, useApp } from '../state/StoreContext.js';
 import { NumberField } from './NumberField.js';
+import { DESIGN_FIELDS } from '../format/fieldLabels.js';
 
 /** Blocks and anchors (their safety factors and concrete), then the water and the ground around the main. */
 export function DesignSettings() {
@@ -14,7 +15,7 @@ export function DesignSettings() {
         <h4 id="blocks-title">Blocks and anchors</h4>
         <div className="field-row">
           <NumberField
-            label="Safety factor on bearing"
+            label={DESIGN_FIELDS.bearingSafetyFactor}
             value={d.bearingSafetyFactor}
             dimension="ratio"
             units={u}
@@ -23,7 +24,7 @@ export function DesignSettings() {
             onCommit={(v) => actions.updateDesign({ bearingSafetyFactor: v })}
           />
           <NumberField
-            label="Safety factor on uplift"
+            label={DESIGN_FIELDS.upliftSafetyFactor}
             value={d.upliftSafetyFactor}
             dimension="ratio"
             units={u}
@@ -34,7 +35,7 @@ export function DesignSettings() {
         </div>
         <div className="field-row">
           <NumberField
-            label="Concrete unit weight"
+            label={DESIGN_FIELDS.concreteUnitWeight}
             value={d.concreteUnitWeight}
             dimension="unitWeight"
             units={u}
@@ -43,7 +44,7 @@ export function DesignSettings() {
             onCommit={(v) => actions.updateDesign({ concreteUnitWeight: v })}
           />
           <NumberField
-            label="Block depth to bearing face"
+            label={DESIGN_FIELDS.blockDepth}
             value={d.blockDepth}
             dimension="length"
             units={u}
@@ -93,7 +94,7 @@ export function DesignSettings() {
         ) : (
           <div className="field">
             <NumberField
-              label="Highest groundwater elevation"
+              label={DESIGN_FIELDS.groundwaterElevation}
               value={d.groundwaterElevation}
               dimension="elevation"
               units={u}

@@ -2,6 +2,7 @@ import { LIMITS, nodeCover, type Project, type ProjectNode } from '@mainbrace/so
 import { useActions, useApp } from '../state/StoreContext.js';
 import { NumberField } from './NumberField.js';
 import { levelPatch, type LevelEdit } from './nodeLevels.js';
+import { NODE_FIELDS } from '../format/fieldLabels.js';
 
 /** The inputs of a node: label, position, elevation, cover, soil, end condition, valve, restraint method. */
 export function NodeDetails({ node, project, pipeCount }: { node: ProjectNode; project: Project; pipeCount: number }) {
@@ -21,7 +22,7 @@ export function NodeDetails({ node, project, pipeCount }: { node: ProjectNode; p
         Node <span className="node-id">{node.id}</span>
       </h3>
       <div className="field">
-        <label htmlFor="node-label">Label</label>
+        <label htmlFor="node-label">{NODE_FIELDS.label}</label>
         <input
           id="node-label"
           value={node.label ?? ''}
@@ -31,7 +32,7 @@ export function NodeDetails({ node, project, pipeCount }: { node: ProjectNode; p
       </div>
       <div className="field-row">
         <NumberField
-          label="East"
+          label={NODE_FIELDS.x}
           value={node.x}
           dimension="length"
           units={u}
@@ -41,7 +42,7 @@ export function NodeDetails({ node, project, pipeCount }: { node: ProjectNode; p
           testId="node-east"
         />
         <NumberField
-          label="North"
+          label={NODE_FIELDS.y}
           value={node.y}
           dimension="length"
           units={u}
@@ -54,7 +55,7 @@ export function NodeDetails({ node, project, pipeCount }: { node: ProjectNode; p
       {grounded && (
         <div className="field-row">
           <NumberField
-            label="Ground level"
+            label={NODE_FIELDS.groundLevel}
             value={node.groundLevel!}
             dimension="elevation"
             units={u}
@@ -71,7 +72,7 @@ export function NodeDetails({ node, project, pipeCount }: { node: ProjectNode; p
       )}
       <div className="field-row">
         <NumberField
-          label="Pipe centreline elevation"
+          label={NODE_FIELDS.elevation}
           value={node.elevation}
           dimension="elevation"
           units={u}
@@ -82,7 +83,7 @@ export function NodeDetails({ node, project, pipeCount }: { node: ProjectNode; p
           testId="node-elevation"
         />
         <NumberField
-          label="Cover to top of pipe"
+          label={NODE_FIELDS.cover}
           value={nodeCover(node, od)}
           dimension="length"
           units={u}
@@ -104,7 +105,7 @@ export function NodeDetails({ node, project, pipeCount }: { node: ProjectNode; p
         </button>
       )}
       <div className="field">
-        <label htmlFor="node-soil">Soil</label>
+        <label htmlFor="node-soil">{NODE_FIELDS.soil}</label>
         <select id="node-soil" value={node.soil ?? ''} onChange={(e) => set({ soil: e.target.value || undefined })}>
           <option value="">
             Project default (

@@ -22,6 +22,7 @@ import { pipeLength } from '../state/routeFigures.js';
 import { MATERIAL_NAME } from '../plan/palette.js';
 import { show } from '../format/quantity.js';
 import { NumberField } from './NumberField.js';
+import { PIPE_FIELDS } from '../format/fieldLabels.js';
 
 const CUSTOM = '__custom';
 
@@ -76,7 +77,7 @@ export function PipeDetails({ pipe, project }: { pipe: Pipe; project: Project })
         </span>
       </h3>
       <div className="field">
-        <label htmlFor="pipe-label">Label</label>
+        <label htmlFor="pipe-label">{PIPE_FIELDS.label}</label>
         <input
           id="pipe-label"
           value={pipe.label ?? ''}
@@ -165,7 +166,7 @@ export function PipeDetails({ pipe, project }: { pipe: Pipe; project: Project })
       ) : (
         <div className="field-row">
           <NumberField
-            label="Outside diameter"
+            label={PIPE_FIELDS.outsideDiameter}
             value={pipe.outsideDiameter}
             dimension="diameter"
             units={u}
@@ -175,7 +176,7 @@ export function PipeDetails({ pipe, project }: { pipe: Pipe; project: Project })
             onCommit={(outsideDiameter) => set({ outsideDiameter })}
           />
           <NumberField
-            label="Inside diameter"
+            label={PIPE_FIELDS.insideDiameter}
             value={pipe.insideDiameter}
             dimension="diameter"
             units={u}
@@ -187,7 +188,7 @@ export function PipeDetails({ pipe, project }: { pipe: Pipe; project: Project })
         </div>
       )}
       <NumberField
-        label={`Flow, ${pipe.from} → ${pipe.to}`}
+        label={`${PIPE_FIELDS.flow}, ${pipe.from} → ${pipe.to}`}
         value={pipe.flow}
         dimension="flow"
         units={u}

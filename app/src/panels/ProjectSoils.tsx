@@ -2,6 +2,7 @@ import { LIMITS, type Soil } from '@mainbrace/solver';
 import { useActions, useApp } from '../state/StoreContext.js';
 import { NumberField } from './NumberField.js';
 import { show } from '../format/quantity.js';
+import { SOIL_FIELDS } from '../format/fieldLabels.js';
 
 /** The project's own soils: values the user may change, each with its source beside it. */
 export function ProjectSoils() {
@@ -28,7 +29,7 @@ export function ProjectSoils() {
           <tr key={s.id}>
             <td>
               <input
-                aria-label={`Name of soil ${s.id}`}
+                aria-label={`${SOIL_FIELDS.label} of soil ${s.id}`}
                 value={s.label ?? ''}
                 placeholder={s.id}
                 maxLength={80}
@@ -37,7 +38,7 @@ export function ProjectSoils() {
             </td>
             <td>
               <NumberField
-                label={`Bearing of ${s.label ?? s.id}`}
+                label={`${SOIL_FIELDS.bearing} of ${s.label ?? s.id}`}
                 value={s.bearing}
                 dimension="stress"
                 units={u}
@@ -49,7 +50,7 @@ export function ProjectSoils() {
             </td>
             <td>
               <NumberField
-                label={`Unit weight of ${s.label ?? s.id}`}
+                label={`${SOIL_FIELDS.unitWeight} of ${s.label ?? s.id}`}
                 value={s.unitWeight}
                 dimension="unitWeight"
                 units={u}
@@ -60,7 +61,7 @@ export function ProjectSoils() {
             </td>
             <td>
               <NumberField
-                label={`Friction angle of ${s.label ?? s.id}`}
+                label={`${SOIL_FIELDS.frictionAngle} of ${s.label ?? s.id}`}
                 value={s.frictionAngle}
                 dimension="angle"
                 units={u}
@@ -71,7 +72,7 @@ export function ProjectSoils() {
             </td>
             <td>
               <NumberField
-                label={`Cohesion of ${s.label ?? s.id}`}
+                label={`${SOIL_FIELDS.cohesion} of ${s.label ?? s.id}`}
                 value={s.cohesion}
                 dimension="stress"
                 units={u}

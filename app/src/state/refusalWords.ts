@@ -1,45 +1,6 @@
 import { LIMITS, type LimitId, type Problem, type Project, type UnitSystem } from '@mainbrace/solver';
 import { show } from '../format/quantity.js';
-
-/** Field labels as the panels show them (CasesPanel, NodeDetails, PipeDetails, ProjectSoils, DesignSettings). */
-const CASE_FIELDS: Record<string, string> = {
-  pressure: 'Pressure',
-  datumElevation: 'Datum',
-  flowFactor: 'Flow factor',
-  label: 'Name',
-  kind: 'Kind',
-};
-const NODE_FIELDS: Record<string, string> = {
-  x: 'East',
-  y: 'North',
-  elevation: 'Pipe centreline elevation',
-  groundLevel: 'Ground level',
-  cover: 'Cover to top of pipe',
-  soil: 'Soil',
-  label: 'Label',
-};
-const PIPE_FIELDS: Record<string, string> = {
-  outsideDiameter: 'Outside diameter',
-  insideDiameter: 'Inside diameter',
-  flow: 'Flow',
-  label: 'Label',
-};
-const SOIL_FIELDS: Record<string, string> = {
-  bearing: 'Bearing',
-  unitWeight: 'Unit weight',
-  frictionAngle: 'Friction angle',
-  cohesion: 'Cohesion',
-  label: 'Name',
-};
-const DESIGN_FIELDS: Record<string, string> = {
-  bearingSafetyFactor: 'Safety factor on bearing',
-  upliftSafetyFactor: 'Safety factor on uplift',
-  restraintSafetyFactor: 'Safety factor on restrained length',
-  concreteUnitWeight: 'Concrete unit weight',
-  blockDepth: 'Block depth to bearing face',
-  groundwaterElevation: 'Highest groundwater elevation',
-  layingLength: 'Pipe laying length',
-};
+import { CASE_FIELDS, DESIGN_FIELDS, NODE_FIELDS, PIPE_FIELDS, SOIL_FIELDS } from '../format/fieldLabels.js';
 
 /** The plausibility range each field is held to (projectSchema.ts), for a bound worded in display units. */
 const FIELD_LIMIT: Record<string, LimitId> = {
@@ -120,7 +81,7 @@ export function refusalLine(p: Problem, w: Wording): string {
   if (!m) return p.path ? `${p.path}: ${message}` : message;
   const [, list, index, field, designField] = m;
   if (designField !== undefined) {
-    const label = DESIGN_FIELDS[designField];
+    const label = (DESIGN_FIELDS as Readonly<Record<string, string>>)[designField];
     if (!label) return `${p.path}: ${message}`;
     const value = (w.project.design as unknown as Record<string, unknown>)[designField];
     return `${label}: ${boundText(designField, value, w) ?? message}`;
@@ -128,9 +89,12 @@ export function refusalLine(p: Problem, w: Wording): string {
   const items = (w.project as unknown as Record<string, Named[]>)[list!] ?? [];
   const item = items[Number(index)];
   if (!item) return `${p.path}: ${message}`;
-  const labels = { loadCases: CASE_FIELDS, nodes: NODE_FIELDS, pipes: PIPE_FIELDS, soils: SOIL_FIELDS }[
-    list as 'loadCases'
-  ];
+  const labels: Readonly<Record<string, string>> = {
+    loadCases: CASE_FIELDS,
+    nodes: NODE_FIELDS,
+    pipes: PIPE_FIELDS,
+    soils: SOIL_FIELDS,
+  }[list as 'loadCases'];
   const owner =
     list === 'nodes' ? nodeName(item, w) : list === 'pipes' ? `pipe ${item.label ?? item.id}` : (item.label ?? item.id);
   if (field === undefined) return `${owner[0]!.toUpperCase()}${owner.slice(1)}: ${message}`;
