@@ -4,7 +4,7 @@
  * every result screen and printed schedule.
  */
 export const SHORT_CAUTION =
-  'Design aid only — every result must be checked by a licensed engineer; local codes and the utility’s standards govern.';
+  'Design aid only — every result must be checked by a licensed engineer; local codes and the utility’s standards govern. Blocks bear on undisturbed soil; let the concrete cure before the pressure test.';
 
 export const CAUTIONS: readonly string[] = [
   'Mainbrace is a design aid. Thrust restraint must be designed, checked and sealed by a licensed professional engineer and approved by the water utility or authority having jurisdiction.',
