@@ -47,6 +47,42 @@ describe('profileData path', () => {
   });
 });
 
+describe('profileData main line beside a branch as long as the main before its tee', () => {
+  // Main m1 → m2 (tee) → m3, 60 m each way along x; a 30 m branch from the tee: the branch node's own
+  // chainage (30 m along run B) plus its pipe (30 m) equals the tee's chainage on the main (60 m).
+  const doc = () =>
+    project(
+      [
+        { id: 'm1', x: 0, y: 0, z: 100, cover: 1.2, end: 'tie-in' },
+        { id: 'm2', x: 60, y: 0, z: 100, cover: 1.2 },
+        { id: 'm3', x: 120, y: 0, z: 100, cover: 1.2 },
+        { id: 'b1', x: 60, y: -30, z: 100, cover: 1.2 },
+        { id: 'b2', x: 60, y: -60, z: 100, cover: 1.2 },
+      ],
+      [
+        { from: 'm1', to: 'm2' },
+        { from: 'm2', to: 'm3' },
+        { from: 'm2', to: 'b1' },
+        { from: 'b1', to: 'b2' },
+      ],
+      [{ id: 'working', label: 'Working', pressure: 600e3, datumElevation: 95 }],
+    );
+
+  it('runs from the main’s start through the tee to its end, the branch drawn from the tee', () => {
+    const d = doc();
+    const { points, branches } = profileData(d, analyse(d));
+    expect(points.map((p) => p.node)).toEqual(['m1', 'm2', 'm3']);
+    expect(points.map((p) => p.chainage)).toEqual([0, 60, 120]);
+    // the branch continues from the tee's chainage: 60 + 30, 60 + 60 (hand calculation)
+    expect(branches).toHaveLength(1);
+    expect(branches[0]!.points.map((p) => [p.node, p.chainage])).toEqual([
+      ['m2', 60],
+      ['b1', 90],
+      ['b2', 120],
+    ]);
+  });
+});
+
 describe('profileData levels', () => {
   it('puts the ground at centreline + OD/2 + cover, with the largest OD at the node (hand calculation)', () => {
     const doc = withBranch();

@@ -55,29 +55,14 @@ function markBends(points: ProfilePoint[]): void {
 }
 
 /**
- * The profile along the main line: from the route's start to its farthest node by chainage,
- * following the shortest path back (branches are left out).
+ * The profile along the main line: run A from its start, in chainage order (branches are drawn from
+ * where they leave it). Chainages are along each run, so the main is read from its run rather than
+ * found by chainage: a branch node's chainage plus its pipe can equal the tee's own.
  */
 export function profileData(project: Project, analysis: Analysis): ProfileData {
-  const chain = analysis.chainage;
-  let far: string | null = null;
-  for (const [id, c] of chain) if (far === null || c > chain.get(far)!) far = id;
-  const path: string[] = [];
-  let at = far;
-  const seen = new Set<string>();
-  while (at !== null && !seen.has(at)) {
-    seen.add(at);
-    path.push(at);
-    const here = chain.get(at)!;
-    if (here === 0) break;
-    let next: string | null = null;
-    for (const leg of analysis.legs.get(at) ?? []) {
-      const c = chain.get(leg.far.id);
-      if (c !== undefined && Math.abs(c + leg.length - here) < 1e-6 * Math.max(1, here)) next = leg.far.id;
-    }
-    at = next;
-  }
-  path.reverse();
+  const main = analysis.runs.find((r) => r.parent === null) ?? analysis.runs[0];
+  const path = main ? main.nodes.map((n) => n.id) : [];
+  const chain = new Map(main?.nodes.map((n) => [n.id, n.chainage]) ?? []);
   const nodes = new Map(project.nodes.map((n) => [n.id, n]));
   const pointAt = (id: string, chainage: number): ProfilePoint => {
     const n = nodes.get(id)!;
