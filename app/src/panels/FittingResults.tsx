@@ -1,6 +1,7 @@
 import {
   caseLabel,
   anchorConcrete,
+  blockBaseDown,
   blockConcrete,
   elementName,
   fittingProfile,
@@ -54,6 +55,7 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
   // A part of the thrust is named only where it reads as more than nothing at the force column's precision.
   const horizontalShown = !readsZero(e.horizontal.force, 'force', u);
   const row = scheduleViewOf(analysis, u).rows[analysis.fittings.indexOf(f)];
+  const baseDown = blockBaseDown(r, e.downward.force, norm(e.governing.total), f.diagnostics);
   return (
     <section className="results" aria-label={`Results for ${f.mark}`} data-testid="fitting-results">
       <h3>
@@ -163,6 +165,8 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
             given; concrete {quantityText(blockConcrete(r.block, u), 'volume', u)}. Passive resistance{' '}
             {r.block.passiveRatio.toFixed(2)} × the thrust (3-D factor {r.block.shapeFactor.toFixed(2)}); the face is
             set by {BLOCK_GOVERNS[r.block.governs]}.
+            {baseDown > 0 &&
+              ` Its base bears ${showColumnForce(baseDown, u)} down on the trench bottom: no pad is needed.`}
           </li>
         )}
         {r.reverseBlock && (

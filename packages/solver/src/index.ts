@@ -40,6 +40,7 @@ export {
 export { calculationRecord } from './analysis/calculationRecord.js';
 export type { CalcStep, RecordValue } from './analysis/calcRecord.js';
 export { nodeSoil, type Restraint } from './restraint/sizeRestraint.js';
+export { blockBaseDown } from './restraint/concreteRestraint.js';
 export {
   SOIL_LIBRARY,
   SOIL_KINDS,

@@ -33,6 +33,21 @@ export interface ConcreteRestraint {
 export const present = (force: number, total: number) => force > 1e-7 * total && force > 0;
 
 /**
+ * N of downward thrust the main block's base bears on the trench bottom: where the downward thrust is
+ * present and the base is enough, no pad is sized (below), and the crew must be told the base carries
+ * it; else 0. `total` is the governing thrust's magnitude, as the sizing reads it.
+ */
+export const blockBaseDown = (
+  r: { block: object | null; trenchBottom: object | null },
+  downward: number,
+  total: number,
+  diagnostics: readonly { code: string }[],
+): number =>
+  r.block && !r.trenchBottom && present(downward, total) && !diagnostics.some((d) => d.code === 'pad.no-bearing')
+    ? downward
+    : 0;
+
+/**
  * True when the bearing face stands across a trench, so the trench width limits it: the block sits in
  * the trench of a pipe that leaves the fitting within the across-trench angle of the bearing direction
  * (a reducer's or valve's block around the pipe), or every pipe lies within that angle of the bearing

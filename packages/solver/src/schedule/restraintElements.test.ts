@@ -68,6 +68,38 @@ describe('vertical bends: thrust parts apart, each restraint element with its ow
     expect(view.rows.find((r) => r.fitting.node === 'c')!.cells.fitting).toBe('Bend 45° sag');
   });
 
+  it('says when the block’s base bears a sag’s downward part, since no pad is sized for it', () => {
+    // In level, out rising 6 m over 30 m: θ = atan(6/30) = 11.31°. T_down = p·A·sin θ (the downward
+    // part of −p·A·(n₁ + n₂)); with OD 0.222 m at 1 MPa that is 1e6 · 0.03871 · 0.19612 = 7.59 kN, which
+    // a 0.25 m wide block's 0.60 m base holds at the sand's 191.5 kPa (1.5 · 7.59 / 191.5 = 0.059 m²).
+    const a = analyse(
+      route({
+        pressure: 1e6,
+        nodes: [
+          { id: 'a', x: -30, y: 0, z: 100 },
+          { id: 'c', x: 0, y: 0, z: 100 },
+          { id: 'b', x: 30, y: 0, z: 106 },
+        ],
+        pipes: [
+          { from: 'a', to: 'c', od: 0.222 },
+          { from: 'c', to: 'b', od: 0.222 },
+        ],
+      }),
+    );
+    const row = scheduleOf(a).fittings.find((f) => f.node === 'c')!;
+    expect(row.profile).toBe('sag');
+    const area = (Math.PI / 4) * 0.222 ** 2;
+    expectClose(row.downwardThrust, 1e6 * area * Math.sin(Math.atan(6 / 30)), 1e-9);
+    expect(row.restraint.block).not.toBeNull();
+    expect(row.restraint.trenchBottom).toBeNull();
+    const block = restraintElements(row, 'si', 0.05).find((e) => e.kind === 'block')!;
+    const said = /and ([\d.]+) kN down on its base/.exec(block.forceText);
+    expect(said).not.toBeNull();
+    expect(Number(said![1])).toBeCloseTo(row.downwardThrust / 1000, 1);
+    const cells = scheduleView(a, 'si', CODE_MEANINGS).rows.find((r) => r.fitting.node === 'c')!.cells;
+    expect(cells.restraint).toContain(`and ${said![1]} kN down on its base`);
+  });
+
   it('marks no crest or sag on a plan bend', () => {
     const plan = route({
       pressure: psi(150),

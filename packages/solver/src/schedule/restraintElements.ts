@@ -4,6 +4,7 @@ import { quantityText } from './columnUnits.js';
 import {
   anchorForceText,
   anchorText,
+  baseDownOf,
   blockForceText,
   blockText,
   padForceText,
@@ -64,7 +65,7 @@ export function restraintElements(f: ScheduleFitting, units: UnitSystem, step: n
       `${blockText(r.block, units)}, ${vol(blockConcrete(r.block, units))}`,
       r.block.thrust,
       planBearing(r.block.direction),
-      blockForceText(r.block, units),
+      blockForceText(r.block, units, baseDownOf(f)),
     );
   if (r.reverseBlock)
     add(

@@ -6,6 +6,8 @@ import { planBearing } from '../geometry/vector.js';
 import { bearingText } from './fittingNames.js';
 import { padThickness } from './settingOut.js';
 import { anchorConcrete } from './concrete.js';
+import { blockBaseDown } from '../restraint/concreteRestraint.js';
+import { norm } from '../geometry/vector.js';
 
 type Block = NonNullable<ScheduleFitting['restraint']['block']>;
 
@@ -45,9 +47,14 @@ const force = (n: number, units: UnitSystem) => quantityText(n, 'force', units);
  * What a block bears, and which way: "bears 113° SE, 2.48 kN" — horizontally, toward the outside of
  * the bend (the way the thrust pushes), with "and holds 1.2 kN up" where its weight holds an uplift.
  */
-export const blockForceText = (b: Block, units: UnitSystem): string =>
+export const blockForceText = (b: Block, units: UnitSystem, baseDown = 0): string =>
   `bears ${bearingText(planBearing(b.direction))}, ${force(b.thrust, units)}` +
-  (b.upwardThrust > 0 ? ` and holds ${force(b.upwardThrust, units)} up` : '');
+  (b.upwardThrust > 0 ? ` and holds ${force(b.upwardThrust, units)} up` : '') +
+  (baseDown > 0 ? ` and ${force(baseDown, units)} down on its base` : '');
+
+/** N the fitting's main block bears down on its base (no pad sized: the base is enough), else 0. */
+export const baseDownOf = (f: ScheduleFitting): number =>
+  blockBaseDown(f.restraint, f.downwardThrust, norm(f.thrust), f.diagnostics);
 
 /** What an anchor holds: "holds 16.5 kN up" and, where its base friction takes it, the horizontal thrust. */
 export const anchorForceText = (a: Anchor, units: UnitSystem): string =>
@@ -64,7 +71,7 @@ export const padForceText = (downward: number, units: UnitSystem): string => `be
 export function restraintSummary(f: ScheduleFitting, units: UnitSystem, step: number): string {
   const r = f.restraint;
   const parts: string[] = [];
-  if (r.block) parts.push(`block ${blockText(r.block, units)} ${blockForceText(r.block, units)}`);
+  if (r.block) parts.push(`block ${blockText(r.block, units)} ${blockForceText(r.block, units, baseDownOf(f))}`);
   if (r.reverseBlock)
     parts.push(`opposite block ${blockText(r.reverseBlock, units)} ${blockForceText(r.reverseBlock, units)}`);
   if (r.anchor)
