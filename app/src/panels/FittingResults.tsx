@@ -59,7 +59,8 @@ export function FittingResults({ fitting: f, project }: { fitting: FittingAnalys
   return (
     <section className="results" aria-label={`Results for ${f.mark}`} data-testid="fitting-results">
       <h3>
-        <span className="mark">{f.mark}</span> {fittingTitle({ ...f.geometry, profile: fittingProfile(f) })}
+        <span className="mark">{f.mark}</span>{' '}
+        {fittingTitle({ ...f.geometry, profile: fittingProfile(f), diagnostics: f.diagnostics })}
       </h3>
       <button className="link zoom-to" onClick={() => actions.zoomToFitting(f.node.id)} data-testid="zoom-to-fitting">
         Zoom to {f.mark} on the plan

@@ -91,7 +91,7 @@ export function Appendix({ project, analysis, units: u }: { project: Project; an
       {analysis.fittings.map((f) => (
         <div className="appendix-fitting" key={f.node.id}>
           <h3>
-            {f.mark} — {fittingTitle(f.geometry)}
+            {f.mark} — {fittingTitle({ ...f.geometry, diagnostics: f.diagnostics })}
             {f.node.label ? ` (${f.node.label})` : ''}
           </h3>
           {calculationRecord(project, f).length > 0 && <CalcRecordView fitting={f} project={project} />}

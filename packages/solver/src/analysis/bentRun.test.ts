@@ -2,6 +2,9 @@ import { describe, it, expect } from 'vitest';
 import { analyse } from './analyse.js';
 import { route } from '../../test/projectBuilder.js';
 import { RUN_TOLERANCE } from '../network/fittingKind.js';
+import { scheduleOf } from '../schedule/scheduleRows.js';
+import { fittingTitle } from '../schedule/fittingNames.js';
+import { takeOff } from '../schedule/quantities.js';
 
 /**
  * A junction of three pipes: the main comes in from the west, goes out toward (x, y) and a branch
@@ -43,5 +46,16 @@ describe('a three-pipe junction whose run is not straight', () => {
     // a 3° turn (tan 3° · 40 m = 2.096 m off line) is within the 5° tolerance
     expect(RUN_TOLERANCE).toBe(5);
     expect(bentRun(40, -40 * Math.tan((3 * Math.PI) / 180))).toBeUndefined();
+  });
+
+  it('is named as a junction whose run turns, in the schedule and the take-off, not as a wye to order', () => {
+    const project = junction(30, -20);
+    const rows = scheduleOf(analyse(project)).fittings;
+    const j = rows.find((f) => f.node === 'j')!;
+    // the branch is square to the incoming pipe; the run turns 33.69° (hand calculation above)
+    expect(fittingTitle(j)).toBe('Junction, run turns 33.7°, branch at 90°');
+    const fittings = takeOff(rows, project, 'si').fittings.map((l) => l.fitting);
+    expect(fittings.some((t) => t.startsWith('Junction, run turns 33.7°'))).toBe(true);
+    expect(fittings.some((t) => t.startsWith('Wye'))).toBe(false);
   });
 });

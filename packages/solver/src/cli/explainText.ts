@@ -23,7 +23,7 @@ const shown = (v: RecordValue, units: UnitSystem) => formatSi(v.value, v.dimensi
 export function explainText(a: Analysis, f: FittingAnalysis, units: UnitSystem): string {
   // What to build first, each element named by the fitting's mark; then how it was found.
   const row = scheduleOf(a).fittings.find((r) => r.node === f.node.id);
-  const title = fittingTitle({ ...f.geometry, profile: row?.profile ?? null });
+  const title = fittingTitle({ ...f.geometry, profile: row?.profile ?? null, diagnostics: f.diagnostics });
   const out = [`${f.mark} — ${title} (node ${f.node.id}, run ${f.run})`, ''];
   const elements = row ? restraintElements(row, units, a.project.design.dimensionStep) : [];
   const width = Math.max(0, ...elements.map((e) => e.name.length));

@@ -36,8 +36,11 @@ export function fittingTitle(g: {
   deflection: number | null;
   branchAngle: number | null;
   profile?: 'crest' | 'sag' | null;
+  /** the fitting's findings: a junction whose run turns (fitting.bent-run) is named as one, not a wye */
+  diagnostics?: readonly { code: string; values: Readonly<Record<string, number>> }[];
 }): string {
-  const name = KIND_NAME[g.kind];
+  const turn = g.diagnostics?.find((d) => d.code === 'fitting.bent-run')?.values.turn;
+  const name = turn !== undefined ? `Junction, run turns ${Math.round(turn * 10) / 10}°` : KIND_NAME[g.kind];
   if (g.deflection !== null && g.kind !== 'valve' && g.kind !== 'reducer')
     return `${name} ${angleText(g.deflection)}${g.profile ? ` ${g.profile}` : ''}`;
   // A branch's angle in space takes the grades of both pipes (a spur square to a main in plan reads
