@@ -17,6 +17,8 @@ export interface ProvenanceEntry {
   source: string;
   /** table, clause or equation within the document */
   clause?: string;
+  /** how an unverified value was taken ("from memory", "equation recalled, not read"): the register's note */
+  note?: string;
   /**
    * true only when the value was read in the document itself (or a faithful reproduction of its table,
    * named in `source`); false when recalled or taken second-hand. Every result that depends on an
@@ -25,6 +27,11 @@ export interface ProvenanceEntry {
   verified: boolean;
 }
 
-/** "not verified against DIPRA …, trench-type table": what a screen or print says of an unverified entry. */
+/**
+ * "not verified against DIPRA …, trench-type table": what a screen or print says of an unverified entry.
+ * A rule of thumb names no document: it says so, and what the rule is.
+ */
 export const notVerifiedText = (e: ProvenanceEntry): string =>
-  `not verified against ${e.source}${e.clause ? `, ${e.clause}` : ''}`;
+  e.kind === 'common practice'
+    ? `common practice, not verified against a published source (${e.source.charAt(0).toLowerCase()}${e.source.slice(1)})`
+    : `not verified against ${e.source}${e.clause ? `, ${e.clause}` : ''}`;

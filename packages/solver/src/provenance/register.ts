@@ -82,7 +82,8 @@ export const REGISTER = {
     value: 0.1,
     unit: '—',
     kind: 'common practice',
-    source: 'Usual allowance of 5–10 % on ordered concrete (from memory); the project states its own',
+    source: 'Usual allowance of 5–10 % on ordered concrete; the project states its own',
+    note: 'from memory',
     verified: false,
   },
   'pad.thickness': {
@@ -90,7 +91,8 @@ export const REGISTER = {
     value: 0.15,
     unit: 'm',
     kind: 'common practice',
-    source: 'Usual least thickness of a plain concrete pad, 150 mm ≈ 6 in (from memory)',
+    source: 'Usual least thickness of a plain concrete pad, 150 mm ≈ 6 in',
+    note: 'from memory',
     verified: false,
   },
   'trench.clearance': {
@@ -153,7 +155,8 @@ export const REGISTER = {
     kind: 'published',
     source:
       'Ovesen (1964), Anchor slabs, calculation methods and model tests, Danish Geotechnical Institute Bulletin No. 16; as restated in Duncan & Mokwa (2001), Passive earth pressures: theories and tests, J. Geotech. Geoenviron. Eng. 127(3):248–257',
-    clause: '3-D correction factor (equation recalled, not read)',
+    clause: '3-D correction factor',
+    note: 'equation recalled, not read',
     verified: false,
   },
   'passive.rankine': {

@@ -16,7 +16,7 @@ function valueText(v: ProvenanceEntry['value']): string {
 export function provenanceMarkdown(): string {
   const rows = (Object.entries(REGISTER) as [string, ProvenanceEntry][]).map(
     ([id, e]) =>
-      `| \`${id}\` | ${cell(e.quantity)} | ${cell(valueText(e.value))} | ${cell(e.unit)} | ${e.kind} | ${cell(e.source)}${e.clause ? `, ${cell(e.clause)}` : ''} | ${e.verified ? 'yes' : '**no**'} |`,
+      `| \`${id}\` | ${cell(e.quantity)} | ${cell(valueText(e.value))} | ${cell(e.unit)} | ${e.kind} | ${cell(e.source)}${e.clause ? `, ${cell(e.clause)}` : ''}${e.note ? ` (${cell(e.note)})` : ''} | ${e.verified ? 'yes' : '**no**'} |`,
   );
   const open = Object.values(REGISTER).filter((e) => !e.verified).length;
   return [

@@ -431,7 +431,7 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
         {
           title: 'Passive resistance of the face',
           formula:
-            'R_p = M · b·[½·γ·Kp·(z₂² − z₁²) + 2·c·√Kp·(z₂ − z₁)];  M = 1 + (Kp − Ka)^⅔·[1.1E⁴ + 1.6/(1 + 5b/h) + 0.4(Kp − Ka)E³/(1 + 0.05b/h)], E = z₁/z₂',
+            'R_p = M · b·[½·γ·Kp·(z₂² − z₁²) + 2·c·√Kp·(z₂ − z₁)];  M = 1 + (Kp − Ka)^⅔·[1.1E⁴ + 1.6B/(1 + 5b/h) + 0.4(Kp − Ka)E³B²/(1 + 0.05b/h)], E = z₁/z₂, B = 1 (a single block)',
           inputs: [
             value('z₁', 'depth of face top', top, 'length', 'computed'),
             value('z₂', 'depth of face bottom', bottom, 'length', 'computed'),
