@@ -60,6 +60,32 @@ describe('which fitting stands at each node', () => {
     expect(b.diagnostics.map((d) => d.code)).not.toContain('joints.sharp-bend');
   });
 
+  it('reads a right angle drawn with nodes kept to the millimetre as 90°, not sharper, and 90.2° as sharper', () => {
+    // out 200 m north-west of (0, 0) then 200 m on at a right angle, each node kept to the millimetre:
+    // (−141.421, 141.421) → (0.003, 282.839) turns 90.0012° at the bend; a far node 0.7 m further
+    // round turns 90.2° (tan⁻¹(0.7/200) = 0.2005°, hand calculation)
+    const bendAt = (x: number, y: number) => {
+      const p = route({
+        nodes: [
+          { id: 'a', x: 0, y: 0, end: 'tie-in' },
+          { id: 'b', x: -141.421, y: 141.421, restraint: 'joints' },
+          { id: 'c', x, y, end: 'tie-in' },
+        ],
+        pipes: [
+          { from: 'a', to: 'b', od: 0.222 },
+          { from: 'b', to: 'c', od: 0.222 },
+        ],
+      });
+      return analyse(p).byNode.get('b')!;
+    };
+    const right = bendAt(0.003, 282.839);
+    expect(right.geometry.deflection).toBeGreaterThan(90.001);
+    expect(right.diagnostics.map((d) => d.code)).not.toContain('joints.sharp-bend');
+    const sharper = bendAt(0.003 + 0.7 * Math.SQRT1_2, 282.839 - 0.7 * Math.SQRT1_2);
+    expect(sharper.geometry.deflection).toBeCloseTo(90.2, 1);
+    expect(sharper.diagnostics.map((d) => d.code)).toContain('joints.sharp-bend');
+  });
+
   it('tells a reducer, a reducing bend and a closed valve apart', () => {
     const p = route({
       nodes: [

@@ -1,4 +1,4 @@
-import { ANGLE_NOISE, dot, horizontalNorm, norm, type Vec3 } from '../geometry/vector.js';
+import { dot, horizontalNorm, norm, type Vec3 } from '../geometry/vector.js';
 import { value, type SizingStep } from '../analysis/calcRecord.js';
 import type { Leg } from '../network/legs.js';
 import type { FittingKind } from '../network/fittingKind.js';
@@ -7,6 +7,13 @@ import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { pipeSoilResistance } from './pipeSoilResistance.js';
 import { jointMaterialBasis } from './jointMaterial.js';
 import type { FittingSite } from './site.js';
+
+/**
+ * Degrees from which a bend is sharper than 90°: a bend is named to a hundredth of a degree
+ * (fittingNames.ts), and one named 90° is not sharper (nodes typed or kept to the millimetre turn a
+ * drawn right angle by a few thousandths of a degree).
+ */
+const SHARP_FROM = 90.005;
 
 export interface RestrainedLeg {
   pipe: string;
@@ -101,7 +108,7 @@ export function restrainedLength(i: RestrainedLengthInput): {
       );
     }
   }
-  if (isBend && (i.deflection as number) > 90 + ANGLE_NOISE) {
+  if (isBend && (i.deflection as number) >= SHARP_FROM) {
     diagnostics.push(diagnostic('joints.sharp-bend', {}, { deflection: i.deflection as number }));
   }
   return { legs: out, steps, diagnostics };
