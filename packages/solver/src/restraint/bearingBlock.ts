@@ -439,13 +439,14 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
             value('φ', 'soil friction angle', i.soil.frictionAngle, 'angle', 'soil'),
             value('c', 'soil cohesion', i.soil.cohesion, 'stress', 'soil'),
             value('M', 'Ovesen 3-D factor', passive.shape, 'ratio', 'computed'),
+            value('R₂D', '2-D passive resistance, b·[…]', passive.twoD, 'force', 'computed'),
           ],
           result: value(
             'R_p',
             'ultimate passive resistance',
             passive.total,
             'force',
-            `${passiveRatio.toFixed(2)} × the thrust (2-D ${passive.twoD.toFixed(0)} N × M)`,
+            `${passiveRatio.toFixed(2)} × the thrust: R₂D × M`,
           ),
           reference:
             'Rankine passive earth pressure with cohesion, submerged unit weight below the water table; Ovesen (1964) 3-D factor as restated by Duncan & Mokwa (2001) — not verified against the paper',
