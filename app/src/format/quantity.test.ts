@@ -108,6 +108,21 @@ describe('editable and parseTyped round trip', () => {
   });
 });
 
+describe('units typed after the number beyond the shown ones', () => {
+  it('reads bar and MPa for a pressure, MPa and ksf for a soil strength (1 bar = 10⁵ Pa; 1 ksf = 1,000 lbf/ft²)', () => {
+    const bar = parseTyped('10.35 bar', 'pressure', 'si');
+    expect(bar.ok && bar.si).toBeCloseTo(1_035_000, 6);
+    const mpa = parseTyped('1.035 MPa', 'pressure', 'us');
+    expect(mpa.ok && mpa.si).toBeCloseTo(1_035_000, 6);
+    // 1 lbf/ft² = 4.4482216152605 N / 0.09290304 m² = 47.880259 Pa (NIST SP 811 appendix B)
+    const ksf = parseTyped('3 ksf', 'stress', 'us');
+    expect(ksf.ok && ksf.si).toBeCloseTo(3 * 47_880.259, 2);
+    const refused = parseTyped('3 ksf', 'pressure', 'si');
+    expect(refused.ok).toBe(false);
+    if (!refused.ok) expect(refused.message).toMatch(/kPa.*psi, bar, MPa/);
+  });
+});
+
 describe('decimal commas and feet-and-inches', () => {
   it('reads 1,5 as one and a half, 1,500 as fifteen hundred, and refuses an ambiguous 1,50,0', () => {
     const one = parseTyped('1,5', 'length', 'si');

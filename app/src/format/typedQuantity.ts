@@ -28,10 +28,28 @@ export function editable(si: number, dim: Dimension, units: UnitSystem): string 
 /** Feet and inches as a site engineer writes them: 4'6", 4' 6, 4 ft 6 in, 4 ft. */
 const FEET_INCHES = /^([-+]?\d+(?:\.\d+)?)\s*(?:'|ft)\s*(?:(\d+(?:\.\d+)?)\s*(?:"|in)?)?$/i;
 
-/** The units a value of `dim` may be typed in, whichever system is shown: both systems' own, and inches. */
+/**
+ * Units a pressure or a soil's strength is often written in beside the shown ones: bar and MPa on a
+ * gauge or a specification, ksf in a US soil report (1 bar = 10⁵ Pa, 1 MPa = 10⁶ Pa by definition; 1 ksf
+ * = 1,000 psf).
+ */
+const ALSO: Partial<Record<Dimension, { symbol: string; factor: number }[]>> = {
+  pressure: [
+    { symbol: 'bar', factor: 1e5 },
+    { symbol: 'MPa', factor: 1e6 },
+  ],
+  stress: [
+    { symbol: 'MPa', factor: 1e6 },
+    { symbol: 'ksf', factor: 1000 * DISPLAY_UNITS.us.stress.factor },
+  ],
+  length: [{ symbol: 'in', factor: INCH }],
+  elevation: [{ symbol: 'in', factor: INCH }],
+};
+
+/** The units a value of `dim` may be typed in, whichever system is shown: both systems' own, and others in use. */
 function unitsFor(dim: Dimension): { symbol: string; factor: number }[] {
   const own = [DISPLAY_UNITS.si[dim], DISPLAY_UNITS.us[dim]].filter((u) => u.symbol !== '');
-  return dim === 'length' || dim === 'elevation' ? [...own, { symbol: 'in', factor: INCH }] : own;
+  return [...own, ...(ALSO[dim] ?? [])];
 }
 
 /** A unit written after the number ("54 in", "150 psi"): the number's text and the unit, or null. */
