@@ -9,6 +9,8 @@ import { anchorBox, padThickness } from './settingOut.js';
 import { ceilTo } from '../units/format.js';
 import { scheduleConcrete, scheduleView } from './scheduleView.js';
 import { CODE_MEANINGS } from '../diagnostics/codeMeanings.js';
+import { routeInput, validProject } from '../../test/projectBuilder.js';
+import { INCH } from '../units/conversions.js';
 
 const demoText = readFileSync(new URL('../../../../public/demo/larkspur-rise.json', import.meta.url), 'utf8');
 const parsed = parseProjectText(demoText);
@@ -120,5 +122,28 @@ describe('quantities take-off', () => {
     expect(rows.find((r) => r.item === 'Total to order')!.quantity).toBe(
       (Math.ceil(t.concreteOrdered * 100 - 1e-9) / 100).toFixed(2),
     );
+  });
+});
+
+describe('take-off sizes of a US route', () => {
+  it('names a bare nominal size in inches: a 12 × 8 reducer, as AWWA C151 sizes are named', () => {
+    // 12-in and 8-in ductile iron (AWWA C151 ODs 13.20 and 9.05 in) meeting at a reducer, capped at both ends
+    const project = validProject(
+      routeInput({
+        units: 'us',
+        nodes: [
+          { id: 'a', x: 0, y: 0 },
+          { id: 'r', x: 30, y: 0 },
+          { id: 'b', x: 60, y: 0 },
+        ],
+        pipes: [
+          { from: 'a', to: 'r', od: 13.2 * INCH, nominal: '12' },
+          { from: 'r', to: 'b', od: 9.05 * INCH, nominal: '8' },
+        ],
+      }),
+    );
+    const lines = takeOff(scheduleOf(analyse(project)).fittings, project, 'us').fittings;
+    expect(lines.find((l) => l.fitting === 'Reducer')!.size).toBe('12 in × 8 in');
+    expect(lines.every((l) => /in/.test(l.size))).toBe(true);
   });
 });

@@ -83,8 +83,12 @@ export const concreteWaste = (project: Project): number =>
  */
 export function takeOff(fittings: readonly ScheduleFitting[], project: Project, units: UnitSystem): TakeOff {
   const pipes = new Map(project.pipes.map((p) => [p.id, p]));
-  const sizeOf = (pipe: string, od: number) =>
-    pipes.get(pipe)?.nominal ?? `${columnNumber(od, 'diameter', units)} ${columnUnit('diameter', units)}`;
+  // A nominal size that is a bare number is in inches (the AWWA series name their sizes so: "8", "12").
+  const sizeOf = (pipe: string, od: number) => {
+    const nominal = pipes.get(pipe)?.nominal;
+    if (nominal !== undefined) return /^\d+(\.\d+)?$/.test(nominal.trim()) ? `${nominal.trim()} in` : nominal;
+    return `${columnNumber(od, 'diameter', units)} ${columnUnit('diameter', units)}`;
+  };
   const concrete = new Map<ConcreteElement, ConcreteLine>();
   // Each piece as its fitting's row prints it (rounded up in the display unit), so that every line and
   // total is the sum of what the sheet lists.
