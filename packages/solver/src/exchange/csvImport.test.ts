@@ -40,6 +40,10 @@ describe('a CSV survey', () => {
     expect(r.project.nodes[1]!.x).toBeCloseTo(30.48, 9);
     expect(r.project.nodes[0]!.groundLevel).toBeUndefined();
     expect(r.project.units).toBe('us');
+    // the cases' datum note speaks the project's units: the highest centreline 100 ft, not 30.480 m
+    const datum = r.notes.map(noteText).find((t) => t.includes('highest pipe centreline'))!;
+    expect(datum).toMatch(/100(\.0+)? ft/);
+    expect(datum).not.toMatch(/ m:/);
   });
 
   it('guesses usual header names for the dialog to start from', () => {

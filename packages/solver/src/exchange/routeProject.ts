@@ -7,6 +7,7 @@ import { readGeoJsonRoute } from './geojsonRoute.js';
 import { readCsvTable, surveyLines, type ColumnMapping, type SurveyUnit } from './csvSurvey.js';
 import { defaultPipe, type PipeChoice } from './pipeChoice.js';
 import type { ImportNote } from './importNotes.js';
+import { quantityText } from '../schedule/columnUnits.js';
 
 export interface ImportOptions {
   /** m, points closer than this are one node (default 0.1 m) */
@@ -90,7 +91,7 @@ function assemble(
     notes.push({
       level: 'note',
       where: '',
-      message: `the load cases' pressures are stated at the route's highest pipe centreline, ${high.toFixed(3)} m: check them in the cases panel`,
+      message: `the load cases' pressures are stated at the route's highest pipe centreline, ${quantityText(high, 'level', base.units)}: check them in the cases panel`,
     });
   }
   const candidate: Project = {
