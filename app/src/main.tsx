@@ -1,6 +1,6 @@
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
-import { findSize, type Project } from '@mainbrace/solver';
+import type { Project } from '@mainbrace/solver';
 import { App } from './App.js';
 import { createAppStore } from './state/store.js';
 import { createActions } from './state/actions.js';
@@ -17,7 +17,7 @@ import { registerServiceWorker, watchForNewVersion } from './chrome/newVersion.j
 import { lazyRecovery } from './chrome/lazyRecovery.js';
 import { installShortcuts } from './chrome/shortcuts.js';
 import { ErrorBoundary } from './chrome/ErrorBoundary.js';
-import type { PipeSpec } from './state/documentEdits.js';
+import { defaultPipe } from './state/defaultPipe.js';
 import { loadChecks, validated } from './state/checks.js';
 import { afterFirstDraw } from './chrome/warmUp.js';
 import type { Notice } from './state/store.js';
@@ -40,19 +40,6 @@ async function firstProject(kept: Restored, demo: Promise<unknown>): Promise<Pro
   return (await import('./files/blankProject.js')).blankProject();
 }
 
-/** The pipe new runs are drawn with: DN 200 ductile iron in SI, 8-in class 350 in US units. */
-function defaultPipe(project: Project): PipeSpec {
-  const [series, nominal] = project.units === 'us' ? ['di-awwa-pc350', '8'] : ['di-en545', 'DN200'];
-  const size = findSize(series, nominal)!;
-  return {
-    outsideDiameter: size.outsideDiameter,
-    insideDiameter: size.insideDiameter,
-    material: 'ductile-iron',
-    series,
-    nominal,
-  };
-}
-
 async function start() {
   // Read-only hook for the browser tests, in the dev and test builds only, in a file of its own.
   const testHook = import.meta.env.DEV || import.meta.env.MODE === 'test' ? import('./testHook.js') : null;
@@ -73,7 +60,7 @@ async function start() {
   const kept = unsaved.kept;
   const project = await firstProject(kept, demo);
   await scheduleWords;
-  const store = createAppStore(project, defaultPipe(project));
+  const store = createAppStore(project, defaultPipe(project.units));
   const actions = createActions(store);
   // The demo or a blank project is nobody's unsaved work: New replaces it without asking.
   if (kept.kind !== 'project') actions.markSaved(project);

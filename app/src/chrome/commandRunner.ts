@@ -18,7 +18,7 @@ const blankProjects = lazyModule(() => import('../files/blankProject.js'));
 function startNew(store: AppStore, actions: Actions, ui: Partial<CommandUi>) {
   const go = () =>
     void blankProjects().then(({ blankProject }) => {
-      const blank = { ...blankProject(), units: store.getState().units };
+      const blank = blankProject(store.getState().units);
       actions.replaceProject(blank);
       actions.markSaved(blank);
       actions.notify(null);

@@ -21,6 +21,7 @@ import { planInputOf } from '../tools/planBridge.js';
 import { checks, checksReady, loadChecks } from './checks.js';
 import { loadRouteEdits, routeEdits, type RouteEdits } from './routeEdits.js';
 import { resultsOf } from './results.js';
+import { pipeForUnits } from './defaultPipe.js';
 
 const NONE: readonly string[] = [];
 
@@ -221,7 +222,7 @@ export function createActions(store: AppStore) {
       edit((p) => (p.underlay ? { ...p, underlay: { ...p.underlay, ...patch } } : p)),
     renameProject: (name: string) => edit((p) => ({ ...p, name }), 'project-name'),
     /** Display units are a view setting: no undo step, no change to any result. */
-    setUnits: (units: Project['units']) => set({ units }),
+    setUnits: (units: Project['units']) => set({ units, pipeSpec: pipeForUnits(get().pipeSpec, units) }),
     updateDesign: (patch: Partial<Project['design']>) => edit((p) => ({ ...p, design: { ...p.design, ...patch } })),
     /** Title-block fields and the chainage style; typing in one field is one undo step. */
     updateSheet: (patch: Partial<Sheet>) =>
@@ -262,6 +263,7 @@ export function createActions(store: AppStore) {
       edit(() => project, undefined, true);
       set({
         units: project.units,
+        pipeSpec: pipeForUnits(get().pipeSpec, project.units),
         selection: EMPTY_SELECTION,
         draw: { phase: 'idle' },
         dragPreview: null,

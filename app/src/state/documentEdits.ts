@@ -1,6 +1,8 @@
 import {
+  FOOT,
   MIN_PIPE_LENGTH,
   type Material,
+  type UnitSystem,
   type Pipe,
   type Project,
   type ProjectNode,
@@ -90,14 +92,20 @@ export function splitPipe(project: Project, pipeId: string, at: PlanPoint): { pr
   };
 }
 
+/**
+ * A new node's level and cover where no neighbour gives them, as round figures in the project's units:
+ * 100 m and 1.2 m, or 330 ft (the new US project's datum) and 4 ft.
+ */
+const FIRST_NODE = { si: { elevation: 100, cover: 1.2 }, us: { elevation: 330 * FOOT, cover: 4 * FOOT } } as const;
+
 /** A new node at a point, inheriting elevation, cover and soil from a neighbour where there is one. */
-function freeNode(id: string, at: PlanPoint, like: ProjectNode | undefined): ProjectNode {
+function freeNode(id: string, at: PlanPoint, like: ProjectNode | undefined, units: UnitSystem): ProjectNode {
   return {
     id,
     x: round(at.x),
     y: round(at.y),
-    elevation: like?.elevation ?? 100,
-    cover: like?.cover ?? 1.2,
+    elevation: like?.elevation ?? FIRST_NODE[units].elevation,
+    cover: like?.cover ?? FIRST_NODE[units].cover,
     end: 'cap',
     valve: false,
     restraint: 'block',
@@ -116,7 +124,7 @@ function resolveEnd(
     'n',
     project.nodes.map((n) => n.id),
   );
-  return { project: { ...project, nodes: [...project.nodes, freeNode(id, end.at, like)] }, nodeId: id };
+  return { project: { ...project, nodes: [...project.nodes, freeNode(id, end.at, like, project.units)] }, nodeId: id };
 }
 
 /**
