@@ -270,7 +270,9 @@ export function PlanView() {
       const us = store.getState().units === 'us';
       const u = us ? FOOT : 1;
       const sym = us ? 'ft' : 'm';
-      coords.current.textContent = `E ${(p.x / u).toFixed(1)} ${sym}   N ${(p.y / u).toFixed(1)} ${sym}`;
+      // + 0 turns a −0.04 that reads "-0.0" into a plain 0.0
+      const one = (v: number) => (Math.round((v / u) * 10) / 10 + 0).toFixed(1);
+      coords.current.textContent = `E ${one(p.x)} ${sym}   N ${one(p.y)} ${sym}`;
     }
     send({ type: 'pointerMove', id: e.pointerId, pointer: kindOf(e.pointerType), at, alt: e.altKey });
   };
