@@ -46,6 +46,14 @@ describe('a CSV survey', () => {
     expect(datum).not.toMatch(/ m:/);
   });
 
+  it('warns that survey feet are shown as international feet, 2 parts per million apart', () => {
+    // 1 sft = 1200/3937 m; 1 ft = 0.3048 m: 1,250,000 sft = 381,000.762 m = 1,250,002.50 ft (hand calculation)
+    const r = importCsv('E,N\n1250000,650000\n1250100,650000\n', { easting: 'E', northing: 'N' }, 'us-ft');
+    if (!r.ok) throw new Error(r.notes.map(noteText).join('\n'));
+    expect(r.project.nodes[0]!.x / 0.3048).toBeCloseTo(1_250_002.5, 2);
+    expect(r.notes.map(noteText).join('\n')).toMatch(/US survey feet.*international feet.*2 parts per million/);
+  });
+
   it('guesses usual header names for the dialog to start from', () => {
     const t = readCsvTable(SURVEY);
     if (!t.ok) throw new Error('not read');

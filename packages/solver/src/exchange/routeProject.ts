@@ -141,5 +141,19 @@ export function importCsv(
   const pipe = o.pipe ?? (unit === 'm' ? defaultPipe() : defaultPipe('di-awwa-pc350', '8'));
   const lines = surveyLines(table.table, mapping, unit, pipe);
   if (!lines.ok) return lines;
-  return assemble(lines.lines, o, base, lines.notes, georeference);
+  // Feet are shown and written as international feet: a survey-foot coordinate reads 2 parts per
+  // million larger (2.5 ft at 1,250,000), too much to set out against the survey's own control.
+  const notes =
+    unit === 'us-ft'
+      ? [
+          ...lines.notes,
+          {
+            level: 'warning' as const,
+            where: '',
+            message:
+              'the survey is in US survey feet: Mainbrace keeps it in metres and shows feet as international feet (0.3048 m), which read 2 parts per million larger (E 1,250,000.00 sft reads 1,250,002.50 ft); set out against survey-foot control from the survey’s own figures or in metres',
+          },
+        ]
+      : lines.notes;
+  return assemble(lines.lines, o, base, notes, georeference);
 }
