@@ -64,6 +64,14 @@ async function start() {
   const actions = createActions(store);
   // The demo or a blank project is nobody's unsaved work: New replaces it without asking.
   if (kept.kind !== 'project') actions.markSaved(project);
+  // A run being drawn when the page goes (a reload, the tab closed) is kept as drawn so far: its legs
+  // become pipes before the autosave writes the document (this listener is added first, so runs first).
+  window.addEventListener('pagehide', () => {
+    const d = store.getState().draw;
+    if (d.phase !== 'drawing' || d.vertices.length === 0) return;
+    actions.addRun(d.start, d.vertices, null);
+    store.setState({ draw: { phase: 'idle' } });
+  });
   const autosave = startAutosave(store, {
     kv,
     channel,

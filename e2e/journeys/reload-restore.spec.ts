@@ -95,3 +95,26 @@ test('the last edit comes back after a reload or a navigation made at once, befo
   // No warning: the edit was the user's own and nothing newer was in storage.
   await expect(page.getByRole('alert')).toHaveCount(0);
 });
+
+test('a run being drawn when the page is reloaded comes back as drawn so far', async ({ page }) => {
+  const app = new MainbracePage(page);
+  await app.blankCanvas();
+  await app.tool('draw');
+  for (const [x, y] of [
+    [0, 0],
+    [80, 0],
+    [80, 60],
+  ] as const)
+    await app.clickPlan(x, y);
+  // no Enter: the run is still being drawn
+  expect((await app.project()).pipes).toHaveLength(0);
+  await page.reload();
+  await app.ready();
+  const doc = await app.project();
+  expect(doc.pipes).toHaveLength(2);
+  expect(doc.nodes.map((n) => [Math.round(n.x), Math.round(n.y)])).toEqual([
+    [0, 0],
+    [80, 0],
+    [80, 60],
+  ]);
+});
