@@ -1,6 +1,7 @@
 import { imageToPlan } from '@mainbrace/solver';
 import { centreOn, fitView, toScreen } from '../state/viewport.js';
 import { fitInsetRight, LEGEND_MIN_CANVAS_PX, type PlanInput } from './planInput.js';
+import type { PlanPoint } from '../state/documentEdits.js';
 
 // How the plan's view is framed: what the store's actions and the plan's first size need at start,
 // apart from the input tools (tools/dispatch.ts), which load on first use (docs/performance.md).
@@ -27,7 +28,11 @@ export function fittedView(s: Pick<PlanInput, 'project' | 'canvas' | 'legendOpen
 /** Brings a node into view (keeping the scale) when it is off screen or under the edge. */
 export function reveal(s: PlanInput, id: string): PlanInput {
   const n = s.project.nodes.find((x) => x.id === id);
-  if (!n) return s;
+  return n ? revealPoint(s, n) : s;
+}
+
+/** Brings a plan point into view (keeping the scale) when it is off screen or under the edge. */
+export function revealPoint(s: PlanInput, n: PlanPoint): PlanInput {
   const p = toScreen(s.viewport, n);
   const margin = 40;
   const inside =

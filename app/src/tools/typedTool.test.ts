@@ -167,3 +167,22 @@ describe('Fit with a site plan and no route yet', () => {
     }
   });
 });
+
+describe('a typed leg off the edge of the screen', () => {
+  it('is followed: the node just placed is brought into view at the same scale', () => {
+    const h = planHarness(emptyProject(), { width: 800, height: 500 });
+    h.store.setState({ viewport: { scale: 2, left: 0, top: 100 } }); // 400 m × 250 m on screen
+    h.command('toolDraw');
+    type(h, 'E 50 N 20'); // 100 px from the left: on screen
+    type(h, '250 @90'); // (300, 20): 600 px, on screen
+    expect(h.state().viewport).toEqual({ scale: 2, left: 0, top: 100 });
+    type(h, '300 @90'); // (600, 20): 1,200 px, off screen
+    const v = h.state().viewport;
+    expect(v.scale).toBe(2);
+    const p = toScreen(v, { x: 600, y: 20 });
+    expect(p.sx).toBeGreaterThan(40);
+    expect(p.sx).toBeLessThan(800 - 40);
+    expect(p.sy).toBeGreaterThan(40);
+    expect(p.sy).toBeLessThan(500 - 40);
+  });
+});

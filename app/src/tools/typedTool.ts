@@ -3,6 +3,7 @@ import { parseEntry } from '../format/typedEntry.js';
 import { drawWith } from './drawPointer.js';
 import { TYPED_JOIN, typedStep } from './typedPoint.js';
 import type { PlanInput, PlanOutcome } from './planInput.js';
+import { revealPoint } from './planView.js';
 
 /** Keys that, pressed over the plan with the draw tool, start a typed entry: a number or coordinates. */
 export const STARTS_ENTRY = /^[0-9.@eE]$/;
@@ -36,8 +37,11 @@ export function typedEnter(s: PlanInput): PlanOutcome {
   if (!parsed.ok) return { state: { ...s, typedError: parsed.message }, intents: [] };
   const r = typedStep(s.draw, parsed.entry, (at) => hitTest(s.project, at, TYPED_JOIN));
   if (!r.ok) return { state: { ...s, typedError: r.message }, intents: [] };
+  const placed = { ...s, draw: r.state, typed: '', typedError: null };
+  // A leg typed off the screen's edge is followed: the node just placed is brought into view.
+  const last = r.state.phase === 'drawing' ? (r.state.vertices.at(-1) ?? r.state.startPoint) : null;
   return {
-    state: { ...s, draw: r.state, typed: '', typedError: null },
+    state: last ? revealPoint(placed, last) : placed,
     intents: r.commit ? [{ kind: 'addRun', ...r.commit }] : [],
   };
 }
