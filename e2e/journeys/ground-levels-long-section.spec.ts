@@ -46,7 +46,10 @@ test('a node given a ground level places its pipe from a typed cover, and the lo
   await page.getByTestId('print-long-section').click();
   await expect.poll(() => page.evaluate(() => (window as unknown as { printed?: boolean }).printed)).toBe(true);
   const sheet = page.getByTestId('long-section-print');
-  await expect(sheet).toContainText('long section');
+  await expect(sheet).toContainText('Long section');
+  // with the project's title block, as every printed page has it
+  await expect(sheet.locator('.title-block')).toContainText('Drawing no.');
+  await expect(sheet.locator('.title-block h1')).toHaveText((await app.project()).name);
   await expect(sheet).toContainText('checked by a licensed engineer');
   await page.emulateMedia({ media: 'print' });
   await app.shot('long-section-print');

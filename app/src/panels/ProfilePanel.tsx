@@ -7,6 +7,7 @@ import { gridSpacing } from '../state/viewport.js';
 import { profileData } from './profileData.js';
 import { LongSection, SECTION_M as M, SECTION_W as W, sectionExtent, ticks } from './LongSection.js';
 import { extentOf } from '../format/extent.js';
+import { TitleBlock } from '../print/TitleBlock.js';
 
 const CASE_STYLES = [
   { stroke: '#1d6fb8', dash: '' },
@@ -26,7 +27,6 @@ export function ProfilePanel() {
   const actions = useActions();
   const data = useMemo(() => profileData(project, analysis), [project, analysis]);
   const u = useApp((s) => s.units);
-  const name = useApp((s) => s.project.name);
   const [printing, setPrinting] = useState(false);
   // Print the long section alone: it is drawn outside the app while the browser prints, then removed.
   useEffect(() => {
@@ -72,7 +72,14 @@ export function ProfilePanel() {
       {printing &&
         createPortal(
           <div className="long-section-print" data-testid="long-section-print">
-            <h1>{name} — long section</h1>
+            <TitleBlock
+              project={project}
+              units={u}
+              kind="Long section"
+              subtitle={`Main line, chainage ${show(data.points[0]?.chainage ?? 0, 'length', u, 4)} to ${show(data.points.at(-1)?.chainage ?? 0, 'length', u, 4)}`}
+              sheet="Sheet 1 of 1"
+              scale="Vertical scale as stated on the section; levels and chainages as figured"
+            />
             <LongSection data={data} analysis={analysis} units={u} />
             <p className="caution-line">{SHORT_CAUTION}</p>
           </div>,

@@ -1,8 +1,9 @@
 import { sheetOf, type Project, type UnitSystem } from '@mainbrace/solver';
 
 /**
- * The title block of every crew page: what the sheet is and which part of the route, then the
- * project's drawing fields (empty boxes to fill by hand where the project has none), units and scale.
+ * The title block of every printed page (crew sheet, long section): what the sheet is and which part
+ * of the route, then the project's drawing fields (empty boxes to fill by hand where the project has
+ * none), units and scale.
  */
 export function TitleBlock({
   project,
@@ -10,6 +11,8 @@ export function TitleBlock({
   subtitle,
   sheet,
   note,
+  kind = 'Restraint schedule — crew sheet',
+  scale = 'Sketches not to scale: build to the figured dimensions',
 }: {
   project: Project;
   units: UnitSystem;
@@ -17,6 +20,10 @@ export function TitleBlock({
   sheet: string;
   /** one line under the subtitle: the page's concrete */
   note?: string;
+  /** what the drawing is */
+  kind?: string;
+  /** how it is scaled */
+  scale?: string;
 }) {
   const s = sheetOf(project.sheet);
   const box = (label: string, value: string, id: string) => (
@@ -28,7 +35,7 @@ export function TitleBlock({
   return (
     <header className="title-block">
       <div className="tb-main">
-        <div className="sheet-kicker">Restraint schedule — crew sheet</div>
+        <div className="sheet-kicker">{kind}</div>
         <h1>{project.name}</h1>
         <div className="tb-sub">
           {subtitle} · {sheet}
@@ -49,7 +56,7 @@ export function TitleBlock({
         {box('Units', units === 'si' ? 'm, mm, m³' : 'ft-in, in, yd³', 'units')}
         <div className="tb-box tb-scale" data-field="scale">
           <span className="tb-label">Scale</span>
-          <span className="tb-value">Sketches not to scale: build to the figured dimensions</span>
+          <span className="tb-value">{scale}</span>
         </div>
       </div>
     </header>
