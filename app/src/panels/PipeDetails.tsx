@@ -1,4 +1,5 @@
 import {
+  quantityText,
   BEDDINGS,
   DEFAULT_BEDDING,
   WRAP_WORDS,
@@ -147,7 +148,7 @@ export function PipeDetails({ pipe, project }: { pipe: Pipe; project: Project })
           >
             {series.sizes.map((s) => (
               <option key={s.nominal} value={s.nominal}>
-                {s.label} — OD {show(s.outsideDiameter, 'diameter', u, 4)}
+                {s.label} — OD {quantityText(s.outsideDiameter, 'diameter', u)}
               </option>
             ))}
           </select>
