@@ -65,23 +65,28 @@ export function drawRestraints(
   height = Infinity,
 ) {
   for (const poly of scene.polygons) {
+    // The extent in plan metres, then on screen (the view only scales and flips y): no object per
+    // point, since a 10,000-fitting route measures every block to leave out those under a pixel.
     let x0 = Infinity,
       x1 = -Infinity,
       y0 = Infinity,
       y1 = -Infinity;
     for (const p of poly.points) {
-      const s = toScreen(v, p);
-      x0 = Math.min(x0, s.sx);
-      x1 = Math.max(x1, s.sx);
-      y0 = Math.min(y0, s.sy);
-      y1 = Math.max(y1, s.sy);
+      if (p.x < x0) x0 = p.x;
+      if (p.x > x1) x1 = p.x;
+      if (p.y < y0) y0 = p.y;
+      if (p.y > y1) y1 = p.y;
     }
-    if (Math.max(x1 - x0, y1 - y0) < MIN_POLYGON_PX) continue;
-    if (!segmentOnScreen(x0, y0, x1, y1, width, height)) continue;
+    const across = (x1 - x0) * v.scale;
+    const tall = (y1 - y0) * v.scale;
+    if (Math.max(across, tall) < MIN_POLYGON_PX) continue;
+    const left = (x0 - v.left) * v.scale;
+    const top = (v.top - y1) * v.scale;
+    if (!segmentOnScreen(left, top, left + across, top + tall, width, height)) continue;
     path(ctx, v, poly.points);
     ctx.fillStyle = PALETTE.blockFill;
     ctx.fill();
-    if (poly.kind === 'block' && Math.min(x1 - x0, y1 - y0) >= MIN_HATCH_PX) hatch(ctx, v, poly.points, PALETTE.block);
+    if (poly.kind === 'block' && Math.min(across, tall) >= MIN_HATCH_PX) hatch(ctx, v, poly.points, PALETTE.block);
     path(ctx, v, poly.points);
     ctx.setLineDash(poly.kind === 'pad' ? [4, 3] : []);
     ctx.strokeStyle = poly.kind === 'anchor' ? PALETTE.anchor : poly.kind === 'pad' ? PALETTE.pad : PALETTE.block;
@@ -103,37 +108,55 @@ export function drawRestraints(
 /** Pipes: blue, weighted by diameter, dashed by material; selected pipes darker with a halo. */
 export function drawPipes(ctx: Ctx, v: Viewport, scene: Pick<Scene, 'pipes'>, width = Infinity, height = Infinity) {
   ctx.lineCap = 'round';
+  // Pipes of one look are stroked as one path (a 10,000-pipe route is a few strokes, not 10,000): the
+  // halos of the selected first, then the steel pipes' dark edges, then the pipes themselves. A dash
+  // pattern starts again at each pipe, as it did with a stroke per pipe.
+  type Stroke = { style: string; lineWidth: number; dash: number[]; alpha: number; xy: number[] };
+  const strokes = new Map<string, Stroke>();
+  const add = (key: string, look: Omit<Stroke, 'xy'>, ax: number, ay: number, bx: number, by: number) => {
+    let st = strokes.get(key);
+    if (!st) strokes.set(key, (st = { ...look, xy: [] }));
+    st.xy.push(ax, ay, bx, by);
+  };
   for (const p of scene.pipes) {
-    const a = toScreen(v, p.a),
-      b = toScreen(v, p.b);
-    if (!segmentOnScreen(a.sx, a.sy, b.sx, b.sy, width, height)) continue;
+    const ax = (p.a.x - v.left) * v.scale,
+      ay = (v.top - p.a.y) * v.scale,
+      bx = (p.b.x - v.left) * v.scale,
+      by = (v.top - p.b.y) * v.scale;
+    if (!segmentOnScreen(ax, ay, bx, by, width, height)) continue;
     const w = pipeWidth(p.outsideDiameter);
-    if (p.selected) {
-      ctx.strokeStyle = PALETTE.selection;
-      ctx.lineWidth = w + 6;
-      ctx.globalAlpha = 0.35;
-      ctx.beginPath();
-      ctx.moveTo(a.sx, a.sy);
-      ctx.lineTo(b.sx, b.sy);
-      ctx.stroke();
-      ctx.globalAlpha = 1;
-    }
-    if (p.material === 'steel') {
-      ctx.strokeStyle = PALETTE.ink;
-      ctx.lineWidth = w + 2;
-      ctx.beginPath();
-      ctx.moveTo(a.sx, a.sy);
-      ctx.lineTo(b.sx, b.sy);
-      ctx.stroke();
-    }
-    ctx.strokeStyle = p.selected ? PALETTE.pipeSelected : PALETTE.pipe;
-    ctx.lineWidth = w;
-    ctx.setLineDash(MATERIAL_DASH[p.material].map((d) => d * w));
+    if (p.selected)
+      add(`0 ${w}`, { style: PALETTE.selection, lineWidth: w + 6, dash: [], alpha: 0.35 }, ax, ay, bx, by);
+    if (p.material === 'steel')
+      add(`1 ${w}`, { style: PALETTE.ink, lineWidth: w + 2, dash: [], alpha: 1 }, ax, ay, bx, by);
+    add(
+      `2 ${w} ${p.material} ${p.selected}`,
+      {
+        style: p.selected ? PALETTE.pipeSelected : PALETTE.pipe,
+        lineWidth: w,
+        dash: MATERIAL_DASH[p.material].map((d) => d * w),
+        alpha: 1,
+      },
+      ax,
+      ay,
+      bx,
+      by,
+    );
+  }
+  for (const key of [...strokes.keys()].sort()) {
+    const st = strokes.get(key)!;
+    ctx.strokeStyle = st.style;
+    ctx.lineWidth = st.lineWidth;
+    ctx.setLineDash(st.dash);
+    ctx.globalAlpha = st.alpha;
     ctx.beginPath();
-    ctx.moveTo(a.sx, a.sy);
-    ctx.lineTo(b.sx, b.sy);
+    for (let k = 0; k < st.xy.length; k += 4) {
+      ctx.moveTo(st.xy[k]!, st.xy[k + 1]!);
+      ctx.lineTo(st.xy[k + 2]!, st.xy[k + 3]!);
+    }
     ctx.stroke();
   }
+  ctx.globalAlpha = 1;
   ctx.setLineDash([]);
 }
 
