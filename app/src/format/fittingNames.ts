@@ -1,1 +1,1 @@
-export { KIND_NAME, bearingText, fittingTitle } from '@mainbrace/solver';
+export { KIND_NAME, bearingText, fittingTitle, kindName } from '@mainbrace/solver';

@@ -1,7 +1,7 @@
 import { norm, quantityText, scheduleConcrete } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
 import { show, showColumnForce } from '../format/quantity.js';
-import { KIND_NAME } from '../format/fittingNames.js';
+import { kindName } from '../format/fittingNames.js';
 import { useDiagnosticWords } from '../format/words.js';
 import { routeSummary } from '../state/routeFigures.js';
 
@@ -68,7 +68,8 @@ export function RouteSummary() {
                 <button className="link" onClick={() => actions.revealNode(f.node.id)}>
                   {f.mark}
                 </button>{' '}
-                {KIND_NAME[f.geometry.kind].toLowerCase()} — {showColumnForce(norm(f.envelope.governing.total), u)}
+                {kindName({ kind: f.geometry.kind, diagnostics: f.diagnostics }).toLowerCase()} —{' '}
+                {showColumnForce(norm(f.envelope.governing.total), u)}
               </li>
             ))}
           </ol>

@@ -92,7 +92,7 @@ export {
   COLUMN_UNITS,
   type ColumnKind,
 } from './schedule/columnUnits.js';
-export { KIND_NAME, bearingText, compassPoint, fittingTitle, angleText } from './schedule/fittingNames.js';
+export { KIND_NAME, bearingText, compassPoint, fittingTitle, angleText, kindName } from './schedule/fittingNames.js';
 export { DIAGNOSTIC_CODES, type CodeSpec } from './diagnostics/codes.js';
 export type { CodeMeaning, CodeMeanings } from './diagnostics/codeMeanings.js';
 export {

@@ -3,7 +3,7 @@ import { analyse } from './analyse.js';
 import { route } from '../../test/projectBuilder.js';
 import { RUN_TOLERANCE } from '../network/fittingKind.js';
 import { scheduleOf } from '../schedule/scheduleRows.js';
-import { fittingTitle } from '../schedule/fittingNames.js';
+import { fittingTitle, kindName } from '../schedule/fittingNames.js';
 import { takeOff } from '../schedule/quantities.js';
 
 /**
@@ -54,6 +54,10 @@ describe('a three-pipe junction whose run is not straight', () => {
     const j = rows.find((f) => f.node === 'j')!;
     // the branch is square to the incoming pipe; the run turns 33.69° (hand calculation above)
     expect(fittingTitle(j)).toBe('Junction, run turns 33.7°, branch at 90°');
+    // the kind alone (the route summary's list of largest thrusts) says junction too; a straight run's tee stays a tee
+    expect(kindName(j)).toBe('Junction');
+    const tee = scheduleOf(analyse(junction(40, 0))).fittings.find((f) => f.node === 'j')!;
+    expect(kindName(tee)).toBe('Tee');
     const fittings = takeOff(rows, project, 'si').fittings.map((l) => l.fitting);
     expect(fittings.some((t) => t.startsWith('Junction, run turns 33.7°'))).toBe(true);
     expect(fittings.some((t) => t.startsWith('Wye'))).toBe(false);

@@ -27,6 +27,16 @@ export const bearingText = (deg: number | null): string =>
 /** Deflection as an engineer writes it: 22.5°, 11.25°, 90°. */
 export const angleText = (deg: number): string => `${Math.round(deg * 100) / 100}°`;
 
+type Findings = readonly { code: string; values: Readonly<Record<string, number>> }[];
+
+/** The degrees a junction's run turns (its fitting.bent-run finding), or undefined. */
+const runTurnOf = (diagnostics: Findings | undefined): number | undefined =>
+  diagnostics?.find((d) => d.code === 'fitting.bent-run')?.values.turn;
+
+/** The fitting's kind as a crew names it: a junction whose run turns is a junction, not a wye to order. */
+export const kindName = (g: { kind: FittingKind; diagnostics?: Findings }): string =>
+  runTurnOf(g.diagnostics) !== undefined ? 'Junction' : KIND_NAME[g.kind];
+
 /**
  * "Bend 45°", "Bend 16.31° crest", "Tee, branch 90°", "Dead end": the fitting as a crew names it; a bend
  * with a vertical part says whether it is a crest (thrust up) or a sag (thrust down).
@@ -37,10 +47,10 @@ export function fittingTitle(g: {
   branchAngle: number | null;
   profile?: 'crest' | 'sag' | null;
   /** the fitting's findings: a junction whose run turns (fitting.bent-run) is named as one, not a wye */
-  diagnostics?: readonly { code: string; values: Readonly<Record<string, number>> }[];
+  diagnostics?: Findings;
 }): string {
-  const turn = g.diagnostics?.find((d) => d.code === 'fitting.bent-run')?.values.turn;
-  const name = turn !== undefined ? `Junction, run turns ${Math.round(turn * 10) / 10}°` : KIND_NAME[g.kind];
+  const turn = runTurnOf(g.diagnostics);
+  const name = turn !== undefined ? `Junction, run turns ${Math.round(turn * 10) / 10}°` : kindName(g);
   if (g.deflection !== null && g.kind !== 'valve' && g.kind !== 'reducer')
     return `${name} ${angleText(g.deflection)}${g.profile ? ` ${g.profile}` : ''}`;
   // A branch's angle in space takes the grades of both pipes (a spur square to a main in plan reads
