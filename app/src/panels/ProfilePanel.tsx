@@ -128,6 +128,7 @@ export function ProfilePanel() {
           chainage along the main line — gauge pressure at the pipe
         </text>
       </svg>
+      <p className="caution-foot">{SHORT_CAUTION}</p>
     </figure>
   );
 }

@@ -1,6 +1,7 @@
 import {
   LIMITS,
   REGISTER,
+  SHORT_CAUTION,
   notVerifiedText,
   sheetOf,
   takeOff,
@@ -86,6 +87,7 @@ export function SheetPanel() {
         />
         <TakeOffTable rows={takeOffRows(t, units)} />
       </section>
+      <p className="caution-foot">{SHORT_CAUTION}</p>
     </div>
   );
 }
