@@ -1,5 +1,5 @@
 import type { UnitSystem } from '@mainbrace/solver';
-import type { Scene } from './planScene.js';
+import type { Scene, ScenePolygon } from './planScene.js';
 import { toScreen, type Viewport } from '../state/viewport.js';
 import { LINE, MATERIAL_DASH, PALETTE, TYPE, pipeWidth } from './palette.js';
 import type { LabelSpace } from './labelSpace.js';
@@ -22,10 +22,16 @@ export const ARROW_PX = 72;
 
 function path(ctx: Ctx, v: Viewport, pts: readonly { x: number; y: number }[]) {
   ctx.beginPath();
+  addPolygon(ctx, v, pts);
+}
+
+/** A closed polygon added to the current path. */
+function addPolygon(ctx: Ctx, v: Viewport, pts: readonly { x: number; y: number }[]) {
   pts.forEach((p, i) => {
-    const s = toScreen(v, p);
-    if (i === 0) ctx.moveTo(s.sx, s.sy);
-    else ctx.lineTo(s.sx, s.sy);
+    const sx = (p.x - v.left) * v.scale,
+      sy = (v.top - p.y) * v.scale;
+    if (i === 0) ctx.moveTo(sx, sy);
+    else ctx.lineTo(sx, sy);
   });
   ctx.closePath();
 }
@@ -64,6 +70,7 @@ export function drawRestraints(
   width = Infinity,
   height = Infinity,
 ) {
+  const shown: { poly: ScenePolygon; hatched: boolean }[] = [];
   for (const poly of scene.polygons) {
     // The extent in plan metres, then on screen (the view only scales and flips y): no object per
     // point, since a 10,000-fitting route measures every block to leave out those under a pixel.
@@ -83,25 +90,37 @@ export function drawRestraints(
     const left = (x0 - v.left) * v.scale;
     const top = (v.top - y1) * v.scale;
     if (!segmentOnScreen(left, top, left + across, top + tall, width, height)) continue;
-    path(ctx, v, poly.points);
-    ctx.fillStyle = PALETTE.blockFill;
-    ctx.fill();
-    if (poly.kind === 'block' && Math.min(across, tall) >= MIN_HATCH_PX) hatch(ctx, v, poly.points, PALETTE.block);
-    path(ctx, v, poly.points);
-    ctx.setLineDash(poly.kind === 'pad' ? [4, 3] : []);
-    ctx.strokeStyle = poly.kind === 'anchor' ? PALETTE.anchor : poly.kind === 'pad' ? PALETTE.pad : PALETTE.block;
-    ctx.lineWidth = poly.kind === 'anchor' ? LINE.anchor : LINE.block;
+    shown.push({ poly, hatched: poly.kind === 'block' && Math.min(across, tall) >= MIN_HATCH_PX });
+  }
+  // One fill for every piece, the hatching of blocks large enough, then one outline per kind: a
+  // route's thousands of blocks are a few paths, not a fill and a stroke each.
+  const outline = (list: readonly { poly: ScenePolygon }[]) => {
+    ctx.beginPath();
+    for (const { poly } of list) addPolygon(ctx, v, poly.points);
+  };
+  outline(shown);
+  ctx.fillStyle = PALETTE.blockFill;
+  ctx.fill();
+  for (const s of shown) if (s.hatched) hatch(ctx, v, s.poly.points, PALETTE.block);
+  for (const kind of ['block', 'anchor', 'pad'] as const) {
+    const of = shown.filter((s) => s.poly.kind === kind);
+    if (!of.length) continue;
+    outline(of);
+    ctx.setLineDash(kind === 'pad' ? [4, 3] : []);
+    ctx.strokeStyle = kind === 'anchor' ? PALETTE.anchor : kind === 'pad' ? PALETTE.pad : PALETTE.block;
+    ctx.lineWidth = kind === 'anchor' ? LINE.anchor : LINE.block;
     ctx.stroke();
     ctx.setLineDash([]);
-    if (poly.kind === 'anchor') {
+    if (kind !== 'anchor') continue;
+    ctx.beginPath();
+    for (const { poly } of of) {
       const [a, b, c, d] = poly.points.map((p) => toScreen(v, p));
-      ctx.beginPath();
       ctx.moveTo(a!.sx, a!.sy);
       ctx.lineTo(c!.sx, c!.sy);
       ctx.moveTo(b!.sx, b!.sy);
       ctx.lineTo(d!.sx, d!.sy);
-      ctx.stroke();
     }
+    ctx.stroke();
   }
 }
 
@@ -113,9 +132,10 @@ export function drawPipes(ctx: Ctx, v: Viewport, scene: Pick<Scene, 'pipes'>, wi
   // pattern starts again at each pipe, as it did with a stroke per pipe.
   type Stroke = { style: string; lineWidth: number; dash: number[]; alpha: number; xy: number[] };
   const strokes = new Map<string, Stroke>();
-  const add = (key: string, look: Omit<Stroke, 'xy'>, ax: number, ay: number, bx: number, by: number) => {
+  // the look is made once per group, not once per pipe
+  const add = (key: string, look: () => Omit<Stroke, 'xy'>, ax: number, ay: number, bx: number, by: number) => {
     let st = strokes.get(key);
-    if (!st) strokes.set(key, (st = { ...look, xy: [] }));
+    if (!st) strokes.set(key, (st = { ...look(), xy: [] }));
     st.xy.push(ax, ay, bx, by);
   };
   for (const p of scene.pipes) {
@@ -126,17 +146,17 @@ export function drawPipes(ctx: Ctx, v: Viewport, scene: Pick<Scene, 'pipes'>, wi
     if (!segmentOnScreen(ax, ay, bx, by, width, height)) continue;
     const w = pipeWidth(p.outsideDiameter);
     if (p.selected)
-      add(`0 ${w}`, { style: PALETTE.selection, lineWidth: w + 6, dash: [], alpha: 0.35 }, ax, ay, bx, by);
+      add(`0 ${w}`, () => ({ style: PALETTE.selection, lineWidth: w + 6, dash: [], alpha: 0.35 }), ax, ay, bx, by);
     if (p.material === 'steel')
-      add(`1 ${w}`, { style: PALETTE.ink, lineWidth: w + 2, dash: [], alpha: 1 }, ax, ay, bx, by);
+      add(`1 ${w}`, () => ({ style: PALETTE.ink, lineWidth: w + 2, dash: [], alpha: 1 }), ax, ay, bx, by);
     add(
       `2 ${w} ${p.material} ${p.selected}`,
-      {
+      () => ({
         style: p.selected ? PALETTE.pipeSelected : PALETTE.pipe,
         lineWidth: w,
         dash: MATERIAL_DASH[p.material].map((d) => d * w),
         alpha: 1,
-      },
+      }),
       ax,
       ay,
       bx,
