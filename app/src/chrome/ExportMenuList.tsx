@@ -1,4 +1,4 @@
-import { useEffect, type RefObject } from 'react';
+import { useLayoutEffect, type RefObject } from 'react';
 import { ACTIONS, titleOf, type ActionName } from './actionTable.js';
 
 /**
@@ -16,7 +16,9 @@ export function ExportMenuList({
   box: RefObject<HTMLDivElement | null>;
   button: RefObject<HTMLButtonElement | null>;
 }) {
-  useEffect(() => {
+  // Listening from the commit, before the list is painted: a key pressed as soon as the list shows
+  // (a passive effect may run a frame later on a busy page) still closes it.
+  useLayoutEffect(() => {
     const away = (e: PointerEvent) => {
       if (!box.current?.contains(e.target as Node)) close();
     };
