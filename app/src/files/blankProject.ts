@@ -8,6 +8,7 @@ import {
   type Project,
   type UnitSystem,
 } from '@mainbrace/solver';
+import { FIRST_NODE } from '../state/documentEdits.js';
 
 /**
  * The defaults that are round figures in their own system: the same choices (pressures, datum, block
@@ -19,18 +20,15 @@ const DEFAULTS: Record<
   UnitSystem,
   {
     pressures: [working: number, surge: number, test: number];
-    datum: number;
     design: Pick<Project['design'], 'concreteUnitWeight' | 'blockDepth' | 'dimensionStep' | 'layingLength'>;
   }
 > = {
   si: {
     pressures: [600e3, 900e3, 1000e3],
-    datum: 100,
     design: { concreteUnitWeight: 23600, blockDepth: 0.6, dimensionStep: 0.05, layingLength: 6 },
   },
   us: {
     pressures: [85 * PSI, 130 * PSI, 145 * PSI],
-    datum: 330 * FOOT,
     design: {
       concreteUnitWeight: 150 * POUND_PER_CUBIC_FOOT_WEIGHT,
       blockDepth: 2 * FOOT,
@@ -43,6 +41,8 @@ const DEFAULTS: Record<
 /** A project with no route: the usual three cases and one soil, ready to draw on, in `units`. */
 export function blankProject(units: UnitSystem = 'si'): Project {
   const d = DEFAULTS[units];
+  // the cases are stated at the level a first node takes, so a route drawn flat reads them as given
+  const datum = FIRST_NODE[units].elevation;
   const [working, surge, test] = d.pressures;
   return {
     format: 'mainbrace-project',
@@ -60,9 +60,9 @@ export function blankProject(units: UnitSystem = 'si'): Project {
       ...d.design,
     },
     loadCases: [
-      { id: 'working', label: 'Working', kind: 'working', pressure: working, datumElevation: d.datum, flowFactor: 1 },
-      { id: 'surge', label: 'Working + surge', kind: 'surge', pressure: surge, datumElevation: d.datum, flowFactor: 1 },
-      { id: 'test', label: 'Field test', kind: 'test', pressure: test, datumElevation: d.datum, flowFactor: 0 },
+      { id: 'working', label: 'Working', kind: 'working', pressure: working, datumElevation: datum, flowFactor: 1 },
+      { id: 'surge', label: 'Working + surge', kind: 'surge', pressure: surge, datumElevation: datum, flowFactor: 1 },
+      { id: 'test', label: 'Field test', kind: 'test', pressure: test, datumElevation: datum, flowFactor: 0 },
     ],
     // The common-practice sand class, as a project soil: a modest bearing until the user gives site data.
     soils: [{ ...librarySoilToProject(findLibrarySoil('sand-cp')!, 'sand'), label: 'Sand' }],

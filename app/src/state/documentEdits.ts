@@ -94,9 +94,12 @@ export function splitPipe(project: Project, pipeId: string, at: PlanPoint): { pr
 
 /**
  * A new node's level and cover where no neighbour gives them, as round figures in the project's units:
- * 100 m and 1.2 m, or 330 ft (the new US project's datum) and 4 ft.
+ * 100 m and 1.2 m, or 330 ft and 4 ft. A new project's cases are stated at that level (blankProject.ts).
  */
-const FIRST_NODE = { si: { elevation: 100, cover: 1.2 }, us: { elevation: 330 * FOOT, cover: 4 * FOOT } } as const;
+export const FIRST_NODE = {
+  si: { elevation: 100, cover: 1.2 },
+  us: { elevation: 330 * FOOT, cover: 4 * FOOT },
+} as const;
 
 /** A new node at a point, inheriting elevation, cover and soil from a neighbour where there is one. */
 function freeNode(id: string, at: PlanPoint, like: ProjectNode | undefined, units: UnitSystem): ProjectNode {
