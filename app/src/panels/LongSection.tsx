@@ -4,6 +4,7 @@ import { gridSpacing } from '../state/viewport.js';
 import type { ProfileData, ProfilePoint } from './profileData.js';
 import { sectionWindow } from './sectionScale.js';
 import { extentOf } from '../format/extent.js';
+import { placeLabels, type Box, type LabelSpot, type LabelWish } from './labelPlacement.js';
 
 export const SECTION_W = 980;
 export const SECTION_M = { left: 70, right: 190, top: 14, bottom: 22 };
@@ -60,35 +61,111 @@ export function LongSection({
     pts.map((p, i) => `${i ? 'L' : 'M'}${sx(p.chainage).toFixed(1)} ${sz(p[key]).toFixed(1)}`).join(' ');
   const exText = exaggeration >= 1 ? `${exaggeration}` : exaggeration.toString();
 
+  // Every label is placed clear of the fittings, the bend glyphs and the labels placed before it: the
+  // main's marks first, then the branches', the branches' names, and last the bend words (the glyph
+  // alone says crest or sag when its word has no room).
+  const marked = [
+    ...data.points.filter((p) => p.mark),
+    ...data.branches.flatMap((b) => b.points.filter((p, i) => p.mark && i > 0)),
+  ];
+  const bent = [...data.points, ...data.branches.flatMap((b) => b.points)].filter((p) => p.bend);
+  const glyph = (p: ProfilePoint) => ({ x: sx(p.chainage), y: sz(p.ground) });
+  const blocked: Box[] = [
+    ...marked.map((p) => ({ x0: sx(p.chainage) - 5, y0: sz(p.pipe) - 5, x1: sx(p.chainage) + 5, y1: sz(p.pipe) + 5 })),
+    ...bent.map((p) => ({ x0: glyph(p).x - 6, y0: glyph(p).y - 17, x1: glyph(p).x + 6, y1: glyph(p).y - 9 })),
+  ];
+  const wishes: LabelWish[] = [
+    ...marked.map((p, i) => {
+      const x = sx(p.chainage);
+      const y = sz(p.pipe);
+      const above: LabelSpot = { x, y: y - 9, anchor: 'middle' };
+      const below: LabelSpot = { x, y: y + 17, anchor: 'middle' };
+      return {
+        key: `mark-${p.node}`,
+        text: p.mark!,
+        size: 10.5,
+        spots: [
+          ...(i % 2 ? [below, above] : [above, below]),
+          { x: x + 7, y: y + 4, anchor: 'start' as const },
+          { x: x - 7, y: y + 4, anchor: 'end' as const },
+          { x, y: y - 21, anchor: 'middle' as const },
+          { x, y: y + 29, anchor: 'middle' as const },
+        ],
+      };
+    }),
+    ...data.branches.map((b) => {
+      const end = b.points[b.points.length - 1]!;
+      const x = sx(end.chainage);
+      const y = sz(end.pipe);
+      return {
+        key: `branch-${b.letter}`,
+        text: `run ${b.letter} from ${analysis.marks.get(b.from) ?? b.from}`,
+        size: 9,
+        spots: [
+          { x: x + 4, y: y - 6, anchor: 'start' as const },
+          { x: x + 4, y: y + 12, anchor: 'start' as const },
+          { x: x - 4, y: y - 6, anchor: 'end' as const },
+          { x: x - 4, y: y + 12, anchor: 'end' as const },
+          { x, y: y - 20, anchor: 'middle' as const },
+          { x, y: y + 26, anchor: 'middle' as const },
+          { x: x - 4, y: y - 20, anchor: 'end' as const },
+          { x: x - 4, y: y + 26, anchor: 'end' as const },
+        ],
+      };
+    }),
+    ...bent.map((p) => ({
+      key: `bend-${p.node}`,
+      text: p.bend!,
+      size: 8.5,
+      spots: [{ x: glyph(p).x, y: glyph(p).y - 19, anchor: 'middle' as const }],
+      optional: true,
+    })),
+  ];
+  const frame = { x0: M.left, y0: 0, x1: W - M.right, y1: H - M.bottom };
+  const placed = new Map(placeLabels(wishes, blocked, frame).map((l) => [l.key, l]));
+  const at = (key: string) => placed.get(key);
+
   const marks = (pts: ProfilePoint[], branch: boolean) =>
     pts
       .filter((p, i) => p.mark && !(branch && i === 0))
-      .map((p, i) => (
-        <g key={p.node} className="profile-fitting" onClick={() => onSelect?.(p.node)}>
-          <circle cx={sx(p.chainage)} cy={sz(p.pipe)} r="4" />
-          <text x={sx(p.chainage)} y={sz(p.pipe) + (i % 2 ? 17 : -9)} textAnchor="middle" className="profile-mark">
-            {p.mark}
-          </text>
-          <title>{`${p.mark}: pipe at ${show(p.pipe, 'elevation', u, 4)}, ground ${show(p.ground, 'elevation', u, 4)}, design pressure ${show(analysis.byNode.get(p.node)!.envelope.pressure, 'pressure', u)}`}</title>
-        </g>
-      ));
+      .map((p) => {
+        const label = at(`mark-${p.node}`);
+        return (
+          <g key={p.node} className="profile-fitting" onClick={() => onSelect?.(p.node)}>
+            <circle cx={sx(p.chainage)} cy={sz(p.pipe)} r="4" />
+            {label && (
+              <text x={label.x} y={label.y} textAnchor={label.anchor} className="profile-mark">
+                {p.mark}
+              </text>
+            )}
+            <title>{`${p.mark}: pipe at ${show(p.pipe, 'elevation', u, 4)}, ground ${show(p.ground, 'elevation', u, 4)}, design pressure ${show(analysis.byNode.get(p.node)!.envelope.pressure, 'pressure', u)}`}</title>
+          </g>
+        );
+      });
   const bends = (pts: ProfilePoint[]) =>
     pts
       .filter((p) => p.bend)
-      .map((p) => (
-        <g key={`bend-${p.node}`} className={`profile-bend profile-${p.bend}`} data-testid={`section-${p.bend}`}>
-          <path
-            d={
-              p.bend === 'crest'
-                ? `M${sx(p.chainage) - 5} ${sz(p.ground) - 10} L${sx(p.chainage)} ${sz(p.ground) - 16} L${sx(p.chainage) + 5} ${sz(p.ground) - 10}`
-                : `M${sx(p.chainage) - 5} ${sz(p.ground) - 16} L${sx(p.chainage)} ${sz(p.ground) - 10} L${sx(p.chainage) + 5} ${sz(p.ground) - 16}`
-            }
-          />
-          <text x={sx(p.chainage)} y={sz(p.ground) - 19} textAnchor="middle" className="profile-bend-label">
-            {p.bend}
-          </text>
-        </g>
-      ));
+      .map((p) => {
+        const { x, y } = glyph(p);
+        const label = at(`bend-${p.node}`);
+        return (
+          <g key={`bend-${p.node}`} className={`profile-bend profile-${p.bend}`} data-testid={`section-${p.bend}`}>
+            <path
+              d={
+                p.bend === 'crest'
+                  ? `M${x - 5} ${y - 10} L${x} ${y - 16} L${x + 5} ${y - 10}`
+                  : `M${x - 5} ${y - 16} L${x} ${y - 10} L${x + 5} ${y - 16}`
+              }
+            />
+            {label && (
+              <text x={label.x} y={label.y} textAnchor={label.anchor} className="profile-bend-label">
+                {p.bend}
+              </text>
+            )}
+            <title>{p.bend === 'crest' ? 'crest: the grade turns down' : 'sag: the grade turns up'}</title>
+          </g>
+        );
+      });
   const legend = (y: number, cls: string, text: string) => (
     <g>
       <line x1={W - M.right + 8} x2={W - M.right + 28} y1={y} y2={y} className={cls} />
@@ -134,17 +211,21 @@ export function LongSection({
       {marks(data.points, false)}
       {bends(data.points)}
       {/* Over the main, with a halo: a branch laid at the main's level runs along it. */}
-      {data.branches.map((b) => (
-        <text
-          key={b.letter}
-          x={sx(b.points[b.points.length - 1]!.chainage) + 4}
-          y={sz(b.points[b.points.length - 1]!.pipe) - 6}
-          className="profile-label profile-branch-label"
-          data-testid={`section-branch-label-${b.letter}`}
-        >
-          {`run ${b.letter} from ${analysis.marks.get(b.from) ?? b.from}`}
-        </text>
-      ))}
+      {data.branches.map((b) => {
+        const label = at(`branch-${b.letter}`)!;
+        return (
+          <text
+            key={b.letter}
+            x={label.x}
+            y={label.y}
+            textAnchor={label.anchor}
+            className="profile-label profile-branch-label"
+            data-testid={`section-branch-label-${b.letter}`}
+          >
+            {label.text}
+          </text>
+        );
+      })}
       <text x={W - M.right + 8} y={M.top + 8} className="profile-label profile-label-strong">
         Long section
       </text>
