@@ -123,9 +123,9 @@ describe('the CSV words its warnings in the display units, as the print words it
     const records = csvRecords(scheduleCsv(view));
     const warnings = records[0]!.indexOf('Warnings');
     const a10 = records.find((r) => r[0] === 'A10')![warnings]!.split(' | ');
-    // The demo's A10 block face is 0.90 m = 35.4 in, shown 3 ft (its Face width cell); its trench is
+    // The demo's A10 block face is 0.95 m = 37.4 in, shown 3 ft 2 in (its Face width cell); its trench is
     // 0.874 m = 34.4 in, a built width rounded up to 35 in = 2 ft 11 in (columnUnits.ts, built lengths).
-    expect(a10[0]).toMatch(/^Bearing face 3 ft wide is wider than the 2 ft 11 in trench/);
+    expect(a10[0]).toMatch(/^Bearing face 3 ft 2 in wide is wider than the 2 ft 11 in trench/);
     expect(a10[1]).toMatch(/^The thrust reverses between load states \(up to [\d.]+ kip the other way\)/);
     // The print's notes of A10 (on a later sheet, made a few at a time) are the same sentences.
     const printed = () => [...container.querySelectorAll('.sheet-notes li')].map((li) => li.textContent!);

@@ -112,6 +112,15 @@ export const REGISTER = {
     source: 'Mainbrace rule for the face-width check',
     verified: true,
   },
+  'block.pipe-through-face': {
+    quantity:
+      'A pipe leaving the fitting through the bearing face (within the across-trench angle of the bearing direction) takes its outside area π·OD²/4 from the face: the required face is SF·T/σ_b + π·OD²/4',
+    value: null,
+    unit: '—',
+    kind: 'own rule',
+    source: 'Mainbrace rule: the soil does not bear where the pipe passes through the face',
+    verified: true,
+  },
   'block.bearing-area': {
     quantity: 'Required bearing area A = SF·T/σ_b',
     value: null,

@@ -17,6 +17,7 @@ export const VALUES: { readonly [K in ProvenanceId]: (typeof REGISTER)[K]['value
   'pad.thickness': 0.15,
   'trench.clearance': 0.3,
   'block.across-trench': 30,
+  'block.pipe-through-face': null,
   'block.bearing-area': null,
   'block.face-rule': null,
   'block.thickest': 2,

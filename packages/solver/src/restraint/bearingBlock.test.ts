@@ -8,6 +8,7 @@ const FT2 = FOOT * FOOT;
 const base = (over: Partial<BearingBlockInput> = {}): BearingBlockInput => ({
   thrust: 29_030 * LBF,
   direction: [1, 0, 0],
+  pipeThroughFace: 0,
   allowableBearing: 1500 * PSF,
   safetyFactor: 1.5,
   outsideDiameter: 13.2 * INCH,
@@ -21,6 +22,22 @@ const base = (over: Partial<BearingBlockInput> = {}): BearingBlockInput => ({
 });
 
 describe('bearing block area A = SF·T/σ (DIPRA form; docs/check-values.md CV-11, CV-12)', () => {
+  it('adds the area of a pipe that runs through the face, where the soil does not bear', () => {
+    // Hand calculation: a DN 200 × DN 150 reducer at 1.1 MPa, T = p·(A₁ − A₂) with the outside
+    // areas of OD 222 mm and 170 mm (EN 545 ductile iron, from memory): 1.1e6 × (0.038708 − 0.022698)
+    // = 17.61 kN; SF 1.5 on 75 kPa needs 0.3522 m² of soil, and the DN 150 pipe leaves through the face,
+    // so the face itself must be 0.3522 + 0.0227 = 0.3749 m².
+    const pipe = (Math.PI * 0.17 ** 2) / 4;
+    const thrust = 1.1e6 * ((Math.PI * 0.222 ** 2) / 4 - pipe);
+    const over = { thrust, allowableBearing: 75e3, outsideDiameter: 0.222, cover: 1.2, step: 0.05 };
+    const solid = sizeBearingBlock(base(over)).block!;
+    const through = sizeBearingBlock(base({ ...over, pipeThroughFace: pipe })).block!;
+    expectClose(solid.bearingArea, 0.3522, 1e-3);
+    expectClose(through.bearingArea, 0.3749, 1e-3);
+    expect(through.faceWidth * through.faceHeight - pipe).toBeGreaterThanOrEqual((1.5 * thrust) / 75e3);
+    expect(solid.faceWidth * solid.faceHeight - pipe).toBeLessThan((1.5 * thrust) / 75e3);
+  });
+
   it('29,030 lb at SF 1.5 on 1,500 psf silt needs 29.03 ft² (CV-11)', () => {
     expectClose(sizeBearingBlock(base()).block!.bearingArea / FT2, 29.03, 1e-4);
   });

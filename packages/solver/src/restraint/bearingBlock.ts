@@ -18,6 +18,8 @@ export interface BearingBlockInput {
   thrust: number;
   /** unit plan vector of that thrust: the block bears on the soil in this direction */
   direction: Vec3;
+  /** m², outside area of the pipes that run through the face, where the soil does not bear */
+  pipeThroughFace: number;
   /** Pa, allowable horizontal bearing at the face centroid */
   allowableBearing: number;
   safetyFactor: number;
@@ -122,7 +124,7 @@ function termsFor(
 }
 
 export interface BearingBlock {
-  /** m², required bearing area SF·T/σ */
+  /** m², required face area: SF·T/σ, and the area of any pipe that runs through the face */
   bearingArea: number;
   /** m, horizontal width of the bearing face, normal to the thrust */
   faceWidth: number;
@@ -156,7 +158,7 @@ export interface BearingBlock {
 export interface BlockResult {
   /** the block, or null where none within the limits holds */
   block: BearingBlock | null;
-  /** m², required bearing area SF·T/σ */
+  /** m², required face area: SF·T/σ, and the area of any pipe that runs through the face */
   bearingArea: number;
   steps: CalcStep[];
   diagnostics: Diagnostic[];
@@ -245,7 +247,7 @@ function faceResistance(i: BearingBlockInput, centreDepth: number, f: Face) {
  */
 export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
   const diagnostics: Diagnostic[] = [];
-  const area = (i.safetyFactor * i.thrust) / i.allowableBearing;
+  const area = (i.safetyFactor * i.thrust) / i.allowableBearing + i.pipeThroughFace;
   const centreDepth = i.cover + i.outsideDiameter / 2;
   const limits = VALUES['block.face-limits'];
   // Face centred on the pipe: h ≤ (centreDepth + h/2)/2 gives h ≤ 2/3 of the centreline depth.
@@ -390,11 +392,14 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
     : [
         {
           title: 'Required bearing area',
-          formula: 'A = SF · T_h / σ_b',
+          formula: i.pipeThroughFace > 0 ? 'A = SF · T_h / σ_b + A_p' : 'A = SF · T_h / σ_b',
           inputs: [
             value('T_h', 'largest horizontal thrust', i.thrust, 'force', 'momentum balance'),
             value('SF', 'bearing safety factor', i.safetyFactor, 'ratio', 'project design'),
             value('σ_b', 'allowable horizontal bearing', i.allowableBearing, 'stress', 'soil'),
+            ...(i.pipeThroughFace > 0
+              ? [value('A_p', 'pipe through the face, π·OD²/4 (no bearing there)', i.pipeThroughFace, 'area', 'pipes')]
+              : []),
           ],
           result: value('A', 'required bearing area', area, 'area', 'computed'),
           reference: DIPRA_AREA,

@@ -55,6 +55,22 @@ export const blockBaseDown = (
  * bend). A block behind a tee or wye bears on the side wall of the run's trench instead: its face runs
  * along that trench and is not limited by its width.
  */
+/**
+ * m², the outside area of the pipes that pass through a bearing face: those leaving the fitting within
+ * the across-trench angle of the bearing direction (a reducer's smaller pipe, a valve's far pipe). The
+ * soil does not bear where the pipe runs through, so the face must be larger by that much.
+ */
+function pipeThroughFace(direction: Vec3, legs: readonly Leg[]): number {
+  const limit = VALUES['block.across-trench'];
+  let area = 0;
+  for (const l of legs) {
+    const plan = horizontal(l.direction);
+    if (horizontalNorm(plan) < 1e-9 || !(angleBetween(direction, plan) < limit)) continue;
+    area += (Math.PI * l.pipe.outsideDiameter * l.pipe.outsideDiameter) / 4;
+  }
+  return area;
+}
+
 function acrossTrench(direction: Vec3, legs: readonly Leg[]): boolean {
   const limit = VALUES['block.across-trench'];
   // One pass, no arrays: asked for every block of every fitting.
@@ -275,6 +291,7 @@ function sizeBlocks(
       trenchWidth: across ? site.trenchWidth : undefined,
       thrust: force,
       direction,
+      pipeThroughFace: pipeThroughFace(direction, legs),
       allowableBearing: allowable,
       safetyFactor: design.bearingSafetyFactor,
       outsideDiameter: site.od,

@@ -67,8 +67,8 @@ describe('quantities take-off', () => {
       expect(scheduleView(a, units, CODE_MEANINGS).concrete).toBeCloseTo(t.concreteNet, 12);
       expect(scheduleConcrete(a, units)).toBe(scheduleView(a, units, CODE_MEANINGS).concrete);
     }
-    // By hand from the take-off's lines (m³, each piece rounded up to 0.01): 3.04 + 0.57 + 3.69 + 0.18.
-    expect(scheduleView(a, 'si', CODE_MEANINGS).concrete).toBeCloseTo(7.48, 12);
+    // By hand from the take-off's lines (m³, each piece rounded up to 0.01): 3.17 + 0.60 + 3.69 + 0.18.
+    expect(scheduleView(a, 'si', CODE_MEANINGS).concrete).toBeCloseTo(7.64, 12);
     // Each row's concrete is its own pieces: the sag bends' rows carry block and pad.
     const view = scheduleView(a, 'si', CODE_MEANINGS);
     const sags = view.rows.filter((r) => r.fitting.restraint.trenchBottom);

@@ -46,8 +46,13 @@ describe('valves and thrusts that change direction between load states', () => {
     expect(f.envelope.reverse!.direction[0]).toBeCloseTo(-1, 12);
     expect(f.restraint.block!.direction[0]).toBeCloseTo(1, 12);
     expect(f.restraint.reverseBlock!.direction[0]).toBeCloseTo(-1, 12);
-    // A = SF·T/σ for each block, σ = the test soil's 4,000 psf
-    expectClose(f.restraint.reverseBlock!.bearingArea / f.restraint.block!.bearingArea, (0.222 / 0.326) ** 2, 1e-9);
+    // A = SF·T/σ + A_p for each block, σ = the test soil's 4,000 psf: each face has the other side's
+    // pipe running through it (the block bearing +x is crossed by the DN200, the one bearing −x by the DN300)
+    expectClose(
+      (f.restraint.reverseBlock!.bearingArea - area(0.326)) / (f.restraint.block!.bearingArea - area(0.222)),
+      (0.222 / 0.326) ** 2,
+      1e-9,
+    );
   });
 
   it('restrains both pipes of a closed valve on restrained joints, each for its own side (L = S_f·p·A/F_s)', () => {
