@@ -60,6 +60,22 @@ describe('GeoJSON export', () => {
     expect(blocks[0]!.properties.concreteVolume_m3).toBeGreaterThan(0);
   });
 
+  it('sets a block’s point half its thickness from the fitting centre, as the schedule sets it out', () => {
+    // docs/project-format.md: the block's thickness runs from the fitting's centreline to the bearing
+    // face, so its middle is thickness / 2 from the fitting (geodesic distance on the ground, 1 cm).
+    const fc = exported();
+    const fittings = fc.features.filter((f) => f.properties.layer === 'fitting');
+    const blocks = fc.features.filter((f) => f.properties.layer === 'thrust-block');
+    expect(blocks.length).toBeGreaterThan(0);
+    for (const b of blocks) {
+      const fit = fittings.find((f) => f.properties.mark === b.properties.mark)!;
+      const [x1, y1] = fit.geometry.coordinates as number[];
+      const [x2, y2] = b.geometry.coordinates as number[];
+      const s = Geodesic.WGS84.Inverse(y1!, x1!, y2!, x2!).s12!;
+      expect(s).toBeCloseTo((b.properties.thickness_m as number) / 2, 2);
+    }
+  });
+
   it('draws a restrained zone as long on the ground as its computed length (geodesic length, 1 cm)', () => {
     const fc = exported(true);
     const zones = fc.features.filter((f) => f.properties.layer === 'restrained-zone');

@@ -2,6 +2,7 @@ import type { Project } from '../model/projectSchema.js';
 import { analyse } from '../analysis/analyse.js';
 import { scheduleOf } from '../schedule/scheduleRows.js';
 import { elementName } from '../schedule/restraintElements.js';
+import { settingOut } from '../schedule/settingOut.js';
 import { CAUTIONS } from '../schedule/cautions.js';
 import { projectionOf } from './localProjection.js';
 
@@ -96,15 +97,14 @@ export function designGeoJson(project: Project): ExportResult {
       adequate,
       warnings: f.warnings,
     });
-    const od = Math.max(...f.pipes.map((p) => p.outsideDiameter));
-    for (const [kind, block] of [
-      ['block', f.restraint.block],
-      ['reverseBlock', f.restraint.reverseBlock],
+    // The block's middle as the schedule sets it out (settingOut.ts): one convention for every output.
+    const place = settingOut(f, analysis.project.design.dimensionStep);
+    for (const [kind, block, set] of [
+      ['block', f.restraint.block, place.block],
+      ['reverseBlock', f.restraint.reverseBlock, place.reverseBlock],
     ] as const) {
-      if (!block) continue;
-      // The block's middle: half the pipe and half the block's thickness from the fitting, toward its face.
-      const off = od / 2 + block.depth / 2;
-      point(at(node.x + block.direction[0] * off, node.y + block.direction[1] * off, node.elevation), {
+      if (!block || !set) continue;
+      point(at(set.east, set.north, node.elevation), {
         layer: 'thrust-block',
         name: elementName(f.mark, kind),
         mark: f.mark,
