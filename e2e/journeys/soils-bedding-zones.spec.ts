@@ -39,7 +39,14 @@ test('soil classes come grouped by kind with their source, and bedding and wrap 
   const added = (await doc(app)).soils.at(-1)!;
   expect(added.label).toBe('Shale, hard');
   expect(Math.abs(added.bearing - 10000 * PSF)).toBeLessThan(0.01); // the list's 10,000 lb/ft²
-  await expect(page.getByTestId('soils-table')).toContainText('row "Hard shale"');
+  const source = page.getByTestId('soils-table').getByLabel('Source of Shale, hard');
+  await expect(source).toHaveValue(/row "Hard shale"/);
+  // Once a value the library row gave is changed, the row no longer vouches for it: the source says so.
+  await page.getByTestId('soils-table').getByLabel('Bearing of Shale, hard').fill('200');
+  await page.getByTestId('soils-table').getByLabel('Bearing of Shale, hard').press('Enter');
+  await expect(source).toHaveValue(/^Edited by the user: state the source of these values \(was: .*row "Hard shale"/);
+  await source.fill('Site report GR-7, borehole 2');
+  expect((await doc(app)).soils.at(-1)!.source).toBe('Site report GR-7, borehole 2');
 
   const bedding = page.getByTestId('bedding-and-wrap');
   await bedding.getByLabel(/Bedding of all/).selectOption('4');

@@ -31,6 +31,7 @@ export const SOIL_FIELDS = {
   frictionAngle: 'Friction angle',
   cohesion: 'Cohesion',
   label: 'Name',
+  source: 'Source',
 } as const;
 export const DESIGN_FIELDS = {
   bearingSafetyFactor: 'Safety factor on bearing',

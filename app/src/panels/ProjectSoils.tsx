@@ -82,7 +82,14 @@ export function ProjectSoils() {
               />
             </td>
             <td className="soil-source">
-              {s.source ?? <span className="muted">not given: say where the values come from</span>}
+              <textarea
+                aria-label={`${SOIL_FIELDS.source} of ${s.label ?? s.id}`}
+                value={s.source ?? ''}
+                placeholder="not given: say where the values come from"
+                maxLength={400}
+                rows={2}
+                onChange={(e) => setSoil(s.id, { source: e.target.value || undefined })}
+              />
             </td>
             <td>
               <input
