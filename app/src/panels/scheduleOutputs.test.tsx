@@ -132,6 +132,10 @@ describe('the CSV words its warnings in the display units, as the print words it
     await waitFor(() => {
       for (const w of a10) expect(printed().some((p) => p.startsWith(`${w} (`) && p.includes('A10'))).toBe(true);
     });
+    // A row's "Notes 1, 3" refer to the numbered fitting notes only: the page's cautions are not numbered.
+    expect(container.querySelectorAll('ol.sheet-notes').length).toBeGreaterThan(0);
+    expect(container.querySelectorAll('ol.sheet-cautions, .sheet-foot ol').length).toBe(0);
+    expect(container.querySelectorAll('ul.sheet-cautions li').length).toBeGreaterThanOrEqual(5);
     // No length, force or pressure in SI units anywhere in the US warnings.
     for (const r of records.slice(1).filter((r) => r[warnings])) expect(r[warnings]).not.toMatch(/\d (m|kN|kPa)\b/);
   });

@@ -205,11 +205,11 @@ const CrewPage = memo(function CrewPage({
         {extra}
       </div>
       <footer className="sheet-foot">
-        <ol className="sheet-cautions">
+        <ul className="sheet-cautions">
           {PAGE_CAUTIONS.map((c) => (
             <li key={c}>{c}</li>
           ))}
-        </ol>
+        </ul>
         <div className="sheet-pageno">
           Sheet {index + 1} of {pages}
         </div>
