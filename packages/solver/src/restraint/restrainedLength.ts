@@ -1,10 +1,11 @@
-import { dot, horizontalNorm, norm, type Vec3 } from '../geometry/vector.js';
+import { horizontalNorm, norm, type Vec3 } from '../geometry/vector.js';
 import { value, type SizingStep } from '../analysis/calcRecord.js';
 import type { Leg } from '../network/legs.js';
 import type { FittingKind } from '../network/fittingKind.js';
 import type { Soil } from '../model/projectSchema.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
 import { pipeSoilResistance } from './pipeSoilResistance.js';
+import { axialShares } from './axialShares.js';
 import { jointMaterialBasis } from './jointMaterial.js';
 import type { FittingSite } from './site.js';
 
@@ -44,8 +45,9 @@ export interface RestrainedLengthInput {
  * it; equation bodies from memory, register `joints.bend-equation`). Bends, written with the
  * resultant T = 2·P·A·sin(θ/2) so that reducing bends and dynamic thrust are covered:
  * L = S_f·T/(2·cos(θ/2)·(F_s + ½·R)), R = R_s, or the hold-down weight where the thrust is mainly
- * upward. Every other fitting: L = S_f·|T|/F_s along the pipe the thrust pulls on (the leg pointing
- * most nearly against the thrust: the branch of a tee, the large end of a reducer, the capped pipe).
+ * upward. Every other fitting: L = S_f·T/F_s along the pipe the thrust pulls on (the leg pointing
+ * most nearly against the thrust: the branch of a tee, the large end of a reducer, the capped pipe),
+ * with a thrust that leans off that pipe shared with a second one (axialShares.ts).
  */
 export function restrainedLength(i: RestrainedLengthInput): {
   legs: RestrainedLeg[];
@@ -58,8 +60,8 @@ export function restrainedLength(i: RestrainedLengthInput): {
   const out: RestrainedLeg[] = [];
   const isBend = (i.kind === 'bend' || i.kind === 'reducing-bend') && i.deflection !== null;
   const upward = i.thrust[2] > horizontalNorm(i.thrust);
-  const legsToRestrain = isBend ? i.legs : [mostOpposed(i.legs, i.thrust)];
-  for (const leg of legsToRestrain) {
+  const shares = isBend ? i.legs.map((leg) => ({ leg, force: t })) : axialShares(i.legs, i.thrust);
+  for (const { leg, force } of shares) {
     const material = jointMaterialBasis(leg.pipe, i.soil, i.node);
     diagnostics.push(...material.diagnostics);
     if (!material.usable) continue;
@@ -72,7 +74,7 @@ export function restrainedLength(i: RestrainedLengthInput): {
       length = (i.safetyFactor * t) / (2 * Math.cos(half) * (r.friction + lateral / 2));
       formula = upward ? 'L = S_f·T / (2·cos(θ/2)·(F_s + ½·W_u))' : 'L = S_f·T / (2·cos(θ/2)·(F_s + ½·R_s))';
     } else {
-      length = (i.safetyFactor * t) / r.friction;
+      length = (i.safetyFactor * force) / r.friction;
       formula = 'L = S_f·T / F_s';
     }
     if (!Number.isFinite(length) || length <= 0) {
@@ -91,7 +93,15 @@ export function restrainedLength(i: RestrainedLengthInput): {
         title: `Restrained length along ${leg.pipe.id}`,
         formula,
         inputs: [
-          value('T', 'governing thrust', t, 'force', 'momentum balance'),
+          shares.length > 1
+            ? value(
+                'T',
+                'part of the governing thrust along this pipe',
+                force,
+                'force',
+                'thrust resolved along the pipes',
+              )
+            : value('T', 'governing thrust', t, 'force', 'momentum balance'),
           ...(isBend ? [value('θ', 'deflection', i.deflection as number, 'angle', 'geometry')] : []),
           value('S_f', 'restraint safety factor', i.safetyFactor, 'ratio', 'project design'),
           ...r.inputs,
@@ -112,11 +122,4 @@ export function restrainedLength(i: RestrainedLengthInput): {
     diagnostics.push(diagnostic('joints.sharp-bend', {}, { deflection: i.deflection as number }));
   }
   return { legs: out, steps, diagnostics };
-}
-
-/** The leg whose direction from the node points most nearly against the thrust. */
-function mostOpposed(legs: readonly Leg[], thrust: Vec3): Leg {
-  let best = legs[0]!;
-  for (const leg of legs) if (dot(leg.direction, thrust) < dot(best.direction, thrust)) best = leg;
-  return best;
 }
