@@ -173,12 +173,16 @@ interface Face {
   height: number;
 }
 
-/** The better of two faces: less area, or as much and squarer (−1: no face yet). */
+/**
+ * The better of two faces: less area, or as much and squarer (−1: no face yet). Squarer by more than
+ * rounding: 0.75 × 0.60 and 0.60 × 0.75 are as square, and the first found (the lower face) is kept
+ * whichever way the last bit of their ratio falls.
+ */
 function better(aw: number, ah: number, bw: number, bh: number): boolean {
   return (
     aw < 0 ||
     bw * bh < aw * ah - 1e-12 ||
-    (Math.abs(bw * bh - aw * ah) <= 1e-12 && Math.abs(Math.log(bw / bh)) < Math.abs(Math.log(aw / ah)))
+    (Math.abs(bw * bh - aw * ah) <= 1e-12 && Math.abs(Math.log(bw / bh)) < Math.abs(Math.log(aw / ah)) - 1e-9)
   );
 }
 
