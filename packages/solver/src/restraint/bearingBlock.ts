@@ -419,7 +419,7 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
           ],
           result: value(
             'b × h',
-            'face provided',
+            'face as sized (printed sides are rounded up to the unit shown)',
             width * height,
             'area',
             governs === 'passive'

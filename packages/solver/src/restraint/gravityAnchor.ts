@@ -137,14 +137,20 @@ export function sizeGravityAnchor(i: GravityAnchorInput): AnchorResult {
             ]
           : []),
         {
-          title: 'Gravity anchor built',
+          title: 'Gravity anchor sized',
           formula: 'V_req = max(V_up, V_sl);  side = ∛V_req rounded up to the step;  V = side³',
           inputs: [
             value('V_req', 'concrete volume required', requiredVolume, 'volume', `${governs} governs`),
             value('step', 'construction step', site.step, 'length', 'project design'),
             value('side', 'side of the cube', side, 'length', 'computed'),
           ],
-          result: value('V', 'concrete volume built', concreteVolume, 'volume', 'computed'),
+          result: value(
+            'V',
+            'concrete volume of the cube as sized (printed sides are rounded up to the unit shown)',
+            concreteVolume,
+            'volume',
+            'computed',
+          ),
           reference: 'A cube of at least the required volume (length × width × height)',
         },
       ];
