@@ -17,6 +17,7 @@ export interface HookFitting {
   governingCase: string;
   cases: { case: string; pressure: number; total: [number, number, number] }[];
   restraint: { block: { bearingArea: number } | null };
+  pipes: { id: string; outsideDiameter: number }[];
 }
 
 type Hook = {
