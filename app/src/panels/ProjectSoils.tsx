@@ -3,13 +3,22 @@ import { useActions, useApp } from '../state/StoreContext.js';
 import { NumberField } from './NumberField.js';
 import { show } from '../format/quantity.js';
 import { SOIL_FIELDS } from '../format/fieldLabels.js';
+import { withSourceKept } from '../state/soilSource.js';
 
 /** The project's own soils: values the user may change, each with its source beside it. */
 export function ProjectSoils() {
   const project = useApp((s) => s.project);
   const u = useApp((s) => s.units);
   const actions = useActions();
-  const setSoil = (id: string, patch: Partial<Soil>) => actions.updateSoil(id, patch);
+  // a value changed away from what the source vouched for flags the source (soilSource.ts)
+  const setSoil = (id: string, patch: Partial<Soil>) =>
+    actions.updateSoil(
+      id,
+      withSourceKept(
+        project.soils.find((s) => s.id === id)!,
+        patch,
+      ),
+    );
   return (
     <table className="edit-table soils-table" data-testid="soils-table">
       <thead>

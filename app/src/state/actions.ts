@@ -22,7 +22,6 @@ import { checks, checksReady, loadChecks } from './checks.js';
 import { loadRouteEdits, routeEdits, type RouteEdits } from './routeEdits.js';
 import { resultsOf } from './results.js';
 import { pipeForUnits } from './defaultPipe.js';
-import { withSourceKept } from './soilSource.js';
 
 const NONE: readonly string[] = [];
 
@@ -239,7 +238,7 @@ export function createActions(store: AppStore) {
       edit((p) => (p.loadCases.length <= 1 ? p : { ...p, loadCases: p.loadCases.filter((c) => c.id !== id) })),
     updateSoil: (id: string, patch: Partial<Soil>) =>
       edit(
-        (p) => ({ ...p, soils: p.soils.map((s) => (s.id === id ? { ...s, ...withSourceKept(s, patch), id } : s)) }),
+        (p) => ({ ...p, soils: p.soils.map((s) => (s.id === id ? { ...s, ...patch, id } : s)) }),
         'label' in patch ? `soil-label-${id}` : 'source' in patch ? `soil-source-${id}` : undefined,
       ),
     addSoil: (soil: Soil) => edit((p) => ({ ...p, soils: [...p.soils, soil] })),

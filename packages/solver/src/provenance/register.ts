@@ -105,7 +105,7 @@ export const REGISTER = {
   },
   'block.across-trench': {
     quantity:
-      'A bearing face stands across a pipe’s trench when that pipe leaves the fitting within this plan angle of the bearing direction, or every pipe lies within it of the bearing line (the trench ends there)',
+      'A bearing face stands across a pipe’s trench when the pipe leaves within this plan angle of the bearing direction, or every pipe lies within it of the bearing line',
     value: 30,
     unit: '°',
     kind: 'own rule',
@@ -113,12 +113,11 @@ export const REGISTER = {
     verified: true,
   },
   'block.pipe-through-face': {
-    quantity:
-      'A pipe leaving the fitting through the bearing face (within the across-trench angle of the bearing direction) takes its outside area π·OD²/4 from the face: the required face is SF·T/σ_b + π·OD²/4',
+    quantity: 'A pipe through the bearing face adds π·OD²/4 to the face needed',
     value: null,
     unit: '—',
     kind: 'own rule',
-    source: 'Mainbrace rule: the soil does not bear where the pipe passes through the face',
+    source: 'Mainbrace rule',
     verified: true,
   },
   'block.bearing-area': {

@@ -166,7 +166,7 @@ export interface BlockResult {
 
 const DIPRA_AREA = 'A_b = T·S_f/S_b (DIPRA, Thrust Restraint Design for Ductile Iron Pipe; AWWA M23 Example 1)';
 const FACE_RULE =
-  'Face height at least the pipe OD and at most half the depth to the block bottom; width at most twice the height, wider only at the tallest face the cover allows (Mainbrace’s own rule: no published source states it)';
+  'Face height at least the pipe OD and at most half the depth to the block bottom; width at most twice the height, wider only at the tallest face the cover allows (Mainbrace’s own rule)';
 
 interface Face {
   width: number;
@@ -396,13 +396,13 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
     : [
         {
           title: 'Required bearing area',
-          formula: i.pipeThroughFace > 0 ? 'A = SF · T_h / σ_b + A_p' : 'A = SF · T_h / σ_b',
+          formula: `A = SF · T_h / σ_b${i.pipeThroughFace > 0 ? ' + A_p' : ''}`,
           inputs: [
             value('T_h', 'largest horizontal thrust', i.thrust, 'force', 'momentum balance'),
             value('SF', 'bearing safety factor', i.safetyFactor, 'ratio', 'project design'),
             value('σ_b', 'allowable horizontal bearing', i.allowableBearing, 'stress', 'soil'),
             ...(i.pipeThroughFace > 0
-              ? [value('A_p', 'pipe through the face, π·OD²/4 (no bearing there)', i.pipeThroughFace, 'area', 'pipes')]
+              ? [value('A_p', 'pipe in the face, π·OD²/4', i.pipeThroughFace, 'area', 'pipes')]
               : []),
           ],
           result: value('A', 'required bearing area', area, 'area', 'computed'),
@@ -419,7 +419,7 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
           ],
           result: value(
             'b × h',
-            'face as sized (printed sides are rounded up to the unit shown)',
+            'face as sized',
             width * height,
             'area',
             governs === 'passive'

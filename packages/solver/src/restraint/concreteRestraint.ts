@@ -56,35 +56,26 @@ export const blockBaseDown = (
  * along that trench and is not limited by its width.
  */
 /**
- * m², the outside area of the pipes that pass through a bearing face: those leaving the fitting within
- * the across-trench angle of the bearing direction (a reducer's smaller pipe, a valve's far pipe). The
- * soil does not bear where the pipe runs through, so the face must be larger by that much.
+ * Whether a bearing face stands across a trench, and m², the outside area of the pipes that pass
+ * through it: those leaving the fitting within the across-trench angle of the bearing direction (a
+ * reducer's smaller pipe, a valve's far pipe). The soil does not bear where a pipe runs through, so the
+ * face must be larger by that much.
  */
-function pipeThroughFace(direction: Vec3, legs: readonly Leg[]): number {
-  const limit = VALUES['block.across-trench'];
-  let area = 0;
-  for (const l of legs) {
-    const plan = horizontal(l.direction);
-    if (horizontalNorm(plan) < 1e-9 || !(angleBetween(direction, plan) < limit)) continue;
-    area += (Math.PI * l.pipe.outsideDiameter * l.pipe.outsideDiameter) / 4;
-  }
-  return area;
-}
-
-function acrossTrench(direction: Vec3, legs: readonly Leg[]): boolean {
+function faceCrossing(direction: Vec3, legs: readonly Leg[]): { across: boolean; pipeArea: number } {
   const limit = VALUES['block.across-trench'];
   // One pass, no arrays: asked for every block of every fitting.
   let planLegs = 0;
   let allAlongLine = true;
+  let pipeArea = 0;
   for (const l of legs) {
     const plan = horizontal(l.direction);
     if (horizontalNorm(plan) < 1e-9) continue;
     const a = angleBetween(direction, plan);
-    if (a < limit) return true;
+    if (a < limit) pipeArea += (Math.PI * l.pipe.outsideDiameter ** 2) / 4;
     planLegs++;
     if (!(Math.min(a, 180 - a) < limit)) allAlongLine = false;
   }
-  return planLegs > 0 && allAlongLine;
+  return { across: pipeArea > 0 || (planLegs > 0 && allAlongLine), pipeArea };
 }
 
 /**
@@ -285,13 +276,13 @@ function sizeBlocks(
     return out;
   }
   const block = (force: number, direction: Vec3) => {
-    const across = acrossTrench(direction, legs);
+    const { across, pipeArea } = faceCrossing(direction, legs);
     // One shape of input for every block (no conditional spread): sized at every fitting on every edit.
     const r = sizeBearingBlock({
       trenchWidth: across ? site.trenchWidth : undefined,
       thrust: force,
       direction,
-      pipeThroughFace: pipeThroughFace(direction, legs),
+      pipeThroughFace: pipeArea,
       allowableBearing: allowable,
       safetyFactor: design.bearingSafetyFactor,
       outsideDiameter: site.od,

@@ -144,13 +144,7 @@ export function sizeGravityAnchor(i: GravityAnchorInput): AnchorResult {
             value('step', 'construction step', site.step, 'length', 'project design'),
             value('side', 'side of the cube', side, 'length', 'computed'),
           ],
-          result: value(
-            'V',
-            'concrete volume of the cube as sized (printed sides are rounded up to the unit shown)',
-            concreteVolume,
-            'volume',
-            'computed',
-          ),
+          result: value('V', 'cube as sized', concreteVolume, 'volume', 'computed'),
           reference: 'A cube of at least the required volume (length × width × height)',
         },
       ];

@@ -93,15 +93,14 @@ export function restrainedLength(i: RestrainedLengthInput): {
         title: `Restrained length along ${leg.pipe.id}`,
         formula,
         inputs: [
-          shares.length > 1
-            ? value(
-                'T',
-                'part of the governing thrust along this pipe',
-                force,
-                'force',
-                'thrust resolved along the pipes',
-              )
-            : value('T', 'governing thrust', t, 'force', 'momentum balance'),
+          // a bend's legs each take the whole thrust; a shared one its part (force = t when unshared)
+          value(
+            'T',
+            shares.length > 1 ? 'thrust along this pipe' : 'governing thrust',
+            force,
+            'force',
+            'momentum balance',
+          ),
           ...(isBend ? [value('θ', 'deflection', i.deflection as number, 'angle', 'geometry')] : []),
           value('S_f', 'restraint safety factor', i.safetyFactor, 'ratio', 'project design'),
           ...r.inputs,
