@@ -28,6 +28,8 @@ describe('a fitting’s calculation record', () => {
     const steps = record.filter((s) => s.title.startsWith('Restrained length along'));
     expect(steps.map((s) => s.title)).toEqual(['Restrained length along p1', 'Restrained length along p2']);
     for (const s of steps) {
+      // each leg of a bend holds the whole resultant T = 2·p·A·sin(θ/2) (the bend equation's T)
+      expect(s.inputs.find((v) => v.symbol === 'T')!.label).toBe('governing thrust');
       expect(s.reference).toMatch(
         /^Restrained length at a horizontal bend L = .*, not verified against DIPRA, Thrust Restraint Design for Ductile Iron Pipe.*, horizontal bend equation$/,
       );

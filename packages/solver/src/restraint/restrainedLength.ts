@@ -93,10 +93,10 @@ export function restrainedLength(i: RestrainedLengthInput): {
         title: `Restrained length along ${leg.pipe.id}`,
         formula,
         inputs: [
-          // a bend's legs each take the whole thrust; a shared one its part (force = t when unshared)
+          // a bend's legs each take the whole thrust; a thrust shared between pipes gives each its part
           value(
             'T',
-            shares.length > 1 ? 'thrust along this pipe' : 'governing thrust',
+            !isBend && shares.length > 1 ? 'thrust along this pipe' : 'governing thrust',
             force,
             'force',
             'momentum balance',
