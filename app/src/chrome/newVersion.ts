@@ -3,9 +3,7 @@ import type { Notice } from '../state/store.js';
 /** Installed and offline: the service worker is built with the app (not in the dev server). */
 export function registerServiceWorker() {
   if (!import.meta.env.PROD || !('serviceWorker' in navigator)) return;
-  window.addEventListener('load', () => {
-    void navigator.serviceWorker.register('./sw.js').catch(() => undefined);
-  });
+  void navigator.serviceWorker.register('./sw.js').catch(() => undefined);
 }
 
 /**
