@@ -322,23 +322,27 @@ export function PlanView() {
       onDoubleClick={(e) => send({ type: 'doubleClick', at: local(e) })}
       onContextMenu={(e) => e.preventDefault()}
     >
-      <Stage width={size.width || 50} height={size.height || 50} listening={false}>
-        <Layer listening={false}>
-          <Shape sceneFunc={drawGround} />
-        </Layer>
-        <Layer listening={false}>
-          <Shape sceneFunc={drawRoute} />
-        </Layer>
-        <Layer listening={false}>
-          <Shape sceneFunc={drawThrust} />
-        </Layer>
-        <Layer listening={false}>
-          <Shape sceneFunc={drawMarks} />
-        </Layer>
-        <Layer listening={false}>
-          <Shape sceneFunc={drawInteractive} />
-        </Layer>
-      </Stage>
+      {/* Made once the box is measured (in the layout effect, before the first paint), so that its
+          canvases are made at their size: a resize sizes every layer's canvas again and draws it at once. */}
+      {size.width > 0 && (
+        <Stage width={size.width} height={size.height} listening={false}>
+          <Layer listening={false}>
+            <Shape sceneFunc={drawGround} />
+          </Layer>
+          <Layer listening={false}>
+            <Shape sceneFunc={drawRoute} />
+          </Layer>
+          <Layer listening={false}>
+            <Shape sceneFunc={drawThrust} />
+          </Layer>
+          <Layer listening={false}>
+            <Shape sceneFunc={drawMarks} />
+          </Layer>
+          <Layer listening={false}>
+            <Shape sceneFunc={drawInteractive} />
+          </Layer>
+        </Stage>
+      )}
       <PlanOverlays scene={scene} coordsRef={coords} />
       <PlanHints />
     </div>
