@@ -137,4 +137,28 @@ describe('mainbrace import and export', () => {
     expect(bad.stderr).toMatch(/^--max-size: expected a size in megabytes/);
     expect((await cli('import', csv, '--max-size', '1')).status).toBe(0);
   });
+
+  it('refuses an option import or export does not take, or a second file, rather than ignore it', async () => {
+    // usage.ts lists import's options: a mistyped `--cove 2.5` must not import on the 1.2 m default cover.
+    const csv = join(dir, 'options.csv');
+    writeFileSync(csv, 'E,N,Level\n0,0,100\n40,0,100\n40,30,99\n');
+    for (const argv of [
+      ['import', csv, '--cove', '2.5'],
+      ['import', csv, '--units', 'ft'],
+      ['import', csv, 'other.csv'],
+      ['export', csv, '--pretty'],
+    ]) {
+      const r = await cli(...argv);
+      expect(r.status).toBe(2);
+      expect(r.stdout).toBe('');
+      expect(r.stderr).toMatch(/^(--\S+: not an option of (import|export)|unexpected argument "other\.csv")/);
+    }
+    // --verbose takes no value: the file after it is still the file.
+    const ok = await cli('import', '--verbose', csv, '--cover', '2.5');
+    expect(ok.status).toBe(0);
+    const parsed = parseProjectText(ok.stdout);
+    if (!parsed.ok) throw new Error('not a valid project');
+    // ground 100 m less 2.5 m cover less half the default pipe's OD (di-en545 DN200: 222 mm, EN 545 table)
+    expect(parsed.project.nodes[0]!.elevation).toBeCloseTo(100 - 2.5 - 0.222 / 2, 6);
+  });
 });

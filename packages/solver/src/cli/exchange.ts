@@ -1,4 +1,4 @@
-import { parseArgs } from './args.js';
+import { misfit, parseArgs, type Accepts } from './args.js';
 import { USAGE } from './usage.js';
 import { maxBytesOption, type CliIo } from './run.js';
 import { escapeControls, terminalSafe } from './terminalText.js';
@@ -6,6 +6,33 @@ import { parseProjectText } from '../model/parseProject.js';
 import { problemText } from '../model/problems.js';
 
 class UsageError extends Error {}
+
+/** The options and arguments of import and export (usage.ts). */
+const ACCEPTS: Record<'import' | 'export', Accepts> = {
+  import: {
+    options: [
+      'format',
+      'easting',
+      'northing',
+      'level',
+      'run',
+      'unit',
+      'levels',
+      'cover',
+      'tolerance',
+      'series',
+      'size',
+      'proj4',
+      'name',
+      'pretty',
+      'verbose',
+      'max-size',
+    ],
+    positional: 1,
+    names: 'FILE',
+  },
+  export: { options: ['format', 'max-size'], positional: 1, names: 'FILE' },
+};
 
 /** Reads a file as UTF-8 text, or says why it cannot (the same limits as the other commands). */
 function readText(io: CliIo, path: string | undefined, maxBytes: number): string {
@@ -70,6 +97,8 @@ export async function runExchange(argv: readonly string[], rawIo: CliIo): Promis
   };
   try {
     const args = parseArgs(argv);
+    const wrong = misfit(args.command!, ACCEPTS[args.command === 'export' ? 'export' : 'import'], args);
+    if (wrong) throw new UsageError(wrong);
     const ex = await import('../exchange/index.js');
     const path = args.positional[0];
     const o = args.options;

@@ -208,6 +208,8 @@ describe('the command line quantities and stations', () => {
       ['validate', path, '--units', 'si'],
       ['schedule', path, 'other.json'],
       ['explain', path, 'n4', 'n5'],
+      ['schema', '--pretty'],
+      ['schema', path],
     ]) {
       const r = await cli(...argv);
       expect(r.status).toBe(2);

@@ -1,4 +1,4 @@
-import { parseArgs } from './args.js';
+import { misfit, parseArgs, type Accepts, type Args } from './args.js';
 import { USAGE } from './usage.js';
 import { explainText } from './explainText.js';
 import { problemText } from '../model/problems.js';
@@ -105,28 +105,17 @@ async function load(io: CliIo, path: string | undefined, maxBytes: number): Prom
 }
 
 /** The options and the number of arguments each command takes (usage.ts). */
-const ACCEPTS: Record<string, { options: readonly string[]; positional: number }> = {
-  schedule: { options: ['format', 'units', 'pretty', 'full', 'max-size'], positional: 1 },
-  quantities: { options: ['format', 'units', 'pretty', 'max-size'], positional: 1 },
-  explain: { options: ['units', 'max-size'], positional: 2 },
-  validate: { options: ['max-size'], positional: 1 },
+const ACCEPTS: Record<string, Accepts> = {
+  schedule: { options: ['format', 'units', 'pretty', 'full', 'max-size'], positional: 1, names: 'FILE' },
+  quantities: { options: ['format', 'units', 'pretty', 'max-size'], positional: 1, names: 'FILE' },
+  explain: { options: ['units', 'max-size'], positional: 2, names: 'FILE and MARK' },
+  validate: { options: ['max-size'], positional: 1, names: 'FILE' },
+  schema: { options: [], positional: 0, names: '' },
 };
 
-/**
- * An option a command does not take, or an argument too many, is refused rather than ignored: a
- * mistyped `--unit us` would otherwise give SI figures without a word.
- */
-function checkArguments(command: string, options: Map<string, string>, positional: readonly string[]): void {
-  const accepts = ACCEPTS[command]!;
-  for (const name of options.keys())
-    if (!accepts.options.includes(name))
-      throw new UsageError(
-        `--${escapeControls(name)}: not an option of ${command} (it takes ${accepts.options.map((o) => `--${o}`).join(', ')})`,
-      );
-  if (positional.length > accepts.positional)
-    throw new UsageError(
-      `unexpected argument "${escapeControls(positional[accepts.positional]!)}" after the ${command} command's ${accepts.positional === 1 ? 'FILE' : 'FILE and MARK'}`,
-    );
+function checkArguments(command: string, args: Args): void {
+  const wrong = misfit(command, ACCEPTS[command]!, args);
+  if (wrong) throw new UsageError(wrong);
 }
 
 function unitsOption(value: string | undefined, project: Project): UnitSystem {
@@ -152,6 +141,7 @@ export async function runCli(argv: readonly string[], rawIo: CliIo): Promise<num
       return args.command === undefined && !args.options.has('help') ? 2 : 0;
     }
     if (args.command === 'schema') {
+      checkArguments('schema', args);
       const { projectJsonSchema } = await import('../model/jsonSchema.js');
       io.out(JSON.stringify(projectJsonSchema(), null, 2) + '\n');
       return 0;
@@ -161,7 +151,7 @@ export async function runCli(argv: readonly string[], rawIo: CliIo): Promise<num
         `unknown command "${escapeControls(args.command)}": expected schedule, quantities, explain, validate, schema, import or export`,
       );
     }
-    checkArguments(args.command, args.options, args.positional);
+    checkArguments(args.command, args);
     const loaded = await load(io, args.positional[0], maxBytesOption(args.options.get('max-size')));
     if (Array.isArray(loaded)) {
       io.err(loaded.join('\n') + '\n');
