@@ -53,6 +53,36 @@ describe('restraint sketches are drawn from the schedule row', () => {
     expect(ticks).toBe(f.restraint.restrainedLegs.reduce((n, l) => n + l.joints, 0));
   });
 
+  it('sends a reducing bend that only dips to the shoulder, and a bend in plan to its outside', () => {
+    // A DN300 × DN200 reducer at a sag, straight in plan: the reducer's thrust p·(A₁ − A₂) runs along the
+    // pipe (statics of a reducer), so its block stands at the shoulder, not on "the outside of the bend".
+    const demo = demoProject();
+    const plain = demo.nodes.find((n) => n.id === 'n2')!; // a node with the parser's defaults, no end
+    const [big, small] = [
+      demo.pipes.find((p) => p.nominal === 'DN300')!,
+      demo.pipes.find((p) => p.nominal === 'DN200')!,
+    ];
+    const project = {
+      ...demo,
+      nodes: [
+        { ...plain, id: 'a', x: 0, y: 0, elevation: 104 },
+        { ...plain, id: 'b', x: 60, y: 0, elevation: 102.8 },
+        { ...plain, id: 'c', x: 120, y: 0, elevation: 103.9 },
+      ],
+      pipes: [
+        { ...big, id: 'p1', from: 'a', to: 'b' },
+        { ...small, id: 'p2', from: 'b', to: 'c' },
+      ],
+    };
+    const a = analyse(project);
+    const dip = scheduleOf(a).fittings.find((f) => f.node === 'b')!;
+    expect(dip.kind).toBe('reducing-bend');
+    expect(dip.restraint.block).toBeTruthy();
+    expect(sketchOf(dip, a, 'si').lines.join(' ')).toContain('against the shoulder, toward the smaller pipe');
+    for (const f of rows.filter((r) => r.kind === 'bend' && r.restraint.block && (r.horizontalDeflection ?? 0) > 10))
+      expect(sketchOf(f, analysis, 'si').lines.join(' '), f.mark).toContain('on the outside of the bend');
+  });
+
   it('draws an error-level restraint as outlines only, with the not-adequate line first', () => {
     const f = rows.find((r) => r.restraint.block)!;
     const failing = {

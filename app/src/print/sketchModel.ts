@@ -7,6 +7,7 @@ import {
   restrainedJointPositions,
   settingOut,
   type Analysis,
+  type Leg,
   type ScheduleFitting,
   type UnitSystem,
 } from '@mainbrace/solver';
@@ -46,11 +47,15 @@ export interface Sketch {
 export const VIEW = { w: 118, h: 118 } as const;
 
 /** Where the thrust puts the block, in a crew's words. */
-function bearingSide(f: ScheduleFitting): string {
+function bearingSide(f: ScheduleFitting, legs: readonly Leg[], bearing: number): string {
   switch (f.kind) {
     case 'bend':
     case 'reducing-bend':
-      return 'on the outside of the bend';
+      // A reducing bend that turns little in plan (a dip, a slight angle) pushes along its pipes, as
+      // a reducer does: there is no outside of a bend for the block to stand on.
+      return f.kind === 'reducing-bend' && alongPipes(legs, bearing)
+        ? 'against the shoulder, toward the smaller pipe'
+        : 'on the outside of the bend';
     case 'tee':
     case 'wye':
     case 'cross':
@@ -62,6 +67,16 @@ function bearingSide(f: ScheduleFitting): string {
     default:
       return 'behind the cap';
   }
+}
+
+/** Whether a plan bearing (degrees clockwise from north) runs within 30° of a pipe's line. */
+function alongPipes(legs: readonly Leg[], bearing: number): boolean {
+  const b = (bearing * Math.PI) / 180;
+  const [bx, by] = [Math.sin(b), Math.cos(b)];
+  return legs.some((l) => {
+    const h = Math.hypot(l.direction[0], l.direction[1]);
+    return h > 0 && Math.abs((l.direction[0] * bx + l.direction[1] * by) / h) >= Math.cos(Math.PI / 6);
+  });
 }
 
 /** A plan frame: metres east/north of the fitting → sketch units, north up, centred in the view. */
@@ -398,7 +413,7 @@ export function sketchOf(f: ScheduleFitting, analysis: Analysis, units: UnitSyst
   if (notAdequate) lines.push('NOT ADEQUATE — do not build as drawn: see the bold note.');
   // The block's size is in the table row and on the dimensions: the words say what they cannot.
   const blockLine = (b: NonNullable<typeof so.block>, what: string) =>
-    `${what} bears ${compassPoint(b.bearing)} against undisturbed soil ${bearingSide(f)}, ` +
+    `${what} bears ${compassPoint(b.bearing)} against undisturbed soil ${bearingSide(f, legs, b.bearing)}, ` +
     `face ${dim(b.thickness)} from fitting centre; top ${topText(b.topDepth)}, base ${baseText(b.baseDepth)} below ground.`;
   if (so.block) lines.push(blockLine(so.block, 'Block'));
   if (so.reverseBlock) {
