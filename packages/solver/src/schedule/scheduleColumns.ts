@@ -57,7 +57,7 @@ export const SCHEDULE_COLUMNS: readonly ScheduleColumn[] = [
   col('od', 'Largest OD', 'diameter', size),
   col('east', 'East', 'coordinate', (f) => f.position[0]),
   col('north', 'North', 'coordinate', (f) => f.position[1]),
-  col('level', 'Pipe level', 'level', (f) => f.position[2]),
+  col('level', 'Pipe centreline level', 'level', (f) => f.position[2]),
   col('invert', 'Invert level', 'level', (f, c) => setOut(f, c).invert),
   col('ground', 'Ground level', 'level', (f) => f.groundLevel),
   col('blockEast', 'Block centre east', 'coordinate', (f, c) => setOut(f, c).block?.east ?? null),
