@@ -24,5 +24,8 @@ describe('cautions', () => {
     const page = PAGE_CAUTIONS.join(' ');
     for (const [what, pattern] of FIVE) expect(page, what).toMatch(pattern);
     for (const c of PAGE_CAUTIONS) expect(CAUTIONS).toContain(c);
+    // The crew runs the field test from the printed sheet: bulkheads braced, the test held to the design.
+    expect(page).toMatch(/test bulkheads for the full test thrust/);
+    expect(page).toMatch(/test pressure must not exceed the thrust-restraint design pressure/);
   });
 });

@@ -21,10 +21,18 @@ export const CAUTIONS: readonly string[] = [
 /**
  * The cautions every printed page carries (the full list goes in the print's appendix): design aid and
  * the licensed engineer's check, local codes and the utility's standards, undisturbed soil, concrete
- * clear of joints, curing before the test. The schedule print, the crew sheet and the plan drawing all
- * print these, so that no printed output carries fewer.
+ * clear of joints, curing before the test, and bracing for the field test, which the crew runs. The
+ * schedule print, the crew sheet and the plan drawing all print these, so that no printed output
+ * carries fewer.
  */
-export const PAGE_CAUTIONS: readonly string[] = [CAUTIONS[0]!, CAUTIONS[1]!, CAUTIONS[3]!, CAUTIONS[4]!, CAUTIONS[5]!];
+export const PAGE_CAUTIONS: readonly string[] = [
+  CAUTIONS[0]!,
+  CAUTIONS[1]!,
+  CAUTIONS[3]!,
+  CAUTIONS[4]!,
+  CAUTIONS[5]!,
+  CAUTIONS[6]!,
+];
 
 /** The cautions as a terminal table ends with them, one marked line each. */
 export const cautionLines = (): string[] => CAUTIONS.map((c) => `! ${c}`);
