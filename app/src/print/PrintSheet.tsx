@@ -19,6 +19,7 @@ import { KeyPlan } from './KeyPlan.js';
 import { RestraintSketch } from './RestraintSketch.js';
 import { TakeOffDigest, TakeOffTable } from './TakeOffTable.js';
 import { TitleBlock } from './TitleBlock.js';
+import { sizedForLine } from './sizedFor.js';
 import { Appendix } from './Appendix.js';
 import { PlanExportButtons } from './PlanExportButtons.js';
 import { scheduleViewOf } from '../state/scheduleViewOf.js';
@@ -150,6 +151,11 @@ const CrewPage = memo(function CrewPage({
               `${columnNumber(pageTakeOff.concreteOrdered, 'volume', units)} ${columnUnit('volume', units)} to order with ${Math.round(pageTakeOff.waste * 1000) / 10} % waste`
             : undefined
         }
+        detail={sizedForLine(
+          project,
+          rows.map((r) => r.fitting),
+          units,
+        )}
       />
       <table className="sheet-schedule crew-table">
         <thead>

@@ -11,15 +11,18 @@ export function TitleBlock({
   subtitle,
   sheet,
   note,
+  detail,
   kind = 'Restraint schedule — crew sheet',
-  scale = 'Sketches not to scale: build to the figured dimensions',
+  scale = 'Sketches not to scale: build to the figures',
 }: {
   project: Project;
   units: UnitSystem;
   subtitle: string;
   sheet: string;
-  /** one line under the subtitle: the page's concrete */
+  /** the page's concrete, in the line across the foot of the block */
   note?: string;
+  /** after it: what the page's restraints were sized for */
+  detail?: string;
   /** what the drawing is */
   kind?: string;
   /** how it is scaled */
@@ -40,11 +43,6 @@ export function TitleBlock({
         <div className="tb-sub">
           {subtitle} · {sheet}
         </div>
-        {note && (
-          <div className="tb-sub" data-testid="page-concrete">
-            {note}
-          </div>
-        )}
       </div>
       <div className="tb-grid">
         {box('Drawing no.', s.drawingNumber, 'drawingNumber')}
@@ -59,6 +57,13 @@ export function TitleBlock({
           <span className="tb-value">{scale}</span>
         </div>
       </div>
+      {(note || detail) && (
+        <div className="tb-detail">
+          {note && <span data-testid="page-concrete">{note}</span>}
+          {note && detail ? ' · ' : null}
+          {detail && <span data-testid="sized-for">{detail}</span>}
+        </div>
+      )}
     </header>
   );
 }
