@@ -27,7 +27,7 @@ export function GoverningList() {
           </li>
         ))}
       </ul>
-      <h4>Largest thrust</h4>
+      <h4>Largest thrust (resultant, worst case)</h4>
       <ol>
         {largest.map((f) => (
           <li key={f.node.id}>

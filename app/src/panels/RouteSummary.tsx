@@ -61,7 +61,7 @@ export function RouteSummary() {
               </ul>
             </>
           )}
-          <h4>Largest thrusts</h4>
+          <h4>Largest thrusts (resultant, worst case)</h4>
           <ol className="ranked">
             {ranked.map((f) => (
               <li key={f.node.id}>
