@@ -90,27 +90,33 @@ export function pipeChoice(
     const own = findSeries(fallback.series);
     candidates = [...(own && own.material === m ? [own] : []), ...CATALOG.filter((s) => s.material === m && s !== own)];
   }
-  if (named.size === undefined) {
-    const s = candidates[0]!;
-    const z = s.id === fallback.series ? sizeIn(s, fallback.nominal) : undefined;
-    if (z) return { pipe: choice(s, z), problem: null };
-    // The nearest size by outside diameter to the fallback's, in the named series or material.
-    let best = s.sizes[0]!;
-    for (const c of s.sizes)
-      if (
-        Math.abs(c.outsideDiameter - fallback.outsideDiameter) <
-        Math.abs(best.outsideDiameter - fallback.outsideDiameter)
-      )
-        best = c;
-    return { pipe: choice(s, best), problem: null };
-  }
-  for (const s of candidates) {
-    const z = sizeIn(s, named.size);
-    if (z) return { pipe: choice(s, z), problem: null };
-  }
+  if (candidates.length === 0)
+    return {
+      pipe: fallback,
+      problem: `no pipe in the catalogue is ${material}; took ${fallback.series} ${fallback.nominal} (${fallback.material}): set this run's pipe by hand`,
+    };
+  if (named.size !== undefined)
+    for (const s of candidates) {
+      const z = sizeIn(s, named.size);
+      if (z) return { pipe: choice(s, z), problem: null };
+    }
+  const s = candidates[0]!;
+  const z = named.size === undefined && s.id === fallback.series ? sizeIn(s, fallback.nominal) : undefined;
+  if (z) return { pipe: choice(s, z), problem: null };
+  // The nearest size by outside diameter to the fallback's, in the named series or material: a size
+  // the file names but no series holds keeps the run's material and says so.
+  let best = s.sizes[0]!;
+  for (const c of s.sizes)
+    if (
+      Math.abs(c.outsideDiameter - fallback.outsideDiameter) < Math.abs(best.outsideDiameter - fallback.outsideDiameter)
+    )
+      best = c;
   return {
-    pipe: fallback,
-    problem: `size "${named.size}" is not in ${candidates.map((c) => c.id).join(' or ')}; took ${fallback.series} ${fallback.nominal}`,
+    pipe: choice(s, best),
+    problem:
+      named.size === undefined
+        ? null
+        : `size "${named.size}" is not in ${candidates.map((c) => c.id).join(' or ')}; took ${s.id} ${best.nominal}, the size nearest the default pipe's: check it`,
   };
 }
 
