@@ -43,6 +43,12 @@ describe('reading a project file', () => {
     const e = good() as Record<string, unknown>;
     (e.nodes as Record<string, unknown>[])[1]!.x = 'east';
     expect(problems(e)).toContain('nodes[1].x: expected a number, got the text "east"');
+    (e.nodes as Record<string, unknown>[])[1]!.x = { metres: 10 };
+    expect(problems(e)).toContain('nodes[1].x: expected a number, got an object');
+    // the schema holds a label to 80 characters (projectSchema.ts); the refusal says so in words
+    const f = good() as Record<string, unknown>;
+    (f.nodes as Record<string, unknown>[])[0]!.label = 'x'.repeat(95);
+    expect(problems(f)).toEqual(['nodes[0].label: must be at most 80 characters long; got 95']);
   });
 
   it('refuses unknown fields, naming each', () => {

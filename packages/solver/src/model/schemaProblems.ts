@@ -11,7 +11,7 @@ function describe(value: unknown): string {
   if (typeof value === 'number' && !Number.isFinite(value)) return String(value);
   if (typeof value === 'string')
     return `the text ${JSON.stringify(value.length > 30 ? value.slice(0, 30) + '…' : value)}`;
-  return `a ${typeof value}`;
+  return typeof value === 'object' ? 'an object' : `a ${typeof value}`;
 }
 
 const expectedWords: Record<string, string> = {
@@ -31,6 +31,13 @@ export const plainErrors: z.core.$ZodErrorMap = (issue) => {
     }
     case 'invalid_value':
       return `must be one of ${issue.values.map((v) => JSON.stringify(v)).join(', ')}; got ${describe(issue.input)}`;
+    case 'too_big':
+      // text and lists: a length (numbers carry their own wording from the limits table)
+      if (issue.origin === 'string' && typeof issue.input === 'string')
+        return `must be at most ${issue.maximum} characters long; got ${issue.input.length}`;
+      if (issue.origin === 'array' && Array.isArray(issue.input))
+        return `must hold at most ${issue.maximum} items; got ${issue.input.length}`;
+      return undefined;
     case 'unrecognized_keys':
       return `unknown field${issue.keys.length > 1 ? 's' : ''} ${issue.keys.map((k) => `"${k}"`).join(', ')} (not part of the project format)`;
     default:
