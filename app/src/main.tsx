@@ -13,7 +13,6 @@ import { newTabId, openTabChannel } from './state/tabChannel.js';
 import { bindKeptCopies, refreshKeptCopies } from './state/keptCopiesView.js';
 import { takeStartNotice } from './state/startNotice.js';
 import { setSaveBeforeReload } from './chrome/loadChunk.js';
-import { registerServiceWorker, watchForNewVersion } from './chrome/newVersion.js';
 import { lazyRecovery } from './chrome/lazyRecovery.js';
 import { installShortcuts } from './chrome/shortcuts.js';
 import { ErrorBoundary } from './chrome/ErrorBoundary.js';
@@ -104,7 +103,16 @@ async function start() {
   const notice = problem ?? unsaved.notice ?? takeStartNotice();
   if (notice) actions.notify(notice);
   void refreshKeptCopies(false);
-  watchForNewVersion(actions.notify, autosave.flush);
+  // The offline worker is installed after the first draw, and its update notice loads with it: on a
+  // first visit it fetches and stores every file, which had competed with the first draw for the
+  // processor (some 250 ms of its thread's time in a trace of a fresh profile).
+  const hadWorker = 'serviceWorker' in navigator && navigator.serviceWorker.controller !== null;
+  afterFirstDraw(() => {
+    void import('./chrome/newVersion.js').then((m) => {
+      m.registerServiceWorker();
+      m.watchForNewVersion(actions.notify, autosave.flush, hadWorker);
+    });
+  });
   if (testHook) void testHook.then((m) => m.installTestHook(store));
   createRoot(document.getElementById('root')!).render(
     <StrictMode>
@@ -119,11 +127,8 @@ async function start() {
 
 void start();
 // The schema checks (zod) word refusals and check edits: a valid project opens without them. The
-// parts off the first screen follow, one at a time while the page is idle. The offline worker is
-// installed then too: on a first visit it fetches and stores every file, which had competed with the
-// first draw for the processor (some 250 ms of its thread's time in a trace of a fresh profile).
+// parts off the first screen follow, one at a time while the page is idle.
 afterFirstDraw(() => {
-  registerServiceWorker();
   void loadChecks()
     .catch(() => undefined)
     .then(warmParts);

@@ -10,9 +10,13 @@ export function registerServiceWorker() {
  * Tells the user when a newer version took over this tab's offline files. The tab goes on with the
  * files it started with (the worker keeps them while the tab is open); a reload brings the new one.
  */
-export function watchForNewVersion(notify: (n: Notice) => void, saveBeforeReload: () => Promise<boolean>) {
+export function watchForNewVersion(
+  notify: (n: Notice) => void,
+  saveBeforeReload: () => Promise<boolean>,
+  /** whether a worker controlled the page when it opened (read then: this module loads after the first draw) */
+  hadWorker: boolean,
+) {
   if (!import.meta.env.PROD || !('serviceWorker' in navigator)) return;
-  const hadWorker = navigator.serviceWorker.controller !== null;
   navigator.serviceWorker.addEventListener('controllerchange', () => {
     if (!hadWorker) return; // the first install changes nothing the user sees
     notify({
