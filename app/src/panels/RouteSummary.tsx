@@ -43,7 +43,7 @@ export function RouteSummary() {
                 !
               </span>{' '}
               The route is in {pieces} separate pieces, not one connected main: each is sized on its own, with a
-              dead-end block at every free end. Join them by drawing a run from one to the other.
+              dead-end block at every free end. Draw a run between them to join them.
             </p>
           )}
           {analysis.diagnostics.length > 0 && (
@@ -74,7 +74,7 @@ export function RouteSummary() {
             ))}
           </ol>
           <p className="muted small">
-            Click a fitting on the plan, or a row of the schedule, to see its results and calculation.
+            Click a fitting on the plan or a schedule row to see its results and calculation.
           </p>
         </>
       )}
