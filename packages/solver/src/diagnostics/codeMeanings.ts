@@ -99,7 +99,8 @@ export const CODE_MEANINGS: CodeMeanings = {
       'Check the restrained joints sized instead, deepen the main for a taller face, improve the soil, or have the block designed by a geotechnical engineer.',
   },
   'pad.no-bearing': {
-    meaning: 'The soil under the fitting cannot take the downward thrust: restrained joints are sized instead.',
+    meaning:
+      'The soil under the fitting has no allowable bearing: it cannot carry a trench-bottom pad against the downward thrust nor the weight of a gravity anchor, so restrained joints are sized instead.',
     action: 'Restrain the joints or replace the soil.',
   },
   'joints.no-resistance': {

@@ -77,7 +77,7 @@ const WORDS: Record<DiagnosticCode, Words> = {
   'block.not-adequate': (v) =>
     `Not adequate: no block within the cover and face limits holds ${v.thrust} with a safety factor of ${v.safetyFactor}: a face of ${v.bearingArea} is needed, the largest allowed is ${v.largestFace}, and the strongest, ${v.faceWidth} wide × ${v.faceHeight} high, resists ${v.ratio} × the thrust by passive pressure (${v.safetyFactor} needed). Restrained joints are sized instead: check them, or deepen the main, improve the soil, or have the block designed by a geotechnical engineer.`,
   'pad.no-bearing': (_v, s, c) =>
-    `No bearing under the fitting: ${soil(s, c)} cannot take the downward thrust; restrained joints are sized instead, or replace the soil.`,
+    `No bearing under the fitting: ${soil(s, c)} cannot carry a pad or an anchor; restrained joints are sized instead, or replace the soil.`,
   'joints.no-resistance': (v, s, c) =>
     `Not adequate: the soil along ${leg(s, c)} (φ = ${v.frictionAngle}, c = ${v.cohesion}) gives no friction or bearing, so restrained joints cannot hold; use a block, piles or soil replacement.`,
   'joints.encroach': (v, s, c) =>

@@ -187,3 +187,17 @@ describe('the gravity anchor as built', () => {
     expect(text).toContain('anchor 5 ft 4 in l × 5 ft 4 in w × 5 ft 4 in h, 5.62 yd³');
   });
 });
+
+describe('a gravity anchor on a soil with no allowable bearing', () => {
+  it('is not built: its weight would bear on that soil, so joints are sized instead and the reason given', () => {
+    // Statics: a dead-weight anchor holds the uplift by its weight, which the soil under it must carry
+    // (as a trench-bottom pad's load); a soil with no allowable bearing carries none.
+    const f = analyse(crestRoute({ soils: [{ id: 'peat', bearing: 0, frictionAngle: 30 }] })).byNode.get('c')!;
+    expect(f.restraint.anchor).toBeNull();
+    expect(f.restraint.block).toBeNull();
+    expect(f.restraint.restrainedLegs.length).toBeGreaterThan(0);
+    expect(f.restraint.diagnostics.map((d) => d.code)).toContain('pad.no-bearing');
+    // the same route on sand has its anchor
+    expect(analyse(crestRoute()).byNode.get('c')!.restraint.anchor).not.toBeNull();
+  });
+});

@@ -68,6 +68,9 @@ export const baseFrictionCoefficient = (frictionAngle: number): number =>
  */
 export function sizeGravityAnchor(i: GravityAnchorInput): AnchorResult {
   const { site } = i;
+  // Its weight bears on the soil under it, as a trench-bottom pad does: none where that soil has none.
+  if (!((site.soil.verticalBearing ?? site.soil.bearing) > 0))
+    return { anchor: null, steps: [], diagnostics: [diagnostic('pad.no-bearing', { soil: site.soil.id })] };
   const mu = baseFrictionCoefficient(site.soil.frictionAngle);
   const sliding = i.horizontal > 0;
   /** N, the weight the anchor needs: the uplift rule, and the sliding rule where friction is to hold */
