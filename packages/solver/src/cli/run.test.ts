@@ -185,6 +185,18 @@ describe('the command line quantities and stations', () => {
     expect(Math.abs(value(/^Total to order$/) - value(/^Net$/) * 1.1)).toBeLessThan(0.011 * 2);
   });
 
+  it('says in the JSON take-off which units its figures are in and which sheet rounded them', async () => {
+    for (const units of ['us', 'si'] as const) {
+      const r = await cli('quantities', demoPath, '--format', 'json', '--units', units);
+      expect(r.status).toBe(0);
+      const t = JSON.parse(r.stdout) as { project: string; units: unknown; concreteNet: number };
+      expect(t.project).toBe(demo().name);
+      expect(t.units).toEqual({ values: 'SI: m, m³', roundedAs: units });
+      // no float noise past 12 significant digits (0.1 + 0.2 style tails)
+      expect(r.stdout).not.toMatch(/\d\.\d*(0000000|9999999)\d/);
+    }
+  });
+
   it('writes stations in the table when the project asks for them', async () => {
     const path = fileOf(
       'stations.json',

@@ -206,8 +206,15 @@ export async function runCli(argv: readonly string[], rawIo: CliIo): Promise<num
       if (format === 'json')
         io.out(
           JSON.stringify(
-            { ...t, cautions: CAUTIONS },
-            null,
+            {
+              project: project.name,
+              // SI figures of what the sheet in `roundedAs` units lists, each piece rounded up there
+              units: { values: 'SI: m, m³', roundedAs: units },
+              ...t,
+              cautions: CAUTIONS,
+            },
+            // 12 significant digits: what a figure converted back from yd³ or ft carries beyond it is noise
+            (_, v: unknown) => (typeof v === 'number' ? Number(v.toPrecision(12)) : v),
             io.interactive || args.options.has('pretty') ? 2 : undefined,
           ) + '\n',
         );
