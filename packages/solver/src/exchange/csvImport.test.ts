@@ -69,6 +69,20 @@ describe('a CSV survey', () => {
     expect(analyse(r.project).byNode.get('n2')!.geometry.kind).toBe('tee');
   });
 
+  it('reads decimal commas in a file split by semicolons, and says why a comma file cannot have them', () => {
+    // The same survey as a spreadsheet writes it where the comma is the decimal mark.
+    const semicolons = SURVEY.replace(/,/g, ';').replace(/(\d)\.(\d)/g, '$1,$2');
+    const r = importCsv(semicolons, MAPPING, 'm', { cover: 1.2 });
+    if (!r.ok) throw new Error(r.notes.map(noteText).join('\n'));
+    expect(r.project.nodes.map((n) => n.groundLevel)).toEqual([52.4, 52.1, 51.35, 50.9]);
+    const commas = 'E,N\n"1000,5",5000\n1060,5000\n';
+    const bad = importCsv(commas, { easting: 'E', northing: 'N' }, 'm', {});
+    expect(bad.ok).toBe(false);
+    expect(bad.notes.map(noteText).join('\n')).toMatch(
+      /expected a number, got "1000,5" \(a decimal comma in a file split by commas/,
+    );
+  });
+
   it('names the row and the column of a bad number, and a column the header lacks', () => {
     const bad = SURVEY.replace('1060.000,5045.000', '1060.000,50x45');
     const r = importCsv(bad, MAPPING, 'm');

@@ -27,6 +27,8 @@ export interface ColumnMapping {
 export interface SurveyTable {
   header: string[];
   rows: string[][];
+  /** the columns are not split by commas (semicolons, tabs): a comma in a number is its decimal mark */
+  decimalComma?: boolean;
 }
 
 /** The header and rows of a CSV text, through papaparse (delimiter guessed: comma, semicolon, tab). */
@@ -46,7 +48,8 @@ export function readCsvTable(text: string): { ok: true; table: SurveyTable } | {
       ok: false,
       notes: [{ level: 'error', where: 'row 1', message: 'expected a header row naming at least two columns' }],
     };
-  return { ok: true, table: { header: header.map((h) => h.trim()), rows } };
+  const decimalComma = parsed.meta.delimiter !== ',';
+  return { ok: true, table: { header: header.map((h) => h.trim()), rows, ...(decimalComma ? { decimalComma } : {}) } };
 }
 
 /** A mapping guessed from usual header names, for the dialog to start from and the CLI to fall back on. */
@@ -101,12 +104,20 @@ export function surveyLines(
       if (i === null) return null;
       const raw = (row[i] ?? '').trim();
       if (raw === '' && optional) return null;
-      const v = Number(raw);
+      // 1000,5 in a file split by semicolons or tabs, as spreadsheets write it where the comma is the decimal mark
+      const v = Number(table.decimalComma && /^[-+]?\d*,\d+$/.test(raw) ? raw.replace(',', '.') : raw);
       if (raw === '' || !Number.isFinite(v)) {
         notes.push({
           level: 'error',
           where: `row ${rowNo}, column "${table.header[i]}"`,
-          message: raw === '' ? 'is empty; expected a number' : `expected a number, got "${raw.slice(0, 40)}"`,
+          message:
+            raw === ''
+              ? 'is empty; expected a number'
+              : `expected a number, got "${raw.slice(0, 40)}"${
+                  /\d,\d/.test(raw) && !table.decimalComma
+                    ? ' (a decimal comma in a file split by commas: save it with semicolons, or with decimal points)'
+                    : ''
+                }`,
         });
         return null;
       }
