@@ -83,6 +83,15 @@ describe('a CSV survey', () => {
     );
   });
 
+  it('refuses a grid proj4 cannot use at import, not at the export after it', () => {
+    const bad = importCsv(SURVEY, MAPPING, 'm', {}, undefined, { proj4: 'garbage' });
+    expect(bad.ok).toBe(false);
+    expect(bad.notes.map(noteText).join('\n')).toMatch(/the grid "garbage" is not a projection proj4 can use \(.+\)/);
+    // UTM zone 32N on WGS 84 (EPSG:32632) is one it can
+    const utm = importCsv(SURVEY, MAPPING, 'm', {}, undefined, { proj4: '+proj=utm +zone=32 +datum=WGS84 +units=m' });
+    expect(utm.ok).toBe(true);
+  });
+
   it('names the row and the column of a bad number, and a column the header lacks', () => {
     const bad = SURVEY.replace('1060.000,5045.000', '1060.000,50x45');
     const r = importCsv(bad, MAPPING, 'm');

@@ -26,7 +26,13 @@ export function localTransverseMercator(lon0: number, lat0: number): PlanProject
 
 /** A projection of WGS 84 from its proj4 definition; throws with proj4's message when it is not one. */
 export function projectionOf(definition: string): PlanProjection {
-  const converter = proj4('EPSG:4326', definition);
+  let converter;
+  try {
+    converter = proj4('EPSG:4326', definition);
+  } catch (e) {
+    // proj4 throws a bare string for a definition it cannot parse
+    throw new Error(e instanceof Error ? e.message : String(e));
+  }
   return {
     proj4: definition,
     forward: ([lon, lat]) => {

@@ -7,6 +7,7 @@ import { readGeoJsonRoute } from './geojsonRoute.js';
 import { readCsvTable, surveyLines, type ColumnMapping, type SurveyUnit } from './csvSurvey.js';
 import { defaultPipe, type PipeChoice } from './pipeChoice.js';
 import type { ImportNote } from './importNotes.js';
+import { projectionOf } from './localProjection.js';
 import { quantityText } from '../schedule/columnUnits.js';
 
 export interface ImportOptions {
@@ -136,6 +137,22 @@ export function importCsv(
   base: Omit<Project, 'nodes' | 'pipes'> = importBase(unit === 'm' ? 'si' : 'us'),
   georeference?: Project['georeference'],
 ): ImportResult {
+  // A grid the export could not use is refused now, not when the design is exported.
+  if (georeference?.proj4 !== undefined)
+    try {
+      projectionOf(georeference.proj4);
+    } catch (e) {
+      return {
+        ok: false,
+        notes: [
+          {
+            level: 'error',
+            where: '',
+            message: `the grid "${georeference.proj4.slice(0, 60)}" is not a projection proj4 can use (${(e as Error).message})`,
+          },
+        ],
+      };
+    }
   const table = readCsvTable(text);
   if (!table.ok) return table;
   const pipe = o.pipe ?? (unit === 'm' ? defaultPipe() : defaultPipe('di-awwa-pc350', '8'));
