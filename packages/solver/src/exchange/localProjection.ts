@@ -31,7 +31,7 @@ export function projectionOf(definition: string): PlanProjection {
     converter = proj4('EPSG:4326', definition);
   } catch (e) {
     // proj4 throws a bare string for a definition it cannot parse
-    throw new Error(e instanceof Error ? e.message : String(e));
+    throw new Error(e instanceof Error ? e.message : String(e), { cause: e });
   }
   return {
     proj4: definition,
