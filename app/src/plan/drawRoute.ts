@@ -352,11 +352,21 @@ export function drawArrows(
     }
     // The label is formatted and measured only if the shortest force label ("9 kN", about 26 px) has room.
     const h = 13;
-    const room = (w: number) => [
-      { x: ux >= 0 ? ex + 3 : ex - 3 - w, y: uy >= 0 ? ey + 2 : ey - 2 - h, w, h },
-      { x: ux >= 0 ? ex - 3 - w : ex + 3, y: uy >= 0 ? ey + 2 : ey - 2 - h, w, h },
-      { x: ex - w / 2, y: uy >= 0 ? ey + 4 : ey - 4 - h, w, h },
-    ];
+    // Around the head first, then beside the shaft on either hand, clear of its line: a label left off
+    // where the first spots are taken (a tight bend, a branch) would leave a bare arrow.
+    const mx = (s.sx + ex) / 2,
+      my = (s.sy + ey) / 2;
+    const room = (w: number) => {
+      const d = 4 + (Math.abs(uy) * w + Math.abs(ux) * h) / 2;
+      return [
+        { x: ux >= 0 ? ex + 3 : ex - 3 - w, y: uy >= 0 ? ey + 2 : ey - 2 - h, w, h },
+        { x: ux >= 0 ? ex - 3 - w : ex + 3, y: uy >= 0 ? ey + 2 : ey - 2 - h, w, h },
+        { x: ex - w / 2, y: uy >= 0 ? ey + 4 : ey - 4 - h, w, h },
+        { x: ux >= 0 ? ex + 3 : ex - 3 - w, y: uy >= 0 ? ey - 2 - h : ey + 2, w, h },
+        { x: mx - uy * d - w / 2, y: my + ux * d - h / 2, w, h },
+        { x: mx + uy * d - w / 2, y: my - ux * d - h / 2, w, h },
+      ];
+    };
     if (!room(24).some((r) => space.fits(r))) continue;
     const text = thrustLabel(a.horizontal, a.vertical, units);
     const w = textWidth(ctx, TYPE.force, text) + 4;
