@@ -73,9 +73,7 @@ export function RouteSummary() {
               </li>
             ))}
           </ol>
-          <p className="muted small">
-            Click a fitting on the plan or a schedule row to see its results and calculation.
-          </p>
+          <p className="muted small">Click a fitting or a schedule row for its results and calculation.</p>
         </>
       )}
     </section>

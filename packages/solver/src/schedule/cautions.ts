@@ -25,14 +25,7 @@ export const CAUTIONS: readonly string[] = [
  * schedule print, the crew sheet and the plan drawing all print these, so that no printed output
  * carries fewer.
  */
-export const PAGE_CAUTIONS: readonly string[] = [
-  CAUTIONS[0]!,
-  CAUTIONS[1]!,
-  CAUTIONS[3]!,
-  CAUTIONS[4]!,
-  CAUTIONS[5]!,
-  CAUTIONS[6]!,
-];
+export const PAGE_CAUTIONS: readonly string[] = [0, 1, 3, 4, 5, 6].map((i) => CAUTIONS[i]!);
 
 /** The cautions as a terminal table ends with them, one marked line each. */
 export const cautionLines = (): string[] => CAUTIONS.map((c) => `! ${c}`);
