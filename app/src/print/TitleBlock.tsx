@@ -13,7 +13,7 @@ export function TitleBlock({
   note,
   detail,
   kind = 'Restraint schedule — crew sheet',
-  scale = 'Sketches not to scale: build to the figures',
+  scale = 'Not to scale: build to figured dimensions',
 }: {
   project: Project;
   units: UnitSystem;

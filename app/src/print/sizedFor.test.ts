@@ -2,6 +2,7 @@ import { describe, it, expect } from 'vitest';
 import { analyse, scheduleOf } from '@mainbrace/solver';
 import { sizedForLine } from './sizedFor.js';
 import { demoProject } from '../testFixtures.js';
+import { show } from '../format/quantity.js';
 
 describe('the crew page says what its restraints were sized for', () => {
   const project = demoProject();
@@ -16,19 +17,36 @@ describe('the crew page says what its restraints were sized for', () => {
     expect(sizedForLine(project, fittings, 'us')).toContain('Field test 150.1 psi');
     // a case without a label reads as its id (caseLabel.ts)
     const unlabelled = { ...project, loadCases: project.loadCases.map(({ label: _, ...c }) => c) };
-    expect(sizedForLine(unlabelled, fittings, 'si')).toMatch(/^Sized for: working 620 kPa/);
+    expect(sizedForLine(unlabelled, fittings, 'si')).toMatch(/^Sized for gauge pressures working 620 kPa/);
   });
 
-  it('names the soil under each piece of concrete with its allowable bearing, and only fittings with concrete', () => {
+  it('names the soil at each restrained fitting with the bearing its concrete was sized on', () => {
     const line = sizedForLine(project, fittings, 'us');
-    const withConcrete = fittings.filter((f) => f.restraint.block || f.restraint.anchor || f.restraint.trenchBottom);
+    const withConcrete = fittings.filter(
+      (f) => f.restraint.block || f.restraint.anchor || f.restraint.trenchBottom || f.restraint.restrainedLegs.length,
+    );
     const soils = new Set(withConcrete.map((f) => f.soil));
-    const named = line.slice(line.indexOf('bears on:')).match(/\b[A-Z]\d+\b/g) ?? [];
+    const named = line.slice(line.indexOf('Soil assumed:')).match(/\b[A-Z]\d+\b/g) ?? [];
     // marks are named when the page's concrete bears on more than one soil
     expect(new Set(named)).toEqual(soils.size > 1 ? new Set(withConcrete.map((f) => f.mark)) : new Set());
     const mixed = withConcrete.slice(0, 2).map((f, i) => ({ ...f, soil: i ? 'brook-clay' : 'sand' }));
     expect(sizedForLine(project, mixed, 'si')).toContain(`(${mixed[0]!.mark})`);
     // The demo's sand: 95,761 Pa = 2,000 lb/ft² (1 psf = 47.880 Pa, NIST SP 811 appendix B).
     expect(line).toMatch(/Medium dense sand, 2,?000 psf allowable/);
+  });
+
+  it('gives a soil whose bearing rises with depth the bearing at the blocks, and a soil without a label its id', () => {
+    // A soil as the IBC 1806.2 rows are stored: no bearing at the surface, a rise per metre of depth.
+    const rising = {
+      ...project,
+      soils: project.soils.map((s) => ({ ...s, label: undefined, bearing: 0, bearingPerDepth: 20_000 })),
+    };
+    const rows = scheduleOf(analyse(rising)).fittings;
+    const line = sizedForLine(rising, rows, 'si');
+    expect(line).not.toMatch(/undefined| 0 kPa/);
+    const block = rows.find((f) => f.restraint.block && f.soil === 'sand')!;
+    const od = Math.max(...block.pipes.map((p) => p.outsideDiameter));
+    // 20 kPa per metre down to the face centre, cover + OD/2 (the block sizing's own rule)
+    expect(line).toContain(show(20_000 * (block.cover + od / 2), 'stress', 'si'));
   });
 });

@@ -1,10 +1,24 @@
-import { quantityText, type Project, type ScheduleFitting, type UnitSystem } from '@mainbrace/solver';
+import { quantityText, type Project, type ScheduleFitting, type Soil, type UnitSystem } from '@mainbrace/solver';
 import { show } from '../format/quantity.js';
 
 /**
+ * Pa, the allowable bearing a fitting's concrete was sized on: a block's at its face centre (the soil's
+ * bearing and its rise with depth, as the block sizing takes it), a pad's or an anchor's the vertical
+ * bearing; null for restrained joints alone.
+ */
+function sizedOn(f: ScheduleFitting, soil: Soil): number | null {
+  const r = f.restraint;
+  if (r.block) {
+    const od = Math.max(...f.pipes.map((p) => p.outsideDiameter));
+    return soil.bearing + (soil.bearingPerDepth ?? 0) * (f.cover + od / 2);
+  }
+  return r.anchor || r.trenchBottom ? (soil.verticalBearing ?? soil.bearing) : null;
+}
+
+/**
  * What a crew page's restraints were sized for, in one line under its title: the pressure cases (the
- * test pressure a crew must not exceed among them) and the soil each block, anchor or pad bears on with
- * its allowable bearing, so that a crew meeting softer ground than assumed knows to stop and ask.
+ * test pressure a crew must not exceed among them) and the soil assumed at each restrained fitting with
+ * the allowable bearing its concrete was sized on, so that a crew meeting softer ground knows to stop.
  */
 export function sizedForLine(project: Project, fittings: readonly ScheduleFitting[], units: UnitSystem): string {
   const cases = project.loadCases
@@ -14,17 +28,24 @@ export function sizedForLine(project: Project, fittings: readonly ScheduleFittin
         (c.datumElevation === undefined ? '' : ` at level ${quantityText(c.datumElevation, 'level', units)}`),
     )
     .join(', ');
-  const bySoil = new Map<string, string[]>();
+  const bySoil = new Map<string, { marks: string[]; bearings: number[] }>();
   for (const f of fittings) {
     const r = f.restraint;
-    if (!r.block && !r.anchor && !r.trenchBottom) continue;
-    bySoil.set(f.soil, [...(bySoil.get(f.soil) ?? []), f.mark]);
+    if (!r.block && !r.anchor && !r.trenchBottom && r.restrainedLegs.length === 0) continue;
+    const entry = bySoil.get(f.soil) ?? { marks: [], bearings: [] };
+    entry.marks.push(f.mark);
+    const soil = project.soils.find((s) => s.id === f.soil);
+    const on = soil ? sizedOn(f, soil) : null;
+    if (on !== null) entry.bearings.push(on);
+    bySoil.set(f.soil, entry);
   }
-  const soils = [...bySoil].map(([id, marks]) => {
+  const soils = [...bySoil].map(([id, { marks, bearings }]) => {
     const soil = project.soils.find((s) => s.id === id);
-    const name = soil ? `${soil.label}, ${show(soil.bearing, 'stress', units)} allowable` : id;
-    // one soil under all of the page's concrete needs no marks
+    const [low, high] = [Math.min(...bearings), Math.max(...bearings)].map((b) => show(b, 'stress', units));
+    const bearing = bearings.length ? `, ${low === high ? low : `${low} to ${high}`} allowable` : '';
+    const name = `${soil?.label ?? id}${bearing}`;
+    // one soil at all of the page's restrained fittings needs no marks
     return bySoil.size > 1 ? `${name} (${marks.join(', ')})` : name;
   });
-  return `Sized for: ${cases} (gauge)${soils.length ? `. Concrete bears on: ${soils.join('; ')}` : ''}.`;
+  return `Sized for gauge pressures ${cases}${soils.length ? `. Soil assumed: ${soils.join('; ')}` : ''}.`;
 }
