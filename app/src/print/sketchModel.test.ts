@@ -79,6 +79,25 @@ describe('restraint sketches are drawn from the schedule row', () => {
     expect(dip.kind).toBe('reducing-bend');
     expect(dip.restraint.block).toBeTruthy();
     expect(sketchOf(dip, a, 'si').lines.join(' ')).toContain('against the shoulder, toward the smaller pipe');
+    // Turned 90° in plan, DN300 to DN150: the thrust p·(A₁·n₁ + A₂·n₂) lies near the large pipe's line,
+    // across the small one, so the block is not "toward the smaller pipe".
+    const dn150 = demo.pipes.find((p) => p.nominal === 'DN150')!;
+    const turned = {
+      ...project,
+      nodes: [
+        { ...plain, id: 'a', x: 0, y: 0, elevation: 103 },
+        { ...plain, id: 'b', x: 60, y: 0, elevation: 103 },
+        { ...plain, id: 'c', x: 60, y: 60, elevation: 103 },
+      ],
+      pipes: [
+        { ...big, id: 'p1', from: 'a', to: 'b' },
+        { ...dn150, id: 'p2', from: 'b', to: 'c' },
+      ],
+    };
+    const ta = analyse(turned);
+    const corner = scheduleOf(ta).fittings.find((f) => f.node === 'b')!;
+    expect(corner.kind).toBe('reducing-bend');
+    expect(sketchOf(corner, ta, 'si').lines.join(' ')).toContain('on the outside of the bend');
     for (const f of rows.filter((r) => r.kind === 'bend' && r.restraint.block && (r.horizontalDeflection ?? 0) > 10))
       expect(sketchOf(f, analysis, 'si').lines.join(' '), f.mark).toContain('on the outside of the bend');
   });

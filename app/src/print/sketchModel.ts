@@ -51,8 +51,8 @@ function bearingSide(f: ScheduleFitting, legs: readonly Leg[], bearing: number):
   switch (f.kind) {
     case 'bend':
     case 'reducing-bend':
-      // A reducing bend that turns little in plan (a dip, a slight angle) pushes along its pipes, as
-      // a reducer does: there is no outside of a bend for the block to stand on.
+      // A reducing bend that turns little in plan (a dip, a slight angle) pushes toward its smaller
+      // pipe, as a reducer does: there is no outside of a bend for the block to stand on.
       return f.kind === 'reducing-bend' && alongPipes(legs, bearing)
         ? 'against the shoulder, toward the smaller pipe'
         : 'on the outside of the bend';
@@ -69,14 +69,18 @@ function bearingSide(f: ScheduleFitting, legs: readonly Leg[], bearing: number):
   }
 }
 
-/** Whether a plan bearing (degrees clockwise from north) runs within 30° of a pipe's line. */
+/**
+ * Whether a plan bearing (degrees clockwise from north) runs within 30° of the smaller pipe's line: a
+ * reducing bend that pushes so pushes as a reducer does, at the shoulder toward that pipe.
+ */
 function alongPipes(legs: readonly Leg[], bearing: number): boolean {
   const b = (bearing * Math.PI) / 180;
   const [bx, by] = [Math.sin(b), Math.cos(b)];
-  return legs.some((l) => {
-    const h = Math.hypot(l.direction[0], l.direction[1]);
-    return h > 0 && Math.abs((l.direction[0] * bx + l.direction[1] * by) / h) >= Math.cos(Math.PI / 6);
-  });
+  let small: Leg | undefined;
+  for (const l of legs) if (!small || l.pipe.outsideDiameter < small.pipe.outsideDiameter) small = l;
+  if (!small) return false;
+  const h = Math.hypot(small.direction[0], small.direction[1]);
+  return h > 0 && (small.direction[0] * bx + small.direction[1] * by) / h >= Math.cos(Math.PI / 6);
 }
 
 /** A plan frame: metres east/north of the fitting → sketch units, north up, centred in the view. */
