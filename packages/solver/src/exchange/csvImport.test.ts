@@ -78,8 +78,11 @@ describe('a CSV survey', () => {
     const commas = 'E,N\n"1000,5",5000\n1060,5000\n';
     const bad = importCsv(commas, { easting: 'E', northing: 'N' }, 'm', {});
     expect(bad.ok).toBe(false);
+    // a tab file from an English-language sheet: 512,345 is a thousands separator, not 512.345
+    const tabs = importCsv('E\tN\n"512,345"\t5000\n"512,400"\t5000\n', { easting: 'E', northing: 'N' }, 'm', {});
+    expect(tabs.ok).toBe(false);
     expect(bad.notes.map(noteText).join('\n')).toMatch(
-      /expected a number, got "1000,5" \(a decimal comma in a file split by commas/,
+      /expected a number, got "1000,5" \(a decimal comma, or a thousands separator/,
     );
   });
 
@@ -87,6 +90,11 @@ describe('a CSV survey', () => {
     const bad = importCsv(SURVEY, MAPPING, 'm', {}, undefined, { proj4: 'garbage' });
     expect(bad.ok).toBe(false);
     expect(bad.notes.map(noteText).join('\n')).toMatch(/the grid "garbage" is not a projection proj4 can use \(.+\)/);
+    // an EPSG code proj4 does not hold, and a UTM grid without its zone, are refused with what to give
+    const epsg = importCsv(SURVEY, MAPPING, 'm', {}, undefined, { proj4: 'EPSG:27700' });
+    expect(epsg.notes.map(noteText).join('\n')).toMatch(/give its \+proj=… definition/);
+    const zoneless = importCsv(SURVEY, MAPPING, 'm', {}, undefined, { proj4: '+proj=utm +datum=WGS84' });
+    expect(zoneless.ok).toBe(false);
     // UTM zone 32N on WGS 84 (EPSG:32632) is one it can
     const utm = importCsv(SURVEY, MAPPING, 'm', {}, undefined, { proj4: '+proj=utm +zone=32 +datum=WGS84 +units=m' });
     expect(utm.ok).toBe(true);

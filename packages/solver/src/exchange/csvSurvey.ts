@@ -27,7 +27,7 @@ export interface ColumnMapping {
 export interface SurveyTable {
   header: string[];
   rows: string[][];
-  /** the columns are not split by commas (semicolons, tabs): a comma in a number is its decimal mark */
+  /** the columns are split by semicolons: a comma in a number is its decimal mark */
   decimalComma?: boolean;
 }
 
@@ -48,7 +48,9 @@ export function readCsvTable(text: string): { ok: true; table: SurveyTable } | {
       ok: false,
       notes: [{ level: 'error', where: 'row 1', message: 'expected a header row naming at least two columns' }],
     };
-  const decimalComma = parsed.meta.delimiter !== ',';
+  // Semicolons are how spreadsheets split a CSV where the comma is the decimal mark; a tab file copied
+  // from an English-language sheet may hold thousands separators (512,345) instead.
+  const decimalComma = parsed.meta.delimiter === ';';
   return { ok: true, table: { header: header.map((h) => h.trim()), rows, ...(decimalComma ? { decimalComma } : {}) } };
 }
 
@@ -104,7 +106,7 @@ export function surveyLines(
       if (i === null) return null;
       const raw = (row[i] ?? '').trim();
       if (raw === '' && optional) return null;
-      // 1000,5 in a file split by semicolons or tabs, as spreadsheets write it where the comma is the decimal mark
+      // 1000,5 in a file split by semicolons, as spreadsheets write it where the comma is the decimal mark
       const v = Number(table.decimalComma && /^[-+]?\d*,\d+$/.test(raw) ? raw.replace(',', '.') : raw);
       if (raw === '' || !Number.isFinite(v)) {
         notes.push({
@@ -115,7 +117,7 @@ export function surveyLines(
               ? 'is empty; expected a number'
               : `expected a number, got "${raw.slice(0, 40)}"${
                   /\d,\d/.test(raw) && !table.decimalComma
-                    ? ' (a decimal comma in a file split by commas: save it with semicolons, or with decimal points)'
+                    ? ' (a decimal comma, or a thousands separator: write decimal points and no separators, or save the file split by semicolons with decimal commas)'
                     : ''
                 }`,
         });

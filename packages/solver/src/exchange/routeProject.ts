@@ -128,6 +128,18 @@ export function importGeoJson(
   return assemble(read.lines, options, base, read.notes, { proj4: read.projection.proj4 });
 }
 
+/** Why proj4 cannot place a survey on the earth with this grid, or null when it can. */
+function gridProblem(definition: string, first: { x: number; y: number } | undefined): string | null {
+  const named = `the grid "${definition.slice(0, 60)}"`;
+  try {
+    const [lon, lat] = projectionOf(definition).inverse([first?.x ?? 0, first?.y ?? 0]);
+    if (Number.isFinite(lon) && Number.isFinite(lat) && Math.abs(lat) <= 90) return null;
+    return `${named} does not place the survey's first point on the earth: check its parameters (a UTM grid needs +zone)`;
+  } catch (e) {
+    return `${named} is not a projection proj4 can use (${(e as Error).message}): give its +proj=… definition (of EPSG codes only EPSG:4326 and EPSG:3857 are known)`;
+  }
+}
+
 /** A project from a CSV survey (routes.md). Never throws. */
 export function importCsv(
   text: string,
@@ -137,27 +149,14 @@ export function importCsv(
   base: Omit<Project, 'nodes' | 'pipes'> = importBase(unit === 'm' ? 'si' : 'us'),
   georeference?: Project['georeference'],
 ): ImportResult {
-  // A grid the export could not use is refused now, not when the design is exported.
-  if (georeference?.proj4 !== undefined)
-    try {
-      projectionOf(georeference.proj4);
-    } catch (e) {
-      return {
-        ok: false,
-        notes: [
-          {
-            level: 'error',
-            where: '',
-            message: `the grid "${georeference.proj4.slice(0, 60)}" is not a projection proj4 can use (${(e as Error).message})`,
-          },
-        ],
-      };
-    }
   const table = readCsvTable(text);
   if (!table.ok) return table;
   const pipe = o.pipe ?? (unit === 'm' ? defaultPipe() : defaultPipe('di-awwa-pc350', '8'));
   const lines = surveyLines(table.table, mapping, unit, pipe);
   if (!lines.ok) return lines;
+  // A grid the export could not use is refused now, not when the design is exported.
+  const grid = georeference?.proj4 === undefined ? null : gridProblem(georeference.proj4, lines.lines[0]?.points[0]);
+  if (grid) return { ok: false, notes: [{ level: 'error', where: '', message: grid }] };
   // Feet are shown and written as international feet: a survey-foot coordinate reads 2 parts per
   // million larger (2.5 ft at 1,250,000), too much to set out against the survey's own control.
   const notes =
