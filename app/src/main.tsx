@@ -106,12 +106,14 @@ async function start() {
   // The offline worker is installed after the first draw, and its update notice loads with it: on a
   // first visit it fetches and stores every file, which had competed with the first draw for the
   // processor (some 250 ms of its thread's time in a trace of a fresh profile).
-  const hadWorker = 'serviceWorker' in navigator && navigator.serviceWorker.controller !== null;
+  const atStart = 'serviceWorker' in navigator ? navigator.serviceWorker.controller : null;
   afterFirstDraw(() => {
-    void import('./chrome/newVersion.js').then((m) => {
-      m.registerServiceWorker();
-      m.watchForNewVersion(actions.notify, autosave.flush, hadWorker);
-    });
+    import('./chrome/newVersion.js')
+      .then((m) => {
+        m.registerServiceWorker();
+        m.watchForNewVersion(actions.notify, autosave.flush, atStart);
+      })
+      .catch(() => undefined); // offline before the worker held it: the next visit installs it
   });
   if (testHook) void testHook.then((m) => m.installTestHook(store));
   createRoot(document.getElementById('root')!).render(

@@ -13,12 +13,12 @@ export function registerServiceWorker() {
 export function watchForNewVersion(
   notify: (n: Notice) => void,
   saveBeforeReload: () => Promise<boolean>,
-  /** whether a worker controlled the page when it opened (read then: this module loads after the first draw) */
-  hadWorker: boolean,
+  /** the worker that controlled the page when it opened (read then: this module loads after the first draw) */
+  atStart: ServiceWorker | null,
 ) {
   if (!import.meta.env.PROD || !('serviceWorker' in navigator)) return;
-  navigator.serviceWorker.addEventListener('controllerchange', () => {
-    if (!hadWorker) return; // the first install changes nothing the user sees
+  const hadWorker = atStart !== null;
+  const tell = () =>
     notify({
       tone: 'info',
       title: 'A new version of Mainbrace is installed: reload when convenient to use it — your project is kept',
@@ -30,5 +30,10 @@ export function watchForNewVersion(
         },
       ],
     });
+  // A newer worker may have taken over before this module loaded.
+  if (hadWorker && navigator.serviceWorker.controller !== atStart) return tell();
+  navigator.serviceWorker.addEventListener('controllerchange', () => {
+    if (!hadWorker) return; // the first install changes nothing the user sees
+    tell();
   });
 }
