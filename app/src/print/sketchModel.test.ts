@@ -58,46 +58,30 @@ describe('restraint sketches are drawn from the schedule row', () => {
     // pipe (statics of a reducer), so its block stands at the shoulder, not on "the outside of the bend".
     const demo = demoProject();
     const plain = demo.nodes.find((n) => n.id === 'n2')!; // a node with the parser's defaults, no end
-    const [big, small] = [
-      demo.pipes.find((p) => p.nominal === 'DN300')!,
-      demo.pipes.find((p) => p.nominal === 'DN200')!,
-    ];
-    const project = {
-      ...demo,
-      nodes: [
-        { ...plain, id: 'a', x: 0, y: 0, elevation: 104 },
-        { ...plain, id: 'b', x: 60, y: 0, elevation: 102.8 },
-        { ...plain, id: 'c', x: 120, y: 0, elevation: 103.9 },
-      ],
-      pipes: [
-        { ...big, id: 'p1', from: 'a', to: 'b' },
-        { ...small, id: 'p2', from: 'b', to: 'c' },
-      ],
+    const pipe = (nominal: string) => demo.pipes.find((p) => p.nominal === nominal)!;
+    /** The words at node b of a DN300 pipe a → b and a smaller one b → c, nodes at [x, y, elevation]. */
+    const wordsAtB = (smaller: string, ...at: [number, number, number][]) => {
+      const [a, b, c] = at.map(([x, y, elevation], i) => ({ ...plain, id: 'abc'[i]!, x, y, elevation }));
+      const project = {
+        ...demo,
+        nodes: [a!, b!, c!],
+        pipes: [
+          { ...pipe('DN300'), id: 'p1', from: 'a', to: 'b' },
+          { ...pipe(smaller), id: 'p2', from: 'b', to: 'c' },
+        ],
+      };
+      const analysed = analyse(project);
+      const f = scheduleOf(analysed).fittings.find((x) => x.node === 'b')!;
+      expect(f.kind).toBe('reducing-bend');
+      expect(f.restraint.block).toBeTruthy();
+      return sketchOf(f, analysed, 'si').lines.join(' ');
     };
-    const a = analyse(project);
-    const dip = scheduleOf(a).fittings.find((f) => f.node === 'b')!;
-    expect(dip.kind).toBe('reducing-bend');
-    expect(dip.restraint.block).toBeTruthy();
-    expect(sketchOf(dip, a, 'si').lines.join(' ')).toContain('against the shoulder, toward the smaller pipe');
+    expect(wordsAtB('DN200', [0, 0, 104], [60, 0, 102.8], [120, 0, 103.9])).toContain(
+      'against the shoulder, toward the smaller pipe',
+    );
     // Turned 90° in plan, DN300 to DN150: the thrust p·(A₁·n₁ + A₂·n₂) lies near the large pipe's line,
     // across the small one, so the block is not "toward the smaller pipe".
-    const dn150 = demo.pipes.find((p) => p.nominal === 'DN150')!;
-    const turned = {
-      ...project,
-      nodes: [
-        { ...plain, id: 'a', x: 0, y: 0, elevation: 103 },
-        { ...plain, id: 'b', x: 60, y: 0, elevation: 103 },
-        { ...plain, id: 'c', x: 60, y: 60, elevation: 103 },
-      ],
-      pipes: [
-        { ...big, id: 'p1', from: 'a', to: 'b' },
-        { ...dn150, id: 'p2', from: 'b', to: 'c' },
-      ],
-    };
-    const ta = analyse(turned);
-    const corner = scheduleOf(ta).fittings.find((f) => f.node === 'b')!;
-    expect(corner.kind).toBe('reducing-bend');
-    expect(sketchOf(corner, ta, 'si').lines.join(' ')).toContain('on the outside of the bend');
+    expect(wordsAtB('DN150', [0, 0, 103], [60, 0, 103], [60, 60, 103])).toContain('on the outside of the bend');
     for (const f of rows.filter((r) => r.kind === 'bend' && r.restraint.block && (r.horizontalDeflection ?? 0) > 10))
       expect(sketchOf(f, analysis, 'si').lines.join(' '), f.mark).toContain('on the outside of the bend');
   });
