@@ -77,6 +77,40 @@ describe('a GeoJSON route', () => {
     expect(Math.abs(f.geometry.deflection! - geodesicBend(ATOLL[0]!, ATOLL[1]!, ATOLL[2]!))).toBeLessThan(0.1);
   });
 
+  it('warns when a route reaches so far from its plane’s middle that lengths read 1 in 10⁴ long', () => {
+    // A straight aqueduct of our own along the equator, 2.2° of longitude (about 245 km): its ends lie
+    // some 122 km from the central meridian, where k − 1 ≈ x²/2R² = 1.8 in 10⁴ (Snyder 1987, eq. 8-11).
+    const long = importGeoJson(
+      collection(
+        line(
+          [
+            [10, 0],
+            [11.1, 0],
+            [12.2, 0],
+          ],
+          { name: 'Long Aqueduct' },
+        ),
+      ),
+    );
+    if (!long.ok) throw new Error(long.notes.map(noteText).join('\n'));
+    const warning = long.notes.map(noteText).find((n) => n.includes('in 10⁴ long'));
+    expect(warning).toMatch(/reaches 12[23] km east or west .* 1\.[89] in 10⁴ long/);
+    // A 60 km main (ends 30 km out: 1.1 in 10⁵) imports without it.
+    const short = importGeoJson(
+      collection(
+        line(
+          [
+            [10, 0],
+            [10.27, 0],
+            [10.54, 0],
+          ],
+          { name: 'Short Main' },
+        ),
+      ),
+    );
+    expect(short.notes.map(noteText).some((n) => n.includes('in 10⁴ long'))).toBe(false);
+  });
+
   it('keeps the plan bend with z as the ground level, the pipe at the cover below it', () => {
     const withZ = QUARRY_HILL.map(([lon, lat], i) => [lon!, lat!, 410 + i * 1.5]);
     const r = importGeoJson(collection(line(withZ)), { cover: 1.5 });

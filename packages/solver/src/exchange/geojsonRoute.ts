@@ -1,4 +1,4 @@
-import { extentMiddle, localTransverseMercator, type PlanProjection } from './localProjection.js';
+import { extentMiddle, localTransverseMercator, scaleError, type PlanProjection } from './localProjection.js';
 import { pipeChoice, type PipeChoice } from './pipeChoice.js';
 import type { RouteLine, RoutePoint } from './routeNetwork.js';
 import { pointText, type ImportNote } from './importNotes.js';
@@ -216,5 +216,16 @@ export function readGeoJsonRoute(text: string, fallbackPipe: PipeChoice): GeoJso
     where: '',
     message: `longitude/latitude projected to a local transverse Mercator centred at ${pointText(lon0, lat0, true)} (metres east and north of it)`,
   });
+  // Lengths on the plane grow with the square of the distance from its central meridian: beyond 1 in
+  // 10⁴ (about 90 km) a chainage or a restrained length set out on the ground would be off by more
+  // than 10 cm a kilometre.
+  let far = 0;
+  for (const l of lines) for (const p of l.points) far = Math.max(far, Math.abs(p.x));
+  if (scaleError(far) > 1e-4)
+    notes.push({
+      level: 'warning',
+      where: '',
+      message: `the route reaches ${Math.round(far / 1000)} km east or west of the middle of its local plane, where lengths read ${(scaleError(far) * 1e4).toFixed(1)} in 10⁴ long: import it in parts less than about 180 km across, or from a CSV survey in its own grid`,
+    });
   return { ok: true, lines, projection, hasLevels: withZ > 0, notes };
 }
