@@ -8,10 +8,12 @@ import { show } from '../format/quantity.js';
  */
 function sizedOn(f: ScheduleFitting, soil: Soil): number | null {
   const r = f.restraint;
-  if (r.block) {
-    const od = Math.max(...f.pipes.map((p) => p.outsideDiameter));
-    return soil.bearing + (soil.bearingPerDepth ?? 0) * (f.cover + od / 2);
-  }
+  // The rules of restraint/concreteRestraint.ts (sizeBlocks, and the pad), which keeps them inline: a
+  // shared helper there costs first-load bytes the budget does not have (docs/performance.md).
+  if (r.block)
+    return (
+      soil.bearing + (soil.bearingPerDepth ?? 0) * (f.cover + Math.max(...f.pipes.map((p) => p.outsideDiameter)) / 2)
+    );
   return r.anchor || r.trenchBottom ? (soil.verticalBearing ?? soil.bearing) : null;
 }
 
@@ -28,19 +30,18 @@ export function sizedForLine(project: Project, fittings: readonly ScheduleFittin
         (c.datumElevation === undefined ? '' : ` at level ${quantityText(c.datumElevation, 'level', units)}`),
     )
     .join(', ');
-  const bySoil = new Map<string, { marks: string[]; bearings: number[] }>();
+  const bySoil = new Map<string, { soil: Soil | undefined; marks: string[]; bearings: number[] }>();
   for (const f of fittings) {
     const r = f.restraint;
     if (!r.block && !r.anchor && !r.trenchBottom && r.restrainedLegs.length === 0) continue;
-    const entry = bySoil.get(f.soil) ?? { marks: [], bearings: [] };
+    let entry = bySoil.get(f.soil);
+    if (!entry)
+      bySoil.set(f.soil, (entry = { soil: project.soils.find((s) => s.id === f.soil), marks: [], bearings: [] }));
     entry.marks.push(f.mark);
-    const soil = project.soils.find((s) => s.id === f.soil);
-    const on = soil ? sizedOn(f, soil) : null;
+    const on = entry.soil ? sizedOn(f, entry.soil) : null;
     if (on !== null) entry.bearings.push(on);
-    bySoil.set(f.soil, entry);
   }
-  const soils = [...bySoil].map(([id, { marks, bearings }]) => {
-    const soil = project.soils.find((s) => s.id === id);
+  const soils = [...bySoil].map(([id, { soil, marks, bearings }]) => {
     const [low, high] = [Math.min(...bearings), Math.max(...bearings)].map((b) => show(b, 'stress', units));
     const bearing = bearings.length ? `, ${low === high ? low : `${low} to ${high}`} allowable` : '';
     const name = `${soil?.label ?? id}${bearing}`;

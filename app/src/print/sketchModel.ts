@@ -53,7 +53,7 @@ function bearingSide(f: ScheduleFitting, legs: readonly Leg[], bearing: number):
     case 'reducing-bend':
       // A reducing bend that turns little in plan (a dip, a slight angle) pushes toward its smaller
       // pipe, as a reducer does: there is no outside of a bend for the block to stand on.
-      return f.kind === 'reducing-bend' && alongPipes(legs, bearing)
+      return f.kind === 'reducing-bend' && towardSmallerPipe(legs, bearing)
         ? 'against the shoulder, toward the smaller pipe'
         : 'on the outside of the bend';
     case 'tee':
@@ -70,10 +70,10 @@ function bearingSide(f: ScheduleFitting, legs: readonly Leg[], bearing: number):
 }
 
 /**
- * Whether a plan bearing (degrees clockwise from north) runs within 30° of the smaller pipe's line: a
- * reducing bend that pushes so pushes as a reducer does, at the shoulder toward that pipe.
+ * Whether a plan bearing (degrees clockwise from north) points within 30° of the way the smaller pipe
+ * leaves: a reducing bend that pushes so pushes as a reducer does, at the shoulder toward that pipe.
  */
-function alongPipes(legs: readonly Leg[], bearing: number): boolean {
+function towardSmallerPipe(legs: readonly Leg[], bearing: number): boolean {
   const b = (bearing * Math.PI) / 180;
   const [bx, by] = [Math.sin(b), Math.cos(b)];
   let small: Leg | undefined;
