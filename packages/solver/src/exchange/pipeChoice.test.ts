@@ -10,8 +10,11 @@ describe('the pipe an imported run is given', () => {
     expect(problem).toMatch(
       /^size "huge" is not in .*pvc.*; took \S+ \S+, the size nearest the default pipe's: check it$/,
     );
-    // the nearest by outside diameter to the default's 222 mm among that series' sizes
-    expect(Math.abs(pipe.outsideDiameter - fallback.outsideDiameter)).toBeLessThan(0.06);
+    // The first PVC series is AWWA C900 DR18, whose sizes have the ductile-iron outside diameters: 6 in is
+    // 6.90 in (175 mm), 8 in is 9.05 in (229.9 mm), 10 in is 11.10 in (282 mm) (from memory). Nearest to
+    // the default's 222 mm: the 8 in.
+    expect(pipe).toMatchObject({ series: 'pvc-c900-dr18', nominal: '8' });
+    expect(pipe.outsideDiameter).toBeCloseTo(9.05 * 0.0254, 9);
   });
 
   it('says so plainly when the catalogue has no pipe of the named material', () => {
