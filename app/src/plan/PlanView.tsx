@@ -326,21 +326,12 @@ export function PlanView() {
           canvases are made at their size: a resize sizes every layer's canvas again and draws it at once. */}
       {size.width > 0 && (
         <Stage width={size.width} height={size.height} listening={false}>
-          <Layer listening={false}>
-            <Shape sceneFunc={drawGround} />
-          </Layer>
-          <Layer listening={false}>
-            <Shape sceneFunc={drawRoute} />
-          </Layer>
-          <Layer listening={false}>
-            <Shape sceneFunc={drawThrust} />
-          </Layer>
-          <Layer listening={false}>
-            <Shape sceneFunc={drawMarks} />
-          </Layer>
-          <Layer listening={false}>
-            <Shape sceneFunc={drawInteractive} />
-          </Layer>
+          {/* one layer each, drawn at its own rate: grid and blocks, pipes, thrust, marks, interaction */}
+          {[drawGround, drawRoute, drawThrust, drawMarks, drawInteractive].map((paint, i) => (
+            <Layer key={i} listening={false}>
+              <Shape sceneFunc={paint} />
+            </Layer>
+          ))}
         </Stage>
       )}
       <PlanOverlays scene={scene} coordsRef={coords} />
