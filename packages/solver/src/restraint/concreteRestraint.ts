@@ -269,6 +269,7 @@ function sizeBlocks(
     diagnostics: [],
     needsJoints: false,
   };
+  // The crew sheet states this bearing (app/src/print/sizedFor.ts writes the rule again: keep them alike).
   const allowable = soil.bearing + (soil.bearingPerDepth ?? 0) * (site.cover + site.od / 2);
   if (allowable <= 0) {
     out.needsJoints = true;
