@@ -148,8 +148,8 @@ export const REGISTER = {
   },
   'block.face-limits': {
     quantity:
-      'Bearing-face proportions: width at most `wide` × the height; at the tallest height the cover allows, at most `widest` × the height and `widestMetres` m',
-    value: { wide: 2, widest: 8, widestMetres: 10 },
+      'Bearing-face proportions: height at most `tall` × the width (taller only where the trench holds the face narrower); width at most `wide` × the height; at the tallest height the cover allows, at most `widest` × the height and `widestMetres` m',
+    value: { tall: 2, wide: 2, widest: 8, widestMetres: 10 },
     unit: '—',
     kind: 'own rule',
     source: 'Mainbrace rule: beyond these a face is not a practical block',

@@ -21,7 +21,7 @@ export const VALUES: { readonly [K in ProvenanceId]: (typeof REGISTER)[K]['value
   'block.bearing-area': null,
   'block.face-rule': null,
   'block.thickest': 2,
-  'block.face-limits': {"wide":2,"widest":8,"widestMetres":10},
+  'block.face-limits': {"tall":2,"wide":2,"widest":8,"widestMetres":10},
   'passive.ovesen': null,
   'passive.rankine': null,
   'anchor.weight-rule': null,

@@ -143,6 +143,31 @@ describe('bearing block area A = SF·T/σ (DIPRA form; docs/check-values.md CV-1
         }
   });
 
+  it('keeps a face no taller than twice its width where the trench does not hold it narrower', () => {
+    // A 22.5° DN300 bend at 6 m cover in soft clay needs about 1.03 m² of face. Before this rule the
+    // least area was a 0.35 m × 2.95 m slot dug 1.5 m below the pipe; as much area, squarer, is issued
+    // now (the register's `block.face-limits`, tall = 2).
+    const soils = [
+      { unitWeight: 17000, frictionAngle: 0, cohesion: 12_000 },
+      { unitWeight: 19000, frictionAngle: 34, cohesion: 0 },
+      { unitWeight: 16000, frictionAngle: 20, cohesion: 10_000 },
+    ];
+    for (const soil of soils)
+      for (const t of [5e3, 2e4, 6e4, 1.5e5])
+        for (const cover of [1.2, 3, 6]) {
+          const over = { thrust: t, soil, cover, allowableBearing: 48e3, step: 0.05, outsideDiameter: 0.326 };
+          const b = sizeBearingBlock(base(over)).block;
+          if (!b) continue;
+          expect(b.faceHeight).toBeLessThanOrEqual(2 * b.faceWidth + 0.05 + 1e-9);
+        }
+    // In a 0.6 m trench a face across it may stand taller: the trench, not the rule, sets its width.
+    const across = sizeBearingBlock(
+      base({ thrust: 8e4, cover: 4, allowableBearing: 96e3, step: 0.05, outsideDiameter: 0.326, trenchWidth: 0.6 }),
+    ).block!;
+    expect(across.faceWidth).toBeCloseTo(0.6, 9);
+    expect(across.faceHeight).toBeGreaterThan(2 * across.faceWidth);
+  });
+
   it('never gives a smaller face for a larger thrust (quantities grow with pressure)', () => {
     const soil = { unitWeight: 17000, frictionAngle: 26, cohesion: 0 };
     let last = 0;

@@ -166,7 +166,7 @@ export interface BlockResult {
 
 const DIPRA_AREA = 'A_b = T·S_f/S_b (DIPRA, Thrust Restraint Design for Ductile Iron Pipe; AWWA M23 Example 1)';
 const FACE_RULE =
-  'Face height at least the pipe OD and at most half the depth to the block bottom; width at most twice the height, wider only at the tallest face the cover allows (Mainbrace’s own rule)';
+  'Face height from the pipe OD to half the depth to the block bottom; height and width each at most twice the other, but taller in a narrower trench and wider at the tallest face the cover allows (Mainbrace’s own rule)';
 
 interface Face {
   width: number;
@@ -242,8 +242,10 @@ function faceResistance(i: BearingBlockInput, centreDepth: number, f: Face) {
  * Sizes a concrete bearing block against undisturbed soil (DIPRA bearing method, Rankine
  * passive resistance, DIPRA/AWWA M23 face proportions). The face
  * is centred on the pipe; every face the limits allow is a candidate — heights in whole steps from the
- * OD to the face rule's tallest (⅔ of the centreline depth), widths in whole steps up to twice the
- * height (and within the trench where the face stands across it), or up to the register's widest face at the tallest height, where the cover stops deepening.
+ * OD to the face rule's tallest (⅔ of the centreline depth), widths in whole steps from half the height
+ * (or the trench's width, where the face stands across a narrower trench) up to twice the height (and
+ * within the trench where the face stands across it), or up to the register's widest face at the
+ * tallest height, where the cover stops deepening.
  * The block built is the candidate of least face area that meets both the bearing-area rule
  * (b·h ≥ SF·T/σ) and the passive resistance (Rankine × Ovesen's 3-D factor ≥ SF·T), the squarer face on
  * a tie. The candidates do not depend on the thrust, and a larger thrust only removes candidates, so the
@@ -284,7 +286,9 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
   for (let k = 0; k <= heights; k++) {
     const height = shortest + k * i.step;
     const wMax = widestAt(height, tallest, limits, i.step, i.trenchWidth);
-    const wBearing = Math.max(shortest, roundUpTo(area / height, i.step));
+    // At most `tall` × as high as wide, unless the trench holds the face narrower (wMax).
+    const wLeast = Math.min(roundUpTo(height / limits.tall, i.step), wMax);
+    const wBearing = Math.max(shortest, wLeast, roundUpTo(area / height, i.step));
     if (wBearing > wMax + 1e-9) continue;
     if (better(bearingW, bearingH, wBearing, height)) {
       bearingW = wBearing;
