@@ -3,7 +3,7 @@ import { calculationRecord } from '../analysis/calculationRecord.js';
 import type { RecordValue } from '../analysis/calcRecord.js';
 import { formatSi } from '../units/format.js';
 import type { UnitSystem } from '../units/conversions.js';
-import { SHORT_CAUTION } from '../schedule/cautions.js';
+import { SHORT_CAUTION } from '../schedule/shortCaution.js';
 import { fittingTitle } from '../schedule/fittingNames.js';
 import { diagnosticText } from '../diagnostics/wording.js';
 import { wordingContext } from '../diagnostics/context.js';

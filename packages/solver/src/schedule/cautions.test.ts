@@ -1,5 +1,6 @@
 import { describe, it, expect } from 'vitest';
-import { CAUTIONS, PAGE_CAUTIONS, SHORT_CAUTION } from './cautions.js';
+import { CAUTIONS, PAGE_CAUTIONS } from './cautions.js';
+import { SHORT_CAUTION } from './shortCaution.js';
 
 /**
  * The five cautions every result screen and printed page carries (docs/project-format.md; the usual

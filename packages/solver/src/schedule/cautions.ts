@@ -1,11 +1,8 @@
 /**
  * The usual cautions of utility specifications and the DIPRA manual (engineer's responsibility, undisturbed
  * soil, curing before the test — the curing time is attributed to AWWA C600, clause not verified), carried by
- * every result screen and printed schedule.
+ * every printed schedule and opened from every result screen (each also shows shortCaution.ts).
  */
-export const SHORT_CAUTION =
-  'Design aid only — every result must be checked by a licensed engineer; local codes and the utility’s standards govern. Blocks bear on undisturbed soil; let the concrete cure before the pressure test.';
-
 export const CAUTIONS: readonly string[] = [
   'Mainbrace is a design aid. Thrust restraint must be designed, checked and sealed by a licensed professional engineer and approved by the water utility or authority having jurisdiction.',
   'Local codes, the utility’s standards and its standard details govern over the generic values used here.',

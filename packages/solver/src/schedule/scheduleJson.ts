@@ -6,6 +6,7 @@ import { roundTo } from '../units/format.js';
 import type { Schedule, ScheduleBlock, ScheduleFitting } from './scheduleRows.js';
 import { JsonIndenter } from './jsonIndent.js';
 import { ascii, JsonBytes } from './jsonBytes.js';
+import { CAUTIONS } from './cautions.js';
 
 /**
  * Decimals kept in the JSON schedule per kind of quantity, SI (docs/project-format.md): millimetres,
@@ -465,7 +466,7 @@ export function writeScheduleJsonBytes(
     fittingText(o, fittings[i]!, echo);
   }
   o.bytes(K.cautionsAfterList);
-  list(o, s.cautions);
+  list(o, CAUTIONS);
   o.bytes(K.end);
   o.flush();
 }

@@ -9,7 +9,6 @@ import { diagnosticText } from '../diagnostics/wording.js';
 import { legTarget, wordingContext } from '../diagnostics/context.js';
 import type { ProvenanceId } from '../provenance/register.js';
 import { unverified } from '../provenance/unverified.js';
-import { CAUTIONS } from './cautions.js';
 import { restrainedJointCount } from './restrainedJoints.js';
 
 /** A bearing block as the schedule reports it (all but an intermediate depth). SI units. */
@@ -99,7 +98,6 @@ export interface Schedule {
   diagnostics: Diagnostic[];
   /** by run (main first) and chainage along it: the order a crew walks the line */
   fittings: ScheduleFitting[];
-  cautions: readonly string[];
 }
 
 /**
@@ -333,7 +331,6 @@ export function scheduleOf(a: Analysis): Schedule {
         Object.defineProperty(this, 'fittings', { value: rows, enumerable: true });
         return rows;
       },
-      cautions: CAUTIONS,
     };
     schedules.set(a, s);
   }

@@ -5,6 +5,7 @@ import type { Dimension } from '../../src/units/conversions.js';
 import { ceilTo, roundTo } from '../../src/units/format.js';
 import type { Schedule, ScheduleBlock, ScheduleFitting } from '../../src/schedule/scheduleRows.js';
 import { JSON_DECIMALS, type ScheduleJsonOptions } from '../../src/schedule/scheduleJson.js';
+import { CAUTIONS } from '../../src/schedule/cautions.js';
 
 // The JSON schedule as it was written before the streaming writer (src/schedule/scheduleJson.ts): an
 // object per fitting with every number rounded, then one JSON.stringify of the whole tree. Kept as the
@@ -117,7 +118,7 @@ export function scheduleJsonOracle(s: Schedule, options: boolean | ScheduleJsonO
     warnings: s.warnings,
     diagnostics: s.diagnostics.map(diagnosticJson),
     fittings: s.fittings.map((f) => fitting(f, echo)),
-    cautions: s.cautions,
+    cautions: CAUTIONS,
   };
   return JSON.stringify(out, null, pretty ? 2 : undefined) + '\n';
 }
