@@ -3,6 +3,7 @@ import { CASE_KINDS, LIMITS, type LoadCase, type UnitSystem } from '@mainbrace/s
 import { useActions, useApp } from '../state/StoreContext.js';
 import { nextId } from '../state/documentEdits.js';
 import { NumberField } from './NumberField.js';
+import { CaseNameField, freeCaseName } from './CaseNameField.js';
 import { TestPressureControl } from './TestPressureControl.js';
 import { GoverningList } from './GoverningList.js';
 import { SurgeSuggestion } from './SurgeSuggestion.js';
@@ -35,13 +36,7 @@ const CaseRow = memo(function CaseRow({
   return (
     <tr>
       <td>
-        <input
-          aria-label={`${CASE_FIELDS.label} of case ${c.id}`}
-          value={c.label ?? ''}
-          placeholder={c.id}
-          maxLength={80}
-          onChange={(e) => set(c.id, { label: e.target.value || undefined })}
-        />
+        <CaseNameField c={c} />
       </td>
       <td>
         <select
@@ -127,7 +122,7 @@ export function CasesPanel() {
     const like = loadCases[0]!;
     actions.addCase({
       id,
-      label: 'New case',
+      label: freeCaseName(loadCases, id, 'New case'),
       kind: 'other',
       pressure: like.pressure,
       flowFactor: 1,

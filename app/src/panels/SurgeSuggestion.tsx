@@ -1,3 +1,4 @@
+import { freeCaseName } from './CaseNameField.js';
 import { useMemo, useState } from 'react';
 import { notVerifiedText, REGISTER, surgeEstimate, unverified, wordingContext, type LoadCase } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
@@ -54,12 +55,13 @@ export function SurgeSuggestion() {
       actions.updateCase(surge.id, { pressure: estimate.suggestedPressure, ...datum });
       return;
     }
+    const id = nextId(
+      'surge',
+      project.loadCases.map((x) => x.id),
+    );
     const c: LoadCase = {
-      id: nextId(
-        'surge',
-        project.loadCases.map((x) => x.id),
-      ),
-      label: 'Working + surge (estimate)',
+      id,
+      label: freeCaseName(project.loadCases, id, 'Working + surge (estimate)'),
       kind: 'surge',
       pressure: estimate.suggestedPressure,
       flowFactor: working.flowFactor,

@@ -20,6 +20,25 @@ function uniqueIds(items: readonly { id: string }[], list: string, ctx: Pick<Ctx
   });
 }
 
+/**
+ * Each case is read by its name (its label, else its id) on every screen and sheet: two cases of one
+ * name would make "governed by" ambiguous.
+ */
+function uniqueCaseNames(cases: Project['loadCases'], ctx: Pick<Ctx, 'addIssue'>) {
+  const seen = new Map<string, number>();
+  cases.forEach((c, i) => {
+    const name = c.label ?? c.id;
+    const first = seen.get(name);
+    if (first === undefined) seen.set(name, i);
+    else
+      ctx.addIssue({
+        code: 'custom',
+        path: ['loadCases', i, c.label === undefined ? 'id' : 'label'],
+        message: `"${name}" already names loadCases[${first}]: give each case a name of its own`,
+      });
+  });
+}
+
 /** Nodes standing at one point (within MIN_PIPE_LENGTH) but not joined by a pipe. */
 function coincidentNodes(p: Project, add: Add) {
   const cell = (v: number) => Math.floor(v / MIN_PIPE_LENGTH);
@@ -110,9 +129,10 @@ export function crossCheck(p: Project, ctx: Ctx): void {
   overlappingPipes(p, add);
 }
 
-/** Unique ids, references that resolve, pipes joining two distinct points with ID below OD. */
+/** Unique ids and case names, references that resolve, pipes joining two distinct points with ID below OD. */
 export function referenceChecks(p: Project, ctx: Pick<Ctx, 'addIssue'>): void {
   uniqueIds(p.loadCases, 'loadCases', ctx);
+  uniqueCaseNames(p.loadCases, ctx);
   uniqueIds(p.soils, 'soils', ctx);
   uniqueIds(p.nodes, 'nodes', ctx);
   uniqueIds(p.pipes, 'pipes', ctx);

@@ -73,6 +73,20 @@ describe('reading a project file', () => {
     expect(problems(g)).toContain('loadCases: must have at least one load case');
   });
 
+  it('refuses two load cases of one name, which would make "governed by" ambiguous', () => {
+    const d = good() as unknown as { loadCases: Record<string, unknown>[] };
+    d.loadCases = [
+      { id: 'working', label: 'Field test', kind: 'working', pressure: 6e5 },
+      { id: 'test', label: 'Field test', kind: 'test', pressure: 9e5, flowFactor: 0 },
+      { id: 'surge', kind: 'surge', pressure: 9e5 },
+      { id: 'other', label: 'surge', pressure: 7e5 },
+    ];
+    expect(problems(d)).toEqual([
+      'loadCases[1].label: "Field test" already names loadCases[0]: give each case a name of its own',
+      'loadCases[3].label: "surge" already names loadCases[2]: give each case a name of its own',
+    ]);
+  });
+
   it('refuses a pipe whose two ends are at the same point', () => {
     const d = good();
     d.nodes[1]!.x = 0;

@@ -40,6 +40,12 @@ const MUTATIONS: Record<string, Mutation> = {
   'duplicate pipe id': (p, _i, j) => void (p.pipes[(j + 1) % p.pipes.length]!.id = p.pipes[j]!.id),
   'duplicate soil id': (p) => void (p.soils[1]!.id = p.soils[0]!.id),
   'duplicate case id': (p) => void (p.loadCases[2]!.id = p.loadCases[0]!.id),
+  'two cases of one label': (p) => void (p.loadCases[2]!.label = p.loadCases[0]!.label ?? p.loadCases[0]!.id),
+  'a label that is another case’s id': (p) => {
+    delete p.loadCases[0]!.label;
+    p.loadCases[1]!.label = p.loadCases[0]!.id;
+  },
+  'labels of their own': (p) => p.loadCases.forEach((c, k) => void (c.label = `Case ${k + 1}`)),
   'unknown soil': (p, i) => void (p.nodes[i]!.soil = 'peat'),
   'known soil': (p, i) => void (p.nodes[i]!.soil = 'sand'),
   'unknown default soil': (p) => void (p.defaultSoil = 'peat'),
@@ -95,6 +101,9 @@ describe('routeRulesHold answers as referenceChecks and overlappingPipes do', ()
     expect(answers.size).toBe(Object.keys(MUTATIONS).length);
     expect(answers.get('none')).toEqual(new Set([true]));
     expect(answers.get('duplicate node id')).toEqual(new Set([false]));
+    expect(answers.get('two cases of one label')).toEqual(new Set([false]));
+    expect(answers.get('a label that is another case’s id')).toEqual(new Set([false]));
+    expect(answers.get('labels of their own')).toEqual(new Set([true]));
     expect(answers.get(`branch ${OVERLAP_ANGLE * 0.999}° off a pipe`)).toContain(false);
     expect(answers.get(`branch ${OVERLAP_ANGLE * 1.001}° off a pipe`)).toContain(true);
   }, 120_000);

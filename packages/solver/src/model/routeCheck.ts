@@ -10,7 +10,7 @@ function distinct(items: readonly { id: string }[]): boolean {
 
 /**
  * Whether a project passes the cross-field rules of crossChecks.ts that the hand check needs answered
- * — `referenceChecks` (unique ids, soils and nodes that exist, a pipe between two distinct points with
+ * — `referenceChecks` (unique ids and case names, soils and nodes that exist, a pipe between two distinct points with
  * its inside diameter below its outside one) and `overlappingPipes` (one pipe per pair of nodes, no two
  * pipes leaving a node along one line) — as yes or no, with the same arithmetic. The command line asks
  * it of every file it reads: nodes are looked up once into an index and the pipes checked in one pass,
@@ -20,6 +20,9 @@ function distinct(items: readonly { id: string }[]): boolean {
 export function routeRulesHold(p: Project): boolean {
   const { nodes, pipes } = p;
   if (!distinct(p.loadCases) || !distinct(p.soils)) return false;
+  const names = new Set<string>();
+  for (const c of p.loadCases) names.add(c.label ?? c.id);
+  if (names.size < p.loadCases.length) return false;
   const soils = new Set<string>();
   for (const s of p.soils) soils.add(s.id);
   if (p.defaultSoil !== undefined && !soils.has(p.defaultSoil)) return false;
