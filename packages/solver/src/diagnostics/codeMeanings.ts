@@ -92,11 +92,11 @@ export const CODE_MEANINGS: CodeMeanings = {
     meaning: 'The face is more than twice as wide as it is high because the cover limits its height.',
     action: 'Consider restrained joints or a deeper block.',
   },
-  'block.not-adequate': {
+  'block.none-holds': {
     meaning:
-      'No bearing block within the cover and face limits meets both the bearing area and the passive resistance with the safety factor. No block is issued; the restraint is not adequate as designed and restrained joints are sized instead.',
+      'No bearing block within the cover and face limits meets both the bearing area and the passive resistance with the safety factor. No block is issued; restrained joints are sized instead, and their own findings say where they cannot hold either.',
     action:
-      'Check the restrained joints sized instead, deepen the main for a taller face, improve the soil, or have the block designed by a geotechnical engineer.',
+      'Build the restrained joints sized instead, or deepen the main for a taller face, improve the soil, or have a block designed by a geotechnical engineer.',
   },
   'pad.no-bearing': {
     meaning:

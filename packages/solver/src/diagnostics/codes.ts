@@ -83,8 +83,8 @@ export const DIAGNOSTIC_CODES = {
     severity: 'warning',
     values: { faceWidth: 'length', faceHeight: 'length' },
   },
-  'block.not-adequate': {
-    severity: 'error',
+  'block.none-holds': {
+    severity: 'warning',
     values: {
       thrust: 'force',
       ratio: 'ratio',

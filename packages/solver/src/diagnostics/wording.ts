@@ -74,8 +74,8 @@ const WORDS: Record<DiagnosticCode, Words> = {
     `Block taller than the cover allows: a face ${v.faceHeight} high needs its bottom ${v.bottomDepth} or more below ground, but the pipe centre is only ${v.centreDepth} down. Deepen the cover, use restrained joints, or design the block for passive pressure.`,
   'block.wide-face': (v) =>
     `Face ${v.faceWidth} wide is more than twice its ${v.faceHeight} height: the cover limits the height. Consider restrained joints or a deeper block.`,
-  'block.not-adequate': (v) =>
-    `Not adequate: no block within the cover and face limits holds ${v.thrust} with a safety factor of ${v.safetyFactor}: a face of ${v.bearingArea} is needed, the largest allowed is ${v.largestFace}, and the strongest, ${v.faceWidth} wide × ${v.faceHeight} high, resists ${v.ratio} × the thrust by passive pressure (${v.safetyFactor} needed). Restrained joints are sized instead: check them, or deepen the main, improve the soil, or have the block designed by a geotechnical engineer.`,
+  'block.none-holds': (v) =>
+    `No block within the cover and face limits holds ${v.thrust} with a safety factor of ${v.safetyFactor}: a face of ${v.bearingArea} is needed, the largest allowed is ${v.largestFace}, and the strongest, ${v.faceWidth} wide × ${v.faceHeight} high, resists ${v.ratio} × the thrust by passive pressure (${v.safetyFactor} needed). Restrained joints are sized instead: build them, or deepen the main, improve the soil, or have a block designed by a geotechnical engineer.`,
   'pad.no-bearing': (_v, s, c) =>
     `No bearing under the fitting: ${soil(s, c)} cannot carry a pad or an anchor; restrained joints are sized instead, or replace the soil.`,
   'joints.no-resistance': (v, s, c) =>

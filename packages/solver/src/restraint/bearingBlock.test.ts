@@ -82,20 +82,20 @@ describe('bearing block area A = SF·T/σ (DIPRA form; docs/check-values.md CV-1
     expect(r.diagnostics.map((d) => d.code)).toContain('block.taller-than-cover');
   });
 
-  it('issues no block, but an error, where no face within the limits holds (no passive resistance: φ = 0, c = 0)', () => {
+  it('issues no block, and says why, where no face within the limits holds (no passive resistance: φ = 0, c = 0)', () => {
     const r = sizeBearingBlock(
       base({ soil: { unitWeight: 14000, frictionAngle: 0, cohesion: 0 }, allowableBearing: 9000 * PSF }),
     );
     expect(r.block).toBeNull();
-    expect(r.diagnostics.map((d) => d.code)).toContain('block.not-adequate');
-    expect(r.diagnostics.find((d) => d.code === 'block.not-adequate')!.values.ratio).toBeLessThan(1.5);
+    expect(r.diagnostics.map((d) => d.code)).toContain('block.none-holds');
+    expect(r.diagnostics.find((d) => d.code === 'block.none-holds')!.values.ratio).toBeLessThan(1.5);
   });
 
   it('says what the largest face allowed is where the bearing area is what no face reaches', () => {
     // a soft bearing value: the area SF·T/σ outgrows every face the cover and limits allow
     const r = sizeBearingBlock(base({ allowableBearing: 150 * PSF }));
     expect(r.block).toBeNull();
-    const d = r.diagnostics.find((x) => x.code === 'block.not-adequate')!;
+    const d = r.diagnostics.find((x) => x.code === 'block.none-holds')!;
     expect(d.values.largestFace).toBeGreaterThan(0);
     expect(d.values.largestFace).toBeLessThan(d.values.bearingArea!);
   });
@@ -132,7 +132,7 @@ describe('bearing block area A = SF·T/σ (DIPRA form; docs/check-values.md CV-1
         for (const cover of [0.6, 1.2, 2.5]) {
           const r = sizeBearingBlock(base({ thrust: t, soil, cover, allowableBearing: 150e3, step: 0.05 }));
           if (!r.block) {
-            expect(r.diagnostics.map((d) => d.code)).toContain('block.not-adequate');
+            expect(r.diagnostics.map((d) => d.code)).toContain('block.none-holds');
             continue;
           }
           const b = r.block;

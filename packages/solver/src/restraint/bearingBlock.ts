@@ -249,7 +249,7 @@ function faceResistance(i: BearingBlockInput, centreDepth: number, f: Face) {
  * The block built is the candidate of least face area that meets both the bearing-area rule
  * (b·h ≥ SF·T/σ) and the passive resistance (Rankine × Ovesen's 3-D factor ≥ SF·T), the squarer face on
  * a tie. The candidates do not depend on the thrust, and a larger thrust only removes candidates, so the
- * face never shrinks as the pressure rises. Where no candidate holds, no block is issued: an error.
+ * face never shrinks as the pressure rises. Where no candidate holds, no block is issued, and the finding says why (joints are sized instead).
  */
 export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
   const diagnostics: Diagnostic[] = [];
@@ -362,7 +362,7 @@ export function sizeBearingBlock(i: BearingBlockInput): BlockResult {
     }
     diagnostics.push(
       diagnostic(
-        'block.not-adequate',
+        'block.none-holds',
         {},
         {
           thrust: i.thrust,
