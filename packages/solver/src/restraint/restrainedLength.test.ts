@@ -59,6 +59,35 @@ describe('restrained joint length (DIPRA method; docs/check-values.md CV-34)', (
     for (const leg of r.restrainedLegs) expectClose(leg.length, 8.4315, 1e-4);
   });
 
+  it('a zone that runs through a reducer onto a smaller pipe grows by the resistance it lacks there', () => {
+    // CV-34's 90° bend, with a reducer 5 m along one leg onto 8-in DI (OD 0.2299 m, ID 0.2180 m, given
+    // W_p = 400 N/m, trench type 4), same soil and cover, worked as CV-34:
+    //   W_e = 18000 × 1.2 × 0.2299 = 4,965.84 N/m;  W_w = 9789.0 × π/4 × 0.2180² = 365.38 N/m
+    //   W = 10,697.06 N/m;  F_s = W·tan 18° = 3,475.68 N/m
+    //   H_c = 1.31495 m;  P_p = 18000 × 1.31495 × 3 = 71,007.3 Pa;  R_s = 0.85 × P_p × 0.2299 = 13,875.9 N/m
+    //   r₂ = F_s + ½R_s = 10,413.63 N/m, against r₁ = 15,706.92 N/m on the 12-in
+    // The 8.4315 m the bend needs holds 8.4315·r₁; the 5 m of 12-in hold 5·r₁, the rest on 8-in:
+    //   L = 5 + (8.4315 − 5) × 15,706.92 / 10,413.63 = 10.1758 m
+    const p = route({
+      pressure: 1e6,
+      soils,
+      nodes: [
+        { id: 'a', x: -30, y: 0, end: 'tie-in' },
+        { id: 'b', x: 0, y: 0, restraint: 'joints' },
+        { id: 'c', x: 0, y: 5, restraint: 'joints' },
+        { id: 'd', x: 0, y: 60, end: 'tie-in' },
+      ],
+      pipes: [
+        { from: 'a', to: 'b', ...pipe },
+        { id: 'p2', from: 'b', to: 'c', ...pipe },
+        { from: 'c', to: 'd', od: 0.2299, id_: 0.218, weightPerLength: 400, trenchType: 4 },
+      ],
+    });
+    const legs = analyse(p).byNode.get('b')!.restraint.restrainedLegs;
+    expectClose(legs.find((l) => l.pipe === 'p1')!.length, 8.4315, 1e-4);
+    expectClose(legs.find((l) => l.pipe === 'p2')!.length, 10.1758, 1e-4);
+  });
+
   it('a dead end needs 25.55 m along its pipe, and warns that it runs past the next node', () => {
     const p = route({
       pressure: 1e6,

@@ -1,7 +1,8 @@
-import type { Project } from '../model/projectSchema.js';
+import type { Pipe, Project } from '../model/projectSchema.js';
 
 interface Link {
   pipe: string;
+  spec: Pipe;
   far: string;
   /** m, 3-D length of the pipe */
   length: number;
@@ -21,8 +22,8 @@ function linksOf(project: Project): Map<string, Link[]> {
     const b = at.get(p.to);
     if (!a || !b) continue;
     const length = Math.hypot(b.x - a.x, b.y - a.y, b.elevation - a.elevation);
-    (links.get(a.id) ?? links.set(a.id, []).get(a.id)!).push({ pipe: p.id, far: b.id, length });
-    (links.get(b.id) ?? links.set(b.id, []).get(b.id)!).push({ pipe: p.id, far: a.id, length });
+    (links.get(a.id) ?? links.set(a.id, []).get(a.id)!).push({ pipe: p.id, spec: p, far: b.id, length });
+    (links.get(b.id) ?? links.set(b.id, []).get(b.id)!).push({ pipe: p.id, spec: p, far: a.id, length });
   }
   adjacency.set(project, links);
   tieIns.set(project, new Set(project.nodes.filter((n) => n.end === 'tie-in').map((n) => n.id)));
@@ -40,6 +41,8 @@ export interface LineAlong {
 /** One pipe of a line walked out from a fitting: its id, 3-D length, and the node the walk entered it at. */
 export interface LineStep {
   pipe: string;
+  /** the pipe as the project gives it (its size and material) */
+  spec: Pipe;
   /** the node the walk came from: the pipe's `from` or its `to` */
   entered: string;
   /** m, 3-D length of the pipe */
@@ -67,7 +70,7 @@ export function pipesAlong(
   for (;;) {
     const link = links.get(here)?.find((l) => l.pipe === via);
     if (!link) return { steps, tieIn: false };
-    steps.push({ pipe: via, entered: here, length: link.length });
+    steps.push({ pipe: via, spec: link.spec, entered: here, length: link.length });
     total += link.length;
     // A walk for a restrained length stops where the length is covered: a long line is not walked whole.
     if (total >= within) return { steps, tieIn: false };

@@ -1,5 +1,5 @@
 import { norm } from '../geometry/vector.js';
-import type { SizingStep } from '../analysis/calcRecord.js';
+import { value, type SizingStep } from '../analysis/calcRecord.js';
 import type { Leg } from '../network/legs.js';
 import type { FittingGeometry } from '../network/fittingKind.js';
 import type { Project, ProjectNode } from '../model/projectSchema.js';
@@ -10,6 +10,7 @@ import type { BearingBlock, FaceTerms } from './bearingBlock.js';
 import type { GravityAnchor } from './gravityAnchor.js';
 import type { TrenchBottomBearing } from './trenchBottom.js';
 import { restrainedLength, type RestrainedLeg } from './restrainedLength.js';
+import { zoneLength } from './zoneLength.js';
 import { concreteRestraint } from './concreteRestraint.js';
 import { fittingSite } from './site.js';
 import { restraintBasis } from './basis.js';
@@ -104,10 +105,25 @@ export function sizeRestraint(
     }
     // No zone can run along more pipe than the route has: cap it there and say so. Past a tie-in it
     // runs on into the existing main: say how far.
-    for (const [pipe, leg] of longest) {
+    for (const [pipe, sized] of longest) {
       const own = legs.find((l) => l.pipe.id === pipe)?.length ?? 0;
-      if (leg.length <= own) continue;
+      if (sized.length <= own) continue;
       out.dependsOnRoute = true;
+      const length = zoneLength(project, node.id, sized, site);
+      const leg = length === sized.length ? sized : { ...sized, length };
+      if (leg !== sized) {
+        longest.set(pipe, leg);
+        if (record)
+          out.steps.push({
+            title: `Restrained length along ${pipe}, past a change of pipe`,
+            formula: 'Σ ℓᵢ·rᵢ = L₁·r₁: each pipe holds its own resistance per metre r (F_s, or F_s + ½R on a bend)',
+            inputs: [
+              value('L₁', 'restrained length at the first pipe’s resistance', sized.length, 'length', 'computed'),
+            ],
+            result: value('L', 'restrained length', length, 'length', 'computed'),
+            basis: `joints.${sized.form}-equation`,
+          });
+      }
       const line = lineAlong(project, node.id, pipe);
       if (leg.length <= line.length) continue;
       const subject = { node: node.id, pipe };
