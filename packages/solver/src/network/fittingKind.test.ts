@@ -137,6 +137,28 @@ describe('which fitting stands at each node', () => {
     expect(['tb', 'yb', 'xn', 'xs'].map((n) => a.marks.get(n))).toEqual(['B1', 'C1', 'D1', 'E1']);
   });
 
+  it('names a junction whose run turns by its branch (a square one a tee), and flags the turn', () => {
+    // The run turns 24° at j (in along +x, out 24° left); the branch leaves square to the incoming run:
+    // 90° from the first run leg, 66° from the second, so the branch folds to 90° against the run axis.
+    const t = (24 * Math.PI) / 180;
+    const p = route({
+      nodes: [
+        { id: 'a', x: -20, y: 0, end: 'tie-in' },
+        { id: 'j', x: 0, y: 0 },
+        { id: 'b', x: 20 * Math.cos(t), y: 20 * Math.sin(t), end: 'tie-in' },
+        { id: 'c', x: 0, y: -15, end: 'tie-in' },
+      ],
+      pipes: [
+        { from: 'a', to: 'j', od: 0.326 },
+        { from: 'j', to: 'b', od: 0.326 },
+        { from: 'j', to: 'c', od: 0.17 },
+      ],
+    });
+    const j = analyse(p).byNode.get('j')!;
+    expect(j.geometry.kind).toBe('tee');
+    expect(j.diagnostics.find((d) => d.code === 'fitting.bent-run')?.values.turn).toBeCloseTo(24, 9);
+  });
+
   it('splits a vertical bend into its plan and slope changes', () => {
     // level along +x, then rising 1 in 1 while turning 90° in plan: plan change 90°, slope change +45°
     const p = route({

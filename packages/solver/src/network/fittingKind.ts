@@ -86,8 +86,9 @@ function threePipeGeometry(legs: readonly Leg[]): FittingGeometry {
   // Angle of the branch to the run line, folded into [0, 90].
   const raw = angleBetween(branch, runAxis);
   const branchAngle = Math.min(raw, 180 - raw);
-  const straightRun = best.angle >= 180 - RUN_TOLERANCE;
-  const kind: FittingKind = straightRun && Math.abs(branchAngle - 90) <= TEE_TOLERANCE ? 'tee' : 'wye';
+  // Named by its branch alone: a run that turns is a finding of its own (fitting.bent-run), built as
+  // this tee or wye and a bend, so the plan's mark shows the fitting to order.
+  const kind: FittingKind = Math.abs(branchAngle - 90) <= TEE_TOLERANCE ? 'tee' : 'wye';
   return { kind, deflection: null, horizontalDeflection: null, verticalDeflection: null, branchAngle, branchLeg };
 }
 
