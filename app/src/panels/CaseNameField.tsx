@@ -1,11 +1,11 @@
 import { useState } from 'react';
-import type { LoadCase } from '@mainbrace/solver';
+import { caseName, type LoadCase } from '@mainbrace/solver';
 import { useActions, useAppStore } from '../state/StoreContext.js';
 import { CASE_FIELDS } from '../format/fieldLabels.js';
 
-/** Another case already read by this name (its label, else its id), if any. */
+/** Another case already read by this name, if any. */
 export function caseNamedAlike(cases: readonly LoadCase[], id: string, name: string): LoadCase | undefined {
-  return cases.find((o) => o.id !== id && (o.label ?? o.id) === name);
+  return cases.find((o) => o.id !== id && caseName(o) === name);
 }
 
 /** `base`, or `base 2`, `base 3`…: the first no other case is named. */
@@ -23,29 +23,29 @@ export function freeCaseName(cases: readonly LoadCase[], id: string, base: strin
 export function CaseNameField({ c }: { c: LoadCase }) {
   const actions = useActions();
   const store = useAppStore();
-  const [draft, setDraft] = useState<string | null>(null);
-  const clash = draft === null ? undefined : caseNamedAlike(store.getState().project.loadCases, c.id, draft || c.id);
+  // What was typed, kept only while another case has that name (then it is not saved).
+  const [clash, setClash] = useState<string | null>(null);
   const errorId = `case-name-${c.id}-err`;
   return (
     <>
       <input
         aria-label={`${CASE_FIELDS.label} of case ${c.id}`}
-        value={draft ?? c.label ?? ''}
+        value={clash ?? c.label ?? ''}
         placeholder={c.id}
         maxLength={80}
-        aria-invalid={clash !== undefined}
-        aria-describedby={clash ? errorId : undefined}
+        aria-invalid={clash !== null}
+        aria-describedby={clash !== null ? errorId : undefined}
         onChange={(e) => {
           const typed = e.target.value;
           const other = caseNamedAlike(store.getState().project.loadCases, c.id, typed || c.id);
-          setDraft(other ? typed : null);
+          setClash(other ? typed : null);
           if (!other) actions.updateCase(c.id, { label: typed || undefined });
         }}
-        onBlur={() => setDraft(null)}
+        onBlur={() => setClash(null)}
       />
-      {clash && (
+      {clash !== null && (
         <div className="field-error" id={errorId} role="alert">
-          “{draft || c.id}” already names another case: give each case a name of its own.
+          “{clash || c.id}” already names another case: give each case a name of its own.
         </div>
       )}
     </>

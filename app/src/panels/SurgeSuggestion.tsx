@@ -1,7 +1,7 @@
-import { freeCaseName } from './CaseNameField.js';
 import { useMemo, useState } from 'react';
 import { notVerifiedText, REGISTER, surgeEstimate, unverified, wordingContext, type LoadCase } from '@mainbrace/solver';
 import { useActions, useAnalysis, useApp } from '../state/StoreContext.js';
+import { freeCaseName } from './CaseNameField.js';
 import { nextId } from '../state/documentEdits.js';
 import { show } from '../format/quantity.js';
 import { NumberField } from './NumberField.js';

@@ -6,7 +6,7 @@ export { MIN_PIPE_LENGTH, OVERLAP_ANGLE } from './model/routeRules.js';
 export { LIMITS, unusual, type Limit, type LimitId } from './model/limits.js';
 export { implausibleInputs } from './model/plausibility.js';
 export { nodeCover, nodeGround, nodeOutsideDiameters, pipeLevelFor, coverFor } from './model/groundLevel.js';
-export { caseLabel } from './model/caseLabel.js';
+export { caseLabel, caseName } from './model/caseLabel.js';
 export { blankSheet, sheetOf } from './model/sheet.js';
 export { parseProject, parseProjectText, type ParseResult } from './model/parseProject.js';
 export { quickParse } from './model/quickParse.js';

@@ -2,41 +2,51 @@ import type { z } from 'zod';
 import type { Project } from './projectSchema.js';
 import { norm } from '../geometry/vector.js';
 import { pathText, type Problem } from './problems.js';
+import { caseName } from './caseLabel.js';
 import { MIN_PIPE_LENGTH, OVERLAP_ANGLE, pipeBelowGround, type Add } from './routeRules.js';
 
 type Ctx = z.core.$RefinementCtx<Project>;
 
-function uniqueIds(items: readonly { id: string }[], list: string, ctx: Pick<Ctx, 'addIssue'>) {
+/** Each item whose key an earlier item already has, with that earlier item's index. */
+function repeats<T>(
+  items: readonly T[],
+  key: (item: T) => string,
+  found: (i: number, first: number, k: string) => void,
+) {
   const seen = new Map<string, number>();
   items.forEach((item, i) => {
-    const first = seen.get(item.id);
-    if (first !== undefined) {
-      ctx.addIssue({
-        code: 'custom',
-        path: [list, i, 'id'],
-        message: `duplicate id "${item.id}" (already used by ${list}[${first}])`,
-      });
-    } else seen.set(item.id, i);
+    const k = key(item);
+    const first = seen.get(k);
+    if (first === undefined) seen.set(k, i);
+    else found(i, first, k);
   });
 }
 
-/**
- * Each case is read by its name (its label, else its id) on every screen and sheet: two cases of one
- * name would make "governed by" ambiguous.
- */
-function uniqueCaseNames(cases: Project['loadCases'], ctx: Pick<Ctx, 'addIssue'>) {
-  const seen = new Map<string, number>();
-  cases.forEach((c, i) => {
-    const name = c.label ?? c.id;
-    const first = seen.get(name);
-    if (first === undefined) seen.set(name, i);
-    else
+function uniqueIds(items: readonly { id: string }[], list: string, ctx: Pick<Ctx, 'addIssue'>) {
+  repeats(
+    items,
+    (item) => item.id,
+    (i, first, id) =>
       ctx.addIssue({
         code: 'custom',
-        path: ['loadCases', i, c.label === undefined ? 'id' : 'label'],
-        message: `"${name}" already names loadCases[${first}]: give each case a name of its own`,
-      });
-  });
+        path: [list, i, 'id'],
+        message: `duplicate id "${id}" (already used by ${list}[${first}])`,
+      }),
+  );
+}
+
+/**
+ * Each case is read by its name (caseLabel.ts) on every screen and sheet: two cases of one name would
+ * make "governed by" ambiguous.
+ */
+function uniqueCaseNames(cases: Project['loadCases'], ctx: Pick<Ctx, 'addIssue'>) {
+  repeats(cases, caseName, (i, first, name) =>
+    ctx.addIssue({
+      code: 'custom',
+      path: ['loadCases', i, cases[i]!.label === undefined ? 'id' : 'label'],
+      message: `"${name}" already names loadCases[${first}]: give each case a name of its own`,
+    }),
+  );
 }
 
 /** Nodes standing at one point (within MIN_PIPE_LENGTH) but not joined by a pipe. */

@@ -1,5 +1,6 @@
 import type { Project } from './projectSchema.js';
 import { MIN_PIPE_LENGTH, OVERLAP_ANGLE } from './routeRules.js';
+import { caseName } from './caseLabel.js';
 
 /** True when the items' ids are all different. */
 function distinct(items: readonly { id: string }[]): boolean {
@@ -21,7 +22,7 @@ export function routeRulesHold(p: Project): boolean {
   const { nodes, pipes } = p;
   if (!distinct(p.loadCases) || !distinct(p.soils)) return false;
   const names = new Set<string>();
-  for (const c of p.loadCases) names.add(c.label ?? c.id);
+  for (const c of p.loadCases) names.add(caseName(c));
   if (names.size < p.loadCases.length) return false;
   const soils = new Set<string>();
   for (const s of p.soils) soils.add(s.id);
