@@ -4,7 +4,7 @@ import type { Leg } from '../network/legs.js';
 import type { FittingKind } from '../network/fittingKind.js';
 import type { Soil } from '../model/projectSchema.js';
 import { diagnostic, type Diagnostic } from '../diagnostics/diagnostic.js';
-import { pipeSoilResistance } from './pipeSoilResistance.js';
+import { pipeSoilResistance, type PipeSoilResistance } from './pipeSoilResistance.js';
 import { axialShares } from './axialShares.js';
 import { jointMaterialBasis } from './jointMaterial.js';
 import type { FittingSite } from './site.js';
@@ -23,6 +23,13 @@ export interface RestrainedLeg {
   /** which equation gave it: a horizontal bend, a bend with upward thrust, or an axial thrust */
   form: 'bend' | 'uplift' | 'axial';
 }
+
+/**
+ * N/m that a metre of restrained pipe holds in each form of the length: F_s along the pipe, and on a
+ * bend F_s + ½R with R the lateral bearing R_s, or the hold-down weight W_u where the thrust is upward.
+ */
+export const holdingPerMetre = (r: PipeSoilResistance, form: RestrainedLeg['form']): number =>
+  form === 'axial' ? r.friction : r.friction + (form === 'uplift' ? r.uplift : r.bearing) / 2;
 
 export interface RestrainedLengthInput {
   kind: FittingKind;
@@ -68,13 +75,13 @@ export function restrainedLength(i: RestrainedLengthInput): {
     const r = pipeSoilResistance(leg.pipe, i.soil, i.cover, i.site);
     let length: number;
     let formula: string;
+    const form = isBend ? (upward ? 'uplift' : 'bend') : 'axial';
     if (isBend) {
       const half = ((i.deflection as number) * Math.PI) / 360;
-      const lateral = upward ? r.uplift : r.bearing;
-      length = (i.safetyFactor * t) / (2 * Math.cos(half) * (r.friction + lateral / 2));
+      length = (i.safetyFactor * t) / (2 * Math.cos(half) * holdingPerMetre(r, form));
       formula = upward ? 'L = S_f·T / (2·cos(θ/2)·(F_s + ½·W_u))' : 'L = S_f·T / (2·cos(θ/2)·(F_s + ½·R_s))';
     } else {
-      length = (i.safetyFactor * force) / r.friction;
+      length = (i.safetyFactor * force) / holdingPerMetre(r, form);
       formula = 'L = S_f·T / F_s';
     }
     if (!Number.isFinite(length) || length <= 0) {
@@ -87,7 +94,7 @@ export function restrainedLength(i: RestrainedLengthInput): {
       );
       continue;
     }
-    out.push({ pipe: leg.pipe.id, length, form: isBend ? (upward ? 'uplift' : 'bend') : 'axial' });
+    out.push({ pipe: leg.pipe.id, length, form });
     if (i.record)
       steps.push({
         title: `Restrained length along ${leg.pipe.id}`,
@@ -109,7 +116,7 @@ export function restrainedLength(i: RestrainedLengthInput): {
             : []),
         ],
         result: value('L', 'restrained length', length, 'length', 'computed'),
-        basis: isBend ? (upward ? 'joints.uplift-equation' : 'joints.bend-equation') : 'joints.axial-equation',
+        basis: `joints.${form}-equation`,
       });
     if (length > leg.length) {
       diagnostics.push(

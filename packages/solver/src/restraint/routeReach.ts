@@ -1,7 +1,6 @@
 import type { Pipe, Project } from '../model/projectSchema.js';
 
 interface Link {
-  pipe: string;
   spec: Pipe;
   far: string;
   /** m, 3-D length of the pipe */
@@ -22,8 +21,8 @@ function linksOf(project: Project): Map<string, Link[]> {
     const b = at.get(p.to);
     if (!a || !b) continue;
     const length = Math.hypot(b.x - a.x, b.y - a.y, b.elevation - a.elevation);
-    (links.get(a.id) ?? links.set(a.id, []).get(a.id)!).push({ pipe: p.id, spec: p, far: b.id, length });
-    (links.get(b.id) ?? links.set(b.id, []).get(b.id)!).push({ pipe: p.id, spec: p, far: a.id, length });
+    (links.get(a.id) ?? links.set(a.id, []).get(a.id)!).push({ spec: p, far: b.id, length });
+    (links.get(b.id) ?? links.set(b.id, []).get(b.id)!).push({ spec: p, far: a.id, length });
   }
   adjacency.set(project, links);
   tieIns.set(project, new Set(project.nodes.filter((n) => n.end === 'tie-in').map((n) => n.id)));
@@ -68,7 +67,7 @@ export function pipesAlong(
   let total = 0;
   const seen = new Set<string>([node]);
   for (;;) {
-    const link = links.get(here)?.find((l) => l.pipe === via);
+    const link = links.get(here)?.find((l) => l.spec.id === via);
     if (!link) return { steps, tieIn: false };
     steps.push({ pipe: via, spec: link.spec, entered: here, length: link.length });
     total += link.length;
@@ -79,7 +78,7 @@ export function pipesAlong(
     if (next.length !== 2 || seen.has(link.far)) return { steps, tieIn: false };
     seen.add(link.far);
     here = link.far;
-    via = next[0]!.pipe === via ? next[1]!.pipe : next[0]!.pipe;
+    via = next[0]!.spec.id === via ? next[1]!.spec.id : next[0]!.spec.id;
   }
 }
 

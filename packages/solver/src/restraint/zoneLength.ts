@@ -1,16 +1,14 @@
 import type { Pipe, Project } from '../model/projectSchema.js';
 import { pipesAlong } from './routeReach.js';
 import { pipeSoilResistance } from './pipeSoilResistance.js';
-import type { RestrainedLeg } from './restrainedLength.js';
+import { holdingPerMetre, type RestrainedLeg } from './restrainedLength.js';
 import type { FittingSite } from './site.js';
 
 type Ground = Pick<FittingSite, 'soil' | 'cover' | 'waterDepth' | 'waterUnitWeight'>;
 
-/** N/m that a metre of `pipe` holds in the form the leg's length was found with (restrainedLength.ts). */
-function perMetre(pipe: Pipe, form: RestrainedLeg['form'], g: Ground): number {
-  const r = pipeSoilResistance(pipe, g.soil, g.cover, g);
-  return form === 'axial' ? r.friction : r.friction + (form === 'uplift' ? r.uplift : r.bearing) / 2;
-}
+/** N/m that a metre of `pipe` holds in the form the leg's length was found with. */
+const perMetre = (pipe: Pipe, form: RestrainedLeg['form'], g: Ground): number =>
+  holdingPerMetre(pipeSoilResistance(pipe, g.soil, g.cover, g), form);
 
 /**
  * m, the length of a restrained zone that runs from `node` past its own pipe onto pipes of another size or
