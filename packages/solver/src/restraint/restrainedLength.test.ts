@@ -1,7 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import { analyse } from '../analysis/analyse.js';
 import { scheduleOf } from '../schedule/scheduleRows.js';
-import { route } from '../../test/projectBuilder.js';
+import { route, type NodeSpec, type PipeSpec } from '../../test/projectBuilder.js';
 import type { Soil } from '../model/projectSchema.js';
 import { expectClose } from '../../test/tolerance.js';
 
@@ -38,20 +38,23 @@ function bendIn(soil: Soil, deflection: number) {
   return analyse(p).byNode.get('b')!;
 }
 
+/**
+ * CV-34's 90° bend on restrained joints at b, at 1 MPa: 30 m of the 12-in in from a tie-in at a, then
+ * out along +y the nodes and pipes given (the first pipe from b, p2).
+ */
+const cv34Bend = (out: { nodes: NodeSpec[]; pipes: PipeSpec[] }) =>
+  route({
+    pressure: 1e6,
+    soils,
+    nodes: [{ id: 'a', x: -30, y: 0, end: 'tie-in' }, { id: 'b', x: 0, y: 0, restraint: 'joints' }, ...out.nodes],
+    pipes: [{ from: 'a', to: 'b', ...pipe }, ...out.pipes],
+  });
+
 describe('restrained joint length (DIPRA method; docs/check-values.md CV-34)', () => {
   it('a 90° bend needs 8.43 m each side, as worked by hand', () => {
-    const p = route({
-      pressure: 1e6,
-      soils,
-      nodes: [
-        { id: 'a', x: -30, y: 0, end: 'tie-in' },
-        { id: 'b', x: 0, y: 0, restraint: 'joints' },
-        { id: 'c', x: 0, y: 30, end: 'tie-in' },
-      ],
-      pipes: [
-        { from: 'a', to: 'b', ...pipe },
-        { from: 'b', to: 'c', ...pipe },
-      ],
+    const p = cv34Bend({
+      nodes: [{ id: 'c', x: 0, y: 30, end: 'tie-in' }],
+      pipes: [{ from: 'b', to: 'c', ...pipe }],
     });
     const r = analyse(p).byNode.get('b')!.restraint;
     expect(r.block).toBeNull();
@@ -68,18 +71,13 @@ describe('restrained joint length (DIPRA method; docs/check-values.md CV-34)', (
     //   r₂ = F_s + ½R_s = 10,413.63 N/m, against r₁ = 15,706.92 N/m on the 12-in
     // The 8.4315 m the bend needs holds 8.4315·r₁; the 5 m of 12-in hold 5·r₁, the rest on 8-in:
     //   L = 5 + (8.4315 − 5) × 15,706.92 / 10,413.63 = 10.1758 m
-    const p = route({
-      pressure: 1e6,
-      soils,
+    const p = cv34Bend({
       nodes: [
-        { id: 'a', x: -30, y: 0, end: 'tie-in' },
-        { id: 'b', x: 0, y: 0, restraint: 'joints' },
         { id: 'c', x: 0, y: 5, restraint: 'joints' },
         { id: 'd', x: 0, y: 60, end: 'tie-in' },
       ],
       pipes: [
-        { from: 'a', to: 'b', ...pipe },
-        { id: 'p2', from: 'b', to: 'c', ...pipe },
+        { from: 'b', to: 'c', ...pipe },
         { from: 'c', to: 'd', od: 0.2299, id_: 0.218, weightPerLength: 400, trenchType: 4 },
       ],
     });
