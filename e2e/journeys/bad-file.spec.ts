@@ -17,3 +17,28 @@ test('opening a bad file lists its problems by path and leaves the open project 
   expect(await app.project()).toEqual(before);
   await app.shot('bad-file');
 });
+
+test('opening a file over changes not saved to a file asks first, and undo brings them back', async ({ page }) => {
+  const app = new MainbracePage(page);
+  const probe = fileURLToPath(new URL('../fixtures/probe-si.json', import.meta.url));
+  await app.blankCanvas();
+  await app.draw([
+    [0, 0],
+    [40, 0],
+    [40, -30],
+  ]);
+  const drawn = await app.project();
+  const notice = page.getByTestId('notice');
+
+  await app.openFile(probe);
+  await expect(notice).toContainText('Open probe-si.json? This project has changes not saved to a file.');
+  await app.shot('open-asks-first');
+  await notice.getByRole('button', { name: 'Keep working' }).click();
+  expect(await app.project()).toEqual(drawn);
+
+  await app.openFile(probe);
+  await notice.getByRole('button', { name: 'Discard and open' }).click();
+  await expect.poll(async () => (await app.project()).name).toBe('Brackenfold Lane main (probe SI)');
+  await app.undo();
+  await expect.poll(async () => app.project()).toEqual(drawn);
+});

@@ -4,6 +4,7 @@ import type { Project } from '@mainbrace/solver';
 import type { Actions } from '../state/actions.js';
 import type { AppStore } from '../state/store.js';
 import { openProjectFile } from './projectFile.js';
+import { hasUnsavedWork, loadCommands } from '../chrome/appCommands.js';
 import { readAnyFile, runImport, type ImportChoices, type PendingImport } from './routeImport.js';
 
 /** Notes worth showing after an import: warnings first, then at most a few notes. */
@@ -15,11 +16,39 @@ function importLines(notes: { level: string; where: string; message: string }[])
   return [...warnings, ...rest.slice(0, 6), ...(rest.length > 6 ? [`… and ${rest.length - 6} more notes`] : [])];
 }
 
-/** Opens a project file at once, or returns the route a file holds for the import dialog; null otherwise. */
-export async function openFile(file: File, actions: Actions): Promise<PendingImport | null> {
+/**
+ * Lets a valid file replace the project: at once, or, where the project has changes not saved to a file,
+ * once the user chooses, as New asks (chrome/commandRunner.ts).
+ */
+function askFirst(name: string, store: AppStore, actions: Actions) {
+  return (open: () => void) => {
+    if (!hasUnsavedWork(store)) return open();
+    actions.notify({
+      tone: 'warning',
+      title: `Open ${name}? This project has changes not saved to a file.`,
+      lines: ['Save it first to keep a file, or discard it (Undo still brings it back in this session).'],
+      actions: [
+        {
+          label: 'Save, then open',
+          // the project is saved before the file replaces it, once the commands' code is in hand
+          run: () =>
+            void loadCommands().then((m) => {
+              m.runCommand('save', store, actions, {});
+              open();
+            }),
+        },
+        { label: 'Discard and open', run: open },
+        { label: 'Keep working', run: () => actions.notify(null) },
+      ],
+    });
+  };
+}
+
+/** Opens a project file (asking first where work would be lost), or returns the route a file holds for the import dialog; null otherwise. */
+export async function openFile(file: File, store: AppStore, actions: Actions): Promise<PendingImport | null> {
   const r = await readAnyFile(file);
   if (r.kind === 'project') {
-    await openProjectFile(file, actions);
+    await openProjectFile(file, actions, askFirst(file.name, store, actions));
     return null;
   }
   if (r.kind === 'route') return r.pending;

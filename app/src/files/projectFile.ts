@@ -25,7 +25,10 @@ export async function readProjectFile(file: File): Promise<OpenResult> {
   return checkProjectText(text, 'file');
 }
 
-/** Opens a dropped or chosen file: the project is replaced only if the file is valid, and the user is told. */
+/**
+ * Opens a dropped or chosen file: the project is replaced only if the file is valid, and only once `agree`
+ * lets it (where the open project has changes not saved to a file); the user is told.
+ */
 export async function openProjectFile(
   file: File,
   actions: {
@@ -33,13 +36,17 @@ export async function openProjectFile(
     markSaved?: (p: Project) => void;
     notify: (n: { tone: 'info' | 'error'; title: string; lines: string[] }) => void;
   },
+  agree: (open: () => void) => void = (open) => open(),
 ): Promise<void> {
   const r = await readProjectFile(file);
   if (r.ok) {
-    await prepareResults(r.project, r.project.units);
-    actions.replaceProject(r.project);
-    actions.markSaved?.(r.project);
-    actions.notify({ tone: 'info', title: `Opened ${file.name}`, lines: [] });
+    const project = r.project;
+    await prepareResults(project, project.units);
+    agree(() => {
+      actions.replaceProject(project);
+      actions.markSaved?.(project);
+      actions.notify({ tone: 'info', title: `Opened ${file.name}`, lines: [] });
+    });
   } else
     actions.notify({ tone: 'error', title: `${file.name} was not opened — your project is unchanged`, lines: r.lines });
 }

@@ -26,7 +26,7 @@ export function useFileOpening() {
   const open = async (file: File) => {
     const m = await opening().catch(() => null);
     if (!m) return unreadable(file.name);
-    const r = await m.openFile(file, actions);
+    const r = await m.openFile(file, store, actions);
     if (r) setPending(r);
   };
 
