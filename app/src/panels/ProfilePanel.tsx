@@ -89,6 +89,10 @@ export function ProfilePanel() {
         <button onClick={print} data-testid="print-long-section">
           Print the long section…
         </button>
+        <span className="muted" data-testid="profile-levels-hint">
+          Levels are set node by node: click a node on the section or the plan, then type its ground level, pipe
+          centreline elevation or cover in its details.
+        </span>
       </div>
       <LongSection data={data} analysis={analysis} units={u} onSelect={actions.revealNode} />
       <svg viewBox={`0 0 ${W} ${H2}`} role="img" aria-label="Pressure of every case along the main line">
