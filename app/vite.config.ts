@@ -26,7 +26,13 @@ export default defineConfig({
       output: {
         // What the first screen needs in one file: shared pieces split out for the lazy parts would
         // each be a request of its own and compress apart (docs/performance.md: 6 kB gzipped more).
-        codeSplitting: { groups: [{ name: 'start', tags: ['$initial'] }] },
+        // The findings' words load beside the first document, before the first render: one request.
+        codeSplitting: {
+          groups: [
+            { name: 'start', tags: ['$initial'] },
+            { name: 'findingWords', test: /solver[\\/]src[\\/]diagnostics[\\/](codeMeanings|wording)\.ts$/ },
+          ],
+        },
       },
     },
   },

@@ -1,20 +1,26 @@
-import { scheduleView, type Analysis, type CodeMeanings, type ScheduleView, type UnitSystem } from '@mainbrace/solver';
+import { scheduleView, type Analysis, type ScheduleView, type UnitSystem, type Wording } from '@mainbrace/solver';
 import { importOrReload } from '../chrome/loadChunk.js';
 
-let meanings: CodeMeanings | null = null;
+let wording: Wording | null = null;
 
 /**
- * Loads the findings' meanings, which word a schedule note whose fittings' sentences differ. They are
- * not in the first load (docs/performance.md); the app starts loading them before anything else and
- * waits for them beside the kept project and the demo, before its first render.
+ * Loads the findings' words: each finding's sentence, and the meanings that word a schedule note whose
+ * fittings' sentences differ. They are not in the first load (docs/performance.md); the app starts
+ * loading them before anything else and waits for them beside the kept project and the demo, before its
+ * first render.
  */
 export const loadScheduleWords = (): Promise<void> =>
   importOrReload(() => import('@mainbrace/solver/meanings')).then((m) => {
-    meanings = m.CODE_MEANINGS;
+    wording = m.WORDING;
   });
+
+/** The findings' words, once loadScheduleWords has resolved. */
+export function loadedWording(): Wording {
+  if (!wording) throw new Error('the findings’ words are not loaded yet');
+  return wording;
+}
 
 /** The schedule's view (solver's scheduleView, memoised) once loadScheduleWords has resolved. */
 export function scheduleViewOf(analysis: Analysis, units: UnitSystem): ScheduleView {
-  if (!meanings) throw new Error('scheduleViewOf: the findings’ meanings are not loaded yet');
-  return scheduleView(analysis, units, meanings);
+  return scheduleView(analysis, units, loadedWording());
 }

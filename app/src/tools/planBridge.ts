@@ -1,4 +1,4 @@
-import { analyse, scheduleOf } from '@mainbrace/solver';
+import { analyse } from '@mainbrace/solver';
 import type { AppState, AppStore } from '../state/store.js';
 import type { Actions } from '../state/actions.js';
 import type { dispatch as Dispatch, DispatchResult } from './dispatch.js';
@@ -52,7 +52,7 @@ const KEYS = [
 
 /** Fittings in chainage order: the schedule's row order (run letter, then number). */
 export const derivedOf = (s: AppState): PlanDerived => ({
-  fittingOrder: () => scheduleOf(analyse(s.project)).fittings.map((f) => f.node),
+  fittingOrder: () => analyse(s.project).fittings.map((f) => f.node.id),
 });
 
 /** What the app does with intents the plan cannot carry out itself. */

@@ -3,7 +3,7 @@
 import { writeFileSync } from 'node:fs';
 import { parseProject } from '../src/model/parseProject.js';
 import { analyseNext, analyseProject } from '../src/analysis/analyse.js';
-import { scheduleOf } from '../src/schedule/scheduleRows.js';
+import { scheduleOf } from '../src/schedule/scheduleOf.js';
 import { analyseProject as previousAnalysis } from '../test/oracle/analyseOracle.js';
 import { generateRoute } from './generateRoute.js';
 import { floorSchedule } from './floor.js';

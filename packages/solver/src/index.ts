@@ -53,7 +53,8 @@ export {
   type SoilTable,
 } from './restraint/soilLibrary.js';
 export { rankinePassiveCoefficient, passiveResistance } from './restraint/passiveResistance.js';
-export { fittingProfile, scheduleOf, type Schedule, type ScheduleFitting } from './schedule/scheduleRows.js';
+export { fittingProfile, type Schedule, type ScheduleFitting } from './schedule/scheduleRows.js';
+export { scheduleOf } from './schedule/scheduleOf.js';
 export { scheduleCsv } from './schedule/scheduleCsv.js';
 export { scheduleTable } from './schedule/scheduleTable.js';
 export { scheduleJson, diagnosticJson, JSON_DECIMALS } from './schedule/scheduleJson.js';
@@ -105,7 +106,7 @@ export {
   type Severity,
   type Subject,
 } from './diagnostics/diagnostic.js';
-export { diagnosticText, type WordingContext } from './diagnostics/wording.js';
+export { diagnosticText, type Wording, type WordingContext } from './diagnostics/wording.js';
 export { wordingContext, legName, legTarget } from './diagnostics/context.js';
 export { REGISTER, provenance, type ProvenanceId } from './provenance/register.js';
 export { unverified } from './provenance/unverified.js';

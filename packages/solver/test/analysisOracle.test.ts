@@ -2,7 +2,7 @@ import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
 import { analyse, analyseInSteps, analyseNext, analyseProject, type Analysis } from '../src/analysis/analyse.js';
 import type { Project } from '../src/model/projectSchema.js';
-import { scheduleOf } from '../src/schedule/scheduleRows.js';
+import { scheduleOf } from '../src/schedule/scheduleOf.js';
 import { scheduleJson } from '../src/schedule/scheduleJson.js';
 import { randomRoute, routeExtras as extras, routeWithExtras as project } from './randomRoutes.js';
 import { analyseProject as oracle } from './oracle/analyseOracle.js';

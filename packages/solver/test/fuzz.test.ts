@@ -4,7 +4,7 @@ import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { parseProject, parseProjectText } from '../src/model/parseProject.js';
 import { analyse } from '../src/analysis/analyse.js';
-import { scheduleOf } from '../src/schedule/scheduleRows.js';
+import { scheduleOf } from '../src/schedule/scheduleOf.js';
 import { randomRoute } from './randomRoutes.js';
 import { route } from './projectBuilder.js';
 

@@ -3,7 +3,7 @@ import fc from 'fast-check';
 import { parseProject } from '../src/model/parseProject.js';
 import { problemText } from '../src/model/problems.js';
 import { analyseProject } from '../src/analysis/analyse.js';
-import { scheduleOf } from '../src/schedule/scheduleRows.js';
+import { scheduleOf } from '../src/schedule/scheduleOf.js';
 import { scheduleJson } from '../src/schedule/scheduleJson.js';
 import { LIMITS } from '../src/model/limits.js';
 

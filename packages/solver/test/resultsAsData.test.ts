@@ -6,7 +6,7 @@ import { fileURLToPath } from 'node:url';
 import { analyseProject } from '../src/analysis/analyse.js';
 import { parseProject } from '../src/model/parseProject.js';
 import type { Project } from '../src/model/projectSchema.js';
-import { scheduleOf } from '../src/schedule/scheduleRows.js';
+import { scheduleOf } from '../src/schedule/scheduleOf.js';
 import { scheduleJson } from '../src/schedule/scheduleJson.js';
 import { scheduleView } from '../src/schedule/scheduleView.js';
 import { scheduleCsv } from '../src/schedule/scheduleCsv.js';
@@ -17,7 +17,7 @@ import { FOOT, INCH, type UnitSystem } from '../src/units/conversions.js';
 import { PSF } from '../src/units/conversions.js';
 import { route } from './projectBuilder.js';
 import { randomRoute } from './randomRoutes.js';
-import { CODE_MEANINGS } from '../src/diagnostics/codeMeanings.js';
+import { WORDING } from '../src/diagnostics/codeMeanings.js';
 
 const SEED = 20261203;
 const demoPath = fileURLToPath(new URL('../../../public/demo/larkspur-rise.json', import.meta.url));
@@ -97,7 +97,7 @@ describe('one schedule view: the CLI table and the CSV show the same cell texts,
   for (const units of ['si', 'us'] as UnitSystem[]) {
     it(`agrees cell for cell on the demo in ${units.toUpperCase()}`, () => {
       const a = analyseProject(demo());
-      const view = scheduleView(a, units, CODE_MEANINGS);
+      const view = scheduleView(a, units, WORDING);
       // CSV: every column, every row, in the view's order.
       const csvRows = scheduleCsv(view).trimEnd().split('\r\n');
       expect(csvRows[0]!.split(',')[1]).toBe(view.columns[1]!.heading);
@@ -131,7 +131,7 @@ describe('one schedule view: the CLI table and the CSV show the same cell texts,
 describe('the schedule view builds its rows when read', () => {
   it('gives the same rows read in any order, and a concrete total equal to the sum of the concrete column (demo, SI and US)', () => {
     for (const units of ['si', 'us'] as UnitSystem[]) {
-      const fresh = () => scheduleView(analyseProject(demo()), units, CODE_MEANINGS);
+      const fresh = () => scheduleView(analyseProject(demo()), units, WORDING);
       const forward = fresh().rows.map((r) => ({ fitting: r.fitting, cells: r.cells, values: r.values }));
       const backwardView = fresh();
       const backward = [...backwardView.rows]

@@ -1,7 +1,8 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
 import { analyseProject } from '../src/analysis/analyse.js';
-import { scheduleOf, type Schedule } from '../src/schedule/scheduleRows.js';
+import { type Schedule } from '../src/schedule/scheduleRows.js';
+import { scheduleOf } from '../src/schedule/scheduleOf.js';
 import { scheduleJson, writeScheduleJson, type ScheduleJsonWriting } from '../src/schedule/scheduleJson.js';
 import { JsonIndenter } from '../src/schedule/jsonIndent.js';
 import { terminalSafe } from '../src/cli/terminalText.js';

@@ -2,7 +2,7 @@ import { describe, it, expect } from 'vitest';
 import { analyse } from './analyse.js';
 import { route } from '../../test/projectBuilder.js';
 import { RUN_TOLERANCE } from '../network/fittingKind.js';
-import { scheduleOf } from '../schedule/scheduleRows.js';
+import { scheduleOf } from '../schedule/scheduleOf.js';
 import { fittingTitle, kindName } from '../schedule/fittingNames.js';
 import { takeOff } from '../schedule/quantities.js';
 

@@ -9,7 +9,7 @@ import { scheduleCsv } from '../schedule/scheduleCsv.js';
 import { generateRoute } from '../../bench/generateRoute.js';
 import { escapeStrings } from './terminalText.js';
 import { escapedView } from './escapedView.js';
-import { CODE_MEANINGS } from '../diagnostics/codeMeanings.js';
+import { WORDING } from '../diagnostics/codeMeanings.js';
 
 const demoPath = fileURLToPath(new URL('../../../../public/demo/larkspur-rise.json', import.meta.url));
 
@@ -36,7 +36,7 @@ describe('escapedView prints what escaping every string of the view printed', ()
     for (const input of projects) {
       const a = analysed(input);
       for (const units of ['si', 'us'] as const) {
-        const view = scheduleView(a, units, CODE_MEANINGS);
+        const view = scheduleView(a, units, WORDING);
         const before = escapeStrings(view);
         const after = escapedView(view);
         expect(scheduleTable(after, 'P')).toBe(scheduleTable(before, 'P'));
@@ -52,7 +52,7 @@ describe('escapedView prints what escaping every string of the view printed', ()
   });
 
   it('leaves nothing a terminal acts on in a cell or a note of the hostile demo', () => {
-    const view = escapedView(scheduleView(analysed(hostile()), 'si', CODE_MEANINGS));
+    const view = escapedView(scheduleView(analysed(hostile()), 'si', WORDING));
     // eslint-disable-next-line no-control-regex -- looking for control characters is the point
     const control = /[\u0000-\u001f\u007f-\u009f\u202e]/;
     for (const r of view.rows) for (const text of Object.values(r.cells)) expect(text).not.toMatch(control);

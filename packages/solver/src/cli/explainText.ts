@@ -10,7 +10,7 @@ import { wordingContext } from '../diagnostics/context.js';
 import { notVerifiedText } from '../provenance/entry.js';
 import { REGISTER } from '../provenance/register.js';
 import { unverified } from '../provenance/unverified.js';
-import { scheduleOf } from '../schedule/scheduleRows.js';
+import { scheduleOf } from '../schedule/scheduleOf.js';
 import { restraintElements } from '../schedule/restraintElements.js';
 import { escapeControls } from './terminalText.js';
 

@@ -7,10 +7,10 @@ import type { Project } from '../model/projectSchema.js';
 import { analyse } from '../analysis/analyse.js';
 import { legsByNode } from '../network/legs.js';
 import { fittingGeometry, needsRestraint } from '../network/fittingKind.js';
-import { scheduleOf } from '../schedule/scheduleRows.js';
+import { scheduleOf } from '../schedule/scheduleOf.js';
 import { writeScheduleJson, writeScheduleJsonBytes } from '../schedule/scheduleJson.js';
 import { scheduleView } from '../schedule/scheduleView.js';
-import { CODE_MEANINGS } from '../diagnostics/codeMeanings.js';
+import { WORDING } from '../diagnostics/codeMeanings.js';
 import { scheduleCsv } from '../schedule/scheduleCsv.js';
 import { CAUTIONS } from '../schedule/cautions.js';
 import { scheduleTable } from '../schedule/scheduleTable.js';
@@ -236,11 +236,11 @@ export async function runCli(argv: readonly string[], rawIo: CliIo): Promise<num
       // Streamed in pieces, each through the terminal guard: the same text as guarding the whole, since
       // JSON has no raw CR or other C0 control for a cut to split.
       writeScheduleJson(scheduleOf(analysis), io.out, { pretty, echo: full });
-    else if (format === 'csv') io.out(scheduleCsv(escapedView(scheduleView(analysis, units, CODE_MEANINGS))));
+    else if (format === 'csv') io.out(scheduleCsv(escapedView(scheduleView(analysis, units, WORDING))));
     else if (format === 'table')
       io.out(
         scheduleTable(
-          escapedView(scheduleView(analysis, units, CODE_MEANINGS)),
+          escapedView(scheduleView(analysis, units, WORDING)),
           escapeControls(project.name),
           positionColumns(project.sheet?.chainageStyle),
         ),

@@ -1,4 +1,5 @@
 import type { DiagnosticCode } from './codes.js';
+import { diagnosticText, type Wording } from './wording.js';
 
 /** What a finding means and what the engineer should do, in words. */
 export interface CodeMeaning {
@@ -205,3 +206,6 @@ export const CODE_MEANINGS: CodeMeanings = {
     action: 'Check the safety factor.',
   },
 };
+
+/** The meanings and the sentences together, as a schedule view words its findings (wording.ts). */
+export const WORDING: Wording = { meanings: CODE_MEANINGS, text: diagnosticText };

@@ -3,6 +3,7 @@ import { quantityText } from '../schedule/columnUnits.js';
 import type { UnitSystem } from '../units/conversions.js';
 import { DIAGNOSTIC_CODES, type DiagnosticCode } from './codes.js';
 import type { Diagnostic, Subject } from './diagnostic.js';
+import type { CodeMeanings } from './codeMeanings.js';
 
 /** How the reader knows the things a diagnostic names; ids never reach the words. */
 export interface WordingContext {
@@ -145,6 +146,16 @@ function shownValues(d: Diagnostic, units: UnitSystem): Shown {
 }
 
 const formatRatio = (v: number) => (Number.isFinite(v) ? String(Math.round(v * 100) / 100) : '—');
+
+/**
+ * Everything a schedule needs to word its findings: what each code means (a note whose fittings'
+ * sentences differ) and each finding's own sentence. The app loads it apart from its first screen
+ * (`@mainbrace/solver/meanings`); a program that words findings passes it in.
+ */
+export interface Wording {
+  meanings: CodeMeanings;
+  text: (d: Diagnostic, c: WordingContext) => string;
+}
 
 /** The diagnostic as one sentence in the reader's units. */
 export function diagnosticText(d: Diagnostic, c: WordingContext): string {

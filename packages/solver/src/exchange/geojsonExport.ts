@@ -1,6 +1,6 @@
 import type { Project } from '../model/projectSchema.js';
 import { analyse } from '../analysis/analyse.js';
-import { scheduleOf } from '../schedule/scheduleRows.js';
+import { scheduleOf } from '../schedule/scheduleOf.js';
 import { elementName } from '../schedule/restraintElements.js';
 import { settingOut } from '../schedule/settingOut.js';
 import { CAUTIONS } from '../schedule/cautions.js';

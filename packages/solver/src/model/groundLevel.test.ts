@@ -7,7 +7,7 @@ import { nodeCover, nodeGround, pipeLevelFor } from './groundLevel.js';
 import { analyse } from '../analysis/analyse.js';
 import { legsByNode } from '../network/legs.js';
 import { fittingSite } from '../restraint/site.js';
-import { scheduleOf } from '../schedule/scheduleRows.js';
+import { scheduleOf } from '../schedule/scheduleOf.js';
 import { settingOut } from '../schedule/settingOut.js';
 
 // A bend at b between two 0.3 m OD pipes (project-format.md, "Ground levels").

@@ -4,7 +4,7 @@ import { sizeGravityAnchor } from './gravityAnchor.js';
 import { CUBIC_YARD, FOOT, INCH, POUND_PER_CUBIC_FOOT_WEIGHT } from '../units/conversions.js';
 import { LBF, psi, route } from '../../test/projectBuilder.js';
 import { expectClose, expectPrinted } from '../../test/tolerance.js';
-import { scheduleOf } from '../schedule/scheduleRows.js';
+import { scheduleOf } from '../schedule/scheduleOf.js';
 import { restraintSummary } from '../schedule/restraintText.js';
 
 const FT3 = FOOT ** 3;

@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import { analyse } from '../analysis/analyse.js';
-import { scheduleOf } from '../schedule/scheduleRows.js';
+import { scheduleOf } from '../schedule/scheduleOf.js';
 import { restraintSummary } from '../schedule/restraintText.js';
 import { route } from '../../test/projectBuilder.js';
 import type { Soil } from '../model/projectSchema.js';

@@ -1,7 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import { analyse } from '../analysis/analyse.js';
 import { route } from '../../test/projectBuilder.js';
-import { scheduleOf } from '../schedule/scheduleRows.js';
+import { scheduleOf } from '../schedule/scheduleOf.js';
 
 /**
  * A crest straight in plan, but for the millimetre a typed point was rounded to: its thrust is upward,

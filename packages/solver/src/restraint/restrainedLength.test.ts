@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import { analyse } from '../analysis/analyse.js';
-import { scheduleOf } from '../schedule/scheduleRows.js';
+import { scheduleOf } from '../schedule/scheduleOf.js';
 import { route, type NodeSpec, type PipeSpec } from '../../test/projectBuilder.js';
 import type { Soil } from '../model/projectSchema.js';
 import { expectClose } from '../../test/tolerance.js';

@@ -2,10 +2,10 @@ import { describe, it, expect } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { parseProjectText } from '../model/parseProject.js';
 import { analyse } from '../analysis/analyse.js';
-import { scheduleOf } from './scheduleRows.js';
+import { scheduleOf } from './scheduleOf.js';
 import { anchorConcrete, blockConcrete, concretePieces } from './concrete.js';
 import { scheduleView } from './scheduleView.js';
-import { CODE_MEANINGS } from '../diagnostics/codeMeanings.js';
+import { WORDING } from '../diagnostics/codeMeanings.js';
 import { builtInches } from '../units/format.js';
 
 // 1 in = 0.0254 m exactly (NIST SP 811, appendix B).
@@ -32,7 +32,7 @@ describe('concrete as a crew builds it from the sheet', () => {
     if (!parsed.ok) throw new Error('demo does not parse');
     const a = analyse(parsed.project);
     const step = parsed.project.design.dimensionStep;
-    const view = scheduleView(a, 'us', CODE_MEANINGS);
+    const view = scheduleView(a, 'us', WORDING);
     let blocks = 0;
     for (const [i, f] of scheduleOf(a).fittings.entries()) {
       const b = f.restraint.block;

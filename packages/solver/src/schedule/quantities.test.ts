@@ -2,13 +2,13 @@ import { describe, it, expect } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { parseProjectText } from '../model/parseProject.js';
 import { analyse } from '../analysis/analyse.js';
-import { scheduleOf } from './scheduleRows.js';
+import { scheduleOf } from './scheduleOf.js';
 import { takeOff, takeOffRows } from './quantities.js';
 import { takeOffCsv } from './quantitiesText.js';
 import { anchorBox, padThickness } from './settingOut.js';
 import { ceilTo } from '../units/format.js';
 import { scheduleConcrete, scheduleView } from './scheduleView.js';
-import { CODE_MEANINGS } from '../diagnostics/codeMeanings.js';
+import { WORDING } from '../diagnostics/codeMeanings.js';
 import { routeInput, validProject } from '../../test/projectBuilder.js';
 import { INCH } from '../units/conversions.js';
 
@@ -64,13 +64,13 @@ describe('quantities take-off', () => {
     const a = analyse(project);
     for (const units of ['si', 'us'] as const) {
       const t = takeOff(fittings, project, units);
-      expect(scheduleView(a, units, CODE_MEANINGS).concrete).toBeCloseTo(t.concreteNet, 12);
-      expect(scheduleConcrete(a, units)).toBe(scheduleView(a, units, CODE_MEANINGS).concrete);
+      expect(scheduleView(a, units, WORDING).concrete).toBeCloseTo(t.concreteNet, 12);
+      expect(scheduleConcrete(a, units)).toBe(scheduleView(a, units, WORDING).concrete);
     }
     // By hand from the take-off's lines (m³, each piece rounded up to 0.01): 3.17 + 0.60 + 3.69 + 0.18.
-    expect(scheduleView(a, 'si', CODE_MEANINGS).concrete).toBeCloseTo(7.64, 12);
+    expect(scheduleView(a, 'si', WORDING).concrete).toBeCloseTo(7.64, 12);
     // Each row's concrete is its own pieces: the sag bends' rows carry block and pad.
-    const view = scheduleView(a, 'si', CODE_MEANINGS);
+    const view = scheduleView(a, 'si', WORDING);
     const sags = view.rows.filter((r) => r.fitting.restraint.trenchBottom);
     expect(sags.length).toBeGreaterThan(0);
     for (const r of sags) {

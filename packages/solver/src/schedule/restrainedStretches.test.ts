@@ -1,7 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import { route } from '../../test/projectBuilder.js';
 import { analyse } from '../analysis/analyse.js';
-import { scheduleOf } from './scheduleRows.js';
+import { scheduleOf } from './scheduleOf.js';
 import { takeOff } from './quantities.js';
 import { restrainedJointCount } from './restrainedJoints.js';
 import { restrainedStretches, stretchJoints } from './restrainedStretches.js';

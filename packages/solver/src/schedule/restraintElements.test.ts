@@ -1,12 +1,12 @@
 import { describe, it, expect } from 'vitest';
 import { analyse } from '../analysis/analyse.js';
-import { scheduleOf } from './scheduleRows.js';
+import { scheduleOf } from './scheduleOf.js';
 import { restraintElements } from './restraintElements.js';
 import { scheduleView } from './scheduleView.js';
 import { INCH, POUND_PER_CUBIC_FOOT_WEIGHT } from '../units/conversions.js';
 import { psi, route } from '../../test/projectBuilder.js';
 import { expectClose } from '../../test/tolerance.js';
-import { CODE_MEANINGS } from '../diagnostics/codeMeanings.js';
+import { WORDING } from '../diagnostics/codeMeanings.js';
 
 /**
  * A vertical bend with one leg level: in along +x, out along +x turned 45° down (crest) or up (sag).
@@ -47,7 +47,7 @@ describe('vertical bends: thrust parts apart, each restraint element with its ow
     expectClose(block.force!, row.horizontalThrust, 1e-12);
     expect(anchor.bears).toBe('up');
     expectClose(anchor.force!, row.upwardThrust, 1e-12);
-    const view = scheduleView(a, 'si', CODE_MEANINGS);
+    const view = scheduleView(a, 'si', WORDING);
     const cells = view.rows.find((r) => r.fitting.node === 'c')!.cells;
     expect(cells.fitting).toBe('Bend 45° crest');
     expect(cells.restraint).toMatch(/^block .* bears 90° E, [\d.]+ kN; anchor .* holds [\d.]+ kN up$/);
@@ -64,7 +64,7 @@ describe('vertical bends: thrust parts apart, each restraint element with its ow
     const pad = els.find((e) => e.kind === 'trenchBottom')!;
     expect(pad.bears).toBe('down');
     expectClose(pad.force!, row.downwardThrust, 1e-12);
-    const view = scheduleView(a, 'si', CODE_MEANINGS);
+    const view = scheduleView(a, 'si', WORDING);
     expect(view.rows.find((r) => r.fitting.node === 'c')!.cells.fitting).toBe('Bend 45° sag');
   });
 
@@ -96,7 +96,7 @@ describe('vertical bends: thrust parts apart, each restraint element with its ow
     const said = /and ([\d.]+) kN down on its base/.exec(block.forceText);
     expect(said).not.toBeNull();
     expect(Number(said![1])).toBeCloseTo(row.downwardThrust / 1000, 1);
-    const cells = scheduleView(a, 'si', CODE_MEANINGS).rows.find((r) => r.fitting.node === 'c')!.cells;
+    const cells = scheduleView(a, 'si', WORDING).rows.find((r) => r.fitting.node === 'c')!.cells;
     expect(cells.restraint).toContain(`and ${said![1]} kN down on its base`);
   });
 

@@ -5,7 +5,7 @@ import { scheduleTable } from './scheduleTable.js';
 import { noteAfterHeading } from './scheduleNotes.js';
 import { route } from '../../test/projectBuilder.js';
 import { PSI } from '../units/conversions.js';
-import { CODE_MEANINGS } from '../diagnostics/codeMeanings.js';
+import { WORDING } from '../diagnostics/codeMeanings.js';
 
 /**
  * Notes, not repeats: a main of four 12-in C900 DR 25 pipes (pressure class 165 psi) held
@@ -35,7 +35,7 @@ const main = (datum?: number) =>
   });
 
 const ratingNotes = (p: ReturnType<typeof main>) =>
-  scheduleView(analyse(p), 'us', CODE_MEANINGS).notes.filter((n) => n.code === 'pipe.over-working-rating');
+  scheduleView(analyse(p), 'us', WORDING).notes.filter((n) => n.code === 'pipe.over-working-rating');
 
 describe('pipe rating notes', () => {
   it('the same finding on four pipes is one note naming the four', () => {
@@ -57,7 +57,7 @@ describe('pipe rating notes', () => {
 
 describe('an error note under its heading', () => {
   it('says "not adequate" once in the terminal table', () => {
-    const table = scheduleTable(scheduleView(analyse(main()), 'us', CODE_MEANINGS), 'Test route');
+    const table = scheduleTable(scheduleView(analyse(main()), 'us', WORDING), 'Test route');
     const line = table.split('\n').find((l) => l.includes('rated working pressure'))!;
     expect(line).toContain('!! NOT ADEQUATE');
     expect(line.toLowerCase().split('not adequate').length - 1).toBe(1);

@@ -5,7 +5,7 @@ import { nodeSoil } from '../restraint/sizeRestraint.js';
 import { nodeCover, nodeGround } from '../model/groundLevel.js';
 import type { BearingBlock } from '../restraint/bearingBlock.js';
 import type { Diagnostic } from '../diagnostics/diagnostic.js';
-import { diagnosticText } from '../diagnostics/wording.js';
+import type { Wording } from '../diagnostics/wording.js';
 import { legTarget, wordingContext } from '../diagnostics/context.js';
 import type { ProvenanceId } from '../provenance/register.js';
 import { unverified } from '../provenance/unverified.js';
@@ -285,54 +285,27 @@ class ScheduleRow {
   }
 }
 
-const schedules = new WeakMap<Analysis, Schedule>();
 const rowLists = new WeakMap<Analysis, ScheduleFitting[]>();
 
 const wordings = new WeakMap<Analysis, (d: Diagnostic) => string>();
 
 /** The SI wording of an analysis's findings, as the schedule's rows carry them. */
-function siWords(a: Analysis): (d: Diagnostic) => string {
+export function siWords(a: Analysis, text: Wording['text']): (d: Diagnostic) => string {
   let words = wordings.get(a);
   if (!words) {
     const context = wordingContext(a, 'si');
-    wordings.set(a, (words = (d: Diagnostic) => diagnosticText(d, context)));
+    wordings.set(a, (words = (d: Diagnostic) => text(d, context)));
   }
   return words;
 }
 
 /**
  * The schedule row of `a.fittings[i]`, built when first asked for and kept: a reader of a few rows
- * (a table showing those in view) never pays for the others.
+ * (a table showing those in view) never pays for the others. `text` words its findings (wording.ts),
+ * passed in so that a first screen can load the words apart.
  */
-export function scheduleRowAt(a: Analysis, i: number): ScheduleFitting {
+export function scheduleRowAt(a: Analysis, i: number, text: Wording['text']): ScheduleFitting {
   let list = rowLists.get(a);
   if (!list) rowLists.set(a, (list = new Array<ScheduleFitting>(a.fittings.length)));
-  return (list[i] ??= new ScheduleRow(a, a.fittings[i]!, siWords(a)));
-}
-
-/**
- * The schedule of project-format.md from an analysis: one row per fitting that needs restraint, in
- * the analysis' run-and-chainage order. Memoised by the analysis, as `analyse` is by the document: the
- * table, the print and the exports share one schedule of one document. Callers must not change it.
- * The rows, and each row's words, are built when first read.
- */
-export function scheduleOf(a: Analysis): Schedule {
-  let s = schedules.get(a);
-  if (!s) {
-    const words = siWords(a);
-    s = {
-      project: a.project.name,
-      units: 'SI',
-      warnings: a.diagnostics.map(words),
-      diagnostics: a.diagnostics,
-      // Built when first read, and kept.
-      get fittings() {
-        const rows = a.fittings.map((_, i) => scheduleRowAt(a, i));
-        Object.defineProperty(this, 'fittings', { value: rows, enumerable: true });
-        return rows;
-      },
-    };
-    schedules.set(a, s);
-  }
-  return s;
+  return (list[i] ??= new ScheduleRow(a, a.fittings[i]!, siWords(a, text)));
 }

@@ -1,7 +1,6 @@
 import type { Analysis } from '../analysis/analyse.js';
 import type { Diagnostic } from '../diagnostics/diagnostic.js';
-import type { CodeMeanings } from '../diagnostics/codeMeanings.js';
-import { diagnosticText } from '../diagnostics/wording.js';
+import type { Wording } from '../diagnostics/wording.js';
 import { wordingContext } from '../diagnostics/context.js';
 import type { UnitSystem } from '../units/conversions.js';
 import { columnNumber, columnUnit, type ColumnKind } from './columnUnits.js';
@@ -43,9 +42,9 @@ const views = new WeakMap<Analysis, Partial<Record<UnitSystem, ScheduleView>>>()
 /**
  * The one view model of the schedule (CLI table, CSV, app table, print): the cell texts are made here
  * and only here, so every output shows the same value for the same cell. Memoised per analysis and units:
- * a program words its findings with one table of meanings (CODE_MEANINGS), whichever call passes it first.
+ * a program words its findings with one wording (WORDING), whichever call passes it first.
  */
-export function scheduleView(a: Analysis, units: UnitSystem, meanings: CodeMeanings): ScheduleView {
+export function scheduleView(a: Analysis, units: UnitSystem, wording: Wording): ScheduleView {
   const cached = views.get(a)?.[units];
   if (cached) return cached;
   const context = wordingContext(a, units);
@@ -54,8 +53,8 @@ export function scheduleView(a: Analysis, units: UnitSystem, meanings: CodeMeani
     { mark: '', diagnostics: a.diagnostics.filter((d) => !a.byNode.has(d.subject.node ?? '')) },
     ...a.fittings,
   ];
-  const words = (d: Diagnostic) => diagnosticText(d, context);
-  const { notes, byMark } = scheduleNotes(rowsForNotes, words, meanings, {
+  const words = (d: Diagnostic) => wording.text(d, context);
+  const { notes, byMark } = scheduleNotes(rowsForNotes, words, wording.meanings, {
     pipe: context.pipeName,
     caseName: context.caseName,
   });
@@ -68,7 +67,7 @@ export function scheduleView(a: Analysis, units: UnitSystem, meanings: CodeMeani
   const view: ScheduleView = {
     units,
     columns: SCHEDULE_COLUMNS.map((c) => ({ id: c.id, heading: headingOf(c.heading, c.kind, units), kind: c.kind })),
-    rows: a.fittings.map((_, i) => lazyRow(a, i, cellContext)),
+    rows: a.fittings.map((_, i) => lazyRow(a, i, cellContext, wording.text)),
     notes,
     concrete: scheduleConcrete(a, units),
   };
@@ -96,12 +95,12 @@ export function scheduleConcrete(a: Analysis, units: UnitSystem): number {
  * Row `i` of the view, its cells made when first read: a table that shows the rows in view (or a
  * route opened at 10,000 fittings) does not word every cell of every row up front.
  */
-function lazyRow(a: Analysis, i: number, context: CellContext): ViewRow {
+function lazyRow(a: Analysis, i: number, context: CellContext, text: Wording['text']): ViewRow {
   let made: Pick<ViewRow, 'cells' | 'values'> | undefined;
-  const make = () => (made ??= rowCells(scheduleRowAt(a, i), context));
+  const make = () => (made ??= rowCells(scheduleRowAt(a, i, text), context));
   return {
     get fitting() {
-      return scheduleRowAt(a, i);
+      return scheduleRowAt(a, i, text);
     },
     get cells() {
       return make().cells;
