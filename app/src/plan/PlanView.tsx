@@ -264,6 +264,8 @@ export function PlanView() {
     if (capturesPress(store, out)) e.currentTarget.setPointerCapture(e.pointerId);
   };
   const onPointerMove = (e: ReactPointerEvent<HTMLDivElement>) => {
+    // Over an overlay (legend, typed-entry box) the pointer is not on the drawing.
+    if (e.target !== e.currentTarget && !(e.target instanceof HTMLCanvasElement)) return send({ type: 'pointerLeave' });
     const at = local(e);
     if (coords.current) {
       const p = toPlan(store.getState().viewport, at);

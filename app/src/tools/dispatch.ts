@@ -130,8 +130,12 @@ export function dispatch(s: PlanInput, e: PlanEvent, derived: PlanDerived = NO_D
       const t = withoutTouch(s, e.id);
       return done({ ...t, gesture: IDLE_GESTURE, dragPreview: null, selectBox: null });
     }
-    case 'pointerLeave':
-      return done(s.gesture.kind === 'idle' ? { ...s, hover: { kind: 'none' } } : s);
+    case 'pointerLeave': {
+      if (s.gesture.kind !== 'idle') return done(s);
+      // A pointer off the plan (or over its typed-entry box) aims nowhere: a bare typed length goes straight on.
+      const draw = s.draw.phase === 'drawing' ? { ...s.draw, cursor: null } : s.draw;
+      return done({ ...s, hover: { kind: 'none' }, draw });
+    }
     case 'doubleClick': {
       if (s.tool !== 'draw') return { state: s, intents: [], handled: false };
       const r = drawWith(s, { type: 'finish' });

@@ -61,6 +61,25 @@ describe('typed input while drawing, through the dispatcher', () => {
     expect(h.undoSteps()).toBe(1); // the run is one edit
   });
 
+  it('a bare length goes toward the pointer on the plan, and straight on once the pointer has left it (docs/drawing-input.md)', () => {
+    const h = planHarness(emptyProject());
+    h.command('toolDraw');
+    type(h, 'E 0 N 0');
+    type(h, '60 @90'); // due east to (60, 0)
+    h.pointerMove({ x: 60, y: 40 }); // the pointer due north of the last node
+    type(h, '50'); // toward it: (60, 50)
+    h.pointerMove({ x: 0, y: 80 }); // on its way to the typed-entry box, up and to the left…
+    h.send({ type: 'pointerLeave' }); // …and over the box: it aims nowhere
+    type(h, '30'); // straight on along the last leg (north): (60, 80)
+    type(h, '');
+    expect(h.doc().nodes.map((n) => [n.x, n.y])).toEqual([
+      [0, 0],
+      [60, 0],
+      [60, 50],
+      [60, 80],
+    ]);
+  });
+
   it('a bad entry stays in the box with the reason, and nothing is drawn', () => {
     const h = planHarness(emptyProject());
     h.command('toolDraw');
