@@ -3,11 +3,13 @@ import { useActions, useApp } from '../state/StoreContext.js';
 import { NumberField } from './NumberField.js';
 import { levelPatch, type LevelEdit } from './nodeLevels.js';
 import { NODE_FIELDS } from '../format/fieldLabels.js';
+import { nodeTitle, useNodeName } from './nodeNames.js';
 
 /** The inputs of a node: label, position, elevation, cover, soil, end condition, valve, restraint method. */
 export function NodeDetails({ node, project, pipeCount }: { node: ProjectNode; project: Project; pipeCount: number }) {
   const actions = useActions();
   const u = useApp((s) => s.units);
+  const nodeName = useNodeName();
   const set = (patch: Partial<ProjectNode>) => actions.updateNode(node.id, patch);
   // The largest pipe at the node sets where its top is (model/groundLevel.ts).
   const od = Math.max(
@@ -19,7 +21,7 @@ export function NodeDetails({ node, project, pipeCount }: { node: ProjectNode; p
   return (
     <section className="inputs" aria-label={`Node ${node.id}`}>
       <h3>
-        Node <span className="node-id">{node.id}</span>
+        {nodeTitle(nodeName(node.id))} <span className="muted">id {node.id}</span>
       </h3>
       <div className="field">
         <label htmlFor="node-label">{NODE_FIELDS.label}</label>

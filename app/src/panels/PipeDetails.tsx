@@ -24,6 +24,7 @@ import { MATERIAL_NAME } from '../plan/palette.js';
 import { show } from '../format/quantity.js';
 import { NumberField } from './NumberField.js';
 import { PIPE_FIELDS } from '../format/fieldLabels.js';
+import { useNodeName } from './nodeNames.js';
 
 const CUSTOM = '__custom';
 
@@ -39,8 +40,10 @@ export function PipeDetails({ pipe, project }: { pipe: Pipe; project: Project })
   const rating = pipe.series && pipe.nominal ? findSize(pipe.series, pipe.nominal)?.rating : undefined;
   const plan = planLength(project, pipe.id);
   const [moving, setMoving] = useState<'from' | 'to'>('to');
-  const movedId = moving === 'to' ? pipe.to : pipe.from;
-  const fixedId = moving === 'to' ? pipe.from : pipe.to;
+  const nodeName = useNodeName();
+  const [fromName, toName] = [nodeName(pipe.from), nodeName(pipe.to)];
+  const movedName = moving === 'to' ? toName : fromName;
+  const fixedName = moving === 'to' ? fromName : toName;
 
   const pickSeries = (id: string) => {
     if (id === CUSTOM) return set({ series: undefined, nominal: undefined });
@@ -72,9 +75,9 @@ export function PipeDetails({ pipe, project }: { pipe: Pipe; project: Project })
   return (
     <section className="inputs" aria-label={`Pipe ${pipe.id}`}>
       <h3>
-        Pipe <span className="node-id">{pipe.id}</span>{' '}
+        Pipe from {fromName} to {toName}{' '}
         <span className="muted">
-          {pipe.from} → {pipe.to}, {show(length, 'length', u, 4)}
+          {show(length, 'length', u, 4)}, id {pipe.id}
         </span>
       </h3>
       <div className="field">
@@ -96,7 +99,7 @@ export function PipeDetails({ pipe, project }: { pipe: Pipe; project: Project })
         max={1e6}
         onCommit={(length) => actions.setPipeLength(pipe.id, length, moving)}
         testId="pipe-plan-length"
-        hint={`Typing a length moves ${movedId} along the pipe; ${fixedId} stays.`}
+        hint={`Typing a length moves ${movedName} along the pipe; ${fixedName} stays.`}
       />
       <button
         type="button"
@@ -104,7 +107,7 @@ export function PipeDetails({ pipe, project }: { pipe: Pipe; project: Project })
         onClick={() => setMoving(moving === 'to' ? 'from' : 'to')}
         data-testid="pipe-length-swap"
       >
-        Move {fixedId} instead
+        Move {fixedName} instead
       </button>
       <div className="field">
         <label htmlFor="pipe-material">Material</label>
@@ -189,7 +192,7 @@ export function PipeDetails({ pipe, project }: { pipe: Pipe; project: Project })
         </div>
       )}
       <NumberField
-        label={`${PIPE_FIELDS.flow}, ${pipe.from} → ${pipe.to}`}
+        label={`${PIPE_FIELDS.flow}, ${fromName} → ${toName}`}
         value={pipe.flow}
         dimension="flow"
         units={u}
