@@ -75,8 +75,19 @@ const WORDS: Record<DiagnosticCode, Words> = {
     `Block taller than the cover allows: a face ${v.faceHeight} high needs its bottom ${v.bottomDepth} or more below ground, but the pipe centre is only ${v.centreDepth} down. Deepen the cover, use restrained joints, or design the block for passive pressure.`,
   'block.wide-face': (v) =>
     `Face ${v.faceWidth} wide is more than twice its ${v.faceHeight} height: the cover limits the height. Consider restrained joints or a deeper block.`,
-  'block.none-holds': (v) =>
-    `No block within the cover and face limits holds ${v.thrust} with a safety factor of ${v.safetyFactor}: a face of ${v.bearingArea} is needed, the largest allowed is ${v.largestFace}, and the strongest, ${v.faceWidth} wide × ${v.faceHeight} high, resists ${v.ratio} × the thrust by passive pressure (${v.safetyFactor} needed). Restrained joints are sized instead: build them, or deepen the main, improve the soil, or have a block designed by a geotechnical engineer.`,
+  'block.none-holds': (v) => {
+    const area = `a face of ${v.bearingArea} is needed for bearing and the largest the limits allow is ${v.largestFace}`;
+    const passive = `the strongest face, ${v.faceWidth} wide × ${v.faceHeight} high, resists only ${v.ratio} × the thrust by passive pressure (${v.safetyFactor} needed)`;
+    const why =
+      v.areaShort && v.passiveShort
+        ? `${area}, and ${passive}`
+        : v.areaShort
+          ? `bearing governs: ${area} (passive pressure is not the limit)`
+          : v.passiveShort
+            ? `passive pressure governs: ${passive}`
+            : `no face has both the area bearing needs (${v.bearingArea}) and the passive resistance: the strongest, ${v.faceWidth} wide × ${v.faceHeight} high, resists ${v.ratio} × the thrust but is smaller`;
+    return `No block within the cover and face limits holds ${v.thrust} with a safety factor of ${v.safetyFactor}: ${why}. Restrained joints are sized instead: build them, or deepen the main, improve the soil, or have a block designed by a geotechnical engineer.`;
+  },
   'pad.no-bearing': (_v, s, c) =>
     `No bearing under the fitting: ${soil(s, c)} cannot carry a pad or an anchor; restrained joints are sized instead, or replace the soil.`,
   'joints.no-resistance': (v, s, c) =>
@@ -136,6 +147,12 @@ function shownValues(d: Diagnostic, units: UnitSystem): Shown {
     // Forces and pressures as the schedule's columns give them, so that a note and its row agree.
     else if (kind === 'force' || kind === 'pressure') out[name] = quantityText(v, kind, units);
     else out[name] = formatSi(v, kind as Parameters<typeof formatSi>[1], units);
+  }
+  if (d.code === 'block.none-holds') {
+    // which limit failed, so that the sentence names it and not a figure that passes
+    const { bearingArea = 0, largestFace = 0, ratio = 0, safetyFactor = 0 } = d.values;
+    out.areaShort = bearingArea > largestFace ? '1' : '';
+    out.passiveShort = ratio < safetyFactor ? '1' : '';
   }
   if (d.code === 'flow.unbalanced') {
     const net = d.values.net ?? 0;
