@@ -112,6 +112,22 @@ describe('groundwater far above the ground', () => {
     for (const gw of [101.363, 100.5, 90])
       expect(withGroundwater(gw).diagnostics.some((x) => x.code === 'input.groundwater-above-ground')).toBe(false);
   });
+  it('warns of groundwater above the ground at some nodes only, counting them (fittings there are sized submerged)', () => {
+    // The first node 5 m lower: ground 95 + 0.163 + 1.2 = 96.363 m there, 101.363 m elsewhere.
+    const f = file();
+    f.nodes[0] = { ...f.nodes[0]!, elevation: 95 };
+    f.design = { groundwaterElevation: 98 };
+    const r = parseProject(f);
+    if (!r.ok) throw new Error('refused');
+    const s = scheduleOf(analyseProject(r.project));
+    const d = s.diagnostics.find((x) => x.code === 'input.groundwater-above-some-ground');
+    expect(d?.values.flooded).toBe(1);
+    expect(d?.values.lowestGround).toBeCloseTo(96.363, 9);
+    expect(s.warnings.join(' ')).toContain(
+      'the groundwater level 98.0 m is above the ground at one node (the lowest ground is 96.4 m)',
+    );
+    expect(s.diagnostics.some((x) => x.code === 'input.groundwater-above-ground')).toBe(false);
+  });
 });
 
 describe('degenerate geometry is refused rather than given results that depend on file order', () => {

@@ -172,6 +172,12 @@ export const CODE_MEANINGS: CodeMeanings = {
       'The groundwater level stands above the ground at every node of the route: possible on a flooded or river site, but more often a unit slip or a level on another datum.',
     action: 'Check the groundwater level, its unit and its datum.',
   },
+  'input.groundwater-above-some-ground': {
+    meaning:
+      'The groundwater level stands above the ground at some nodes: a flooded stretch or a crossing, or a level on another datum. Blocks and anchors there are sized submerged, with the water table taken at the ground.',
+    action:
+      'Check the groundwater level and its datum; where the stretch is flooded, check that its restraint suits work under water.',
+  },
   'input.velocity-unusual': {
     meaning:
       'The flow velocity in a pipe is higher than usual for a water main (above 5 m/s): often a unit slip in the flow.',

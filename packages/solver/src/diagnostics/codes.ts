@@ -155,6 +155,10 @@ export const DIAGNOSTIC_CODES = {
     severity: 'warning',
     values: { groundwater: 'elevation', highestGround: 'elevation' },
   },
+  'input.groundwater-above-some-ground': {
+    severity: 'warning',
+    values: { groundwater: 'elevation', lowestGround: 'elevation', flooded: 'ratio' },
+  },
   'input.velocity-unusual': {
     severity: 'warning',
     values: { value: 'velocity', low: 'velocity', high: 'velocity' },

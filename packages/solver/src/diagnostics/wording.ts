@@ -120,6 +120,8 @@ const WORDS: Record<DiagnosticCode, Words> = {
   'input.velocity-unusual': outside('the flow velocity'),
   'input.groundwater-above-ground': (v) =>
     `The design settings: the groundwater level ${v.groundwater} is above the ground at every node (the highest ground is ${v.highestGround}); check the value, its unit and its datum (a unit slip?).`,
+  'input.groundwater-above-some-ground': (v) =>
+    `The design settings: the groundwater level ${v.groundwater} is above the ground at ${v.flooded === '1' ? 'one node' : `${v.flooded} nodes`} (the lowest ground is ${v.lowestGround}); fittings there are sized submerged. Check the level and its datum.`,
   'input.diameter-unusual': outside('the outside diameter'),
   'input.density-unusual': outside('the density'),
   'input.unit-weight-unusual': outside('the unit weight'),

@@ -90,17 +90,24 @@ function routeFindings(p: Project, index: ReadonlyMap<string, number> | undefine
   }
   // Groundwater above the ground everywhere: no usual range fits every site, but above the whole
   // route it is more often an elevation typed in another unit or datum than a flooded site.
+  // Above the ground at some nodes only, it may be a flooded stretch or a slip: either way those
+  // fittings are sized submerged, which the designer should know.
   if (d.groundwaterElevation !== null && nodes.length > 0) {
     let highestGround = -Infinity;
-    for (let i = 0; i < nodes.length; i++) highestGround = Math.max(highestGround, nodeGround(nodes[i]!, odAt(i)));
-    if (d.groundwaterElevation > highestGround)
-      found.push(
-        diagnostic(
-          'input.groundwater-above-ground',
-          { field: 'design.groundwaterElevation' },
-          { groundwater: d.groundwaterElevation, highestGround },
-        ),
-      );
+    let lowestGround = Infinity;
+    let flooded = 0;
+    for (let i = 0; i < nodes.length; i++) {
+      const ground = nodeGround(nodes[i]!, odAt(i));
+      highestGround = Math.max(highestGround, ground);
+      lowestGround = Math.min(lowestGround, ground);
+      if (d.groundwaterElevation > ground) flooded++;
+    }
+    const groundwater = d.groundwaterElevation;
+    const field = { field: 'design.groundwaterElevation' };
+    if (groundwater > highestGround)
+      found.push(diagnostic('input.groundwater-above-ground', field, { groundwater, highestGround }));
+    else if (flooded > 0)
+      found.push(diagnostic('input.groundwater-above-some-ground', field, { groundwater, lowestGround, flooded }));
   }
   return found;
 }
