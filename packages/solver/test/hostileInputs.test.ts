@@ -124,7 +124,7 @@ describe('groundwater far above the ground', () => {
     expect(d?.values.flooded).toBe(1);
     expect(d?.values.lowestGround).toBeCloseTo(96.363, 9);
     expect(s.warnings.join(' ')).toContain(
-      'the groundwater level 98.0 m is above the ground at one node (the lowest ground is 96.4 m)',
+      'the groundwater level 98.00 m is above the ground at one node (the lowest ground is 96.36 m)',
     );
     expect(s.diagnostics.some((x) => x.code === 'input.groundwater-above-ground')).toBe(false);
   });

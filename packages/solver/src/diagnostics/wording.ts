@@ -148,6 +148,8 @@ function shownValues(d: Diagnostic, units: UnitSystem): Shown {
     else if (RESTRAINED.has(name)) out[name] = quantityText(v, 'restrained', units);
     // Forces and pressures as the schedule's columns give them, so that a note and its row agree.
     else if (kind === 'force' || kind === 'pressure') out[name] = quantityText(v, kind, units);
+    // Levels as the schedule's level columns give them (three figures would read 100.5 m as 101 m).
+    else if (kind === 'elevation') out[name] = quantityText(v, 'level', units);
     else out[name] = formatSi(v, kind as Parameters<typeof formatSi>[1], units);
   }
   if (d.code === 'block.none-holds') {
