@@ -315,7 +315,11 @@ function sizeBlocks(
   out.bearingArea = main.bearingArea;
   let adequate = main.block !== null;
   if (envelope.reverse) {
+    const first = out.steps.length;
     const reverse = block(envelope.reverse.force, envelope.reverse.direction);
+    // Its steps say whose they are: the record would otherwise read as the first block's again.
+    for (let k = first; k < out.steps.length; k++)
+      out.steps[k] = { ...out.steps[k]!, title: `Opposite block, for the reversed thrust: ${out.steps[k]!.title}` };
     out.reverse = reverse.block;
     adequate &&= reverse.block !== null;
     out.diagnostics.push(diagnostic('block.thrust-reverses', { node }, { force: envelope.reverse.force }));
@@ -378,6 +382,13 @@ function heavyBlock(
           ],
           result: value('t', 'block thickness', depth, 'length', 'no separate anchor needed'),
           reference: 'Weight ≥ SF × upward thrust (statics); thickness at most the register’s limit',
+        },
+        {
+          title: 'Concrete volume at that thickness',
+          formula: 'V = b · h · t',
+          inputs: [],
+          result: value('V', 'concrete volume', concreteVolume, 'volume', 'computed'),
+          reference: 'Prism of the face area and the block thickness; the fitting’s own volume is not deducted',
         },
       ];
   return { block: heavy, steps };
