@@ -35,7 +35,9 @@ for (const [name, paper] of [
     await page.getByRole('button', { name: 'Export ▾' }).click();
     await page.getByRole('menuitem', { name: 'Print the schedule…' }).click();
     const sheet = page.getByTestId('print-sheet');
-    if (paper === 'Letter') await page.getByLabel('Paper size').selectOption('letter');
+    // A US project's sheet starts on Letter, a metric one's on A4: each case picks its own.
+    await expect(page.getByLabel('Paper size')).toHaveValue(file.includes('probe-us') ? 'letter' : 'a4');
+    await page.getByLabel('Paper size').selectOption(paper === 'Letter' ? 'letter' : 'a4');
     await expect(sheet.locator('.crew-sheet')).toHaveAttribute('data-ready', 'yes');
     await expect(page.getByTestId('crew-page')).toHaveCount(sheets);
     await expect(page.getByTestId('job-takeoff')).toHaveCount(1);

@@ -236,7 +236,8 @@ export function PrintSheet({ onClose }: { onClose: () => void }) {
   const analysis = useAnalysis();
   const units = useApp((s) => s.units);
   const [appendix, setAppendix] = useState(false);
-  const [paper, setPaper] = useState<Paper>('a4');
+  // The paper of the sheet's units: Letter where it prints feet and inches, else A4.
+  const [paper, setPaper] = useState<Paper>(() => (units === 'us' ? 'letter' : 'a4'));
   const view = scheduleViewOf(analysis, units);
   const pages = useMemo(() => {
     const out: ViewRow[][] = [];
