@@ -130,15 +130,17 @@ describe('the crew sheet and the CSV give each depth below ground as the same te
     });
   }
 
-  it('rounds a block’s top toward the ground and its base into it, so the built block holds the designed one', () => {
-    // By hand from the demo's A2 (settingOut): top 1.4130 m = 55.63 in, base 1.9130 m = 75.31 in below
-    // ground. Top to the inch toward the ground: 55 in = 4 ft 7 in; base away from it: 76 in = 6 ft 4 in.
-    // In SI to the centimetre: 1.41 m and 1.92 m.
+  it('prints a block’s base into the ground and its top as that base less the printed height', () => {
+    // By hand from the demo's A2 (settingOut): top 1.4130 m, base 1.9130 m = 75.31 in below ground, face
+    // 0.500 m = 19.69 in high. Base away from the ground to the inch: 76 in = 6 ft 4 in; face up: 20 in;
+    // top 76 − 20 = 56 in = 4 ft 8 in, so the three printed figures add up. In SI to the centimetre:
+    // base 1.92 m, face 0.50 m, top 1.42 m.
     const f = rows.find((r) => r.mark === 'A2')!;
     const so = settingOut(f, parsed.project.design.dimensionStep).block!;
     expect(so.topDepth).toBeCloseTo(1.413, 3);
     expect(so.baseDepth).toBeCloseTo(1.913, 3);
-    expect(sketchOf(f, analysis, 'us').lines.join(' ')).toContain('top 4 ft 7 in, base 6 ft 4 in below ground');
-    expect(sketchOf(f, analysis, 'si').lines.join(' ')).toContain('top 1.41 m, base 1.92 m below ground');
+    expect(so.faceHeight).toBeCloseTo(0.5, 3);
+    expect(sketchOf(f, analysis, 'us').lines.join(' ')).toContain('top 4 ft 8 in, base 6 ft 4 in below ground');
+    expect(sketchOf(f, analysis, 'si').lines.join(' ')).toContain('top 1.42 m, base 1.92 m below ground');
   });
 });

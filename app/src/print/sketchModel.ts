@@ -1,4 +1,5 @@
 import {
+  blockTopShown,
   compassPoint,
   formatDimension,
   jointsText,
@@ -102,7 +103,7 @@ export function sketchOf(f: ScheduleFitting, analysis: Analysis, units: UnitSyst
   const so = settingOut(f, design.dimensionStep);
   const r = f.restraint;
   const dim = (m: number) => formatDimension(m, units);
-  // Depths as the schedule words them (columnUnits.ts): the top and the base of concrete round apart.
+  // Depths as the schedule words them (columnUnits.ts): a block's top is its base less its height as printed.
   const topText = (m: number) => quantityText(m, 'topDepth', units);
   const baseText = (m: number) => quantityText(m, 'baseDepth', units);
   const notAdequate = f.diagnostics.some((d) => d.severity === 'error');
@@ -376,7 +377,7 @@ export function sketchOf(f: ScheduleFitting, analysis: Analysis, units: UnitSyst
       y1: gy,
       x2: dx,
       y2: sy(main.topDepth),
-      text: topText(main.topDepth),
+      text: topText(blockTopShown(main, units)),
       side: 1,
     });
     section.push({
@@ -418,7 +419,7 @@ export function sketchOf(f: ScheduleFitting, analysis: Analysis, units: UnitSyst
   // The block's size is in the table row and on the dimensions: the words say what they cannot.
   const blockLine = (b: NonNullable<typeof so.block>, what: string) =>
     `${what} bears ${compassPoint(b.bearing)} against undisturbed soil ${bearingSide(f, legs, b.bearing)}, ` +
-    `face ${dim(b.thickness)} from fitting centre; top ${topText(b.topDepth)}, base ${baseText(b.baseDepth)} below ground.`;
+    `face ${dim(b.thickness)} from fitting centre; top ${topText(blockTopShown(b, units))}, base ${baseText(b.baseDepth)} below ground.`;
   if (so.block) lines.push(blockLine(so.block, 'Block'));
   if (so.reverseBlock) {
     const same =

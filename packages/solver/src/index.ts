@@ -86,6 +86,7 @@ export {
 } from './schedule/scheduleView.js';
 export { noteAfterHeading, scheduleNotes, type ScheduleNote } from './schedule/scheduleNotes.js';
 export {
+  blockTopShown,
   columnNumber,
   columnUnit,
   quantityText,

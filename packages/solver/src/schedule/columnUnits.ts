@@ -1,5 +1,5 @@
 import { CUBIC_YARD, FOOT, INCH, KIP, PSI, type UnitSystem } from '../units/conversions.js';
-import { ceilTo, feetAndInches, formatDimension, roundTo } from '../units/format.js';
+import { ceilTo, feetAndInches, formatDimension, roundTo, shownDimension } from '../units/format.js';
 
 /**
  * The kinds of quantity a schedule column holds. Each has one unit and one precision per unit system
@@ -53,9 +53,8 @@ export const isDimensionKind = (kind: ColumnKind): kind is DimensionKind =>
  *
  * Depths below ground are the levels a crew sets out and digs to, to the centimetre or the inch. They
  * round so that the concrete built holds the concrete designed: the base down into the ground (the
- * crew digs at least as deep as designed) and the top up toward it (the block reaches at least as
- * high), so a rounded top never cuts the face short. Rounding both up, as a size is, could leave the
- * face an inch shorter than designed.
+ * crew digs at least as deep as designed) and the top up toward it. A block's top is printed as its
+ * base less its printed height (`blockTopShown`), so a rounded top never cuts the face short.
  */
 export const COLUMN_UNITS: Record<Exclude<ColumnKind, 'text'>, Record<UnitSystem, Display>> = {
   chainage: { si: d('m', 1, 1), us: d('ft', FOOT, 1) },
@@ -93,6 +92,15 @@ function depthNumber(si: number, kind: 'topDepth' | 'baseDepth', units: UnitSyst
   const shown = Math.max(0, displayed(si, kind, units));
   return units === 'us' ? feetAndInches(shown) : shown.toFixed(COLUMN_UNITS[kind].si.decimals);
 }
+
+/**
+ * m, a bearing block's top below ground as every output prints it: its printed base less its printed
+ * height, so that the three figures a crew reads add up (rounded apart, a 2 ft 10 in face could read
+ * top 2 ft 10 in, base 5 ft 9 in). The base still rounds deeper and the face taller than designed.
+ */
+export const blockTopShown = (b: { baseDepth: number; faceHeight: number }, units: UnitSystem): number =>
+  displayed(b.baseDepth, 'baseDepth', units) * COLUMN_UNITS.baseDepth[units].factor -
+  shownDimension(b.faceHeight, units);
 
 /** An SI value as a column shows it: the number only, its unit is in the column heading. */
 export function columnNumber(si: number, kind: Exclude<ColumnKind, 'text'>, units: UnitSystem): string {

@@ -2,7 +2,7 @@ import { norm } from '../geometry/vector.js';
 import type { Diagnostic } from '../diagnostics/diagnostic.js';
 import type { Project } from '../model/projectSchema.js';
 import { anchorConcrete, blockConcrete, shownConcrete } from './concrete.js';
-import { readsZero, type ColumnKind } from './columnUnits.js';
+import { blockTopShown, readsZero, type ColumnKind } from './columnUnits.js';
 import { bearingText, fittingTitle } from './fittingNames.js';
 import { restrainedText, restraintSummary } from './restraintText.js';
 import type { ScheduleFitting } from './scheduleRows.js';
@@ -62,7 +62,10 @@ export const SCHEDULE_COLUMNS: readonly ScheduleColumn[] = [
   col('ground', 'Ground level', 'level', (f) => f.groundLevel),
   col('blockEast', 'Block centre east', 'coordinate', (f, c) => setOut(f, c).block?.east ?? null),
   col('blockNorth', 'Block centre north', 'coordinate', (f, c) => setOut(f, c).block?.north ?? null),
-  col('blockTop', 'Block top below ground', 'topDepth', (f, c) => setOut(f, c).block?.topDepth ?? null),
+  col('blockTop', 'Block top below ground', 'topDepth', (f, c) => {
+    const b = setOut(f, c).block;
+    return b ? blockTopShown(b, c.units) : null;
+  }),
   col('blockBase', 'Depth to block base', 'baseDepth', (f, c) => setOut(f, c).block?.baseDepth ?? null),
   col('pressure', 'Design pressure', 'pressure', (f) => f.designPressure),
   col('case', 'Governing case', 'text', (f, c) => caseName(c, f.governingCase)),
