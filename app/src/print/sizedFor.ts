@@ -1,4 +1,11 @@
-import { quantityText, type Project, type ScheduleFitting, type Soil, type UnitSystem } from '@mainbrace/solver';
+import {
+  bearingAtDepth,
+  quantityText,
+  type Project,
+  type ScheduleFitting,
+  type Soil,
+  type UnitSystem,
+} from '@mainbrace/solver';
 import { show } from '../format/quantity.js';
 
 /**
@@ -8,12 +15,9 @@ import { show } from '../format/quantity.js';
  */
 function sizedOn(f: ScheduleFitting, soil: Soil): number | null {
   const r = f.restraint;
-  // The rules of restraint/concreteRestraint.ts (sizeBlocks, and the pad), which keeps them inline: a
-  // shared helper there costs first-load bytes the budget does not have (docs/performance.md).
-  if (r.block)
-    return (
-      soil.bearing + (soil.bearingPerDepth ?? 0) * (f.cover + Math.max(...f.pipes.map((p) => p.outsideDiameter)) / 2)
-    );
+  // As restraint/concreteRestraint.ts sizes them: a block at its face centre, a pad or an anchor on the
+  // vertical bearing.
+  if (r.block) return bearingAtDepth(soil, f.cover, Math.max(...f.pipes.map((p) => p.outsideDiameter)));
   return r.anchor || r.trenchBottom ? (soil.verticalBearing ?? soil.bearing) : null;
 }
 

@@ -41,6 +41,7 @@ export { calculationRecord } from './analysis/calculationRecord.js';
 export type { CalcStep, RecordValue } from './analysis/calcRecord.js';
 export { nodeSoil, type Restraint } from './restraint/sizeRestraint.js';
 export { blockBaseDown } from './restraint/concreteRestraint.js';
+export { bearingAtDepth } from './restraint/site.js';
 export {
   SOIL_LIBRARY,
   SOIL_KINDS,

@@ -10,7 +10,7 @@ import { sizeBearingBlock, type BearingBlock, type FaceTerms } from './bearingBl
 import { roundUpTo } from './rounding.js';
 import { sizeGravityAnchor, type AnchorResult, type GravityAnchor } from './gravityAnchor.js';
 import { sizeTrenchBottom, type TrenchBottomBearing } from './trenchBottom.js';
-import { concreteWeight, type FittingSite } from './site.js';
+import { bearingAtDepth, concreteWeight, type FittingSite } from './site.js';
 
 export interface ConcreteRestraint {
   block: BearingBlock | null;
@@ -269,8 +269,7 @@ function sizeBlocks(
     diagnostics: [],
     needsJoints: false,
   };
-  // The crew sheet states this bearing (app/src/print/sizedFor.ts writes the rule again: keep them alike).
-  const allowable = soil.bearing + (soil.bearingPerDepth ?? 0) * (site.cover + site.od / 2);
+  const allowable = bearingAtDepth(soil, site.cover, site.od);
   if (allowable <= 0) {
     out.needsJoints = true;
     out.diagnostics.push(diagnostic('soil.no-bearing', { node, soil: soil.id }));

@@ -13,6 +13,13 @@ export function nodeSoil(project: Project, node: ProjectNode): Soil {
   return project.soils.find((s) => s.id === id) ?? project.soils[0]!;
 }
 
+/**
+ * Pa, a soil's allowable bearing at a block's face centre, level with the pipe's axis: its bearing and
+ * its rise with depth (`bearingPerDepth`) over the cover and half the outside diameter.
+ */
+export const bearingAtDepth = (soil: Soil, cover: number, od: number): number =>
+  soil.bearing + (soil.bearingPerDepth ?? 0) * (cover + od / 2);
+
 /** Where a fitting sits, as its restraint needs it: soil, depths, groundwater, trench, units. */
 export interface FittingSite {
   soil: Soil;
