@@ -54,3 +54,26 @@ test('a node given a ground level places its pipe from a typed cover, and the lo
   await page.emulateMedia({ media: 'print' });
   await app.shot('long-section-print');
 });
+
+test('a stretch of the main laid on an even grade from the levels table, and undone', async ({ page }) => {
+  const app = new MainbracePage(page);
+  await app.gotoFresh();
+  await app.drawerTab('profile');
+  const table = page.getByTestId('levels-table');
+  await expect(table).toBeVisible();
+  // The main's first four nodes: the three grades between them become one.
+  await page.getByTestId('grade-from').selectOption({ index: 1 });
+  await page.getByTestId('grade-to').selectOption({ index: 4 });
+  const gradeCells = table.locator('tbody tr td:last-child');
+  const before = await gradeCells.allTextContents();
+  await page.getByTestId('grade-lay').click();
+  const said = page.getByTestId('grade-said');
+  await expect(said).toContainText('laid on an even grade of');
+  const grade = /grade of (-?[\d.]+) %/.exec((await said.textContent()) ?? '')![1]!;
+  await expect(gradeCells.nth(0)).toHaveText(grade);
+  await expect(gradeCells.nth(1)).toHaveText(grade);
+  await expect(gradeCells.nth(2)).toHaveText(grade);
+  await app.shot('levels-even-grade');
+  await page.keyboard.press('Control+z');
+  await expect.poll(() => gradeCells.allTextContents()).toEqual(before);
+});

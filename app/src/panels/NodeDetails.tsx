@@ -1,7 +1,7 @@
 import { LIMITS, nodeCover, type Project, type ProjectNode } from '@mainbrace/solver';
 import { useActions, useApp } from '../state/StoreContext.js';
 import { NumberField } from './NumberField.js';
-import { levelPatch, type LevelEdit } from './nodeLevels.js';
+import { largestOd, levelPatch, type LevelEdit } from './nodeLevels.js';
 import { NODE_FIELDS } from '../format/fieldLabels.js';
 import { nodeTitle, useNodeName } from './nodeNames.js';
 
@@ -11,11 +11,7 @@ export function NodeDetails({ node, project, pipeCount }: { node: ProjectNode; p
   const u = useApp((s) => s.units);
   const nodeName = useNodeName();
   const set = (patch: Partial<ProjectNode>) => actions.updateNode(node.id, patch);
-  // The largest pipe at the node sets where its top is (model/groundLevel.ts).
-  const od = Math.max(
-    0,
-    ...project.pipes.filter((p) => p.from === node.id || p.to === node.id).map((p) => p.outsideDiameter),
-  );
+  const od = largestOd(project, node.id);
   const level = (e: LevelEdit) => set(levelPatch(node, od, e));
   const grounded = node.groundLevel !== undefined;
   return (

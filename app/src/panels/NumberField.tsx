@@ -21,6 +21,8 @@ export interface NumberFieldProps {
   exclusiveMin?: boolean;
   hint?: string;
   testId?: string;
+  /** a table cell: the label is for screen readers only and the unit is in the column's heading */
+  compact?: boolean;
 }
 
 /**
@@ -60,8 +62,10 @@ export function NumberField(p: NumberFieldProps) {
   };
   const unit = unitOf(p.dimension, p.units);
   return (
-    <div className={`field ${error ? 'field-bad' : ''}`}>
-      <label htmlFor={id}>{p.label}</label>
+    <div className={`field ${p.compact ? 'field-compact' : ''} ${error ? 'field-bad' : ''}`}>
+      <label htmlFor={id} className={p.compact ? 'visually-hidden' : undefined}>
+        {p.label}
+      </label>
       <div className="field-input">
         <input
           id={id}
@@ -80,7 +84,7 @@ export function NumberField(p: NumberFieldProps) {
             }
           }}
         />
-        {unit && <span className="unit">{unit}</span>}
+        {unit && !p.compact && <span className="unit">{unit}</span>}
       </div>
       {error && (
         <div className="field-error" id={`${id}-err`} role="alert">

@@ -8,6 +8,7 @@ import { profileData } from './profileData.js';
 import { LongSection, SECTION_M as M, SECTION_W as W, sectionExtent, ticks } from './LongSection.js';
 import { extentOf } from '../format/extent.js';
 import { TitleBlock } from '../print/TitleBlock.js';
+import { LevelsTable } from './LevelsTable.js';
 
 const CASE_STYLES = [
   { stroke: '#1d6fb8', dash: '' },
@@ -90,8 +91,8 @@ export function ProfilePanel() {
           Print the long section…
         </button>
         <span className="muted" data-testid="profile-levels-hint">
-          Levels are set node by node: click a node on the section or the plan, then type its ground level, pipe
-          centreline elevation or cover in its details.
+          Levels are typed in the table under the section, or in a node’s details: click a node on the section or the
+          plan.
         </span>
       </div>
       <LongSection data={data} analysis={analysis} units={u} onSelect={actions.revealNode} />
@@ -132,6 +133,7 @@ export function ProfilePanel() {
           chainage along the main line — gauge pressure at the pipe
         </text>
       </svg>
+      <LevelsTable project={project} analysis={analysis} />
       <p className="caution-foot">{SHORT_CAUTION}</p>
     </figure>
   );

@@ -1,4 +1,4 @@
-import { coverFor, nodeCover, nodeGround, pipeLevelFor, type ProjectNode } from '@mainbrace/solver';
+import { coverFor, nodeCover, nodeGround, pipeLevelFor, type Project, type ProjectNode } from '@mainbrace/solver';
 
 /** Which of ground, cover and pipe level the user typed; the other follows (project-format.md, "Ground levels"). */
 export type LevelEdit =
@@ -34,4 +34,35 @@ export function levelPatch(node: ProjectNode, od: number, e: LevelEdit): Partial
         ? { elevation: e.value }
         : { elevation: e.value, cover: mm(coverFor(node.groundLevel, e.value, od)) };
   }
+}
+
+/** m, the largest outside diameter of the pipes meeting at a node: it sets where the pipe's top is. */
+export const largestOd = (project: Project, nodeId: string): number =>
+  Math.max(0, ...project.pipes.filter((p) => p.from === nodeId || p.to === nodeId).map((p) => p.outsideDiameter));
+
+/**
+ * The patches that lay the pipe on an even grade between two nodes of a run: every node between them takes
+ * the centreline level on the straight line from the first node's level to the last's, by chainage along
+ * the run (the ends keep theirs). A node with a ground level keeps it and its cover follows, as when its
+ * pipe level is typed. `stretch` is the run's nodes from one end to the other, in order.
+ */
+export function evenGrade(
+  project: Project,
+  stretch: readonly { id: string; chainage: number }[],
+): Map<string, Partial<ProjectNode>> {
+  const byId = new Map(project.nodes.map((n) => [n.id, n]));
+  const first = stretch[0];
+  const last = stretch.at(-1);
+  const patches = new Map<string, Partial<ProjectNode>>();
+  if (!first || !last || stretch.length < 3) return patches;
+  const [a, b] = [byId.get(first.id)!, byId.get(last.id)!];
+  const run = last.chainage - first.chainage;
+  if (run === 0) return patches;
+  for (const p of stretch.slice(1, -1)) {
+    const node = byId.get(p.id)!;
+    const level = mm(a.elevation + ((b.elevation - a.elevation) * (p.chainage - first.chainage)) / run);
+    if (Math.abs(level - node.elevation) < 5e-7) continue;
+    patches.set(p.id, levelPatch(node, largestOd(project, p.id), { typed: 'pipe', value: level }));
+  }
+  return patches;
 }

@@ -193,6 +193,13 @@ export function createActions(store: AppStore) {
         (p) => ({ ...p, nodes: p.nodes.map((n) => (n.id === id ? { ...n, ...patch, id } : n)) }),
         'label' in patch ? `node-label-${id}` : undefined,
       ),
+    /** Several nodes at once (a stretch laid on an even grade): one undo step. */
+    updateNodes: (patches: ReadonlyMap<string, Partial<ProjectNode>>) =>
+      edit((p) =>
+        patches.size === 0
+          ? p
+          : { ...p, nodes: p.nodes.map((n) => (patches.has(n.id) ? { ...n, ...patches.get(n.id), id: n.id } : n)) },
+      ),
     updatePipe: (id: string, patch: Partial<Pipe>) =>
       edit(
         (p) => ({ ...p, pipes: p.pipes.map((x) => (x.id === id ? { ...x, ...patch, id } : x)) }),
