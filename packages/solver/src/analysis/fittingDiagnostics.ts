@@ -1,7 +1,8 @@
 import { norm } from '../geometry/vector.js';
 import type { ProjectNode } from '../model/projectSchema.js';
 import type { Leg } from '../network/legs.js';
-import { RUN_TOLERANCE, runTurn, type FittingGeometry } from '../network/fittingKind.js';
+import { RUN_TOLERANCE, STRAIGHT_TOLERANCE, runTurn, type FittingGeometry } from '../network/fittingKind.js';
+import { VALUES } from '../provenance/registerValues.js';
 import type { CaseThrust, ThrustEnvelope } from '../thrust/fittingThrust.js';
 import type { Restraint } from '../restraint/sizeRestraint.js';
 import { VACUUM_GAUGE_PRESSURE } from '../pressure/nodePressure.js';
@@ -32,6 +33,22 @@ function flowImbalance(node: string, legs: readonly Leg[], geometry: FittingGeom
     : diagnostic('flow.unbalanced', { node }, { net });
 }
 
+/** Standard bend angles, degrees (register: fitting.standard-bends, not verified). */
+const STANDARD_BENDS = VALUES['fitting.standard-bends'];
+
+/**
+ * A bend no standard fitting makes: more than the straight-joint tolerance from every standard angle
+ * (joints take up that much). The nearest standard bend is named, none under half the smallest.
+ */
+function oddBend(node: string, g: FittingGeometry): Diagnostic | null {
+  if ((g.kind !== 'bend' && g.kind !== 'reducing-bend') || g.deflection === null) return null;
+  const angle = g.deflection;
+  let nearest = 0;
+  for (const b of STANDARD_BENDS) if (Math.abs(b - angle) < Math.abs(nearest - angle)) nearest = b;
+  if (Math.abs(nearest - angle) <= STRAIGHT_TOLERANCE) return null;
+  return diagnostic('fitting.odd-bend', { node }, nearest === 0 ? { angle } : { angle, nearest });
+}
+
 /** A fitting's findings, most severe first: its inputs, its pressures, its restraint, its flows, its valve. */
 export function fittingDiagnostics(
   node: ProjectNode,
@@ -52,6 +69,8 @@ export function fittingDiagnostics(
   if (node.valve && geometry.kind === 'valve') found.push(diagnostic('valve.both-ways', { node: node.id }));
   else if (node.valve) found.push(diagnostic('valve.flag-ignored', { node: node.id }));
   if (legs.length > 4) found.push(diagnostic('fitting.many-pipes', { node: node.id }));
+  const odd = oddBend(node.id, geometry);
+  if (odd) found.push(odd);
   const turn = runTurn(legs, geometry);
   if (turn !== null && turn > RUN_TOLERANCE) found.push(diagnostic('fitting.bent-run', { node: node.id }, { turn }));
   if (norm(envelope.governing.total) === 0) found.push(diagnostic('thrust.none', { node: node.id }));

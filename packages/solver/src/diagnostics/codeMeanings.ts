@@ -52,6 +52,12 @@ export const CODE_MEANINGS: CodeMeanings = {
       'The run through a three-pipe junction turns from straight by more than a run may: no standard tee or wye has a bent run. It is sized as one junction.',
     action: 'Build it as a tee or wye and a bend a short pipe apart, each drawn as its own node.',
   },
+  'fitting.odd-bend': {
+    meaning:
+      'No standard bend fitting turns the angle drawn (standard bends turn 11¼°, 22½°, 45° and 90°; not verified against AWWA C110/A21.10, Ductile-Iron and Gray-Iron Fittings, bends). It is sized as drawn.',
+    action:
+      'Use the nearest standard bend and deflect the joints beside it within their allowance, build it from two standard bends a short pipe apart, or set the route to a standard angle; under half the smallest bend, deflect the joints alone.',
+  },
   'thrust.none': {
     meaning: 'No thrust acts at the fitting in any case.',
     action: 'None.',

@@ -47,6 +47,10 @@ export const DIAGNOSTIC_CODES = {
     severity: 'warning',
     values: { turn: 'angle' },
   },
+  'fitting.odd-bend': {
+    severity: 'info',
+    values: { angle: 'angle', nearest: 'angle' },
+  },
   'thrust.none': {
     severity: 'info',
     values: {},

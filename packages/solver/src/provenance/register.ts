@@ -478,6 +478,16 @@ export const REGISTER = {
     source: 'Mainbrace fitting classification',
     verified: true,
   },
+  'fitting.standard-bends': {
+    quantity: 'Angles of the bends made as standard fittings (¹⁄₃₂, ¹⁄₁₆, ⅛ and ¼ bends)',
+    value: [11.25, 22.5, 45, 90],
+    unit: '°',
+    kind: 'published',
+    source: 'AWWA C110/A21.10, Ductile-Iron and Gray-Iron Fittings',
+    clause: 'bends',
+    note: 'from memory',
+    verified: false,
+  },
 } as const satisfies Record<string, ProvenanceEntry>;
 
 export type ProvenanceId = keyof typeof REGISTER;

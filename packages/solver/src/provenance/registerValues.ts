@@ -55,6 +55,7 @@ export const VALUES: { readonly [K in ProvenanceId]: (typeof REGISTER)[K]['value
   'fitting.straight-tolerance': 0.5,
   'fitting.run-tolerance': 5,
   'fitting.tee-tolerance': 10,
+  'fitting.standard-bends': [11.25,22.5,45,90],
 };
 
 /** The entries not read in their source, in register order. */
@@ -87,4 +88,5 @@ export const UNVERIFIED: readonly ProvenanceId[] = [
   'surge.water-bulk-modulus',
   'surge.pipe-elasticity',
   'check.thermoplastic-surge-table',
+  'fitting.standard-bends',
 ];

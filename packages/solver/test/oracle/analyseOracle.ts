@@ -122,6 +122,14 @@ function analyseFitting(
     const turn = 180 - Math.max(...angles);
     if (turn > 5) found.push(diagnostic('fitting.bent-run', { node: node.id }, { turn }));
   }
+  // a bend no standard fitting makes (¹⁄₃₂ to ¼ bends, from memory): more than 0.5° from every standard angle
+  if ((geometry.kind === 'bend' || geometry.kind === 'reducing-bend') && geometry.deflection !== null) {
+    const angle = geometry.deflection;
+    const off = [0, 11.25, 22.5, 45, 90].map((b) => Math.abs(b - angle));
+    const nearest = [0, 11.25, 22.5, 45, 90][off.indexOf(Math.min(...off))]!;
+    if (Math.min(...off) > 0.5)
+      found.push(diagnostic('fitting.odd-bend', { node: node.id }, nearest === 0 ? { angle } : { angle, nearest }));
+  }
   if (norm(envelope.governing.total) === 0) found.push(diagnostic('thrust.none', { node: node.id }));
   return {
     node,
