@@ -1,5 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { fittingTitle } from './fittingNames.js';
+import { analyse } from '../analysis/analyse.js';
+import { scheduleOf } from './scheduleOf.js';
+import { route } from '../../test/projectBuilder.js';
 
 const branch = (kind: 'tee' | 'wye' | 'cross', branchAngle: number) =>
   fittingTitle({ kind, deflection: null, branchAngle });
@@ -22,4 +25,34 @@ describe('fittingTitle', () => {
       'Bend 16.31° crest',
     );
   });
+});
+
+describe('a crest is named by the line’s grade, not by the way its thrust points', () => {
+  // n1 (0 m) rises 10 m over 100 m to n2, then runs level: the grade turns down by atan(0.1) = 5.71° at n2,
+  // a high point. The case's datum lies 150 m below (pressure 0 there), so n2 stands above the hydraulic
+  // grade: the gauge pressure is held at the vapour floor and the thrust points down.
+  const crest = (datum: number) =>
+    scheduleOf(
+      analyse(
+        route({
+          cases: [{ id: 'working', pressure: 0, datumElevation: datum }],
+          nodes: [
+            { id: 'n1', x: 0, y: 0, z: 100 },
+            { id: 'n2', x: 100, y: 0, z: 110 },
+            { id: 'n3', x: 200, y: 0, z: 110 },
+          ],
+          pipes: [
+            { from: 'n1', to: 'n2', od: 0.326 },
+            { from: 'n2', to: 'n3', od: 0.326 },
+          ],
+        }),
+      ),
+    ).fittings.find((f) => f.node === 'n2')!;
+  it('under a vacuum the high point still reads crest, its thrust downward', () => {
+    const f = crest(-40);
+    expect(fittingTitle(f)).toBe('Bend 5.71° crest');
+    expect(f.downwardThrust).toBeGreaterThan(f.upwardThrust);
+    expect(f.diagnostics.map((d) => d.code)).toContain('pressure.vapour-floor');
+  });
+  it('under pressure too', () => expect(fittingTitle(crest(300))).toBe('Bend 5.71° crest'));
 });

@@ -52,8 +52,8 @@ export interface ScheduleFitting {
   /** degrees clockwise from north of the horizontal thrust, or null */
   bearingDirection: number | null;
   /**
-   * a bend with a vertical part: a crest (its thrust lifts: an anchor holds it) or a sag (its thrust
-   * bears down on the trench bottom); null for a plan bend or any other fitting
+   * a bend with a vertical part: a crest (the grade turns down, a high point; its thrust lifts unless
+   * under a vacuum) or a sag (the grade turns up); null for a plan bend or any other fitting
    */
   profile: 'crest' | 'sag' | null;
   waterWeight: number;
@@ -106,14 +106,16 @@ export interface Schedule {
  */
 const VERTICAL_BEND = 1;
 
-/** Crest or sag of a bend with a vertical part, by the way its largest vertical thrust points. */
+/**
+ * Crest or sag of a bend with a vertical part, by the way its grade turns (the long section's rule): the
+ * name tells a crew where the high and low points of the line are. Its thrust usually points the same
+ * way (up at a crest), but not under a vacuum, where the bend's own findings say so.
+ */
 export function fittingProfile(f: FittingAnalysis): ScheduleFitting['profile'] {
   const g = f.geometry;
   if (g.kind !== 'bend' && g.kind !== 'reducing-bend') return null;
   if (g.verticalDeflection === null || Math.abs(g.verticalDeflection) < VERTICAL_BEND) return null;
-  const { upward, downward } = f.envelope;
-  if (upward.force <= 0 && downward.force <= 0) return null;
-  return upward.force >= downward.force ? 'crest' : 'sag';
+  return g.verticalDeflection < 0 ? 'crest' : 'sag';
 }
 
 /**
