@@ -1,8 +1,13 @@
 import { norm } from '../geometry/vector.js';
 import type { ProjectNode } from '../model/projectSchema.js';
 import type { Leg } from '../network/legs.js';
-import { RUN_TOLERANCE, STRAIGHT_TOLERANCE, runTurn, type FittingGeometry } from '../network/fittingKind.js';
-import { VALUES } from '../provenance/registerValues.js';
+import {
+  RUN_TOLERANCE,
+  STRAIGHT_TOLERANCE,
+  nearestStandardBend,
+  runTurn,
+  type FittingGeometry,
+} from '../network/fittingKind.js';
 import type { CaseThrust, ThrustEnvelope } from '../thrust/fittingThrust.js';
 import type { Restraint } from '../restraint/sizeRestraint.js';
 import { VACUUM_GAUGE_PRESSURE } from '../pressure/nodePressure.js';
@@ -33,9 +38,6 @@ function flowImbalance(node: string, legs: readonly Leg[], geometry: FittingGeom
     : diagnostic('flow.unbalanced', { node }, { net });
 }
 
-/** Standard bend angles, degrees (register: fitting.standard-bends, not verified). */
-const STANDARD_BENDS = VALUES['fitting.standard-bends'];
-
 /**
  * A bend no standard fitting makes: more than the straight-joint tolerance from every standard angle
  * (joints take up that much). The nearest standard bend is named, none under half the smallest.
@@ -43,8 +45,7 @@ const STANDARD_BENDS = VALUES['fitting.standard-bends'];
 function oddBend(node: string, g: FittingGeometry): Diagnostic | null {
   if ((g.kind !== 'bend' && g.kind !== 'reducing-bend') || g.deflection === null) return null;
   const angle = g.deflection;
-  let nearest = 0;
-  for (const b of STANDARD_BENDS) if (Math.abs(b - angle) < Math.abs(nearest - angle)) nearest = b;
+  const nearest = nearestStandardBend(angle);
   if (Math.abs(nearest - angle) <= STRAIGHT_TOLERANCE) return null;
   return diagnostic('fitting.odd-bend', { node }, nearest === 0 ? { angle } : { angle, nearest });
 }

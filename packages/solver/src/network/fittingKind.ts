@@ -23,6 +23,16 @@ export const STRAIGHT_TOLERANCE = VALUES['fitting.straight-tolerance'];
 export const RUN_TOLERANCE = VALUES['fitting.run-tolerance'];
 /** A branch within this of square to its run is a tee; otherwise a wye, degrees. */
 export const TEE_TOLERANCE = VALUES['fitting.tee-tolerance'];
+/** Standard bend angles, degrees (register: fitting.standard-bends, not verified). */
+const STANDARD_BENDS = VALUES['fitting.standard-bends'];
+
+/** The standard bend closest to a deflection, degrees; 0 where it is under half the smallest (a joint's). */
+export function nearestStandardBend(angle: number): number {
+  let nearest = 0;
+  for (const b of STANDARD_BENDS) if (Math.abs(b - angle) < Math.abs(nearest - angle)) nearest = b;
+  return nearest;
+}
+
 /** Relative difference below which two areas count as equal. */
 const AREA_TOLERANCE = 1e-6;
 

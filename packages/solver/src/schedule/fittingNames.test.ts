@@ -56,3 +56,18 @@ describe('a crest is named by the line’s grade, not by the way its thrust poin
   });
   it('under pressure too', () => expect(fittingTitle(crest(300))).toBe('Bend 5.71° crest'));
 });
+
+describe('a bend is named as the fitting a crew orders', () => {
+  // Standard bends 90°, 45°, 22½°, 11¼° (AWWA C110/A21.10, from memory); joints take up 0.5° (register:
+  // fitting.straight-tolerance).
+  const bend = (deflection: number) => fittingTitle({ kind: 'bend', deflection, branchAngle: null });
+  it('within the joints’ tolerance of a standard bend, by the standard angle', () => {
+    expect(bend(89.97)).toBe('Bend 90°');
+    expect(bend(45.01)).toBe('Bend 45°');
+    expect(bend(22.9)).toBe('Bend 22.5°');
+  });
+  it('farther off, by the angle drawn (its odd-bend finding names the nearest)', () => {
+    expect(bend(47)).toBe('Bend 47°');
+    expect(bend(4.06)).toBe('Bend 4.06°');
+  });
+});
