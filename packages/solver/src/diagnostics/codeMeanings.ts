@@ -113,7 +113,8 @@ export const CODE_MEANINGS: CodeMeanings = {
   'joints.no-resistance': {
     meaning:
       'The soil gives no friction or bearing along the pipe: restrained joints cannot hold the thrust. The restraint is not adequate.',
-    action: 'Use a block, piles or soil replacement.',
+    action:
+      'Replace the soil around the pipe with compacted granular fill, or carry the thrust on piles; a block serves only where the soil has bearing.',
   },
   'joints.encroach': {
     meaning: 'The restrained length runs past the next fitting: the restrained zones of neighbouring fittings overlap.',

@@ -95,7 +95,7 @@ const WORDS: Record<DiagnosticCode, Words> = {
   'pad.no-bearing': (_v, s, c) =>
     `No bearing under the fitting: ${soil(s, c)} cannot carry a pad or an anchor; restrained joints are sized instead, or replace the soil.`,
   'joints.no-resistance': (v, s, c) =>
-    `Not adequate: the soil along ${leg(s, c)} (φ = ${v.frictionAngle}, c = ${v.cohesion}) gives no friction or bearing, so restrained joints cannot hold; use a block, piles or soil replacement.`,
+    `Not adequate: the soil along ${leg(s, c)} (φ = ${v.frictionAngle}, c = ${v.cohesion}) gives no friction or bearing, so restrained joints cannot hold; replace the soil around the pipe with compacted granular fill or carry the thrust on piles (a block serves only where the soil has bearing).`,
   'joints.encroach': (v, s, c) =>
     `The restrained length ${v.length} along ${leg(s, c)} runs past the next fitting (${v.legLength} away): the restrained zones of neighbouring fittings overlap and must be designed together.`,
   'joints.longer-than-route': (v, s, c) =>
