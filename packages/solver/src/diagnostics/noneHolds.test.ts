@@ -50,3 +50,10 @@ describe('a fitting no block can hold says which limit failed (the block search,
     );
   });
 });
+
+describe('a restrained zone cut to the line reads as its row does', () => {
+  it('40.05 m of line reads 40.1 m, as the restrained column rounds it up (columnUnits.ts: 0.1 m, up)', () => {
+    const t = diagnosticText(diagnostic('joints.longer-than-route', {}, { length: 52.3, reach: 40.05 }), context);
+    expect(t).toContain('it is cut to 40.1 m');
+  });
+});

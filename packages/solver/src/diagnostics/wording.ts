@@ -139,8 +139,11 @@ const WORDS: Record<DiagnosticCode, Words> = {
 
 /** Built dimensions read as a crew builds them (rounded up); other values to drawing precision. */
 const BUILT = new Set(['faceWidth', 'faceHeight', 'trenchWidth', 'bottomDepth', 'centreDepth', 'cover', 'minCover']);
-/** Restrained lengths (the joints codes' `length` and `beyond`) read as the schedule's column gives them. */
-const RESTRAINED = new Set(['length', 'beyond']);
+/**
+ * Restrained lengths (the joints codes' `length`, `beyond`, and `reach`, the length a zone is cut to) read
+ * as the schedule's column gives them, so that a note and its row's "Restrain …" agree.
+ */
+const RESTRAINED = new Set(['length', 'beyond', 'reach']);
 
 function shownValues(d: Diagnostic, units: UnitSystem): Shown {
   const kinds = DIAGNOSTIC_CODES[d.code].values as Record<string, string>;
