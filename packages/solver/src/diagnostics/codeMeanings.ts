@@ -54,9 +54,8 @@ export const CODE_MEANINGS: CodeMeanings = {
   },
   'fitting.odd-bend': {
     meaning:
-      'No standard bend fitting turns the angle drawn (standard bends turn 11¼°, 22½°, 45° and 90°; not verified against AWWA C110/A21.10, Ductile-Iron and Gray-Iron Fittings, bends). It is sized as drawn.',
-    action:
-      'Use the nearest standard bend and deflect the joints beside it within their allowance, build it from two standard bends a short pipe apart, or set the route to a standard angle; under half the smallest bend, deflect the joints alone.',
+      'No standard bend turns the angle drawn (11¼°, 22½°, 45°, 90°; not verified against AWWA C110/A21.10 (ductile-iron fittings), bends); sized as drawn.',
+    action: 'Use the nearest standard bend and deflect the joints beside it, or two standard bends.',
   },
   'thrust.none': {
     meaning: 'No thrust acts at the fitting in any case.',

@@ -60,8 +60,8 @@ const WORDS: Record<DiagnosticCode, Words> = {
     `The run through this junction turns ${v.turn}: no standard tee or wye has a bent run (sized as one junction). Build it as a tee or wye and a bend a short pipe apart, each drawn as its own node.`,
   'fitting.odd-bend': (v) =>
     v.nearest === undefined
-      ? `No bend fitting turns as little as ${v.angle}: deflect the joints here within their allowance, or set the route straight. Sized as drawn (standard bends not verified against AWWA C110/A21.10, Ductile-Iron and Gray-Iron Fittings, bends).`
-      : `No standard bend turns ${v.angle}: the nearest is ${v.nearest}. Deflect the joints beside it within their allowance for the rest, build it from two standard bends, or set the route to a standard angle. Sized as drawn (standard bends not verified against AWWA C110/A21.10, Ductile-Iron and Gray-Iron Fittings, bends).`,
+      ? `No bend fitting turns as little as ${v.angle}: deflect the joints here within their allowance, or set the route straight. Sized as drawn (standard bends not verified against AWWA C110/A21.10 (ductile-iron fittings), bends).`
+      : `No standard bend turns ${v.angle}: the nearest is ${v.nearest}. Deflect the joints beside it within their allowance for the rest, build it from two standard bends, or set the route to a standard angle. Sized as drawn (standard bends not verified against AWWA C110/A21.10 (ductile-iron fittings), bends).`,
   'thrust.none': () => 'No thrust at this fitting in any case.',
   'anchor.submerged': () =>
     'Gravity anchor below groundwater: sized with the submerged unit weight of concrete (γc − γw); design for the highest groundwater level.',

@@ -483,7 +483,7 @@ export const REGISTER = {
     value: [11.25, 22.5, 45, 90],
     unit: '°',
     kind: 'published',
-    source: 'AWWA C110/A21.10, Ductile-Iron and Gray-Iron Fittings',
+    source: 'AWWA C110/A21.10 (ductile-iron fittings)',
     clause: 'bends',
     note: 'from memory',
     verified: false,
