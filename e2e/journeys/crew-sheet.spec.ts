@@ -85,7 +85,9 @@ test('the crew sheet of the demo prints in chainage order, six fittings a page, 
   // The demo's anchors sit below groundwater (A6, A9) and its valve's thrust reverses (A10).
   expect(all).toMatch(/Gravity anchor below groundwater.*\(A6, A9\)/);
   expect(all).toMatch(/The thrust reverses between load states.*\(A10\)/);
-  expect(all).toMatch(/A10 535\.0 Valve .* 1, 4, 5 /);
+  expect(all).toMatch(/A10 535\.0 Valve .* 1, 4, 6 /);
+  // The creek crossing's bends (A6 to A9) turn angles no standard bend makes, and the note says so.
+  expect(all).toMatch(/No standard bend turns the angle drawn.*\(A6, A7, A8, A9\)/);
   expect(all).toMatch(/Total to order/);
   for (const [i, p] of pages.entries()) {
     expect(p).toContain(`Sheet ${i + 1} of ${sheets}`);

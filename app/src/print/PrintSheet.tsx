@@ -102,7 +102,10 @@ const CrewPage = memo(function CrewPage({
   const body = useRef<HTMLDivElement>(null);
   useLayoutEffect(() => {
     const el = aside.current;
-    if (side && onSideOverflow && el && el.scrollHeight > el.clientHeight + 1) onSideOverflow();
+    if (!el || el.scrollHeight <= el.clientHeight + 1) return;
+    if (side && onSideOverflow) onSideOverflow();
+    // Notes too many for the side column are set closer rather than cut off at the page's foot.
+    else el.classList.add('sheet-side-tight');
   }, [side, onSideOverflow]);
   // Long notes (a route that is not adequate) can leave the take-off no room: it would print over the
   // cautions.
