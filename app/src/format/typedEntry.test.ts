@@ -106,6 +106,8 @@ describe('the entry in words', () => {
   it('says what Enter will do', () => {
     expect(describeEntry(entry('12.5 L30'), 'si')).toBe('12.500 m, turning 30° left');
     expect(describeEntry(entry('12.5 @45'), 'si')).toBe('12.500 m at bearing 45°');
-    expect(describeEntry(entry('E 120 N 340'), 'si')).toBe('node at E 120.000 m, N 340.000 m');
+    // Coordinates to the schedule's 0.01 m: a typed E 60 reads 60.00 m, not 60.0000 m.
+    expect(describeEntry(entry('E 120 N 340'), 'si')).toBe('node at E 120.00 m, N 340.00 m');
+    expect(describeEntry(entry('E 60 N 0'), 'si')).toBe('node at E 60.00 m, N 0.00 m');
   });
 });

@@ -1,4 +1,4 @@
-import { FOOT, INCH, type UnitSystem } from '@mainbrace/solver';
+import { FOOT, INCH, quantityText, type UnitSystem } from '@mainbrace/solver';
 import { show } from './quantity.js';
 import { parseTyped } from './typedQuantity.js';
 
@@ -121,7 +121,8 @@ const angleText = (deg: number) => `${Math.round(deg * 100) / 100}°`;
 /** The entry in words, for the line under the entry box before Enter. */
 export function describeEntry(entry: TypedEntry, units: UnitSystem): string {
   if (entry.kind === 'point')
-    return `node at E ${show(entry.x, 'length', units, 6)}, N ${show(entry.y, 'length', units, 6)}`;
+    // as the schedule's coordinate columns give them (columnUnits.ts: to 0.01 m or 0.01 ft)
+    return `node at E ${quantityText(entry.x, 'coordinate', units)}, N ${quantityText(entry.y, 'coordinate', units)}`;
   const length = show(entry.length, 'length', units, 5);
   switch (entry.direction.kind) {
     case 'pointer':
