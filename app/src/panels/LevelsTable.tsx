@@ -80,6 +80,21 @@ export function LevelsTable({ project, analysis }: { project: Project; analysis:
     });
   };
 
+  // Both ends of a stretch are chosen from the same list: every run's nodes, by run.
+  const choices = [
+    <option key="none" value="">
+      choose a node
+    </option>,
+    ...runs.map((rows, r) => (
+      <optgroup key={r} label={`Run ${rows[0]?.run ?? ''}`}>
+        {rows.map((row, i) => (
+          <option key={i} value={key(r, i)}>
+            {nodeName(row.id)}
+          </option>
+        ))}
+      </optgroup>
+    )),
+  ];
   let shown = 0;
   return (
     <section className="levels" aria-label="Levels node by node" data-testid="levels-table">
@@ -92,31 +107,13 @@ export function LevelsTable({ project, analysis }: { project: Project; analysis:
         <label>
           Lay the pipe on an even grade from{' '}
           <select value={from} onChange={(e) => setFrom(e.target.value)} data-testid="grade-from">
-            <option value="">choose a node</option>
-            {runs.map((rows, r) => (
-              <optgroup key={r} label={`Run ${rows[0]?.run ?? ''}`}>
-                {rows.map((row, i) => (
-                  <option key={i} value={key(r, i)}>
-                    {nodeName(row.id)}
-                  </option>
-                ))}
-              </optgroup>
-            ))}
+            {choices}
           </select>
         </label>{' '}
         <label>
           to{' '}
           <select value={to} onChange={(e) => setTo(e.target.value)} data-testid="grade-to">
-            <option value="">choose a node</option>
-            {runs.map((rows, r) => (
-              <optgroup key={r} label={`Run ${rows[0]?.run ?? ''}`}>
-                {rows.map((row, i) => (
-                  <option key={i} value={key(r, i)}>
-                    {nodeName(row.id)}
-                  </option>
-                ))}
-              </optgroup>
-            ))}
+            {choices}
           </select>
         </label>{' '}
         <button type="button" onClick={lay} data-testid="grade-lay">

@@ -1,19 +1,10 @@
 import { describe, it, expect } from 'vitest';
 import { analyse } from './analyse.js';
 import { bendRoute } from '../../test/projectBuilder.js';
-import { diagnosticText, type WordingContext } from '../diagnostics/wording.js';
+import { diagnosticText } from '../diagnostics/wording.js';
 import { notVerifiedText } from '../provenance/entry.js';
 import { REGISTER } from '../provenance/register.js';
-
-const context: WordingContext = {
-  units: 'si',
-  caseName: (id) => id,
-  soilName: (id) => id,
-  legName: () => 'the leg',
-  material: () => 'ductile iron',
-  nodeName: (id) => id,
-  pipeName: (id) => id,
-};
+import { plainWording as context } from '../../test/plainWording.js';
 
 /** The odd-bend finding at the bend of a route turned `deg`, DN300 at 1 MPa, or undefined. */
 const oddBend = (deg: number) =>

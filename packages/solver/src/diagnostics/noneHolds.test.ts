@@ -1,16 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import { diagnostic } from './diagnostic.js';
-import { diagnosticText, type WordingContext } from './wording.js';
-
-const context: WordingContext = {
-  units: 'si',
-  caseName: (id) => id,
-  soilName: (id) => id,
-  legName: () => 'the leg',
-  material: () => 'ductile iron',
-  nodeName: (id) => id,
-  pipeName: (id) => id,
-};
+import { diagnosticText } from './wording.js';
+import { plainWording as context } from '../../test/plainWording.js';
 
 /** The finding for a 100 kN thrust at a safety factor of 1.5, with the limit figures given. */
 const noneHolds = (bearingArea: number, largestFace: number, ratio: number) =>
