@@ -3,8 +3,8 @@ import type { ProjectNode } from '../model/projectSchema.js';
 import type { Leg } from '../network/legs.js';
 import {
   RUN_TOLERANCE,
-  STRAIGHT_TOLERANCE,
   nearestStandardBend,
+  standardBendFor,
   runTurn,
   type FittingGeometry,
 } from '../network/fittingKind.js';
@@ -45,8 +45,8 @@ function flowImbalance(node: string, legs: readonly Leg[], geometry: FittingGeom
 function oddBend(node: string, g: FittingGeometry): Diagnostic | null {
   if ((g.kind !== 'bend' && g.kind !== 'reducing-bend') || g.deflection === null) return null;
   const angle = g.deflection;
+  if (standardBendFor(angle) !== null) return null;
   const nearest = nearestStandardBend(angle);
-  if (Math.abs(nearest - angle) <= STRAIGHT_TOLERANCE) return null;
   return diagnostic('fitting.odd-bend', { node }, nearest === 0 ? { angle } : { angle, nearest });
 }
 

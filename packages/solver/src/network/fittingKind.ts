@@ -33,6 +33,15 @@ export function nearestStandardBend(angle: number): number {
   return nearest;
 }
 
+/**
+ * The standard bend a deflection is made with, degrees: the nearest one when the joints take up the rest
+ * (the straight-joint tolerance; a 90° bend on a grade change turns 89.97°), else null.
+ */
+export function standardBendFor(angle: number): number | null {
+  const nearest = nearestStandardBend(angle);
+  return nearest > 0 && Math.abs(nearest - angle) <= STRAIGHT_TOLERANCE ? nearest : null;
+}
+
 /** Relative difference below which two areas count as equal. */
 const AREA_TOLERANCE = 1e-6;
 

@@ -1,4 +1,4 @@
-import { STRAIGHT_TOLERANCE, nearestStandardBend, type FittingKind } from '../network/fittingKind.js';
+import { standardBendFor, type FittingKind } from '../network/fittingKind.js';
 
 /** A fitting kind as a crew names it. */
 export const KIND_NAME: Record<FittingKind, string> = {
@@ -27,15 +27,6 @@ export const bearingText = (deg: number | null): string =>
 /** Deflection as an engineer writes it: 22.5°, 11.25°, 90°. */
 export const angleText = (deg: number): string => `${Math.round(deg * 100) / 100}°`;
 
-/**
- * The bend a crew orders for a deflection: the standard bend within the joints' tolerance of it (a 90°
- * bend on a grade change turns 89.97°), else the angle drawn. The thrust keeps the angle drawn.
- */
-const orderedBend = (deg: number): number => {
-  const standard = nearestStandardBend(deg);
-  return standard > 0 && Math.abs(standard - deg) <= STRAIGHT_TOLERANCE ? standard : deg;
-};
-
 type Findings = readonly { code: string; values: Readonly<Record<string, number>> }[];
 
 /** The degrees a junction's run turns (its fitting.bent-run finding), or undefined. */
@@ -60,8 +51,9 @@ export function fittingTitle(g: {
 }): string {
   const turn = runTurnOf(g.diagnostics);
   const name = turn !== undefined ? `Junction, run turns ${Math.round(turn * 10) / 10}°` : kindName(g);
+  // A bend is named as the fitting a crew orders; the thrust keeps the angle drawn.
   if (g.deflection !== null && g.kind !== 'valve' && g.kind !== 'reducer')
-    return `${name} ${angleText(orderedBend(g.deflection))}${g.profile ? ` ${g.profile}` : ''}`;
+    return `${name} ${angleText(standardBendFor(g.deflection) ?? g.deflection)}${g.profile ? ` ${g.profile}` : ''}`;
   // A branch's angle in space takes the grades of both pipes (a spur square to a main in plan reads
   // 89.99° when they fall differently): a tenth of a degree names the fitting a crew sets; the thrust
   // keeps the full angle.
