@@ -4,7 +4,7 @@ import { useActions, useApp } from '../state/StoreContext.js';
 import { unitOf } from '../format/quantity.js';
 import { NODE_FIELDS } from '../format/fieldLabels.js';
 import { NumberField } from './NumberField.js';
-import { evenGrade, largestOd, levelPatch, type LevelEdit } from './nodeLevels.js';
+import { evenGrade, levelPatch, type LevelEdit } from './nodeLevels.js';
 import { useNodeName } from './nodeNames.js';
 
 /** Rows shown before "Show all": a long route's table stays quick to open. */
@@ -48,6 +48,8 @@ export function LevelsTable({ project, analysis }: { project: Project; analysis:
   const [to, setTo] = useState('');
   const [said, setSaid] = useState<{ tone: 'ok' | 'bad'; text: string } | null>(null);
   const nodes = useMemo(() => new Map(project.nodes.map((n) => [n.id, n])), [project]);
+  // Each node's largest pipe, from the analysis's legs: one pass, not a search of every pipe per row.
+  const odAt = (id: string) => Math.max(0, ...(analysis.legs.get(id) ?? []).map((l) => l.pipe.outsideDiameter));
   const total = runs.reduce((s, r) => s + r.length, 0);
   const unit = (d: 'elevation' | 'length') => unitOf(d, u);
   const key = (r: number, i: number) => `${r}:${i}`;
@@ -143,7 +145,7 @@ export function LevelsTable({ project, analysis }: { project: Project; analysis:
               if (!showAll && shown >= FIRST_ROWS) return null;
               shown++;
               const node = nodes.get(row.id)!;
-              const od = largestOd(project, row.id);
+              const od = odAt(row.id);
               const level = (e: LevelEdit) => actions.updateNode(row.id, levelPatch(node, od, e));
               const next = rows[i + 1];
               const grade = next
